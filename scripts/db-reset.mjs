@@ -1,0 +1,31 @@
+// `npm run db:reset`: wipes the development database and loads the demo scenario afresh.
+// Uses DATABASE_URL when set; otherwise the project's dev cluster (stopped again afterwards if this
+// script started it).
+import { ensureDependencies } from './lib/setup.mjs';
+import { log, warn } from './lib/common.mjs';
+import { startPostgres } from './lib/postgres.mjs';
+import { runTsScript } from './lib/app.mjs';
+
+const extraSeedArgs = process.argv.slice(2).filter((arg) => arg === '--allow-production');
+
+async function main() {
+  ensureDependencies();
+  const postgres = await startPostgres({
+    name: 'dev',
+    port: process.env.PG_PORT,
+    externalUrl: process.env.DATABASE_URL,
+  });
+  const env = { ...process.env, DATABASE_URL: postgres.databaseUrl };
+  try {
+    await runTsScript('scripts/migrate.ts', [], env);
+    await runTsScript('scripts/seed.ts', ['--reset', ...extraSeedArgs], env);
+    log('db:reset: the demo scenario is loaded');
+  } finally {
+    await postgres.stop();
+  }
+}
+
+main().catch((error) => {
+  warn(`db:reset failed: ${error.message}`);
+  process.exit(1);
+});

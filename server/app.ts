@@ -1,0 +1,61 @@
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
+import express, { Router } from 'express';
+import helmet from 'helmet';
+import cookieParser from 'cookie-parser';
+import { pinoHttp } from 'pino-http';
+import { env } from './env';
+import { logger } from './logger';
+import { buildOpenApiDocument } from './openapi';
+import { errorHandler, notFoundHandler } from './middlewares/error-handler';
+import { authRouter } from './routes/auth/auth.router';
+import { membersRouter } from './routes/members/members.router';
+import { devRouter } from './routes/dev/dev.router';
+import './models';
+
+const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
+
+/** Builds the Express app (no listen): tests import this. */
+export function createApp(options: { serveClient?: boolean } = {}) {
+  const app = express();
+  app.set('trust proxy', env.TRUST_PROXY);
+  app.disable('x-powered-by');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        useDefaults: true,
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'upgrade-insecure-requests': env.CSP_UPGRADE_INSECURE === 'true' ? [] : null,
+        },
+      },
+    }),
+  );
+  if (env.NODE_ENV !== 'test') app.use(pinoHttp({ logger }));
+  app.use(cookieParser());
+  app.use(express.json({ limit: '1mb' }));
+
+  const api = Router();
+  api.get('/health', (_req, res) => {
+    res.json({ data: { ok: true } });
+  });
+  api.get('/openapi.json', (_req, res) => {
+    res.json(buildOpenApiDocument());
+  });
+  api.use(authRouter());
+  api.use(membersRouter());
+  api.use(devRouter());
+  api.use(notFoundHandler);
+  app.use('/api/v1', api);
+
+  if (options.serveClient ?? env.SERVE_CLIENT === '1') {
+    const dist = path.join(root, 'dist');
+    app.use(express.static(dist, { index: false, maxAge: '1h' }));
+    app.get('/{*splat}', (_req, res) => {
+      res.sendFile(path.join(dist, 'index.html'));
+    });
+  }
+  app.use(notFoundHandler);
+  app.use(errorHandler);
+  return app;
+}

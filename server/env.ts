@@ -1,0 +1,38 @@
+import { z } from 'zod';
+
+// The environment, validated once at start. Every variable is documented in .env.example.
+const schema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  HOST: z.string().default('127.0.0.1'),
+  PORT: z.coerce.number().int().positive().default(4310),
+  APP_URL: z.string().url().default('http://127.0.0.1:4310'),
+  DATABASE_URL: z.string().min(1, 'DATABASE_URL is required (npm start sets it up)'),
+  DATABASE_POOL_MAX: z.coerce.number().int().positive().default(10),
+  SMTP_URL: z.string().default('smtp://127.0.0.1:2525'),
+  MAIL_FROM: z.string().default('Hourstone <no-reply@hourstone.example>'),
+  MAIL_CATCHER_URL: z.string().default(''),
+  JWT_SECRET: z.string().min(8, 'JWT_SECRET must be at least 8 characters'),
+  SESSION_TTL_HOURS: z.coerce.number().positive().default(12),
+  COOKIE_SECURE: z.enum(['auto', 'true', 'false']).default('auto'),
+  CSP_UPGRADE_INSECURE: z.enum(['true', 'false']).default('false'),
+  TRUST_PROXY: z.string().default('loopback'),
+  SERVE_CLIENT: z.enum(['0', '1']).default('0'),
+  SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().positive().default(5),
+  SIGN_IN_LIMIT_PER_ADDRESS: z.coerce.number().int().positive().default(30),
+  SIGN_IN_WINDOW_MINUTES: z.coerce.number().positive().default(15),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+});
+
+export type Env = z.infer<typeof schema>;
+
+function loadEnv(): Env {
+  const parsed = schema.safeParse(process.env);
+  if (!parsed.success) {
+    const lines = parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`);
+    throw new Error(`Invalid environment:\n${lines.join('\n')}`);
+  }
+  return parsed.data;
+}
+
+export const env = loadEnv();
+export const isProduction = env.NODE_ENV === 'production';

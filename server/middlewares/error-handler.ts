@@ -1,0 +1,43 @@
+import type { ErrorRequestHandler, RequestHandler } from 'express';
+import { ZodError } from 'zod';
+import { UniqueConstraintError, ValidationError } from 'sequelize';
+import { AppError } from '../errors';
+import { logger } from '../logger';
+import { fieldErrors } from './validate';
+
+export const notFoundHandler: RequestHandler = (_req, _res, next) => {
+  next(new AppError(404, 'not_found', 'No such route'));
+};
+
+// The one place errors become JSON: { error: { code, message, fields? } }.
+export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
+  let status = 500;
+  let body: { code: string; message: string; fields?: Record<string, string> } = {
+    code: 'internal',
+    message: 'Something went wrong on our side; nothing was saved. Try again.',
+  };
+  if (err instanceof AppError) {
+    status = err.status;
+    body = { code: err.code, message: err.message, fields: err.fields };
+  } else if (err instanceof ZodError) {
+    status = 400;
+    const fields = fieldErrors(err);
+    body = { code: 'invalid', message: Object.values(fields).join('; '), fields };
+  } else if (err instanceof UniqueConstraintError) {
+    status = 409;
+    body = { code: 'conflict', message: 'A record with these values exists already' };
+  } else if (err instanceof ValidationError) {
+    status = 422;
+    body = { code: 'invalid', message: err.message };
+  } else if (err?.type === 'entity.parse.failed') {
+    status = 400;
+    body = { code: 'bad_json', message: 'The request body is not valid JSON' };
+  } else if (err?.type === 'entity.too.large') {
+    status = 413;
+    body = { code: 'too_large', message: 'The request body is too large' };
+  } else {
+    logger.error({ err, url: req.originalUrl }, 'unhandled error');
+  }
+  if (body.fields === undefined) delete body.fields;
+  res.status(status).json({ error: body });
+};

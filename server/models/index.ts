@@ -1,0 +1,41 @@
+// Loads every model and declares the associations in one place.
+import { Organization } from './organization';
+import { User } from './user';
+import { Membership } from './membership';
+import { Invitation } from './invitation';
+import { PasswordReset } from './password-reset';
+import { Notification } from './notification';
+import { AuditEvent } from './audit-event';
+import { Machine, MachineOperator } from './machine';
+import { MeterReading, MeterReplacement } from './meter-reading';
+import { ServiceTask } from './service-task';
+import { ScheduleTemplate } from './schedule-template';
+import { MachineForecast, TaskDuePoint } from './machine-forecast';
+
+Membership.belongsTo(Organization, { foreignKey: 'organizationId', as: 'organization' });
+Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
+User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
+Invitation.belongsTo(Organization, { foreignKey: 'organizationId', as: 'organization' });
+Machine.hasMany(ServiceTask, { foreignKey: 'machineId', as: 'tasks' });
+Machine.hasMany(MachineOperator, { foreignKey: 'machineId', as: 'operators' });
+Machine.hasOne(MachineForecast, { foreignKey: 'machineId', as: 'forecast' });
+ServiceTask.belongsTo(Machine, { foreignKey: 'machineId', as: 'machine' });
+ServiceTask.hasOne(TaskDuePoint, { foreignKey: 'taskId', as: 'duePoint' });
+
+export {
+  Organization,
+  User,
+  Membership,
+  Invitation,
+  PasswordReset,
+  Notification,
+  AuditEvent,
+  Machine,
+  MachineOperator,
+  MeterReading,
+  MeterReplacement,
+  ServiceTask,
+  ScheduleTemplate,
+  MachineForecast,
+  TaskDuePoint,
+};

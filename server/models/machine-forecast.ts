@@ -1,0 +1,72 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+} from 'sequelize';
+import { sequelize } from '../db';
+import type { ReadingPoint, UsageEstimate, DuePoint } from '../../shared/domain/types';
+
+/** Per-machine summary of its readings, rewritten whenever a reading changes. */
+export class MachineForecast extends Model<
+  InferAttributes<MachineForecast>,
+  InferCreationAttributes<MachineForecast>
+> {
+  declare machineId: string;
+  declare organizationId: string;
+  /** one point per local day that has readings: the day's last lifetime value */
+  declare daily: CreationOptional<ReadingPoint[]>;
+  declare readingCount: CreationOptional<number>;
+  declare lastValue: number | null;
+  declare lastTakenAt: Date | null;
+  declare firstTakenAt: Date | null;
+  declare usage: UsageEstimate | null;
+  declare computedOn: string | null;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+MachineForecast.init(
+  {
+    machineId: { type: DataTypes.UUID, primaryKey: true },
+    organizationId: { type: DataTypes.UUID, allowNull: false },
+    daily: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+    readingCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+    lastValue: { type: DataTypes.DECIMAL(14, 2), allowNull: true },
+    lastTakenAt: { type: DataTypes.DATE, allowNull: true },
+    firstTakenAt: { type: DataTypes.DATE, allowNull: true },
+    usage: { type: DataTypes.JSONB, allowNull: true },
+    computedOn: { type: DataTypes.DATEONLY, allowNull: true },
+    updatedAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: 'machine_forecasts', createdAt: false },
+);
+
+/** Stored due point of one task, refreshed with its machine's forecast. */
+export class TaskDuePoint extends Model<
+  InferAttributes<TaskDuePoint>,
+  InferCreationAttributes<TaskDuePoint>
+> {
+  declare taskId: string;
+  declare organizationId: string;
+  declare machineId: string;
+  declare status: DuePoint['status'];
+  declare sortDate: string | null;
+  declare due: DuePoint;
+  declare computedOn: string;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+TaskDuePoint.init(
+  {
+    taskId: { type: DataTypes.UUID, primaryKey: true },
+    organizationId: { type: DataTypes.UUID, allowNull: false },
+    machineId: { type: DataTypes.UUID, allowNull: false },
+    status: { type: DataTypes.TEXT, allowNull: false },
+    sortDate: { type: DataTypes.DATEONLY, allowNull: true },
+    due: { type: DataTypes.JSONB, allowNull: false },
+    computedOn: { type: DataTypes.DATEONLY, allowNull: false },
+    updatedAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: 'task_due_points', createdAt: false },
+);

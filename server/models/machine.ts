@@ -1,0 +1,75 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+} from 'sequelize';
+import { sequelize } from '../db';
+import type { MachineCategory, MachineStatus, MeterUnit } from '../../shared/constants';
+
+export class Machine extends Model<InferAttributes<Machine>, InferCreationAttributes<Machine>> {
+  declare id: CreationOptional<string>;
+  declare organizationId: string;
+  declare fleetNumber: string;
+  declare name: string;
+  declare category: MachineCategory;
+  declare make: CreationOptional<string>;
+  declare model: CreationOptional<string>;
+  declare serialNumber: CreationOptional<string>;
+  declare year: number | null;
+  declare purchasePrice: number | null;
+  declare listPrice: number | null;
+  declare meterUnit: CreationOptional<MeterUnit>;
+  declare status: CreationOptional<MachineStatus>;
+  /** months (1–12) the machine normally works; empty = all year */
+  declare seasonMonths: CreationOptional<number[]>;
+  declare photoKey: string | null;
+  declare notes: CreationOptional<string>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+Machine.init(
+  {
+    id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+    organizationId: { type: DataTypes.UUID, allowNull: false },
+    fleetNumber: { type: DataTypes.TEXT, allowNull: false },
+    name: { type: DataTypes.TEXT, allowNull: false },
+    category: { type: DataTypes.TEXT, allowNull: false },
+    make: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    model: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    serialNumber: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    year: { type: DataTypes.INTEGER, allowNull: true },
+    purchasePrice: { type: DataTypes.DECIMAL(12, 2), allowNull: true },
+    listPrice: { type: DataTypes.DECIMAL(12, 2), allowNull: true },
+    meterUnit: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'h' },
+    status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'in_service' },
+    seasonMonths: { type: DataTypes.ARRAY(DataTypes.INTEGER), allowNull: false, defaultValue: [] },
+    photoKey: { type: DataTypes.TEXT, allowNull: true },
+    notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: 'machines' },
+);
+
+export class MachineOperator extends Model<
+  InferAttributes<MachineOperator>,
+  InferCreationAttributes<MachineOperator>
+> {
+  declare organizationId: string;
+  declare machineId: string;
+  declare userId: string;
+  declare createdAt: CreationOptional<Date>;
+}
+
+MachineOperator.init(
+  {
+    organizationId: { type: DataTypes.UUID, allowNull: false },
+    machineId: { type: DataTypes.UUID, primaryKey: true },
+    userId: { type: DataTypes.UUID, primaryKey: true },
+    createdAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: 'machine_operators', updatedAt: false },
+);

@@ -1,0 +1,75 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+} from 'sequelize';
+import { sequelize } from '../db';
+import type { ReadingSource } from '../../shared/constants';
+
+export class MeterReading extends Model<
+  InferAttributes<MeterReading>,
+  InferCreationAttributes<MeterReading>
+> {
+  declare id: CreationOptional<string>;
+  declare organizationId: string;
+  declare machineId: string;
+  /** the value shown on the meter fitted at the time */
+  declare value: number;
+  /** value on the machine's lifetime scale (continuous across meter replacements) */
+  declare lifetimeValue: number;
+  declare takenAt: Date;
+  declare source: CreationOptional<ReadingSource>;
+  declare enteredBy: string | null;
+  declare importKey: string | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+MeterReading.init(
+  {
+    id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+    organizationId: { type: DataTypes.UUID, allowNull: false },
+    machineId: { type: DataTypes.UUID, allowNull: false },
+    value: { type: DataTypes.DECIMAL(14, 2), allowNull: false },
+    lifetimeValue: { type: DataTypes.DECIMAL(14, 2), allowNull: false },
+    takenAt: { type: DataTypes.DATE, allowNull: false },
+    source: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'manual' },
+    enteredBy: { type: DataTypes.UUID, allowNull: true },
+    importKey: { type: DataTypes.TEXT, allowNull: true },
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: 'meter_readings' },
+);
+
+export class MeterReplacement extends Model<
+  InferAttributes<MeterReplacement>,
+  InferCreationAttributes<MeterReplacement>
+> {
+  declare id: CreationOptional<string>;
+  declare organizationId: string;
+  declare machineId: string;
+  declare replacedAt: Date;
+  declare oldFinalValue: number;
+  declare newStartValue: number;
+  declare note: CreationOptional<string>;
+  declare enteredBy: string | null;
+  declare createdAt: CreationOptional<Date>;
+}
+
+MeterReplacement.init(
+  {
+    id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+    organizationId: { type: DataTypes.UUID, allowNull: false },
+    machineId: { type: DataTypes.UUID, allowNull: false },
+    replacedAt: { type: DataTypes.DATE, allowNull: false },
+    oldFinalValue: { type: DataTypes.DECIMAL(14, 2), allowNull: false },
+    newStartValue: { type: DataTypes.DECIMAL(14, 2), allowNull: false },
+    note: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    enteredBy: { type: DataTypes.UUID, allowNull: true },
+    createdAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: 'meter_replacements', updatedAt: false },
+);

@@ -1,0 +1,62 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+} from 'sequelize';
+import { sequelize } from '../db';
+import type { TaskFluid, TaskPart } from '../../shared/schemas/schedule';
+
+export class ServiceTask extends Model<
+  InferAttributes<ServiceTask>,
+  InferCreationAttributes<ServiceTask>
+> {
+  declare id: CreationOptional<string>;
+  declare organizationId: string;
+  declare machineId: string;
+  declare name: string;
+  declare intervalMeter: number | null;
+  declare intervalDays: number | null;
+  declare firstServiceMeter: number | null;
+  declare warnMeter: number | null;
+  declare warnDays: number | null;
+  declare parts: CreationOptional<TaskPart[]>;
+  declare fluids: CreationOptional<TaskFluid[]>;
+  declare labourHours: number | null;
+  declare instructions: CreationOptional<string>;
+  declare safetyNotes: CreationOptional<string>;
+  declare hazards: CreationOptional<string[]>;
+  declare lastDoneMeter: number | null;
+  /** ISO date, local to the organization */
+  declare lastDoneOn: string | null;
+  declare position: CreationOptional<number>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+ServiceTask.init(
+  {
+    id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+    organizationId: { type: DataTypes.UUID, allowNull: false },
+    machineId: { type: DataTypes.UUID, allowNull: false },
+    name: { type: DataTypes.TEXT, allowNull: false },
+    intervalMeter: { type: DataTypes.DECIMAL(12, 2), allowNull: true },
+    intervalDays: { type: DataTypes.INTEGER, allowNull: true },
+    firstServiceMeter: { type: DataTypes.DECIMAL(12, 2), allowNull: true },
+    warnMeter: { type: DataTypes.DECIMAL(12, 2), allowNull: true },
+    warnDays: { type: DataTypes.INTEGER, allowNull: true },
+    parts: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+    fluids: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
+    labourHours: { type: DataTypes.DECIMAL(6, 2), allowNull: true },
+    instructions: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    safetyNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    hazards: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
+    lastDoneMeter: { type: DataTypes.DECIMAL(14, 2), allowNull: true },
+    lastDoneOn: { type: DataTypes.DATEONLY, allowNull: true },
+    position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+    createdAt: DataTypes.DATE,
+    updatedAt: DataTypes.DATE,
+  },
+  { sequelize, tableName: 'service_tasks' },
+);

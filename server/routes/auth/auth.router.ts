@@ -1,0 +1,144 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { route } from '../route';
+import {
+  invitationAcceptSchema,
+  passwordResetConfirmSchema,
+  passwordResetRequestSchema,
+  signInSchema,
+} from '../../../shared/schemas/auth';
+import { meSchema, presentMe } from '../../presenters/me';
+import { endSession, startSession } from '../../services/session';
+import {
+  acceptInvitation,
+  confirmPasswordReset,
+  findOpenInvitation,
+  loadMemberships,
+  requestPasswordReset,
+  verifyCredentials,
+} from '../../services/accounts';
+import { signInPerAccount, signInPerAddress } from '../../middlewares/rate-limit';
+import { ROLES } from '../../../shared/constants';
+
+const meResponse = z.object({ data: meSchema });
+
+export function authRouter(): Router {
+  const router = Router();
+
+  route(router, {
+    method: 'post',
+    path: '/auth/sign-in',
+    summary: 'Sign in with e-mail and password; sets the session cookie',
+    tags: ['auth'],
+    access: 'public',
+    before: [signInPerAddress, signInPerAccount],
+    body: signInSchema,
+    response: meResponse,
+    handler: async ({ req, res, body }) => {
+      const user = await verifyCredentials(body.email, body.password);
+      startSession(req, res, user.id);
+      return { data: presentMe(user, await loadMemberships(user.id)) };
+    },
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/auth/sign-out',
+    summary: 'Sign out (clears the session cookie)',
+    tags: ['auth'],
+    access: 'public',
+    status: 204,
+    handler: ({ req, res }) => {
+      endSession(req, res);
+    },
+  });
+
+  route(router, {
+    method: 'get',
+    path: '/me',
+    summary: 'The signed-in user and their memberships',
+    tags: ['auth'],
+    access: 'user',
+    response: meResponse,
+    handler: ({ req }) => ({ data: presentMe(req.auth!.user, req.auth!.memberships) }),
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/auth/password-reset',
+    summary: 'E-mail a single-use password reset link (answers the same for unknown addresses)',
+    tags: ['auth'],
+    access: 'public',
+    before: [signInPerAddress],
+    status: 202,
+    body: passwordResetRequestSchema,
+    response: z.object({ data: z.object({ sent: z.boolean() }) }),
+    handler: async ({ body }) => {
+      await requestPasswordReset(body.email);
+      return { data: { sent: true } };
+    },
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/auth/password-reset/confirm',
+    summary: 'Set a new password with a reset token; signs in',
+    tags: ['auth'],
+    access: 'public',
+    body: passwordResetConfirmSchema,
+    response: meResponse,
+    handler: async ({ req, res, body }) => {
+      const user = await confirmPasswordReset(body.token, body.password);
+      startSession(req, res, user.id);
+      return { data: presentMe(user, await loadMemberships(user.id)) };
+    },
+  });
+
+  const tokenParams = z.object({ token: z.string().min(20).max(200) });
+
+  route(router, {
+    method: 'get',
+    path: '/invitations/:token',
+    summary: 'Look up an open invitation by its token',
+    tags: ['auth'],
+    access: 'public',
+    params: tokenParams,
+    response: z.object({
+      data: z.object({
+        email: z.string(),
+        name: z.string(),
+        role: z.enum(ROLES),
+        organization: z.object({ id: z.string(), name: z.string(), kind: z.string() }),
+      }),
+    }),
+    handler: async ({ params }) => {
+      const inv = await findOpenInvitation(params.token);
+      return {
+        data: {
+          email: inv.email,
+          name: inv.name,
+          role: inv.role,
+          organization: { id: inv.organization!.id, name: inv.organization!.name, kind: inv.organization!.kind },
+        },
+      };
+    },
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/invitations/:token/accept',
+    summary: 'Accept an invitation: set name and password, join, sign in',
+    tags: ['auth'],
+    access: 'public',
+    params: tokenParams,
+    body: invitationAcceptSchema,
+    response: meResponse,
+    handler: async ({ req, res, params, body }) => {
+      const user = await acceptInvitation(params.token, body.name, body.password);
+      startSession(req, res, user.id);
+      return { data: presentMe(user, await loadMemberships(user.id)) };
+    },
+  });
+
+  return router;
+}

@@ -1,0 +1,46 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { route } from '../route';
+import { env } from '../../env';
+import { AppError } from '../../errors';
+
+const caughtMail = z.object({
+  id: z.string(),
+  from: z.string(),
+  to: z.array(z.string()),
+  subject: z.string(),
+  date: z.string(),
+  text: z.string(),
+  html: z.string().nullable(),
+});
+
+/** Development only: the local mail catcher's inbox, so invitation and reset links can be opened. */
+export function devRouter(): Router {
+  const router = Router();
+  route(router, {
+    method: 'get',
+    path: '/dev/mail',
+    summary: 'Mail caught by the local mail catcher (development and test only)',
+    tags: ['dev'],
+    access: 'public',
+    response: z.object({ data: z.array(caughtMail) }),
+    handler: async () => {
+      if (env.NODE_ENV === 'production' || !env.MAIL_CATCHER_URL) throw new AppError(404, 'not_found', 'No such route');
+      const response = await fetch(`${env.MAIL_CATCHER_URL}/messages`);
+      if (!response.ok) throw new AppError(502, 'mail_catcher', 'The local mail catcher did not answer');
+      const messages = (await response.json()) as Array<Record<string, unknown>>;
+      return {
+        data: messages.map((m) => ({
+          id: String(m.id),
+          from: String(m.from ?? ''),
+          to: (m.to as string[]) ?? [],
+          subject: String(m.subject ?? ''),
+          date: String(m.date ?? ''),
+          text: String(m.text ?? ''),
+          html: (m.html as string) || null,
+        })),
+      };
+    },
+  });
+  return router;
+}

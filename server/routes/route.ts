@@ -1,0 +1,117 @@
+import type { Request, RequestHandler, Response, Router } from 'express';
+import { z, type ZodType } from 'zod';
+import type { RouteConfig } from '@asteasolutions/zod-to-openapi';
+import { documentRoute } from '../openapi';
+import { requireAuth } from '../middlewares/auth';
+import { resolveOrgAccess } from '../middlewares/org-access';
+import { AppError } from '../errors';
+import { fieldErrors } from '../middlewares/validate';
+
+type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';
+
+interface RouteSpec<P extends ZodType, Q extends ZodType, B extends ZodType> {
+  method: Method;
+  /** Express path under /api/v1, e.g. '/organizations/:orgId/machines/:machineId' */
+  path: string;
+  summary: string;
+  tags: string[];
+  /** 'public' (no sign-in), 'user' (signed in), 'org' (signed in + access to :orgId) */
+  access?: 'public' | 'user' | 'org';
+  params?: P;
+  query?: Q;
+  body?: B;
+  /** zod schema of the success body, for the OpenAPI document */
+  response?: ZodType;
+  status?: 200 | 201 | 202 | 204;
+  /** extra middlewares run after access checks and before validation (rate limits, uploads) */
+  before?: RequestHandler[];
+  /** request body content type for the OpenAPI document (default application/json) */
+  bodyContentType?: string;
+  handler: (ctx: {
+    req: Request;
+    res: Response;
+    params: z.infer<P>;
+    query: z.infer<Q>;
+    body: z.infer<B>;
+  }) => Promise<unknown> | unknown;
+}
+
+const errorBody = z
+  .object({
+    error: z.object({
+      code: z.string(),
+      message: z.string(),
+      fields: z.record(z.string(), z.string()).optional(),
+    }),
+  })
+  .openapi('Error');
+
+function parseOr400<T extends ZodType>(schema: T | undefined, value: unknown, where: string) {
+  if (!schema) return value;
+  const result = schema.safeParse(value ?? {});
+  if (!result.success) {
+    const fields = fieldErrors(result.error);
+    const message = Object.entries(fields)
+      .map(([k, v]) => `${k}: ${v}`)
+      .join('; ');
+    throw new AppError(400, 'invalid', message || `Invalid ${where}`, fields);
+  }
+  return result.data;
+}
+
+/** Declares one API route: Express handler, access checks, zod validation and its OpenAPI entry. */
+export function route<
+  P extends ZodType = ZodType,
+  Q extends ZodType = ZodType,
+  B extends ZodType = ZodType,
+>(router: Router, spec: RouteSpec<P, Q, B>): void {
+  const access = spec.access ?? 'org';
+  const status = spec.status ?? 200;
+  const openApiPath = spec.path.replace(/:(\w+)/g, '{$1}');
+  const responses: RouteConfig['responses'] = {
+    [status]: {
+      description: 'Success',
+      ...(status !== 204 && {
+        content: { 'application/json': { schema: spec.response ?? z.object({ data: z.unknown() }) } },
+      }),
+    },
+    400: { description: 'Invalid input', content: { 'application/json': { schema: errorBody } } },
+  };
+  if (access !== 'public') {
+    responses[401] = { description: 'Not signed in', content: { 'application/json': { schema: errorBody } } };
+    responses[403] = { description: 'Role may not', content: { 'application/json': { schema: errorBody } } };
+    responses[404] = { description: 'Not found', content: { 'application/json': { schema: errorBody } } };
+  }
+  documentRoute({
+    method: spec.method,
+    path: openApiPath,
+    summary: spec.summary,
+    tags: spec.tags,
+    ...(access !== 'public' && { security: [{ sessionCookie: [] }] }),
+    request: {
+      ...(spec.params && { params: spec.params as never }),
+      ...(spec.query && { query: spec.query as never }),
+      ...(spec.body && {
+        body: {
+          content: { [spec.bodyContentType ?? 'application/json']: { schema: spec.body } },
+        },
+      }),
+    },
+    responses,
+  });
+
+  const chain: RequestHandler[] = [];
+  if (access !== 'public') chain.push(requireAuth);
+  if (access === 'org') chain.push(resolveOrgAccess);
+  chain.push(...(spec.before ?? []));
+  chain.push(async (req, res) => {
+    const params = parseOr400(spec.params, req.params, 'path') as z.infer<P>;
+    const query = parseOr400(spec.query, req.query, 'query') as z.infer<Q>;
+    const body = parseOr400(spec.body, req.body, 'body') as z.infer<B>;
+    const result = await spec.handler({ req, res, params, query, body });
+    if (res.headersSent) return;
+    if (status === 204 || result === undefined) res.status(204).end();
+    else res.status(status).json(result);
+  });
+  router[spec.method](spec.path, ...chain);
+}

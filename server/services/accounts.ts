@@ -1,0 +1,197 @@
+import bcrypt from 'bcryptjs';
+import { Op } from 'sequelize';
+import { sequelize } from '../db';
+import { env } from '../env';
+import { AppError, invalid } from '../errors';
+import { Invitation, Membership, Organization, PasswordReset, User } from '../models';
+import type { InvitationCreateInput } from '../../shared/schemas/auth';
+import { ROLE_LABELS } from '../../shared/constants';
+import type { OrgAccess } from '../policies/access';
+import { rolesFor } from '../policies/membership';
+import { sendNow } from './mailer';
+import { hashToken, newToken } from './tokens';
+import { recordAudit } from './audit';
+
+const BCRYPT_ROUNDS = env.NODE_ENV === 'test' ? 4 : 11;
+export const INVITATION_DAYS = 7;
+export const RESET_MINUTES = 60;
+
+// A fixed hash to compare against when the e-mail is unknown, so timing does not reveal accounts.
+const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', 4);
+
+export const hashPassword = (password: string) => bcrypt.hash(password, BCRYPT_ROUNDS);
+
+/** The user with these credentials, or an AppError 401 naming no detail. */
+export async function verifyCredentials(email: string, password: string): Promise<User> {
+  const user = await User.findOne({ where: sequelize.where(sequelize.fn('lower', sequelize.col('email')), email) });
+  const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
+  if (!user || !user.passwordHash || !ok) {
+    throw new AppError(401, 'invalid_credentials', 'That e-mail and password do not match an account');
+  }
+  return user;
+}
+
+export async function loadMemberships(userId: string) {
+  return Membership.findAll({ where: { userId }, include: [{ model: Organization, as: 'organization' }] });
+}
+
+/** Creates an invitation and e-mails its single-use link. */
+export async function inviteMember(access: OrgAccess, input: InvitationCreateInput) {
+  if (!rolesFor(access).includes(input.role)) {
+    throw invalid({ role: `Role must be one of: ${rolesFor(access).join(', ')} in this organization` });
+  }
+  const existing = await Membership.findOne({
+    where: { organizationId: access.organization.id },
+    include: [
+      {
+        model: User,
+        as: 'user',
+        where: sequelize.where(sequelize.fn('lower', sequelize.col('user.email')), input.email),
+      },
+    ],
+  });
+  if (existing) throw invalid({ email: 'This person is a member already' });
+  const { token, hash } = newToken();
+  const invitation = await sequelize.transaction(async (transaction) => {
+    const row = await Invitation.create(
+      {
+        organizationId: access.organization.id,
+        email: input.email,
+        name: input.name,
+        role: input.role,
+        tokenHash: hash,
+        invitedBy: access.userId,
+        expiresAt: new Date(Date.now() + INVITATION_DAYS * 86_400_000),
+        acceptedAt: null,
+      },
+      { transaction },
+    );
+    await recordAudit(
+      {
+        organizationId: access.organization.id,
+        actorUserId: access.userId,
+        action: 'invitation.create',
+        entityType: 'invitation',
+        entityId: row.id,
+        changes: { email: input.email, role: input.role },
+      },
+      transaction,
+    );
+    return row;
+  });
+  const link = `${env.APP_URL}/invitations/${token}`;
+  await sendNow({
+    organizationId: access.organization.id,
+    recipient: input.email,
+    kind: 'invitation',
+    periodKey: invitation.id,
+    subject: `You are invited to ${access.organization.name} on Hourstone`,
+    text: [
+      `Hello ${input.name},`,
+      '',
+      `You have been invited to join ${access.organization.name} on Hourstone as ${ROLE_LABELS[input.role].toLowerCase()}.`,
+      `Open this link to set your password and join (it works once and expires in ${INVITATION_DAYS} days):`,
+      link,
+      '',
+      'If you did not expect this, ignore this message.',
+    ].join('\n'),
+    html: `<p>Hello ${escapeHtml(input.name)},</p><p>You have been invited to join <strong>${escapeHtml(access.organization.name)}</strong> on Hourstone as ${ROLE_LABELS[input.role].toLowerCase()}.</p><p><a href="${link}">Set your password and join</a> (works once, expires in ${INVITATION_DAYS} days).</p><p>If you did not expect this, ignore this message.</p>`,
+  });
+  return invitation;
+}
+
+/** A pending, unexpired invitation for this token, or 404. */
+export async function findOpenInvitation(token: string) {
+  const invitation = await Invitation.findOne({
+    where: { tokenHash: hashToken(token), acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
+    include: [{ model: Organization, as: 'organization' }],
+  });
+  if (!invitation) throw new AppError(404, 'not_found', 'This invitation has expired or was already used');
+  return invitation;
+}
+
+/** Accepts an invitation: creates or updates the user and the membership, once. */
+export async function acceptInvitation(token: string, name: string, password: string): Promise<User> {
+  const passwordHash = await hashPassword(password);
+  return sequelize.transaction(async (transaction) => {
+    const invitation = await Invitation.findOne({
+      where: { tokenHash: hashToken(token), acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      lock: transaction.LOCK.UPDATE,
+      transaction,
+    });
+    if (!invitation) throw new AppError(404, 'not_found', 'This invitation has expired or was already used');
+    let user = await User.findOne({
+      where: sequelize.where(sequelize.fn('lower', sequelize.col('email')), invitation.email.toLowerCase()),
+      transaction,
+    });
+    if (user) await user.update({ name, passwordHash }, { transaction });
+    else user = await User.create({ email: invitation.email.toLowerCase(), name, passwordHash }, { transaction });
+    await Membership.findOrCreate({
+      where: { organizationId: invitation.organizationId, userId: user.id },
+      defaults: { organizationId: invitation.organizationId, userId: user.id, role: invitation.role },
+      transaction,
+    });
+    await invitation.update({ acceptedAt: new Date() }, { transaction });
+    await recordAudit(
+      {
+        organizationId: invitation.organizationId,
+        actorUserId: user.id,
+        action: 'invitation.accept',
+        entityType: 'membership',
+        entityId: user.id,
+        changes: { role: invitation.role },
+      },
+      transaction,
+    );
+    return user;
+  });
+}
+
+/** Starts a password reset; silent when the e-mail is unknown (accounts cannot be probed). */
+export async function requestPasswordReset(email: string): Promise<void> {
+  const user = await User.findOne({ where: sequelize.where(sequelize.fn('lower', sequelize.col('email')), email) });
+  if (!user) return;
+  const { token, hash } = newToken();
+  const reset = await PasswordReset.create({
+    userId: user.id,
+    tokenHash: hash,
+    expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000),
+    usedAt: null,
+  });
+  const link = `${env.APP_URL}/reset-password?token=${token}`;
+  await sendNow({
+    organizationId: null,
+    recipient: user.email,
+    kind: 'password_reset',
+    periodKey: reset.id,
+    subject: 'Reset your Hourstone password',
+    text: `Hello ${user.name},\n\nOpen this link to choose a new password. It works once and expires in ${RESET_MINUTES} minutes:\n${link}\n\nIf you did not ask for this, ignore this message; your password stays as it is.`,
+    html: `<p>Hello ${escapeHtml(user.name)},</p><p><a href="${link}">Choose a new password</a>. The link works once and expires in ${RESET_MINUTES} minutes.</p><p>If you did not ask for this, ignore this message; your password stays as it is.</p>`,
+  });
+}
+
+/** Sets a new password with a reset token (single use, unexpired). */
+export async function confirmPasswordReset(token: string, password: string): Promise<User> {
+  const passwordHash = await hashPassword(password);
+  return sequelize.transaction(async (transaction) => {
+    const reset = await PasswordReset.findOne({
+      where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
+      lock: transaction.LOCK.UPDATE,
+      transaction,
+    });
+    if (!reset) throw invalid({ token: 'This link has expired or was already used. Ask for a new one.' });
+    const user = await User.findByPk(reset.userId, { transaction });
+    if (!user) throw invalid({ token: 'This link has expired or was already used. Ask for a new one.' });
+    await user.update({ passwordHash }, { transaction });
+    await reset.update({ usedAt: new Date() }, { transaction });
+    await recordAudit(
+      { organizationId: null, actorUserId: user.id, action: 'password.reset', entityType: 'user', entityId: user.id },
+      transaction,
+    );
+    return user;
+  });
+}
+
+export function escapeHtml(s: string): string {
+  return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+}

@@ -1,0 +1,74 @@
+// Names shared by client and server; the database CHECK constraints use the same values.
+export const FARM_ROLES = ['manager', 'technician', 'operator'] as const;
+export const DEALER_ROLES = ['advisor'] as const;
+export const ROLES = [...FARM_ROLES, ...DEALER_ROLES] as const;
+export type Role = (typeof ROLES)[number];
+
+export const ROLE_LABELS: Record<Role, string> = {
+  manager: 'Manager',
+  technician: 'Technician',
+  operator: 'Operator',
+  advisor: 'Service advisor',
+};
+
+export const ORGANIZATION_KINDS = ['farm', 'dealer'] as const;
+export type OrganizationKind = (typeof ORGANIZATION_KINDS)[number];
+export const UNIT_SYSTEMS = ['metric', 'imperial'] as const;
+export type UnitSystem = (typeof UNIT_SYSTEMS)[number];
+
+export const MACHINE_CATEGORIES = [
+  'tractor',
+  'combine',
+  'sprayer',
+  'baler',
+  'loader',
+  'mower',
+  'truck',
+  'implement',
+  'other',
+] as const;
+export type MachineCategory = (typeof MACHINE_CATEGORIES)[number];
+export const CATEGORY_LABELS: Record<MachineCategory, string> = {
+  tractor: 'Tractor',
+  combine: 'Combine',
+  sprayer: 'Sprayer',
+  baler: 'Baler',
+  loader: 'Loader',
+  mower: 'Mower',
+  truck: 'Truck',
+  implement: 'Implement',
+  other: 'Other',
+};
+
+export const METER_UNITS = ['h', 'km', 'bales', 'ha', 'acres'] as const;
+export type MeterUnit = (typeof METER_UNITS)[number];
+export const METER_UNIT_LABELS: Record<MeterUnit, string> = {
+  h: 'hours',
+  km: 'km',
+  bales: 'bales',
+  ha: 'ha',
+  acres: 'acres',
+};
+
+export const MACHINE_STATUSES = ['in_service', 'tagged_out', 'sold'] as const;
+export type MachineStatus = (typeof MACHINE_STATUSES)[number];
+export const MACHINE_STATUS_LABELS: Record<MachineStatus, string> = {
+  in_service: 'In service',
+  tagged_out: 'Tagged out',
+  sold: 'Sold',
+};
+
+export const READING_SOURCES = ['manual', 'walkaround', 'import', 'service', 'telematics'] as const;
+export type ReadingSource = (typeof READING_SOURCES)[number];
+
+export const DUE_STATUSES = ['overdue', 'due_soon', 'ok', 'no_forecast'] as const;
+export const DUE_STATUS_LABELS = {
+  overdue: 'Overdue',
+  due_soon: 'Due soon',
+  ok: 'OK',
+  no_forecast: 'No forecast',
+} as const;
+
+export const DUE_HORIZONS = [7, 30, 90] as const;
+/** A machine in season with no reading for this many days is flagged as stale. */
+export const STALE_READING_DAYS = 14;

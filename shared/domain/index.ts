@@ -1,0 +1,10 @@
+// The forecasting and due-point math, as pure functions shared by the server and the client.
+export * from './types';
+export * from './calendar';
+export * from './lifetime';
+export * from './usage';
+export * from './usage-trend';
+export * from './usage-season';
+export * from './due-point';
+export * from './reading-rules';
+export * from './cost';

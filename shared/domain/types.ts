@@ -1,0 +1,71 @@
+// Types of the forecasting and due-point math. Day numbers are *local* calendar days of the
+// organization's time zone counted from 1970-01-01 (fractional part = local time of day / 24 h),
+// so that daylight-saving changes never move a date. Meter values are lifetime values.
+
+/** One reading as the forecast sees it: local day number (fractional) and lifetime meter value. */
+export interface ReadingPoint {
+  day: number;
+  value: number;
+}
+
+/** Usage rate estimate in meter units per day, with a low/high range. */
+export interface UsageEstimate {
+  method: 'trend' | 'season' | 'none';
+  /** point estimate, units per day, over the next 30 days */
+  rate: number;
+  low: number;
+  high: number;
+  /** how many readings the estimate rests on */
+  readingCount: number;
+  /** day number of the last reading, null without readings */
+  lastDay: number | null;
+  /** lifetime value at the last reading, null without readings */
+  lastValue: number | null;
+  /**
+   * where projections start (day number, lifetime value): the last reading for 'trend'; for
+   * 'season' the later of asOf and the last reading, with the value extrapolated to it. Optional so
+   * hand-built estimates stay valid; projections fall back to lastDay/lastValue.
+   */
+  anchorDay?: number;
+  anchorValue?: number;
+  /** season only: projected usage per day for the next `profile.length` days (index 0 = day after asOf, i.e. after anchorDay), scaled */
+  profile?: number[];
+  /** season only: the scale factor this year vs. last year's same weeks */
+  scale?: number;
+  /** short human explanation shown in the UI */
+  explanation: string;
+}
+
+/** A task's schedule as the due-point math needs it. */
+export interface TaskSchedule {
+  intervalMeter: number | null;
+  intervalDays: number | null;
+  firstServiceMeter: number | null;
+  warnMeter: number | null;
+  warnDays: number | null;
+  /** last time done; null when never recorded */
+  lastDoneMeter: number | null;
+  /** ISO date (yyyy-mm-dd), local to the organization */
+  lastDoneOn: string | null;
+}
+
+export type DueStatus = 'overdue' | 'due_soon' | 'ok' | 'no_forecast';
+
+/** The computed due point of one task. Dates are ISO local dates (yyyy-mm-dd). */
+export interface DuePoint {
+  status: DueStatus;
+  /** which limit falls first: meter, calendar, or null when neither can be dated */
+  governs: 'meter' | 'calendar' | null;
+  dueMeter: number | null;
+  dueDate: string | null;
+  /** projected date the meter reaches dueMeter (point, earliest, latest); null when no forecast */
+  projectedDate: string | null;
+  projectedLow: string | null;
+  projectedHigh: string | null;
+  /** the date the task falls due: the earlier of dueDate and projectedDate */
+  effectiveDate: string | null;
+  remainingMeter: number | null;
+  remainingDays: number | null;
+  /** 'recorded' when last done is known, 'first_service' for the break-in point, 'assumed' otherwise */
+  basis: 'recorded' | 'first_service' | 'assumed';
+}

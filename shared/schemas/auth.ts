@@ -1,0 +1,29 @@
+import { z } from 'zod';
+import { ROLES } from '../constants';
+import { email, password, personName } from './common';
+
+export const signInSchema = z.object({
+  email,
+  password: z.string({ error: 'Enter your password' }).min(1, { error: 'Enter your password' }),
+});
+export type SignInInput = z.infer<typeof signInSchema>;
+
+export const roleSchema = z.enum(ROLES, { error: `Role must be one of: ${ROLES.join(', ')}` });
+
+export const invitationCreateSchema = z.object({ email, name: personName, role: roleSchema });
+export type InvitationCreateInput = z.infer<typeof invitationCreateSchema>;
+
+export const invitationAcceptSchema = z.object({ name: personName, password });
+export type InvitationAcceptInput = z.infer<typeof invitationAcceptSchema>;
+
+export const passwordResetRequestSchema = z.object({ email });
+export type PasswordResetRequestInput = z.infer<typeof passwordResetRequestSchema>;
+
+export const passwordResetConfirmSchema = z.object({
+  token: z.string({ error: 'The reset link is incomplete' }).min(20, { error: 'The reset link is incomplete' }),
+  password,
+});
+export type PasswordResetConfirmInput = z.infer<typeof passwordResetConfirmSchema>;
+
+export const membershipUpdateSchema = z.object({ role: roleSchema });
+export type MembershipUpdateInput = z.infer<typeof membershipUpdateSchema>;

@@ -1,0 +1,31 @@
+import { ROLES, type Role } from '../../shared/constants';
+import type { IconName } from '../components/ui/icons';
+import { paths } from './paths';
+
+export interface NavItem {
+  label: string;
+  to: (orgId: string) => string;
+  icon: IconName;
+  /** active only on this exact path (the organization's home), not on pages below it */
+  end?: boolean;
+}
+
+interface NavEntry extends NavItem {
+  roles: readonly Role[];
+}
+
+const everyone = ROLES;
+const org = paths.organization;
+
+// The whole main navigation, in display order: one line per item, with the roles that see it.
+// The server still checks every request; this only decides what is offered.
+const NAV_ENTRIES: readonly NavEntry[] = [
+  { label: 'Dashboard', to: org.dashboard.href, icon: 'gauge', roles: everyone, end: true },
+  { label: 'Team', to: org.team.href, icon: 'team', roles: ['manager'] },
+  { label: 'Account', to: org.account.href, icon: 'person', roles: everyone },
+];
+
+/** role → the items that role sees, in order */
+export const navigationByRole = Object.fromEntries(
+  ROLES.map((role) => [role, NAV_ENTRIES.filter((entry) => entry.roles.includes(role))]),
+) as Record<Role, readonly NavItem[]>;

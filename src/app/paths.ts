@@ -1,0 +1,42 @@
+// Every URL of the client, as a route pattern (`path`) and an href builder (`href`). Nothing
+// else in the app writes a URL by hand.
+
+const q = encodeURIComponent;
+
+export const paths = {
+  home: { path: '/', href: () => '/' },
+  signIn: {
+    path: '/sign-in',
+    href: (next?: string | null) => (next ? `/sign-in?next=${q(next)}` : '/sign-in'),
+  },
+  forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
+  resetPassword: {
+    path: '/reset-password',
+    href: (token?: string) => (token ? `/reset-password?token=${q(token)}` : '/reset-password'),
+  },
+  invitation: { path: '/invitations/:token', href: (token: string) => `/invitations/${q(token)}` },
+  organization: {
+    dashboard: { path: '/o/:orgId', href: (orgId: string) => `/o/${q(orgId)}` },
+    team: { path: '/o/:orgId/team', href: (orgId: string) => `/o/${q(orgId)}/team` },
+    account: { path: '/o/:orgId/account', href: (orgId: string) => `/o/${q(orgId)}/account` },
+  },
+  devMail: {
+    path: '/dev/mail',
+    href: () => '/dev/mail',
+    message: { path: '/dev/mail/:messageId', href: (id: string) => `/dev/mail/${q(id)}` },
+  },
+} as const;
+
+/**
+ * The `next` parameter after sign-in, only when it is a path inside this app: an absolute or
+ * protocol-relative URL there would turn the sign-in page into an open redirect.
+ */
+export function safeNextPath(next: string | null | undefined): string | null {
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return null;
+  if (next.startsWith(paths.signIn.path)) return null;
+  return next;
+}
+
+/** Where a signed-in person starts: an organization's dashboard, or the start page without one. */
+export const homeHref = (orgId: string | null) =>
+  orgId ? paths.organization.dashboard.href(orgId) : paths.home.href();

@@ -1,0 +1,3 @@
+/** Join class names, skipping falsy ones. */
+export const cx = (...classes: (string | false | null | undefined)[]) =>
+  classes.filter(Boolean).join(' ');

@@ -1,0 +1,135 @@
+// The one fetch wrapper: every server call goes through here, so the cookie session, the JSON
+// envelope and the error shape are handled in one place.
+
+export const API_BASE = '/api/v1';
+
+export type FieldErrors = Record<string, string>;
+
+/** What every failed call throws: the server's `{ error: { code, message, fields? } }`, or ours. */
+export class ApiError extends Error {
+  readonly status: number;
+  readonly code: string;
+  readonly fields: FieldErrors;
+  /** seconds to wait before trying again (429), when the server said so */
+  readonly retryAfter: number | null;
+
+  constructor(init: {
+    status: number;
+    code: string;
+    message: string;
+    fields?: FieldErrors;
+    retryAfter?: number | null;
+  }) {
+    super(init.message);
+    this.name = 'ApiError';
+    this.status = init.status;
+    this.code = init.code;
+    this.fields = init.fields ?? {};
+    this.retryAfter = init.retryAfter ?? null;
+  }
+}
+
+export const isApiError = (error: unknown): error is ApiError => error instanceof ApiError;
+
+/** The response body of a successful call that returns one record or a list. */
+export interface DataEnvelope<T> {
+  data: T;
+}
+
+type Method = 'GET' | 'POST' | 'PATCH' | 'PUT' | 'DELETE';
+
+interface RequestOptions {
+  body?: unknown;
+  signal?: AbortSignal;
+}
+
+// Shown when the answer is not our JSON at all (API down behind the dev proxy, a gateway page).
+const FALLBACK_MESSAGES: Record<number, string> = {
+  0: "Couldn't reach Hourstone. Check your connection and try again.",
+  401: 'Please sign in again.',
+  403: "You don't have access to that.",
+  404: "That doesn't exist, or you don't have access to it.",
+  429: 'Too many attempts. Wait a minute and try again.',
+};
+
+function fallbackMessage(status: number): string {
+  return (
+    FALLBACK_MESSAGES[status] ??
+    (status >= 500
+      ? 'Hourstone had a problem answering. Try again in a moment.'
+      : 'Something went wrong. Try again.')
+  );
+}
+
+function parseRetryAfter(response: Response): number | null {
+  const header = response.headers.get('Retry-After');
+  if (!header) return null;
+  const seconds = Number(header);
+  return Number.isFinite(seconds) ? seconds : null;
+}
+
+async function toApiError(response: Response): Promise<ApiError> {
+  const retryAfter = parseRetryAfter(response);
+  let body: unknown = null;
+  try {
+    body = await response.json();
+  } catch {
+    // not JSON: fall through to the generic message for this status
+  }
+  const error = (body as { error?: { code?: unknown; message?: unknown; fields?: unknown } })
+    ?.error;
+  if (error && typeof error === 'object') {
+    return new ApiError({
+      status: response.status,
+      code: typeof error.code === 'string' ? error.code : `http_${response.status}`,
+      message: typeof error.message === 'string' ? error.message : fallbackMessage(response.status),
+      fields:
+        error.fields && typeof error.fields === 'object' ? (error.fields as FieldErrors) : undefined,
+      retryAfter,
+    });
+  }
+  return new ApiError({
+    status: response.status,
+    code: `http_${response.status}`,
+    message: fallbackMessage(response.status),
+    retryAfter,
+  });
+}
+
+async function request<T>(method: Method, path: string, options: RequestOptions = {}): Promise<T> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+
+  let response: Response;
+  try {
+    response = await fetch(`${API_BASE}${path}`, {
+      method,
+      headers,
+      credentials: 'include',
+      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      signal: options.signal,
+    });
+  } catch (cause) {
+    if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
+    throw new ApiError({ status: 0, code: 'network_error', message: fallbackMessage(0) });
+  }
+
+  if (!response.ok) throw await toApiError(response);
+  if (response.status === 204) return undefined as T;
+  const text = await response.text();
+  return (text ? JSON.parse(text) : undefined) as T;
+}
+
+export const apiClient = {
+  get: <T>(path: string, options?: Omit<RequestOptions, 'body'>) => request<T>('GET', path, options),
+  post: <T>(path: string, body?: unknown, options?: RequestOptions) =>
+    request<T>('POST', path, { ...options, body }),
+  patch: <T>(path: string, body?: unknown, options?: RequestOptions) =>
+    request<T>('PATCH', path, { ...options, body }),
+  put: <T>(path: string, body?: unknown, options?: RequestOptions) =>
+    request<T>('PUT', path, { ...options, body }),
+  delete: <T = void>(path: string, options?: RequestOptions) => request<T>('DELETE', path, options),
+};
+
+/** Path segments from the URL or the user go through this so ids cannot break out of the path. */
+export const segment = (value: string) => encodeURIComponent(value);

@@ -1,0 +1,138 @@
+import { createContext, useContext, type ReactNode } from 'react';
+import {
+  queryOptions,
+  useMutation,
+  useQuery,
+  useQueryClient,
+  type QueryClient,
+} from '@tanstack/react-query';
+import type { OrganizationKind, Role, UnitSystem } from '../../shared/constants';
+import { apiClient, isApiError, type DataEnvelope } from './api-client';
+
+// The signed-in person and their memberships. This lives in lib (not in a feature) because the
+// router guards, the app shell and every feature need to know who is signed in and where.
+
+export interface Organization {
+  id: string;
+  name: string;
+  kind: OrganizationKind;
+  timeZone: string;
+  units: UnitSystem;
+}
+
+export interface Membership {
+  id: string;
+  role: Role;
+  organization: Organization;
+}
+
+export interface Me {
+  user: { id: string; email: string; name: string };
+  memberships: Membership[];
+}
+
+export const sessionKeys = {
+  all: ['session'] as const,
+  me: () => [...sessionKeys.all, 'me'] as const,
+};
+
+/** GET /me; a 401 is an answer here ("nobody is signed in"), not an error. */
+export async function fetchMe(signal?: AbortSignal): Promise<Me | null> {
+  try {
+    const body = await apiClient.get<DataEnvelope<Me>>('/me', { signal });
+    return body.data;
+  } catch (error) {
+    if (isApiError(error) && error.status === 401) return null;
+    throw error;
+  }
+}
+
+export const meQueryOptions = () =>
+  queryOptions({
+    queryKey: sessionKeys.me(),
+    queryFn: ({ signal }) => fetchMe(signal),
+    staleTime: 5 * 60_000,
+    meta: { allowUnauthorized: true },
+  });
+
+export const useMe = () => useQuery(meQueryOptions());
+
+/**
+ * Store the session a sign-in, invitation acceptance or password reset returned. Everything cached
+ * before belonged to whoever was signed in before, so it goes first.
+ */
+export function storeSession(queryClient: QueryClient, me: Me): void {
+  queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== sessionKeys.all[0] });
+  queryClient.setQueryData(sessionKeys.me(), me);
+}
+
+export function clearSession(queryClient: QueryClient): void {
+  queryClient.clear();
+  queryClient.setQueryData(sessionKeys.me(), null);
+}
+
+export function useSignOut() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: () => apiClient.post<void>('/auth/sign-out'),
+    meta: { allowUnauthorized: true },
+    // Whatever the server said, this browser is no longer showing anyone's data.
+    onSettled: () => clearSession(queryClient),
+  });
+}
+
+// --- Which organization to open -------------------------------------------------------------
+
+const LAST_ORGANIZATION_KEY = 'hourstone.lastOrganizationId';
+
+export function rememberOrganization(orgId: string): void {
+  try {
+    localStorage.setItem(LAST_ORGANIZATION_KEY, orgId);
+  } catch {
+    // private mode or storage full: we simply open the first organization next time
+  }
+}
+
+function lastOrganizationId(): string | null {
+  try {
+    return localStorage.getItem(LAST_ORGANIZATION_KEY);
+  } catch {
+    return null;
+  }
+}
+
+export const findMembership = (me: Me, orgId: string): Membership | undefined =>
+  me.memberships.find((membership) => membership.organization.id === orgId);
+
+/** The organization to open after sign-in: the last one used here, else the first membership. */
+export function homeOrganizationId(me: Me): string | null {
+  const last = lastOrganizationId();
+  if (last && findMembership(me, last)) return last;
+  return me.memberships[0]?.organization.id ?? null;
+}
+
+// --- The organization the current page belongs to ------------------------------------------
+
+interface CurrentMembership {
+  me: Me;
+  membership: Membership;
+}
+
+const CurrentMembershipContext = createContext<CurrentMembership | null>(null);
+
+export function CurrentMembershipProvider({
+  value,
+  children,
+}: {
+  value: CurrentMembership;
+  children: ReactNode;
+}) {
+  return <CurrentMembershipContext value={value}>{children}</CurrentMembershipContext>;
+}
+
+/** The signed-in person and their membership of the organization in the URL (/o/:orgId/…). */
+export function useCurrentMembership(): CurrentMembership {
+  const value = useContext(CurrentMembershipContext);
+  if (!value) throw new Error('useCurrentMembership is used outside an organization page');
+  return value;
+}
