@@ -4,7 +4,7 @@
 import { ensureDependencies } from './lib/setup.mjs';
 import { log, warn } from './lib/common.mjs';
 import { startPostgres } from './lib/postgres.mjs';
-import { runTsScript } from './lib/app.mjs';
+import { jwtSecret, runTsScript } from './lib/app.mjs';
 
 const extraSeedArgs = process.argv.slice(2).filter((arg) => arg === '--allow-production');
 
@@ -15,7 +15,13 @@ async function main() {
     port: process.env.PG_PORT,
     externalUrl: process.env.DATABASE_URL,
   });
-  const env = { ...process.env, DATABASE_URL: postgres.databaseUrl };
+  // The server's settings are validated as a whole, so the scripts need the secret too.
+  const env = {
+    ...process.env,
+    NODE_ENV: process.env.NODE_ENV ?? 'development',
+    DATABASE_URL: postgres.databaseUrl,
+    JWT_SECRET: jwtSecret(),
+  };
   try {
     await runTsScript('scripts/migrate.ts', [], env);
     await runTsScript('scripts/seed.ts', ['--reset', ...extraSeedArgs], env);

@@ -28,7 +28,9 @@ let nextId = 1;
 let accepting = true;
 
 function outageError(): SMTPServerError {
-  const error: SMTPServerError = new Error('Service not available (mail catcher outage simulation)');
+  const error: SMTPServerError = new Error(
+    'Service not available (mail catcher outage simulation)',
+  );
   error.responseCode = 421;
   return error;
 }
@@ -112,7 +114,8 @@ async function handle(req: IncomingMessage, res: ServerResponse) {
     messages.length = 0;
     return sendJson(res, 200, { deleted: true });
   }
-  if (pathname === '/control' && req.method === 'GET') return sendJson(res, 200, { accept: accepting });
+  if (pathname === '/control' && req.method === 'GET')
+    return sendJson(res, 200, { accept: accepting });
   if (pathname === '/control' && req.method === 'POST') {
     const body = await readJson(req).catch(() => undefined);
     const accept = (body as { accept?: unknown } | undefined)?.accept;

@@ -4,6 +4,8 @@ import { sequelize } from '../server/db';
 
 const applied = await migrator.up();
 console.log(
-  applied.length ? `migrations: applied ${applied.map((m) => m.name).join(', ')}` : 'migrations: up to date',
+  applied.length
+    ? `migrations: applied ${applied.map((m) => m.name).join(', ')}`
+    : 'migrations: up to date',
 );
 await sequelize.close();

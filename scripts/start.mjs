@@ -47,7 +47,10 @@ async function shutDown(exitCode, reason) {
 
 function onChildExit(name) {
   return (code, signal) => {
-    void shutDown(1, `${name} stopped unexpectedly (${signal ?? `exit ${code}`}); stopping everything`);
+    void shutDown(
+      1,
+      `${name} stopped unexpectedly (${signal ?? `exit ${code}`}); stopping everything`,
+    );
   };
 }
 

@@ -58,7 +58,12 @@ async function runCheck(script) {
   const code = await runCommand('npm', ['run', script], { env: baseEnv });
   const seconds = ((Date.now() - started) / 1000).toFixed(1);
   log(`${script}: ${code === 0 ? 'passed' : `FAILED (exit ${code})`} in ${seconds} s`);
-  record(script, code === 0 ? { passed: 1, failed: 0 } : { passed: 0, failed: 1, problems: [`${script} failed`] });
+  record(
+    script,
+    code === 0
+      ? { passed: 1, failed: 0 }
+      : { passed: 0, failed: 1, problems: [`${script} failed`] },
+  );
 }
 
 async function runVitest(label, report, extraArgs, env) {
@@ -81,7 +86,7 @@ function findOrInstallChromium() {
   const found = CHROMIUM_CANDIDATES.find((candidate) => existsSync(candidate));
   if (found) return found;
   if (!isRoot) {
-    throw new Error('chromium not found: install Debian\'s chromium package or set CHROMIUM_PATH');
+    throw new Error("chromium not found: install Debian's chromium package or set CHROMIUM_PATH");
   }
   return undefined;
 }
@@ -89,9 +94,12 @@ function findOrInstallChromium() {
 async function installChromium() {
   log('chromium not found; installing Debian package chromium (apt-get)');
   const env = { ...baseEnv, DEBIAN_FRONTEND: 'noninteractive' };
-  for (const aptArgs of [['update'], ['install', '-y', 'chromium']]) {
+  for (const aptArgs of [
+    ['-q', 'update'],
+    ['-q', 'install', '-y', 'chromium'],
+  ]) {
     const code = await runCommand('apt-get', aptArgs, { env });
-    if (code !== 0) throw new Error(`apt-get ${aptArgs[0]} failed (exit ${code})`);
+    if (code !== 0) throw new Error(`apt-get ${aptArgs[1]} failed (exit ${code})`);
   }
   const found = CHROMIUM_CANDIDATES.find((candidate) => existsSync(candidate));
   if (!found) throw new Error('chromium was installed but no binary was found');
@@ -124,7 +132,11 @@ async function browserTests(env) {
     );
   } catch (error) {
     warn(`browser tests could not run: ${error.message}`);
-    record('browser tests', { passed: 0, failed: 1, problems: [`browser tests: ${error.message}`] });
+    record('browser tests', {
+      passed: 0,
+      failed: 1,
+      problems: [`browser tests: ${error.message}`],
+    });
   }
 }
 

@@ -11,6 +11,10 @@ import { errorHandler, notFoundHandler } from './middlewares/error-handler';
 import { authRouter } from './routes/auth/auth.router';
 import { membersRouter } from './routes/members/members.router';
 import { devRouter } from './routes/dev/dev.router';
+import { machinesRouter } from './routes/machines/machines.router';
+import { tasksRouter } from './routes/tasks/tasks.router';
+import { readingsRouter } from './routes/readings/readings.router';
+import { dueRouter } from './routes/due/due.router';
 import './models';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -44,6 +48,10 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   });
   api.use(authRouter());
   api.use(membersRouter());
+  api.use(machinesRouter());
+  api.use(tasksRouter());
+  api.use(readingsRouter());
+  api.use(dueRouter());
   api.use(devRouter());
   api.use(notFoundHandler);
   app.use('/api/v1', api);

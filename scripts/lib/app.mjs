@@ -24,7 +24,7 @@ export function jwtSecret() {
 /** Runs a TypeScript script of the project with tsx; throws when it fails. */
 export async function runTsScript(script, args, env) {
   const code = await runCommand(tsx, [script, ...args], { env });
-  if (code !== 0) throw new Error(`${script} ${args.join(' ')} failed (exit ${code})`);
+  if (code !== 0) throw new Error(`${[script, ...args].join(' ')} failed (exit ${code})`);
 }
 
 /**

@@ -37,7 +37,8 @@ class PostgresError extends Error {}
 
 /** Runs a command to completion, capturing its output; as the postgres user when we are root. */
 function run(cmd, args, { asPostgres = false, env, cwd, allowFailure = false } = {}) {
-  const [file, argv] = asPostgres && isRoot ? ['runuser', ['-u', OS_USER, '--', cmd, ...args]] : [cmd, args];
+  const [file, argv] =
+    asPostgres && isRoot ? ['runuser', ['-u', OS_USER, '--', cmd, ...args]] : [cmd, args];
   const result = spawnSync(file, argv, {
     cwd: cwd ?? '/',
     env: { ...process.env, ...env },
@@ -110,12 +111,15 @@ function installServer() {
   }
   log('postgres: server binaries not found; installing Debian package postgresql (apt-get)');
   const env = { DEBIAN_FRONTEND: 'noninteractive' };
-  for (const args of [['update'], ['install', '-y', '--no-install-recommends', 'postgresql']]) {
+  for (const args of [
+    ['-q', 'update'],
+    ['-q', 'install', '-y', '--no-install-recommends', 'postgresql'],
+  ]) {
     const result = spawnSync('apt-get', args, {
       env: { ...process.env, ...env },
       stdio: ['ignore', 'inherit', 'inherit'],
     });
-    if (result.status !== 0) throw new PostgresError(`apt-get ${args[0]} failed`);
+    if (result.status !== 0) throw new PostgresError(`apt-get ${args[1]} failed`);
   }
   quietPackageClusters();
 }
@@ -162,7 +166,8 @@ function chooseBaseDir() {
   if (!isRoot) return { baseDir: inProject, outside: false };
   mkdirSync(dataDir, { recursive: true });
   chmodSync(dataDir, 0o755);
-  const canEnter = (dir) => run('test', ['-x', dir], { asPostgres: true, allowFailure: true }).status === 0;
+  const canEnter = (dir) =>
+    run('test', ['-x', dir], { asPostgres: true, allowFailure: true }).status === 0;
   if (canEnter(projectRoot) && canEnter(dataDir)) return { baseDir: inProject, outside: false };
   return { baseDir: `/var/tmp/hourstone-${shortHash(projectRoot)}`, outside: true };
 }
@@ -191,7 +196,10 @@ function writeSettings(pgData, settings, ids) {
   const mainConf = path.join(pgData, 'postgresql.conf');
   const includeLine = `include_if_exists '${CONF_FILE}'`;
   if (!readFileSync(mainConf, 'utf8').includes(includeLine)) {
-    appendFileSync(mainConf, `\n# Hourstone's settings (rewritten by scripts/lib/postgres.mjs)\n${includeLine}\n`);
+    appendFileSync(
+      mainConf,
+      `\n# Hourstone's settings (rewritten by scripts/lib/postgres.mjs)\n${includeLine}\n`,
+    );
   }
   const lines = Object.entries(settings).map(([key, value]) => `${key} = ${confValue(value)}`);
   const file = path.join(pgData, CONF_FILE);
@@ -204,7 +212,7 @@ function serverMajorVersion(binDir) {
   return text.match(/(\d+)(\.\d+)?/)?.[1];
 }
 
-function initCluster({ binDir, pgData, superuserFile, baseDir, ids }) {
+function initCluster({ binDir, pgData, superuserFile, baseDir }) {
   if (existsSync(path.join(pgData, 'PG_VERSION'))) {
     const clusterVersion = readFileSync(path.join(pgData, 'PG_VERSION'), 'utf8').trim();
     const serverVersion = serverMajorVersion(binDir);
@@ -286,7 +294,8 @@ export async function startPostgres({ name, port, database, externalUrl } = {}) 
   if (!binDir) {
     installServer();
     binDir = findServerBinaries();
-    if (!binDir) throw new PostgresError('PostgreSQL was installed but its binaries were not found');
+    if (!binDir)
+      throw new PostgresError('PostgreSQL was installed but its binaries were not found');
   }
   const ids = ensureOsUser();
   const { baseDir, outside } = chooseBaseDir();
@@ -303,7 +312,7 @@ export async function startPostgres({ name, port, database, externalUrl } = {}) 
   const superuserPassword = savedPassword(superuserFile, ids);
   const appPassword = savedPassword(path.join(baseDir, 'hourstone-password'), ids);
 
-  initCluster({ binDir, pgData, superuserFile, baseDir, ids });
+  initCluster({ binDir, pgData, superuserFile, baseDir });
 
   let actualPort = wantedPort;
   let startedHere = false;
@@ -345,9 +354,22 @@ export async function startPostgres({ name, port, database, externalUrl } = {}) 
   const psql = (sql) =>
     run(
       path.join(binDir, 'psql'),
-      ['-X', '-q', '-At', '-v', 'ON_ERROR_STOP=1', '-h', '127.0.0.1', '-p', String(actualPort)]
-        .concat(['-U', SUPERUSER, '-d', 'postgres', '-c', sql]),
-      { asPostgres: true, cwd: baseDir, env: { PGPASSWORD: superuserPassword, PGCONNECT_TIMEOUT: '10' } },
+      [
+        '-X',
+        '-q',
+        '-At',
+        '-v',
+        'ON_ERROR_STOP=1',
+        '-h',
+        '127.0.0.1',
+        '-p',
+        String(actualPort),
+      ].concat(['-U', SUPERUSER, '-d', 'postgres', '-c', sql]),
+      {
+        asPostgres: true,
+        cwd: baseDir,
+        env: { PGPASSWORD: superuserPassword, PGCONNECT_TIMEOUT: '10' },
+      },
     ).stdout.trim();
 
   const createDatabase = (db) =>
@@ -356,11 +378,15 @@ export async function startPostgres({ name, port, database, externalUrl } = {}) 
   const stop = async () => {
     if (!startedHere) return;
     startedHere = false;
-    const stopped = run(path.join(binDir, 'pg_ctl'), ['stop', '-D', pgData, '-m', 'fast', '-w', '-s'], {
-      asPostgres: true,
-      cwd: baseDir,
-      allowFailure: true,
-    });
+    const stopped = run(
+      path.join(binDir, 'pg_ctl'),
+      ['stop', '-D', pgData, '-m', 'fast', '-w', '-s'],
+      {
+        asPostgres: true,
+        cwd: baseDir,
+        allowFailure: true,
+      },
+    );
     if (stopped.status === 0) log(`postgres: ${name} cluster stopped`);
     else warn(`postgres: stopping the ${name} cluster failed: ${stopped.stderr}`);
   };

@@ -35,7 +35,12 @@ function prefixLines(stream, out, name) {
  * everything it started (tsx and the node process under it, vite's workers).
  * onExit(code, signal) is called if it ends before stop() was asked for.
  */
-export function startService(name, cmd, args, { env = process.env, cwd = projectRoot, onExit } = {}) {
+export function startService(
+  name,
+  cmd,
+  args,
+  { env = process.env, cwd = projectRoot, onExit } = {},
+) {
   const child = spawn(cmd, args, { cwd, env, detached: true, stdio: ['ignore', 'pipe', 'pipe'] });
   prefixLines(child.stdout, process.stdout, name);
   prefixLines(child.stderr, process.stderr, name);
@@ -76,7 +81,10 @@ export function startService(name, cmd, args, { env = process.env, cwd = project
       if (child.pid === undefined) return;
       if (!exited) {
         signalGroup('SIGTERM');
-        const timedOut = await Promise.race([exitPromise.then(() => false), sleep(graceMs).then(() => true)]);
+        const timedOut = await Promise.race([
+          exitPromise.then(() => false),
+          sleep(graceMs).then(() => true),
+        ]);
         if (timedOut) {
           warn(`[${name}] did not stop within ${graceMs} ms; killing it`);
           signalGroup('SIGKILL');

@@ -25,8 +25,8 @@ interface RouteSpec<P extends ZodType, Q extends ZodType, B extends ZodType> {
   status?: 200 | 201 | 202 | 204;
   /** extra middlewares run after access checks and before validation (rate limits, uploads) */
   before?: RequestHandler[];
-  /** request body content type for the OpenAPI document (default application/json) */
-  bodyContentType?: string;
+  /** a body documented but not validated here (multipart uploads, checked by the handler) */
+  multipartBody?: ZodType;
   handler: (ctx: {
     req: Request;
     res: Response;
@@ -91,11 +91,8 @@ export function route<
     request: {
       ...(spec.params && { params: spec.params as never }),
       ...(spec.query && { query: spec.query as never }),
-      ...(spec.body && {
-        body: {
-          content: { [spec.bodyContentType ?? 'application/json']: { schema: spec.body } },
-        },
-      }),
+      ...(spec.body && { body: { content: { 'application/json': { schema: spec.body } } } }),
+      ...(spec.multipartBody && { body: { content: { 'multipart/form-data': { schema: spec.multipartBody } } } }),
     },
     responses,
   });

@@ -9,13 +9,18 @@ export function recencyWeight(ageDays: number, halfLifeDays: number): number {
 
 /** Slope in value units per day of the weighted least-squares line through points (day, value). */
 export function weightedSlope(points: ReadingPoint[], weights: number[]): number {
+  if (points.length === 0) return 0;
+  // Work relative to the first point: an unmoved meter then sums exact zeros (slope exactly 0),
+  // and large day numbers and lifetime values lose no precision.
+  const x0 = points[0].day;
+  const y0 = points[0].value;
   let sw = 0;
   let sx = 0;
   let sy = 0;
   points.forEach((p, i) => {
     sw += weights[i];
-    sx += weights[i] * p.day;
-    sy += weights[i] * p.value;
+    sx += weights[i] * (p.day - x0);
+    sy += weights[i] * (p.value - y0);
   });
   if (!(sw > 0)) return 0;
   const mx = sx / sw;
@@ -23,8 +28,9 @@ export function weightedSlope(points: ReadingPoint[], weights: number[]): number
   let sxy = 0;
   let sxx = 0;
   points.forEach((p, i) => {
-    sxy += weights[i] * (p.day - mx) * (p.value - my);
-    sxx += weights[i] * (p.day - mx) ** 2;
+    const dx = p.day - x0 - mx;
+    sxy += weights[i] * dx * (p.value - y0 - my);
+    sxx += weights[i] * dx * dx;
   });
   return sxx > 0 ? sxy / sxx : 0;
 }

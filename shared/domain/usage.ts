@@ -12,6 +12,7 @@
 //   last 28 days against the same 28 days a year earlier (plus one average day on both sides so idle
 //   against idle gives ×1; clamped to ×0.5…×2). A seasonal machine idle in spring is then forecast
 //   to reach its due hours in the coming harvest, not never and not at last week's pace.
+//   Its range: last year's use × min(scale, 1) × 0.8 to × max(scale, 1) × 1.2.
 // Limits: a year that differs from last year beyond the ×0.5…×2 scale, or a machine newly moved to
 // other work, shows as a miss until the trend window or the season scale catches up.
 import type { ReadingPoint, UsageEstimate } from './types';

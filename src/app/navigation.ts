@@ -26,6 +26,13 @@ const NAV_ENTRIES: readonly NavEntry[] = [
 ];
 
 /** role → the items that role sees, in order */
-export const navigationByRole = Object.fromEntries(
-  ROLES.map((role) => [role, NAV_ENTRIES.filter((entry) => entry.roles.includes(role))]),
-) as Record<Role, readonly NavItem[]>;
+export const navigationByRole: Record<Role, readonly NavItem[]> = {
+  manager: itemsFor('manager'),
+  technician: itemsFor('technician'),
+  operator: itemsFor('operator'),
+  advisor: itemsFor('advisor'),
+};
+
+function itemsFor(role: Role): readonly NavItem[] {
+  return NAV_ENTRIES.filter((entry) => entry.roles.includes(role));
+}

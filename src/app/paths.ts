@@ -32,7 +32,8 @@ export const paths = {
  * protocol-relative URL there would turn the sign-in page into an open redirect.
  */
 export function safeNextPath(next: string | null | undefined): string | null {
-  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\')) return null;
+  if (!next || !next.startsWith('/') || next.startsWith('//') || next.startsWith('/\\'))
+    return null;
   if (next.startsWith(paths.signIn.path)) return null;
   return next;
 }

@@ -46,6 +46,9 @@ interface RequestOptions {
 // Shown when the answer is not our JSON at all (API down behind the dev proxy, a gateway page).
 const FALLBACK_MESSAGES: Record<number, string> = {
   0: "Couldn't reach Hourstone. Check your connection and try again.",
+  502: "Couldn't reach Hourstone's server. Try again in a moment.",
+  503: "Hourstone's server is not answering right now. Try again in a moment.",
+  504: "Hourstone's server took too long to answer. Try again in a moment.",
   401: 'Please sign in again.',
   403: "You don't have access to that.",
   404: "That doesn't exist, or you don't have access to it.",
@@ -84,13 +87,17 @@ async function toApiError(response: Response): Promise<ApiError> {
       code: typeof error.code === 'string' ? error.code : `http_${response.status}`,
       message: typeof error.message === 'string' ? error.message : fallbackMessage(response.status),
       fields:
-        error.fields && typeof error.fields === 'object' ? (error.fields as FieldErrors) : undefined,
+        error.fields && typeof error.fields === 'object'
+          ? (error.fields as FieldErrors)
+          : undefined,
       retryAfter,
     });
   }
+  // No JSON error from our API: a gateway (or the dev proxy) answered because the API did not.
+  const unreachable = [502, 503, 504].includes(response.status);
   return new ApiError({
     status: response.status,
-    code: `http_${response.status}`,
+    code: unreachable ? 'unreachable' : `http_${response.status}`,
     message: fallbackMessage(response.status),
     retryAfter,
   });
@@ -111,7 +118,7 @@ async function request<T>(method: Method, path: string, options: RequestOptions 
     });
   } catch (cause) {
     if (cause instanceof DOMException && cause.name === 'AbortError') throw cause;
-    throw new ApiError({ status: 0, code: 'network_error', message: fallbackMessage(0) });
+    throw new ApiError({ status: 0, code: 'unreachable', message: fallbackMessage(0) });
   }
 
   if (!response.ok) throw await toApiError(response);
@@ -121,7 +128,8 @@ async function request<T>(method: Method, path: string, options: RequestOptions 
 }
 
 export const apiClient = {
-  get: <T>(path: string, options?: Omit<RequestOptions, 'body'>) => request<T>('GET', path, options),
+  get: <T>(path: string, options?: Omit<RequestOptions, 'body'>) =>
+    request<T>('GET', path, options),
   post: <T>(path: string, body?: unknown, options?: RequestOptions) =>
     request<T>('POST', path, { ...options, body }),
   patch: <T>(path: string, body?: unknown, options?: RequestOptions) =>

@@ -76,7 +76,11 @@ describe('calendar — date arithmetic against date-fns addDays (reference libra
 
   it('calendar — every start date of 2024–2026 plus 1, 30, 90, 180, 365 days matches date-fns', () => {
     let mismatches = 0;
-    for (let day = dayNumberFromIso('2024-01-01'); day <= dayNumberFromIso('2026-12-31'); day += 1) {
+    for (
+      let day = dayNumberFromIso('2024-01-01');
+      day <= dayNumberFromIso('2026-12-31');
+      day += 1
+    ) {
       const iso = isoFromDayNumber(day);
       for (const n of [1, 30, 90, 180, 365, -30]) {
         if (addDaysIso(iso, n) !== referenceAddDays(iso, n)) mismatches += 1;

@@ -19,7 +19,7 @@ const busy = readingsFrom('2024-03-01', [
   [30, 1151],
   [40, 1199],
 ]);
-const busyAsOf = '2024-03-01'; // + 40 days below
+const serviceDay = '2024-03-01';
 const light = readingsFrom('2024-03-01', [
   [0, 500],
   [30, 520],
@@ -29,7 +29,7 @@ const light = readingsFrom('2024-03-01', [
 const lightSchedule = { ...schedule, lastDoneMeter: 500 };
 
 describe('CHECKS.md §3, derived, ordinary least squares — 250 h / 180 days', () => {
-  const asOfIso = referenceAddDays(busyAsOf, 40); // 2024-04-10, the day of the last reading
+  const asOfIso = referenceAddDays(serviceDay, 40); // 2024-04-10, the day of the last reading
   const asOfDay = dayNumberFromIso(asOfIso);
 
   it('usage — OLS (half-life Infinity) — slope 4.97 h/day, intercept 1000.6', () => {

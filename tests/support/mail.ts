@@ -35,7 +35,9 @@ export async function setMailAccepting(accept: boolean): Promise<void> {
 export async function mailTo(address: string, timeoutMs = 5000): Promise<CaughtMail> {
   const until = Date.now() + timeoutMs;
   while (Date.now() < until) {
-    const found = (await caughtMail()).find((m) => m.to.some((t) => t.toLowerCase().includes(address.toLowerCase())));
+    const found = (await caughtMail()).find((m) =>
+      m.to.some((t) => t.toLowerCase().includes(address.toLowerCase())),
+    );
     if (found) return found;
     await new Promise((r) => setTimeout(r, 100));
   }

@@ -27,7 +27,8 @@ export class ErrorBoundary extends Component<ErrorBoundaryProps, ErrorBoundarySt
   reset = () => this.setState({ error: null, failed: false });
 
   render() {
-    if (this.state.failed) return this.props.fallback({ error: this.state.error, reset: this.reset });
+    if (this.state.failed)
+      return this.props.fallback({ error: this.state.error, reset: this.reset });
     return this.props.children;
   }
 }

@@ -23,8 +23,8 @@ export function ForbiddenState({
       </span>
       <h1 className="text-2xl font-black text-field-950">Not available for your role</h1>
       <p className="max-w-md text-field-700">
-        {pageName} is for {allowedRoles}. You're signed in here as {roleLabel(role).toLowerCase()}; ask
-        a manager of this organization if you need something changed.
+        {pageName} is for {allowedRoles}. You're signed in here as {roleLabel(role).toLowerCase()};
+        ask a manager of this organization if you need something changed.
       </p>
       {action}
     </div>

@@ -7,14 +7,23 @@ export function FullPageMessage({
   title,
   children,
   actions,
+  inShell = false,
 }: {
   icon: IconName;
   title: string;
   children: ReactNode;
   actions?: ReactNode;
+  /** inside the app shell, which already has the page's <main> */
+  inShell?: boolean;
 }) {
+  const Frame = inShell ? 'div' : 'main';
   return (
-    <main id="main" tabIndex={-1} className="flex min-h-[60dvh] items-center justify-center px-4 py-12">
+    <Frame
+      id={inShell ? undefined : 'main'}
+      tabIndex={inShell ? undefined : -1}
+      className="flex min-h-[60dvh] items-center justify-center px-4 py-12 focus:outline-none"
+    >
+      <title>{`${title} · Hourstone`}</title>
       <div className="flex max-w-md flex-col items-center gap-4 text-center">
         <span className="flex size-16 items-center justify-center rounded-full bg-oat-100 text-loam-700">
           <Icon name={icon} className="size-8" />
@@ -23,6 +32,6 @@ export function FullPageMessage({
         <div className="text-field-700">{children}</div>
         {actions ? <div className="flex flex-wrap justify-center gap-2">{actions}</div> : null}
       </div>
-    </main>
+    </Frame>
   );
 }

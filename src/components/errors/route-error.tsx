@@ -4,7 +4,7 @@ import { buttonClasses } from '../ui/button';
 import { FullPageMessage } from './full-page-message';
 
 /** The router's error element: not-found pages, and anything a loader or page threw. */
-export function RouteError({ homeHref }: { homeHref: string }) {
+export function RouteError({ homeHref, inShell = false }: { homeHref: string; inShell?: boolean }) {
   const error = useRouteError();
   const status = isRouteErrorResponse(error)
     ? error.status
@@ -12,16 +12,21 @@ export function RouteError({ homeHref }: { homeHref: string }) {
       ? error.status
       : null;
 
-  if (status === 404) return <NotFound homeHref={homeHref} />;
+  if (status === 404) return <NotFound homeHref={homeHref} inShell={inShell} />;
 
-  const offline = isApiError(error) && error.status === 0;
+  const offline = isApiError(error) && error.code === 'unreachable';
   return (
     <FullPageMessage
+      inShell={inShell}
       icon="error"
       title={offline ? "Can't reach Hourstone" : 'Something went wrong'}
       actions={
         <>
-          <button type="button" className={buttonClasses('primary')} onClick={() => window.location.reload()}>
+          <button
+            type="button"
+            className={buttonClasses('primary')}
+            onClick={() => window.location.reload()}
+          >
             Reload the page
           </button>
           <Link to={homeHref} className={buttonClasses('secondary')}>
@@ -39,9 +44,10 @@ export function RouteError({ homeHref }: { homeHref: string }) {
   );
 }
 
-export function NotFound({ homeHref }: { homeHref: string }) {
+export function NotFound({ homeHref, inShell = false }: { homeHref: string; inShell?: boolean }) {
   return (
     <FullPageMessage
+      inShell={inShell}
       icon="field"
       title="Nothing here"
       actions={

@@ -36,11 +36,16 @@ export function AppShell({ homeHref, navItems, headerEnd, children }: AppShellPr
           <Link to={homeHref} className="flex min-h-touch items-center rounded-lg pr-1">
             <Brand compact />
           </Link>
-          <div className="ml-auto flex min-w-0 flex-1 items-center justify-end gap-3">{headerEnd}</div>
+          <div className="ml-auto flex min-w-0 flex-1 items-center justify-end gap-3">
+            {headerEnd}
+          </div>
         </div>
       </header>
       <div className="sm:grid sm:grid-cols-[14rem_minmax(0,1fr)]">
-        <MainNav items={navItems} />
+        {/* the column carries the divider so it runs the page's full height */}
+        <div className="sm:border-r sm:border-field-200">
+          <MainNav items={navItems} />
+        </div>
         <main
           id="main"
           ref={mainRef}

@@ -21,7 +21,11 @@ export function AuthLayout({
       <header className="px-4 pt-6 sm:px-8">
         <Brand />
       </header>
-      <main id="main" tabIndex={-1} className="flex flex-1 items-start justify-center px-4 py-8 focus:outline-none sm:items-center">
+      <main
+        id="main"
+        tabIndex={-1}
+        className="flex flex-1 items-start justify-center px-4 py-8 focus:outline-none sm:items-center"
+      >
         <div className="w-full max-w-md">
           <div className="rounded-2xl border border-oat-300 bg-white p-5 shadow-card sm:p-8">
             <h1 className="text-2xl font-black text-field-950">{title}</h1>

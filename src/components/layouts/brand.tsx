@@ -19,7 +19,9 @@ export function Brand({ compact = false }: { compact?: boolean }) {
   return (
     <span className="inline-flex items-center gap-2 text-field-900">
       <BrandMark className="size-8" />
-      <span className={cx('text-lg font-black tracking-tight', compact && 'sr-only sm:not-sr-only')}>
+      <span
+        className={cx('text-lg font-black tracking-tight', compact && 'sr-only sm:not-sr-only')}
+      >
         Hourstone
       </span>
     </span>

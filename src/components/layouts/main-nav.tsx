@@ -20,7 +20,7 @@ export function MainNav({ items }: { items: MainNavItem[] }) {
       aria-label="Main"
       className={cx(
         'fixed inset-x-0 bottom-0 z-30 border-t border-field-200 bg-white/95 pb-[env(safe-area-inset-bottom)] backdrop-blur',
-        'sm:sticky sm:top-16 sm:bottom-auto sm:z-auto sm:h-[calc(100dvh-4rem)] sm:border-t-0 sm:border-r sm:bg-transparent sm:pb-0 sm:backdrop-blur-none',
+        'sm:sticky sm:top-16 sm:bottom-auto sm:z-auto sm:h-[calc(100dvh-4rem)] sm:border-t-0 sm:bg-transparent sm:pb-0 sm:backdrop-blur-none',
       )}
     >
       <ul className="flex overflow-x-auto sm:flex-col sm:gap-1 sm:overflow-visible sm:p-3">

@@ -3,7 +3,12 @@ import { cx } from './cx';
 
 export function Card({ children, className }: { children: ReactNode; className?: string }) {
   return (
-    <div className={cx('rounded-xl border border-field-200 bg-white p-4 shadow-card sm:p-6', className)}>
+    <div
+      className={cx(
+        'rounded-xl border border-field-200 bg-white p-4 shadow-card sm:p-6',
+        className,
+      )}
+    >
       {children}
     </div>
   );

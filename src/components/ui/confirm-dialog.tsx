@@ -35,11 +35,11 @@ export function ConfirmDialog({
 
   useEffect(() => {
     const dialog = ref.current;
-    if (!dialog) return;
-    if (open && !dialog.open) dialog.showModal();
-    if (!open && dialog.open) dialog.close();
+    if (open && dialog && !dialog.open) dialog.showModal();
   }, [open]);
 
+  // Not rendered while closed, so its text is not in the page for finders and screen readers.
+  if (!open) return null;
   return (
     <dialog
       ref={ref}

@@ -5,7 +5,12 @@ import { cx } from './cx';
 // The container says "Loading" once to assistive technology; the blocks are decoration.
 
 export function Skeleton({ className }: { className?: string }) {
-  return <span aria-hidden="true" className={cx('block animate-pulse rounded bg-field-100', className)} />;
+  return (
+    <span
+      aria-hidden="true"
+      className={cx('block animate-pulse rounded bg-field-100', className)}
+    />
+  );
 }
 
 export function LoadingRegion({ label, children }: { label: string; children: ReactNode }) {

@@ -5,9 +5,7 @@ import { storeSession, type Me } from '../../../lib/auth';
 
 /** Sets the new password; the answer signs the person in. */
 export const confirmPasswordReset = (input: PasswordResetConfirmInput) =>
-  apiClient
-    .post<DataEnvelope<Me>>('/auth/password-reset/confirm', input)
-    .then((body) => body.data);
+  apiClient.post<DataEnvelope<Me>>('/auth/password-reset/confirm', input).then((body) => body.data);
 
 export function useConfirmPasswordReset() {
   const queryClient = useQueryClient();

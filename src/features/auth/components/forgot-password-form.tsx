@@ -53,7 +53,12 @@ export function ForgotPasswordForm({ afterSent }: ForgotPasswordFormProps) {
   }
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5" aria-label="Reset password">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="flex flex-col gap-5"
+     
+    >
       {formError ? <Alert>{formError}</Alert> : null}
       <TextField
         label="Email"

@@ -43,7 +43,12 @@ export function ResetPasswordForm({ token, onReset, forgotPasswordHref }: ResetP
   const tokenMessage = errors.token?.message;
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5" aria-label="Set a new password">
+    <form
+      onSubmit={onSubmit}
+      noValidate
+      className="flex flex-col gap-5"
+     
+    >
       {tokenMessage ? (
         <Alert title="This link no longer works">
           <p>{tokenMessage}</p>

@@ -38,7 +38,7 @@ export function SignInForm({ onSignedIn, forgotPasswordHref }: SignInFormProps) 
   });
 
   return (
-    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5" aria-label="Sign in">
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
       {formError ? <Alert>{formError}</Alert> : null}
       <TextField
         label="Email"

@@ -1,0 +1,24 @@
+import type { Machine } from '../models';
+import { hasRole, type OrgAccess } from './access';
+
+/** Operators see machines assigned to them, and machines with no assignment at all. */
+export const canViewMachine = (access: OrgAccess, _machine: Machine, assignedUserIds: string[]) =>
+  !hasRole(access, 'operator') || assignedUserIds.length === 0 || assignedUserIds.includes(access.userId);
+export const canCreateMachine = (access: OrgAccess) => hasRole(access, 'manager');
+export const canUpdateMachine = (access: OrgAccess) => hasRole(access, 'manager');
+export const canEditSchedule = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
+export const canSetLastDone = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
+export const canLogReading = (access: OrgAccess, machine: Machine) =>
+  hasRole(access, 'manager', 'technician', 'operator') && machine.status !== 'sold';
+export const canCorrectReading = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
+export const canReplaceMeter = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
+export const canImportReadings = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
+
+export const machineAbilities = (access: OrgAccess, machine: Machine) => ({
+  update: canUpdateMachine(access),
+  editSchedule: canEditSchedule(access),
+  setLastDone: canSetLastDone(access),
+  logReading: canLogReading(access, machine),
+  correctReading: canCorrectReading(access),
+  replaceMeter: canReplaceMeter(access),
+});

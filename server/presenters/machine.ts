@@ -1,0 +1,174 @@
+import { z } from 'zod';
+import type { Machine, MachineForecast, MeterReading, MeterReplacement, ServiceTask } from '../models';
+import type { DuePoint, UsageEstimate } from '../../shared/domain';
+import {
+  DUE_STATUSES,
+  MACHINE_CATEGORIES,
+  MACHINE_STATUSES,
+  METER_UNITS,
+  READING_SOURCES,
+} from '../../shared/constants';
+
+export const duePointSchema = z
+  .object({
+    status: z.enum(DUE_STATUSES),
+    governs: z.enum(['meter', 'calendar']).nullable(),
+    dueMeter: z.number().nullable(),
+    dueDate: z.string().nullable(),
+    projectedDate: z.string().nullable(),
+    projectedLow: z.string().nullable(),
+    projectedHigh: z.string().nullable(),
+    effectiveDate: z.string().nullable(),
+    remainingMeter: z.number().nullable(),
+    remainingDays: z.number().nullable(),
+    basis: z.enum(['recorded', 'first_service', 'assumed']),
+  })
+  .openapi('DuePoint');
+
+export const usageSchema = z
+  .object({
+    method: z.enum(['trend', 'season', 'none']),
+    rate: z.number(),
+    low: z.number(),
+    high: z.number(),
+    readingCount: z.number(),
+    explanation: z.string(),
+  })
+  .openapi('Usage');
+
+export const machineSchema = z
+  .object({
+    id: z.string(),
+    fleetNumber: z.string(),
+    name: z.string(),
+    category: z.enum(MACHINE_CATEGORIES),
+    make: z.string(),
+    model: z.string(),
+    serialNumber: z.string(),
+    year: z.number().nullable(),
+    purchasePrice: z.number().nullable(),
+    listPrice: z.number().nullable(),
+    meterUnit: z.enum(METER_UNITS),
+    status: z.enum(MACHINE_STATUSES),
+    seasonMonths: z.array(z.number()),
+    notes: z.string(),
+    operatorIds: z.array(z.string()),
+    lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
+    dueStatus: z.enum(DUE_STATUSES).nullable(),
+    nextDueDate: z.string().nullable(),
+  })
+  .openapi('Machine');
+
+export function presentMachine(
+  m: Machine,
+  extra: { operatorIds: string[]; forecast?: MachineForecast | null; dueStatus?: string | null; nextDueDate?: string | null },
+) {
+  return {
+    id: m.id,
+    fleetNumber: m.fleetNumber,
+    name: m.name,
+    category: m.category,
+    make: m.make,
+    model: m.model,
+    serialNumber: m.serialNumber,
+    year: m.year,
+    purchasePrice: m.purchasePrice,
+    listPrice: m.listPrice,
+    meterUnit: m.meterUnit,
+    status: m.status,
+    seasonMonths: m.seasonMonths,
+    notes: m.notes,
+    operatorIds: extra.operatorIds,
+    lastReading:
+      extra.forecast?.lastValue != null && extra.forecast.lastTakenAt
+        ? { value: extra.forecast.lastValue, takenAt: extra.forecast.lastTakenAt.toISOString() }
+        : null,
+    dueStatus: (extra.dueStatus as DuePoint['status']) ?? null,
+    nextDueDate: extra.nextDueDate ?? null,
+  };
+}
+
+export const presentUsage = (u: UsageEstimate | null) =>
+  u
+    ? { method: u.method, rate: u.rate, low: u.low, high: u.high, readingCount: u.readingCount, explanation: u.explanation }
+    : null;
+
+export const taskSchema = z
+  .object({
+    id: z.string(),
+    machineId: z.string(),
+    name: z.string(),
+    intervalMeter: z.number().nullable(),
+    intervalDays: z.number().nullable(),
+    firstServiceMeter: z.number().nullable(),
+    warnMeter: z.number().nullable(),
+    warnDays: z.number().nullable(),
+    parts: z.array(z.object({ partNumber: z.string(), description: z.string(), quantity: z.number() })),
+    fluids: z.array(z.object({ kind: z.string(), volume: z.number(), unit: z.string() })),
+    labourHours: z.number().nullable(),
+    instructions: z.string(),
+    safetyNotes: z.string(),
+    hazards: z.array(z.string()),
+    lastDoneMeter: z.number().nullable(),
+    lastDoneOn: z.string().nullable(),
+    due: duePointSchema.nullable(),
+  })
+  .openapi('ServiceTask');
+
+export const presentTask = (t: ServiceTask, due: DuePoint | null) => ({
+  id: t.id,
+  machineId: t.machineId,
+  name: t.name,
+  intervalMeter: t.intervalMeter,
+  intervalDays: t.intervalDays,
+  firstServiceMeter: t.firstServiceMeter,
+  warnMeter: t.warnMeter,
+  warnDays: t.warnDays,
+  parts: t.parts,
+  fluids: t.fluids,
+  labourHours: t.labourHours,
+  instructions: t.instructions,
+  safetyNotes: t.safetyNotes,
+  hazards: t.hazards,
+  lastDoneMeter: t.lastDoneMeter,
+  lastDoneOn: t.lastDoneOn,
+  due,
+});
+
+export const readingSchema = z
+  .object({
+    id: z.string(),
+    value: z.number(),
+    lifetimeValue: z.number(),
+    takenAt: z.string(),
+    source: z.enum(READING_SOURCES),
+    enteredBy: z.string().nullable(),
+  })
+  .openapi('MeterReading');
+
+export const presentReading = (r: MeterReading) => ({
+  id: r.id,
+  value: r.value,
+  lifetimeValue: r.lifetimeValue,
+  takenAt: r.takenAt.toISOString(),
+  source: r.source,
+  enteredBy: r.enteredBy,
+});
+
+export const replacementSchema = z
+  .object({
+    id: z.string(),
+    replacedAt: z.string(),
+    oldFinalValue: z.number(),
+    newStartValue: z.number(),
+    note: z.string(),
+  })
+  .openapi('MeterReplacement');
+
+export const presentReplacement = (r: MeterReplacement) => ({
+  id: r.id,
+  replacedAt: r.replacedAt.toISOString(),
+  oldFinalValue: r.oldFinalValue,
+  newStartValue: r.newStartValue,
+  note: r.note,
+});

@@ -1,0 +1,78 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { route } from '../route';
+import { dueQuerySchema } from '../../../shared/schemas/readings';
+import { duePointSchema } from '../../presenters/machine';
+import { dueList } from '../../services/due-list';
+import { loadMachine } from '../../services/machines';
+
+const orgParams = z.object({ orgId: z.uuid() });
+
+const dueRowSchema = z
+  .object({
+    taskId: z.string(),
+    taskName: z.string(),
+    hazards: z.array(z.string()),
+    labourHours: z.number().nullable(),
+    machine: z.object({
+      id: z.string(),
+      fleetNumber: z.string(),
+      name: z.string(),
+      category: z.string(),
+      status: z.string(),
+      meterUnit: z.string(),
+    }),
+    due: duePointSchema,
+    lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
+    usage: z.object({ method: z.string(), rate: z.number(), low: z.number(), high: z.number() }).nullable(),
+  })
+  .openapi('DueRow');
+
+const dueResponse = z.object({
+  data: z.array(dueRowSchema),
+  meta: z.object({
+    asOf: z.string(),
+    counts: z.object({ overdue: z.number(), due_soon: z.number(), ok: z.number(), no_forecast: z.number() }),
+    stale: z.array(
+      z.object({
+        machine: z.object({ id: z.string(), fleetNumber: z.string(), name: z.string() }),
+        lastReadingAt: z.string().nullable(),
+        daysSince: z.number().nullable(),
+      }),
+    ),
+  }),
+});
+
+export function dueRouter(): Router {
+  const router = Router();
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/due',
+    summary: 'The due list across the farm: overdue first, then by projected date; counts and stale meters',
+    tags: ['due'],
+    params: orgParams,
+    query: dueQuerySchema,
+    response: dueResponse,
+    handler: async ({ req, query }) => {
+      const { asOf, rows, counts, stale } = await dueList(req.access!, query);
+      return { data: rows, meta: { asOf, counts, stale } };
+    },
+  });
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/machines/:machineId/due',
+    summary: "One machine's due points",
+    tags: ['due'],
+    params: orgParams.extend({ machineId: z.uuid() }),
+    response: dueResponse,
+    handler: async ({ req, params }) => {
+      await loadMachine(req.access!, params.machineId);
+      const { asOf, rows, counts, stale } = await dueList(req.access!, { machineId: params.machineId });
+      return { data: rows, meta: { asOf, counts, stale: stale.filter((s) => s.machine.id === params.machineId) } };
+    },
+  });
+
+  return router;
+}

@@ -1,0 +1,120 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { route } from '../route';
+import { machineCreateSchema, machineListQuerySchema, machineUpdateSchema } from '../../../shared/schemas/machines';
+import { authorize } from '../../policies/access';
+import { canCreateMachine, canUpdateMachine, machineAbilities } from '../../policies/machine';
+import { machineSchema, presentMachine, presentUsage, usageSchema } from '../../presenters/machine';
+import { createMachine, listMachines, loadMachine, updateMachine } from '../../services/machines';
+import { MachineForecast, TaskDuePoint } from '../../models';
+import { ensureDuePointsCurrent } from '../../services/forecast';
+
+const orgParams = z.object({ orgId: z.uuid() });
+export const machineParams = orgParams.extend({ machineId: z.uuid() });
+
+const abilitiesSchema = z.object({
+  update: z.boolean(),
+  editSchedule: z.boolean(),
+  setLastDone: z.boolean(),
+  logReading: z.boolean(),
+  correctReading: z.boolean(),
+  replaceMeter: z.boolean(),
+});
+
+export function machinesRouter(): Router {
+  const router = Router();
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/machines',
+    summary: 'The fleet, one page at a time, filtered and sorted on the server',
+    tags: ['machines'],
+    params: orgParams,
+    query: machineListQuerySchema,
+    response: z.object({
+      data: z.array(machineSchema),
+      meta: z.object({ total: z.number(), page: z.number(), pageSize: z.number() }),
+      abilities: z.object({ create: z.boolean() }),
+    }),
+    handler: async ({ req, query }) => {
+      const access = req.access!;
+      await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
+      const { total, items } = await listMachines(access, query);
+      return {
+        data: items.map((i) => presentMachine(i.machine, i)),
+        meta: { total, page: query.page, pageSize: query.pageSize },
+        abilities: { create: canCreateMachine(access) },
+      };
+    },
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/organizations/:orgId/machines',
+    summary: 'Add a machine to the fleet',
+    tags: ['machines'],
+    params: orgParams,
+    body: machineCreateSchema,
+    status: 201,
+    response: z.object({ data: machineSchema, abilities: abilitiesSchema }),
+    handler: async ({ req, body }) => {
+      const access = req.access!;
+      authorize(canCreateMachine(access), 'Only a manager may add machines');
+      const machine = await createMachine(access, body);
+      return {
+        data: presentMachine(machine, { operatorIds: body.operatorIds }),
+        abilities: machineAbilities(access, machine),
+      };
+    },
+  });
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/machines/:machineId',
+    summary: 'One machine with its usage estimate and abilities',
+    tags: ['machines'],
+    params: machineParams,
+    response: z.object({
+      data: machineSchema.extend({ usage: usageSchema.nullable() }),
+      abilities: abilitiesSchema,
+    }),
+    handler: async ({ req, params }) => {
+      const access = req.access!;
+      await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
+      const { machine, operatorIds } = await loadMachine(access, params.machineId);
+      const forecast = await MachineForecast.findByPk(machine.id);
+      const due = await TaskDuePoint.findAll({ where: { organizationId: access.organization.id, machineId: machine.id } });
+      const rank = { overdue: 0, due_soon: 1, no_forecast: 2, ok: 3 } as const;
+      const worst = [...due].sort((a, b) => rank[a.status] - rank[b.status])[0];
+      const next = due.map((d) => d.sortDate).filter((d): d is string => !!d).sort()[0] ?? null;
+      return {
+        data: {
+          ...presentMachine(machine, { operatorIds, forecast, dueStatus: worst?.status ?? null, nextDueDate: next }),
+          usage: presentUsage(forecast?.usage ?? null),
+        },
+        abilities: machineAbilities(access, machine),
+      };
+    },
+  });
+
+  route(router, {
+    method: 'patch',
+    path: '/organizations/:orgId/machines/:machineId',
+    summary: 'Edit a machine (retire it with status "sold", tag it out with "tagged_out")',
+    tags: ['machines'],
+    params: machineParams,
+    body: machineUpdateSchema,
+    response: z.object({ data: machineSchema, abilities: abilitiesSchema }),
+    handler: async ({ req, params, body }) => {
+      const access = req.access!;
+      const { machine } = await loadMachine(access, params.machineId);
+      authorize(canUpdateMachine(access), 'Only a manager may edit machines');
+      await updateMachine(access, machine, body);
+      const { operatorIds } = await loadMachine(access, params.machineId);
+      const forecast = await MachineForecast.findByPk(machine.id);
+      return { data: presentMachine(machine, { operatorIds, forecast }), abilities: machineAbilities(access, machine) };
+    },
+  });
+
+  return router;
+}

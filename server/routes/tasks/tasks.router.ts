@@ -1,0 +1,216 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { route } from '../route';
+import { lastDoneSchema, taskInputSchema, taskUpdateSchema } from '../../../shared/schemas/schedule';
+import { MACHINE_CATEGORIES } from '../../../shared/constants';
+import { authorize, hasRole } from '../../policies/access';
+import { canEditSchedule, canSetLastDone } from '../../policies/machine';
+import { presentTask, taskSchema } from '../../presenters/machine';
+import { loadMachine } from '../../services/machines';
+import {
+  addTasks,
+  applyTemplate,
+  deleteTask,
+  loadTask,
+  loadTemplate,
+  setLastDone,
+  updateTask,
+} from '../../services/schedules';
+import { ScheduleTemplate, ServiceTask, TaskDuePoint } from '../../models';
+import { ensureDuePointsCurrent } from '../../services/forecast';
+import { sequelize } from '../../db';
+import { recordAudit } from '../../services/audit';
+import { invalid } from '../../errors';
+
+const orgParams = z.object({ orgId: z.uuid() });
+const machineParams = orgParams.extend({ machineId: z.uuid() });
+const taskParams = orgParams.extend({ taskId: z.uuid() });
+
+const templateSchema = z
+  .object({
+    id: z.string(),
+    category: z.enum(MACHINE_CATEGORIES),
+    name: z.string(),
+    description: z.string(),
+    tasks: z.array(z.object({ name: z.string() }).passthrough()),
+  })
+  .openapi('ScheduleTemplate');
+
+const templateInputSchema = z.object({
+  category: z.enum(MACHINE_CATEGORIES, { error: `Category must be one of: ${MACHINE_CATEGORIES.join(', ')}` }),
+  name: z.string().trim().min(1, { error: 'Enter a template name' }).max(120),
+  description: z.string().max(2000).default(''),
+  tasks: z.array(taskInputSchema).min(1, { error: 'A template needs at least one task' }).max(60),
+});
+
+async function tasksWithDue(organizationId: string, machineId: string) {
+  const [tasks, due] = await Promise.all([
+    ServiceTask.findAll({ where: { organizationId, machineId }, order: [['position', 'ASC'], ['name', 'ASC']] }),
+    TaskDuePoint.findAll({ where: { organizationId, machineId } }),
+  ]);
+  const dueOf = new Map(due.map((d) => [d.taskId, d.due]));
+  return tasks.map((t) => presentTask(t, dueOf.get(t.id) ?? null));
+}
+
+export function tasksRouter(): Router {
+  const router = Router();
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/machines/:machineId/tasks',
+    summary: "A machine's service schedule with each task's due point",
+    tags: ['schedule'],
+    params: machineParams,
+    response: z.object({ data: z.array(taskSchema), abilities: z.object({ edit: z.boolean(), setLastDone: z.boolean() }) }),
+    handler: async ({ req, params }) => {
+      const access = req.access!;
+      await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
+      const { machine } = await loadMachine(access, params.machineId);
+      return {
+        data: await tasksWithDue(access.organization.id, machine.id),
+        abilities: { edit: canEditSchedule(access), setLastDone: canSetLastDone(access) },
+      };
+    },
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/organizations/:orgId/machines/:machineId/tasks',
+    summary: 'Add a service task to a machine',
+    tags: ['schedule'],
+    params: machineParams,
+    body: taskInputSchema,
+    status: 201,
+    response: z.object({ data: taskSchema }),
+    handler: async ({ req, params, body }) => {
+      const access = req.access!;
+      const { machine } = await loadMachine(access, params.machineId);
+      authorize(canEditSchedule(access), 'Only a manager or technician may edit the schedule');
+      const [task] = await addTasks(access, machine, [body]);
+      const due = await TaskDuePoint.findByPk(task.id);
+      return { data: presentTask(task, due?.due ?? null) };
+    },
+  });
+
+  route(router, {
+    method: 'patch',
+    path: '/organizations/:orgId/tasks/:taskId',
+    summary: 'Edit a service task',
+    tags: ['schedule'],
+    params: taskParams,
+    body: taskUpdateSchema,
+    response: z.object({ data: taskSchema }),
+    handler: async ({ req, params, body }) => {
+      const access = req.access!;
+      const task = await loadTask(access, params.taskId);
+      await loadMachine(access, task.machineId);
+      authorize(canEditSchedule(access), 'Only a manager or technician may edit the schedule');
+      await updateTask(access, task, body);
+      const due = await TaskDuePoint.findByPk(task.id);
+      return { data: presentTask(task, due?.due ?? null) };
+    },
+  });
+
+  route(router, {
+    method: 'delete',
+    path: '/organizations/:orgId/tasks/:taskId',
+    summary: 'Remove a service task',
+    tags: ['schedule'],
+    params: taskParams,
+    status: 204,
+    handler: async ({ req, params }) => {
+      const access = req.access!;
+      const task = await loadTask(access, params.taskId);
+      await loadMachine(access, task.machineId);
+      authorize(canEditSchedule(access), 'Only a manager or technician may edit the schedule');
+      await deleteTask(access, task);
+    },
+  });
+
+  route(router, {
+    method: 'put',
+    path: '/organizations/:orgId/tasks/:taskId/last-done',
+    summary: 'Set when a task was last done (meter value and date), e.g. before the machine came into the system',
+    tags: ['schedule'],
+    params: taskParams,
+    body: lastDoneSchema,
+    response: z.object({ data: taskSchema }),
+    handler: async ({ req, params, body }) => {
+      const access = req.access!;
+      const task = await loadTask(access, params.taskId);
+      await loadMachine(access, task.machineId);
+      authorize(canSetLastDone(access), 'Only a manager or technician may set when a task was last done');
+      await setLastDone(access, task, body);
+      const due = await TaskDuePoint.findByPk(task.id);
+      return { data: presentTask(task, due?.due ?? null) };
+    },
+  });
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/schedule-templates',
+    summary: 'Schedule templates per machine category',
+    tags: ['schedule'],
+    params: orgParams,
+    query: z.object({ category: z.enum(MACHINE_CATEGORIES).optional() }),
+    response: z.object({ data: z.array(templateSchema), abilities: z.object({ edit: z.boolean() }) }),
+    handler: async ({ req, query }) => {
+      const access = req.access!;
+      const rows = await ScheduleTemplate.findAll({
+        where: { organizationId: access.organization.id, ...(query.category && { category: query.category }) },
+        order: [['category', 'ASC'], ['name', 'ASC']],
+      });
+      return {
+        data: rows.map((t) => ({ id: t.id, category: t.category, name: t.name, description: t.description, tasks: t.tasks })),
+        abilities: { edit: hasRole(access, 'manager') },
+      };
+    },
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/organizations/:orgId/schedule-templates',
+    summary: 'Create a schedule template',
+    tags: ['schedule'],
+    params: orgParams,
+    body: templateInputSchema,
+    status: 201,
+    response: z.object({ data: templateSchema }),
+    handler: async ({ req, body }) => {
+      const access = req.access!;
+      authorize(hasRole(access, 'manager'), 'Only a manager may edit schedule templates');
+      const t = await sequelize.transaction(async (transaction) => {
+        const row = await ScheduleTemplate.create({ ...body, organizationId: access.organization.id }, { transaction });
+        await recordAudit(
+          { organizationId: access.organization.id, actorUserId: access.userId, action: 'template.create', entityType: 'schedule_template', entityId: row.id },
+          transaction,
+        );
+        return row;
+      });
+      return { data: { id: t.id, category: t.category, name: t.name, description: t.description, tasks: t.tasks } };
+    },
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/organizations/:orgId/machines/:machineId/apply-template',
+    summary: "Apply a schedule template: creates all its tasks on the machine in one step",
+    tags: ['schedule'],
+    params: machineParams,
+    body: z.object({ templateId: z.uuid({ error: 'Choose a template' }) }),
+    status: 201,
+    response: z.object({ data: z.array(taskSchema) }),
+    handler: async ({ req, params, body }) => {
+      const access = req.access!;
+      const { machine } = await loadMachine(access, params.machineId);
+      authorize(canEditSchedule(access), 'Only a manager or technician may edit the schedule');
+      const template = await loadTemplate(access, body.templateId).catch(() => {
+        throw invalid({ templateId: 'No such schedule template in this farm' });
+      });
+      await applyTemplate(access, machine, template);
+      return { data: await tasksWithDue(access.organization.id, machine.id) };
+    },
+  });
+
+  return router;
+}

@@ -1,0 +1,109 @@
+import type { Transaction } from 'sequelize';
+import { sequelize } from '../db';
+import { invalid, notFound } from '../errors';
+import { Machine, MachineForecast, ScheduleTemplate, ServiceTask } from '../models';
+import type { LastDoneInput, TaskInput } from '../../shared/schemas/schedule';
+import { todayIso } from '../../shared/domain';
+import type { OrgAccess } from '../policies/access';
+import { recordAudit } from './audit';
+import { recomputeDuePoints } from './forecast';
+
+export async function loadTask(access: OrgAccess, taskId: string, transaction?: Transaction) {
+  const task = await ServiceTask.findOne({ where: { id: taskId, organizationId: access.organization.id }, transaction });
+  if (!task) throw notFound('Task');
+  return task;
+}
+
+async function audit(access: OrgAccess, action: string, task: ServiceTask, changes: object, transaction: Transaction) {
+  await recordAudit(
+    {
+      organizationId: access.organization.id,
+      actorUserId: access.userId,
+      action,
+      entityType: 'service_task',
+      entityId: task.id,
+      changes: { machineId: task.machineId, name: task.name, ...changes },
+    },
+    transaction,
+  );
+}
+
+const refresh = (access: OrgAccess, machineId: string, transaction: Transaction) =>
+  recomputeDuePoints(access.organization.id, [machineId], { transaction, timeZone: access.organization.timeZone });
+
+/** Adds tasks to a machine in one transaction and refreshes its due points. */
+export async function addTasks(access: OrgAccess, machine: Machine, inputs: TaskInput[], action = 'task.create') {
+  return sequelize.transaction(async (transaction) => {
+    const start = await ServiceTask.count({ where: { organizationId: access.organization.id, machineId: machine.id }, transaction });
+    const tasks: ServiceTask[] = [];
+    for (const [i, input] of inputs.entries()) {
+      const task = await ServiceTask.create(
+        {
+          ...input,
+          organizationId: access.organization.id,
+          machineId: machine.id,
+          lastDoneMeter: null,
+          lastDoneOn: null,
+          position: start + i,
+        },
+        { transaction },
+      );
+      await audit(access, action, task, {}, transaction);
+      tasks.push(task);
+    }
+    await refresh(access, machine.id, transaction);
+    return tasks;
+  });
+}
+
+export async function updateTask(access: OrgAccess, task: ServiceTask, input: Partial<TaskInput>) {
+  const intervalMeter = input.intervalMeter !== undefined ? input.intervalMeter : task.intervalMeter;
+  const intervalDays = input.intervalDays !== undefined ? input.intervalDays : task.intervalDays;
+  if (intervalMeter === null && intervalDays === null) {
+    throw invalid({ intervalMeter: 'Give a meter interval, a day interval, or both' });
+  }
+  return sequelize.transaction(async (transaction) => {
+    const before = Object.fromEntries(Object.keys(input).map((k) => [k, task.get(k as keyof ServiceTask)]));
+    await task.update(input, { transaction });
+    await audit(access, 'task.update', task, { before, after: input }, transaction);
+    await refresh(access, task.machineId, transaction);
+    return task;
+  });
+}
+
+export async function deleteTask(access: OrgAccess, task: ServiceTask) {
+  await sequelize.transaction(async (transaction) => {
+    await task.destroy({ transaction });
+    await audit(access, 'task.delete', task, {}, transaction);
+  });
+}
+
+/** Sets when a task was last done before the machine came into the system. */
+export async function setLastDone(access: OrgAccess, task: ServiceTask, input: LastDoneInput) {
+  const today = todayIso(access.organization.timeZone);
+  if (input.lastDoneOn > today) throw invalid({ lastDoneOn: `The date may not be after today (${today})` });
+  const forecast = await MachineForecast.findByPk(task.machineId);
+  if (forecast?.lastValue != null && input.lastDoneMeter > forecast.lastValue) {
+    throw invalid({
+      lastDoneMeter: `The meter value may not be above the latest reading (${forecast.lastValue.toLocaleString('en-US')})`,
+    });
+  }
+  return sequelize.transaction(async (transaction) => {
+    const before = { lastDoneMeter: task.lastDoneMeter, lastDoneOn: task.lastDoneOn };
+    await task.update(input, { transaction });
+    await audit(access, 'task.last_done', task, { before, after: input }, transaction);
+    await refresh(access, task.machineId, transaction);
+    return task;
+  });
+}
+
+export async function loadTemplate(access: OrgAccess, id: string) {
+  const t = await ScheduleTemplate.findOne({ where: { id, organizationId: access.organization.id } });
+  if (!t) throw notFound('Schedule template');
+  return t;
+}
+
+/** Applies a template: creates all its tasks on the machine in one transaction. */
+export async function applyTemplate(access: OrgAccess, machine: Machine, template: ScheduleTemplate) {
+  return addTasks(access, machine, template.tasks, 'task.create_from_template');
+}

@@ -1,0 +1,40 @@
+import { useNavigate } from 'react-router-dom';
+import { Button } from '../../components/ui/button';
+import { Card } from '../../components/ui/card';
+import { PageHeader } from '../../components/ui/page-header';
+import { AccountDetails } from '../../features/settings/components/account-details';
+import { useCurrentMembership, useSignOut } from '../../lib/auth';
+import { paths } from '../paths';
+
+export function AccountPage() {
+  const { me } = useCurrentMembership();
+  const signOut = useSignOut();
+  const navigate = useNavigate();
+
+  return (
+    <>
+      <PageHeader title="Account" />
+      <Card>
+        <AccountDetails me={me} />
+      </Card>
+      <div className="mt-6">
+        <Button
+          variant="secondary"
+          icon="signOut"
+          pending={signOut.isPending}
+          className="w-full sm:w-auto"
+          onClick={() =>
+            signOut.mutate(undefined, {
+              onSettled: () => navigate(paths.signIn.href(), { replace: true }),
+            })
+          }
+        >
+          Sign out
+        </Button>
+        <p className="mt-2 text-sm text-field-600">
+          On a shared phone or shop computer, sign out when you're done.
+        </p>
+      </div>
+    </>
+  );
+}

@@ -1,0 +1,32 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, type DataEnvelope } from '../../../lib/api-client';
+import { devMailKeys } from './keys';
+
+/** One message caught by the local mail catcher (development and test only). */
+export interface CaughtMail {
+  id: string;
+  from: string;
+  to: string[];
+  subject: string;
+  date: string;
+  text: string;
+  html: string | null;
+}
+
+export const getMail = (signal?: AbortSignal) =>
+  apiClient.get<DataEnvelope<CaughtMail[]>>('/dev/mail', { signal }).then((body) =>
+    // newest first: the link someone is waiting for is the one just sent
+    [...body.data].sort((a, b) => Date.parse(b.date) - Date.parse(a.date)),
+  );
+
+export const mailQueryOptions = () =>
+  queryOptions({
+    queryKey: devMailKeys.lists(),
+    queryFn: ({ signal }) => getMail(signal),
+    staleTime: 0,
+    // new mail arrives while the page is open (an invitation just sent from another tab)
+    refetchInterval: 5_000,
+    meta: { allowUnauthorized: true },
+  });
+
+export const useMail = () => useQuery(mailQueryOptions());

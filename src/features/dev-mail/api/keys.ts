@@ -1,0 +1,4 @@
+export const devMailKeys = {
+  all: ['dev-mail'] as const,
+  lists: () => [...devMailKeys.all, 'list'] as const,
+};

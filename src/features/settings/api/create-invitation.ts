@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { InvitationCreateInput } from '../../../../shared/schemas/auth';
+import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
+import { invitationKeys } from './keys';
+import type { PendingInvitation } from './types';
+
+export const createInvitation = (orgId: string, input: InvitationCreateInput) =>
+  apiClient
+    .post<DataEnvelope<PendingInvitation>>(`/organizations/${segment(orgId)}/invitations`, input)
+    .then((body) => body.data);
+
+export function useCreateInvitation(orgId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: InvitationCreateInput) => createInvitation(orgId, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: invitationKeys.list(orgId) }),
+  });
+}

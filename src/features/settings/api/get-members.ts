@@ -1,0 +1,15 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { memberKeys } from './keys';
+import type { MemberList } from './types';
+
+export const getMembers = (orgId: string, signal?: AbortSignal) =>
+  apiClient.get<MemberList>(`/organizations/${segment(orgId)}/members`, { signal });
+
+export const membersQueryOptions = (orgId: string) =>
+  queryOptions({
+    queryKey: memberKeys.list(orgId),
+    queryFn: ({ signal }) => getMembers(orgId, signal),
+  });
+
+export const useMembers = (orgId: string) => useQuery(membersQueryOptions(orgId));

@@ -1,0 +1,13 @@
+// Query keys of the team settings, general to specific, so a mutation can invalidate exactly
+// the lists it changed.
+export const memberKeys = {
+  all: ['members'] as const,
+  lists: () => [...memberKeys.all, 'list'] as const,
+  list: (orgId: string) => [...memberKeys.lists(), orgId] as const,
+};
+
+export const invitationKeys = {
+  all: ['invitations'] as const,
+  lists: () => [...invitationKeys.all, 'list'] as const,
+  list: (orgId: string) => [...invitationKeys.lists(), orgId] as const,
+};
