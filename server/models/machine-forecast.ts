@@ -6,6 +6,7 @@ import {
   type InferCreationAttributes,
 } from 'sequelize';
 import { sequelize } from '../db';
+import { numericColumn } from './columns';
 import type { ReadingPoint, UsageEstimate, DuePoint } from '../../shared/domain/types';
 
 /** Per-machine summary of its readings, rewritten whenever a reading changes. */
@@ -32,7 +33,7 @@ MachineForecast.init(
     organizationId: { type: DataTypes.UUID, allowNull: false },
     daily: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     readingCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
-    lastValue: { type: DataTypes.DECIMAL(14, 2), allowNull: true },
+    lastValue: numericColumn('lastValue', 14, 2, true),
     lastTakenAt: { type: DataTypes.DATE, allowNull: true },
     firstTakenAt: { type: DataTypes.DATE, allowNull: true },
     usage: { type: DataTypes.JSONB, allowNull: true },

@@ -6,6 +6,7 @@ import {
   type InferCreationAttributes,
 } from 'sequelize';
 import { sequelize } from '../db';
+import { numericColumn } from './columns';
 import type { MachineCategory, MachineStatus, MeterUnit } from '../../shared/constants';
 
 export class Machine extends Model<InferAttributes<Machine>, InferCreationAttributes<Machine>> {
@@ -41,8 +42,8 @@ Machine.init(
     model: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     serialNumber: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     year: { type: DataTypes.INTEGER, allowNull: true },
-    purchasePrice: { type: DataTypes.DECIMAL(12, 2), allowNull: true },
-    listPrice: { type: DataTypes.DECIMAL(12, 2), allowNull: true },
+    purchasePrice: numericColumn('purchasePrice', 12, 2, true),
+    listPrice: numericColumn('listPrice', 12, 2, true),
     meterUnit: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'h' },
     status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'in_service' },
     seasonMonths: { type: DataTypes.ARRAY(DataTypes.INTEGER), allowNull: false, defaultValue: [] },

@@ -6,6 +6,7 @@ import {
   type InferCreationAttributes,
 } from 'sequelize';
 import { sequelize } from '../db';
+import { numericColumn } from './columns';
 import type { ReadingSource } from '../../shared/constants';
 
 export class MeterReading extends Model<
@@ -32,8 +33,8 @@ MeterReading.init(
     id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
     organizationId: { type: DataTypes.UUID, allowNull: false },
     machineId: { type: DataTypes.UUID, allowNull: false },
-    value: { type: DataTypes.DECIMAL(14, 2), allowNull: false },
-    lifetimeValue: { type: DataTypes.DECIMAL(14, 2), allowNull: false },
+    value: numericColumn('value', 14, 2, false),
+    lifetimeValue: numericColumn('lifetimeValue', 14, 2, false),
     takenAt: { type: DataTypes.DATE, allowNull: false },
     source: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'manual' },
     enteredBy: { type: DataTypes.UUID, allowNull: true },
@@ -65,8 +66,8 @@ MeterReplacement.init(
     organizationId: { type: DataTypes.UUID, allowNull: false },
     machineId: { type: DataTypes.UUID, allowNull: false },
     replacedAt: { type: DataTypes.DATE, allowNull: false },
-    oldFinalValue: { type: DataTypes.DECIMAL(14, 2), allowNull: false },
-    newStartValue: { type: DataTypes.DECIMAL(14, 2), allowNull: false },
+    oldFinalValue: numericColumn('oldFinalValue', 14, 2, false),
+    newStartValue: numericColumn('newStartValue', 14, 2, false),
     note: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     enteredBy: { type: DataTypes.UUID, allowNull: true },
     createdAt: DataTypes.DATE,

@@ -6,6 +6,7 @@ import {
   type InferCreationAttributes,
 } from 'sequelize';
 import { sequelize } from '../db';
+import { numericColumn } from './columns';
 import type { TaskFluid, TaskPart } from '../../shared/schemas/schedule';
 
 export class ServiceTask extends Model<
@@ -41,18 +42,18 @@ ServiceTask.init(
     organizationId: { type: DataTypes.UUID, allowNull: false },
     machineId: { type: DataTypes.UUID, allowNull: false },
     name: { type: DataTypes.TEXT, allowNull: false },
-    intervalMeter: { type: DataTypes.DECIMAL(12, 2), allowNull: true },
+    intervalMeter: numericColumn('intervalMeter', 12, 2, true),
     intervalDays: { type: DataTypes.INTEGER, allowNull: true },
-    firstServiceMeter: { type: DataTypes.DECIMAL(12, 2), allowNull: true },
-    warnMeter: { type: DataTypes.DECIMAL(12, 2), allowNull: true },
+    firstServiceMeter: numericColumn('firstServiceMeter', 12, 2, true),
+    warnMeter: numericColumn('warnMeter', 12, 2, true),
     warnDays: { type: DataTypes.INTEGER, allowNull: true },
     parts: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     fluids: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
-    labourHours: { type: DataTypes.DECIMAL(6, 2), allowNull: true },
+    labourHours: numericColumn('labourHours', 6, 2, true),
     instructions: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     safetyNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     hazards: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
-    lastDoneMeter: { type: DataTypes.DECIMAL(14, 2), allowNull: true },
+    lastDoneMeter: numericColumn('lastDoneMeter', 14, 2, true),
     lastDoneOn: { type: DataTypes.DATEONLY, allowNull: true },
     position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     createdAt: DataTypes.DATE,

@@ -1,8 +1,9 @@
 import bcrypt from 'bcryptjs';
 import request from 'supertest';
 import type { Express } from 'express';
-import { Membership, Organization, User } from '../../server/models';
-import type { Role } from '../../shared/constants';
+import { Machine, Membership, MeterReading, Organization, ServiceTask, User } from '../../server/models';
+import { refreshMachineForecast } from '../../server/services/forecast';
+import type { MachineCategory, MeterUnit, Role } from '../../shared/constants';
 
 let seq = 0;
 const next = () => ++seq;
@@ -56,4 +57,59 @@ export async function signedInAgent(app: Express, user: User) {
   if (res.status !== 200)
     throw new Error(`sign-in failed in test setup: ${res.status} ${JSON.stringify(res.body)}`);
   return agent;
+}
+
+
+export async function createMachine(
+  organization: Organization,
+  overrides: Partial<{ fleetNumber: string; name: string; category: MachineCategory; meterUnit: MeterUnit; status: Machine['status']; seasonMonths: number[] }> = {},
+) {
+  const n = next();
+  return Machine.create({
+    organizationId: organization.id,
+    fleetNumber: `M-${n}`,
+    name: `Machine ${n}`,
+    category: 'tractor',
+    year: 2020,
+    purchasePrice: null,
+    listPrice: null,
+    photoKey: null,
+    ...overrides,
+  });
+}
+
+/** Inserts readings directly (bypassing the rules) and refreshes the machine's forecast. */
+export async function addReadings(machine: Machine, points: { daysAgo: number; value: number }[], now = new Date()) {
+  await MeterReading.bulkCreate(
+    points.map((p) => ({
+      organizationId: machine.organizationId,
+      machineId: machine.id,
+      value: p.value,
+      lifetimeValue: p.value,
+      takenAt: new Date(now.getTime() - p.daysAgo * 86_400_000),
+      source: 'manual' as const,
+      enteredBy: null,
+      importKey: null,
+    })),
+  );
+  await refreshMachineForecast(machine.id, machine.organizationId);
+}
+
+export async function createTask(machine: Machine, overrides: Partial<ServiceTask['_creationAttributes']> = {}) {
+  const task = await ServiceTask.create({
+    organizationId: machine.organizationId,
+    machineId: machine.id,
+    name: 'Engine oil and filter',
+    intervalMeter: 250,
+    intervalDays: null,
+    firstServiceMeter: null,
+    warnMeter: 25,
+    warnDays: null,
+    labourHours: 1,
+    lastDoneMeter: null,
+    lastDoneOn: null,
+    ...overrides,
+  });
+  await refreshMachineForecast(machine.id, machine.organizationId);
+  return task;
 }

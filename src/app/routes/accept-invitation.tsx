@@ -71,8 +71,8 @@ export function AcceptInvitationPage() {
       title={`Join ${organization.name}`}
       description={
         <p>
-          You've been invited as <strong>{roleLabel(role).toLowerCase()}</strong>. Choose a password
-          to finish.
+          You've been invited to join as <strong>{roleLabel(role)}</strong>. Choose a password to
+          finish.
         </p>
       }
     >

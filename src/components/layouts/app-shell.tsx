@@ -16,15 +16,13 @@ interface AppShellProps {
 export function AppShell({ homeHref, navItems, headerEnd, children }: AppShellProps) {
   const mainRef = useRef<HTMLElement>(null);
   const { pathname } = useLocation();
-  const firstRender = useRef(true);
+  const shownPath = useRef(pathname);
 
   // After client-side navigation, move focus to the new page so screen readers announce it
   // (a full page load does this by itself).
   useEffect(() => {
-    if (firstRender.current) {
-      firstRender.current = false;
-      return;
-    }
+    if (shownPath.current === pathname) return;
+    shownPath.current = pathname;
     mainRef.current?.focus({ preventScroll: true });
   }, [pathname]);
 

@@ -39,12 +39,7 @@ export function AcceptInvitationForm({ token, invitation, onAccepted }: AcceptIn
   });
 
   return (
-    <form
-      onSubmit={onSubmit}
-      noValidate
-      className="flex flex-col gap-5"
-     
-    >
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
       {formError ? <Alert>{formError}</Alert> : null}
       <div className="rounded-lg bg-oat-100 px-3 py-2">
         <p className="text-sm text-field-600">You'll sign in with</p>

@@ -53,12 +53,7 @@ export function ForgotPasswordForm({ afterSent }: ForgotPasswordFormProps) {
   }
 
   return (
-    <form
-      onSubmit={onSubmit}
-      noValidate
-      className="flex flex-col gap-5"
-     
-    >
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
       {formError ? <Alert>{formError}</Alert> : null}
       <TextField
         label="Email"

@@ -43,12 +43,7 @@ export function ResetPasswordForm({ token, onReset, forgotPasswordHref }: ResetP
   const tokenMessage = errors.token?.message;
 
   return (
-    <form
-      onSubmit={onSubmit}
-      noValidate
-      className="flex flex-col gap-5"
-     
-    >
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-5">
       {tokenMessage ? (
         <Alert title="This link no longer works">
           <p>{tokenMessage}</p>

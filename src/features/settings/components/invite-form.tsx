@@ -48,7 +48,7 @@ export function InviteForm({ orgId, roleOptions }: InviteFormProps) {
     <form
       onSubmit={onSubmit}
       noValidate
-     
+
       className="flex flex-col gap-4"
     >
       {formError ? <Alert>{formError}</Alert> : null}

@@ -1,0 +1,106 @@
+// The demo's meter readings per machine: the generated history, who typed each one in, and the
+// one hour-meter replacement (T-03), after which the meter shows new-meter values while the
+// lifetime value runs on.
+import type { ReadingSource } from '../../shared/constants';
+import { generateReadings } from './readings-generator';
+import type { DemoMachine } from './demo-fleet';
+import { createRandom, seedFromString } from './random';
+
+/** Days of history before the demo's "today": a little over two years, so a season repeats twice. */
+export const HISTORY_DAYS = 800;
+const MS_PER_DAY = 86_400_000;
+
+export interface DemoReading {
+  value: number;
+  lifetimeValue: number;
+  takenAt: Date;
+  createdAt: Date;
+  source: ReadingSource;
+  enteredBy: string | null;
+}
+
+export interface DemoReplacement {
+  replacedAt: Date;
+  oldFinalValue: number;
+  newStartValue: number;
+  note: string;
+  enteredBy: string | null;
+}
+
+export interface MachineReadings {
+  readings: DemoReading[];
+  replacement: DemoReplacement | null;
+}
+
+const round1 = (n: number) => Math.round(n * 10) / 10;
+
+/**
+ * Readings of one machine ending on `today`, deterministic for its fleet number. enteredBy picks
+ * among the given user ids; replaceDaysAgo (days) fits a new meter that starts at 0.
+ */
+export function buildMachineReadings(
+  machine: DemoMachine,
+  opts: {
+    today: Date;
+    timeZone: string;
+    enteredBy: string[];
+    technician: string | null;
+    replaceDaysAgo?: number;
+  },
+): MachineReadings {
+  const seed = seedFromString(`hourstone-demo/${machine.organization}/${machine.fleetNumber}`);
+  const generated = generateReadings({
+    seed,
+    start: new Date(opts.today.getTime() - HISTORY_DAYS * MS_PER_DAY),
+    end: opts.today,
+    timeZone: opts.timeZone,
+    season: machine.season,
+    ratePerDay: machine.perYear / 365,
+    endValue: machine.aboutNow,
+    meterUnit: machine.meterUnit,
+    inSeasonEvery: machine.inSeasonEvery,
+  });
+  const rng = createRandom(seed ^ 0x5eed);
+  const readings: DemoReading[] = generated.map((r) => ({
+    value: r.value,
+    lifetimeValue: r.value,
+    takenAt: r.takenAt,
+    createdAt: r.enteredAt,
+    source: 'manual',
+    enteredBy: opts.enteredBy.length ? rng.pick(opts.enteredBy) : null,
+  }));
+  if (opts.replaceDaysAgo === undefined) return { readings, replacement: null };
+  return replaceMeter(readings, opts.today.getTime() - opts.replaceDaysAgo * MS_PER_DAY, opts.technician);
+}
+
+/**
+ * Fits a new meter (starting at 0) just after the last reading before `atMs`: the old meter's
+ * final value is that reading's; later readings show value = lifetime − (old final − new start).
+ */
+function replaceMeter(readings: DemoReading[], atMs: number, technician: string | null): MachineReadings {
+  const lastOld = readings.findLastIndex((r) => r.takenAt.getTime() <= atMs);
+  if (lastOld < 0 || lastOld === readings.length - 1) return { readings, replacement: null };
+  const failed = readings[lastOld];
+  const replacedAt = new Date(failed.takenAt.getTime() + 45 * 60_000);
+  const oldFinalValue = failed.lifetimeValue;
+  const replacement: DemoReplacement = {
+    replacedAt,
+    oldFinalValue,
+    newStartValue: 0,
+    note: 'Hour meter stopped counting; new meter fitted, starting at 0 h.',
+    enteredBy: technician,
+  };
+  const fitted: DemoReading = {
+    value: 0,
+    lifetimeValue: oldFinalValue,
+    takenAt: replacedAt,
+    createdAt: replacedAt,
+    source: 'service',
+    enteredBy: technician,
+  };
+  const after = readings.slice(lastOld + 1).map((r) => ({
+    ...r,
+    value: round1(r.lifetimeValue - oldFinalValue),
+  }));
+  return { readings: [...readings.slice(0, lastOld + 1), fitted, ...after], replacement };
+}
