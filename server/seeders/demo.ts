@@ -16,6 +16,7 @@ import {
   ServiceTask,
   User,
 } from '../models';
+import { todayIso } from '../../shared/domain';
 import { hashPassword } from '../services/accounts';
 import { recomputeDuePoints, refreshOrganizationForecasts } from '../services/forecast';
 import { buildMachineReadings, type MachineReadings } from './demo-readings';
@@ -184,7 +185,7 @@ async function writeScenario(today: Date, passwordHash: string, transaction: Tra
         seasonMonths: m.season.months,
         photoKey: null,
         notes: replacement
-          ? `Hour meter replaced ${replacement.replacedAt.toISOString().slice(0, 10)}: the old meter stopped at ${replacement.oldFinalValue.toLocaleString('en-US')} h, the new one started at 0 h.`
+          ? `Hour meter replaced ${todayIso(orgOf(m.organization).timeZone, replacement.replacedAt)}: the old meter stopped at ${replacement.oldFinalValue.toLocaleString('en-US')} h, the new one started at 0 h.`
           : '',
       };
     }),

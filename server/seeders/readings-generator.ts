@@ -34,6 +34,8 @@ export interface SeasonProfile {
   useShare?: number;
   /** chance of use on an in-season Sunday (default 0.25) */
   sundayShare?: number;
+  /** share of the year's use that falls out of season: moving, odd jobs (default 0.04) */
+  offSeasonShare?: number;
 }
 
 export interface GenerateReadingsOptions {
@@ -158,6 +160,12 @@ export function generateReadings(options: GenerateReadingsOptions): GeneratedRea
     const p = Math.min(0.97, share + (peak ? 0.15 : 0));
     return rng.chance(p) ? rng.between(0.5, 1.5) * (peak ? 1.6 : 1) : 0;
   });
+  // Odd jobs out of season get a fixed small share, however short the season is.
+  const offShare = season.offSeasonShare ?? 0.04;
+  const sumIn = weights.reduce((a, w, i) => (inSeason(i) ? a + w : a), 0);
+  const sumOff = weights.reduce((a, w, i) => (inSeason(i) ? a : a + w), 0);
+  const offFactor = sumIn > 0 && sumOff > 0 ? (offShare / (1 - offShare)) * (sumIn / sumOff) : 1;
+  for (let i = 0; i < dayCount; i += 1) if (!inSeason(i)) weights[i] *= offFactor;
   const use = scaleUse(weights, options.ratePerDay * dayCount, MAX_USE_PER_DAY[unit]);
   const before: number[] = [0];
   for (const u of use) before.push(before[before.length - 1] + u);

@@ -1,0 +1,22 @@
+import { validate } from 'node-cron';
+import { z } from 'zod';
+
+/** Job schedules (node-cron syntax) from the environment, validated with a clear error at start. */
+const cron = (name: string, fallback: string) =>
+  z
+    .string()
+    .default(fallback)
+    .refine((v) => validate(v), { error: `${name} must be a node-cron expression, e.g. "*/5 * * * *"` });
+
+export const jobScheduleSchema = z.object({
+  DELIVER_MAIL_CRON: cron('DELIVER_MAIL_CRON', '* * * * *'),
+  REFRESH_FORECASTS_CRON: cron('REFRESH_FORECASTS_CRON', '15 * * * *'),
+});
+
+export function loadJobSchedule(source: NodeJS.ProcessEnv = process.env) {
+  const parsed = jobScheduleSchema.safeParse(source);
+  if (!parsed.success) {
+    throw new Error(`Invalid job schedule:\n${parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`).join('\n')}`);
+  }
+  return parsed.data;
+}
