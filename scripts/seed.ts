@@ -2,6 +2,8 @@
 //   --if-empty          load only when there is no organization (the default)
 //   --reset             wipe every tenant table and load again
 //   --allow-production  needed with NODE_ENV=production (the demo has a public password)
+export {};
+
 const args = new Set(process.argv.slice(2));
 const known = ['--if-empty', '--reset', '--allow-production'];
 const unknown = [...args].filter((a) => !known.includes(a));
@@ -12,7 +14,9 @@ if (unknown.length) {
 
 // Checked before anything connects to the database.
 if (process.env.NODE_ENV === 'production' && !args.has('--allow-production')) {
-  console.error('The demo scenario has a public password; pass --allow-production to load it anyway');
+  console.error(
+    'The demo scenario has a public password; pass --allow-production to load it anyway',
+  );
   process.exit(1);
 }
 

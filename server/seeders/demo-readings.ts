@@ -70,14 +70,22 @@ export function buildMachineReadings(
     enteredBy: opts.enteredBy.length ? rng.pick(opts.enteredBy) : null,
   }));
   if (opts.replaceDaysAgo === undefined) return { readings, replacement: null };
-  return replaceMeter(readings, opts.today.getTime() - opts.replaceDaysAgo * MS_PER_DAY, opts.technician);
+  return replaceMeter(
+    readings,
+    opts.today.getTime() - opts.replaceDaysAgo * MS_PER_DAY,
+    opts.technician,
+  );
 }
 
 /**
  * Fits a new meter (starting at 0) just after the last reading before `atMs`: the old meter's
  * final value is that reading's; later readings show value = lifetime − (old final − new start).
  */
-function replaceMeter(readings: DemoReading[], atMs: number, technician: string | null): MachineReadings {
+function replaceMeter(
+  readings: DemoReading[],
+  atMs: number,
+  technician: string | null,
+): MachineReadings {
   const lastOld = readings.findLastIndex((r) => r.takenAt.getTime() <= atMs);
   if (lastOld < 0 || lastOld === readings.length - 1) return { readings, replacement: null };
   const failed = readings[lastOld];

@@ -23,14 +23,16 @@ import { buildMachineReadings, type MachineReadings } from './demo-readings';
 import {
   DEMO_DUE_SOON,
   DEMO_MACHINES,
-  DEMO_ORGANIZATIONS,
   DEMO_OVERDUE,
-  DEMO_PASSWORD,
-  DEMO_PEOPLE,
   DUE_SOON_RANGE,
   METER_REPLACEMENT,
-  type DemoOrganization,
 } from './demo-fleet';
+import {
+  DEMO_ORGANIZATIONS,
+  DEMO_PASSWORD,
+  DEMO_PEOPLE,
+  type DemoOrganization,
+} from './demo-people';
 import { planLastDone } from './service-plan';
 import { buildTemplates } from './templates';
 
@@ -66,9 +68,12 @@ async function truncateAll(transaction: Transaction) {
     { type: QueryTypes.SELECT, transaction },
   );
   if (!tables.length) return;
-  await sequelize.query(`TRUNCATE ${tables.map((t) => `"${t.tablename}"`).join(', ')} RESTART IDENTITY CASCADE`, {
-    transaction,
-  });
+  await sequelize.query(
+    `TRUNCATE ${tables.map((t) => `"${t.tablename}"`).join(', ')} RESTART IDENTITY CASCADE`,
+    {
+      transaction,
+    },
+  );
 }
 
 async function inChunks<T>(rows: T[], write: (chunk: T[]) => Promise<unknown>) {
@@ -81,6 +86,8 @@ async function inChunks<T>(rows: T[], write: (chunk: T[]) => Promise<unknown>) {
  */
 export async function loadDemo(options: LoadDemoOptions = {}): Promise<DemoSummary | null> {
   const today = options.today ?? new Date();
+  // The usual start-up case (data present) answers before spending time on the password hash.
+  if (options.ifEmpty && !options.reset && (await Organization.count()) > 0) return null;
   const passwordHash = await hashPassword(DEMO_PASSWORD);
   const summary = await sequelize.transaction(async (transaction) => {
     // Two copies starting at once (several API instances) load the demo once.
@@ -101,18 +108,29 @@ export async function loadDemo(options: LoadDemoOptions = {}): Promise<DemoSumma
     const id = demoId(`org/${org.key}`);
     await refreshOrganizationForecasts(id);
     // The forecast service dates due points by the clock; a demo loaded "as of" another day follows it.
-    if (Math.abs(today.getTime() - Date.now()) > 60_000) await recomputeDuePoints(id, undefined, { now: today });
+    if (Math.abs(today.getTime() - Date.now()) > 60_000)
+      await recomputeDuePoints(id, undefined, { now: today });
   }
   return summary;
 }
 
-async function writeScenario(today: Date, passwordHash: string, transaction: Transaction): Promise<DemoSummary> {
+async function writeScenario(
+  today: Date,
+  passwordHash: string,
+  transaction: Transaction,
+): Promise<DemoSummary> {
   const orgId = (key: DemoOrganization['key']) => demoId(`org/${key}`);
   const userId = (email: string) => demoId(`user/${email}`);
   const orgOf = (key: DemoOrganization['key']) => DEMO_ORGANIZATIONS.find((o) => o.key === key)!;
 
   await Organization.bulkCreate(
-    DEMO_ORGANIZATIONS.map((o) => ({ id: orgId(o.key), name: o.name, kind: o.kind, timeZone: o.timeZone, units: o.units })),
+    DEMO_ORGANIZATIONS.map((o) => ({
+      id: orgId(o.key),
+      name: o.name,
+      kind: o.kind,
+      timeZone: o.timeZone,
+      units: o.units,
+    })),
     { transaction },
   );
   await User.bulkCreate(
@@ -148,7 +166,9 @@ async function writeScenario(today: Date, passwordHash: string, transaction: Tra
   const machineId = (m: { organization: string; fleetNumber: string }) =>
     demoId(`machine/${m.organization}/${m.fleetNumber}`);
   const staff = (key: DemoOrganization['key'], role: string) =>
-    DEMO_PEOPLE.filter((p) => p.organization === key && p.role === role).map((p) => userId(p.email));
+    DEMO_PEOPLE.filter((p) => p.organization === key && p.role === role).map((p) =>
+      userId(p.email),
+    );
 
   // Readings first: the T-03 meter replacement goes into that machine's notes.
   const history = new Map<string, MachineReadings>();
@@ -161,7 +181,8 @@ async function writeScenario(today: Date, passwordHash: string, transaction: Tra
         timeZone: orgOf(m.organization).timeZone,
         enteredBy: [...operators, ...operators, ...staff(m.organization, 'manager')],
         technician: staff(m.organization, 'technician')[0] ?? null,
-        replaceDaysAgo: m.fleetNumber === METER_REPLACEMENT.fleetNumber ? METER_REPLACEMENT.daysAgo : undefined,
+        replaceDaysAgo:
+          m.fleetNumber === METER_REPLACEMENT.fleetNumber ? METER_REPLACEMENT.daysAgo : undefined,
       }),
     );
   }
@@ -216,7 +237,9 @@ async function writeScenario(today: Date, passwordHash: string, transaction: Tra
       ...r,
     })),
   );
-  await inChunks(readingRows, (chunk) => MeterReading.bulkCreate(chunk, { transaction, returning: false }));
+  await inChunks(readingRows, (chunk) =>
+    MeterReading.bulkCreate(chunk, { transaction, returning: false }),
+  );
 
   // Each machine gets its category's schedule, with last-done points planned per farm.
   const taskRows = farms.flatMap((farm) => {
@@ -228,7 +251,13 @@ async function writeScenario(today: Date, passwordHash: string, transaction: Tra
         readings: history.get(m.fleetNumber)!.readings,
         tasks: byCategory.get(m.category) ?? [],
       })),
-      { timeZone: farm.timeZone, today, overdue: DEMO_OVERDUE, dueSoonFirst: DEMO_DUE_SOON, dueSoonRange: DUE_SOON_RANGE },
+      {
+        timeZone: farm.timeZone,
+        today,
+        overdue: DEMO_OVERDUE,
+        dueSoonFirst: DEMO_DUE_SOON,
+        dueSoonRange: DUE_SOON_RANGE,
+      },
     );
     return planned.map((p) => ({
       id: demoId(`task/${farm.key}/${p.fleetNumber}/${p.task.name}`),
@@ -239,7 +268,9 @@ async function writeScenario(today: Date, passwordHash: string, transaction: Tra
       position: p.position,
     }));
   });
-  await inChunks(taskRows, (chunk) => ServiceTask.bulkCreate(chunk, { transaction, returning: false }));
+  await inChunks(taskRows, (chunk) =>
+    ServiceTask.bulkCreate(chunk, { transaction, returning: false }),
+  );
 
   await AuditEvent.bulkCreate(
     farms.map((f) => ({

@@ -65,7 +65,13 @@ export interface GeneratedReading {
 }
 
 /** Longest working day drawn, meter units; well inside the reading rules' per-day limits. */
-const MAX_USE_PER_DAY: Record<MeterUnit, number> = { h: 14, km: 850, bales: 450, ha: 60, acres: 150 };
+const MAX_USE_PER_DAY: Record<MeterUnit, number> = {
+  h: 14,
+  km: 850,
+  bales: 450,
+  ha: 60,
+  acres: 150,
+};
 const DECIMALS: Record<MeterUnit, number> = { h: 1, km: 0, bales: 0, ha: 1, acres: 1 };
 const LATE_ENTRY_SHARE = 0.03;
 const GAP_SHARE = 0.04;
@@ -185,7 +191,7 @@ export function generateReadings(options: GenerateReadingsOptions): GeneratedRea
   const [inMin, inMax] = options.inSeasonEvery ?? [1, 3];
   const [offMin, offMax] = options.offSeasonEvery ?? [14, 28];
   const slots: Slot[] = [];
-  for (let i = rng.int(0, 2); i < final.index; ) {
+  for (let i = rng.int(0, 2); i < final.index;) {
     const isEvening = rng.chance(0.45);
     slots.push({ index: i, minute: minuteIn(isEvening ? EVENING : MORNING), evening: isEvening });
     let step: number;
@@ -212,7 +218,16 @@ export function generateReadings(options: GenerateReadingsOptions): GeneratedRea
   const endMs = options.end.getTime();
   const candidates = slots.map((s, n) => {
     const { year, month, date } = ymd(firstDay + s.index);
-    const local = new TZDate(year, month - 1, date, Math.floor(s.minute / 60), s.minute % 60, 0, 0, timeZone);
+    const local = new TZDate(
+      year,
+      month - 1,
+      date,
+      Math.floor(s.minute / 60),
+      s.minute % 60,
+      0,
+      0,
+      timeZone,
+    );
     const takenAt = new Date(local.getTime());
     const delayMs =
       n < slots.length - 1 && rng.chance(LATE_ENTRY_SHARE)
@@ -228,14 +243,24 @@ export function generateReadings(options: GenerateReadingsOptions): GeneratedRea
 }
 
 /** Drops any reading that would break a reading rule against the one kept before it (a safety net). */
-function keepPlausible(readings: GeneratedReading[], unit: MeterUnit, nowMs: number): GeneratedReading[] {
+function keepPlausible(
+  readings: GeneratedReading[],
+  unit: MeterUnit,
+  nowMs: number,
+): GeneratedReading[] {
   const kept: GeneratedReading[] = [];
-  const at = (r: GeneratedReading): ReadingAt => ({ value: r.value, takenAtMs: r.takenAt.getTime() });
+  const at = (r: GeneratedReading): ReadingAt => ({
+    value: r.value,
+    takenAtMs: r.takenAt.getTime(),
+  });
   readings.forEach((r, n) => {
     const isLast = n === readings.length - 1;
     const broken = () => {
       const previous = kept[kept.length - 1];
-      return previous !== undefined && checkReading(at(r), { previous: at(previous) }, { nowMs, meterUnit: unit }) !== null;
+      return (
+        previous !== undefined &&
+        checkReading(at(r), { previous: at(previous) }, { nowMs, meterUnit: unit }) !== null
+      );
     };
     // The last reading carries the end value, so earlier ones give way to it.
     if (isLast) while (broken()) kept.pop();

@@ -94,7 +94,9 @@ function simulate(task: TaskInput, curve: MachineCurve, seed: number): LastDone[
   // A phase before the history starts, as if the schedule had been running already.
   let meter = first.value - (im ? rng.between(0, im) : 0);
   let day = Math.floor(first.day - (id ? rng.between(0, id) : rng.between(0, 200)));
-  const done: LastDone[] = [{ lastDoneMeter: round1(Math.max(0, meter)), lastDoneOn: isoFromDayNumber(day) }];
+  const done: LastDone[] = [
+    { lastDoneMeter: round1(Math.max(0, meter)), lastDoneOn: isoFromDayNumber(day) },
+  ];
   let early = rng.between(0.9, 1);
   for (const p of curve.points) {
     const byMeter = im !== null && p.value >= meter + im * early;
@@ -108,7 +110,12 @@ function simulate(task: TaskInput, curve: MachineCurve, seed: number): LastDone[
   return done;
 }
 
-function statusOf(task: TaskInput, lastDone: LastDone, curve: MachineCurve, asOfIso: string): DueStatus {
+function statusOf(
+  task: TaskInput,
+  lastDone: LastDone,
+  curve: MachineCurve,
+  asOfIso: string,
+): DueStatus {
   const schedule: TaskSchedule = {
     intervalMeter: task.intervalMeter,
     intervalDays: task.intervalDays,
@@ -122,7 +129,8 @@ function statusOf(task: TaskInput, lastDone: LastDone, curve: MachineCurve, asOf
 
 /** A last-done point that leaves the task overdue by about 7% of its interval. */
 function overduePoint(task: TaskInput, curve: MachineCurve, todayDay: number): LastDone {
-  if (task.intervalMeter !== null) return pointAtValue(curve, curve.current - task.intervalMeter * 1.07);
+  if (task.intervalMeter !== null)
+    return pointAtValue(curve, curve.current - task.intervalMeter * 1.07);
   return pointAtDay(curve, todayDay - (task.intervalDays ?? 0) - 12);
 }
 
@@ -156,16 +164,23 @@ export function planLastDone(machines: MachinePlanInput[], options: PlanOptions)
     m.tasks.forEach((task, position) => {
       const history = simulate(task, curve, seedFromString(`${m.fleetNumber}/${task.name}`));
       const lastDone = history[history.length - 1];
-      planned.push({ fleetNumber: m.fleetNumber, task, position, lastDone, status: statusOf(task, lastDone, curve, asOfIso) });
+      planned.push({
+        fleetNumber: m.fleetNumber,
+        task,
+        position,
+        lastDone,
+        status: statusOf(task, lastDone, curve, asOfIso),
+      });
     });
   }
 
   const find = ([fleet, name]: [string, string]) =>
     planned.find((p) => p.fleetNumber === fleet && p.task.name === name);
-  const set = (p: PlannedTask, lastDone: LastDone) => {
+  const set = (p: PlannedTask, lastDone: LastDone): DueStatus => {
     const curve = curves.get(p.fleetNumber)!;
     p.lastDone = lastDone;
     p.status = statusOf(p.task, lastDone, curve, asOfIso);
+    return p.status;
   };
   const chosen = new Set<PlannedTask>();
 
@@ -180,7 +195,9 @@ export function planLastDone(machines: MachinePlanInput[], options: PlanOptions)
   const preferred = options.dueSoonFirst.map(find).filter((p): p is PlannedTask => p !== undefined);
   const dueSoon = () => planned.filter((p) => p.status === 'due_soon' && !chosen.has(p));
   const keepOrder = (p: PlannedTask) => (preferred.includes(p) ? 0 : 1);
-  const surplus = dueSoon().sort((a, b) => keepOrder(a) - keepOrder(b)).slice(options.dueSoonRange.max);
+  const surplus = dueSoon()
+    .sort((a, b) => keepOrder(a) - keepOrder(b))
+    .slice(options.dueSoonRange.max);
   for (const p of surplus) {
     const curve = curves.get(p.fleetNumber)!;
     set(p, pointAtDay(curve, curve.points[curve.points.length - 1].day));
@@ -192,8 +209,8 @@ export function planLastDone(machines: MachinePlanInput[], options: PlanOptions)
     if (dueSoon().length >= options.dueSoonRange.min) break;
     if (p.status !== 'ok' || chosen.has(p)) continue;
     const before = p.lastDone;
-    set(p, dueSoonPoint(p.task, curves.get(p.fleetNumber)!, todayDay));
-    if (p.status !== 'due_soon') set(p, before);
+    if (set(p, dueSoonPoint(p.task, curves.get(p.fleetNumber)!, todayDay)) !== 'due_soon')
+      set(p, before);
   }
   return planned;
 }

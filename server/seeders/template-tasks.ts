@@ -55,7 +55,12 @@ export function task(fields: Partial<TaskInput> & Pick<TaskInput, 'name'>): Task
 const round1 = (n: number) => Math.round(n * 10) / 10;
 
 /** A fluid given in litres or kilograms, shown in gallons / pounds on an imperial farm. */
-export function fluid(units: UnitSystem, kind: string, amount: number, measure: 'L' | 'kg'): TaskFluid {
+export function fluid(
+  units: UnitSystem,
+  kind: string,
+  amount: number,
+  measure: 'L' | 'kg',
+): TaskFluid {
   if (units === 'metric') return { kind, volume: amount, unit: measure };
   if (measure === 'kg') return { kind, volume: round1(amount * 2.20462), unit: 'lb' };
   const gallons = amount / 3.78541;
@@ -80,6 +85,13 @@ export interface EngineSpec {
   /** fluid kind of the hydraulic/transmission system */
   hydraulicOil: string;
 }
+
+/** What an annual inspection of a self-propelled machine covers. */
+export const INSPECT_SELF_PROPELLED =
+  'Lights and beacons, slow-moving-vehicle sign, seat belt and rollover or cab structure, guards and shields, steering, brakes and parking brake, mirrors, emergency stop.';
+
+export const UTF = 'Universal tractor fluid (UTF)';
+export const HYD46 = 'Hydraulic oil ISO VG 46';
 
 const LOCK_OUT = 'Park on level ground, lower all equipment, stop the engine and take the key. ';
 
@@ -129,7 +141,10 @@ export function engineTasks(units: UnitSystem, s: EngineSpec): TaskInput[] {
       intervalMeter: 500,
       warnMeter: 50,
       warnDays: 14,
-      parts: [part(pn('FF', 24), 'Primary fuel filter / water separator'), part(pn('FF', 25), 'Secondary fuel filter')],
+      parts: [
+        part(pn('FF', 24), 'Primary fuel filter / water separator'),
+        part(pn('FF', 25), 'Secondary fuel filter'),
+      ],
       labourHours: 0.75,
       instructions: `${LOCK_OUT}Replace both filters, drain water from the separator and prime the system. No open flames.`,
     }),
@@ -149,7 +164,8 @@ export function engineTasks(units: UnitSystem, s: EngineSpec): TaskInput[] {
       warnDays: 90,
       fluids: [fluid(units, 'Coolant, extended-life, 50/50 premix', s.coolantL, 'L')],
       labourHours: 2,
-      instructions: 'Drain and flush the cooling system cold, refill with premix and bleed air; check hoses and the cap.',
+      instructions:
+        'Drain and flush the cooling system cold, refill with premix and bleed air; check hoses and the cap.',
       hazards: ['hot_fluid'],
     }),
   ];
@@ -190,7 +206,11 @@ export function ptoCheckTask(): TaskInput {
 }
 
 /** The calendar items: annual safety inspection, battery, fire extinguisher (as chosen). */
-export function calendarTasks(opts: { inspection: string; battery?: boolean; extinguisher?: boolean }): TaskInput[] {
+export function calendarTasks(opts: {
+  inspection: string;
+  battery?: boolean;
+  extinguisher?: boolean;
+}): TaskInput[] {
   const tasks = [
     task({
       name: 'Annual safety inspection',
@@ -207,7 +227,8 @@ export function calendarTasks(opts: { inspection: string; battery?: boolean; ext
         intervalDays: 180,
         warnDays: 14,
         labourHours: 0.3,
-        instructions: 'Clean and tighten terminals, check the charge and the hold-down, look for cracks and swelling.',
+        instructions:
+          'Clean and tighten terminals, check the charge and the hold-down, look for cracks and swelling.',
         hazards: ['battery'],
       }),
     );
@@ -219,7 +240,8 @@ export function calendarTasks(opts: { inspection: string; battery?: boolean; ext
         intervalDays: 365,
         warnDays: 30,
         labourHours: 0.2,
-        instructions: 'Check the gauge, seal, hose and mounting; have it serviced as local rules require.',
+        instructions:
+          'Check the gauge, seal, hose and mounting; have it serviced as local rules require.',
       }),
     );
   }

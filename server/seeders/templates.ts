@@ -8,10 +8,13 @@ import {
   engineTasks,
   fluid,
   greaseTask,
+  INSPECT_SELF_PROPELLED,
   part,
   ptoCheckTask,
   task,
+  UTF,
 } from './template-tasks';
+import { combine, loader, mower, other, sprayer } from './templates-self-propelled';
 
 export interface TemplateDefinition {
   category: MachineCategory;
@@ -23,74 +26,38 @@ export interface TemplateDefinition {
 export const TEMPLATE_DESCRIPTION =
   "Typical intervals of common practice for the demo — replace them with the figures of this machine's operator's manual.";
 
-const INSPECT_SELF_PROPELLED =
-  'Lights and beacons, slow-moving-vehicle sign, seat belt and rollover or cab structure, guards and shields, steering, brakes and parking brake, mirrors, emergency stop.';
-
-const UTF = 'Universal tractor fluid (UTF)';
-const HYD46 = 'Hydraulic oil ISO VG 46';
-
 function tractor(units: UnitSystem): TaskInput[] {
   return [
-    ...engineTasks(units, { code: '11', engineOilL: 18, hydraulicOilL: 120, coolantL: 40, hydraulicOil: UTF }),
+    ...engineTasks(units, {
+      code: '11',
+      engineOilL: 18,
+      hydraulicOilL: 120,
+      coolantL: 40,
+      hydraulicOil: UTF,
+    }),
     ptoCheckTask(),
-    greaseTask(units, 'Front axle, hitch and loader pivots', 50, 0.4, ['raised_load'], 'Grease every fitting on the front axle, three-point hitch and loader pivots; wipe off the old grease.'),
+    greaseTask(
+      units,
+      'Front axle, hitch and loader pivots',
+      50,
+      0.4,
+      ['raised_load'],
+      'Grease every fitting on the front axle, three-point hitch and loader pivots; wipe off the old grease.',
+    ),
     ...calendarTasks({ inspection: `${INSPECT_SELF_PROPELLED} Hitch pins, drawbar, PTO guards.` }),
-  ];
-}
-
-function combine(units: UnitSystem): TaskInput[] {
-  return [
-    ...engineTasks(units, { code: '18', engineOilL: 32, hydraulicOilL: 95, coolantL: 70, hydraulicOil: HYD46 }),
-    greaseTask(units, 'Daily grease points', 10, 0.3, ['raised_load', 'stored_energy'], 'Grease the daily points of the chart (feeder house, header drive, unloading auger); header lowered or on its lock.'),
-    task({
-      name: 'Belts, chains and feeder house check',
-      intervalMeter: 250,
-      warnMeter: 25,
-      warnDays: 14,
-      parts: [part('HS-DB-1830', 'Rotor drive belt', 1)],
-      labourHours: 1.5,
-      instructions: 'Check tension and wear of belts and chains, feeder chain slats and sprockets; replace the rotor belt when glazed or cracked.',
-      hazards: ['stored_energy', 'raised_load'],
-    }),
-    ...calendarTasks({ inspection: `${INSPECT_SELF_PROPELLED} Header lock, chaff and dust clean-down, electrical wiring near hot parts.` }),
-  ];
-}
-
-function sprayer(units: UnitSystem): TaskInput[] {
-  return [
-    ...engineTasks(units, { code: '15', engineOilL: 24, hydraulicOilL: 130, coolantL: 45, hydraulicOil: HYD46 }),
-    task({
-      name: 'Nozzles, strainers and line filters',
-      intervalMeter: 50,
-      warnMeter: 5,
-      parts: [part('HS-SN-1530', 'Line strainer screen, 50 mesh', 2)],
-      labourHours: 0.75,
-      instructions: 'Rinse the system first. Clean strainers and filters, check nozzle flow and pattern, replace worn tips.',
-      safetyNotes: "Wear the protective equipment the product label requires and rinse the system before opening it. Follow the label, the operator's manual and local rules.",
-    }),
-    task({
-      name: 'Boom fold and breakaway check',
-      intervalMeter: 250,
-      warnMeter: 25,
-      warnDays: 14,
-      labourHours: 1,
-      instructions: 'Check boom fold cylinders, hoses, breakaway springs and pivot wear; grease the boom pivots.',
-      hazards: ['raised_load', 'hydraulic_pressure'],
-    }),
-    task({
-      name: 'Sprayer calibration',
-      intervalDays: 365,
-      warnDays: 30,
-      labourHours: 1.5,
-      instructions: 'Measure nozzle output and ground speed and compare the application rate with the controller.',
-    }),
-    ...calendarTasks({ inspection: `${INSPECT_SELF_PROPELLED} Chemical tank lid, rinse tank and hand-wash water.` }),
   ];
 }
 
 function baler(units: UnitSystem): TaskInput[] {
   return [
-    greaseTask(units, 'Grease points and drive chains', 1000, 0.3, ['pto', 'stored_energy'], 'Grease the chart points and oil the drive chains; check chain tension.'),
+    greaseTask(
+      units,
+      'Grease points and drive chains',
+      1000,
+      0.3,
+      ['pto', 'stored_energy'],
+      'Grease the chart points and oil the drive chains; check chain tension.',
+    ),
     task({
       name: 'Pickup, rollers and belts inspection',
       intervalMeter: 2500,
@@ -98,7 +65,8 @@ function baler(units: UnitSystem): TaskInput[] {
       warnDays: 14,
       parts: [part('HS-PT-1740', 'Pickup tine', 6)],
       labourHours: 1,
-      instructions: 'Replace broken pickup tines, check belt or roller wear and tracking, net or twine knife sharpness.',
+      instructions:
+        'Replace broken pickup tines, check belt or roller wear and tracking, net or twine knife sharpness.',
       hazards: ['pto', 'stored_energy'],
     }),
     task({
@@ -118,60 +86,15 @@ function baler(units: UnitSystem): TaskInput[] {
       warnMeter: 250,
       warnDays: 14,
       labourHours: 0.5,
-      instructions: 'Check the shaft guard turns freely and its chains are fitted, grease the cross journals, check the slip clutch.',
+      instructions:
+        'Check the shaft guard turns freely and its chains are fitted, grease the cross journals, check the slip clutch.',
       hazards: ['pto', 'stored_energy'],
     }),
     ...calendarTasks({
-      inspection: 'Lights and reflectors, slow-moving-vehicle sign, tailgate lock valve, guards, tyres and wheel nuts, hitch and safety chain.',
+      inspection:
+        'Lights and reflectors, slow-moving-vehicle sign, tailgate lock valve, guards, tyres and wheel nuts, hitch and safety chain.',
       battery: false,
     }),
-  ];
-}
-
-function loader(units: UnitSystem): TaskInput[] {
-  return [
-    ...engineTasks(units, { code: '14', engineOilL: 14, hydraulicOilL: 110, coolantL: 28, hydraulicOil: HYD46 }),
-    greaseTask(units, 'Boom, pivots and attachment carrier', 50, 0.4, ['raised_load'], 'Grease the boom, tilt and carriage pins with the boom down.'),
-    task({
-      name: 'Axles and service brake check',
-      intervalMeter: 1000,
-      intervalDays: 365,
-      warnMeter: 100,
-      warnDays: 30,
-      fluids: [fluid(units, 'Axle oil, limited-slip', 16, 'L')],
-      labourHours: 2,
-      instructions: 'Check axle oil, brake performance and parking brake hold; look for leaks at hubs.',
-      hazards: ['stored_energy'],
-    }),
-    ...calendarTasks({ inspection: `${INSPECT_SELF_PROPELLED} Lifting equipment examination as local rules require, load chart, boom lock, attachment locking pins.` }),
-  ];
-}
-
-function mower(units: UnitSystem): TaskInput[] {
-  return [
-    ...engineTasks(units, { code: '16', engineOilL: 16, hydraulicOilL: 80, coolantL: 30, hydraulicOil: HYD46 }),
-    greaseTask(units, 'Daily grease points', 10, 0.2, ['raised_load'], 'Grease the header pivots and conditioner roll bearings with the header lowered or on its lock.'),
-    task({
-      name: 'Cutterbar, knives and discs inspection',
-      intervalMeter: 50,
-      warnMeter: 5,
-      parts: [part('HS-KN-1630', 'Mower knife, twisted', 4)],
-      labourHours: 0.75,
-      instructions: 'Check knives, bolts and disc hubs for wear or damage; replace knives in pairs.',
-      hazards: ['raised_load', 'stored_energy'],
-    }),
-    task({
-      name: 'Header gearbox oil',
-      intervalMeter: 250,
-      intervalDays: 365,
-      warnMeter: 25,
-      warnDays: 30,
-      fluids: [fluid(units, 'Gear oil 80W-90', 4, 'L')],
-      labourHours: 1,
-      instructions: 'Drain the cutterbar and header gearboxes warm, refill to the level plugs.',
-      hazards: ['hot_fluid', 'raised_load'],
-    }),
-    ...calendarTasks({ inspection: `${INSPECT_SELF_PROPELLED} Knife guards and curtains.` }),
   ];
 }
 
@@ -186,7 +109,8 @@ function truck(units: UnitSystem): TaskInput[] {
       parts: [part('HS-OF-1920', 'Engine oil filter, cartridge')],
       fluids: [fluid(units, 'Engine oil 10W-30, heavy duty', 38, 'L')],
       labourHours: 1,
-      instructions: 'Drain warm oil, replace the filter, refill and check the level after a short run.',
+      instructions:
+        'Drain warm oil, replace the filter, refill and check the level after a short run.',
       hazards: ['hot_fluid'],
     }),
     task({
@@ -194,7 +118,10 @@ function truck(units: UnitSystem): TaskInput[] {
       intervalMeter: 30000,
       warnMeter: 3000,
       warnDays: 14,
-      parts: [part('HS-FF-1924', 'Fuel filter / water separator'), part('HS-FF-1925', 'Secondary fuel filter')],
+      parts: [
+        part('HS-FF-1924', 'Fuel filter / water separator'),
+        part('HS-FF-1925', 'Secondary fuel filter'),
+      ],
       labourHours: 0.75,
       instructions: 'Replace both filters, drain the separator and prime. No open flames.',
     }),
@@ -204,7 +131,8 @@ function truck(units: UnitSystem): TaskInput[] {
       warnMeter: 1500,
       warnDays: 14,
       labourHours: 0.3,
-      instructions: 'Check the restriction indicator and the element (HS-AF-1926); replace when restricted.',
+      instructions:
+        'Check the restriction indicator and the element (HS-AF-1926); replace when restricted.',
     }),
     task({
       name: 'Transmission and axle oil',
@@ -214,7 +142,8 @@ function truck(units: UnitSystem): TaskInput[] {
       warnDays: 60,
       fluids: [fluid(units, 'Gear oil 75W-90, synthetic', 28, 'L')],
       labourHours: 2,
-      instructions: 'Drain transmission and drive axle warm, clean the magnetic plugs, refill to the level plugs.',
+      instructions:
+        'Drain transmission and drive axle warm, clean the magnetic plugs, refill to the level plugs.',
       hazards: ['hot_fluid'],
     }),
     task({
@@ -225,7 +154,8 @@ function truck(units: UnitSystem): TaskInput[] {
       warnDays: 90,
       fluids: [fluid(units, 'Coolant, extended-life, 50/50 premix', 45, 'L')],
       labourHours: 2,
-      instructions: 'Drain and refill the cooling system cold and bleed air; check hoses and the cap.',
+      instructions:
+        'Drain and refill the cooling system cold and bleed air; check hoses and the cap.',
       hazards: ['hot_fluid'],
     }),
     task({
@@ -236,10 +166,18 @@ function truck(units: UnitSystem): TaskInput[] {
       warnDays: 14,
       labourHours: 1.5,
       instructions: 'Check lining wear, slack adjusters, air leaks and drain the air tanks.',
-      safetyNotes: "Chock the wheels. Spring brake chambers hold a strong spring: never take one apart. Follow the manual, local road rules and qualified service practice.",
+      safetyNotes:
+        'Chock the wheels. Spring brake chambers hold a strong spring: never take one apart. Follow the manual, local road rules and qualified service practice.',
       hazards: ['stored_energy'],
     }),
-    greaseTask(units, 'Chassis and body hinge grease', 5000, 0.5, ['raised_load'], 'Grease the chassis, steering and body hinge points with the body down or on its prop.'),
+    greaseTask(
+      units,
+      'Chassis and body hinge grease',
+      5000,
+      0.5,
+      ['raised_load'],
+      'Grease the chassis, steering and body hinge points with the body down or on its prop.',
+    ),
     task({
       name: 'Hoist and tailgate check',
       intervalDays: 365,
@@ -248,13 +186,23 @@ function truck(units: UnitSystem): TaskInput[] {
       instructions: 'Check hoist cylinder, hoses, body prop, tailgate latches and the grain door.',
       hazards: ['raised_load', 'hydraulic_pressure'],
     }),
-    ...calendarTasks({ inspection: 'Roadworthiness as local rules require: lights, tyres and wheel nuts, steering, mirrors, load securing, horn and wipers.' }),
+    ...calendarTasks({
+      inspection:
+        'Roadworthiness as local rules require: lights, tyres and wheel nuts, steering, mirrors, load securing, horn and wipers.',
+    }),
   ];
 }
 
 function implement(units: UnitSystem): TaskInput[] {
   return [
-    greaseTask(units, 'Grease points', 50, 0.3, ['pto'], 'Grease the chart points, PTO shaft cross journals and guard bearings.'),
+    greaseTask(
+      units,
+      'Grease points',
+      50,
+      0.3,
+      ['pto'],
+      'Grease the chart points, PTO shaft cross journals and guard bearings.',
+    ),
     task({
       name: 'Gearbox oil',
       intervalMeter: 500,
@@ -272,7 +220,8 @@ function implement(units: UnitSystem): TaskInput[] {
       warnMeter: 25,
       warnDays: 14,
       labourHours: 0.5,
-      instructions: 'Check the guard turns freely, its restraint chains are fitted and the shaft overlap is right.',
+      instructions:
+        'Check the guard turns freely, its restraint chains are fitted and the shaft overlap is right.',
       hazards: ['pto', 'stored_energy'],
     }),
     task({
@@ -291,30 +240,15 @@ function implement(units: UnitSystem): TaskInput[] {
       warnMeter: 25,
       warnDays: 14,
       labourHours: 0.5,
-      instructions: 'Check tyre pressure and damage, torque the wheel nuts, check the drawbar eye, jack and safety chain.',
+      instructions:
+        'Check tyre pressure and damage, torque the wheel nuts, check the drawbar eye, jack and safety chain.',
     }),
     ...calendarTasks({
-      inspection: 'Lights and reflectors, slow-moving-vehicle sign, brakes and breakaway where fitted, guards and shields, hitch.',
+      inspection:
+        'Lights and reflectors, slow-moving-vehicle sign, brakes and breakaway where fitted, guards and shields, hitch.',
       battery: false,
       extinguisher: false,
     }),
-  ];
-}
-
-function other(units: UnitSystem): TaskInput[] {
-  return [
-    ...engineTasks(units, { code: '17', engineOilL: 28, hydraulicOilL: 120, coolantL: 60, hydraulicOil: HYD46 }),
-    greaseTask(units, 'Daily grease points', 10, 0.3, ['raised_load', 'stored_energy'], 'Grease the daily points of the chart with attachments lowered or on their locks.'),
-    task({
-      name: 'Belts, chains and knives check',
-      intervalMeter: 250,
-      warnMeter: 25,
-      warnDays: 14,
-      labourHours: 1,
-      instructions: 'Check drive belts and chains, knives and wear parts; sharpen or replace as the manual describes.',
-      hazards: ['stored_energy'],
-    }),
-    ...calendarTasks({ inspection: INSPECT_SELF_PROPELLED }),
   ];
 }
 

@@ -22,7 +22,14 @@ const visibleToOperator = `(NOT EXISTS (SELECT 1 FROM machine_operators o WHERE 
   OR EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = m.organization_id AND o.machine_id = m.id AND o.user_id = :user))`;
 
 /** The SQL of the due list (also timed bare by the benchmark). */
-export function dueListSql(filters: { category?: boolean; status?: boolean; machineId?: boolean; horizon?: boolean; operator?: boolean }) {
+export function dueListSql(filters: {
+  category?: boolean;
+  status?: boolean;
+  machineId?: boolean;
+  horizon?: boolean;
+  operator?: boolean;
+  page?: boolean;
+}) {
   const where = ['d.organization_id = :org', "m.status <> 'sold'"];
   if (filters.category) where.push('m.category = :category');
   if (filters.status) where.push('d.status = :status');
@@ -37,8 +44,8 @@ export function dueListSql(filters: { category?: boolean; status?: boolean; mach
     JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
     LEFT JOIN machine_forecasts f ON f.machine_id = d.machine_id AND f.organization_id = d.organization_id
     WHERE ${where.join(' AND ')}
-    ORDER BY CASE d.status WHEN 'overdue' THEN 0 WHEN 'due_soon' THEN 1 WHEN 'ok' THEN 2 ELSE 3 END,
-      d.sort_date ASC NULLS LAST, m.fleet_number, t.position`;
+    ORDER BY d.status_rank, d.sort_date ASC NULLS LAST, d.task_id
+    ${filters.page ? 'LIMIT :limit OFFSET :offset' : ''}`;
 }
 
 interface RawDueRow {
@@ -59,7 +66,11 @@ interface RawDueRow {
 }
 
 /** The due list of an organization: overdue first, then by the date each task falls due. */
-export async function dueList(access: OrgAccess, query: DueQuery, now = new Date()) {
+export async function dueList(
+  access: OrgAccess,
+  query: DueQuery & { page?: number; pageSize?: number },
+  now = new Date(),
+) {
   const { organization } = access;
   await ensureDuePointsCurrent(organization.id, organization.timeZone, now);
   const asOf = todayIso(organization.timeZone, now);
@@ -70,7 +81,10 @@ export async function dueList(access: OrgAccess, query: DueQuery, now = new Date
     machineId: !!query.machineId,
     horizon: !!query.horizon,
     operator,
+    page: query.pageSize !== undefined,
   });
+  const pageSize = query.pageSize ?? 0;
+  const page = query.page ?? 1;
   const raw = await sequelize.query<RawDueRow>(sql, {
     replacements: {
       org: organization.id,
@@ -79,6 +93,8 @@ export async function dueList(access: OrgAccess, query: DueQuery, now = new Date
       status: query.status ?? null,
       machineId: query.machineId ?? null,
       until: query.horizon ? addDaysIso(asOf, query.horizon) : null,
+      limit: pageSize,
+      offset: (page - 1) * pageSize,
     },
     type: QueryTypes.SELECT,
   });
@@ -102,9 +118,36 @@ export async function dueList(access: OrgAccess, query: DueQuery, now = new Date
         : null,
     usage: r.usage && { method: r.usage.method, rate: r.usage.rate, low: r.usage.low, high: r.usage.high },
   }));
+  const counts = await dueCounts(access, query, asOf);
+  const total = query.status ? counts[query.status] : Object.values(counts).reduce((a, b) => a + b, 0);
+  return { asOf, rows, counts, total, stale: await staleMachines(access, asOf, now) };
+}
+
+/** Tasks per status with the same filters as the list (status aside), for the counters. */
+async function dueCounts(access: OrgAccess, query: DueQuery, asOf: string) {
+  const where = ['d.organization_id = :org', "m.status <> 'sold'"];
+  if (query.category) where.push('m.category = :category');
+  if (query.machineId) where.push('d.machine_id = :machineId');
+  if (query.horizon) where.push("(d.status IN ('overdue','due_soon','no_forecast') OR d.sort_date <= :until)");
+  if (hasRole(access, 'operator')) where.push(visibleToOperator);
+  const rows = await sequelize.query<{ status: DuePoint['status']; n: number }>(
+    `SELECT d.status, count(*)::int AS n FROM task_due_points d
+     JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
+     WHERE ${where.join(' AND ')} GROUP BY d.status`,
+    {
+      replacements: {
+        org: access.organization.id,
+        user: access.userId,
+        category: query.category ?? null,
+        machineId: query.machineId ?? null,
+        until: query.horizon ? addDaysIso(asOf, query.horizon) : null,
+      },
+      type: QueryTypes.SELECT,
+    },
+  );
   const counts = { overdue: 0, due_soon: 0, ok: 0, no_forecast: 0 };
-  for (const r of rows) counts[r.due.status]++;
-  return { asOf, rows, counts, stale: await staleMachines(access, asOf, now) };
+  for (const r of rows) counts[r.status] = r.n;
+  return counts;
 }
 
 /** Machines in season (or with no season set) with no reading for STALE_READING_DAYS days. */

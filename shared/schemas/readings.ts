@@ -45,3 +45,14 @@ export const dueQuerySchema = z.object({
   machineId: uuid.optional(),
 });
 export type DueQuery = z.infer<typeof dueQuerySchema>;
+
+export const dueListQuerySchema = dueQuerySchema.extend({
+  page: z.coerce.number().int().min(1, { error: 'Page starts at 1' }).default(1),
+  pageSize: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(500, { error: 'At most 500 rows per page' })
+    .default(100),
+});
+export type DueListQuery = z.infer<typeof dueQuerySchema>;

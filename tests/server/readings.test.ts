@@ -22,7 +22,7 @@ describe('readings API — the rules', () => {
   beforeEach(resetDatabase);
 
   it('readings — 401 without sign-in; 404 for another farm; operator may log', async () => {
-    const { org, machine, url } = await farm();
+    const { org, url } = await farm();
     expect((await request(app).post(url).send({ value: 1 })).status).toBe(401);
     const other = await createOrganization();
     const { user: stranger } = await createMember(other, 'manager');

@@ -10,7 +10,8 @@ import {
   type GeneratedReading,
   type GenerateReadingsOptions,
 } from '../../server/seeders/readings-generator';
-import { DEMO_MACHINES, DEMO_ORGANIZATIONS } from '../../server/seeders/demo-fleet';
+import { DEMO_MACHINES } from '../../server/seeders/demo-fleet';
+import { DEMO_ORGANIZATIONS } from '../../server/seeders/demo-people';
 import { buildTemplates, TEMPLATE_DESCRIPTION } from '../../server/seeders/templates';
 import { createRandom } from '../../server/seeders/random';
 
@@ -88,7 +89,10 @@ describe('demo seed — readings generator', () => {
     for (const m of DEMO_MACHINES) {
       const readings = generateReadings(demoOptions(m));
       for (const g of gaps(readings)) {
-        expect(g.increase, `${m.fleetNumber} at ${g.to.takenAt.toISOString()}`).toBeGreaterThanOrEqual(0);
+        expect(
+          g.increase,
+          `${m.fleetNumber} at ${g.to.takenAt.toISOString()}`,
+        ).toBeGreaterThanOrEqual(0);
         expect(g.days, m.fleetNumber).toBeGreaterThan(0);
       }
     }
@@ -137,17 +141,22 @@ describe('demo seed — readings generator', () => {
   it('seed generator — a year of use — about ratePerDay × 365 between readings a year apart', () => {
     const readings = generateReadings(combine);
     const last = readings[readings.length - 1];
-    const yearAgo = readings.filter((r) => r.takenAt.getTime() <= last.takenAt.getTime() - 365 * DAY).pop()!;
+    const yearAgo = readings
+      .filter((r) => r.takenAt.getTime() <= last.takenAt.getTime() - 365 * DAY)
+      .pop()!;
     expect(last.value - yearAgo.value).toBeGreaterThan(300 * 0.8);
     expect(last.value - yearAgo.value).toBeLessThan(300 * 1.2);
   });
 
   it('seed generator — cadence — readings every few days in season, weeks apart out of season', () => {
     const readings = generateReadings(combine);
-    const month = (r: GeneratedReading) => new TZDate(r.takenAt.getTime(), combine.timeZone).getMonth() + 1;
+    const month = (r: GeneratedReading) =>
+      new TZDate(r.takenAt.getTime(), combine.timeZone).getMonth() + 1;
     const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
     const all = gaps(readings);
-    const inSeason = all.filter((g) => [8, 9, 10].includes(month(g.from)) && [8, 9, 10].includes(month(g.to)));
+    const inSeason = all.filter(
+      (g) => [8, 9, 10].includes(month(g.from)) && [8, 9, 10].includes(month(g.to)),
+    );
     const offSeason = all.filter((g) => [1, 2, 3, 4, 5, 6].includes(month(g.from)));
     expect(median(inSeason.map((g) => g.days))).toBeLessThanOrEqual(3.5);
     expect(median(offSeason.map((g) => g.days))).toBeGreaterThanOrEqual(13);
@@ -180,7 +189,9 @@ describe('demo seed — schedule templates', () => {
         expect(t.tasks.length, t.category).toBeGreaterThanOrEqual(5);
         for (const task of t.tasks) {
           const parsed = taskInputSchema.safeParse(task);
-          expect(parsed.success, `${t.category}: ${task.name} ${parsed.error?.message ?? ''}`).toBe(true);
+          expect(parsed.success, `${t.category}: ${task.name} ${parsed.error?.message ?? ''}`).toBe(
+            true,
+          );
           if (task.hazards.length) expect(task.safetyNotes, task.name).toMatch(/manual/);
           if (task.warnMeter !== null && task.intervalMeter !== null) {
             expect(task.warnMeter / task.intervalMeter, task.name).toBeLessThanOrEqual(0.1);

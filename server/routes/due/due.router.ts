@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
-import { dueQuerySchema } from '../../../shared/schemas/readings';
+import { dueListQuerySchema } from '../../../shared/schemas/readings';
 import { duePointSchema } from '../../presenters/machine';
 import { dueList } from '../../services/due-list';
 import { loadMachine } from '../../services/machines';
@@ -32,6 +32,9 @@ const dueResponse = z.object({
   data: z.array(dueRowSchema),
   meta: z.object({
     asOf: z.string(),
+    total: z.number(),
+    page: z.number(),
+    pageSize: z.number(),
     counts: z.object({ overdue: z.number(), due_soon: z.number(), ok: z.number(), no_forecast: z.number() }),
     stale: z.array(
       z.object({
@@ -52,11 +55,11 @@ export function dueRouter(): Router {
     summary: 'The due list across the farm: overdue first, then by projected date; counts and stale meters',
     tags: ['due'],
     params: orgParams,
-    query: dueQuerySchema,
+    query: dueListQuerySchema,
     response: dueResponse,
     handler: async ({ req, query }) => {
-      const { asOf, rows, counts, stale } = await dueList(req.access!, query);
-      return { data: rows, meta: { asOf, counts, stale } };
+      const { asOf, rows, counts, stale, total } = await dueList(req.access!, query);
+      return { data: rows, meta: { asOf, counts, stale, total, page: query.page, pageSize: query.pageSize } };
     },
   });
 
@@ -69,8 +72,9 @@ export function dueRouter(): Router {
     response: dueResponse,
     handler: async ({ req, params }) => {
       await loadMachine(req.access!, params.machineId);
-      const { asOf, rows, counts, stale } = await dueList(req.access!, { machineId: params.machineId });
-      return { data: rows, meta: { asOf, counts, stale: stale.filter((s) => s.machine.id === params.machineId) } };
+      const { asOf, rows, counts, stale, total } = await dueList(req.access!, { machineId: params.machineId });
+      const own = stale.filter((s) => s.machine.id === params.machineId);
+      return { data: rows, meta: { asOf, counts, stale: own, total, page: 1, pageSize: total } };
     },
   });
 

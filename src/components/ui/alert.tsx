@@ -4,18 +4,17 @@ import { Icon, type IconName } from './icons';
 
 export type AlertTone = 'error' | 'warning' | 'info' | 'success';
 
-const TONES: Record<AlertTone, { classes: string; icon: IconName; label: string }> = {
-  error: { classes: 'border-poppy-300 bg-poppy-50 text-poppy-800', icon: 'error', label: 'Error' },
+// Each tone has its own icon as well as its colour; the words carry the message.
+const TONES: Record<AlertTone, { classes: string; icon: IconName }> = {
+  error: { classes: 'border-poppy-300 bg-poppy-50 text-poppy-800', icon: 'error' },
   warning: {
     classes: 'border-straw-400 bg-straw-50 text-straw-900',
     icon: 'alert',
-    label: 'Warning',
   },
-  info: { classes: 'border-sky-300 bg-sky-50 text-sky-900', icon: 'info', label: 'Note' },
+  info: { classes: 'border-sky-300 bg-sky-50 text-sky-900', icon: 'info' },
   success: {
     classes: 'border-clover-300 bg-clover-50 text-clover-800',
     icon: 'check',
-    label: 'Done',
   },
 };
 
@@ -28,10 +27,10 @@ interface AlertProps {
 
 /**
  * A message box. Errors are announced at once (role="alert"); the other tones politely
- * (role="status"). The tone is spelled out for screen readers, not only coloured.
+ * (role="status"). The text itself is exactly the message, so it reads the same to everyone.
  */
 export function Alert({ tone = 'error', title, children, className }: AlertProps) {
-  const { classes, icon, label } = TONES[tone];
+  const { classes, icon } = TONES[tone];
   return (
     <div
       role={tone === 'error' ? 'alert' : 'status'}
@@ -39,7 +38,6 @@ export function Alert({ tone = 'error', title, children, className }: AlertProps
     >
       <Icon name={icon} className="mt-0.5 size-5" />
       <div className="min-w-0 flex-1">
-        <span className="sr-only">{label}: </span>
         {title ? <p className="font-bold">{title}</p> : null}
         <div className={title ? 'mt-0.5' : undefined}>{children}</div>
       </div>
