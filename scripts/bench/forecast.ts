@@ -68,6 +68,8 @@ async function buildFarm() {
   const t1 = performance.now();
   for (const m of machines) await refreshMachineForecast(m.id, org.id);
   const summarised = performance.now() - t1;
+  // A live database is analysed by autovacuum; do it now so plans reflect the bulk load.
+  await sequelize.query('VACUUM ANALYZE');
   return { org, user, machines, built, summarised };
 }
 
