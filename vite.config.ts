@@ -10,6 +10,6 @@ export default defineConfig({
   server: {
     port: Number(process.env.CLIENT_PORT ?? 5310),
     strictPort: true,
-    proxy: { '/api': `http://127.0.0.1:${apiPort}`, '/dev': `http://127.0.0.1:${apiPort}` },
+    proxy: { '/api': `http://127.0.0.1:${apiPort}` },
   },
 });

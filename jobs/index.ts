@@ -10,8 +10,16 @@ import * as refreshForecasts from './refresh-forecasts';
 const schedule = loadJobSchedule();
 
 const jobs = [
-  { name: 'deliver-mail', expression: schedule.DELIVER_MAIL_CRON, perform: () => deliverMail.perform() },
-  { name: 'refresh-forecasts', expression: schedule.REFRESH_FORECASTS_CRON, perform: () => refreshForecasts.perform() },
+  {
+    name: 'deliver-mail',
+    expression: schedule.DELIVER_MAIL_CRON,
+    perform: () => deliverMail.perform(),
+  },
+  {
+    name: 'refresh-forecasts',
+    expression: schedule.REFRESH_FORECASTS_CRON,
+    perform: () => refreshForecasts.perform(),
+  },
 ];
 
 const tasks = jobs.map((job) =>

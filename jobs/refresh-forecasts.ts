@@ -6,7 +6,8 @@ import { withJobLock } from './lock';
 export async function perform(now = new Date()) {
   return withJobLock('refresh-forecasts', async () => {
     const orgs = await Organization.findAll({ where: { kind: 'farm' } });
-    for (const org of orgs) await recomputeDuePoints(org.id, undefined, { timeZone: org.timeZone, now });
+    for (const org of orgs)
+      await recomputeDuePoints(org.id, undefined, { timeZone: org.timeZone, now });
     return { organizations: orgs.length };
   });
 }

@@ -6,7 +6,9 @@ const cron = (name: string, fallback: string) =>
   z
     .string()
     .default(fallback)
-    .refine((v) => validate(v), { error: `${name} must be a node-cron expression, e.g. "*/5 * * * *"` });
+    .refine((v) => validate(v), {
+      error: `${name} must be a node-cron expression, e.g. "*/5 * * * *"`,
+    });
 
 export const jobScheduleSchema = z.object({
   DELIVER_MAIL_CRON: cron('DELIVER_MAIL_CRON', '* * * * *'),
@@ -16,7 +18,9 @@ export const jobScheduleSchema = z.object({
 export function loadJobSchedule(source: NodeJS.ProcessEnv = process.env) {
   const parsed = jobScheduleSchema.safeParse(source);
   if (!parsed.success) {
-    throw new Error(`Invalid job schedule:\n${parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`).join('\n')}`);
+    throw new Error(
+      `Invalid job schedule:\n${parsed.error.issues.map((i) => `  ${i.path.join('.')}: ${i.message}`).join('\n')}`,
+    );
   }
   return parsed.data;
 }

@@ -20,6 +20,9 @@ export const invalid = (fields: Record<string, string>, message?: string) =>
   new AppError(
     422,
     'invalid',
-    message ?? Object.entries(fields).map(([k, v]) => `${k}: ${v}`).join('; '),
+    message ??
+      Object.entries(fields)
+        .map(([k, v]) => `${k}: ${v}`)
+        .join('; '),
     fields,
   );

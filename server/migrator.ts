@@ -13,7 +13,8 @@ export const migrator = new Umzug<QueryInterface>({
   migrations: {
     glob: ['*.ts', { cwd: dir }],
     resolve: ({ name, path: file, context }) => {
-      const load = () => import(pathToFileURL(file!).href) as Promise<{ up: Migration; down: Migration }>;
+      const load = () =>
+        import(pathToFileURL(file!).href) as Promise<{ up: Migration; down: Migration }>;
       return {
         name,
         up: async () => (await load()).up({ name, context }),

@@ -7,10 +7,23 @@ import bcrypt from 'bcryptjs';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../server/db';
 import { createApp } from '../../server/app';
-import { Machine, Membership, MachineForecast, Organization, ServiceTask, User } from '../../server/models';
+import {
+  Machine,
+  Membership,
+  MachineForecast,
+  Organization,
+  ServiceTask,
+  User,
+} from '../../server/models';
 import { refreshMachineForecast } from '../../server/services/forecast';
 import { dueListSql } from '../../server/services/due-list';
-import { addDaysIso, computeDuePoint, estimateUsage, localDayNumber, todayIso } from '../../shared/domain';
+import {
+  addDaysIso,
+  computeDuePoint,
+  estimateUsage,
+  localDayNumber,
+  todayIso,
+} from '../../shared/domain';
 
 const arg = (name: string, fallback: number) =>
   Number(process.argv.find((a) => a.startsWith(`--${name}=`))?.split('=')[1] ?? fallback);
@@ -36,8 +49,17 @@ async function time(runs: number, fn: (i: number) => Promise<unknown> | unknown)
 async function buildFarm() {
   const t0 = performance.now();
   await sequelize.query('TRUNCATE organizations, users RESTART IDENTITY CASCADE');
-  const org = await Organization.create({ name: 'Benchmark Farm', kind: 'farm', timeZone: 'America/Chicago', units: 'metric' });
-  const user = await User.create({ email: 'bench@bench.example', name: 'Bench', passwordHash: bcrypt.hashSync('bench-password', 4) });
+  const org = await Organization.create({
+    name: 'Benchmark Farm',
+    kind: 'farm',
+    timeZone: 'America/Chicago',
+    units: 'metric',
+  });
+  const user = await User.create({
+    email: 'bench@bench.example',
+    name: 'Bench',
+    passwordHash: bcrypt.hashSync('bench-password', 4),
+  });
   await Membership.create({ organizationId: org.id, userId: user.id, role: 'manager' });
   // Machines, tasks and two years of daily readings generated in SQL (fast, deterministic).
   await sequelize.query(
@@ -74,21 +96,39 @@ async function buildFarm() {
 }
 
 const { org, machines, built, summarised } = await buildFarm();
-const [{ n: readings }] = await sequelize.query<{ n: number }>('SELECT count(*)::int AS n FROM meter_readings', { type: QueryTypes.SELECT });
-console.log(`farm: ${MACHINES} machines, ${MACHINES * TASKS} tasks, ${readings.toLocaleString('en-US')} readings (built in ${(built / 1000).toFixed(1)} s; summaries in ${(summarised / 1000).toFixed(1)} s)`);
+const [{ n: readings }] = await sequelize.query<{ n: number }>(
+  'SELECT count(*)::int AS n FROM meter_readings',
+  { type: QueryTypes.SELECT },
+);
+console.log(
+  `farm: ${MACHINES} machines, ${MACHINES * TASKS} tasks, ${readings.toLocaleString('en-US')} readings (built in ${(built / 1000).toFixed(1)} s; summaries in ${(summarised / 1000).toFixed(1)} s)`,
+);
 
 const app = createApp();
 const agent = request.agent(app);
-await agent.post('/api/v1/auth/sign-in').send({ email: 'bench@bench.example', password: 'bench-password' });
+await agent
+  .post('/api/v1/auth/sign-in')
+  .send({ email: 'bench@bench.example', password: 'bench-password' });
 const asOf = todayIso(org.timeZone);
 
 // 1. Due list through the API vs the bare SQL it needs (same filters: 30-day horizon, the dashboard's default).
 const horizon = 30;
 const PAGE = 100;
 const sql = dueListSql({ horizon: true, page: true });
-const replacements = { org: org.id, user: null, category: null, status: null, machineId: null, until: addDaysIso(asOf, horizon), limit: PAGE, offset: 0 };
+const replacements = {
+  org: org.id,
+  user: null,
+  category: null,
+  status: null,
+  machineId: null,
+  until: addDaysIso(asOf, horizon),
+  limit: PAGE,
+  offset: 0,
+};
 await agent.get(`/api/v1/organizations/${org.id}/due?horizon=${horizon}`); // warm-up (brings due points current)
-const bareMs = await time(RUNS, () => sequelize.query(sql, { replacements, type: QueryTypes.SELECT }));
+const bareMs = await time(RUNS, () =>
+  sequelize.query(sql, { replacements, type: QueryTypes.SELECT }),
+);
 let rows = 0;
 const apiMs = await time(RUNS, async () => {
   const res = await agent.get(`/api/v1/organizations/${org.id}/due?horizon=${horizon}`);
@@ -114,14 +154,17 @@ const insertMs = await time(RUNS * 2, (i) =>
 
 // 3. Forecast of one machine from its full history (two years of daily points, 10 tasks) vs one pass over the points.
 const forecast = (await MachineForecast.findByPk(machines[1].id))!;
-const tasks = await ServiceTask.findAll({ where: { organizationId: org.id, machineId: machines[1].id } });
+const tasks = await ServiceTask.findAll({
+  where: { organizationId: org.id, machineId: machines[1].id },
+});
 const asOfDay = localDayNumber(new Date(), org.timeZone);
 const REPS = 2000;
 const forecastMs =
   (await time(5, () => {
     for (let r = 0; r < REPS; r++) {
       const usage = estimateUsage(forecast.daily, asOfDay);
-      for (const t of tasks) computeDuePoint({ ...t.get(), lastDoneOn: t.lastDoneOn }, usage, asOf, forecast.lastValue);
+      for (const t of tasks)
+        computeDuePoint({ ...t.get(), lastDoneOn: t.lastDoneOn }, usage, asOf, forecast.lastValue);
     }
   })) / REPS;
 let sink = 0;
@@ -132,15 +175,40 @@ const passMs =
 
 const fmt = (ms: number) => (ms < 1 ? `${(ms * 1000).toFixed(0)} µs` : `${ms.toFixed(1)} ms`);
 const table = [
-  [`due list via API (30-day horizon, first ${PAGE} rows + counts)`, apiMs, 'bare SQL of that page', bareMs, `median < 200 ms and < 2× bare`, apiMs < 200 && apiMs / bareMs < 2],
-  ['one reading posted + due points refreshed', postMs, 'bare INSERT of one reading', insertMs, 'median < 30 ms', postMs < 30],
-  ['forecast of one machine (730 days, 10 tasks)', forecastMs, 'one pass over its 730 points', passMs, '< 1 ms', forecastMs < 1],
+  [
+    `due list via API (30-day horizon, first ${PAGE} rows + counts)`,
+    apiMs,
+    'bare SQL of that page',
+    bareMs,
+    `median < 200 ms and < 2× bare`,
+    apiMs < 200 && apiMs / bareMs < 2,
+  ],
+  [
+    'one reading posted + due points refreshed',
+    postMs,
+    'bare INSERT of one reading',
+    insertMs,
+    'median < 30 ms',
+    postMs < 30,
+  ],
+  [
+    'forecast of one machine (730 days, 10 tasks)',
+    forecastMs,
+    'one pass over its 730 points',
+    passMs,
+    '< 1 ms',
+    forecastMs < 1,
+  ],
 ] as const;
-console.log(`due list: ${rows} tasks inside the horizon, ${PAGE} per page; medians of ${RUNS} runs (${RUNS * 2} for posts); history points per machine: ${forecast.daily.length}`);
+console.log(
+  `due list: ${rows} tasks inside the horizon, ${PAGE} per page; medians of ${RUNS} runs (${RUNS * 2} for posts); history points per machine: ${forecast.daily.length}`,
+);
 console.log('| measured | median | baseline | median | ratio | target | met |');
 console.log('|---|---|---|---|---|---|---|');
 for (const [name, ms, baseName, baseMs, target, met] of table) {
-  console.log(`| ${name} | ${fmt(ms)} | ${baseName} | ${fmt(baseMs)} | ${(ms / baseMs).toFixed(1)}× | ${target} | ${met ? 'yes' : 'no'} |`);
+  console.log(
+    `| ${name} | ${fmt(ms)} | ${baseName} | ${fmt(baseMs)} | ${(ms / baseMs).toFixed(1)}× | ${target} | ${met ? 'yes' : 'no'} |`,
+  );
 }
 if (sink < 0) console.log(sink);
 await sequelize.close();

@@ -20,7 +20,13 @@ export const requireAuth: RequestHandler = async (req, _res, next) => {
   const userId = readSession(req.cookies?.[SESSION_COOKIE]);
   if (!userId) throw unauthenticated();
   const user = await User.findByPk(userId, {
-    include: [{ model: Membership, as: 'memberships', include: [{ model: Organization, as: 'organization' }] }],
+    include: [
+      {
+        model: Membership,
+        as: 'memberships',
+        include: [{ model: Organization, as: 'organization' }],
+      },
+    ],
   });
   if (!user) throw unauthenticated();
   const memberships = (user as User & { memberships: Membership[] }).memberships ?? [];

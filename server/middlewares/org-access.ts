@@ -8,7 +8,8 @@ const uuid = z.uuid();
 /** Resolves :orgId against the caller's memberships; anything else answers 404 so ids cannot be probed. */
 export const resolveOrgAccess: RequestHandler = (req, _res, next) => {
   const orgId = req.params.orgId;
-  if (!req.auth || typeof orgId !== 'string' || !uuid.safeParse(orgId).success) throw notFound('Organization');
+  if (!req.auth || typeof orgId !== 'string' || !uuid.safeParse(orgId).success)
+    throw notFound('Organization');
   const membership = isMember(req.auth, orgId);
   if (!membership?.organization) throw notFound('Organization');
   req.access = {

@@ -23,9 +23,12 @@ class PostgresStore implements Store {
     return { totalHits: rows[0].hits, resetTime: new Date(rows[0].reset_at) };
   }
   async decrement(key: string): Promise<void> {
-    await sequelize.query('UPDATE rate_limit_hits SET hits = GREATEST(hits - 1, 0) WHERE key = :key', {
-      replacements: { key: this.prefix + key },
-    });
+    await sequelize.query(
+      'UPDATE rate_limit_hits SET hits = GREATEST(hits - 1, 0) WHERE key = :key',
+      {
+        replacements: { key: this.prefix + key },
+      },
+    );
   }
   async resetKey(key: string): Promise<void> {
     await sequelize.query('DELETE FROM rate_limit_hits WHERE key = :key', {
@@ -50,7 +53,10 @@ export const signInPerAccount = rateLimit({
   skipSuccessfulRequests: true,
   standardHeaders: 'draft-8',
   legacyHeaders: false,
-  keyGenerator: (req) => String(req.body?.email ?? '').trim().toLowerCase() || 'none',
+  keyGenerator: (req) =>
+    String(req.body?.email ?? '')
+      .trim()
+      .toLowerCase() || 'none',
   store: new PostgresStore('signin:account:'),
   message: throttled('for this account'),
 });

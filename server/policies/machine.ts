@@ -3,7 +3,9 @@ import { hasRole, type OrgAccess } from './access';
 
 /** Operators see machines assigned to them, and machines with no assignment at all. */
 export const canViewMachine = (access: OrgAccess, _machine: Machine, assignedUserIds: string[]) =>
-  !hasRole(access, 'operator') || assignedUserIds.length === 0 || assignedUserIds.includes(access.userId);
+  !hasRole(access, 'operator') ||
+  assignedUserIds.length === 0 ||
+  assignedUserIds.includes(access.userId);
 export const canCreateMachine = (access: OrgAccess) => hasRole(access, 'manager');
 export const canUpdateMachine = (access: OrgAccess) => hasRole(access, 'manager');
 export const canEditSchedule = (access: OrgAccess) => hasRole(access, 'manager', 'technician');

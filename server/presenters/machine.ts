@@ -1,5 +1,11 @@
 import { z } from 'zod';
-import type { Machine, MachineForecast, MeterReading, MeterReplacement, ServiceTask } from '../models';
+import type {
+  Machine,
+  MachineForecast,
+  MeterReading,
+  MeterReplacement,
+  ServiceTask,
+} from '../models';
 import type { DuePoint, UsageEstimate } from '../../shared/domain';
 import {
   DUE_STATUSES,
@@ -61,7 +67,12 @@ export const machineSchema = z
 
 export function presentMachine(
   m: Machine,
-  extra: { operatorIds: string[]; forecast?: MachineForecast | null; dueStatus?: string | null; nextDueDate?: string | null },
+  extra: {
+    operatorIds: string[];
+    forecast?: MachineForecast | null;
+    dueStatus?: string | null;
+    nextDueDate?: string | null;
+  },
 ) {
   return {
     id: m.id,
@@ -90,7 +101,14 @@ export function presentMachine(
 
 export const presentUsage = (u: UsageEstimate | null) =>
   u
-    ? { method: u.method, rate: u.rate, low: u.low, high: u.high, readingCount: u.readingCount, explanation: u.explanation }
+    ? {
+        method: u.method,
+        rate: u.rate,
+        low: u.low,
+        high: u.high,
+        readingCount: u.readingCount,
+        explanation: u.explanation,
+      }
     : null;
 
 export const taskSchema = z
@@ -103,7 +121,9 @@ export const taskSchema = z
     firstServiceMeter: z.number().nullable(),
     warnMeter: z.number().nullable(),
     warnDays: z.number().nullable(),
-    parts: z.array(z.object({ partNumber: z.string(), description: z.string(), quantity: z.number() })),
+    parts: z.array(
+      z.object({ partNumber: z.string(), description: z.string(), quantity: z.number() }),
+    ),
     fluids: z.array(z.object({ kind: z.string(), volume: z.number(), unit: z.string() })),
     labourHours: z.number().nullable(),
     instructions: z.string(),

@@ -72,15 +72,26 @@ export function route<
     [status]: {
       description: 'Success',
       ...(status !== 204 && {
-        content: { 'application/json': { schema: spec.response ?? z.object({ data: z.unknown() }) } },
+        content: {
+          'application/json': { schema: spec.response ?? z.object({ data: z.unknown() }) },
+        },
       }),
     },
     400: { description: 'Invalid input', content: { 'application/json': { schema: errorBody } } },
   };
   if (access !== 'public') {
-    responses[401] = { description: 'Not signed in', content: { 'application/json': { schema: errorBody } } };
-    responses[403] = { description: 'Role may not', content: { 'application/json': { schema: errorBody } } };
-    responses[404] = { description: 'Not found', content: { 'application/json': { schema: errorBody } } };
+    responses[401] = {
+      description: 'Not signed in',
+      content: { 'application/json': { schema: errorBody } },
+    };
+    responses[403] = {
+      description: 'Role may not',
+      content: { 'application/json': { schema: errorBody } },
+    };
+    responses[404] = {
+      description: 'Not found',
+      content: { 'application/json': { schema: errorBody } },
+    };
   }
   documentRoute({
     method: spec.method,
@@ -92,7 +103,9 @@ export function route<
       ...(spec.params && { params: spec.params as never }),
       ...(spec.query && { query: spec.query as never }),
       ...(spec.body && { body: { content: { 'application/json': { schema: spec.body } } } }),
-      ...(spec.multipartBody && { body: { content: { 'multipart/form-data': { schema: spec.multipartBody } } } }),
+      ...(spec.multipartBody && {
+        body: { content: { 'multipart/form-data': { schema: spec.multipartBody } } },
+      }),
     },
     responses,
   });

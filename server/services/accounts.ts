@@ -23,22 +23,33 @@ export const hashPassword = (password: string) => bcrypt.hash(password, BCRYPT_R
 
 /** The user with these credentials, or an AppError 401 naming no detail. */
 export async function verifyCredentials(email: string, password: string): Promise<User> {
-  const user = await User.findOne({ where: sequelize.where(sequelize.fn('lower', sequelize.col('email')), email) });
+  const user = await User.findOne({
+    where: sequelize.where(sequelize.fn('lower', sequelize.col('email')), email),
+  });
   const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
   if (!user || !user.passwordHash || !ok) {
-    throw new AppError(401, 'invalid_credentials', 'That e-mail and password do not match an account');
+    throw new AppError(
+      401,
+      'invalid_credentials',
+      'That e-mail and password do not match an account',
+    );
   }
   return user;
 }
 
 export async function loadMemberships(userId: string) {
-  return Membership.findAll({ where: { userId }, include: [{ model: Organization, as: 'organization' }] });
+  return Membership.findAll({
+    where: { userId },
+    include: [{ model: Organization, as: 'organization' }],
+  });
 }
 
 /** Creates an invitation and e-mails its single-use link. */
 export async function inviteMember(access: OrgAccess, input: InvitationCreateInput) {
   if (!rolesFor(access).includes(input.role)) {
-    throw invalid({ role: `Role must be one of: ${rolesFor(access).join(', ')} in this organization` });
+    throw invalid({
+      role: `Role must be one of: ${rolesFor(access).join(', ')} in this organization`,
+    });
   }
   const existing = await Membership.findOne({
     where: { organizationId: access.organization.id },
@@ -106,12 +117,17 @@ export async function findOpenInvitation(token: string) {
     where: { tokenHash: hashToken(token), acceptedAt: null, expiresAt: { [Op.gt]: new Date() } },
     include: [{ model: Organization, as: 'organization' }],
   });
-  if (!invitation) throw new AppError(404, 'not_found', 'This invitation has expired or was already used');
+  if (!invitation)
+    throw new AppError(404, 'not_found', 'This invitation has expired or was already used');
   return invitation;
 }
 
 /** Accepts an invitation: creates or updates the user and the membership, once. */
-export async function acceptInvitation(token: string, name: string, password: string): Promise<User> {
+export async function acceptInvitation(
+  token: string,
+  name: string,
+  password: string,
+): Promise<User> {
   const passwordHash = await hashPassword(password);
   return sequelize.transaction(async (transaction) => {
     const invitation = await Invitation.findOne({
@@ -119,16 +135,28 @@ export async function acceptInvitation(token: string, name: string, password: st
       lock: transaction.LOCK.UPDATE,
       transaction,
     });
-    if (!invitation) throw new AppError(404, 'not_found', 'This invitation has expired or was already used');
+    if (!invitation)
+      throw new AppError(404, 'not_found', 'This invitation has expired or was already used');
     let user = await User.findOne({
-      where: sequelize.where(sequelize.fn('lower', sequelize.col('email')), invitation.email.toLowerCase()),
+      where: sequelize.where(
+        sequelize.fn('lower', sequelize.col('email')),
+        invitation.email.toLowerCase(),
+      ),
       transaction,
     });
     if (user) await user.update({ name, passwordHash }, { transaction });
-    else user = await User.create({ email: invitation.email.toLowerCase(), name, passwordHash }, { transaction });
+    else
+      user = await User.create(
+        { email: invitation.email.toLowerCase(), name, passwordHash },
+        { transaction },
+      );
     await Membership.findOrCreate({
       where: { organizationId: invitation.organizationId, userId: user.id },
-      defaults: { organizationId: invitation.organizationId, userId: user.id, role: invitation.role },
+      defaults: {
+        organizationId: invitation.organizationId,
+        userId: user.id,
+        role: invitation.role,
+      },
       transaction,
     });
     await invitation.update({ acceptedAt: new Date() }, { transaction });
@@ -149,7 +177,9 @@ export async function acceptInvitation(token: string, name: string, password: st
 
 /** Starts a password reset; silent when the e-mail is unknown (accounts cannot be probed). */
 export async function requestPasswordReset(email: string): Promise<void> {
-  const user = await User.findOne({ where: sequelize.where(sequelize.fn('lower', sequelize.col('email')), email) });
+  const user = await User.findOne({
+    where: sequelize.where(sequelize.fn('lower', sequelize.col('email')), email),
+  });
   if (!user) return;
   const { token, hash } = newToken();
   const reset = await PasswordReset.create({
@@ -179,13 +209,21 @@ export async function confirmPasswordReset(token: string, password: string): Pro
       lock: transaction.LOCK.UPDATE,
       transaction,
     });
-    if (!reset) throw invalid({ token: 'This link has expired or was already used. Ask for a new one.' });
+    if (!reset)
+      throw invalid({ token: 'This link has expired or was already used. Ask for a new one.' });
     const user = await User.findByPk(reset.userId, { transaction });
-    if (!user) throw invalid({ token: 'This link has expired or was already used. Ask for a new one.' });
+    if (!user)
+      throw invalid({ token: 'This link has expired or was already used. Ask for a new one.' });
     await user.update({ passwordHash }, { transaction });
     await reset.update({ usedAt: new Date() }, { transaction });
     await recordAudit(
-      { organizationId: null, actorUserId: user.id, action: 'password.reset', entityType: 'user', entityId: user.id },
+      {
+        organizationId: null,
+        actorUserId: user.id,
+        action: 'password.reset',
+        entityType: 'user',
+        entityId: user.id,
+      },
       transaction,
     );
     return user;
@@ -193,5 +231,8 @@ export async function confirmPasswordReset(token: string, password: string): Pro
 }
 
 export function escapeHtml(s: string): string {
-  return s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
+  return s.replace(
+    /[&<>"']/g,
+    (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!,
+  );
 }

@@ -12,7 +12,14 @@ export interface DueRow {
   taskName: string;
   hazards: string[];
   labourHours: number | null;
-  machine: { id: string; fleetNumber: string; name: string; category: string; status: string; meterUnit: string };
+  machine: {
+    id: string;
+    fleetNumber: string;
+    name: string;
+    category: string;
+    status: string;
+    meterUnit: string;
+  };
   due: DuePoint;
   lastReading: { value: number; takenAt: string } | null;
   usage: { method: string; rate: number; low: number; high: number } | null;
@@ -34,7 +41,8 @@ export function dueListSql(filters: {
   if (filters.category) where.push('m.category = :category');
   if (filters.status) where.push('d.status = :status');
   if (filters.machineId) where.push('d.machine_id = :machineId');
-  if (filters.horizon) where.push("(d.status IN ('overdue','due_soon','no_forecast') OR d.sort_date <= :until)");
+  if (filters.horizon)
+    where.push("(d.status IN ('overdue','due_soon','no_forecast') OR d.sort_date <= :until)");
   if (filters.operator) where.push(visibleToOperator);
   return `SELECT d.task_id, d.due, t.name AS task_name, t.hazards, t.labour_hours,
       m.id AS machine_id, m.fleet_number, m.name AS machine_name, m.category, m.status AS machine_status, m.meter_unit,
@@ -116,10 +124,17 @@ export async function dueList(
       r.last_value !== null && r.last_taken_at
         ? { value: Number(r.last_value), takenAt: new Date(r.last_taken_at).toISOString() }
         : null,
-    usage: r.usage && { method: r.usage.method, rate: r.usage.rate, low: r.usage.low, high: r.usage.high },
+    usage: r.usage && {
+      method: r.usage.method,
+      rate: r.usage.rate,
+      low: r.usage.low,
+      high: r.usage.high,
+    },
   }));
   const counts = await dueCounts(access, query, asOf);
-  const total = query.status ? counts[query.status] : Object.values(counts).reduce((a, b) => a + b, 0);
+  const total = query.status
+    ? counts[query.status]
+    : Object.values(counts).reduce((a, b) => a + b, 0);
   return { asOf, rows, counts, total, stale: await staleMachines(access, asOf, now) };
 }
 
@@ -128,7 +143,8 @@ async function dueCounts(access: OrgAccess, query: DueQuery, asOf: string) {
   const where = ['d.organization_id = :org', "m.status <> 'sold'"];
   if (query.category) where.push('m.category = :category');
   if (query.machineId) where.push('d.machine_id = :machineId');
-  if (query.horizon) where.push("(d.status IN ('overdue','due_soon','no_forecast') OR d.sort_date <= :until)");
+  if (query.horizon)
+    where.push("(d.status IN ('overdue','due_soon','no_forecast') OR d.sort_date <= :until)");
   if (hasRole(access, 'operator')) where.push(visibleToOperator);
   const rows = await sequelize.query<{ status: DuePoint['status']; n: number }>(
     `SELECT d.status, count(*)::int AS n FROM task_due_points d
@@ -153,7 +169,12 @@ async function dueCounts(access: OrgAccess, query: DueQuery, asOf: string) {
 /** Machines in season (or with no season set) with no reading for STALE_READING_DAYS days. */
 export async function staleMachines(access: OrgAccess, asOf: string, now = new Date()) {
   const month = Number(asOf.slice(5, 7));
-  const rows = await sequelize.query<{ id: string; fleet_number: string; name: string; last_taken_at: Date | null }>(
+  const rows = await sequelize.query<{
+    id: string;
+    fleet_number: string;
+    name: string;
+    last_taken_at: Date | null;
+  }>(
     `SELECT m.id, m.fleet_number, m.name, f.last_taken_at
      FROM machines m LEFT JOIN machine_forecasts f ON f.machine_id = m.id AND f.organization_id = m.organization_id
      WHERE m.organization_id = :org AND m.status <> 'sold'
@@ -175,7 +196,10 @@ export async function staleMachines(access: OrgAccess, asOf: string, now = new D
     machine: { id: r.id, fleetNumber: r.fleet_number, name: r.name },
     lastReadingAt: r.last_taken_at ? new Date(r.last_taken_at).toISOString() : null,
     daysSince: r.last_taken_at
-      ? daysBetweenIso(new Date(r.last_taken_at).toISOString().slice(0, 10), now.toISOString().slice(0, 10))
+      ? daysBetweenIso(
+          new Date(r.last_taken_at).toISOString().slice(0, 10),
+          now.toISOString().slice(0, 10),
+        )
       : null,
   }));
 }

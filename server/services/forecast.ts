@@ -49,7 +49,10 @@ export async function refreshMachineForecast(
     { replacements: { organizationId, machineId }, type: QueryTypes.SELECT, transaction },
   );
   const daily = summariseReadings(
-    readings.map((r) => ({ lifetimeValue: Number(r.lifetime_value), takenAt: new Date(r.taken_at) })),
+    readings.map((r) => ({
+      lifetimeValue: Number(r.lifetime_value),
+      takenAt: new Date(r.taken_at),
+    })),
     org.timeZone,
   );
   const last = readings.at(-1);
@@ -80,7 +83,9 @@ export function duePointsFor(
 ): { usage: UsageEstimate; points: Map<string, DuePoint> } {
   const daily = forecast?.daily ?? [];
   const usage = estimateUsage(daily, localDayNumber(now, timeZone));
-  const startIso = forecast?.firstTakenAt ? isoFromDayNumber(localDayNumber(forecast.firstTakenAt, timeZone)) : null;
+  const startIso = forecast?.firstTakenAt
+    ? isoFromDayNumber(localDayNumber(forecast.firstTakenAt, timeZone))
+    : null;
   const points = new Map<string, DuePoint>();
   for (const task of tasks) {
     points.set(
@@ -117,14 +122,19 @@ export async function recomputeDuePoints(
   const { transaction } = options;
   const now = options.now ?? new Date();
   const timeZone =
-    options.timeZone ?? (await Organization.findByPk(organizationId, { transaction }))?.timeZone ?? 'UTC';
+    options.timeZone ??
+    (await Organization.findByPk(organizationId, { transaction }))?.timeZone ??
+    'UTC';
   const asOfIso = todayIso(timeZone, now);
   const machineWhere = { organizationId, ...(machineIds && { id: { [Op.in]: machineIds } }) };
   const machines = await Machine.findAll({ where: machineWhere, attributes: ['id'], transaction });
   if (!machines.length) return;
   const ids = machines.map((m) => m.id);
   const [forecasts, tasks] = await Promise.all([
-    MachineForecast.findAll({ where: { organizationId, machineId: { [Op.in]: ids } }, transaction }),
+    MachineForecast.findAll({
+      where: { organizationId, machineId: { [Op.in]: ids } },
+      transaction,
+    }),
     ServiceTask.findAll({ where: { organizationId, machineId: { [Op.in]: ids } }, transaction }),
   ]);
   const forecastOf = new Map(forecasts.map((f) => [f.machineId, f]));
@@ -180,7 +190,11 @@ export async function refreshOrganizationForecasts(organizationId: string): Prom
 }
 
 /** Brings stale due points (computed before today in the org's time zone) up to date. */
-export async function ensureDuePointsCurrent(organizationId: string, timeZone: string, now = new Date()) {
+export async function ensureDuePointsCurrent(
+  organizationId: string,
+  timeZone: string,
+  now = new Date(),
+) {
   const asOfIso = todayIso(timeZone, now);
   const stale = await sequelize.query<{ id: string }>(
     `SELECT m.id FROM machines m LEFT JOIN machine_forecasts f ON f.machine_id = m.id
@@ -188,6 +202,10 @@ export async function ensureDuePointsCurrent(organizationId: string, timeZone: s
     { replacements: { organizationId, asOfIso }, type: QueryTypes.SELECT },
   );
   if (stale.length) {
-    await recomputeDuePoints(organizationId, stale.map((s) => s.id), { timeZone, now });
+    await recomputeDuePoints(
+      organizationId,
+      stale.map((s) => s.id),
+      { timeZone, now },
+    );
   }
 }

@@ -2,14 +2,22 @@ import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { invalid, notFound } from '../errors';
 import { Machine, MachineForecast, MachineOperator, Membership } from '../models';
-import type { MachineCreateInput, MachineListQuery, MachineUpdateInput } from '../../shared/schemas/machines';
+import type {
+  MachineCreateInput,
+  MachineListQuery,
+  MachineUpdateInput,
+} from '../../shared/schemas/machines';
 import type { OrgAccess } from '../policies/access';
 import { hasRole } from '../policies/access';
 import { canViewMachine } from '../policies/machine';
 import { recordAudit } from './audit';
 import { refreshMachineForecast } from './forecast';
 
-export async function operatorIdsOf(machineIds: string[], organizationId: string, transaction?: Transaction) {
+export async function operatorIdsOf(
+  machineIds: string[],
+  organizationId: string,
+  transaction?: Transaction,
+) {
   const rows = await MachineOperator.findAll({
     where: { organizationId, machineId: { [Op.in]: machineIds } },
     transaction,
@@ -26,7 +34,8 @@ export async function loadMachine(access: OrgAccess, machineId: string, transact
     transaction,
   });
   if (!machine) throw notFound('Machine');
-  const operators = (await operatorIdsOf([machine.id], access.organization.id, transaction)).get(machine.id) ?? [];
+  const operators =
+    (await operatorIdsOf([machine.id], access.organization.id, transaction)).get(machine.id) ?? [];
   if (!canViewMachine(access, machine, operators)) throw notFound('Machine');
   return { machine, operatorIds: operators };
 }
@@ -63,7 +72,9 @@ export async function listMachines(access: OrgAccess, query: MachineListQuery) {
     replacements.dueStatus = query.dueStatus;
   }
   if (query.q) {
-    where.push("(m.fleet_number ILIKE :q OR m.name ILIKE :q OR m.make ILIKE :q OR m.model ILIKE :q)");
+    where.push(
+      '(m.fleet_number ILIKE :q OR m.name ILIKE :q OR m.make ILIKE :q OR m.model ILIKE :q)',
+    );
     replacements.q = `%${query.q.replace(/[%_\\]/g, (c) => `\\${c}`)}%`;
   }
   if (hasRole(access, 'operator')) {
@@ -71,7 +82,12 @@ export async function listMachines(access: OrgAccess, query: MachineListQuery) {
       OR EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = m.organization_id AND o.machine_id = m.id AND o.user_id = :user))`);
   }
   const order = `${SORT_SQL[query.sort]} ${query.order === 'desc' ? 'DESC' : 'ASC'} NULLS LAST, lower(m.fleet_number) ASC`;
-  const rows = await sequelize.query<{ id: string; worst: string | null; next_due: string | null; total: string }>(
+  const rows = await sequelize.query<{
+    id: string;
+    worst: string | null;
+    next_due: string | null;
+    total: string;
+  }>(
     `SELECT m.id, d.worst, d.next_due, count(*) OVER () AS total
      FROM machines m
      LEFT JOIN LATERAL (
@@ -117,23 +133,48 @@ async function checkOperators(access: OrgAccess, operatorIds: string[], transact
   }
 }
 
-async function fleetNumberTaken(access: OrgAccess, fleetNumber: string, exceptId: string | null, transaction: Transaction) {
+async function fleetNumberTaken(
+  access: OrgAccess,
+  fleetNumber: string,
+  exceptId: string | null,
+  transaction: Transaction,
+) {
   const found = await Machine.findOne({
     where: {
       organizationId: access.organization.id,
-      [Op.and]: [sequelize.where(sequelize.fn('lower', sequelize.col('fleet_number')), fleetNumber.toLowerCase())],
+      [Op.and]: [
+        sequelize.where(
+          sequelize.fn('lower', sequelize.col('fleet_number')),
+          fleetNumber.toLowerCase(),
+        ),
+      ],
       ...(exceptId && { id: { [Op.ne]: exceptId } }),
     },
     transaction,
   });
-  if (found) throw invalid({ fleetNumber: `Fleet number ${fleetNumber} is used by ${found.name} already; fleet numbers are unique per farm` });
+  if (found)
+    throw invalid({
+      fleetNumber: `Fleet number ${fleetNumber} is used by ${found.name} already; fleet numbers are unique per farm`,
+    });
 }
 
-async function setOperators(access: OrgAccess, machineId: string, operatorIds: string[], transaction: Transaction) {
-  await MachineOperator.destroy({ where: { organizationId: access.organization.id, machineId }, transaction });
+async function setOperators(
+  access: OrgAccess,
+  machineId: string,
+  operatorIds: string[],
+  transaction: Transaction,
+) {
+  await MachineOperator.destroy({
+    where: { organizationId: access.organization.id, machineId },
+    transaction,
+  });
   if (operatorIds.length) {
     await MachineOperator.bulkCreate(
-      [...new Set(operatorIds)].map((userId) => ({ organizationId: access.organization.id, machineId, userId })),
+      [...new Set(operatorIds)].map((userId) => ({
+        organizationId: access.organization.id,
+        machineId,
+        userId,
+      })),
       { transaction },
     );
   }
@@ -165,12 +206,20 @@ export async function createMachine(access: OrgAccess, input: MachineCreateInput
   });
 }
 
-export async function updateMachine(access: OrgAccess, machine: Machine, input: MachineUpdateInput) {
+export async function updateMachine(
+  access: OrgAccess,
+  machine: Machine,
+  input: MachineUpdateInput,
+) {
   return sequelize.transaction(async (transaction) => {
-    if (input.fleetNumber !== undefined) await fleetNumberTaken(access, input.fleetNumber, machine.id, transaction);
-    if (input.operatorIds !== undefined) await checkOperators(access, input.operatorIds, transaction);
+    if (input.fleetNumber !== undefined)
+      await fleetNumberTaken(access, input.fleetNumber, machine.id, transaction);
+    if (input.operatorIds !== undefined)
+      await checkOperators(access, input.operatorIds, transaction);
     const { operatorIds, ...fields } = input;
-    const before = Object.fromEntries(Object.keys(fields).map((k) => [k, machine.get(k as keyof Machine)]));
+    const before = Object.fromEntries(
+      Object.keys(fields).map((k) => [k, machine.get(k as keyof Machine)]),
+    );
     await machine.update(fields, { transaction });
     if (operatorIds !== undefined) await setOperators(access, machine.id, operatorIds, transaction);
     await recordAudit(

@@ -37,11 +37,15 @@ export function parseTakenAt(cell: string, timeZone: string, order: 'mdy' | 'dmy
     if (date.getFullYear() !== y || date.getMonth() !== mo - 1 || date.getDate() !== d) return null;
     return new Date(date.getTime());
   };
-  let m = s.match(/^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.\d+)?)?)?\s*(Z|[+-]\d{2}:?\d{2})?$/i);
+  let m = s.match(
+    /^(\d{4})-(\d{2})-(\d{2})(?:[T ](\d{2}):(\d{2})(?::(\d{2})(?:\.\d+)?)?)?\s*(Z|[+-]\d{2}:?\d{2})?$/i,
+  );
   if (m) {
     const [, y, mo, d, h, mi, sec, zone] = m;
     if (zone) {
-      const parsed = new Date(`${y}-${mo}-${d}T${h ?? '12'}:${mi ?? '00'}:${sec ?? '00'}${zone.length === 5 ? `${zone.slice(0, 3)}:${zone.slice(3)}` : zone}`);
+      const parsed = new Date(
+        `${y}-${mo}-${d}T${h ?? '12'}:${mi ?? '00'}:${sec ?? '00'}${zone.length === 5 ? `${zone.slice(0, 3)}:${zone.slice(3)}` : zone}`,
+      );
       return Number.isNaN(parsed.getTime()) ? 'is not a valid date' : parsed;
     }
     return local(+y, +mo, +d, h ? +h : 12, mi ? +mi : 0, sec ? +sec : 0) ?? 'is not a valid date';
@@ -78,12 +82,18 @@ export async function analyseImport(access: OrgAccess, buffer: Buffer) {
   } catch (err) {
     throw invalid({ file: `The file is not readable CSV: ${(err as Error).message}` });
   }
-  if (!records.length) throw invalid({ file: 'The file is empty; it needs a header row and at least one reading' });
+  if (!records.length)
+    throw invalid({ file: 'The file is empty; it needs a header row and at least one reading' });
   const header = records[0].record.map((h) => h.toLowerCase().replace(/\s+/g, ' ').trim());
   const col = Object.fromEntries(
-    Object.entries(HEADER_ALIASES).map(([key, aliases]) => [key, header.findIndex((h) => aliases.includes(h))]),
+    Object.entries(HEADER_ALIASES).map(([key, aliases]) => [
+      key,
+      header.findIndex((h) => aliases.includes(h)),
+    ]),
   ) as Record<keyof typeof HEADER_ALIASES, number>;
-  const missing = Object.entries(col).filter(([, i]) => i < 0).map(([k]) => k);
+  const missing = Object.entries(col)
+    .filter(([, i]) => i < 0)
+    .map(([k]) => k);
   if (missing.length) {
     throw invalid({
       file: `The header row must name the columns fleet number, taken at and value (missing: ${missing.join(', ')})`,
@@ -93,11 +103,17 @@ export async function analyseImport(access: OrgAccess, buffer: Buffer) {
   if (!dataRows.length) throw invalid({ file: 'The file has a header row but no readings' });
   if (dataRows.length > 20_000) throw invalid({ file: 'At most 20,000 readings per file' });
 
-  const fleetNumbers = [...new Set(dataRows.map((r) => (r.record[col.fleetNumber] ?? '').toLowerCase()))];
+  const fleetNumbers = [
+    ...new Set(dataRows.map((r) => (r.record[col.fleetNumber] ?? '').toLowerCase())),
+  ];
   const machines = await Machine.findAll({
     where: {
       organizationId: access.organization.id,
-      [Op.and]: [sequelize.where(sequelize.fn('lower', sequelize.col('fleet_number')), { [Op.in]: fleetNumbers })],
+      [Op.and]: [
+        sequelize.where(sequelize.fn('lower', sequelize.col('fleet_number')), {
+          [Op.in]: fleetNumbers,
+        }),
+      ],
     },
   });
   const byFleet = new Map(machines.map((m) => [m.fleetNumber.toLowerCase(), m]));
@@ -110,7 +126,12 @@ export async function analyseImport(access: OrgAccess, buffer: Buffer) {
     const row: ImportRow = {
       line: info.lines,
       fleetNumber,
-      machine: machine && { id: machine.id, name: machine.name, fleetNumber: machine.fleetNumber, meterUnit: machine.meterUnit },
+      machine: machine && {
+        id: machine.id,
+        name: machine.name,
+        fleetNumber: machine.fleetNumber,
+        meterUnit: machine.meterUnit,
+      },
       takenAt: null,
       value: null,
       status: 'new',
@@ -121,16 +142,31 @@ export async function analyseImport(access: OrgAccess, buffer: Buffer) {
       row.status = 'error';
       row.error = `Line ${row.line}: ${msg}`;
     };
-    if (!fleetNumber) { fail('fleet number is empty'); continue; }
-    if (!machine) { fail(`fleet number "${fleetNumber}" is not a machine of this farm`); continue; }
-    if (machine.status === 'sold') { fail(`${machine.fleetNumber} is sold; readings are closed`); continue; }
+    if (!fleetNumber) {
+      fail('fleet number is empty');
+      continue;
+    }
+    if (!machine) {
+      fail(`fleet number "${fleetNumber}" is not a machine of this farm`);
+      continue;
+    }
+    if (machine.status === 'sold') {
+      fail(`${machine.fleetNumber} is sold; readings are closed`);
+      continue;
+    }
     const takenAt = parseTakenAt(record[col.takenAt] ?? '', access.organization.timeZone, order);
-    if (typeof takenAt === 'string') { fail(`taken at "${record[col.takenAt] ?? ''}" ${takenAt}`); continue; }
+    if (typeof takenAt === 'string') {
+      fail(`taken at "${record[col.takenAt] ?? ''}" ${takenAt}`);
+      continue;
+    }
     row.takenAt = takenAt.toISOString();
     let raw = (record[col.value] ?? '').replace(/\s/g, '');
     if (delimiter === ';' && /^\d+,\d+$/.test(raw)) raw = raw.replace(',', '.');
     const value = /^\d+(\.\d+)?$/.test(raw) ? Number(raw) : NaN;
-    if (!Number.isFinite(value)) { fail(`value "${record[col.value] ?? ''}" must be a number like 1234.5`); continue; }
+    if (!Number.isFinite(value)) {
+      fail(`value "${record[col.value] ?? ''}" must be a number like 1234.5`);
+      continue;
+    }
     row.value = value;
     candidates.push({ row, reading: { machine, value, takenAt, source: 'import' } });
   }
@@ -155,7 +191,8 @@ export async function previewImport(access: OrgAccess, buffer: Buffer) {
       transaction,
       { fieldPrefix: (i) => `${i}.` },
     );
-    for (const o of outcomes) if (o.status === 'duplicate') candidates[o.index].row.status = 'duplicate';
+    for (const o of outcomes)
+      if (o.status === 'duplicate') candidates[o.index].row.status = 'duplicate';
     for (const [key, message] of Object.entries(errors)) {
       const row = candidates[Number(key.split('.')[0])].row;
       row.status = 'error';
@@ -180,7 +217,11 @@ export async function commitImport(access: OrgAccess, buffer: Buffer) {
   }
   const { candidates } = await analyseImport(access, buffer);
   const outcomes = await sequelize.transaction((transaction) =>
-    writeReadings(access, candidates.map((c) => c.reading), transaction),
+    writeReadings(
+      access,
+      candidates.map((c) => c.reading),
+      transaction,
+    ),
   );
   return {
     added: outcomes.filter((o) => o.status === 'added').length,

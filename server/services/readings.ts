@@ -36,7 +36,10 @@ interface Neighbour {
 export const timeFormatter = (timeZone: string) => (ms: number) =>
   `${format(new TZDate(ms, timeZone), 'yyyy-MM-dd HH:mm')} (${timeZone})`;
 
-async function replacementsOf(machine: Machine, transaction: Transaction): Promise<MeterReplacementPoint[]> {
+async function replacementsOf(
+  machine: Machine,
+  transaction: Transaction,
+): Promise<MeterReplacementPoint[]> {
   const rows = await MeterReplacement.findAll({
     where: { organizationId: machine.organizationId, machineId: machine.id },
     transaction,
@@ -49,8 +52,18 @@ async function replacementsOf(machine: Machine, transaction: Transaction): Promi
 }
 
 /** Existing readings of a machine from the one before `fromMs` to the one after `toMs`. */
-async function readingsAround(machine: Machine, fromMs: number, toMs: number, transaction: Transaction) {
-  const rows = await sequelize.query<{ id: string; value: number; lifetime_value: number; taken_at: Date }>(
+async function readingsAround(
+  machine: Machine,
+  fromMs: number,
+  toMs: number,
+  transaction: Transaction,
+) {
+  const rows = await sequelize.query<{
+    id: string;
+    value: number;
+    lifetime_value: number;
+    taken_at: Date;
+  }>(
     `SELECT id, value, lifetime_value, taken_at FROM meter_readings
      WHERE organization_id = :org AND machine_id = :machine
        AND taken_at >= coalesce((SELECT max(taken_at) FROM meter_readings
@@ -59,7 +72,12 @@ async function readingsAround(machine: Machine, fromMs: number, toMs: number, tr
                                  WHERE organization_id = :org AND machine_id = :machine AND taken_at > :to), 'infinity')
      ORDER BY taken_at, lifetime_value`,
     {
-      replacements: { org: machine.organizationId, machine: machine.id, from: new Date(fromMs), to: new Date(toMs) },
+      replacements: {
+        org: machine.organizationId,
+        machine: machine.id,
+        from: new Date(fromMs),
+        to: new Date(toMs),
+      },
       type: QueryTypes.SELECT,
       transaction,
     },
@@ -142,7 +160,12 @@ export async function planReadings(
     });
     const replacements = await replacementsOf(machine, transaction);
     const times = group.map((g) => g.item.takenAt.getTime());
-    const existing = await readingsAround(machine, Math.min(...times), Math.max(...times), transaction);
+    const existing = await readingsAround(
+      machine,
+      Math.min(...times),
+      Math.max(...times),
+      transaction,
+    );
     const merged: { lifetime: number; takenAtMs: number; raw: number }[] = existing.map((r) => ({
       lifetime: r.lifetimeValue,
       takenAtMs: r.takenAtMs,
@@ -191,9 +214,9 @@ export async function correctReading(
     const takenAt = changes.takenAt ?? reading.takenAt;
     const replacements = await replacementsOf(machine, transaction);
     // Validate as a new reading that ignores the one being corrected, then update in place.
-    const existing = (await readingsAround(machine, takenAt.getTime(), takenAt.getTime(), transaction)).filter(
-      (r) => r.id !== reading.id,
-    );
+    const existing = (
+      await readingsAround(machine, takenAt.getTime(), takenAt.getTime(), transaction)
+    ).filter((r) => r.id !== reading.id);
     const lifetime = toLifetimeValue(value, takenAt.getTime(), replacements);
     const previous = [...existing].reverse().find((r) => r.takenAtMs <= takenAt.getTime());
     const next = existing.find((r) => r.takenAtMs > takenAt.getTime());
@@ -203,7 +226,11 @@ export async function correctReading(
         previous: previous && { value: previous.lifetimeValue, takenAtMs: previous.takenAtMs },
         next: next && { value: next.lifetimeValue, takenAtMs: next.takenAtMs },
       },
-      { nowMs: Date.now(), meterUnit: machine.meterUnit, formatTime: timeFormatter(access.organization.timeZone) },
+      {
+        nowMs: Date.now(),
+        meterUnit: machine.meterUnit,
+        formatTime: timeFormatter(access.organization.timeZone),
+      },
     );
     if (violation) throw invalid({ [violation.field]: violation.message });
     await reading.update({ value, takenAt, lifetimeValue: lifetime }, { transaction });
@@ -214,7 +241,11 @@ export async function correctReading(
         action: 'reading.correct',
         entityType: 'meter_reading',
         entityId: reading.id,
-        changes: { machineId: machine.id, before, after: { value, takenAt: takenAt.toISOString() } },
+        changes: {
+          machineId: machine.id,
+          before,
+          after: { value, takenAt: takenAt.toISOString() },
+        },
       },
       transaction,
     );
@@ -267,7 +298,8 @@ export async function replaceMeter(
     });
     if (later > 0) {
       throw invalid({
-        replacedAt: 'There are readings after this time; a replacement must come after the last reading',
+        replacedAt:
+          'There are readings after this time; a replacement must come after the last reading',
       });
     }
     const replacement = await MeterReplacement.create(

@@ -9,12 +9,21 @@ import { recordAudit } from './audit';
 import { recomputeDuePoints } from './forecast';
 
 export async function loadTask(access: OrgAccess, taskId: string, transaction?: Transaction) {
-  const task = await ServiceTask.findOne({ where: { id: taskId, organizationId: access.organization.id }, transaction });
+  const task = await ServiceTask.findOne({
+    where: { id: taskId, organizationId: access.organization.id },
+    transaction,
+  });
   if (!task) throw notFound('Task');
   return task;
 }
 
-async function audit(access: OrgAccess, action: string, task: ServiceTask, changes: object, transaction: Transaction) {
+async function audit(
+  access: OrgAccess,
+  action: string,
+  task: ServiceTask,
+  changes: object,
+  transaction: Transaction,
+) {
   await recordAudit(
     {
       organizationId: access.organization.id,
@@ -29,12 +38,23 @@ async function audit(access: OrgAccess, action: string, task: ServiceTask, chang
 }
 
 const refresh = (access: OrgAccess, machineId: string, transaction: Transaction) =>
-  recomputeDuePoints(access.organization.id, [machineId], { transaction, timeZone: access.organization.timeZone });
+  recomputeDuePoints(access.organization.id, [machineId], {
+    transaction,
+    timeZone: access.organization.timeZone,
+  });
 
 /** Adds tasks to a machine in one transaction and refreshes its due points. */
-export async function addTasks(access: OrgAccess, machine: Machine, inputs: TaskInput[], action = 'task.create') {
+export async function addTasks(
+  access: OrgAccess,
+  machine: Machine,
+  inputs: TaskInput[],
+  action = 'task.create',
+) {
   return sequelize.transaction(async (transaction) => {
-    const start = await ServiceTask.count({ where: { organizationId: access.organization.id, machineId: machine.id }, transaction });
+    const start = await ServiceTask.count({
+      where: { organizationId: access.organization.id, machineId: machine.id },
+      transaction,
+    });
     const tasks: ServiceTask[] = [];
     for (const [i, input] of inputs.entries()) {
       const task = await ServiceTask.create(
@@ -57,13 +77,16 @@ export async function addTasks(access: OrgAccess, machine: Machine, inputs: Task
 }
 
 export async function updateTask(access: OrgAccess, task: ServiceTask, input: Partial<TaskInput>) {
-  const intervalMeter = input.intervalMeter !== undefined ? input.intervalMeter : task.intervalMeter;
+  const intervalMeter =
+    input.intervalMeter !== undefined ? input.intervalMeter : task.intervalMeter;
   const intervalDays = input.intervalDays !== undefined ? input.intervalDays : task.intervalDays;
   if (intervalMeter === null && intervalDays === null) {
     throw invalid({ intervalMeter: 'Give a meter interval, a day interval, or both' });
   }
   return sequelize.transaction(async (transaction) => {
-    const before = Object.fromEntries(Object.keys(input).map((k) => [k, task.get(k as keyof ServiceTask)]));
+    const before = Object.fromEntries(
+      Object.keys(input).map((k) => [k, task.get(k as keyof ServiceTask)]),
+    );
     await task.update(input, { transaction });
     await audit(access, 'task.update', task, { before, after: input }, transaction);
     await refresh(access, task.machineId, transaction);
@@ -81,7 +104,8 @@ export async function deleteTask(access: OrgAccess, task: ServiceTask) {
 /** Sets when a task was last done before the machine came into the system. */
 export async function setLastDone(access: OrgAccess, task: ServiceTask, input: LastDoneInput) {
   const today = todayIso(access.organization.timeZone);
-  if (input.lastDoneOn > today) throw invalid({ lastDoneOn: `The date may not be after today (${today})` });
+  if (input.lastDoneOn > today)
+    throw invalid({ lastDoneOn: `The date may not be after today (${today})` });
   const forecast = await MachineForecast.findByPk(task.machineId);
   if (forecast?.lastValue != null && input.lastDoneMeter > forecast.lastValue) {
     throw invalid({
@@ -98,12 +122,18 @@ export async function setLastDone(access: OrgAccess, task: ServiceTask, input: L
 }
 
 export async function loadTemplate(access: OrgAccess, id: string) {
-  const t = await ScheduleTemplate.findOne({ where: { id, organizationId: access.organization.id } });
+  const t = await ScheduleTemplate.findOne({
+    where: { id, organizationId: access.organization.id },
+  });
   if (!t) throw notFound('Schedule template');
   return t;
 }
 
 /** Applies a template: creates all its tasks on the machine in one transaction. */
-export async function applyTemplate(access: OrgAccess, machine: Machine, template: ScheduleTemplate) {
+export async function applyTemplate(
+  access: OrgAccess,
+  machine: Machine,
+  template: ScheduleTemplate,
+) {
   return addTasks(access, machine, template.tasks, 'task.create_from_template');
 }

@@ -30,7 +30,12 @@ export function startSession(req: Request, res: Response, userId: string): void 
 }
 
 export function endSession(req: Request, res: Response): void {
-  res.clearCookie(SESSION_COOKIE, { httpOnly: true, sameSite: 'lax', secure: cookieSecure(req), path: '/' });
+  res.clearCookie(SESSION_COOKIE, {
+    httpOnly: true,
+    sameSite: 'lax',
+    secure: cookieSecure(req),
+    path: '/',
+  });
 }
 
 /** The user id of a valid session token, or null. */

@@ -20,7 +20,9 @@ export const passwordResetRequestSchema = z.object({ email });
 export type PasswordResetRequestInput = z.infer<typeof passwordResetRequestSchema>;
 
 export const passwordResetConfirmSchema = z.object({
-  token: z.string({ error: 'The reset link is incomplete' }).min(20, { error: 'The reset link is incomplete' }),
+  token: z
+    .string({ error: 'The reset link is incomplete' })
+    .min(20, { error: 'The reset link is incomplete' }),
   password,
 });
 export type PasswordResetConfirmInput = z.infer<typeof passwordResetConfirmSchema>;

@@ -39,7 +39,9 @@ const machineFields = {
     .enum(MACHINE_STATUSES, { error: `Status must be one of: ${MACHINE_STATUSES.join(', ')}` })
     .default('in_service'),
   seasonMonths: z
-    .array(z.number().int().min(1, { error: 'Months are 1–12' }).max(12, { error: 'Months are 1–12' }))
+    .array(
+      z.number().int().min(1, { error: 'Months are 1–12' }).max(12, { error: 'Months are 1–12' }),
+    )
     .max(12)
     .default([]),
   operatorIds: z.array(uuid).max(100).default([]),

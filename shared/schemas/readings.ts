@@ -7,7 +7,10 @@ export const readingCreateSchema = z.object({
     .min(0, { error: 'Meter value may not be negative' })
     .max(10_000_000, { error: 'Meter value is too large' }),
   takenAt: z.iso
-    .datetime({ offset: true, error: 'Time taken must be an ISO date-time, like 2026-05-01T07:30:00-05:00' })
+    .datetime({
+      offset: true,
+      error: 'Time taken must be an ISO date-time, like 2026-05-01T07:30:00-05:00',
+    })
     .optional(),
 });
 export type ReadingCreateInput = z.infer<typeof readingCreateSchema>;

@@ -10,23 +10,38 @@ const optionalPositive = (label: string) =>
 export const taskPartSchema = z.object({
   partNumber: z.string().trim().min(1, { error: 'Enter the part number' }).max(60),
   description: z.string().trim().max(200).default(''),
-  quantity: z.number({ error: 'Quantity must be a number' }).positive({ error: 'Quantity must be greater than 0' }),
+  quantity: z
+    .number({ error: 'Quantity must be a number' })
+    .positive({ error: 'Quantity must be greater than 0' }),
 });
 export type TaskPart = z.infer<typeof taskPartSchema>;
 
 export const FLUID_UNITS = ['L', 'gal', 'qt', 'kg', 'lb'] as const;
 export const taskFluidSchema = z.object({
   kind: z.string().trim().min(1, { error: 'Enter the fluid kind' }).max(80),
-  volume: z.number({ error: 'Volume must be a number' }).positive({ error: 'Volume must be greater than 0' }),
+  volume: z
+    .number({ error: 'Volume must be a number' })
+    .positive({ error: 'Volume must be greater than 0' }),
   unit: z.enum(FLUID_UNITS, { error: `Unit must be one of: ${FLUID_UNITS.join(', ')}` }),
 });
 export type TaskFluid = z.infer<typeof taskFluidSchema>;
 
-export const HAZARDS = ['pto', 'hydraulic_pressure', 'raised_load', 'stored_energy', 'hot_fluid', 'battery'] as const;
+export const HAZARDS = [
+  'pto',
+  'hydraulic_pressure',
+  'raised_load',
+  'stored_energy',
+  'hot_fluid',
+  'battery',
+] as const;
 export type Hazard = (typeof HAZARDS)[number];
 
 const taskFields = {
-  name: z.string({ error: 'Enter a task name' }).trim().min(1, { error: 'Enter a task name' }).max(120),
+  name: z
+    .string({ error: 'Enter a task name' })
+    .trim()
+    .min(1, { error: 'Enter a task name' })
+    .max(120),
   intervalMeter: optionalPositive('Meter interval'),
   intervalDays: z
     .number({ error: 'Day interval must be a number' })

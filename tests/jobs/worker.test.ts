@@ -10,7 +10,9 @@ import { withJobLock } from '../../jobs/lock';
 
 describe('worker — schedules', () => {
   it('schedule — an invalid cron expression is refused naming the variable', () => {
-    expect(() => loadJobSchedule({ DELIVER_MAIL_CRON: 'every minute' })).toThrow(/DELIVER_MAIL_CRON must be a node-cron expression/);
+    expect(() => loadJobSchedule({ DELIVER_MAIL_CRON: 'every minute' })).toThrow(
+      /DELIVER_MAIL_CRON must be a node-cron expression/,
+    );
     expect(loadJobSchedule({}).DELIVER_MAIL_CRON).toBe('* * * * *');
   });
 });
@@ -24,7 +26,14 @@ describe('worker — mail delivery through the outbox', () => {
   afterEach(() => setMailAccepting(true));
 
   it('outbox — the same identity is queued once; a second run sends nothing more', async () => {
-    const msg = { organizationId: null, recipient: 'a@test.example', kind: 'test', periodKey: '2026-12-01', subject: 'Hi', text: 'Hello' };
+    const msg = {
+      organizationId: null,
+      recipient: 'a@test.example',
+      kind: 'test',
+      periodKey: '2026-12-01',
+      subject: 'Hi',
+      text: 'Hello',
+    };
     expect(await queueMessage(msg)).not.toBeNull();
     expect(await queueMessage(msg)).toBeNull();
     expect((await deliverMail.perform()).sent).toBe(1);
@@ -33,7 +42,14 @@ describe('worker — mail delivery through the outbox', () => {
   });
 
   it('outbox — SMTP down: the message stays queued with its error; back up: sent once, nothing lost or doubled', async () => {
-    await queueMessage({ organizationId: null, recipient: 'b@test.example', kind: 'test', periodKey: 'p', subject: 'Queued', text: 'x' });
+    await queueMessage({
+      organizationId: null,
+      recipient: 'b@test.example',
+      kind: 'test',
+      periodKey: 'p',
+      subject: 'Queued',
+      text: 'x',
+    });
     await setMailAccepting(false);
     const down = await deliverMail.perform();
     expect(down).toEqual({ sent: 0, failed: 0, retrying: 1 });
@@ -50,7 +66,14 @@ describe('worker — mail delivery through the outbox', () => {
   });
 
   it(`outbox — after ${MAX_ATTEMPTS} failed attempts a message is marked failed`, async () => {
-    await queueMessage({ organizationId: null, recipient: 'c@test.example', kind: 'test', periodKey: 'p', subject: 'Doomed', text: 'x' });
+    await queueMessage({
+      organizationId: null,
+      recipient: 'c@test.example',
+      kind: 'test',
+      periodKey: 'p',
+      subject: 'Doomed',
+      text: 'x',
+    });
     await setMailAccepting(false);
     for (let i = 0; i < MAX_ATTEMPTS; i++) {
       await Notification.update({ nextAttemptAt: new Date() }, { where: {} });

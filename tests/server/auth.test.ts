@@ -2,7 +2,12 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { countRows, resetDatabase } from '../support/db';
-import { createMember, createOrganization, signedInAgent, TEST_PASSWORD } from '../support/factories';
+import {
+  createMember,
+  createOrganization,
+  signedInAgent,
+  TEST_PASSWORD,
+} from '../support/factories';
 import { clearMail, firstLink, mailTo } from '../support/mail';
 
 const app = createApp();
@@ -16,14 +21,22 @@ describe('auth — sign-in', () => {
   it('sign-in — right password — 200 with the user, memberships and an httpOnly SameSite=Lax cookie', async () => {
     const org = await createOrganization({ name: 'Alpha Farm' });
     const { user } = await createMember(org, 'manager');
-    const res = await request(app).post('/api/v1/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
+    const res = await request(app)
+      .post('/api/v1/auth/sign-in')
+      .send({ email: user.email, password: TEST_PASSWORD });
     expect(res.status).toBe(200);
     expect(res.body.data.user).toEqual({ id: user.id, email: user.email, name: user.name });
     expect(res.body.data.memberships).toEqual([
       {
         id: expect.any(String),
         role: 'manager',
-        organization: { id: org.id, name: 'Alpha Farm', kind: 'farm', timeZone: 'America/Chicago', units: 'metric' },
+        organization: {
+          id: org.id,
+          name: 'Alpha Farm',
+          kind: 'farm',
+          timeZone: 'America/Chicago',
+          units: 'metric',
+        },
       },
     ]);
     const cookie = String(res.headers['set-cookie']);
@@ -48,8 +61,12 @@ describe('auth — sign-in', () => {
   it('sign-in — wrong password or unknown e-mail — 401 with the same message', async () => {
     const org = await createOrganization();
     const { user } = await createMember(org, 'manager');
-    const wrong = await request(app).post('/api/v1/auth/sign-in').send({ email: user.email, password: 'nope-nope-nope' });
-    const unknown = await request(app).post('/api/v1/auth/sign-in').send({ email: 'nobody@test.example', password: 'x' });
+    const wrong = await request(app)
+      .post('/api/v1/auth/sign-in')
+      .send({ email: user.email, password: 'nope-nope-nope' });
+    const unknown = await request(app)
+      .post('/api/v1/auth/sign-in')
+      .send({ email: 'nobody@test.example', password: 'x' });
     expect(wrong.status).toBe(401);
     expect(unknown.status).toBe(401);
     expect(wrong.body.error.code).toBe('invalid_credentials');
@@ -58,7 +75,9 @@ describe('auth — sign-in', () => {
   });
 
   it('sign-in — bad input — 400 naming each field', async () => {
-    const res = await request(app).post('/api/v1/auth/sign-in').send({ email: 'not-an-email', password: '' });
+    const res = await request(app)
+      .post('/api/v1/auth/sign-in')
+      .send({ email: 'not-an-email', password: '' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.email).toMatch(/valid e-mail/);
     expect(res.body.error.fields.password).toMatch(/password/i);
@@ -68,15 +87,21 @@ describe('auth — sign-in', () => {
     const org = await createOrganization();
     const { user } = await createMember(org, 'manager');
     for (let i = 0; i < 5; i++) {
-      const r = await request(app).post('/api/v1/auth/sign-in').send({ email: user.email, password: 'wrong-wrong' });
+      const r = await request(app)
+        .post('/api/v1/auth/sign-in')
+        .send({ email: user.email, password: 'wrong-wrong' });
       expect(r.status).toBe(401);
     }
-    const blocked = await request(app).post('/api/v1/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
+    const blocked = await request(app)
+      .post('/api/v1/auth/sign-in')
+      .send({ email: user.email, password: TEST_PASSWORD });
     expect(blocked.status).toBe(429);
     expect(blocked.body.error.code).toBe('throttled');
     // another account from the same address is not blocked by this account's failures
     const { user: other } = await createMember(org, 'operator');
-    const ok = await request(app).post('/api/v1/auth/sign-in').send({ email: other.email, password: TEST_PASSWORD });
+    const ok = await request(app)
+      .post('/api/v1/auth/sign-in')
+      .send({ email: other.email, password: TEST_PASSWORD });
     expect(ok.status).toBe(200);
   });
 
@@ -104,7 +129,9 @@ describe('auth — sign-in', () => {
   });
 
   it('me — a tampered session token — 401', async () => {
-    const res = await request(app).get('/api/v1/me').set('Cookie', 'hs_session=eyJhbGciOiJIUzI1NiJ9.e30.bad');
+    const res = await request(app)
+      .get('/api/v1/me')
+      .set('Cookie', 'hs_session=eyJhbGciOiJIUzI1NiJ9.e30.bad');
     expect(res.status).toBe(401);
   });
 
@@ -140,7 +167,9 @@ describe('auth — invitation and password reset through the mail catcher', () =
     expect(look.status).toBe(200);
     expect(look.body.data).toMatchObject({ email: 'new.person@test.example', role: 'operator' });
 
-    const weak = await request(app).post(`/api/v1/invitations/${token}/accept`).send({ name: 'New Person', password: 'short' });
+    const weak = await request(app)
+      .post(`/api/v1/invitations/${token}/accept`)
+      .send({ name: 'New Person', password: 'short' });
     expect(weak.status).toBe(400);
     expect(weak.body.error.fields.password).toMatch(/10 characters/);
 
@@ -149,10 +178,15 @@ describe('auth — invitation and password reset through the mail catcher', () =
       .post(`/api/v1/invitations/${token}/accept`)
       .send({ name: 'New Person', password: 'a-long-enough-password' });
     expect(accepted.status).toBe(200);
-    expect(accepted.body.data.memberships[0]).toMatchObject({ role: 'operator', organization: { id: org.id } });
+    expect(accepted.body.data.memberships[0]).toMatchObject({
+      role: 'operator',
+      organization: { id: org.id },
+    });
     expect((await newcomer.get('/api/v1/me')).status).toBe(200);
 
-    const again = await request(app).post(`/api/v1/invitations/${token}/accept`).send({ name: 'X', password: 'another-long-password' });
+    const again = await request(app)
+      .post(`/api/v1/invitations/${token}/accept`)
+      .send({ name: 'X', password: 'another-long-password' });
     expect(again.status).toBe(404);
     const signIn = await request(app)
       .post('/api/v1/auth/sign-in')
@@ -163,9 +197,13 @@ describe('auth — invitation and password reset through the mail catcher', () =
   it('password reset — the e-mailed link works once; the old password stops working', async () => {
     const org = await createOrganization();
     const { user } = await createMember(org, 'technician');
-    const asked = await request(app).post('/api/v1/auth/password-reset').send({ email: user.email });
+    const asked = await request(app)
+      .post('/api/v1/auth/password-reset')
+      .send({ email: user.email });
     expect(asked.status).toBe(202);
-    const unknown = await request(app).post('/api/v1/auth/password-reset').send({ email: 'ghost@test.example' });
+    const unknown = await request(app)
+      .post('/api/v1/auth/password-reset')
+      .send({ email: 'ghost@test.example' });
     expect(unknown.status).toBe(202);
     expect(unknown.body).toEqual(asked.body);
 
@@ -184,9 +222,13 @@ describe('auth — invitation and password reset through the mail catcher', () =
     expect(reused.status).toBe(422);
     expect(reused.body.error.fields.token).toMatch(/expired or was already used/);
 
-    const old = await request(app).post('/api/v1/auth/sign-in').send({ email: user.email, password: TEST_PASSWORD });
+    const old = await request(app)
+      .post('/api/v1/auth/sign-in')
+      .send({ email: user.email, password: TEST_PASSWORD });
     expect(old.status).toBe(401);
-    const fresh = await request(app).post('/api/v1/auth/sign-in').send({ email: user.email, password: 'brand-new-password-1' });
+    const fresh = await request(app)
+      .post('/api/v1/auth/sign-in')
+      .send({ email: user.email, password: 'brand-new-password-1' });
     expect(fresh.status).toBe(200);
   });
 

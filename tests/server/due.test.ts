@@ -2,7 +2,14 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { countRows, resetDatabase } from '../support/db';
-import { addReadings, createMachine, createMember, createOrganization, createTask, signedInAgent } from '../support/factories';
+import {
+  addReadings,
+  createMachine,
+  createMember,
+  createOrganization,
+  createTask,
+  signedInAgent,
+} from '../support/factories';
 import { ScheduleTemplate, ServiceTask } from '../../server/models';
 import { todayIso, addDaysIso } from '../../shared/domain';
 
@@ -29,15 +36,35 @@ describe('due list API', () => {
     const pts = [0, 10, 20, 30].map((d) => ({ daysAgo: 30 - d, value: 1000 + d * 10 }));
     await addReadings(a, pts);
     await addReadings(b, pts);
-    await createTask(a, { name: 'Late oil', intervalMeter: 250, lastDoneMeter: 1000, warnMeter: 25 }); // due 1,250: 50 h over
-    await createTask(b, { name: 'Filter in 10 days', intervalMeter: 500, lastDoneMeter: 900, warnMeter: 50 }); // due 1,400: 100 h left
-    await createTask(a, { name: 'Coolant', intervalMeter: 3000, lastDoneMeter: 1000, warnMeter: 300 }); // due 4,000: 270 days
+    await createTask(a, {
+      name: 'Late oil',
+      intervalMeter: 250,
+      lastDoneMeter: 1000,
+      warnMeter: 25,
+    }); // due 1,250: 50 h over
+    await createTask(b, {
+      name: 'Filter in 10 days',
+      intervalMeter: 500,
+      lastDoneMeter: 900,
+      warnMeter: 50,
+    }); // due 1,400: 100 h left
+    await createTask(a, {
+      name: 'Coolant',
+      intervalMeter: 3000,
+      lastDoneMeter: 1000,
+      warnMeter: 300,
+    }); // due 4,000: 270 days
     const agent = await signedInAgent(app, user);
     const res = await agent.get(`/api/v1/organizations/${org.id}/due`);
     expect(res.status).toBe(200);
     const today = todayIso('America/Chicago');
     expect(res.body.meta.asOf).toBe(today);
-    expect(res.body.data.map((r: { taskName: string; due: { status: string } }) => [r.taskName, r.due.status])).toEqual([
+    expect(
+      res.body.data.map((r: { taskName: string; due: { status: string } }) => [
+        r.taskName,
+        r.due.status,
+      ]),
+    ).toEqual([
       ['Late oil', 'overdue'],
       ['Filter in 10 days', 'ok'],
       ['Coolant', 'ok'],
@@ -48,7 +75,9 @@ describe('due list API', () => {
     expect(filter.usage.rate).toBeCloseTo(10, 1);
     // 100 h at 10 h/day from the last reading (taken now) → 10 days ahead (±1 for the time of day)
     const projected = filter.due.projectedDate as string;
-    expect([addDaysIso(today, 9), addDaysIso(today, 10), addDaysIso(today, 11)]).toContain(projected);
+    expect([addDaysIso(today, 9), addDaysIso(today, 10), addDaysIso(today, 11)]).toContain(
+      projected,
+    );
     expect(res.body.meta.counts).toEqual({ overdue: 1, due_soon: 0, ok: 2, no_forecast: 0 });
   });
 
@@ -81,14 +110,22 @@ describe('due list API', () => {
     const { user } = await createMember(org, 'manager');
     const month = Number(todayIso(org.timeZone).slice(5, 7));
     const stale = await createMachine(org, { fleetNumber: 'S', seasonMonths: [month] });
-    const offSeason = await createMachine(org, { fleetNumber: 'O', seasonMonths: [(month % 12) + 1] });
+    const offSeason = await createMachine(org, {
+      fleetNumber: 'O',
+      seasonMonths: [(month % 12) + 1],
+    });
     const fresh = await createMachine(org, { fleetNumber: 'F' });
-    await addReadings(stale, [{ daysAgo: 40, value: 10 }, { daysAgo: 20, value: 20 }]);
+    await addReadings(stale, [
+      { daysAgo: 40, value: 10 },
+      { daysAgo: 20, value: 20 },
+    ]);
     await addReadings(offSeason, [{ daysAgo: 40, value: 10 }]);
     await addReadings(fresh, [{ daysAgo: 2, value: 10 }]);
     const agent = await signedInAgent(app, user);
     const res = await agent.get(`/api/v1/organizations/${org.id}/due`);
-    expect(res.body.meta.stale.map((s: { machine: { fleetNumber: string } }) => s.machine.fleetNumber)).toEqual(['S']);
+    expect(
+      res.body.meta.stale.map((s: { machine: { fleetNumber: string } }) => s.machine.fleetNumber),
+    ).toEqual(['S']);
     expect(res.body.meta.stale[0].daysSince).toBeGreaterThanOrEqual(19);
   });
 
@@ -127,7 +164,11 @@ describe('schedule API', () => {
       hazards: ['pto'],
     });
     expect(ok.status).toBe(201);
-    expect(ok.body.data).toMatchObject({ name: 'PTO clutch check', intervalMeter: 1000, hazards: ['pto'] });
+    expect(ok.body.data).toMatchObject({
+      name: 'PTO clutch check',
+      intervalMeter: 1000,
+      hazards: ['pto'],
+    });
     expect(ok.body.data.due).toMatchObject({ dueMeter: 1000, basis: 'assumed' });
   });
 
@@ -137,9 +178,23 @@ describe('schedule API', () => {
     const m = await createMachine(org);
     const task = await createTask(m, { name: 'Keep' });
     const agent = await signedInAgent(app, user);
-    expect((await agent.post(`/api/v1/organizations/${org.id}/machines/${m.id}/tasks`).send({ name: 'X', intervalDays: 5 })).status).toBe(403);
-    expect((await agent.patch(`/api/v1/organizations/${org.id}/tasks/${task.id}`).send({ name: 'Changed' })).status).toBe(403);
-    expect((await agent.delete(`/api/v1/organizations/${org.id}/tasks/${task.id}`)).status).toBe(403);
+    expect(
+      (
+        await agent
+          .post(`/api/v1/organizations/${org.id}/machines/${m.id}/tasks`)
+          .send({ name: 'X', intervalDays: 5 })
+      ).status,
+    ).toBe(403);
+    expect(
+      (
+        await agent
+          .patch(`/api/v1/organizations/${org.id}/tasks/${task.id}`)
+          .send({ name: 'Changed' })
+      ).status,
+    ).toBe(403);
+    expect((await agent.delete(`/api/v1/organizations/${org.id}/tasks/${task.id}`)).status).toBe(
+      403,
+    );
     expect((await ServiceTask.findByPk(task.id))!.name).toBe('Keep');
     const list = await agent.get(`/api/v1/organizations/${org.id}/machines/${m.id}/tasks`);
     expect(list.status).toBe(200);
@@ -150,7 +205,10 @@ describe('schedule API', () => {
     const org = await createOrganization();
     const { user } = await createMember(org, 'manager');
     const m = await createMachine(org);
-    await addReadings(m, [{ daysAgo: 20, value: 800 }, { daysAgo: 0, value: 1000 }]);
+    await addReadings(m, [
+      { daysAgo: 20, value: 800 },
+      { daysAgo: 0, value: 1000 },
+    ]);
     const task = await createTask(m, { intervalMeter: 500, intervalDays: 365 });
     const agent = await signedInAgent(app, user);
     const url = `/api/v1/organizations/${org.id}/tasks/${task.id}/last-done`;
@@ -160,9 +218,15 @@ describe('schedule API', () => {
     const high = await agent.put(url).send({ lastDoneMeter: 1200, lastDoneOn: '2025-01-01' });
     expect(high.status).toBe(422);
     expect(high.body.error.fields.lastDoneMeter).toMatch(/above the latest reading \(1,000\)/);
-    const ok = await agent.put(url).send({ lastDoneMeter: 900, lastDoneOn: addDaysIso(todayIso(org.timeZone), -10) });
+    const ok = await agent
+      .put(url)
+      .send({ lastDoneMeter: 900, lastDoneOn: addDaysIso(todayIso(org.timeZone), -10) });
     expect(ok.status).toBe(200);
-    expect(ok.body.data.due).toMatchObject({ dueMeter: 1400, basis: 'recorded', dueDate: addDaysIso(todayIso(org.timeZone), 355) });
+    expect(ok.body.data.due).toMatchObject({
+      dueMeter: 1400,
+      basis: 'recorded',
+      dueDate: addDaysIso(todayIso(org.timeZone), 355),
+    });
   });
 
   it('templates — applying one creates all its tasks in one step', async () => {
@@ -175,17 +239,55 @@ describe('schedule API', () => {
       name: 'Tractor basics',
       description: 'Typical intervals of common practice',
       tasks: [
-        { name: 'Engine oil', intervalMeter: 500, intervalDays: 365, firstServiceMeter: null, warnMeter: 50, warnDays: 30, parts: [], fluids: [], labourHours: 1, instructions: '', safetyNotes: '', hazards: [] },
-        { name: 'Air filter', intervalMeter: 250, intervalDays: null, firstServiceMeter: null, warnMeter: 25, warnDays: null, parts: [], fluids: [], labourHours: 0.5, instructions: '', safetyNotes: '', hazards: [] },
+        {
+          name: 'Engine oil',
+          intervalMeter: 500,
+          intervalDays: 365,
+          firstServiceMeter: null,
+          warnMeter: 50,
+          warnDays: 30,
+          parts: [],
+          fluids: [],
+          labourHours: 1,
+          instructions: '',
+          safetyNotes: '',
+          hazards: [],
+        },
+        {
+          name: 'Air filter',
+          intervalMeter: 250,
+          intervalDays: null,
+          firstServiceMeter: null,
+          warnMeter: 25,
+          warnDays: null,
+          parts: [],
+          fluids: [],
+          labourHours: 0.5,
+          instructions: '',
+          safetyNotes: '',
+          hazards: [],
+        },
       ],
     });
     const agent = await signedInAgent(app, user);
-    const res = await agent.post(`/api/v1/organizations/${org.id}/machines/${m.id}/apply-template`).send({ templateId: template.id });
+    const res = await agent
+      .post(`/api/v1/organizations/${org.id}/machines/${m.id}/apply-template`)
+      .send({ templateId: template.id });
     expect(res.status).toBe(201);
-    expect(res.body.data.map((t: { name: string }) => t.name)).toEqual(['Engine oil', 'Air filter']);
+    expect(res.body.data.map((t: { name: string }) => t.name)).toEqual([
+      'Engine oil',
+      'Air filter',
+    ]);
     const other = await createOrganization();
-    const foreignTemplate = await ScheduleTemplate.create({ organizationId: other.id, category: 'tractor', name: 'X', tasks: [] });
-    const refused = await agent.post(`/api/v1/organizations/${org.id}/machines/${m.id}/apply-template`).send({ templateId: foreignTemplate.id });
+    const foreignTemplate = await ScheduleTemplate.create({
+      organizationId: other.id,
+      category: 'tractor',
+      name: 'X',
+      tasks: [],
+    });
+    const refused = await agent
+      .post(`/api/v1/organizations/${org.id}/machines/${m.id}/apply-template`)
+      .send({ templateId: foreignTemplate.id });
     expect(refused.status).toBe(422);
     expect(refused.body.error.fields.templateId).toMatch(/No such schedule template/);
     expect(await countRows('service_tasks')).toBe(2);

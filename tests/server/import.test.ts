@@ -2,13 +2,25 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { countRows, resetDatabase } from '../support/db';
-import { addReadings, createMachine, createMember, createOrganization, signedInAgent } from '../support/factories';
+import {
+  addReadings,
+  createMachine,
+  createMember,
+  createOrganization,
+  signedInAgent,
+} from '../support/factories';
 import { MeterReading } from '../../server/models';
 
 const app = createApp();
 
-async function setup(units: 'imperial' | 'metric' = 'imperial', role: 'manager' | 'operator' = 'manager') {
-  const org = await createOrganization({ timeZone: units === 'imperial' ? 'America/Chicago' : 'Europe/Dublin', units });
+async function setup(
+  units: 'imperial' | 'metric' = 'imperial',
+  role: 'manager' | 'operator' = 'manager',
+) {
+  const org = await createOrganization({
+    timeZone: units === 'imperial' ? 'America/Chicago' : 'Europe/Dublin',
+    units,
+  });
   const { user } = await createMember(org, role);
   const t1 = await createMachine(org, { fleetNumber: 'T-01' });
   const t2 = await createMachine(org, { fleetNumber: 'T-02' });
@@ -16,9 +28,13 @@ async function setup(units: 'imperial' | 'metric' = 'imperial', role: 'manager' 
   await addReadings(t2, [{ daysAgo: 60, value: 500 }]);
   const agent = await signedInAgent(app, user);
   const preview = (csv: string | Buffer) =>
-    agent.post(`/api/v1/organizations/${org.id}/readings/import/preview`).attach('file', Buffer.from(csv), 'readings.csv');
+    agent
+      .post(`/api/v1/organizations/${org.id}/readings/import/preview`)
+      .attach('file', Buffer.from(csv), 'readings.csv');
   const commit = (csv: string | Buffer) =>
-    agent.post(`/api/v1/organizations/${org.id}/readings/import/commit`).attach('file', Buffer.from(csv), 'readings.csv');
+    agent
+      .post(`/api/v1/organizations/${org.id}/readings/import/commit`)
+      .attach('file', Buffer.from(csv), 'readings.csv');
   return { org, t1, t2, agent, preview, commit };
 }
 
@@ -51,7 +67,12 @@ describe('CSV import of readings', () => {
     ].join('\n');
     const res = await preview(csv);
     expect(res.status).toBe(200);
-    const rows = res.body.data.rows as { line: number; status: string; error: string | null; machine: { fleetNumber: string } | null }[];
+    const rows = res.body.data.rows as {
+      line: number;
+      status: string;
+      error: string | null;
+      machine: { fleetNumber: string } | null;
+    }[];
     expect(rows.map((r) => [r.line, r.status])).toEqual([
       [2, 'new'],
       [3, 'error'],
@@ -62,7 +83,9 @@ describe('CSV import of readings', () => {
     ]);
     expect(rows[0].machine!.fleetNumber).toBe('T-01');
     expect(rows[1].error).toMatch(/^Line 3: fleet number "T-99" is not a machine of this farm/);
-    expect(rows[2].error).toMatch(/^Line 4: taken at "not a date" must be an ISO date .* or MM\/DD\/YYYY/);
+    expect(rows[2].error).toMatch(
+      /^Line 4: taken at "not a date" must be an ISO date .* or MM\/DD\/YYYY/,
+    );
     expect(rows[3].error).toMatch(/^Line 5: value "lots" must be a number/);
     expect(rows[4].error).toMatch(/^Line 6: .*lower than the previous reading of 1,100 h/);
     expect(res.body.data.summary).toEqual({ total: 6, new: 2, duplicates: 0, errors: 4 });
@@ -71,7 +94,9 @@ describe('CSV import of readings', () => {
 
   it('import — commit with a bad row answers 422 naming the line and writes nothing at all', async () => {
     const { commit } = await setup();
-    const res = await commit(`fleet number,taken at,value\nT-01,${daysAgoIso(30)},1100\nT-02,${daysAgoIso(30)},400\n`);
+    const res = await commit(
+      `fleet number,taken at,value\nT-01,${daysAgoIso(30)},1100\nT-02,${daysAgoIso(30)},400\n`,
+    );
     expect(res.status).toBe(422);
     expect(res.body.error.fields['line 3']).toMatch(/lower than the previous reading of 500 h/);
     expect(await countRows('meter_readings')).toBe(2);
@@ -83,7 +108,9 @@ describe('CSV import of readings', () => {
     const us = `${String(d.getUTCMonth() + 1).padStart(2, '0')}/${String(d.getUTCDate()).padStart(2, '0')}/${d.getUTCFullYear()}`;
     const csv = Buffer.concat([
       Buffer.from([0xef, 0xbb, 0xbf]),
-      Buffer.from(`fleet number;taken at;value\r\nT-01;${us} 07:30;1200,5\r\nT-02;${daysAgoIso(4)}T18:00:00Z;650\r\n`),
+      Buffer.from(
+        `fleet number;taken at;value\r\nT-01;${us} 07:30;1200,5\r\nT-02;${daysAgoIso(4)}T18:00:00Z;650\r\n`,
+      ),
     ]);
     const first = await commit(csv);
     expect(first.status).toBe(201);

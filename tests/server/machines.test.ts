@@ -2,7 +2,14 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { countRows, resetDatabase } from '../support/db';
-import { addReadings, createMachine, createMember, createOrganization, createTask, signedInAgent } from '../support/factories';
+import {
+  addReadings,
+  createMachine,
+  createMember,
+  createOrganization,
+  createTask,
+  signedInAgent,
+} from '../support/factories';
 import { Machine, MachineOperator } from '../../server/models';
 
 const app = createApp();
@@ -43,7 +50,11 @@ describe('machines API', () => {
       operatorIds: [op.id],
       lastReading: null,
     });
-    expect(res.body.abilities).toMatchObject({ update: true, editSchedule: true, logReading: true });
+    expect(res.body.abilities).toMatchObject({
+      update: true,
+      editSchedule: true,
+      logReading: true,
+    });
     expect(await countRows('audit_events')).toBe(1);
   });
 
@@ -51,9 +62,16 @@ describe('machines API', () => {
     const org = await createOrganization();
     const { user } = await createMember(org, 'manager');
     const agent = await signedInAgent(app, user);
-    const res = await agent.post(base(org.id)).send({ fleetNumber: '', name: 'X', category: 'hovercraft', meterUnit: 'miles', year: 1800 });
+    const res = await agent
+      .post(base(org.id))
+      .send({ fleetNumber: '', name: 'X', category: 'hovercraft', meterUnit: 'miles', year: 1800 });
     expect(res.status).toBe(400);
-    expect(Object.keys(res.body.error.fields).sort()).toEqual(['category', 'fleetNumber', 'meterUnit', 'year']);
+    expect(Object.keys(res.body.error.fields).sort()).toEqual([
+      'category',
+      'fleetNumber',
+      'meterUnit',
+      'year',
+    ]);
     expect(res.body.error.fields.category).toMatch(/Category must be one of/);
     expect(await countRows('machines')).toBe(0);
   });
@@ -63,7 +81,9 @@ describe('machines API', () => {
     const { user } = await createMember(org, 'manager');
     await createMachine(org, { fleetNumber: 'T-01', name: 'First' });
     const agent = await signedInAgent(app, user);
-    const res = await agent.post(base(org.id)).send({ fleetNumber: 't-01', name: 'Second', category: 'tractor' });
+    const res = await agent
+      .post(base(org.id))
+      .send({ fleetNumber: 't-01', name: 'Second', category: 'tractor' });
     expect(res.status).toBe(422);
     expect(res.body.error.fields.fleetNumber).toMatch(/used by First/);
     expect(await countRows('machines')).toBe(1);
@@ -75,8 +95,13 @@ describe('machines API', () => {
     for (const role of ['technician', 'operator'] as const) {
       const { user } = await createMember(org, role);
       const agent = await signedInAgent(app, user);
-      expect((await agent.post(base(org.id)).send({ fleetNumber: 'Z', name: 'Z', category: 'other' })).status).toBe(403);
-      expect((await agent.patch(`${base(org.id)}/${machine.id}`).send({ name: 'Changed' })).status).toBe(403);
+      expect(
+        (await agent.post(base(org.id)).send({ fleetNumber: 'Z', name: 'Z', category: 'other' }))
+          .status,
+      ).toBe(403);
+      expect(
+        (await agent.patch(`${base(org.id)}/${machine.id}`).send({ name: 'Changed' })).status,
+      ).toBe(403);
     }
     expect((await Machine.findByPk(machine.id))!.name).toBe('Keep me');
     expect(await countRows('machines')).toBe(1);
@@ -89,9 +114,13 @@ describe('machines API', () => {
     const foreign = await createMachine(theirs, { name: 'Theirs' });
     const agent = await signedInAgent(app, user);
     expect((await agent.get(`${base(mine.id)}/${foreign.id}`)).status).toBe(404);
-    expect((await agent.patch(`${base(mine.id)}/${foreign.id}`).send({ name: 'Mine now' })).status).toBe(404);
+    expect(
+      (await agent.patch(`${base(mine.id)}/${foreign.id}`).send({ name: 'Mine now' })).status,
+    ).toBe(404);
     expect((await agent.get(`${base(theirs.id)}/${foreign.id}`)).status).toBe(404);
-    expect((await agent.post(`${base(mine.id)}/${foreign.id}/readings`).send({ value: 5 })).status).toBe(404);
+    expect(
+      (await agent.post(`${base(mine.id)}/${foreign.id}/readings`).send({ value: 5 })).status,
+    ).toBe(404);
     expect((await Machine.findByPk(foreign.id))!.name).toBe('Theirs');
     expect(await countRows('meter_readings')).toBe(0);
   });
@@ -113,14 +142,23 @@ describe('machines API', () => {
   it('machines — list pages, filters and sorts on the server', async () => {
     const org = await createOrganization();
     const { user } = await createMember(org, 'manager');
-    for (let i = 1; i <= 7; i++) await createMachine(org, { fleetNumber: `T-0${i}`, category: i % 2 ? 'tractor' : 'baler' });
+    for (let i = 1; i <= 7; i++)
+      await createMachine(org, { fleetNumber: `T-0${i}`, category: i % 2 ? 'tractor' : 'baler' });
     const agent = await signedInAgent(app, user);
     const page2 = await agent.get(`${base(org.id)}?pageSize=3&page=2`);
     expect(page2.status).toBe(200);
     expect(page2.body.meta).toEqual({ total: 7, page: 2, pageSize: 3 });
-    expect(page2.body.data.map((m: { fleetNumber: string }) => m.fleetNumber)).toEqual(['T-04', 'T-05', 'T-06']);
+    expect(page2.body.data.map((m: { fleetNumber: string }) => m.fleetNumber)).toEqual([
+      'T-04',
+      'T-05',
+      'T-06',
+    ]);
     const balers = await agent.get(`${base(org.id)}?category=baler&sort=fleetNumber&order=desc`);
-    expect(balers.body.data.map((m: { fleetNumber: string }) => m.fleetNumber)).toEqual(['T-06', 'T-04', 'T-02']);
+    expect(balers.body.data.map((m: { fleetNumber: string }) => m.fleetNumber)).toEqual([
+      'T-06',
+      'T-04',
+      'T-02',
+    ]);
     const bad = await agent.get(`${base(org.id)}?pageSize=5000`);
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.pageSize).toBeDefined();
@@ -131,8 +169,14 @@ describe('machines API', () => {
     const { user } = await createMember(org, 'manager');
     const late = await createMachine(org, { fleetNumber: 'A-1' });
     const fine = await createMachine(org, { fleetNumber: 'A-2' });
-    await addReadings(late, [{ daysAgo: 20, value: 900 }, { daysAgo: 0, value: 1000 }]);
-    await addReadings(fine, [{ daysAgo: 20, value: 900 }, { daysAgo: 0, value: 1000 }]);
+    await addReadings(late, [
+      { daysAgo: 20, value: 900 },
+      { daysAgo: 0, value: 1000 },
+    ]);
+    await addReadings(fine, [
+      { daysAgo: 20, value: 900 },
+      { daysAgo: 0, value: 1000 },
+    ]);
     await createTask(late, { lastDoneMeter: 700, lastDoneOn: null });
     await createTask(fine, { lastDoneMeter: 950, lastDoneOn: null });
     const agent = await signedInAgent(app, user);
@@ -154,7 +198,10 @@ describe('machines API', () => {
     ]);
     const agent = await signedInAgent(app, lena);
     const list = await agent.get(base(org.id));
-    expect(list.body.data.map((m: { fleetNumber: string }) => m.fleetNumber)).toEqual(['H-1', 'H-3']);
+    expect(list.body.data.map((m: { fleetNumber: string }) => m.fleetNumber)).toEqual([
+      'H-1',
+      'H-3',
+    ]);
     expect((await agent.get(`${base(org.id)}/${his.id}`)).status).toBe(404);
     expect((await agent.get(`${base(org.id)}/${hers.id}`)).status).toBe(200);
   });

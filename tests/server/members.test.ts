@@ -27,7 +27,12 @@ describe('members — roles and organizations', () => {
     const res = await agent.get(`/api/v1/organizations/${org.id}/members`);
     expect(res.status).toBe(200);
     expect(res.body.abilities).toEqual({ invite: true });
-    expect(res.body.data.map((m: { user: { name: string }; abilities: object }) => [m.user.name, m.abilities])).toEqual([
+    expect(
+      res.body.data.map((m: { user: { name: string }; abilities: object }) => [
+        m.user.name,
+        m.abilities,
+      ]),
+    ).toEqual([
       ['Ann Manager', { update: false, remove: false }],
       ['Bob Operator', { update: true, remove: true }],
     ]);
@@ -45,8 +50,16 @@ describe('members — roles and organizations', () => {
       .post(`/api/v1/organizations/${org.id}/invitations`)
       .send({ email: 'x@test.example', name: 'X', role: 'operator' });
     expect(invite.status).toBe(403);
-    expect((await agent.patch(`/api/v1/organizations/${org.id}/members/${tech.id}`).send({ role: 'manager' })).status).toBe(403);
-    expect((await agent.delete(`/api/v1/organizations/${org.id}/members/${tech.id}`)).status).toBe(403);
+    expect(
+      (
+        await agent
+          .patch(`/api/v1/organizations/${org.id}/members/${tech.id}`)
+          .send({ role: 'manager' })
+      ).status,
+    ).toBe(403);
+    expect((await agent.delete(`/api/v1/organizations/${org.id}/members/${tech.id}`)).status).toBe(
+      403,
+    );
     expect((await agent.get(`/api/v1/organizations/${org.id}/invitations`)).status).toBe(403);
     expect(await countRows('invitations')).toBe(0);
     expect((await Membership.findByPk(tech.id))!.role).toBe('technician');
@@ -68,7 +81,9 @@ describe('members — roles and organizations', () => {
     const { user: manager } = await createMember(org, 'manager');
     const { membership } = await createMember(org, 'operator');
     const agent = await signedInAgent(app, manager);
-    const patched = await agent.patch(`/api/v1/organizations/${org.id}/members/${membership.id}`).send({ role: 'technician' });
+    const patched = await agent
+      .patch(`/api/v1/organizations/${org.id}/members/${membership.id}`)
+      .send({ role: 'technician' });
     expect(patched.status).toBe(200);
     expect(patched.body.data.role).toBe('technician');
     const removed = await agent.delete(`/api/v1/organizations/${org.id}/members/${membership.id}`);
@@ -82,7 +97,9 @@ describe('members — roles and organizations', () => {
     const { user: manager } = await createMember(org, 'manager');
     const { membership } = await createMember(org, 'operator');
     const agent = await signedInAgent(app, manager);
-    const bad = await agent.patch(`/api/v1/organizations/${org.id}/members/${membership.id}`).send({ role: 'boss' });
+    const bad = await agent
+      .patch(`/api/v1/organizations/${org.id}/members/${membership.id}`)
+      .send({ role: 'boss' });
     expect(bad.status).toBe(400);
     expect(bad.body.error.fields.role).toMatch(/Role must be one of/);
     const dealerRole = await agent
@@ -106,10 +123,30 @@ describe('members — roles and organizations', () => {
     const { membership: foreign } = await createMember(theirs, 'operator');
     const agent = await signedInAgent(app, manager);
     expect((await agent.get(`/api/v1/organizations/${theirs.id}/members`)).status).toBe(404);
-    expect((await agent.patch(`/api/v1/organizations/${theirs.id}/members/${foreign.id}`).send({ role: 'manager' })).status).toBe(404);
-    expect((await agent.patch(`/api/v1/organizations/${mine.id}/members/${foreign.id}`).send({ role: 'manager' })).status).toBe(404);
-    expect((await agent.delete(`/api/v1/organizations/${mine.id}/members/${foreign.id}`)).status).toBe(404);
-    expect((await agent.post(`/api/v1/organizations/${theirs.id}/invitations`).send({ email: 'a@test.example', name: 'A', role: 'operator' })).status).toBe(404);
+    expect(
+      (
+        await agent
+          .patch(`/api/v1/organizations/${theirs.id}/members/${foreign.id}`)
+          .send({ role: 'manager' })
+      ).status,
+    ).toBe(404);
+    expect(
+      (
+        await agent
+          .patch(`/api/v1/organizations/${mine.id}/members/${foreign.id}`)
+          .send({ role: 'manager' })
+      ).status,
+    ).toBe(404);
+    expect(
+      (await agent.delete(`/api/v1/organizations/${mine.id}/members/${foreign.id}`)).status,
+    ).toBe(404);
+    expect(
+      (
+        await agent
+          .post(`/api/v1/organizations/${theirs.id}/invitations`)
+          .send({ email: 'a@test.example', name: 'A', role: 'operator' })
+      ).status,
+    ).toBe(404);
     expect((await agent.get(`/api/v1/organizations/not-a-uuid/members`)).status).toBe(404);
     expect((await Membership.findByPk(foreign.id))!.role).toBe('operator');
     expect(await countRows('invitations')).toBe(0);
@@ -122,7 +159,12 @@ describe('members — roles and organizations', () => {
     await Membership.create({ organizationId: b.id, userId: user.id, role: 'operator' });
     const agent = await signedInAgent(app, user);
     const me = await agent.get('/api/v1/me');
-    expect(me.body.data.memberships.map((m: { organization: { name: string }; role: string }) => [m.organization.name, m.role])).toEqual([
+    expect(
+      me.body.data.memberships.map((m: { organization: { name: string }; role: string }) => [
+        m.organization.name,
+        m.role,
+      ]),
+    ).toEqual([
       ['A Farm', 'manager'],
       ['B Farm', 'operator'],
     ]);

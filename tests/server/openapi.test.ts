@@ -19,12 +19,16 @@ describe('OpenAPI document', () => {
   it('openapi.json — lists every route the API answers', async () => {
     const res = await request(app).get('/api/v1/openapi.json');
     const documented = new Set<string>();
-    for (const [p, ops] of Object.entries(res.body.paths as Record<string, Record<string, unknown>>)) {
+    for (const [p, ops] of Object.entries(
+      res.body.paths as Record<string, Record<string, unknown>>,
+    )) {
       for (const method of Object.keys(ops)) documented.add(`${method.toUpperCase()} ${p}`);
     }
     // The Express router stack of /api/v1, walked: every route must be documented.
     const answered = listRoutes(app);
-    const undocumented = answered.filter((r) => !documented.has(r) && !/\/(health|openapi\.json)$/.test(r));
+    const undocumented = answered.filter(
+      (r) => !documented.has(r) && !/\/(health|openapi\.json)$/.test(r),
+    );
     expect(answered.length).toBeGreaterThan(10);
     expect(undocumented).toEqual([]);
   });

@@ -2,7 +2,14 @@ import { beforeEach, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createApp } from '../../server/app';
 import { countRows, resetDatabase } from '../support/db';
-import { addReadings, createMachine, createMember, createOrganization, createTask, signedInAgent } from '../support/factories';
+import {
+  addReadings,
+  createMachine,
+  createMember,
+  createOrganization,
+  createTask,
+  signedInAgent,
+} from '../support/factories';
 import { AuditEvent, MeterReading, TaskDuePoint } from '../../server/models';
 
 const app = createApp();
@@ -33,7 +40,10 @@ describe('readings API — the rules', () => {
     const opAgent = await signedInAgent(app, op);
     const res = await opAgent.post(url).send({ value: 12.5, takenAt: iso(60_000) });
     expect(res.status).toBe(201);
-    expect(res.body).toMatchObject({ status: 'added', data: { value: 12.5, lifetimeValue: 12.5, source: 'manual' } });
+    expect(res.body).toMatchObject({
+      status: 'added',
+      data: { value: 12.5, lifetimeValue: 12.5, source: 'manual' },
+    });
   });
 
   it('readings — a reading below the previous one is refused naming the rule and the previous reading; nothing written', async () => {
@@ -41,13 +51,18 @@ describe('readings API — the rules', () => {
     await addReadings(machine, [{ daysAgo: 2, value: 1052 }]);
     const res = await agent.post(url).send({ value: 1040, takenAt: iso(60_000) });
     expect(res.status).toBe(422);
-    expect(res.body.error.fields.value).toMatch(/lower than the previous reading of 1,052 h taken .* may not go backwards/);
+    expect(res.body.error.fields.value).toMatch(
+      /lower than the previous reading of 1,052 h taken .* may not go backwards/,
+    );
     expect(await countRows('meter_readings')).toBe(1);
   });
 
   it('readings — a reading above a later one is refused (inserting into history)', async () => {
     const { machine, agent, url } = await farm();
-    await addReadings(machine, [{ daysAgo: 10, value: 1000 }, { daysAgo: 2, value: 1050 }]);
+    await addReadings(machine, [
+      { daysAgo: 10, value: 1000 },
+      { daysAgo: 2, value: 1050 },
+    ]);
     const res = await agent.post(url).send({ value: 1060, takenAt: iso(5 * DAY) });
     expect(res.status).toBe(422);
     expect(res.body.error.fields.value).toMatch(/higher than the next reading of 1,050 h/);
@@ -55,10 +70,14 @@ describe('readings API — the rules', () => {
 
   it('readings — a reading in the future is refused on takenAt; a few minutes of clock skew are allowed', async () => {
     const { agent, url } = await farm();
-    const future = await agent.post(url).send({ value: 10, takenAt: new Date(Date.now() + 3600_000).toISOString() });
+    const future = await agent
+      .post(url)
+      .send({ value: 10, takenAt: new Date(Date.now() + 3600_000).toISOString() });
     expect(future.status).toBe(422);
     expect(future.body.error.fields.takenAt).toMatch(/in the future/);
-    const skew = await agent.post(url).send({ value: 10, takenAt: new Date(Date.now() + 2 * 60_000).toISOString() });
+    const skew = await agent
+      .post(url)
+      .send({ value: 10, takenAt: new Date(Date.now() + 2 * 60_000).toISOString() });
     expect(skew.status).toBe(201);
   });
 
@@ -95,8 +114,15 @@ describe('readings API — the rules', () => {
 
   it('readings — a new reading moves the due points (summary refreshed in the same request)', async () => {
     const { machine, agent, url } = await farm();
-    await addReadings(machine, [{ daysAgo: 30, value: 1000 }, { daysAgo: 10, value: 1100 }]);
-    const task = await createTask(machine, { intervalMeter: 250, lastDoneMeter: 1000, warnMeter: 25 });
+    await addReadings(machine, [
+      { daysAgo: 30, value: 1000 },
+      { daysAgo: 10, value: 1100 },
+    ]);
+    const task = await createTask(machine, {
+      intervalMeter: 250,
+      lastDoneMeter: 1000,
+      warnMeter: 25,
+    });
     const before = (await TaskDuePoint.findByPk(task.id))!.due;
     expect(before.remainingMeter).toBe(150);
     const res = await agent.post(url).send({ value: 1230, takenAt: iso(60_000) });
@@ -152,12 +178,20 @@ describe('readings API — corrections and meter replacement', () => {
 
   it('correct and delete — manager may, with an audit entry holding before and after', async () => {
     const { org, machine, agent } = await farm('manager');
-    await addReadings(machine, [{ daysAgo: 5, value: 100 }, { daysAgo: 3, value: 120 }, { daysAgo: 1, value: 140 }]);
+    await addReadings(machine, [
+      { daysAgo: 5, value: 100 },
+      { daysAgo: 3, value: 120 },
+      { daysAgo: 1, value: 140 },
+    ]);
     const middle = (await MeterReading.findOne({ where: { value: 120 } }))!;
-    const fix = await agent.patch(`/api/v1/organizations/${org.id}/readings/${middle.id}`).send({ value: 125 });
+    const fix = await agent
+      .patch(`/api/v1/organizations/${org.id}/readings/${middle.id}`)
+      .send({ value: 125 });
     expect(fix.status).toBe(200);
     expect(fix.body.data.value).toBe(125);
-    const tooHigh = await agent.patch(`/api/v1/organizations/${org.id}/readings/${middle.id}`).send({ value: 150 });
+    const tooHigh = await agent
+      .patch(`/api/v1/organizations/${org.id}/readings/${middle.id}`)
+      .send({ value: 150 });
     expect(tooHigh.status).toBe(422);
     expect(tooHigh.body.error.fields.value).toMatch(/next reading of 140 h/);
     const del = await agent.delete(`/api/v1/organizations/${org.id}/readings/${middle.id}`);
@@ -172,24 +206,42 @@ describe('readings API — corrections and meter replacement', () => {
     const { org, machine, agent } = await farm('operator');
     await addReadings(machine, [{ daysAgo: 5, value: 100 }]);
     const r = (await MeterReading.findOne())!;
-    expect((await agent.patch(`/api/v1/organizations/${org.id}/readings/${r.id}`).send({ value: 101 })).status).toBe(403);
-    expect((await agent.delete(`/api/v1/organizations/${org.id}/readings/${r.id}`)).status).toBe(403);
+    expect(
+      (await agent.patch(`/api/v1/organizations/${org.id}/readings/${r.id}`).send({ value: 101 }))
+        .status,
+    ).toBe(403);
+    expect((await agent.delete(`/api/v1/organizations/${org.id}/readings/${r.id}`)).status).toBe(
+      403,
+    );
     expect((await MeterReading.findByPk(r.id))!.value).toBe(100);
   });
 
   it('meter replacement — lifetime values stay continuous and later readings are on the new meter', async () => {
     const { org, machine, agent, url } = await farm('technician');
-    await addReadings(machine, [{ daysAgo: 20, value: 4000 }, { daysAgo: 10, value: 4080 }]);
+    await addReadings(machine, [
+      { daysAgo: 20, value: 4000 },
+      { daysAgo: 10, value: 4080 },
+    ]);
     const rep = await agent
       .post(`/api/v1/organizations/${org.id}/machines/${machine.id}/meter-replacements`)
-      .send({ oldFinalValue: 4100, newStartValue: 0, replacedAt: iso(5 * DAY), note: 'cluster failed' });
+      .send({
+        oldFinalValue: 4100,
+        newStartValue: 0,
+        replacedAt: iso(5 * DAY),
+        note: 'cluster failed',
+      });
     expect(rep.status).toBe(201);
     const next = await agent.post(url).send({ value: 30, takenAt: iso(60_000) });
     expect(next.status).toBe(201);
     expect(next.body.data).toMatchObject({ value: 30, lifetimeValue: 4130 });
     const history = await agent.get(url);
     expect(history.body.replacements).toHaveLength(1);
-    expect(history.body.data.map((r: { value: number; lifetimeValue: number }) => [r.value, r.lifetimeValue])).toEqual([
+    expect(
+      history.body.data.map((r: { value: number; lifetimeValue: number }) => [
+        r.value,
+        r.lifetimeValue,
+      ]),
+    ).toEqual([
       [30, 4130],
       [0, 4100],
       [4100, 4100],

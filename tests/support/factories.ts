@@ -1,7 +1,14 @@
 import bcrypt from 'bcryptjs';
 import request from 'supertest';
 import type { Express } from 'express';
-import { Machine, Membership, MeterReading, Organization, ServiceTask, User } from '../../server/models';
+import {
+  Machine,
+  Membership,
+  MeterReading,
+  Organization,
+  ServiceTask,
+  User,
+} from '../../server/models';
 import { refreshMachineForecast } from '../../server/services/forecast';
 import type { MachineCategory, MeterUnit, Role } from '../../shared/constants';
 
@@ -59,10 +66,16 @@ export async function signedInAgent(app: Express, user: User) {
   return agent;
 }
 
-
 export async function createMachine(
   organization: Organization,
-  overrides: Partial<{ fleetNumber: string; name: string; category: MachineCategory; meterUnit: MeterUnit; status: Machine['status']; seasonMonths: number[] }> = {},
+  overrides: Partial<{
+    fleetNumber: string;
+    name: string;
+    category: MachineCategory;
+    meterUnit: MeterUnit;
+    status: Machine['status'];
+    seasonMonths: number[];
+  }> = {},
 ) {
   const n = next();
   return Machine.create({
@@ -79,7 +92,11 @@ export async function createMachine(
 }
 
 /** Inserts readings directly (bypassing the rules) and refreshes the machine's forecast. */
-export async function addReadings(machine: Machine, points: { daysAgo: number; value: number }[], now = new Date()) {
+export async function addReadings(
+  machine: Machine,
+  points: { daysAgo: number; value: number }[],
+  now = new Date(),
+) {
   await MeterReading.bulkCreate(
     points.map((p) => ({
       organizationId: machine.organizationId,
@@ -95,7 +112,10 @@ export async function addReadings(machine: Machine, points: { daysAgo: number; v
   await refreshMachineForecast(machine.id, machine.organizationId);
 }
 
-export async function createTask(machine: Machine, overrides: Partial<ServiceTask['_creationAttributes']> = {}) {
+export async function createTask(
+  machine: Machine,
+  overrides: Partial<ServiceTask['_creationAttributes']> = {},
+) {
   const task = await ServiceTask.create({
     organizationId: machine.organizationId,
     machineId: machine.id,

@@ -118,7 +118,11 @@ export function authRouter(): Router {
           email: inv.email,
           name: inv.name,
           role: inv.role,
-          organization: { id: inv.organization!.id, name: inv.organization!.name, kind: inv.organization!.kind },
+          organization: {
+            id: inv.organization!.id,
+            name: inv.organization!.name,
+            kind: inv.organization!.kind,
+          },
         },
       };
     },

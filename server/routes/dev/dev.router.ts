@@ -25,9 +25,11 @@ export function devRouter(): Router {
     access: 'public',
     response: z.object({ data: z.array(caughtMail) }),
     handler: async () => {
-      if (env.NODE_ENV === 'production' || !env.MAIL_CATCHER_URL) throw new AppError(404, 'not_found', 'No such route');
+      if (env.NODE_ENV === 'production' || !env.MAIL_CATCHER_URL)
+        throw new AppError(404, 'not_found', 'No such route');
       const response = await fetch(`${env.MAIL_CATCHER_URL}/messages`);
-      if (!response.ok) throw new AppError(502, 'mail_catcher', 'The local mail catcher did not answer');
+      if (!response.ok)
+        throw new AppError(502, 'mail_catcher', 'The local mail catcher did not answer');
       const messages = (await response.json()) as Array<Record<string, unknown>>;
       return {
         data: messages.map((m) => ({

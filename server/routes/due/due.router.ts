@@ -24,7 +24,9 @@ const dueRowSchema = z
     }),
     due: duePointSchema,
     lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
-    usage: z.object({ method: z.string(), rate: z.number(), low: z.number(), high: z.number() }).nullable(),
+    usage: z
+      .object({ method: z.string(), rate: z.number(), low: z.number(), high: z.number() })
+      .nullable(),
   })
   .openapi('DueRow');
 
@@ -35,7 +37,12 @@ const dueResponse = z.object({
     total: z.number(),
     page: z.number(),
     pageSize: z.number(),
-    counts: z.object({ overdue: z.number(), due_soon: z.number(), ok: z.number(), no_forecast: z.number() }),
+    counts: z.object({
+      overdue: z.number(),
+      due_soon: z.number(),
+      ok: z.number(),
+      no_forecast: z.number(),
+    }),
     stale: z.array(
       z.object({
         machine: z.object({ id: z.string(), fleetNumber: z.string(), name: z.string() }),
@@ -52,14 +59,18 @@ export function dueRouter(): Router {
   route(router, {
     method: 'get',
     path: '/organizations/:orgId/due',
-    summary: 'The due list across the farm: overdue first, then by projected date; counts and stale meters',
+    summary:
+      'The due list across the farm: overdue first, then by projected date; counts and stale meters',
     tags: ['due'],
     params: orgParams,
     query: dueListQuerySchema,
     response: dueResponse,
     handler: async ({ req, query }) => {
       const { asOf, rows, counts, stale, total } = await dueList(req.access!, query);
-      return { data: rows, meta: { asOf, counts, stale, total, page: query.page, pageSize: query.pageSize } };
+      return {
+        data: rows,
+        meta: { asOf, counts, stale, total, page: query.page, pageSize: query.pageSize },
+      };
     },
   });
 
@@ -72,7 +83,9 @@ export function dueRouter(): Router {
     response: dueResponse,
     handler: async ({ req, params }) => {
       await loadMachine(req.access!, params.machineId);
-      const { asOf, rows, counts, stale, total } = await dueList(req.access!, { machineId: params.machineId });
+      const { asOf, rows, counts, stale, total } = await dueList(req.access!, {
+        machineId: params.machineId,
+      });
       const own = stale.filter((s) => s.machine.id === params.machineId);
       return { data: rows, meta: { asOf, counts, stale: own, total, page: 1, pageSize: total } };
     },

@@ -1,7 +1,11 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
-import { machineCreateSchema, machineListQuerySchema, machineUpdateSchema } from '../../../shared/schemas/machines';
+import {
+  machineCreateSchema,
+  machineListQuerySchema,
+  machineUpdateSchema,
+} from '../../../shared/schemas/machines';
 import { authorize } from '../../policies/access';
 import { canCreateMachine, canUpdateMachine, machineAbilities } from '../../policies/machine';
 import { machineSchema, presentMachine, presentUsage, usageSchema } from '../../presenters/machine';
@@ -83,13 +87,24 @@ export function machinesRouter(): Router {
       await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
       const { machine, operatorIds } = await loadMachine(access, params.machineId);
       const forecast = await MachineForecast.findByPk(machine.id);
-      const due = await TaskDuePoint.findAll({ where: { organizationId: access.organization.id, machineId: machine.id } });
+      const due = await TaskDuePoint.findAll({
+        where: { organizationId: access.organization.id, machineId: machine.id },
+      });
       const rank = { overdue: 0, due_soon: 1, no_forecast: 2, ok: 3 } as const;
       const worst = [...due].sort((a, b) => rank[a.status] - rank[b.status])[0];
-      const next = due.map((d) => d.sortDate).filter((d): d is string => !!d).sort()[0] ?? null;
+      const next =
+        due
+          .map((d) => d.sortDate)
+          .filter((d): d is string => !!d)
+          .sort()[0] ?? null;
       return {
         data: {
-          ...presentMachine(machine, { operatorIds, forecast, dueStatus: worst?.status ?? null, nextDueDate: next }),
+          ...presentMachine(machine, {
+            operatorIds,
+            forecast,
+            dueStatus: worst?.status ?? null,
+            nextDueDate: next,
+          }),
           usage: presentUsage(forecast?.usage ?? null),
         },
         abilities: machineAbilities(access, machine),
@@ -112,7 +127,10 @@ export function machinesRouter(): Router {
       await updateMachine(access, machine, body);
       const { operatorIds } = await loadMachine(access, params.machineId);
       const forecast = await MachineForecast.findByPk(machine.id);
-      return { data: presentMachine(machine, { operatorIds, forecast }), abilities: machineAbilities(access, machine) };
+      return {
+        data: presentMachine(machine, { operatorIds, forecast }),
+        abilities: machineAbilities(access, machine),
+      };
     },
   });
 

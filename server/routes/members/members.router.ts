@@ -12,7 +12,12 @@ import {
   canUpdateMember,
   rolesFor,
 } from '../../policies/membership';
-import { invitationSchema, memberSchema, presentInvitation, presentMember } from '../../presenters/membership';
+import {
+  invitationSchema,
+  memberSchema,
+  presentInvitation,
+  presentMember,
+} from '../../presenters/membership';
 import { inviteMember } from '../../services/accounts';
 import { recordAudit } from '../../services/audit';
 import { sequelize } from '../../db';
@@ -44,7 +49,10 @@ export function membersRouter(): Router {
     summary: 'Members of the organization with their roles',
     tags: ['members'],
     params: orgParams,
-    response: z.object({ data: z.array(memberSchema), abilities: z.object({ invite: z.boolean() }) }),
+    response: z.object({
+      data: z.array(memberSchema),
+      abilities: z.object({ invite: z.boolean() }),
+    }),
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canListMembers(access));
@@ -71,9 +79,14 @@ export function membersRouter(): Router {
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const member = await findMember(access, params.id);
-      authorize(canUpdateMember(access, member), 'Only a manager may change roles, and not their own');
+      authorize(
+        canUpdateMember(access, member),
+        'Only a manager may change roles, and not their own',
+      );
       if (!rolesFor(access).includes(body.role)) {
-        throw invalid({ role: `Role must be one of: ${rolesFor(access).join(', ')} in this organization` });
+        throw invalid({
+          role: `Role must be one of: ${rolesFor(access).join(', ')} in this organization`,
+        });
       }
       await sequelize.transaction(async (transaction) => {
         const before = member.role;
@@ -104,7 +117,10 @@ export function membersRouter(): Router {
     handler: async ({ req, params }) => {
       const access = req.access!;
       const member = await findMember(access, params.id);
-      authorize(canRemoveMember(access, member), 'Only a manager may remove members, and not themselves');
+      authorize(
+        canRemoveMember(access, member),
+        'Only a manager may remove members, and not themselves',
+      );
       await sequelize.transaction(async (transaction) => {
         await member.destroy({ transaction });
         await recordAudit(

@@ -8,10 +8,26 @@ import {
   readingUpdateSchema,
 } from '../../../shared/schemas/readings';
 import { authorize } from '../../policies/access';
-import { canCorrectReading, canImportReadings, canLogReading, canReplaceMeter } from '../../policies/machine';
-import { presentReading, presentReplacement, readingSchema, replacementSchema } from '../../presenters/machine';
+import {
+  canCorrectReading,
+  canImportReadings,
+  canLogReading,
+  canReplaceMeter,
+} from '../../policies/machine';
+import {
+  presentReading,
+  presentReplacement,
+  readingSchema,
+  replacementSchema,
+} from '../../presenters/machine';
 import { listMachines, loadMachine } from '../../services/machines';
-import { correctReading, deleteReading, replaceMeter, writeReadings, type NewReading } from '../../services/readings';
+import {
+  correctReading,
+  deleteReading,
+  replaceMeter,
+  writeReadings,
+  type NewReading,
+} from '../../services/readings';
 import { commitImport, previewImport } from '../../services/reading-import';
 import { MeterReading, MeterReplacement } from '../../models';
 import { sequelize } from '../../db';
@@ -25,13 +41,17 @@ const readingParams = orgParams.extend({ readingId: z.uuid() });
 const importRowSchema = z.object({
   line: z.number(),
   fleetNumber: z.string(),
-  machine: z.object({ id: z.string(), name: z.string(), fleetNumber: z.string(), meterUnit: z.string() }).nullable(),
+  machine: z
+    .object({ id: z.string(), name: z.string(), fleetNumber: z.string(), meterUnit: z.string() })
+    .nullable(),
   takenAt: z.string().nullable(),
   value: z.number().nullable(),
   status: z.enum(['new', 'duplicate', 'error']),
   error: z.string().nullable(),
 });
-const csvBody = z.object({ file: z.string().openapi({ format: 'binary', description: 'CSV: fleet number, taken at, value' }) });
+const csvBody = z.object({
+  file: z.string().openapi({ format: 'binary', description: 'CSV: fleet number, taken at, value' }),
+});
 
 async function loadReading(orgId: string, readingId: string) {
   const reading = await MeterReading.findOne({ where: { id: readingId, organizationId: orgId } });
@@ -56,7 +76,10 @@ export function readingsRouter(): Router {
       const [readings, replacements] = await Promise.all([
         MeterReading.findAll({
           where: { organizationId: access.organization.id, machineId: machine.id },
-          order: [['takenAt', 'DESC'], ['lifetimeValue', 'DESC']],
+          order: [
+            ['takenAt', 'DESC'],
+            ['lifetimeValue', 'DESC'],
+          ],
           limit: query.limit,
         }),
         MeterReplacement.findAll({
@@ -64,14 +87,18 @@ export function readingsRouter(): Router {
           order: [['replacedAt', 'DESC']],
         }),
       ]);
-      return { data: readings.map(presentReading), replacements: replacements.map(presentReplacement) };
+      return {
+        data: readings.map(presentReading),
+        replacements: replacements.map(presentReplacement),
+      };
     },
   });
 
   route(router, {
     method: 'post',
     path: '/organizations/:orgId/machines/:machineId/readings',
-    summary: 'Log an hour-meter reading (checked against its neighbours; an identical repeat is ignored)',
+    summary:
+      'Log an hour-meter reading (checked against its neighbours; an identical repeat is ignored)',
     tags: ['readings'],
     params: machineParams,
     body: readingCreateSchema,
@@ -80,35 +107,61 @@ export function readingsRouter(): Router {
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
-      authorize(canLogReading(access, machine), machine.status === 'sold' ? 'This machine is sold; readings are closed' : undefined);
+      authorize(
+        canLogReading(access, machine),
+        machine.status === 'sold' ? 'This machine is sold; readings are closed' : undefined,
+      );
       const [outcome] = await sequelize.transaction((transaction) =>
         writeReadings(
           access,
-          [{ machine, value: body.value, takenAt: body.takenAt ? new Date(body.takenAt) : new Date(), source: 'manual' }],
+          [
+            {
+              machine,
+              value: body.value,
+              takenAt: body.takenAt ? new Date(body.takenAt) : new Date(),
+              source: 'manual',
+            },
+          ],
           transaction,
         ),
       );
-      return { data: outcome.reading ? presentReading(outcome.reading) : null, status: outcome.status };
+      return {
+        data: outcome.reading ? presentReading(outcome.reading) : null,
+        status: outcome.status,
+      };
     },
   });
 
   route(router, {
     method: 'get',
     path: '/organizations/:orgId/readings/latest',
-    summary: 'Every machine the caller may log hours for, with its last reading (the log-hours screen)',
+    summary:
+      'Every machine the caller may log hours for, with its last reading (the log-hours screen)',
     tags: ['readings'],
     params: orgParams,
     response: z.object({
       data: z.array(
         z.object({
-          machine: z.object({ id: z.string(), fleetNumber: z.string(), name: z.string(), meterUnit: z.string(), status: z.string(), category: z.string() }),
+          machine: z.object({
+            id: z.string(),
+            fleetNumber: z.string(),
+            name: z.string(),
+            meterUnit: z.string(),
+            status: z.string(),
+            category: z.string(),
+          }),
           lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
         }),
       ),
     }),
     handler: async ({ req }) => {
       const access = req.access!;
-      const { items } = await listMachines(access, { sort: 'fleetNumber', order: 'asc', page: 1, pageSize: 10_000 });
+      const { items } = await listMachines(access, {
+        sort: 'fleetNumber',
+        order: 'asc',
+        page: 1,
+        pageSize: 10_000,
+      });
       return {
         data: items
           .filter((i) => i.machine.status !== 'sold')
@@ -138,7 +191,9 @@ export function readingsRouter(): Router {
     params: orgParams,
     body: bulkReadingsSchema,
     status: 201,
-    response: z.object({ data: z.array(z.object({ machineId: z.string(), status: z.enum(['added', 'duplicate']) })) }),
+    response: z.object({
+      data: z.array(z.object({ machineId: z.string(), status: z.enum(['added', 'duplicate']) })),
+    }),
     handler: async ({ req, body }) => {
       const access = req.access!;
       const items: NewReading[] = [];
@@ -146,8 +201,15 @@ export function readingsRouter(): Router {
       for (const [i, r] of body.readings.entries()) {
         try {
           const { machine } = await loadMachine(access, r.machineId);
-          if (!canLogReading(access, machine)) missing[`readings.${i}.machineId`] = `${machine.fleetNumber} is sold; readings are closed`;
-          items.push({ machine, value: r.value, takenAt: r.takenAt ? new Date(r.takenAt) : new Date(), source: 'manual' as const });
+          if (!canLogReading(access, machine))
+            missing[`readings.${i}.machineId`] =
+              `${machine.fleetNumber} is sold; readings are closed`;
+          items.push({
+            machine,
+            value: r.value,
+            takenAt: r.takenAt ? new Date(r.takenAt) : new Date(),
+            source: 'manual' as const,
+          });
         } catch {
           missing[`readings.${i}.machineId`] = 'No such machine in this farm';
         }
@@ -156,7 +218,9 @@ export function readingsRouter(): Router {
       const outcomes = await sequelize.transaction((transaction) =>
         writeReadings(access, items, transaction, { fieldPrefix: (i) => `readings.${i}.` }),
       );
-      return { data: outcomes.map((o) => ({ machineId: items[o.index].machine.id, status: o.status })) };
+      return {
+        data: outcomes.map((o) => ({ machineId: items[o.index].machine.id, status: o.status })),
+      };
     },
   });
 
@@ -200,7 +264,8 @@ export function readingsRouter(): Router {
   route(router, {
     method: 'post',
     path: '/organizations/:orgId/machines/:machineId/meter-replacements',
-    summary: "Record a meter replacement (old meter's final value, new meter's start); lifetime values stay continuous",
+    summary:
+      "Record a meter replacement (old meter's final value, new meter's start); lifetime values stay continuous",
     tags: ['readings'],
     params: machineParams,
     body: meterReplacementSchema,
@@ -209,8 +274,14 @@ export function readingsRouter(): Router {
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
-      authorize(canReplaceMeter(access), 'Only a manager or technician may record a meter replacement');
-      const r = await replaceMeter(access, machine, { ...body, replacedAt: new Date(body.replacedAt) });
+      authorize(
+        canReplaceMeter(access),
+        'Only a manager or technician may record a meter replacement',
+      );
+      const r = await replaceMeter(access, machine, {
+        ...body,
+        replacedAt: new Date(body.replacedAt),
+      });
       return { data: presentReplacement(r) };
     },
   });
@@ -218,7 +289,8 @@ export function readingsRouter(): Router {
   route(router, {
     method: 'post',
     path: '/organizations/:orgId/readings/import/preview',
-    summary: 'Check a CSV of readings: every row with its machine and any error by line number; writes nothing',
+    summary:
+      'Check a CSV of readings: every row with its machine and any error by line number; writes nothing',
     tags: ['readings'],
     params: orgParams,
     before: [csvUpload()],
@@ -226,7 +298,12 @@ export function readingsRouter(): Router {
     response: z.object({
       data: z.object({
         rows: z.array(importRowSchema),
-        summary: z.object({ total: z.number(), new: z.number(), duplicates: z.number(), errors: z.number() }),
+        summary: z.object({
+          total: z.number(),
+          new: z.number(),
+          duplicates: z.number(),
+          errors: z.number(),
+        }),
       }),
     }),
     handler: async ({ req }) => {
@@ -239,13 +316,16 @@ export function readingsRouter(): Router {
   route(router, {
     method: 'post',
     path: '/organizations/:orgId/readings/import/commit',
-    summary: 'Import a CSV of readings: one transaction, all or nothing; rows already imported are skipped',
+    summary:
+      'Import a CSV of readings: one transaction, all or nothing; rows already imported are skipped',
     tags: ['readings'],
     params: orgParams,
     before: [csvUpload()],
     multipartBody: csvBody,
     status: 201,
-    response: z.object({ data: z.object({ added: z.number(), duplicates: z.number(), total: z.number() }) }),
+    response: z.object({
+      data: z.object({ added: z.number(), duplicates: z.number(), total: z.number() }),
+    }),
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canImportReadings(access), 'Only a manager or technician may import readings');

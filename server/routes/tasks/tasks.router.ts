@@ -1,7 +1,11 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
-import { lastDoneSchema, taskInputSchema, taskUpdateSchema } from '../../../shared/schemas/schedule';
+import {
+  lastDoneSchema,
+  taskInputSchema,
+  taskUpdateSchema,
+} from '../../../shared/schemas/schedule';
 import { MACHINE_CATEGORIES } from '../../../shared/constants';
 import { authorize, hasRole } from '../../policies/access';
 import { canEditSchedule, canSetLastDone } from '../../policies/machine';
@@ -37,7 +41,9 @@ const templateSchema = z
   .openapi('ScheduleTemplate');
 
 const templateInputSchema = z.object({
-  category: z.enum(MACHINE_CATEGORIES, { error: `Category must be one of: ${MACHINE_CATEGORIES.join(', ')}` }),
+  category: z.enum(MACHINE_CATEGORIES, {
+    error: `Category must be one of: ${MACHINE_CATEGORIES.join(', ')}`,
+  }),
   name: z.string().trim().min(1, { error: 'Enter a template name' }).max(120),
   description: z.string().max(2000).default(''),
   tasks: z.array(taskInputSchema).min(1, { error: 'A template needs at least one task' }).max(60),
@@ -45,7 +51,13 @@ const templateInputSchema = z.object({
 
 async function tasksWithDue(organizationId: string, machineId: string) {
   const [tasks, due] = await Promise.all([
-    ServiceTask.findAll({ where: { organizationId, machineId }, order: [['position', 'ASC'], ['name', 'ASC']] }),
+    ServiceTask.findAll({
+      where: { organizationId, machineId },
+      order: [
+        ['position', 'ASC'],
+        ['name', 'ASC'],
+      ],
+    }),
     TaskDuePoint.findAll({ where: { organizationId, machineId } }),
   ]);
   const dueOf = new Map(due.map((d) => [d.taskId, d.due]));
@@ -61,7 +73,10 @@ export function tasksRouter(): Router {
     summary: "A machine's service schedule with each task's due point",
     tags: ['schedule'],
     params: machineParams,
-    response: z.object({ data: z.array(taskSchema), abilities: z.object({ edit: z.boolean(), setLastDone: z.boolean() }) }),
+    response: z.object({
+      data: z.array(taskSchema),
+      abilities: z.object({ edit: z.boolean(), setLastDone: z.boolean() }),
+    }),
     handler: async ({ req, params }) => {
       const access = req.access!;
       await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
@@ -130,7 +145,8 @@ export function tasksRouter(): Router {
   route(router, {
     method: 'put',
     path: '/organizations/:orgId/tasks/:taskId/last-done',
-    summary: 'Set when a task was last done (meter value and date), e.g. before the machine came into the system',
+    summary:
+      'Set when a task was last done (meter value and date), e.g. before the machine came into the system',
     tags: ['schedule'],
     params: taskParams,
     body: lastDoneSchema,
@@ -139,7 +155,10 @@ export function tasksRouter(): Router {
       const access = req.access!;
       const task = await loadTask(access, params.taskId);
       await loadMachine(access, task.machineId);
-      authorize(canSetLastDone(access), 'Only a manager or technician may set when a task was last done');
+      authorize(
+        canSetLastDone(access),
+        'Only a manager or technician may set when a task was last done',
+      );
       await setLastDone(access, task, body);
       const due = await TaskDuePoint.findByPk(task.id);
       return { data: presentTask(task, due?.due ?? null) };
@@ -153,15 +172,30 @@ export function tasksRouter(): Router {
     tags: ['schedule'],
     params: orgParams,
     query: z.object({ category: z.enum(MACHINE_CATEGORIES).optional() }),
-    response: z.object({ data: z.array(templateSchema), abilities: z.object({ edit: z.boolean() }) }),
+    response: z.object({
+      data: z.array(templateSchema),
+      abilities: z.object({ edit: z.boolean() }),
+    }),
     handler: async ({ req, query }) => {
       const access = req.access!;
       const rows = await ScheduleTemplate.findAll({
-        where: { organizationId: access.organization.id, ...(query.category && { category: query.category }) },
-        order: [['category', 'ASC'], ['name', 'ASC']],
+        where: {
+          organizationId: access.organization.id,
+          ...(query.category && { category: query.category }),
+        },
+        order: [
+          ['category', 'ASC'],
+          ['name', 'ASC'],
+        ],
       });
       return {
-        data: rows.map((t) => ({ id: t.id, category: t.category, name: t.name, description: t.description, tasks: t.tasks })),
+        data: rows.map((t) => ({
+          id: t.id,
+          category: t.category,
+          name: t.name,
+          description: t.description,
+          tasks: t.tasks,
+        })),
         abilities: { edit: hasRole(access, 'manager') },
       };
     },
@@ -180,21 +214,38 @@ export function tasksRouter(): Router {
       const access = req.access!;
       authorize(hasRole(access, 'manager'), 'Only a manager may edit schedule templates');
       const t = await sequelize.transaction(async (transaction) => {
-        const row = await ScheduleTemplate.create({ ...body, organizationId: access.organization.id }, { transaction });
+        const row = await ScheduleTemplate.create(
+          { ...body, organizationId: access.organization.id },
+          { transaction },
+        );
         await recordAudit(
-          { organizationId: access.organization.id, actorUserId: access.userId, action: 'template.create', entityType: 'schedule_template', entityId: row.id },
+          {
+            organizationId: access.organization.id,
+            actorUserId: access.userId,
+            action: 'template.create',
+            entityType: 'schedule_template',
+            entityId: row.id,
+          },
           transaction,
         );
         return row;
       });
-      return { data: { id: t.id, category: t.category, name: t.name, description: t.description, tasks: t.tasks } };
+      return {
+        data: {
+          id: t.id,
+          category: t.category,
+          name: t.name,
+          description: t.description,
+          tasks: t.tasks,
+        },
+      };
     },
   });
 
   route(router, {
     method: 'post',
     path: '/organizations/:orgId/machines/:machineId/apply-template',
-    summary: "Apply a schedule template: creates all its tasks on the machine in one step",
+    summary: 'Apply a schedule template: creates all its tasks on the machine in one step',
     tags: ['schedule'],
     params: machineParams,
     body: z.object({ templateId: z.uuid({ error: 'Choose a template' }) }),
