@@ -35,7 +35,19 @@ export function createApp(options: { serveClient?: boolean } = {}) {
       },
     }),
   );
-  if (env.NODE_ENV !== 'test') app.use(pinoHttp({ logger }));
+  if (env.NODE_ENV !== 'test') {
+    app.use(
+      pinoHttp({
+        logger,
+        // One short line per API call; static files of the client are not logged.
+        autoLogging: { ignore: (req) => !req.url?.startsWith('/api/') },
+        serializers: {
+          req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+          res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+        },
+      }),
+    );
+  }
   app.use(cookieParser());
   app.use(express.json({ limit: '1mb' }));
 

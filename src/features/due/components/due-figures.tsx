@@ -1,0 +1,69 @@
+import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
+import type { DueRow } from '../api/types';
+import {
+  GOVERNS_TEXT,
+  projectedRangeText,
+  remainingDaysText,
+  remainingMeterText,
+} from './due-format';
+
+// The figures of one due row, used by both the table (desk) and the cards (phone).
+
+const muted = 'text-sm text-field-600';
+
+/** The due meter value and/or due date, and which of the two falls first. */
+export function DueAtFigure({ row }: { row: DueRow }) {
+  const { dueMeter, dueDate, governs } = row.due;
+  if (dueMeter === null && dueDate === null) return <span className={muted}>Not scheduled</span>;
+  return (
+    <div className="flex flex-col">
+      {dueMeter !== null ? (
+        <span className={governs === 'meter' ? 'font-bold' : undefined}>
+          {formatMeter(dueMeter, row.machine.meterUnit)}
+        </span>
+      ) : null}
+      {dueDate !== null ? (
+        <span className={governs === 'calendar' ? 'font-bold' : undefined}>
+          {formatLocalDate(dueDate)}
+        </span>
+      ) : null}
+      {governs && dueMeter !== null && dueDate !== null ? (
+        <span className={muted}>{GOVERNS_TEXT[governs]}</span>
+      ) : null}
+    </div>
+  );
+}
+
+/** The date the meter is projected to reach its due value, with the slower–faster range. */
+export function ProjectedFigure({ row }: { row: DueRow }) {
+  const { projectedDate, projectedLow, projectedHigh, status, dueMeter } = row.due;
+  if (status === 'no_forecast') return <span className={muted}>Not enough readings</span>;
+  if (!projectedDate)
+    return (
+      <span className={muted}>
+        {dueMeter === null ? 'Calendar only' : status === 'overdue' ? 'Already reached' : '—'}
+      </span>
+    );
+  const range = projectedRangeText(projectedLow, projectedHigh);
+  return (
+    <div className="flex flex-col">
+      <span>{formatLocalDate(projectedDate)}</span>
+      {range ? <span className={muted}>range {range}</span> : null}
+    </div>
+  );
+}
+
+/** What is left (or how far past) in meter units and in days, as the server counted them. */
+export function RemainingFigure({ row }: { row: DueRow }) {
+  const { remainingMeter, remainingDays, status } = row.due;
+  const tone = status === 'overdue' ? 'font-bold text-poppy-800' : undefined;
+  if (remainingMeter === null && remainingDays === null) return <span className={muted}>—</span>;
+  return (
+    <div className={`flex flex-col ${tone ?? ''}`}>
+      {remainingMeter !== null ? (
+        <span>{remainingMeterText(remainingMeter, row.machine.meterUnit)}</span>
+      ) : null}
+      {remainingDays !== null ? <span>{remainingDaysText(remainingDays)}</span> : null}
+    </div>
+  );
+}

@@ -1,0 +1,18 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { MachineCreateInput } from '../../../../shared/schemas/machines';
+import { apiClient, segment } from '../../../lib/api-client';
+import { machineKeys } from './keys';
+import type { Machine } from './types';
+
+export const createMachine = (orgId: string, input: MachineCreateInput) =>
+  apiClient
+    .post<{ data: Machine }>(`/organizations/${segment(orgId)}/machines`, input)
+    .then((body) => body.data);
+
+export function useCreateMachine(orgId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: MachineCreateInput) => createMachine(orgId, input),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: [...machineKeys.lists(), orgId] }),
+  });
+}

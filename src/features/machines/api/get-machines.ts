@@ -1,0 +1,28 @@
+import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { machineKeys } from './keys';
+import type { MachineFilters, MachineList } from './types';
+
+function toSearch(filters: MachineFilters): string {
+  const search = new URLSearchParams();
+  for (const [key, value] of Object.entries(filters)) {
+    if (value !== undefined && value !== '') search.set(key, String(value));
+  }
+  return search.toString();
+}
+
+/** One page of the fleet: the server filters, sorts and pages, so 2,000 machines stay fast. */
+export const getMachines = (orgId: string, filters: MachineFilters, signal?: AbortSignal) =>
+  apiClient.get<MachineList>(`/organizations/${segment(orgId)}/machines?${toSearch(filters)}`, {
+    signal,
+  });
+
+export const machinesQueryOptions = (orgId: string, filters: MachineFilters) =>
+  queryOptions({
+    queryKey: machineKeys.list(orgId, filters),
+    queryFn: ({ signal }) => getMachines(orgId, filters, signal),
+  });
+
+// The previous page stays on screen while the next one loads, so the table does not flash empty.
+export const useMachines = (orgId: string, filters: MachineFilters) =>
+  useQuery({ ...machinesQueryOptions(orgId, filters), placeholderData: keepPreviousData });

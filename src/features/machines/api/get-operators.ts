@@ -1,0 +1,28 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { machineKeys } from './keys';
+import type { Operator } from './types';
+
+interface MemberRow {
+  role: string;
+  user: { id: string; name: string };
+}
+
+/** The farm's operators (from the member list), for assigning machines and naming who is assigned. */
+export const getOperators = (orgId: string, signal?: AbortSignal) =>
+  apiClient
+    .get<{ data: MemberRow[] }>(`/organizations/${segment(orgId)}/members`, { signal })
+    .then((body) =>
+      body.data
+        .filter((m) => m.role === 'operator')
+        .map((m): Operator => ({ userId: m.user.id, name: m.user.name })),
+    );
+
+export const operatorsQueryOptions = (orgId: string) =>
+  queryOptions({
+    queryKey: machineKeys.operators(orgId),
+    queryFn: ({ signal }) => getOperators(orgId, signal),
+    staleTime: 5 * 60_000,
+  });
+
+export const useOperators = (orgId: string) => useQuery(operatorsQueryOptions(orgId));

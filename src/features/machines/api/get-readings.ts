@@ -1,0 +1,22 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { machineReadingKeys } from './keys';
+import type { ReadingHistory } from './types';
+
+/** Enough for two years of daily readings: the chart and the history share this one call. */
+export const READING_HISTORY_LIMIT = 2000;
+
+export const getReadings = (orgId: string, machineId: string, signal?: AbortSignal) =>
+  apiClient.get<ReadingHistory>(
+    `/organizations/${segment(orgId)}/machines/${segment(machineId)}/readings?limit=${READING_HISTORY_LIMIT}`,
+    { signal },
+  );
+
+export const readingsQueryOptions = (orgId: string, machineId: string) =>
+  queryOptions({
+    queryKey: machineReadingKeys.list(orgId, machineId),
+    queryFn: ({ signal }) => getReadings(orgId, machineId, signal),
+  });
+
+export const useReadings = (orgId: string, machineId: string) =>
+  useQuery(readingsQueryOptions(orgId, machineId));

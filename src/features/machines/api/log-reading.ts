@@ -1,0 +1,25 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { ReadingCreateInput } from '../../../../shared/schemas/readings';
+import { apiClient, segment } from '../../../lib/api-client';
+import { invalidateAfterReadingChange } from './invalidate-readings';
+import type { Reading } from './types';
+
+export interface LogReadingResult {
+  data: Reading | null;
+  /** 'duplicate': the same value at the same time was already there; nothing was added */
+  status: 'added' | 'duplicate';
+}
+
+export const logReading = (orgId: string, machineId: string, input: ReadingCreateInput) =>
+  apiClient.post<LogReadingResult>(
+    `/organizations/${segment(orgId)}/machines/${segment(machineId)}/readings`,
+    input,
+  );
+
+export function useLogReading(orgId: string, machineId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: ReadingCreateInput) => logReading(orgId, machineId, input),
+    onSuccess: () => invalidateAfterReadingChange(queryClient, orgId, machineId),
+  });
+}

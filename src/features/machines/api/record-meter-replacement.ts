@@ -1,0 +1,25 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { MeterReplacementInput } from '../../../../shared/schemas/readings';
+import { apiClient, segment } from '../../../lib/api-client';
+import { invalidateAfterReadingChange } from './invalidate-readings';
+import type { MeterReplacement } from './types';
+
+export const recordMeterReplacement = (
+  orgId: string,
+  machineId: string,
+  input: MeterReplacementInput,
+) =>
+  apiClient
+    .post<{
+      data: MeterReplacement;
+    }>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}/meter-replacements`, input)
+    .then((body) => body.data);
+
+/** A replacement shifts the lifetime values of later readings, so it changes what a reading does. */
+export function useRecordMeterReplacement(orgId: string, machineId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: MeterReplacementInput) => recordMeterReplacement(orgId, machineId, input),
+    onSuccess: () => invalidateAfterReadingChange(queryClient, orgId, machineId),
+  });
+}

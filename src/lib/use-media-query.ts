@@ -1,0 +1,22 @@
+import { useCallback, useSyncExternalStore } from 'react';
+
+/**
+ * Whether a CSS media query matches now, kept current as the window changes. For layouts that
+ * need different markup (a table on a desk, cards on a phone) rather than restyled markup, so the
+ * page holds one copy of its content and not a hidden second one.
+ */
+export function useMediaQuery(query: string): boolean {
+  const subscribe = useCallback(
+    (onChange: () => void) => {
+      const list = window.matchMedia(query);
+      list.addEventListener('change', onChange);
+      return () => list.removeEventListener('change', onChange);
+    },
+    [query],
+  );
+  return useSyncExternalStore(
+    subscribe,
+    () => window.matchMedia(query).matches,
+    () => false,
+  );
+}

@@ -1,0 +1,112 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import {
+  PHONE_VIEWPORT,
+  launchBrowser,
+  screenshot,
+  signIn,
+  type TestBrowser,
+  type Viewport,
+} from './support/browser';
+
+const PASSWORD = 'hourstone-demo';
+const DESKTOP: Viewport = { width: 1280, height: 800 };
+
+// What each demo role is offered in the main navigation (SCENARIO.md people).
+const ROLES = [
+  {
+    who: 'marta@larkspur.example',
+    role: 'manager',
+    org: 'Larkspur Flats Farm',
+    nav: ['Dashboard', 'Fleet', 'Log hours', 'Team', 'Account'],
+  },
+  {
+    who: 'dev@larkspur.example',
+    role: 'technician',
+    org: 'Larkspur Flats Farm',
+    nav: ['Dashboard', 'Fleet', 'Log hours', 'Account'],
+  },
+  {
+    who: 'lena@larkspur.example',
+    role: 'operator',
+    org: 'Larkspur Flats Farm',
+    nav: ['Dashboard', 'Fleet', 'Log hours', 'Account'],
+  },
+  {
+    who: 'aoife@osiercreek.example',
+    role: 'manager',
+    org: 'Osier Creek Dairy',
+    nav: ['Dashboard', 'Fleet', 'Log hours', 'Team', 'Account'],
+  },
+  {
+    who: 'ravi@quillon.example',
+    role: 'advisor',
+    org: 'Quillon Equipment & Service',
+    nav: ['Dashboard', 'Account'],
+  },
+] as const;
+
+async function navLabels(page: Page): Promise<string[]> {
+  const nav = page.getByRole('navigation', { name: 'Main' });
+  await nav.waitFor({ state: 'visible', timeout: 15000 });
+  const links = nav.getByRole('link');
+  const labels: string[] = [];
+  for (let i = 0; i < (await links.count()); i++)
+    labels.push((await links.nth(i).innerText()).trim());
+  return labels;
+}
+
+async function signOut(page: Page) {
+  const account = page
+    .getByRole('navigation', { name: 'Main' })
+    .getByRole('link', { name: 'Account' });
+  await account.click();
+  await page.getByRole('button', { name: 'Sign out' }).click();
+  await page.waitForURL((url) => url.pathname.startsWith('/sign-in'));
+}
+
+describe('sign-in and navigation by role (browser)', () => {
+  let browser: TestBrowser;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('sign-in — a wrong password shows the server message and stays on the sign-in page', async () => {
+    const page = await browser.newPage(DESKTOP);
+    await page.goto('/sign-in');
+    await page.getByLabel('Email', { exact: true }).fill('marta@larkspur.example');
+    await page.getByLabel('Password', { exact: true }).fill('not-the-password');
+    await page.getByRole('button', { name: 'Sign in' }).click();
+    const alert = page.getByRole('alert');
+    await alert.waitFor({ state: 'visible' });
+    expect(await alert.innerText()).toMatch(/do not match an account/);
+    expect(new URL(page.url()).pathname).toBe('/sign-in');
+    await page.close();
+  });
+
+  for (const viewport of [DESKTOP, PHONE_VIEWPORT]) {
+    const label = viewport === DESKTOP ? 'desktop' : 'phone';
+    for (const r of ROLES) {
+      it(`${label} — ${r.role} ${r.who} sees ${r.nav.join(', ')}`, async () => {
+        const page = await browser.newPage(viewport);
+        await signIn(page, r.who, PASSWORD);
+        expect(await navLabels(page)).toEqual([...r.nav]);
+        await page.getByText(r.org).first().waitFor({ state: 'visible' });
+        await screenshot(page, `roles-${label}-${r.role}-${r.who.split('@')[0]}`);
+        await signOut(page);
+        await page.close();
+      });
+    }
+  }
+
+  it('protected page while signed out — goes to sign-in and back after', async () => {
+    const page = await browser.newPage(DESKTOP);
+    await page.goto('/o/00000000-0000-0000-0000-000000000000/team');
+    await page.waitForURL((url) => url.pathname.startsWith('/sign-in'));
+    expect(new URL(page.url()).searchParams.get('next')).toContain('/team');
+    await page.close();
+  });
+});
