@@ -2,7 +2,8 @@
 // Brings up everything the app needs on this machine: dependencies, PostgreSQL, the demo data, a
 // mail catcher, the API and the worker. Ctrl-C stops it all.
 import { ensureDependencies } from './lib/setup.mjs';
-import { bin, log, warn } from './lib/common.mjs';
+import path from 'node:path';
+import { bin, dataDir, log, warn } from './lib/common.mjs';
 import { startPostgres } from './lib/postgres.mjs';
 import { assertPortsFree, startService, stopAll, waitForHttp } from './lib/processes.mjs';
 import {
@@ -11,6 +12,7 @@ import {
   runTsScript,
   startApi,
   startMailCatcher,
+  startFakeS3,
   tsx,
 } from './lib/app.mjs';
 
@@ -115,6 +117,18 @@ async function main() {
     });
     env.SMTP_URL = mail.smtpUrl;
     env.MAIL_CATCHER_URL = mail.catcherUrl;
+  }
+
+  if (!process.env.S3_ENDPOINT) {
+    Object.assign(
+      env,
+      await startFakeS3({
+        port: Number(process.env.FAKE_S3_PORT ?? 4568),
+        directory: path.join(dataDir, 's3'),
+        services,
+        onExit: onChildExit('s3'),
+      }),
+    );
   }
 
   if (!devMode) {

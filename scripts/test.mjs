@@ -13,12 +13,13 @@ import { ensureDependencies } from './lib/setup.mjs';
 import { bin, isRoot, log, projectRoot, warn } from './lib/common.mjs';
 import { startPostgres } from './lib/postgres.mjs';
 import { runCommand, stopAll } from './lib/processes.mjs';
-import { runTsScript, startApi, startMailCatcher } from './lib/app.mjs';
+import { runTsScript, startApi, startFakeS3, startMailCatcher } from './lib/app.mjs';
 import { addCounts, countVitestReport, exitCodeFor, summaryLine } from './lib/report.mjs';
 
 const TEST_API_PORT = 4311;
 const TEST_SMTP_PORT = 2527;
 const TEST_CATCHER_PORT = 2528;
+const TEST_S3_PORT = 4570;
 const REPORTS_DIR = path.join(projectRoot, 'tests', '.reports');
 const UNIT_REPORT = path.join(REPORTS_DIR, 'unit.json');
 const E2E_REPORT = path.join(REPORTS_DIR, 'e2e.json');
@@ -189,6 +190,17 @@ async function main() {
     });
     env.SMTP_URL = mail.smtpUrl;
     env.MAIL_CATCHER_URL = mail.catcherUrl;
+    const s3Dir = path.join(projectRoot, '.data', 's3-test');
+    rmSync(s3Dir, { recursive: true, force: true });
+    Object.assign(
+      env,
+      await startFakeS3({
+        port: TEST_S3_PORT,
+        directory: s3Dir,
+        services,
+        onExit: (code, signal) => warn(`[s3] exited during the tests (${signal ?? code})`),
+      }),
+    );
 
     if (runUnit) await unitTests(env);
     if (runE2e) await browserTests(env);

@@ -12,6 +12,7 @@ import { authRouter } from './routes/auth/auth.router';
 import { membersRouter } from './routes/members/members.router';
 import { devRouter } from './routes/dev/dev.router';
 import { machinesRouter } from './routes/machines/machines.router';
+import { machinePhotoRouter } from './routes/machines/photo.router';
 import { tasksRouter } from './routes/tasks/tasks.router';
 import { readingsRouter } from './routes/readings/readings.router';
 import { dueRouter } from './routes/due/due.router';
@@ -61,6 +62,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(authRouter());
   api.use(membersRouter());
   api.use(machinesRouter());
+  api.use(machinePhotoRouter());
   api.use(tasksRouter());
   api.use(readingsRouter());
   api.use(dueRouter());

@@ -20,6 +20,12 @@ const schema = z.object({
   SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().positive().default(5),
   SIGN_IN_LIMIT_PER_ADDRESS: z.coerce.number().int().positive().default(30),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().positive().default(15),
+  S3_ENDPOINT: z.string().default('http://127.0.0.1:4568'),
+  S3_REGION: z.string().default('us-east-1'),
+  S3_BUCKET: z.string().min(1).default('hourstone'),
+  S3_ACCESS_KEY_ID: z.string().default('S3RVER'),
+  S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
+  S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('true'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
 });
 

@@ -48,6 +48,29 @@ export async function startMailCatcher({ smtpPort, httpPort, services, onExit })
   return { smtpUrl: `smtp://127.0.0.1:${smtpPort}`, catcherUrl };
 }
 
+/**
+ * Starts the local S3-compatible store (scripts/fake-s3.ts, s3rver) on loopback and waits until it
+ * answers. Returns the S3_* settings the app should use.
+ */
+export async function startFakeS3({ port, directory, services, onExit }) {
+  await assertPortsFree({ 'fake S3': port });
+  const service = startService('s3', tsx, ['scripts/fake-s3.ts'], {
+    env: { ...process.env, FAKE_S3_PORT: String(port), FAKE_S3_DIR: directory },
+    onExit,
+  });
+  services.push(service);
+  const endpoint = `http://127.0.0.1:${port}`;
+  await waitForHttp(`${endpoint}/`, { service, timeoutMs: 30000 });
+  return {
+    S3_ENDPOINT: endpoint,
+    S3_BUCKET: 'hourstone',
+    S3_REGION: 'us-east-1',
+    S3_ACCESS_KEY_ID: 'S3RVER',
+    S3_SECRET_ACCESS_KEY: 'S3RVER',
+    S3_FORCE_PATH_STYLE: 'true',
+  };
+}
+
 /** Newest modification time (ms) of a file, or of any file below a folder. */
 function newestMtime(target) {
   if (!existsSync(target)) return 0;

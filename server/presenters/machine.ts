@@ -62,8 +62,17 @@ export const machineSchema = z
     lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
     dueStatus: z.enum(DUE_STATUSES).nullable(),
     nextDueDate: z.string().nullable(),
+    photoUrl: z.string().nullable(),
+    thumbnailUrl: z.string().nullable(),
   })
   .openapi('Machine');
+
+const photoUrls = (m: Machine) => {
+  if (!m.photoKey) return { photoUrl: null, thumbnailUrl: null };
+  // The key changes with every upload, so the URL does too (safe to cache).
+  const base = `/api/v1/organizations/${m.organizationId}/machines/${m.id}/photo?v=${m.photoKey.slice(-8)}`;
+  return { photoUrl: base, thumbnailUrl: `${base}&size=thumb` };
+};
 
 export function presentMachine(
   m: Machine,
@@ -96,6 +105,7 @@ export function presentMachine(
         : null,
     dueStatus: (extra.dueStatus as DuePoint['status']) ?? null,
     nextDueDate: extra.nextDueDate ?? null,
+    ...photoUrls(m),
   };
 }
 

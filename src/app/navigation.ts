@@ -21,6 +21,18 @@ const org = paths.organization;
 // The server still checks every request; this only decides what is offered.
 const NAV_ENTRIES: readonly NavEntry[] = [
   { label: 'Dashboard', to: org.dashboard.href, icon: 'gauge', roles: everyone, end: true },
+  {
+    label: 'Fleet',
+    to: org.machines.href,
+    icon: 'field',
+    roles: ['manager', 'technician', 'operator'],
+  },
+  {
+    label: 'Log hours',
+    to: (orgId: string) => org.logHours.href(orgId),
+    icon: 'clock',
+    roles: ['manager', 'technician', 'operator'],
+  },
   { label: 'Team', to: org.team.href, icon: 'team', roles: ['manager'] },
   { label: 'Account', to: org.account.href, icon: 'person', roles: everyone },
 ];

@@ -19,6 +19,22 @@ export const paths = {
     dashboard: { path: '/o/:orgId', href: (orgId: string) => `/o/${q(orgId)}` },
     team: { path: '/o/:orgId/team', href: (orgId: string) => `/o/${q(orgId)}/team` },
     account: { path: '/o/:orgId/account', href: (orgId: string) => `/o/${q(orgId)}/account` },
+    logHours: {
+      path: '/o/:orgId/log-hours',
+      /** `find`: prefill the "Find machine" box (a stale meter's fleet number) */
+      href: (orgId: string, find?: string) =>
+        `/o/${q(orgId)}/log-hours${find ? `?find=${q(find)}` : ''}`,
+    },
+    importReadings: { path: '/o/:orgId/import', href: (orgId: string) => `/o/${q(orgId)}/import` },
+    machines: { path: '/o/:orgId/machines', href: (orgId: string) => `/o/${q(orgId)}/machines` },
+    machineNew: {
+      path: '/o/:orgId/machines/new',
+      href: (orgId: string) => `/o/${q(orgId)}/machines/new`,
+    },
+    machine: {
+      path: '/o/:orgId/machines/:machineId',
+      href: (orgId: string, machineId: string) => `/o/${q(orgId)}/machines/${q(machineId)}`,
+    },
   },
   devMail: {
     path: '/dev/mail',

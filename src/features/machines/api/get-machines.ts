@@ -26,3 +26,9 @@ export const machinesQueryOptions = (orgId: string, filters: MachineFilters) =>
 // The previous page stays on screen while the next one loads, so the table does not flash empty.
 export const useMachines = (orgId: string, filters: MachineFilters) =>
   useQuery({ ...machinesQueryOptions(orgId, filters), placeholderData: keepPreviousData });
+
+/** What the caller may do on the fleet page (add machines), read from the page on screen. */
+export function useFleetAbilities(orgId: string, filters: MachineFilters) {
+  const { data } = useMachines(orgId, filters);
+  return data?.abilities ?? { create: false };
+}

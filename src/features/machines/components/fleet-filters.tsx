@@ -35,7 +35,9 @@ export function FleetFilters({
 }) {
   const [search, setSearch] = useState(filters.q ?? '');
   const latest = useRef(onChange);
-  latest.current = onChange;
+  useEffect(() => {
+    latest.current = onChange;
+  });
 
   // The URL can change from outside (back button, "Clear filters"): follow it.
   useEffect(() => setSearch(filters.q ?? ''), [filters.q]);

@@ -45,3 +45,12 @@ export function searchFromFilters(filters: MachineFilters): URLSearchParams {
 
 export const hasNarrowingFilters = (filters: MachineFilters) =>
   Boolean(filters.category || filters.status || filters.dueStatus || filters.q);
+
+/** How each sort reads in a sentence ("sorted by next due date"). */
+export const SORT_LABELS: Record<MachineSortField, string> = {
+  fleetNumber: 'fleet number',
+  name: 'name',
+  category: 'category',
+  status: 'status',
+  nextDue: 'next due date',
+};

@@ -1,0 +1,99 @@
+import { randomUUID } from 'node:crypto';
+import { Router } from 'express';
+import { z } from 'zod';
+import { route } from '../route';
+import { authorize } from '../../policies/access';
+import { canUpdateMachine } from '../../policies/machine';
+import { loadMachine } from '../../services/machines';
+import { deleteObject, getObject, putObject } from '../../services/storage';
+import { IMAGE_MAX_BYTES, prepareImage } from '../../services/images';
+import { fileUpload } from '../../middlewares/upload';
+import { notFound } from '../../errors';
+import { recordAudit } from '../../services/audit';
+
+const params = z.object({ orgId: z.uuid(), machineId: z.uuid() });
+
+/** Machine photos: stored in the object store, served only through the API to people who may see the machine. */
+export function machinePhotoRouter(): Router {
+  const router = Router();
+
+  route(router, {
+    method: 'put',
+    path: '/organizations/:orgId/machines/:machineId/photo',
+    summary:
+      "Upload or replace a machine's photo (JPEG, PNG, WebP or HEIC, at most 10 MB; checked by content)",
+    tags: ['machines'],
+    params,
+    before: [fileUpload('photo', IMAGE_MAX_BYTES, 'a photo')],
+    multipartBody: z.object({ photo: z.string().openapi({ format: 'binary' }) }),
+    response: z.object({ data: z.object({ photoUrl: z.string(), thumbnailUrl: z.string() }) }),
+    handler: async ({ req, params: p }) => {
+      const access = req.access!;
+      const { machine } = await loadMachine(access, p.machineId);
+      authorize(canUpdateMachine(access), 'Only a manager may change the photo');
+      const { full, thumb, contentType } = await prepareImage(req.file!.buffer, 'photo');
+      const key = `org/${access.organization.id}/machines/${machine.id}/${randomUUID()}`;
+      await putObject(`${key}.webp`, full, contentType);
+      await putObject(`${key}-thumb.webp`, thumb, contentType);
+      const previous = machine.photoKey;
+      await machine.update({ photoKey: key });
+      await recordAudit({
+        organizationId: access.organization.id,
+        actorUserId: access.userId,
+        action: 'machine.photo',
+        entityType: 'machine',
+        entityId: machine.id,
+      });
+      if (previous)
+        await Promise.allSettled([
+          deleteObject(`${previous}.webp`),
+          deleteObject(`${previous}-thumb.webp`),
+        ]);
+      const base = `/api/v1/organizations/${access.organization.id}/machines/${machine.id}/photo`;
+      return { data: { photoUrl: base, thumbnailUrl: `${base}?size=thumb` } };
+    },
+  });
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/machines/:machineId/photo',
+    summary: "The machine's photo (size=thumb for the thumbnail)",
+    tags: ['machines'],
+    params,
+    query: z.object({ size: z.enum(['full', 'thumb']).default('full') }),
+    response: z.string().openapi({ format: 'binary' }),
+    handler: async ({ req, res, params: p, query }) => {
+      const { machine } = await loadMachine(req.access!, p.machineId);
+      if (!machine.photoKey) throw notFound('Photo');
+      const object = await getObject(
+        `${machine.photoKey}${query.size === 'thumb' ? '-thumb' : ''}.webp`,
+      );
+      res.setHeader('Content-Type', object.contentType);
+      res.setHeader('Cache-Control', 'private, max-age=3600');
+      if (object.length) res.setHeader('Content-Length', String(object.length));
+      await new Promise<void>((resolve, reject) => {
+        object.body.on('error', reject).pipe(res).on('finish', resolve).on('error', reject);
+      });
+    },
+  });
+
+  route(router, {
+    method: 'delete',
+    path: '/organizations/:orgId/machines/:machineId/photo',
+    summary: "Remove the machine's photo",
+    tags: ['machines'],
+    params,
+    status: 204,
+    handler: async ({ req, params: p }) => {
+      const access = req.access!;
+      const { machine } = await loadMachine(access, p.machineId);
+      authorize(canUpdateMachine(access), 'Only a manager may change the photo');
+      if (!machine.photoKey) throw notFound('Photo');
+      const key = machine.photoKey;
+      await machine.update({ photoKey: null });
+      await Promise.allSettled([deleteObject(`${key}.webp`), deleteObject(`${key}-thumb.webp`)]);
+    },
+  });
+
+  return router;
+}

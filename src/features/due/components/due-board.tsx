@@ -1,0 +1,139 @@
+import { Alert } from '../../../components/ui/alert';
+import { Section } from '../../../components/ui/card';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { ErrorState } from '../../../components/ui/error-state';
+import { Icon } from '../../../components/ui/icons';
+import { LoadingRegion, Skeleton } from '../../../components/ui/skeleton';
+import { formatLocalDate } from '../../../lib/fleet-format';
+import { useDue } from '../api/get-due';
+import type { DueFilters } from '../api/types';
+import { DueFiltersBar } from './due-filters-bar';
+import { DueList } from './due-list';
+import { Pager } from './pager';
+import { StaleMeters } from './stale-meters';
+import { StatusCounts } from './status-counts';
+
+type FilterChange = Partial<Omit<DueFilters, 'pageSize'>>;
+
+interface DueBoardProps {
+  orgId: string;
+  filters: DueFilters;
+  onFiltersChange: (change: FilterChange) => void;
+  machineHref: (machineId: string) => string;
+  logHoursHref?: (fleetNumber: string) => string;
+}
+
+/** A farm's due board: counts by status, filters, the due list and the stale meters. */
+export function DueBoard({
+  orgId,
+  filters,
+  onFiltersChange,
+  machineHref,
+  logHoursHref,
+}: DueBoardProps) {
+  const due = useDue(orgId, filters);
+
+  if (due.isPending) return <DueBoardSkeleton />;
+  if (due.isError && !due.data) {
+    return (
+      <ErrorState
+        title="The due list didn't load"
+        message={due.error.message}
+        onRetry={() => due.refetch()}
+        retrying={due.isRefetching}
+      />
+    );
+  }
+
+  const { data: rows, meta } = due.data;
+  const filtered = filters.category !== null || filters.status !== null;
+
+  return (
+    <div className="flex flex-col gap-8">
+      <StatusCounts
+        counts={meta.counts}
+        active={filters.status}
+        onSelect={(status) => onFiltersChange({ status })}
+      />
+      <Section
+        title="Due list"
+        description={`Overdue first, then by date, within the next ${filters.horizon} days. As of ${formatLocalDate(meta.asOf)}.`}
+      >
+        <DueFiltersBar filters={filters} onChange={onFiltersChange} />
+        {due.isError ? (
+          <Alert>Couldn't refresh the due list: {due.error.message}</Alert>
+        ) : null}
+        <div aria-busy={due.isPlaceholderData || undefined} className="flex flex-col gap-3">
+          {due.isPlaceholderData ? (
+            <p role="status" className="text-sm text-field-600">
+              Updating…
+            </p>
+          ) : null}
+          {rows.length === 0 ? (
+            <EmptyState
+              icon="check"
+              title={filtered ? 'No tasks match these filters' : `Nothing due in ${filters.horizon} days`}
+            >
+              <p>
+                {filtered
+                  ? 'Choose another category or status, or look further ahead.'
+                  : 'Choose a longer horizon to see what comes after.'}
+              </p>
+            </EmptyState>
+          ) : (
+            <DueList rows={rows} machineHref={machineHref} />
+          )}
+          {meta.total > 0 ? (
+            <Pager
+              page={meta.page}
+              pageSize={meta.pageSize}
+              total={meta.total}
+              onPage={(page) => onFiltersChange({ page })}
+            />
+          ) : null}
+        </div>
+        <DueNotes />
+      </Section>
+      <StaleMeters stale={meta.stale} machineHref={machineHref} logHoursHref={logHoursHref} />
+    </div>
+  );
+}
+
+function DueNotes() {
+  return (
+    <div className="flex flex-col gap-1 text-sm text-field-700">
+      <p className="flex items-start gap-1.5">
+        <Icon name="info" className="mt-0.5 size-4" />
+        <span>
+          Projected dates are projected from the meter trend; the range shows a slower and faster
+          pace of use.
+        </span>
+      </p>
+      <p className="flex items-start gap-1.5">
+        <Icon name="alert" className="mt-0.5 size-4" />
+        <span>
+          Intervals and forecasts are guides: follow the operator&apos;s manual and qualified
+          service practice.
+        </span>
+      </p>
+    </div>
+  );
+}
+
+function DueBoardSkeleton() {
+  return (
+    <LoadingRegion label="Loading the due list">
+      <div className="flex flex-col gap-6">
+        <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+          {Array.from({ length: 4 }, (_, index) => (
+            <Skeleton key={index} className="h-24 rounded-xl" />
+          ))}
+        </div>
+        <Skeleton className="h-12 w-full rounded-lg" />
+        {Array.from({ length: 5 }, (_, index) => (
+          <Skeleton key={index} className="h-16 w-full rounded-xl" />
+        ))}
+      </div>
+    </LoadingRegion>
+  );
+}

@@ -1,0 +1,54 @@
+import { DUE_STATUSES, DUE_STATUS_LABELS } from '../../../../shared/constants';
+import type { DueStatus } from '../../../../shared/domain/types';
+import { cx } from '../../../components/ui/cx';
+import { DueStatusBadge } from '../../../components/ui/status-badges';
+import type { DueCounts } from '../api/types';
+
+const RING: Record<DueStatus, string> = {
+  overdue: 'border-poppy-600',
+  due_soon: 'border-straw-600',
+  ok: 'border-clover-600',
+  no_forecast: 'border-field-600',
+};
+
+/**
+ * How many tasks of each status fall inside the horizon. Each count is a toggle button that
+ * filters the list to that status (aria-pressed says which one is on); pressing it again clears.
+ */
+export function StatusCounts({
+  counts,
+  active,
+  onSelect,
+}: {
+  counts: DueCounts;
+  active: DueStatus | null;
+  onSelect: (status: DueStatus | null) => void;
+}) {
+  return (
+    <ul aria-label="Tasks by status" className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+      {DUE_STATUSES.map((status) => {
+        const pressed = active === status;
+        return (
+          <li key={status}>
+            <button
+              type="button"
+              aria-pressed={pressed}
+              aria-label={`${DUE_STATUS_LABELS[status]}: ${counts[status]}`}
+              onClick={() => onSelect(pressed ? null : status)}
+              className={cx(
+                'flex min-h-touch w-full flex-col items-start gap-1 rounded-xl border-2 bg-white p-3 text-left shadow-card transition-colors hover:bg-oat-50',
+                pressed ? RING[status] : 'border-transparent',
+              )}
+            >
+              <DueStatusBadge status={status} />
+              <span className="text-3xl font-black text-field-950 tabular-nums">
+                {counts[status]}
+              </span>
+              <span className="min-h-5 text-sm text-field-600">{pressed ? 'Showing only these' : null}</span>
+            </button>
+          </li>
+        );
+      })}
+    </ul>
+  );
+}

@@ -1,0 +1,19 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
+import { readingKeys } from './keys';
+import type { LatestReading } from './types';
+
+export const getLatestReadings = (orgId: string, signal?: AbortSignal) =>
+  apiClient
+    .get<DataEnvelope<LatestReading[]>>(`/organizations/${segment(orgId)}/readings/latest`, {
+      signal,
+    })
+    .then((body) => body.data);
+
+export const latestReadingsQueryOptions = (orgId: string) =>
+  queryOptions({
+    queryKey: readingKeys.latest(orgId),
+    queryFn: ({ signal }) => getLatestReadings(orgId, signal),
+  });
+
+export const useLatestReadings = (orgId: string) => useQuery(latestReadingsQueryOptions(orgId));

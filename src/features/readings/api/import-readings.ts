@@ -1,0 +1,36 @@
+import { useMutation, useQueryClient, type QueryKey } from '@tanstack/react-query';
+import { segment, type DataEnvelope } from '../../../lib/api-client';
+import { readingKeys } from './keys';
+import { postCsvFile } from './post-csv-file';
+import type { ImportPreview, ImportResult } from './types';
+
+/** Checks every row of the file; the server writes nothing. */
+export const previewImport = (orgId: string, file: File) =>
+  postCsvFile<DataEnvelope<ImportPreview>>(
+    `/organizations/${segment(orgId)}/readings/import/preview`,
+    file,
+  ).then((body) => body.data);
+
+/** Imports the whole file in one transaction, or nothing (422 with `line N` fields). */
+export const commitImport = (orgId: string, file: File) =>
+  postCsvFile<DataEnvelope<ImportResult>>(
+    `/organizations/${segment(orgId)}/readings/import/commit`,
+    file,
+  ).then((body) => body.data);
+
+export const usePreviewImport = (orgId: string) =>
+  useMutation({ mutationFn: (file: File) => previewImport(orgId, file) });
+
+/** `alsoInvalidate`: other features' keys the imported readings change (the due list). */
+export function useCommitImport(orgId: string, options: { alsoInvalidate?: QueryKey[] } = {}) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (file: File) => commitImport(orgId, file),
+    onSuccess: () =>
+      Promise.all(
+        [readingKeys.latest(orgId), ...(options.alsoInvalidate ?? [])].map((queryKey) =>
+          queryClient.invalidateQueries({ queryKey }),
+        ),
+      ),
+  });
+}

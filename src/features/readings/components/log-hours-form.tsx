@@ -1,0 +1,214 @@
+import { useMemo, useState } from 'react';
+import { useForm, useWatch, type Path } from 'react-hook-form';
+import type { QueryKey } from '@tanstack/react-query';
+import type { UnitSystem } from '../../../../shared/constants';
+import { bulkReadingsSchema } from '../../../../shared/schemas/readings';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { TextField } from '../../../components/ui/field';
+import { isApiError } from '../../../lib/api-client';
+import { fromDateTimeLocalValue, toDateTimeLocalValue } from '../../../lib/fleet-format';
+import { useSaveReadings } from '../api/save-readings';
+import type { LatestReading } from '../api/types';
+import { parseMeterInput } from './reading-input';
+import { ReadingRow } from './reading-row';
+
+interface Entry {
+  value: string;
+  takenAt: string;
+}
+interface LogHoursValues {
+  entries: Record<string, Entry>;
+}
+
+interface LogHoursFormProps {
+  orgId: string;
+  timeZone: string;
+  units: UnitSystem;
+  items: LatestReading[];
+  initialFind?: string;
+  /** the due list and anything else new readings change */
+  alsoInvalidate?: QueryKey[];
+}
+
+const blankEntries = (items: LatestReading[]) =>
+  Object.fromEntries(items.map((item) => [item.machine.id, { value: '', takenAt: '' }]));
+
+const matches = (item: LatestReading, find: string) => {
+  const q = find.trim().toLowerCase();
+  return (
+    !q ||
+    item.machine.fleetNumber.toLowerCase().includes(q) ||
+    item.machine.name.toLowerCase().includes(q)
+  );
+};
+
+const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+
+/**
+ * One reading field per machine; "Save readings" sends only the filled rows, all or nothing.
+ * The server's `readings.<i>.<field>` errors index the rows that were sent, so each is mapped back
+ * to its machine and shown beside that row.
+ */
+export function LogHoursForm({
+  orgId,
+  timeZone,
+  units,
+  items,
+  initialFind = '',
+  alsoInvalidate,
+}: LogHoursFormProps) {
+  const save = useSaveReadings(orgId, { alsoInvalidate });
+  const [find, setFind] = useState(initialFind);
+  const [outcome, setOutcome] = useState<{ tone: 'success' | 'error'; text: string } | null>(
+    null,
+  );
+  const defaultValues = useMemo(() => ({ entries: blankEntries(items) }), [items]);
+  const {
+    register,
+    handleSubmit,
+    setError,
+    clearErrors,
+    reset,
+    control,
+    formState: { errors, isSubmitting },
+  } = useForm<LogHoursValues>({ defaultValues });
+  const entries = useWatch({ control, name: 'entries' }) ?? {};
+  const filled = items.filter((item) => entries[item.machine.id]?.value.trim());
+  const visible = items.filter((item) => matches(item, find));
+  const maxTime = toDateTimeLocalValue(new Date(), timeZone);
+
+  const onSubmit = handleSubmit(async (values) => {
+    setOutcome(null);
+    clearErrors();
+    const sent = items.filter((item) => values.entries[item.machine.id]?.value.trim());
+    if (sent.length === 0) {
+      setOutcome({ tone: 'error', text: 'Enter at least one reading.' });
+      return;
+    }
+    const fieldOf = (index: number, field: string): Path<LogHoursValues> =>
+      `entries.${sent[index].machine.id}.${field === 'takenAt' ? 'takenAt' : 'value'}`;
+    // Rows that fail are shown even when the search box hides them.
+    const showErrors = (fields: [number, string, string][]) => {
+      setFind('');
+      fields.forEach(([index, field, message], n) =>
+        setError(fieldOf(index, field), { type: 'server', message }, { shouldFocus: n === 0 }),
+      );
+      setOutcome({
+        tone: 'error',
+        text: `${plural(new Set(fields.map(([i]) => i)).size, 'reading needs', 'readings need')} fixing: nothing was saved.`,
+      });
+    };
+
+    const input = {
+      readings: sent.map((item) => {
+        const entry = values.entries[item.machine.id];
+        return {
+          machineId: item.machine.id,
+          value: parseMeterInput(entry.value, units),
+          takenAt: entry.takenAt
+            ? (fromDateTimeLocalValue(entry.takenAt, timeZone) ?? entry.takenAt)
+            : undefined,
+        };
+      }),
+    };
+    // The same schema the server validates with, so a typo is named before the round trip.
+    const checked = bulkReadingsSchema.safeParse(input);
+    if (!checked.success) {
+      showErrors(
+        checked.error.issues
+          .filter((issue) => typeof issue.path[1] === 'number')
+          .map((issue) => [issue.path[1] as number, String(issue.path[2]), issue.message]),
+      );
+      return;
+    }
+
+    try {
+      const result = await save.mutateAsync(checked.data);
+      const added = result.filter((r) => r.status === 'added').length;
+      const repeats = result.length - added;
+      reset(defaultValues);
+      setOutcome({
+        tone: 'success',
+        text: `Saved ${plural(added, 'reading', 'readings')}${
+          repeats > 0 ? ` (${plural(repeats, 'was', 'were')} already recorded)` : ''
+        }.`,
+      });
+    } catch (error) {
+      const placed: [number, string, string][] = [];
+      const unplaced: string[] = [];
+      if (isApiError(error)) {
+        for (const [key, message] of Object.entries(error.fields)) {
+          const match = /^readings\.(\d+)\.(\w+)$/.exec(key);
+          const index = match ? Number(match[1]) : -1;
+          if (match && sent[index]) placed.push([index, match[2], message]);
+          else unplaced.push(message);
+        }
+      }
+      if (placed.length > 0) showErrors(placed);
+      if (unplaced.length > 0 || placed.length === 0) {
+        setOutcome({
+          tone: 'error',
+          text:
+            unplaced.join(' ') ||
+            (isApiError(error) ? error.message : 'Something went wrong. Try again.'),
+        });
+      }
+    }
+  });
+
+  return (
+    <form onSubmit={onSubmit} noValidate className="flex flex-col gap-4">
+      <div className="max-w-sm">
+        <TextField
+          label="Find machine"
+          type="search"
+          value={find}
+          onChange={(event) => setFind(event.target.value)}
+          placeholder="Fleet number or name"
+          autoComplete="off"
+        />
+      </div>
+      <ul
+        aria-label="Machines"
+        className="divide-y divide-field-100 rounded-xl border border-field-200 bg-white shadow-card"
+      >
+        {items.map((item) => {
+          const id = item.machine.id;
+          return (
+            <ReadingRow
+              key={id}
+              item={item}
+              timeZone={timeZone}
+              valueField={register(`entries.${id}.value`)}
+              timeField={register(`entries.${id}.takenAt`)}
+              timeValue={entries[id]?.takenAt ?? ''}
+              maxTime={maxTime}
+              valueError={errors.entries?.[id]?.value?.message}
+              timeError={errors.entries?.[id]?.takenAt?.message}
+              hidden={!matches(item, find)}
+            />
+          );
+        })}
+      </ul>
+      {visible.length === 0 ? (
+        <p className="rounded-xl border border-dashed border-field-300 p-4 text-field-700">
+          No machine matches “{find.trim()}”.
+        </p>
+      ) : null}
+      <div className="sticky bottom-16 z-20 -mx-4 flex flex-col gap-2 border-t border-field-200 bg-oat-50/95 px-4 py-3 backdrop-blur sm:bottom-0 sm:mx-0 sm:rounded-xl sm:border">
+        {outcome ? <Alert tone={outcome.tone}>{outcome.text}</Alert> : null}
+        <div className="flex flex-wrap items-center justify-between gap-3">
+          <p className="text-field-700">
+            {filled.length === 0
+              ? 'Type the meter readings you have; leave the rest empty.'
+              : `${plural(filled.length, 'reading', 'readings')} to save`}
+          </p>
+          <Button type="submit" icon="check" pending={isSubmitting} className="w-full sm:w-auto">
+            Save readings
+          </Button>
+        </div>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { LastDoneInput } from '../../../../shared/schemas/schedule';
+import { apiClient, segment } from '../../../lib/api-client';
+import { invalidateAfterScheduleChange } from './invalidate-schedule';
+import type { Task } from './types';
+
+export const setLastDone = (orgId: string, taskId: string, input: LastDoneInput) =>
+  apiClient
+    .put<{
+      data: Task;
+    }>(`/organizations/${segment(orgId)}/tasks/${segment(taskId)}/last-done`, input)
+    .then((body) => body.data);
+
+export function useSetLastDone(orgId: string, machineId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ taskId, ...input }: LastDoneInput & { taskId: string }) =>
+      setLastDone(orgId, taskId, input),
+    onSuccess: () => invalidateAfterScheduleChange(queryClient, orgId, machineId),
+  });
+}

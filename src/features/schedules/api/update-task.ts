@@ -1,0 +1,19 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { TaskInput } from '../../../../shared/schemas/schedule';
+import { apiClient, segment } from '../../../lib/api-client';
+import { invalidateAfterScheduleChange } from './invalidate-schedule';
+import type { Task } from './types';
+
+export const updateTask = (orgId: string, taskId: string, input: Partial<TaskInput>) =>
+  apiClient
+    .patch<{ data: Task }>(`/organizations/${segment(orgId)}/tasks/${segment(taskId)}`, input)
+    .then((body) => body.data);
+
+export function useUpdateTask(orgId: string, machineId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ taskId, ...input }: Partial<TaskInput> & { taskId: string }) =>
+      updateTask(orgId, taskId, input),
+    onSuccess: () => invalidateAfterScheduleChange(queryClient, orgId, machineId),
+  });
+}

@@ -1,0 +1,51 @@
+import type { DuePoint } from '../../../../shared/domain/types';
+import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
+import { describeRemaining } from '../lib/task-text';
+
+const GOVERNS: Record<'meter' | 'calendar', string> = {
+  meter: 'Meter comes first',
+  calendar: 'Calendar comes first',
+};
+
+const BASIS: Record<DuePoint['basis'], string | null> = {
+  recorded: null,
+  first_service: 'First service (break-in point)',
+  assumed: 'Never recorded as done: counted from the first reading',
+};
+
+/** The figures of one due point, all as the server computed them. */
+export function DuePointDetails({ due, unit }: { due: DuePoint; unit: string }) {
+  const remaining = describeRemaining(due.remainingMeter, due.remainingDays, unit);
+  const rows: { term: string; detail: string }[] = [];
+  if (due.dueMeter !== null) rows.push({ term: 'Due meter', detail: formatMeter(due.dueMeter, unit) });
+  if (due.dueDate !== null) rows.push({ term: 'Due date', detail: formatLocalDate(due.dueDate) });
+  if (due.projectedDate !== null) {
+    const range =
+      due.projectedLow && due.projectedHigh
+        ? ` (${formatLocalDate(due.projectedLow)} – ${formatLocalDate(due.projectedHigh)})`
+        : '';
+    rows.push({
+      term: 'Meter reaches it',
+      detail: `about ${formatLocalDate(due.projectedDate)}${range}`,
+    });
+  } else if (due.dueMeter !== null) {
+    rows.push({ term: 'Meter reaches it', detail: 'Not enough readings to project' });
+  }
+  if (due.governs) rows.push({ term: 'Governs', detail: GOVERNS[due.governs] });
+  if (remaining) rows.push({ term: 'Remaining', detail: remaining });
+  const basis = BASIS[due.basis];
+
+  return (
+    <div className="flex flex-col gap-2">
+      <dl className="grid grid-cols-1 gap-x-6 gap-y-1 sm:grid-cols-2">
+        {rows.map((row) => (
+          <div key={row.term} className="flex flex-wrap gap-x-2">
+            <dt className="text-field-600">{row.term}</dt>
+            <dd className="font-bold text-field-950 tabular-nums">{row.detail}</dd>
+          </div>
+        ))}
+      </dl>
+      {basis ? <p className="text-sm text-field-600">{basis}</p> : null}
+    </div>
+  );
+}

@@ -1,0 +1,50 @@
+import { formatMeter } from '../../../lib/fleet-format';
+
+const days = (n: number) => `${n} ${n === 1 ? 'day' : 'days'}`;
+
+/** "Every 500 h or 365 days, whichever comes first", from the task's own figures. */
+export function describeInterval(
+  task: { intervalMeter: number | null; intervalDays: number | null },
+  unit: string,
+): string {
+  const { intervalMeter, intervalDays } = task;
+  if (intervalMeter !== null && intervalDays !== null)
+    return `Every ${formatMeter(intervalMeter, unit)} or ${days(intervalDays)}, whichever comes first`;
+  if (intervalMeter !== null) return `Every ${formatMeter(intervalMeter, unit)}`;
+  if (intervalDays !== null) return `Every ${days(intervalDays)}`;
+  return 'No interval';
+}
+
+/** "50 h or 14 days before": the warning window, or null without one. */
+export function describeWarning(
+  task: { warnMeter: number | null; warnDays: number | null },
+  unit: string,
+): string | null {
+  const parts = [
+    task.warnMeter !== null ? formatMeter(task.warnMeter, unit) : null,
+    task.warnDays !== null ? days(task.warnDays) : null,
+  ].filter(Boolean);
+  return parts.length ? `${parts.join(' or ')} before` : null;
+}
+
+/** The remaining meter and days as a phrase; negative figures read as "over". */
+export function describeRemaining(
+  remainingMeter: number | null,
+  remainingDays: number | null,
+  unit: string,
+): string | null {
+  const parts: string[] = [];
+  if (remainingMeter !== null)
+    parts.push(
+      remainingMeter < 0
+        ? `${formatMeter(-remainingMeter, unit)} over`
+        : `${formatMeter(remainingMeter, unit)} left`,
+    );
+  if (remainingDays !== null)
+    parts.push(
+      remainingDays < 0 ? `${days(-remainingDays)} late` : `${days(remainingDays)} left`,
+    );
+  return parts.length ? parts.join(' · ') : null;
+}
+
+export { days as formatDays };
