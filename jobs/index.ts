@@ -6,6 +6,9 @@ import '../server/models';
 import { loadJobSchedule } from './schedule';
 import * as deliverMail from './deliver-mail';
 import * as refreshForecasts from './refresh-forecasts';
+import * as dueDigest from './due-digest';
+import * as staleMeterNudge from './stale-meter-nudge';
+import * as overdueEscalation from './overdue-escalation';
 
 const schedule = loadJobSchedule();
 
@@ -19,6 +22,21 @@ const jobs = [
     name: 'refresh-forecasts',
     expression: schedule.REFRESH_FORECASTS_CRON,
     perform: () => refreshForecasts.perform(),
+  },
+  {
+    name: 'due-digest',
+    expression: schedule.DUE_DIGEST_CRON,
+    perform: () => dueDigest.perform(),
+  },
+  {
+    name: 'stale-meter-nudge',
+    expression: schedule.STALE_NUDGE_CRON,
+    perform: () => staleMeterNudge.perform(new Date(), schedule.STALE_NUDGE_DAYS),
+  },
+  {
+    name: 'overdue-escalation',
+    expression: schedule.OVERDUE_ESCALATION_CRON,
+    perform: () => overdueEscalation.perform(),
   },
 ];
 

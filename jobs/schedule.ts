@@ -13,6 +13,15 @@ const cron = (name: string, fallback: string) =>
 export const jobScheduleSchema = z.object({
   DELIVER_MAIL_CRON: cron('DELIVER_MAIL_CRON', '* * * * *'),
   REFRESH_FORECASTS_CRON: cron('REFRESH_FORECASTS_CRON', '15 * * * *'),
+  // Hourly: each run sends to the farms whose local hour has reached their digest hour.
+  DUE_DIGEST_CRON: cron('DUE_DIGEST_CRON', '5 * * * *'),
+  STALE_NUDGE_CRON: cron('STALE_NUDGE_CRON', '35 * * * *'),
+  OVERDUE_ESCALATION_CRON: cron('OVERDUE_ESCALATION_CRON', '25 * * * *'),
+  STALE_NUDGE_DAYS: z.coerce
+    .number({ error: 'STALE_NUDGE_DAYS must be a whole number of days, e.g. 14' })
+    .int({ error: 'STALE_NUDGE_DAYS must be a whole number of days, e.g. 14' })
+    .min(1, { error: 'STALE_NUDGE_DAYS must be at least 1' })
+    .default(14),
 });
 
 export function loadJobSchedule(source: NodeJS.ProcessEnv = process.env) {

@@ -16,6 +16,8 @@ import { machinePhotoRouter } from './routes/machines/photo.router';
 import { tasksRouter } from './routes/tasks/tasks.router';
 import { readingsRouter } from './routes/readings/readings.router';
 import { dueRouter } from './routes/due/due.router';
+import { notificationsRouter } from './routes/notifications/notifications.router';
+import { calendarRouter } from './routes/calendar/calendar.router';
 import './models';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -66,6 +68,8 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(tasksRouter());
   api.use(readingsRouter());
   api.use(dueRouter());
+  api.use(notificationsRouter());
+  api.use(calendarRouter());
   api.use(devRouter());
   api.use(notFoundHandler);
   app.use('/api/v1', api);

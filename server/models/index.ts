@@ -5,12 +5,17 @@ import { Membership } from './membership';
 import { Invitation } from './invitation';
 import { PasswordReset } from './password-reset';
 import { Notification } from './notification';
+import { NotificationPreference } from './notification-preference';
+import { CalendarFeed } from './calendar-feed';
 import { AuditEvent } from './audit-event';
 import { Machine, MachineOperator } from './machine';
 import { MeterReading, MeterReplacement } from './meter-reading';
 import { ServiceTask } from './service-task';
 import { ScheduleTemplate } from './schedule-template';
 import { MachineForecast, TaskDuePoint } from './machine-forecast';
+import { ServiceAttachment, ServiceMeasurement, ServiceRecord } from './service-record';
+import { ChecklistTemplate, Walkaround, WalkaroundPhoto } from './walkaround';
+import { Defect } from './defect';
 
 Membership.belongsTo(Organization, { foreignKey: 'organizationId', as: 'organization' });
 Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
@@ -29,6 +34,8 @@ export {
   Invitation,
   PasswordReset,
   Notification,
+  NotificationPreference,
+  CalendarFeed,
   AuditEvent,
   Machine,
   MachineOperator,
@@ -38,4 +45,11 @@ export {
   ScheduleTemplate,
   MachineForecast,
   TaskDuePoint,
+  ServiceRecord,
+  ServiceMeasurement,
+  ServiceAttachment,
+  ChecklistTemplate,
+  Walkaround,
+  WalkaroundPhoto,
+  Defect,
 };

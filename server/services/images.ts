@@ -35,3 +35,24 @@ export async function prepareImage(buffer: Buffer, field: string) {
     throw new AppError(422, 'invalid_upload', message, { [field]: message });
   }
 }
+
+export type PreparedAttachment =
+  | { kind: 'image'; full: Buffer; thumb: Buffer; contentType: 'image/webp' }
+  | { kind: 'pdf'; body: Buffer; contentType: 'application/pdf' };
+
+/**
+ * Checks an attachment by its content: a photo (prepared as by prepareImage) or a PDF (kept as
+ * sent). Anything else, whatever its name says, is refused naming the field.
+ */
+export async function prepareAttachment(buffer: Buffer, field: string): Promise<PreparedAttachment> {
+  const type = await fileTypeFromBuffer(buffer);
+  if (type?.mime === 'application/pdf') {
+    return { kind: 'pdf', body: buffer, contentType: 'application/pdf' };
+  }
+  if (!type || !IMAGE_TYPES.has(type.mime)) {
+    const message = `The file is ${type ? type.mime : 'of an unknown type'}; attach a photo (JPEG, PNG, WebP, HEIC) or a PDF`;
+    throw new AppError(422, 'invalid_upload', message, { [field]: message });
+  }
+  const { full, thumb } = await prepareImage(buffer, field);
+  return { kind: 'image', full, thumb, contentType: 'image/webp' };
+}

@@ -34,6 +34,13 @@ const NAV_ENTRIES: readonly NavEntry[] = [
     roles: ['manager', 'technician', 'operator'],
   },
   { label: 'Team', to: org.team.href, icon: 'team', roles: ['manager'] },
+  {
+    label: 'Reminders',
+    to: org.reminders.href,
+    icon: 'clock',
+    roles: ['manager', 'technician', 'operator'],
+  },
+  { label: 'Messages', to: org.messages.href, icon: 'mail', roles: ['manager'] },
   { label: 'Account', to: org.account.href, icon: 'person', roles: everyone },
 ];
 

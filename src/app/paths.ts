@@ -19,6 +19,15 @@ export const paths = {
     dashboard: { path: '/o/:orgId', href: (orgId: string) => `/o/${q(orgId)}` },
     team: { path: '/o/:orgId/team', href: (orgId: string) => `/o/${q(orgId)}/team` },
     account: { path: '/o/:orgId/account', href: (orgId: string) => `/o/${q(orgId)}/account` },
+    reminders: {
+      path: '/o/:orgId/reminders',
+      href: (orgId: string) => `/o/${q(orgId)}/reminders`,
+    },
+    messages: { path: '/o/:orgId/messages', href: (orgId: string) => `/o/${q(orgId)}/messages` },
+    message: {
+      path: '/o/:orgId/messages/:messageId',
+      href: (orgId: string, id: string) => `/o/${q(orgId)}/messages/${q(id)}`,
+    },
     logHours: {
       path: '/o/:orgId/log-hours',
       /** `find`: prefill the "Find machine" box (a stale meter's fleet number) */

@@ -4,15 +4,25 @@ import { NotFound, RouteError } from '../components/errors/route-error';
 import { paths } from './paths';
 import { AcceptInvitationPage, acceptInvitationLoader } from './routes/accept-invitation';
 import { AccountPage } from './routes/account';
-import { DashboardPage } from './routes/dashboard';
+import { DashboardPage, dashboardLoader } from './routes/dashboard';
 import { DevMailPage } from './routes/dev-mail';
 import { ForgotPasswordPage } from './routes/forgot-password';
 import { HomePage, homeLoader } from './routes/home';
+import { ImportReadingsPage } from './routes/import-readings';
+import { LogHoursPage, logHoursLoader } from './routes/log-hours';
 import { OrganizationLayout, organizationLoader } from './routes/organization-layout';
 import { ResetPasswordPage } from './routes/reset-password';
 import { AppLoading, RootLayout } from './routes/root';
 import { SignInPage, signInLoader } from './routes/sign-in';
 import { TeamPage, teamLoader } from './routes/team';
+import {
+  NotificationSettingsPage,
+  notificationSettingsLoader,
+} from './routes/notification-settings';
+import { SentMessagesPage, sentMessagesLoader } from './routes/sent-messages';
+import { MachinePage, machineLoader } from './routes/machine';
+import { MachineNewPage } from './routes/machine-new';
+import { MachinesPage, machinesLoader } from './routes/machines';
 
 const home = paths.home.href();
 
@@ -42,13 +52,45 @@ export function createAppRouter(queryClient: QueryClient) {
               // errors of a page show inside the shell, so the navigation stays usable
               errorElement: <RouteError homeHref={home} inShell />,
               children: [
-                { index: true, element: <DashboardPage /> },
+                { index: true, loader: dashboardLoader(queryClient), element: <DashboardPage /> },
+                {
+                  path: paths.organization.logHours.path,
+                  loader: logHoursLoader(queryClient),
+                  element: <LogHoursPage />,
+                },
+                { path: paths.organization.importReadings.path, element: <ImportReadingsPage /> },
+                {
+                  path: paths.organization.machines.path,
+                  loader: machinesLoader(queryClient),
+                  element: <MachinesPage />,
+                },
+                { path: paths.organization.machineNew.path, element: <MachineNewPage /> },
+                {
+                  path: paths.organization.machine.path,
+                  loader: machineLoader(queryClient),
+                  element: <MachinePage />,
+                },
                 {
                   path: paths.organization.team.path,
                   loader: teamLoader(queryClient),
                   element: <TeamPage />,
                 },
                 { path: paths.organization.account.path, element: <AccountPage /> },
+                {
+                  path: paths.organization.reminders.path,
+                  loader: notificationSettingsLoader(queryClient),
+                  element: <NotificationSettingsPage />,
+                },
+                {
+                  path: paths.organization.messages.path,
+                  loader: sentMessagesLoader(queryClient),
+                  element: <SentMessagesPage />,
+                },
+                {
+                  path: paths.organization.message.path,
+                  loader: sentMessagesLoader(queryClient),
+                  element: <SentMessagesPage />,
+                },
               ],
             },
           ],

@@ -1,22 +1,70 @@
-import { EmptyState } from '../../components/ui/empty-state';
+import type { QueryClient } from '@tanstack/react-query';
+import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { PageHeader } from '../../components/ui/page-header';
-import { useCurrentMembership } from '../../lib/auth';
+import { dueQueryOptions } from '../../features/due/api/get-due';
+import type { DueFilters } from '../../features/due/api/types';
+import { DealerBoardEmpty } from '../../features/due/components/dealer-board-empty';
+import { DueBoard } from '../../features/due/components/due-board';
+import { readDueFilters, writeDueFilters } from '../../features/due/filters';
+import { findMembership, meQueryOptions, useCurrentMembership } from '../../lib/auth';
+import { paths } from '../paths';
+
+/** Starts loading the due list with the page (farms only: a dealer has no machines of its own). */
+export const dashboardLoader =
+  (queryClient: QueryClient) =>
+  async ({ request, params }: LoaderFunctionArgs) => {
+    const orgId = params.orgId ?? '';
+    const me = await queryClient.ensureQueryData(meQueryOptions()).catch(() => null);
+    const membership = me ? findMembership(me, orgId) : undefined;
+    if (membership?.organization.kind === 'farm') {
+      const filters = readDueFilters(new URL(request.url).searchParams);
+      void queryClient.prefetchQuery(dueQueryOptions(orgId, filters));
+    }
+    return null;
+  };
+
+const LOGS_HOURS = new Set(['manager', 'technician', 'operator']);
 
 export function DashboardPage() {
   const { membership } = useCurrentMembership();
   const { organization } = membership;
+  const [search, setSearch] = useSearchParams();
+  const filters = readDueFilters(search);
+
+  const changeFilters = (change: Partial<Omit<DueFilters, 'pageSize'>>) => {
+    // a new filter starts at the first page; turning the page keeps the rest
+    const next = { ...filters, page: 1, ...change };
+    setSearch(writeDueFilters(next), { preventScrollReset: true });
+  };
+
   return (
     <>
       <PageHeader
         title="Dashboard"
-        description={<p className="text-lg font-bold">{organization.name}</p>}
+        description={
+          <>
+            <p className="text-lg font-bold">{organization.name}</p>
+            {organization.kind === 'farm' ? (
+              <p>What is overdue, what comes due next and when, across the fleet.</p>
+            ) : null}
+          </>
+        }
       />
-      <EmptyState icon="gauge" title="Nothing due yet">
-        <p>
-          The due list arrives with the fleet. Once machines and their hour-meter readings are in,
-          this page shows what is overdue, what is coming due and when.
-        </p>
-      </EmptyState>
+      {organization.kind === 'dealer' ? (
+        <DealerBoardEmpty organizationName={organization.name} />
+      ) : (
+        <DueBoard
+          orgId={organization.id}
+          filters={filters}
+          onFiltersChange={changeFilters}
+          machineHref={(machineId) => paths.organization.machine.href(organization.id, machineId)}
+          logHoursHref={
+            LOGS_HOURS.has(membership.role)
+              ? (fleetNumber) => paths.organization.logHours.href(organization.id, fleetNumber)
+              : undefined
+          }
+        />
+      )}
     </>
   );
 }

@@ -14,7 +14,12 @@ interface CheckboxGroupProps<T extends string | number> {
   className?: string;
 }
 
-const COLUMNS = { 2: 'sm:grid-cols-2', 3: 'sm:grid-cols-3', 4: 'sm:grid-cols-4', 6: 'sm:grid-cols-6' };
+const COLUMNS = {
+  2: 'sm:grid-cols-2',
+  3: 'sm:grid-cols-3',
+  4: 'sm:grid-cols-4',
+  6: 'sm:grid-cols-6',
+};
 
 /**
  * A set of checkboxes under one legend (months, hazards, people). Each box is a full-size touch

@@ -1,4 +1,6 @@
+import { useRef } from 'react';
 import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
 import { Section } from '../../../components/ui/card';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
@@ -32,6 +34,7 @@ export function DueBoard({
   logHoursHref,
 }: DueBoardProps) {
   const due = useDue(orgId, filters);
+  const listTop = useRef<HTMLDivElement>(null);
 
   if (due.isPending) return <DueBoardSkeleton />;
   if (due.isError && !due.data) {
@@ -60,19 +63,35 @@ export function DueBoard({
         description={`Overdue first, then by date, within the next ${filters.horizon} days. As of ${formatLocalDate(meta.asOf)}.`}
       >
         <DueFiltersBar filters={filters} onChange={onFiltersChange} />
-        {due.isError ? (
-          <Alert>Couldn't refresh the due list: {due.error.message}</Alert>
-        ) : null}
-        <div aria-busy={due.isPlaceholderData || undefined} className="flex flex-col gap-3">
+        {due.isError ? <Alert>Couldn't refresh the due list: {due.error.message}</Alert> : null}
+        <div
+          ref={listTop}
+          aria-busy={due.isPlaceholderData || undefined}
+          className="flex scroll-mt-20 flex-col gap-3"
+        >
           {due.isPlaceholderData ? (
             <p role="status" className="text-sm text-field-600">
               Updating…
             </p>
           ) : null}
-          {rows.length === 0 ? (
+          {rows.length === 0 && meta.total > 0 ? (
+            <EmptyState
+              icon="info"
+              title="This page is past the end of the list"
+              action={
+                <Button variant="secondary" onClick={() => onFiltersChange({ page: 1 })}>
+                  Go to the first page
+                </Button>
+              }
+            >
+              <p>The list is shorter now than when this page was opened.</p>
+            </EmptyState>
+          ) : rows.length === 0 ? (
             <EmptyState
               icon="check"
-              title={filtered ? 'No tasks match these filters' : `Nothing due in ${filters.horizon} days`}
+              title={
+                filtered ? 'No tasks match these filters' : `Nothing due in ${filters.horizon} days`
+              }
             >
               <p>
                 {filtered
@@ -83,12 +102,15 @@ export function DueBoard({
           ) : (
             <DueList rows={rows} machineHref={machineHref} />
           )}
-          {meta.total > 0 ? (
+          {meta.total > 0 && rows.length > 0 ? (
             <Pager
               page={meta.page}
               pageSize={meta.pageSize}
               total={meta.total}
-              onPage={(page) => onFiltersChange({ page })}
+              onPage={(page) => {
+                onFiltersChange({ page });
+                listTop.current?.scrollIntoView({ block: 'start' });
+              }}
             />
           ) : null}
         </div>

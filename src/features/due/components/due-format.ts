@@ -23,7 +23,11 @@ export function remainingDaysText(remaining: number): string {
 export function projectedRangeText(low: string | null, high: string | null): string | null {
   if (!low || !high) return null;
   if (low === high) return formatLocalDate(low);
-  return `${formatLocalDate(low)} – ${formatLocalDate(high)}`;
+  // within one year the year is said once: "22 Dec – 29 Dec 2026"
+  const start = formatLocalDate(low);
+  const end = formatLocalDate(high);
+  const sameYear = low.slice(0, 4) === high.slice(0, 4);
+  return `${sameYear ? start.replace(/\s+\d{4}$/, '') : start} – ${end}`;
 }
 
 export const GOVERNS_TEXT = {

@@ -22,8 +22,8 @@ export function DueList({ rows, machineHref }: DueListProps) {
   );
 }
 
-const th = 'px-3 py-2 text-left text-sm font-bold text-field-700';
-const td = 'px-3 py-3 align-top';
+const th = 'px-2.5 py-2 text-left text-sm font-bold text-field-700';
+const td = 'px-2.5 py-3 align-top';
 
 function DueTable({ rows, machineHref }: DueListProps) {
   return (
@@ -58,7 +58,7 @@ function DueTable({ rows, machineHref }: DueListProps) {
               <td className={td}>
                 <DueStatusBadge status={row.due.status} />
               </td>
-              <td className={`${td} min-w-40`}>
+              <td className={`${td} min-w-44`}>
                 <DueMachine row={row} href={machineHref(row.machine.id)} />
               </td>
               <td className={td}>
@@ -67,7 +67,7 @@ function DueTable({ rows, machineHref }: DueListProps) {
               <td className={`${td} whitespace-nowrap`}>
                 <DueAtFigure row={row} />
               </td>
-              <td className={`${td} whitespace-nowrap`}>
+              <td className={`${td} min-w-32`}>
                 <ProjectedFigure row={row} />
               </td>
               <td className={`${td} whitespace-nowrap`}>

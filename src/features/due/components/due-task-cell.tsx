@@ -26,9 +26,14 @@ export function DueTask({ row, cautionText = false }: { row: DueRow; cautionText
   const basis = BASIS_TEXT[row.due.basis];
   return (
     <div className="flex flex-col gap-1">
-      <span className="flex items-center gap-1.5">
-        <span>{row.taskName}</span>
-        {cautionText ? null : <HazardCaution hazards={row.hazards} />}
+      <span>
+        {row.taskName}
+        {cautionText ? null : (
+          <>
+            {' '}
+            <HazardCaution hazards={row.hazards} />
+          </>
+        )}
       </span>
       {basis ? <span className="text-sm text-field-600">{basis}</span> : null}
       {cautionText ? <HazardCaution hazards={row.hazards} withText /> : null}

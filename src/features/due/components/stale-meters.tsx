@@ -24,7 +24,7 @@ export function StaleMeters({ stale, machineHref, logHoursHref }: StaleMetersPro
     >
       {stale.length === 0 ? (
         <p className="flex items-center gap-2 rounded-xl border border-field-200 bg-white p-4 text-field-700">
-          <Icon name="check" className="text-clover-700" />
+          <Icon name="check" className="size-5 text-clover-700" />
           Every machine in season has a reading from the last {STALE_READING_DAYS} days.
         </p>
       ) : (
@@ -32,14 +32,15 @@ export function StaleMeters({ stale, machineHref, logHoursHref }: StaleMetersPro
           {stale.map((item) => (
             <li
               key={item.machine.id}
-              className="flex flex-wrap items-center justify-between gap-2 p-3 sm:p-4"
+              className="flex flex-col items-start gap-2 p-3 sm:flex-row sm:items-center sm:justify-between sm:p-4"
             >
               <div className="min-w-0">
                 <Link
                   to={machineHref(item.machine.id)}
                   className="font-bold text-field-900 underline decoration-field-300 underline-offset-2"
                 >
-                  {item.machine.fleetNumber} <span className="font-normal">{item.machine.name}</span>
+                  {item.machine.fleetNumber}{' '}
+                  <span className="font-normal">{item.machine.name}</span>
                 </Link>
                 <p className="flex items-center gap-1.5 text-sm text-straw-900">
                   <Icon name="clock" className="size-4" />

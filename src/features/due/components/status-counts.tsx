@@ -25,7 +25,7 @@ export function StatusCounts({
   onSelect: (status: DueStatus | null) => void;
 }) {
   return (
-    <ul aria-label="Tasks by status" className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+    <ul aria-label="Task counts" className="grid grid-cols-2 gap-3 sm:grid-cols-4">
       {DUE_STATUSES.map((status) => {
         const pressed = active === status;
         return (
@@ -44,7 +44,9 @@ export function StatusCounts({
               <span className="text-3xl font-black text-field-950 tabular-nums">
                 {counts[status]}
               </span>
-              <span className="min-h-5 text-sm text-field-600">{pressed ? 'Showing only these' : null}</span>
+              <span className="min-h-5 text-sm text-field-600">
+                {pressed ? 'Showing only these' : null}
+              </span>
             </button>
           </li>
         );

@@ -4,10 +4,9 @@ import { machineKeys } from './keys';
 import type { MachineDetail } from './types';
 
 export const getMachine = (orgId: string, machineId: string, signal?: AbortSignal) =>
-  apiClient.get<MachineDetail>(
-    `/organizations/${segment(orgId)}/machines/${segment(machineId)}`,
-    { signal },
-  );
+  apiClient.get<MachineDetail>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}`, {
+    signal,
+  });
 
 export const machineQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({

@@ -58,7 +58,13 @@ export interface MachineDetail {
   abilities: MachineAbilities;
 }
 
-export const MACHINE_SORT_FIELDS = ['fleetNumber', 'name', 'category', 'status', 'nextDue'] as const;
+export const MACHINE_SORT_FIELDS = [
+  'fleetNumber',
+  'name',
+  'category',
+  'status',
+  'nextDue',
+] as const;
 export type MachineSortField = (typeof MACHINE_SORT_FIELDS)[number];
 
 export interface MachineFilters {

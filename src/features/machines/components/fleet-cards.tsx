@@ -31,9 +31,7 @@ export function FleetCards({
             to={machineHref(machine.id)}
             className={cx(
               'flex flex-col gap-3 rounded-xl border bg-white p-4 shadow-card hover:border-field-400',
-              machine.status === 'tagged_out'
-                ? 'border-2 border-poppy-400'
-                : 'border-field-200',
+              machine.status === 'tagged_out' ? 'border-2 border-poppy-400' : 'border-field-200',
             )}
           >
             <span className="flex items-start justify-between gap-2">

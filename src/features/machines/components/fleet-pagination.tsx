@@ -47,7 +47,11 @@ export function FleetPagination({
           >
             Previous page
           </Button>
-          <Button variant="secondary" disabled={page >= pages || pending} onClick={() => onPage(page + 1)}>
+          <Button
+            variant="secondary"
+            disabled={page >= pages || pending}
+            onClick={() => onPage(page + 1)}
+          >
             Next page
           </Button>
         </div>

@@ -49,7 +49,8 @@ export function FleetTable({
     <div className="overflow-x-auto rounded-xl border border-field-200 bg-white shadow-card">
       <table className={cx('w-full text-left', refreshing && 'opacity-60')} aria-busy={refreshing}>
         <caption className="sr-only">
-          Fleet, sorted by {sortLabel(filters.sort)} ({filters.order === 'asc' ? 'ascending' : 'descending'})
+          Fleet, sorted by {sortLabel(filters.sort)} (
+          {filters.order === 'asc' ? 'ascending' : 'descending'})
         </caption>
         <thead className="border-b-2 border-field-200 bg-oat-50">
           {table.getHeaderGroups().map((group) => (
@@ -78,12 +79,9 @@ export function FleetTable({
                     {sortField ? (
                       <button
                         type="button"
-                        className="-mx-2 inline-flex min-h-touch items-center gap-1 rounded-lg px-2 hover:bg-field-100"
+                        className="-mx-2 inline-flex min-h-touch items-center gap-1 rounded-lg px-2 whitespace-nowrap hover:bg-field-100"
                         onClick={() =>
-                          onSort(
-                            sortField,
-                            active && filters.order === 'asc' ? 'desc' : 'asc',
-                          )
+                          onSort(sortField, active && filters.order === 'asc' ? 'desc' : 'asc')
                         }
                       >
                         {flexRender(header.column.columnDef.header, header.getContext())}
@@ -129,16 +127,8 @@ function SortIndicator({ direction }: { direction: 'asc' | 'desc' | null }) {
       aria-hidden="true"
       className={cx('size-4 shrink-0', direction ? 'text-field-900' : 'text-field-300')}
     >
-      <path
-        d="M8 2.5l3.5 4h-7z"
-        fill="currentColor"
-        opacity={direction === 'desc' ? 0.25 : 1}
-      />
-      <path
-        d="M8 13.5l-3.5-4h7z"
-        fill="currentColor"
-        opacity={direction === 'asc' ? 0.25 : 1}
-      />
+      <path d="M8 2.5l3.5 4h-7z" fill="currentColor" opacity={direction === 'desc' ? 0.25 : 1} />
+      <path d="M8 13.5l-3.5-4h7z" fill="currentColor" opacity={direction === 'asc' ? 0.25 : 1} />
     </svg>
   );
 }

@@ -42,8 +42,12 @@ export function FleetView({ orgId, timeZone, machineHref, addAction }: FleetView
 
   return (
     <div className="flex flex-col gap-4">
-      <FleetFilters filters={filters} onChange={update} />
-      {!wide ? <FleetSortSelect filters={filters} onSort={onSort} /> : null}
+      <FleetFilters
+        filters={filters}
+        onChange={update}
+        collapsible={!wide}
+        extra={!wide ? <FleetSortSelect filters={filters} onSort={onSort} /> : null}
+      />
 
       {machines.isPending ? (
         <ListSkeleton rows={6} label="Loading the fleet" />
@@ -63,7 +67,12 @@ export function FleetView({ orgId, timeZone, machineHref, addAction }: FleetView
               <Button
                 variant="secondary"
                 onClick={() =>
-                  update({ category: undefined, status: undefined, dueStatus: undefined, q: undefined })
+                  update({
+                    category: undefined,
+                    status: undefined,
+                    dueStatus: undefined,
+                    q: undefined,
+                  })
                 }
               >
                 Clear filters
@@ -73,16 +82,21 @@ export function FleetView({ orgId, timeZone, machineHref, addAction }: FleetView
             <p>Try another search or fewer filters.</p>
           </EmptyState>
         ) : filters.page > 1 ? (
-          <EmptyState title="This page is empty" action={
-            <Button variant="secondary" onClick={() => update({ page: 1 })}>First page</Button>
-          }>
+          <EmptyState
+            title="This page is empty"
+            action={
+              <Button variant="secondary" onClick={() => update({ page: 1 })}>
+                First page
+              </Button>
+            }
+          >
             <p>The fleet has fewer pages now.</p>
           </EmptyState>
         ) : (
           <EmptyState icon="field" title="No machines yet" action={addAction}>
             <p>
-              Machines you add here get a service schedule and an hour-meter history, and show up
-              on the due list.
+              Machines you add here get a service schedule and an hour-meter history, and show up on
+              the due list.
             </p>
           </EmptyState>
         )

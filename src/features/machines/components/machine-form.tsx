@@ -140,7 +140,12 @@ export function MachineForm({ orgId, machine, submitLabel, onSubmit, onCancel }:
             error={errors.status?.message}
             {...register('status')}
           />
-          <TextField label="Make" autoComplete="off" error={errors.make?.message} {...register('make')} />
+          <TextField
+            label="Make"
+            autoComplete="off"
+            error={errors.make?.message}
+            {...register('make')}
+          />
           <TextField
             label="Model"
             autoComplete="off"
@@ -219,7 +224,9 @@ export function MachineForm({ orgId, machine, submitLabel, onSubmit, onCancel }:
         name="operatorIds"
         render={({ field, fieldState }) =>
           operators.isError ? (
-            <Alert tone="warning">The operators didn't load, so assignments can't be changed now.</Alert>
+            <Alert tone="warning">
+              The operators didn't load, so assignments can't be changed now.
+            </Alert>
           ) : (
             <CheckboxGroup
               legend="Assigned operators"

@@ -26,7 +26,7 @@ export function MeterReadingSummary({
   const stale = days >= STALE_READING_DAYS;
   return (
     <span className={cx('flex flex-col', className)}>
-      <span className="font-bold text-field-950 tabular-nums">
+      <span className="font-bold whitespace-nowrap text-field-950 tabular-nums">
         {formatMeter(lastReading.value, unit)}
       </span>
       <span

@@ -16,4 +16,5 @@ export const latestReadingsQueryOptions = (orgId: string) =>
     queryFn: ({ signal }) => getLatestReadings(orgId, signal),
   });
 
-export const useLatestReadings = (orgId: string) => useQuery(latestReadingsQueryOptions(orgId));
+export const useLatestReadings = (orgId: string, options: { enabled?: boolean } = {}) =>
+  useQuery({ ...latestReadingsQueryOptions(orgId), enabled: options.enabled ?? true });

@@ -7,9 +7,10 @@ import type { BulkReadingOutcome } from './types';
 /** POST readings/bulk: every reading is written, or none (422 with `readings.<i>.<field>`). */
 export const saveReadings = (orgId: string, input: BulkReadingsInput) =>
   apiClient
-    .post<
-      DataEnvelope<BulkReadingOutcome[]>
-    >(`/organizations/${segment(orgId)}/readings/bulk`, input)
+    .post<DataEnvelope<BulkReadingOutcome[]>>(
+      `/organizations/${segment(orgId)}/readings/bulk`,
+      input,
+    )
     .then((body) => body.data);
 
 /** `alsoInvalidate`: other features' keys the new readings change (the due list). */

@@ -18,10 +18,16 @@ export const errorsFirst = (rows: ImportPreviewRow[]) =>
   );
 
 const takenAtText = (row: ImportPreviewRow, timeZone: string) =>
-  row.takenAt ? format(new TZDate(new Date(row.takenAt).getTime(), timeZone), 'd MMM yyyy, HH:mm') : '—';
+  row.takenAt
+    ? format(new TZDate(new Date(row.takenAt).getTime(), timeZone), 'd MMM yyyy, HH:mm')
+    : '—';
 
 const valueText = (row: ImportPreviewRow) =>
-  row.value === null ? '—' : row.machine ? formatMeter(row.value, row.machine.meterUnit) : String(row.value);
+  row.value === null
+    ? '—'
+    : row.machine
+      ? formatMeter(row.value, row.machine.meterUnit)
+      : String(row.value);
 
 /** Every row of the checked file: a table on wider screens, cards on phones. */
 export function ImportPreviewTable({ rows, timeZone }: PreviewProps) {
@@ -53,10 +59,7 @@ function PreviewTable({ rows, timeZone }: PreviewProps) {
         </thead>
         <tbody className="divide-y divide-field-100">
           {rows.map((row) => (
-            <tr
-              key={row.line}
-              className={cx(row.status === 'error' && 'bg-poppy-50 outline-2 outline-poppy-200')}
-            >
+            <tr key={row.line} className={cx(row.status === 'error' && 'bg-poppy-50')}>
               <td className={`${td} tabular-nums`}>{row.line}</td>
               <td className={`${td} font-bold`}>{row.fleetNumber || '—'}</td>
               <td className={td}>{row.machine?.name ?? '—'}</td>
@@ -92,9 +95,11 @@ function PreviewCards({ rows, timeZone }: PreviewProps) {
             <span className="font-bold">{row.fleetNumber || '—'}</span>{' '}
             {row.machine ? <span className="text-field-700">{row.machine.name}</span> : null}
           </p>
-          <p className="text-field-800">
-            {takenAtText(row, timeZone)} · {valueText(row)}
-          </p>
+          {row.takenAt || row.value !== null ? (
+            <p className="text-field-800">
+              {takenAtText(row, timeZone)} · {valueText(row)}
+            </p>
+          ) : null}
           {row.error ? <p className="text-sm font-bold text-poppy-800">{row.error}</p> : null}
         </li>
       ))}

@@ -1,4 +1,4 @@
-import { useMemo, useState } from 'react';
+import { useMemo, useState, type KeyboardEvent } from 'react';
 import { useForm, useWatch, type Path } from 'react-hook-form';
 import type { QueryKey } from '@tanstack/react-query';
 import type { UnitSystem } from '../../../../shared/constants';
@@ -46,6 +46,20 @@ const matches = (item: LatestReading, find: string) => {
 const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
 
 /**
+ * The phone keypad's "next" key (Enter) moves to the next machine's reading instead of
+ * submitting half a round of readings; "Save readings" submits.
+ */
+function nextReadingOnEnter(event: KeyboardEvent<HTMLUListElement>) {
+  const target = event.target as HTMLElement;
+  if (event.key !== 'Enter' || !target.matches('[data-reading-input]')) return;
+  event.preventDefault();
+  const inputs = [
+    ...event.currentTarget.querySelectorAll<HTMLInputElement>('[data-reading-input]'),
+  ].filter((input) => input.offsetParent !== null);
+  inputs[inputs.indexOf(target as HTMLInputElement) + 1]?.focus();
+}
+
+/**
  * One reading field per machine; "Save readings" sends only the filled rows, all or nothing.
  * The server's `readings.<i>.<field>` errors index the rows that were sent, so each is mapped back
  * to its machine and shown beside that row.
@@ -60,9 +74,7 @@ export function LogHoursForm({
 }: LogHoursFormProps) {
   const save = useSaveReadings(orgId, { alsoInvalidate });
   const [find, setFind] = useState(initialFind);
-  const [outcome, setOutcome] = useState<{ tone: 'success' | 'error'; text: string } | null>(
-    null,
-  );
+  const [outcome, setOutcome] = useState<{ tone: 'success' | 'error'; text: string } | null>(null);
   const defaultValues = useMemo(() => ({ entries: blankEntries(items) }), [items]);
   const {
     register,
@@ -171,6 +183,7 @@ export function LogHoursForm({
       </div>
       <ul
         aria-label="Machines"
+        onKeyDown={nextReadingOnEnter}
         className="divide-y divide-field-100 rounded-xl border border-field-200 bg-white shadow-card"
       >
         {items.map((item) => {
@@ -196,12 +209,13 @@ export function LogHoursForm({
           No machine matches “{find.trim()}”.
         </p>
       ) : null}
-      <div className="sticky bottom-16 z-20 -mx-4 flex flex-col gap-2 border-t border-field-200 bg-oat-50/95 px-4 py-3 backdrop-blur sm:bottom-0 sm:mx-0 sm:rounded-xl sm:border">
+      {/* Sticky on wider screens; on phones the bottom tab bar already holds that edge. */}
+      <div className="flex flex-col gap-2 rounded-xl border border-field-200 bg-oat-50/95 p-3 sm:sticky sm:bottom-0 sm:z-20 sm:backdrop-blur">
         {outcome ? <Alert tone={outcome.tone}>{outcome.text}</Alert> : null}
         <div className="flex flex-wrap items-center justify-between gap-3">
           <p className="text-field-700">
             {filled.length === 0
-              ? 'Type the meter readings you have; leave the rest empty.'
+              ? 'Type the readings you have; leave the rest empty.'
               : `${plural(filled.length, 'reading', 'readings')} to save`}
           </p>
           <Button type="submit" icon="check" pending={isSubmitting} className="w-full sm:w-auto">

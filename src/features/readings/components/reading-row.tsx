@@ -47,7 +47,7 @@ export function ReadingRow({
     <li
       hidden={hidden}
       className={cx(
-        'grid gap-3 p-4 sm:grid-cols-[minmax(0,1fr)_13rem] sm:items-start',
+        'grid gap-3 p-4 sm:grid-cols-[minmax(0,1fr)_15rem] sm:items-start lg:grid-cols-[minmax(0,1fr)_20rem]',
         machine.status === 'tagged_out' && 'bg-poppy-50/50',
       )}
     >
@@ -84,13 +84,14 @@ export function ReadingRow({
         <label htmlFor={`${id}-value`} className="font-bold text-field-900">
           {machine.fleetNumber} reading
         </label>
-        <div className="flex items-center gap-2">
+        <div className="flex max-w-64 items-center gap-2">
           <input
             id={`${id}-value`}
             type="text"
             inputMode="decimal"
             autoComplete="off"
             enterKeyHint="next"
+            data-reading-input=""
             aria-invalid={valueError ? true : undefined}
             aria-describedby={cx(`${id}-unit`, valueError ? `${id}-error` : null)}
             className={cx(

@@ -4,10 +4,9 @@ import { taskKeys } from './keys';
 import type { TaskList } from './types';
 
 export const getTasks = (orgId: string, machineId: string, signal?: AbortSignal) =>
-  apiClient.get<TaskList>(
-    `/organizations/${segment(orgId)}/machines/${segment(machineId)}/tasks`,
-    { signal },
-  );
+  apiClient.get<TaskList>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}/tasks`, {
+    signal,
+  });
 
 export const tasksQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({

@@ -17,7 +17,8 @@ const BASIS: Record<DuePoint['basis'], string | null> = {
 export function DuePointDetails({ due, unit }: { due: DuePoint; unit: string }) {
   const remaining = describeRemaining(due.remainingMeter, due.remainingDays, unit);
   const rows: { term: string; detail: string }[] = [];
-  if (due.dueMeter !== null) rows.push({ term: 'Due meter', detail: formatMeter(due.dueMeter, unit) });
+  if (due.dueMeter !== null)
+    rows.push({ term: 'Due meter', detail: formatMeter(due.dueMeter, unit) });
   if (due.dueDate !== null) rows.push({ term: 'Due date', detail: formatLocalDate(due.dueDate) });
   if (due.projectedDate !== null) {
     const range =
@@ -29,7 +30,7 @@ export function DuePointDetails({ due, unit }: { due: DuePoint; unit: string }) 
       detail: `about ${formatLocalDate(due.projectedDate)}${range}`,
     });
   } else if (due.dueMeter !== null) {
-    rows.push({ term: 'Meter reaches it', detail: 'Not enough readings to project' });
+    rows.push({ term: 'Meter reaches it', detail: 'No projected date' });
   }
   if (due.governs) rows.push({ term: 'Governs', detail: GOVERNS[due.governs] });
   if (remaining) rows.push({ term: 'Remaining', detail: remaining });

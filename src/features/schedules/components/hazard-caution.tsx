@@ -6,7 +6,13 @@ import { HAZARD_LABELS, SAFETY_DEFERRAL } from '../lib/hazards';
  * The caution beside a task that can hurt someone: which hazards, the task's own safety notes,
  * and the deferral to the manual, regulations and qualified practice.
  */
-export function HazardCaution({ hazards, safetyNotes }: { hazards: Hazard[]; safetyNotes: string }) {
+export function HazardCaution({
+  hazards,
+  safetyNotes,
+}: {
+  hazards: Hazard[];
+  safetyNotes: string;
+}) {
   return (
     <aside
       aria-label="Caution"

@@ -18,7 +18,9 @@ import type { Task } from '../api/types';
 import { HAZARD_LABELS } from '../lib/hazards';
 
 const optionalNumber = { setValueAs: (v: unknown) => (v === '' || v == null ? null : Number(v)) };
-const requiredNumber = { setValueAs: (v: unknown) => (v === '' || v == null ? undefined : Number(v)) };
+const requiredNumber = {
+  setValueAs: (v: unknown) => (v === '' || v == null ? undefined : Number(v)),
+};
 
 const HAZARD_OPTIONS = HAZARDS.map((value) => ({ value, label: HAZARD_LABELS[value] }));
 const UNIT_OPTIONS = FLUID_UNITS.map((value) => ({ value, label: value }));
@@ -101,10 +103,10 @@ export function TaskForm({ unit, initial, submitLabel, onSubmit, onCancel, label
     } catch (error) {
       const current = getValues();
       const rowFields = [
-        ...current.parts.flatMap((_, i) =>
+        ...(current.parts ?? []).flatMap((_, i) =>
           (['partNumber', 'description', 'quantity'] as const).map((f) => `parts.${i}.${f}`),
         ),
-        ...current.fluids.flatMap((_, i) =>
+        ...(current.fluids ?? []).flatMap((_, i) =>
           (['kind', 'volume', 'unit'] as const).map((f) => `fluids.${i}.${f}`),
         ),
       ] as Path<TaskInput>[];
@@ -115,7 +117,12 @@ export function TaskForm({ unit, initial, submitLabel, onSubmit, onCancel, label
   return (
     <form onSubmit={submit} noValidate aria-label={label} className="flex flex-col gap-5">
       {formError ? <Alert>{formError}</Alert> : null}
-      <TextField label="Task name" autoComplete="off" error={errors.name?.message} {...register('name')} />
+      <TextField
+        label="Task name"
+        autoComplete="off"
+        error={errors.name?.message}
+        {...register('name')}
+      />
 
       <fieldset className="flex flex-col gap-3">
         <legend className="mb-2 font-black text-field-900">Interval</legend>

@@ -1,6 +1,7 @@
 import { formatMeter } from '../../../lib/fleet-format';
 
-const days = (n: number) => `${n} ${n === 1 ? 'day' : 'days'}`;
+const count = new Intl.NumberFormat();
+const days = (n: number) => `${count.format(n)} ${n === 1 ? 'day' : 'days'}`;
 
 /** "Every 500 h or 365 days, whichever comes first", from the task's own figures. */
 export function describeInterval(
@@ -41,9 +42,7 @@ export function describeRemaining(
         : `${formatMeter(remainingMeter, unit)} left`,
     );
   if (remainingDays !== null)
-    parts.push(
-      remainingDays < 0 ? `${days(-remainingDays)} late` : `${days(remainingDays)} left`,
-    );
+    parts.push(remainingDays < 0 ? `${days(-remainingDays)} late` : `${days(remainingDays)} left`);
   return parts.length ? parts.join(' · ') : null;
 }
 

@@ -1,0 +1,18 @@
+import { Op } from 'sequelize';
+import { z } from 'zod';
+import { User } from '../models';
+
+export const personSchema = z.object({ id: z.string(), name: z.string() }).openapi('PersonRef');
+export type PersonRef = z.infer<typeof personSchema>;
+
+/** Names of the given users in one query, for presenters. */
+export async function peopleById(ids: (string | null | undefined)[]) {
+  const wanted = [...new Set(ids.filter((id): id is string => !!id))];
+  const users = wanted.length
+    ? await User.findAll({ where: { id: { [Op.in]: wanted } }, attributes: ['id', 'name'] })
+    : [];
+  const map = new Map<string, PersonRef>(users.map((u) => [u.id, { id: u.id, name: u.name }]));
+  return (id: string | null | undefined): PersonRef | null => (id ? (map.get(id) ?? null) : null);
+}
+
+export type PeopleLookup = Awaited<ReturnType<typeof peopleById>>;

@@ -1,0 +1,119 @@
+import { Router } from 'express';
+import { Op } from 'sequelize';
+import { z } from 'zod';
+import { route } from '../route';
+import { Machine } from '../../models';
+import { authorize, type OrgAccess } from '../../policies/access';
+import { canViewMachine } from '../../policies/machine';
+import { canChooseDigest, canManageFarmFeed, canSetDigestHour } from '../../policies/reminders';
+import { preferenceSchema, presentPreference } from '../../presenters/notification';
+import { operatorIdsOf } from '../../services/machines';
+import {
+  digestHourOf,
+  ownPreference,
+  saveOwnPreference,
+  setDigestHour,
+} from '../../services/reminders';
+import {
+  notificationPreferenceSchema,
+  reminderSettingsSchema,
+} from '../../../shared/schemas/notifications';
+
+const orgParams = z.object({ orgId: z.uuid() });
+const FARM_ONLY = 'Reminders are for the people of a farm';
+
+/** The machines a person may pick for their digest: those they see, sold ones aside. */
+async function machineChoices(access: OrgAccess) {
+  const machines = await Machine.findAll({
+    where: { organizationId: access.organization.id, status: { [Op.ne]: 'sold' } },
+    attributes: ['id', 'fleetNumber', 'name', 'category', 'organizationId', 'status'],
+    order: [['fleetNumber', 'ASC']],
+  });
+  const operators = await operatorIdsOf(
+    machines.map((m) => m.id),
+    access.organization.id,
+  );
+  return machines
+    .filter((m) => canViewMachine(access, m, operators.get(m.id) ?? []))
+    .map((m) => ({ id: m.id, fleetNumber: m.fleetNumber, name: m.name, category: m.category }));
+}
+
+const settingsSchema = z.object({ digestHour: z.number(), timeZone: z.string() });
+
+/** Each person's own digest choices; a manager also sets the farm's digest hour. */
+export function preferencesRouter(): Router {
+  const router = Router();
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/notification-preferences',
+    summary:
+      "The caller's due-digest choices, the farm's digest hour and the machines to pick from",
+    tags: ['notifications'],
+    params: orgParams,
+    response: z.object({
+      data: preferenceSchema,
+      meta: settingsSchema.extend({
+        machines: z.array(
+          z.object({
+            id: z.string(),
+            fleetNumber: z.string(),
+            name: z.string(),
+            category: z.string(),
+          }),
+        ),
+      }),
+      abilities: z.object({ setDigestHour: z.boolean(), manageFarmFeed: z.boolean() }),
+    }),
+    handler: async ({ req }) => {
+      const access = req.access!;
+      authorize(canChooseDigest(access), FARM_ONLY);
+      const [preference, digestHour, machines] = await Promise.all([
+        ownPreference(access),
+        digestHourOf(access.organization.id),
+        machineChoices(access),
+      ]);
+      return {
+        data: presentPreference(preference),
+        meta: { digestHour, timeZone: access.organization.timeZone, machines },
+        abilities: {
+          setDigestHour: canSetDigestHour(access),
+          manageFarmFeed: canManageFarmFeed(access),
+        },
+      };
+    },
+  });
+
+  route(router, {
+    method: 'put',
+    path: '/organizations/:orgId/notification-preferences',
+    summary: "Saves the caller's due-digest choices (daily, weekly on a weekday, or off; filters)",
+    tags: ['notifications'],
+    params: orgParams,
+    body: notificationPreferenceSchema,
+    response: z.object({ data: preferenceSchema }),
+    handler: async ({ req, body }) => {
+      const access = req.access!;
+      authorize(canChooseDigest(access), FARM_ONLY);
+      return { data: presentPreference(await saveOwnPreference(access, body)) };
+    },
+  });
+
+  route(router, {
+    method: 'patch',
+    path: '/organizations/:orgId/reminder-settings',
+    summary: "Sets the local hour (farm's time zone) at which the digests and nudges go out",
+    tags: ['notifications'],
+    params: orgParams,
+    body: reminderSettingsSchema,
+    response: z.object({ data: settingsSchema }),
+    handler: async ({ req, body }) => {
+      const access = req.access!;
+      authorize(canSetDigestHour(access), 'Only a manager may change the digest hour');
+      await setDigestHour(access.organization.id, body.digestHour);
+      return { data: { digestHour: body.digestHour, timeZone: access.organization.timeZone } };
+    },
+  });
+
+  return router;
+}

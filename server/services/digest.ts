@@ -1,0 +1,275 @@
+// The due digest: per farm, at its local digest hour, each person who asked for it gets the due
+// list (overdue, due soon, and what the forecast brings due in the next 14 days) per machine.
+// The rows come from dueList(), the one due list; this file only selects, groups and writes.
+import { Membership, Notification, NotificationPreference, Organization, User } from '../models';
+import type { OrgAccess } from '../policies/access';
+import { addDaysIso } from '../../shared/domain';
+import { DIGEST_HORIZON_DAYS } from '../../shared/schemas/notifications';
+import { dueList, type DueRow } from './due-list';
+import { queueMessage } from './mailer';
+import {
+  appLinks,
+  cautionLine,
+  digestPeriod,
+  effectivePreference,
+  emailFrame,
+  escapeHtml,
+  farmsForReminders,
+  formatIsoDate,
+  formatNumber,
+  localClock,
+  SAFETY_LINE,
+  unsubscribeHeaders,
+  unsubscribeToken,
+  type EffectivePreference,
+  type ReminderFarm,
+} from './reminders';
+
+export type DigestSection = 'overdue' | 'due_soon' | 'coming_up';
+
+export interface DigestMachine {
+  machine: DueRow['machine'];
+  tasks: (DueRow & { section: DigestSection })[];
+}
+
+const SECTION_LABELS: Record<DigestSection, string> = {
+  overdue: 'Overdue',
+  due_soon: 'Due soon',
+  coming_up: 'Coming up',
+};
+
+/**
+ * The due-list rows a digest carries: overdue, due soon, and tasks the forecast puts due within
+ * DIGEST_HORIZON_DAYS of asOf (ISO date); narrowed to the person's machines and categories.
+ */
+export function selectDigestRows(
+  rows: DueRow[],
+  asOf: string,
+  filter: Pick<EffectivePreference, 'machineIds' | 'categories'>,
+): (DueRow & { section: DigestSection })[] {
+  const until = addDaysIso(asOf, DIGEST_HORIZON_DAYS);
+  const out: (DueRow & { section: DigestSection })[] = [];
+  for (const row of rows) {
+    if (filter.machineIds.length && !filter.machineIds.includes(row.machine.id)) continue;
+    if (filter.categories.length && !filter.categories.includes(row.machine.category)) continue;
+    const { status, effectiveDate } = row.due;
+    if (status === 'overdue' || status === 'due_soon') out.push({ ...row, section: status });
+    else if (status === 'ok' && effectiveDate !== null && effectiveDate <= until)
+      out.push({ ...row, section: 'coming_up' });
+  }
+  return out;
+}
+
+/** Rows grouped per machine, machines in the order of their most pressing task. */
+export function groupByMachine(rows: (DueRow & { section: DigestSection })[]): DigestMachine[] {
+  const groups = new Map<string, DigestMachine>();
+  for (const row of rows) {
+    const group = groups.get(row.machine.id) ?? { machine: row.machine, tasks: [] };
+    group.tasks.push(row);
+    groups.set(row.machine.id, group);
+  }
+  return [...groups.values()];
+}
+
+/** The facts of one task, in words: due meter, calendar date, projection and range. */
+export function taskFacts(row: DueRow): string[] {
+  const { due } = row;
+  const unit = row.machine.meterUnit;
+  const facts: string[] = [];
+  if (due.dueMeter !== null) {
+    let meter = `Due at ${formatNumber(due.dueMeter)} ${unit}`;
+    if (due.remainingMeter !== null)
+      meter +=
+        due.remainingMeter < 0
+          ? ` (${formatNumber(-due.remainingMeter)} ${unit} over)`
+          : ` (${formatNumber(due.remainingMeter)} ${unit} to go)`;
+    facts.push(meter);
+  }
+  if (due.dueDate !== null) facts.push(`Calendar limit ${formatIsoDate(due.dueDate)}`);
+  if (due.projectedDate !== null) {
+    let projected = `Projected ${formatIsoDate(due.projectedDate)}`;
+    if (due.projectedLow && due.projectedHigh && due.projectedLow !== due.projectedHigh)
+      projected += ` (range ${formatIsoDate(due.projectedLow)} – ${formatIsoDate(due.projectedHigh)})`;
+    facts.push(projected);
+  }
+  if (due.effectiveDate !== null) facts.push(`Falls due ${formatIsoDate(due.effectiveDate)}`);
+  return facts;
+}
+
+export interface DigestContent {
+  subject: string;
+  text: string;
+  html: string;
+}
+
+const machineTitle = (m: DueRow['machine']) =>
+  `${m.fleetNumber} · ${m.name}${m.status === 'tagged_out' ? ' (tagged out)' : ''}`;
+
+/** Subject, plain text and HTML of one person's digest. */
+export function renderDigest(input: {
+  organization: { id: string; name: string };
+  asOf: string;
+  frequency: 'daily' | 'weekly';
+  recipientName: string;
+  machines: DigestMachine[];
+  unsubscribeUrl: string;
+}): DigestContent {
+  const { organization, machines } = input;
+  const tasks = machines.flatMap((m) => m.tasks);
+  const count = (s: DigestSection) => tasks.filter((t) => t.section === s).length;
+  const summary = (['overdue', 'due_soon', 'coming_up'] as const)
+    .map((s) => `${count(s)} ${SECTION_LABELS[s].toLowerCase()}`)
+    .join(', ');
+  const title = `${input.frequency === 'weekly' ? 'Weekly due list' : 'Due list'}: ${organization.name}`;
+  const subject = `${title} — ${summary}`;
+  const settingsUrl = appLinks.reminders(organization.id);
+  const intro = `Hello ${input.recipientName}, here is what is due on ${formatIsoDate(input.asOf)}: ${summary} (coming up = due within ${DIGEST_HORIZON_DAYS} days by the forecast).`;
+
+  const text = [
+    title,
+    '',
+    intro,
+    '',
+    ...machines.flatMap((group) => [
+      machineTitle(group.machine),
+      `  ${appLinks.machine(organization.id, group.machine.id)}`,
+      ...group.tasks.flatMap((task) => [
+        `  - ${SECTION_LABELS[task.section]}: ${task.taskName}`,
+        ...taskFacts(task).map((f) => `      ${f}`),
+        ...(cautionLine(task.hazards) ? [`      ${cautionLine(task.hazards)}`] : []),
+      ]),
+      '',
+    ]),
+    SAFETY_LINE,
+    '',
+    `Choose what you get and when: ${settingsUrl}`,
+    `Stop these e-mails: ${input.unsubscribeUrl}`,
+  ].join('\n');
+
+  const sectionColour: Record<DigestSection, string> = {
+    overdue: '#9b1c1c',
+    due_soon: '#7a5200',
+    coming_up: '#2f4f2f',
+  };
+  const body = [
+    `<p style="margin:0 0 16px;">${escapeHtml(intro)}</p>`,
+    ...machines.map(
+      (
+        group,
+      ) => `<div style="margin:0 0 16px;padding:12px;background:#ffffff;border:1px solid #d9d4c5;border-radius:8px;">
+<h2 style="font-size:18px;margin:0 0 4px;">${escapeHtml(machineTitle(group.machine))}</h2>
+<p style="margin:0 0 8px;"><a href="${appLinks.machine(organization.id, group.machine.id)}" style="color:#1d4f91;font-weight:bold;">Open the machine</a></p>
+<ul style="margin:0;padding-left:20px;">${group.tasks
+        .map((task) => {
+          const caution = cautionLine(task.hazards);
+          return `<li style="margin:0 0 8px;"><strong style="color:${sectionColour[task.section]};">${SECTION_LABELS[task.section]}:</strong> ${escapeHtml(task.taskName)}<br>${taskFacts(
+            task,
+          )
+            .map(escapeHtml)
+            .join(
+              '<br>',
+            )}${caution ? `<br><em style="color:#7a5200;">${escapeHtml(caution)}</em>` : ''}</li>`;
+        })
+        .join('')}</ul></div>`,
+    ),
+    `<p style="margin:16px 0 0;font-size:14px;">${escapeHtml(SAFETY_LINE)}</p>`,
+  ].join('\n');
+  const footer = `<a href="${settingsUrl}" style="color:#1d4f91;">Choose what you get and when</a> · <a href="${input.unsubscribeUrl}" style="color:#1d4f91;">Stop these e-mails</a>`;
+  return { subject, text, html: emailFrame(title, body, footer) };
+}
+
+interface Recipient {
+  membershipId: string;
+  role: Membership['role'];
+  userId: string;
+  name: string;
+  email: string;
+  preference: EffectivePreference;
+}
+
+async function recipientsOf(farm: ReminderFarm): Promise<Recipient[]> {
+  const memberships = await Membership.findAll({
+    where: { organizationId: farm.id },
+    include: [{ model: User, as: 'user' }],
+    order: [['id', 'ASC']],
+  });
+  const rows = await NotificationPreference.findAll({ where: { organizationId: farm.id } });
+  const byMembership = new Map(rows.map((r) => [r.membershipId, r]));
+  return memberships
+    .filter((m) => m.user && m.role !== 'advisor')
+    .map((m) => ({
+      membershipId: m.id,
+      role: m.role,
+      userId: m.userId,
+      name: m.user!.name,
+      email: m.user!.email,
+      preference: effectivePreference(m.role, byMembership.get(m.id) ?? null),
+    }));
+}
+
+/** Queues the digests due at `now` for one farm; returns how many were new to the outbox. */
+export async function queueFarmDigests(farm: ReminderFarm, now: Date): Promise<number> {
+  const clock = localClock(farm.timeZone, now);
+  if (clock.hour < farm.digestHour) return 0;
+  const candidates = (await recipientsOf(farm))
+    .map((r) => ({ ...r, period: digestPeriod(r.preference, clock) }))
+    .filter((r): r is Recipient & { period: string } => r.period !== null);
+  if (!candidates.length) return 0;
+  // Hourly runs after the digest hour skip whoever has this period's digest in the outbox already
+  // (the unique key would refuse it anyway; this saves building the list again).
+  const already = await Notification.findAll({
+    attributes: ['recipient', 'periodKey'],
+    where: {
+      organizationId: farm.id,
+      kind: 'due_digest',
+      periodKey: [...new Set(candidates.map((r) => r.period))],
+    },
+  });
+  const done = new Set(already.map((n) => `${n.recipient}|${n.periodKey}`));
+  const due = candidates.filter((r) => !done.has(`${r.email.toLowerCase()}|${r.period}`));
+  if (!due.length) return 0;
+  const organization = await Organization.findByPk(farm.id);
+  if (!organization) return 0;
+  // Managers and technicians see the whole farm; an operator's list is their own (dueList scopes it).
+  const lists = new Map<string, Awaited<ReturnType<typeof dueList>>>();
+  let queued = 0;
+  for (const r of due) {
+    const viewKey = r.role === 'operator' ? r.userId : 'farm';
+    if (!lists.has(viewKey)) {
+      const access: OrgAccess = { organization, userId: r.userId, role: r.role, via: 'member' };
+      lists.set(viewKey, await dueList(access, { horizon: DIGEST_HORIZON_DAYS }, now));
+    }
+    const list = lists.get(viewKey)!;
+    const machines = groupByMachine(selectDigestRows(list.rows, list.asOf, r.preference));
+    if (!machines.length) continue; // nothing due: no e-mail rather than an empty one
+    const token = unsubscribeToken(r.membershipId);
+    const content = renderDigest({
+      organization,
+      asOf: list.asOf,
+      frequency: r.preference.frequency === 'weekly' ? 'weekly' : 'daily',
+      recipientName: r.name,
+      machines,
+      unsubscribeUrl: appLinks.unsubscribe(token),
+    });
+    const row = await queueMessage({
+      organizationId: farm.id,
+      recipient: r.email,
+      kind: 'due_digest',
+      periodKey: r.period,
+      ...content,
+      headers: unsubscribeHeaders(token),
+    });
+    if (row) queued++;
+  }
+  return queued;
+}
+
+/** Every farm whose local hour has reached its digest hour gets today's (or this week's) digests. */
+export async function queueDueDigests(
+  now: Date,
+): Promise<{ organizations: number; queued: number }> {
+  const farms = await farmsForReminders();
+  let queued = 0;
+  for (const farm of farms) queued += await queueFarmDigests(farm, now);
+  return { organizations: farms.length, queued };
+}

@@ -1,0 +1,92 @@
+import { z } from 'zod';
+import { uuid } from './common';
+
+// Defects: found on a walkaround or reported directly, handled by the shop.
+
+export const DEFECT_SEVERITIES = ['critical', 'major', 'minor'] as const;
+export type DefectSeverity = (typeof DEFECT_SEVERITIES)[number];
+export const DEFECT_SEVERITY_LABELS: Record<DefectSeverity, string> = {
+  critical: 'Critical — do not use',
+  major: 'Major',
+  minor: 'Minor',
+};
+
+export const DEFECT_STATUSES = ['open', 'in_repair', 'fixed'] as const;
+export type DefectStatus = (typeof DEFECT_STATUSES)[number];
+export const DEFECT_STATUS_LABELS: Record<DefectStatus, string> = {
+  open: 'Open',
+  in_repair: 'In repair',
+  fixed: 'Fixed',
+};
+
+const title = z
+  .string({ error: 'Say what is wrong' })
+  .trim()
+  .min(1, { error: 'Say what is wrong' })
+  .max(160, { error: 'Use at most 160 characters' });
+const description = z.string().trim().max(2000, { error: 'Use at most 2,000 characters' });
+const severity = z.enum(DEFECT_SEVERITIES, {
+  error: `Severity must be one of: ${DEFECT_SEVERITIES.join(', ')}`,
+});
+
+export const defectCreateSchema = z.object({
+  title,
+  description: description.default(''),
+  /** critical tags the machine out until a technician or manager clears it */
+  severity: severity.default('major'),
+});
+export type DefectCreateInput = z.infer<typeof defectCreateSchema>;
+
+export const defectUpdateSchema = z
+  .object({
+    title,
+    description,
+    severity,
+    status: z.enum(['open', 'in_repair'], {
+      error: 'Status must be open or in_repair (close a defect with …/close)',
+    }),
+    assignedTo: uuid.nullable(),
+  })
+  .partial();
+export type DefectUpdateInput = z.infer<typeof defectUpdateSchema>;
+
+export const defectCloseSchema = z
+  .object({
+    note: description.default(''),
+    /** a completed service record of the same machine that fixed it */
+    serviceRecordId: uuid.optional(),
+  })
+  .refine((c) => c.note.length > 0 || c.serviceRecordId !== undefined, {
+    error: 'Say what was done, or link the service record that fixed it',
+    path: ['note'],
+  });
+export type DefectCloseInput = z.infer<typeof defectCloseSchema>;
+
+export const defectListQuerySchema = z.object({
+  /** active = open and in repair */
+  status: z
+    .enum(['active', 'all', ...DEFECT_STATUSES], {
+      error: 'Status must be active, all, open, in_repair or fixed',
+    })
+    .default('active'),
+  severity: severity.optional(),
+  machineId: uuid.optional(),
+  /** a user id, "me" or "none" */
+  assignedTo: z
+    .union([z.literal('me'), z.literal('none'), uuid], {
+      error: 'Assigned to must be a user id, me or none',
+    })
+    .optional(),
+  page: z.coerce.number().int().min(1, { error: 'Page starts at 1' }).default(1),
+  pageSize: z.coerce.number().int().min(1).max(200, { error: 'At most 200 per page' }).default(50),
+});
+export type DefectListQuery = z.infer<typeof defectListQuerySchema>;
+
+export const clearTagOutSchema = z.object({
+  note: z
+    .string({ error: 'Say what was checked before returning it to service' })
+    .trim()
+    .min(1, { error: 'Say what was checked before returning it to service' })
+    .max(2000, { error: 'Use at most 2,000 characters' }),
+});
+export type ClearTagOutInput = z.infer<typeof clearTagOutSchema>;

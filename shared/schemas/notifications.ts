@@ -1,0 +1,79 @@
+import { z } from 'zod';
+import { MACHINE_CATEGORIES } from '../constants';
+import { uuid } from './common';
+
+export const DIGEST_FREQUENCIES = ['daily', 'weekly', 'off'] as const;
+export type DigestFrequency = (typeof DIGEST_FREQUENCIES)[number];
+export const DIGEST_FREQUENCY_LABELS: Record<DigestFrequency, string> = {
+  daily: 'Every day',
+  weekly: 'Once a week',
+  off: 'Off',
+};
+
+/** ISO weekdays: 1 = Monday … 7 = Sunday. */
+export const WEEKDAY_LABELS = [
+  'Monday',
+  'Tuesday',
+  'Wednesday',
+  'Thursday',
+  'Friday',
+  'Saturday',
+  'Sunday',
+] as const;
+
+/** How far ahead the due digest looks at what the forecast brings due (days). */
+export const DIGEST_HORIZON_DAYS = 14;
+
+export const notificationPreferenceSchema = z.object({
+  frequency: z.enum(DIGEST_FREQUENCIES, { error: 'Choose every day, once a week or off' }),
+  weekday: z
+    .number({ error: 'Choose a weekday' })
+    .int()
+    .min(1, { error: 'Weekday is 1 (Monday) to 7 (Sunday)' })
+    .max(7, { error: 'Weekday is 1 (Monday) to 7 (Sunday)' })
+    .default(1),
+  machineIds: z.array(uuid).max(1000, { error: 'At most 1,000 machines' }).default([]),
+  categories: z.array(z.enum(MACHINE_CATEGORIES, { error: 'Not a machine category' })).default([]),
+});
+export type NotificationPreferenceInput = z.infer<typeof notificationPreferenceSchema>;
+
+export const reminderSettingsSchema = z.object({
+  digestHour: z
+    .number({ error: 'Choose an hour' })
+    .int({ error: 'Use a whole hour' })
+    .min(0, { error: 'The hour is 0 to 23' })
+    .max(23, { error: 'The hour is 0 to 23' }),
+});
+export type ReminderSettingsInput = z.infer<typeof reminderSettingsSchema>;
+
+export const CALENDAR_FEED_SCOPES = ['personal', 'farm'] as const;
+export type CalendarFeedScope = (typeof CALENDAR_FEED_SCOPES)[number];
+
+export const calendarFeedCreateSchema = z.object({
+  scope: z.enum(CALENDAR_FEED_SCOPES, { error: 'Scope is personal or farm' }),
+});
+export type CalendarFeedCreateInput = z.infer<typeof calendarFeedCreateSchema>;
+
+export const NOTIFICATION_STATUSES = ['queued', 'sent', 'failed'] as const;
+export type NotificationStatusName = (typeof NOTIFICATION_STATUSES)[number];
+
+export const notificationListQuerySchema = z.object({
+  status: z.enum(NOTIFICATION_STATUSES, { error: 'Status is queued, sent or failed' }).optional(),
+  page: z.coerce.number().int().min(1, { error: 'Page starts at 1' }).default(1),
+  pageSize: z.coerce
+    .number()
+    .int()
+    .min(1)
+    .max(200, { error: 'At most 200 rows per page' })
+    .default(50),
+});
+export type NotificationListQuery = z.infer<typeof notificationListQuerySchema>;
+
+/** What the e-mails are, in words, for the "Sent messages" page. */
+export const NOTIFICATION_KIND_LABELS: Record<string, string> = {
+  due_digest: 'Due digest',
+  stale_nudge: 'Log hours reminder',
+  overdue: 'Overdue alert',
+  invitation: 'Invitation',
+  password_reset: 'Password reset',
+};

@@ -1,0 +1,145 @@
+import { useMemo } from 'react';
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { NotFound } from '../../components/errors/route-error';
+import { Section } from '../../components/ui/card';
+import { ErrorState } from '../../components/ui/error-state';
+import { Icon } from '../../components/ui/icons';
+import { PageHeader } from '../../components/ui/page-header';
+import { PageSkeleton } from '../../components/ui/skeleton';
+import { machineQueryOptions, useMachine } from '../../features/machines/api/get-machine';
+import { readingsQueryOptions } from '../../features/machines/api/get-readings';
+import { MachineDetails } from '../../features/machines/components/machine-details';
+import { MachineStatusPanel } from '../../features/machines/components/machine-status-panel';
+import { MeterSection } from '../../features/machines/components/meter-section';
+import { ReadingsSection } from '../../features/machines/components/readings-section';
+import { tasksQueryOptions, useTasks } from '../../features/schedules/api/get-tasks';
+import { DueSection } from '../../features/schedules/components/due-section';
+import { isApiError } from '../../lib/api-client';
+import { useCurrentMembership } from '../../lib/auth';
+import { paths } from '../paths';
+
+export const machineLoader =
+  (queryClient: QueryClient) =>
+  ({ params }: LoaderFunctionArgs) => {
+    const orgId = params.orgId ?? '';
+    const machineId = params.machineId ?? '';
+    // start all three at once; the page shows each part as it arrives
+    void queryClient.prefetchQuery(machineQueryOptions(orgId, machineId));
+    void queryClient.prefetchQuery(tasksQueryOptions(orgId, machineId));
+    void queryClient.prefetchQuery(readingsQueryOptions(orgId, machineId));
+    return null;
+  };
+
+const SECTIONS = [
+  { id: 'due', label: 'Due' },
+  { id: 'meter', label: 'Meter' },
+  { id: 'readings', label: 'Readings' },
+  { id: 'details', label: 'Details' },
+] as const;
+
+export function MachinePage() {
+  const { machineId = '' } = useParams();
+  const { membership } = useCurrentMembership();
+  const { organization } = membership;
+  const orgId = organization.id;
+  const timeZone = organization.timeZone;
+  const machine = useMachine(orgId, machineId);
+  const tasks = useTasks(orgId, machineId);
+  const dues = useMemo(
+    () =>
+      (tasks.data?.data ?? []).flatMap((task) =>
+        task.due?.dueMeter != null ? [{ taskName: task.name, dueMeter: task.due.dueMeter }] : [],
+      ),
+    [tasks.data],
+  );
+  const fleetHref = paths.organization.machines.href(orgId);
+
+  if (machine.isPending) return <PageSkeleton label="Loading the machine" />;
+  if (machine.isError) {
+    if (isApiError(machine.error) && machine.error.status === 404)
+      return <NotFound homeHref={fleetHref} inShell />;
+    return (
+      <ErrorState
+        title="This machine didn't load"
+        message={machine.error.message}
+        onRetry={() => machine.refetch()}
+        retrying={machine.isRefetching}
+      />
+    );
+  }
+
+  const { data: detail, abilities } = machine.data;
+
+  return (
+    <>
+      <Link
+        to={fleetHref}
+        className="mb-3 inline-flex min-h-touch items-center gap-1 font-bold text-field-700 hover:text-field-950"
+      >
+        <Icon name="back" />
+        Fleet
+      </Link>
+      <PageHeader
+        title={`${detail.fleetNumber} · ${detail.name}`}
+        description={
+          [detail.make, detail.model, detail.year].filter(Boolean).join(' · ') || undefined
+        }
+      />
+      <div className="flex flex-col gap-8">
+        <MachineStatusPanel machine={detail} timeZone={timeZone} />
+
+        <nav aria-label="On this page" className="-mt-2">
+          <ul className="flex flex-wrap gap-2">
+            {SECTIONS.map((s) => (
+              <li key={s.id}>
+                <a
+                  href={`#${s.id}`}
+                  className="inline-flex min-h-touch items-center rounded-full border border-field-300 bg-white px-4 font-bold text-field-800 hover:bg-field-50"
+                >
+                  {s.label}
+                </a>
+              </li>
+            ))}
+          </ul>
+        </nav>
+
+        <div id="due" className="scroll-mt-20">
+          <Section
+            title="Due"
+            description="Each task's next due point: the meter value, the calendar date and when the meter is projected to get there."
+          >
+            <DueSection
+              orgId={orgId}
+              machine={{ id: detail.id, category: detail.category, meterUnit: detail.meterUnit }}
+              timeZone={timeZone}
+            />
+          </Section>
+        </div>
+
+        <div id="meter" className="scroll-mt-20">
+          <Section title="Meter" description="Lifetime meter over time and the trend ahead.">
+            <MeterSection orgId={orgId} machine={detail} dues={dues} timeZone={timeZone} />
+          </Section>
+        </div>
+
+        <div id="readings" className="scroll-mt-20">
+          <Section title="Readings">
+            <ReadingsSection
+              orgId={orgId}
+              machine={detail}
+              abilities={abilities}
+              timeZone={timeZone}
+            />
+          </Section>
+        </div>
+
+        <div id="details" className="scroll-mt-20">
+          <Section title="Details">
+            <MachineDetails orgId={orgId} machine={detail} abilities={abilities} />
+          </Section>
+        </div>
+      </div>
+    </>
+  );
+}

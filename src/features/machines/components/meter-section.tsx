@@ -1,0 +1,60 @@
+import { EmptyState } from '../../../components/ui/empty-state';
+import { ErrorState } from '../../../components/ui/error-state';
+import { Skeleton } from '../../../components/ui/skeleton';
+import { Card } from '../../../components/ui/card';
+import { useReadings } from '../api/get-readings';
+import type { MachineDetail } from '../api/types';
+import { MeterChart } from './meter-chart';
+
+/** The "Meter" section: the chart of the machine's readings, or why there is none. */
+export function MeterSection({
+  orgId,
+  machine,
+  dues,
+  timeZone,
+}: {
+  orgId: string;
+  machine: MachineDetail['data'];
+  /** the next due meter of each task (from the schedule), for the reference lines */
+  dues: { taskName: string; dueMeter: number }[];
+  timeZone: string;
+}) {
+  const readings = useReadings(orgId, machine.id);
+  if (readings.isPending) {
+    return (
+      <div role="status">
+        <span className="sr-only">Loading the meter chart</span>
+        <Skeleton className="h-80 w-full rounded-xl" />
+      </div>
+    );
+  }
+  if (readings.isError) {
+    return (
+      <ErrorState
+        title="The meter history didn't load"
+        message={readings.error.message}
+        onRetry={() => readings.refetch()}
+        retrying={readings.isRefetching}
+      />
+    );
+  }
+  if (readings.data.data.length === 0) {
+    return (
+      <EmptyState icon="gauge" title="No meter history yet">
+        <p>Log the meter below; the chart and the forecast start from the first readings.</p>
+      </EmptyState>
+    );
+  }
+  return (
+    <Card>
+      <MeterChart
+        readings={readings.data.data}
+        replacements={readings.data.replacements}
+        usage={machine.usage}
+        dues={dues}
+        unit={machine.meterUnit}
+        timeZone={timeZone}
+      />
+    </Card>
+  );
+}

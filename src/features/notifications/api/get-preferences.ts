@@ -1,0 +1,18 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { reminderKeys } from './keys';
+import type { ReminderPreferences } from './types';
+
+export const getPreferences = (orgId: string, signal?: AbortSignal) =>
+  apiClient.get<ReminderPreferences>(
+    `/organizations/${segment(orgId)}/notification-preferences`,
+    { signal },
+  );
+
+export const preferencesQueryOptions = (orgId: string) =>
+  queryOptions({
+    queryKey: reminderKeys.preferences(orgId),
+    queryFn: ({ signal }) => getPreferences(orgId, signal),
+  });
+
+export const usePreferences = (orgId: string) => useQuery(preferencesQueryOptions(orgId));

@@ -1,0 +1,128 @@
+import { useState } from 'react';
+import type { MachineCategory } from '../../../../shared/constants';
+import { Alert } from '../../../components/ui/alert';
+import { Button } from '../../../components/ui/button';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { ErrorState } from '../../../components/ui/error-state';
+import { ListSkeleton } from '../../../components/ui/skeleton';
+import { useCreateTask } from '../api/create-task';
+import { useTasks } from '../api/get-tasks';
+import type { Task } from '../api/types';
+import { ApplyTemplatePanel } from './apply-template-panel';
+import { TaskCard } from './task-card';
+import { emptyTask, TaskForm } from './task-form';
+
+interface DueSectionProps {
+  orgId: string;
+  machine: { id: string; category: MachineCategory; meterUnit: string };
+  timeZone: string;
+}
+
+const RANK = { overdue: 0, due_soon: 1, ok: 2, no_forecast: 3 } as const;
+
+// Most urgent first: overdue, then due soon, then by the date the task falls due.
+function byUrgency(a: Task, b: Task): number {
+  const rank = RANK[a.due?.status ?? 'no_forecast'] - RANK[b.due?.status ?? 'no_forecast'];
+  if (rank !== 0) return rank;
+  const da = a.due?.effectiveDate ?? '9999-12-31';
+  const db = b.due?.effectiveDate ?? '9999-12-31';
+  return da.localeCompare(db);
+}
+
+/** The machine's schedule with every task's due point, and (for those who may) its editing. */
+export function DueSection({ orgId, machine, timeZone }: DueSectionProps) {
+  const tasks = useTasks(orgId, machine.id);
+  const create = useCreateTask(orgId, machine.id);
+  const [panel, setPanel] = useState<'none' | 'add' | 'template'>('none');
+  const [notice, setNotice] = useState<string | null>(null);
+  const open = (next: 'add' | 'template') => {
+    setNotice(null);
+    setPanel(next);
+  };
+
+  if (tasks.isPending) return <ListSkeleton rows={3} label="Loading the schedule" />;
+  if (tasks.isError)
+    return (
+      <ErrorState
+        title="The schedule didn't load"
+        message={tasks.error.message}
+        onRetry={() => tasks.refetch()}
+        retrying={tasks.isRefetching}
+      />
+    );
+
+  const { edit: canEdit, setLastDone: canSetLastDone } = tasks.data.abilities;
+  const list = [...tasks.data.data].sort(byUrgency);
+
+  return (
+    <div className="flex flex-col gap-4">
+      {notice ? <Alert tone="success">{notice}</Alert> : null}
+      {canEdit && panel === 'none' ? (
+        <div className="flex flex-wrap gap-2">
+          <Button icon="plus" onClick={() => open('add')}>
+            Add task
+          </Button>
+          <Button variant="secondary" onClick={() => open('template')}>
+            Apply template
+          </Button>
+        </div>
+      ) : null}
+
+      {panel === 'add' ? (
+        <section
+          aria-label="Add task"
+          className="rounded-xl border border-field-300 bg-white p-4 shadow-card"
+        >
+          <h3 className="mb-4 text-lg font-black text-field-950">Add a task</h3>
+          <TaskForm
+            unit={machine.meterUnit}
+            label="Add task"
+            initial={emptyTask()}
+            submitLabel="Add task"
+            onSubmit={async (values) => {
+              const task = await create.mutateAsync(values);
+              setPanel('none');
+              setNotice(`${task.name} is on the schedule.`);
+            }}
+            onCancel={() => setPanel('none')}
+          />
+        </section>
+      ) : null}
+
+      {panel === 'template' ? (
+        <ApplyTemplatePanel
+          orgId={orgId}
+          machineId={machine.id}
+          category={machine.category}
+          unit={machine.meterUnit}
+          existingTaskNames={list.map((t) => t.name)}
+          onDone={() => setPanel('none')}
+        />
+      ) : null}
+
+      {list.length === 0 ? (
+        <EmptyState icon="clock" title="No service schedule yet">
+          <p>
+            {canEdit
+              ? "Add the tasks of this machine's operator's manual, or start from a template and replace its typical intervals with the manual's."
+              : 'A manager or technician sets up the service schedule.'}
+          </p>
+        </EmptyState>
+      ) : (
+        <ul className="flex flex-col gap-3" aria-label="Service tasks">
+          {list.map((task) => (
+            <TaskCard
+              key={task.id}
+              orgId={orgId}
+              task={task}
+              unit={machine.meterUnit}
+              timeZone={timeZone}
+              canEdit={canEdit}
+              canSetLastDone={canSetLastDone}
+            />
+          ))}
+        </ul>
+      )}
+    </div>
+  );
+}
