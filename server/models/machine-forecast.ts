@@ -20,6 +20,8 @@ export class MachineForecast extends Model<
   declare daily: CreationOptional<ReadingPoint[]>;
   declare readingCount: CreationOptional<number>;
   declare lastValue: number | null;
+  /** the value on the meter fitted now at the last reading */
+  declare lastRawValue: number | null;
   declare lastTakenAt: Date | null;
   declare firstTakenAt: Date | null;
   declare usage: UsageEstimate | null;
@@ -34,6 +36,7 @@ MachineForecast.init(
     daily: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     readingCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     lastValue: numericColumn('lastValue', 14, 2, true),
+    lastRawValue: numericColumn('lastRawValue', 14, 2, true),
     lastTakenAt: { type: DataTypes.DATE, allowNull: true },
     firstTakenAt: { type: DataTypes.DATE, allowNull: true },
     usage: { type: DataTypes.JSONB, allowNull: true },

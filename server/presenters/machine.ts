@@ -42,6 +42,26 @@ export const usageSchema = z
   })
   .openapi('Usage');
 
+/** The last reading: `value` as shown on the meter fitted now, `lifetimeValue` on the machine's lifetime scale. */
+export const lastReadingSchema = z
+  .object({ value: z.number(), lifetimeValue: z.number(), takenAt: z.string() })
+  .openapi('LastReading');
+
+/** The last reading of a forecast summary, in both scales. */
+export function presentLastReading(
+  f:
+    | { lastValue: number | null; lastRawValue?: number | null; lastTakenAt: Date | null }
+    | null
+    | undefined,
+) {
+  if (!f || f.lastValue == null || !f.lastTakenAt) return null;
+  return {
+    value: f.lastRawValue ?? f.lastValue,
+    lifetimeValue: f.lastValue,
+    takenAt: f.lastTakenAt.toISOString(),
+  };
+}
+
 export const machineSchema = z
   .object({
     id: z.string(),
@@ -59,7 +79,7 @@ export const machineSchema = z
     seasonMonths: z.array(z.number()),
     notes: z.string(),
     operatorIds: z.array(z.string()),
-    lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
+    lastReading: lastReadingSchema.nullable(),
     dueStatus: z.enum(DUE_STATUSES).nullable(),
     nextDueDate: z.string().nullable(),
     photoUrl: z.string().nullable(),
@@ -99,10 +119,7 @@ export function presentMachine(
     seasonMonths: m.seasonMonths,
     notes: m.notes,
     operatorIds: extra.operatorIds,
-    lastReading:
-      extra.forecast?.lastValue != null && extra.forecast.lastTakenAt
-        ? { value: extra.forecast.lastValue, takenAt: extra.forecast.lastTakenAt.toISOString() }
-        : null,
+    lastReading: presentLastReading(extra.forecast),
     dueStatus: (extra.dueStatus as DuePoint['status']) ?? null,
     nextDueDate: extra.nextDueDate ?? null,
     ...photoUrls(m),

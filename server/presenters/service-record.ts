@@ -146,7 +146,10 @@ export async function presentRecords(records: ServiceRecord[]): Promise<Presente
   const orgId = records[0].organizationId;
   const [machines, measurements, attachments, tasks] = await Promise.all([
     Machine.findAll({
-      where: { organizationId: orgId, id: { [Op.in]: [...new Set(records.map((r) => r.machineId))] } },
+      where: {
+        organizationId: orgId,
+        id: { [Op.in]: [...new Set(records.map((r) => r.machineId))] },
+      },
     }),
     ServiceMeasurement.findAll({
       where: { organizationId: orgId, serviceRecordId: { [Op.in]: ids } },
@@ -172,7 +175,8 @@ export async function presentRecords(records: ServiceRecord[]): Promise<Presente
   const labourOf = new Map(tasks.map((t) => [t.id, t.labourHours]));
   const group = <T extends { serviceRecordId: string }>(rows: T[]) => {
     const map = new Map<string, T[]>();
-    for (const row of rows) map.set(row.serviceRecordId, [...(map.get(row.serviceRecordId) ?? []), row]);
+    for (const row of rows)
+      map.set(row.serviceRecordId, [...(map.get(row.serviceRecordId) ?? []), row]);
     return map;
   };
   const measurementsOf = group(measurements);

@@ -21,7 +21,8 @@ export interface DueRow {
     meterUnit: string;
   };
   due: DuePoint;
-  lastReading: { value: number; takenAt: string } | null;
+  lastReading: { value: number; lifetimeValue: number; takenAt: string } | null;
+  dueOnMeter: number | null;
   usage: { method: string; rate: number; low: number; high: number } | null;
 }
 
@@ -46,7 +47,7 @@ export function dueListSql(filters: {
   if (filters.operator) where.push(visibleToOperator);
   return `SELECT d.task_id, d.due, t.name AS task_name, t.hazards, t.labour_hours,
       m.id AS machine_id, m.fleet_number, m.name AS machine_name, m.category, m.status AS machine_status, m.meter_unit,
-      f.last_value, f.last_taken_at, f.usage - 'profile' AS usage
+      f.last_value, f.last_raw_value, f.last_taken_at, f.usage - 'profile' AS usage
     FROM task_due_points d
     JOIN service_tasks t ON t.id = d.task_id AND t.organization_id = d.organization_id
     JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
@@ -69,6 +70,7 @@ interface RawDueRow {
   machine_status: string;
   meter_unit: string;
   last_value: number | null;
+  last_raw_value: number | null;
   last_taken_at: Date | null;
   usage: { method: string; rate: number; low: number; high: number } | null;
 }
@@ -122,8 +124,17 @@ export async function dueList(
     due: r.due,
     lastReading:
       r.last_value !== null && r.last_taken_at
-        ? { value: Number(r.last_value), takenAt: new Date(r.last_taken_at).toISOString() }
+        ? {
+            value: Number(r.last_raw_value ?? r.last_value),
+            lifetimeValue: Number(r.last_value),
+            takenAt: new Date(r.last_taken_at).toISOString(),
+          }
         : null,
+    // The due value as the meter fitted now will show it (differs after a meter replacement).
+    dueOnMeter:
+      r.due.dueMeter !== null && r.last_value !== null
+        ? r.due.dueMeter - (Number(r.last_value) - Number(r.last_raw_value ?? r.last_value))
+        : r.due.dueMeter,
     usage: r.usage && {
       method: r.usage.method,
       rate: r.usage.rate,

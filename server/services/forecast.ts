@@ -43,9 +43,9 @@ export async function refreshMachineForecast(
 ): Promise<void> {
   const org = await Organization.findByPk(organizationId, { transaction });
   if (!org) return;
-  const readings = await sequelize.query<{ lifetime_value: number; taken_at: Date }>(
-    `SELECT lifetime_value, taken_at FROM meter_readings
-     WHERE organization_id = :organizationId AND machine_id = :machineId ORDER BY taken_at`,
+  const readings = await sequelize.query<{ value: number; lifetime_value: number; taken_at: Date }>(
+    `SELECT value, lifetime_value, taken_at FROM meter_readings
+     WHERE organization_id = :organizationId AND machine_id = :machineId ORDER BY taken_at, lifetime_value`,
     { replacements: { organizationId, machineId }, type: QueryTypes.SELECT, transaction },
   );
   const daily = summariseReadings(
@@ -63,6 +63,7 @@ export async function refreshMachineForecast(
       daily,
       readingCount: readings.length,
       lastValue: last ? Number(last.lifetime_value) : null,
+      lastRawValue: last ? Number(last.value) : null,
       lastTakenAt: last ? new Date(last.taken_at) : null,
       firstTakenAt: readings[0] ? new Date(readings[0].taken_at) : null,
       usage: null,
@@ -152,6 +153,7 @@ export async function recomputeDuePoints(
       daily: forecast?.daily ?? [],
       readingCount: forecast?.readingCount ?? 0,
       lastValue: forecast?.lastValue ?? null,
+      lastRawValue: forecast?.lastRawValue ?? null,
       lastTakenAt: forecast?.lastTakenAt ?? null,
       firstTakenAt: forecast?.firstTakenAt ?? null,
       usage,

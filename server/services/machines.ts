@@ -104,7 +104,7 @@ export async function listMachines(access: OrgAccess, query: MachineListQuery) {
     Machine.findAll({ where: { organizationId: access.organization.id, id: { [Op.in]: ids } } }),
     MachineForecast.findAll({
       where: { organizationId: access.organization.id, machineId: { [Op.in]: ids } },
-      attributes: ['machineId', 'lastValue', 'lastTakenAt'],
+      attributes: ['machineId', 'lastValue', 'lastRawValue', 'lastTakenAt'],
     }),
     operatorIdsOf(ids, access.organization.id),
   ]);

@@ -1,5 +1,5 @@
 import { randomUUID } from 'node:crypto';
-import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
+import { Op, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { AppError, invalid, notFound } from '../errors';
 import {
@@ -18,10 +18,11 @@ import type {
   ChecklistTemplateCreateInput,
   ChecklistTemplateUpdateInput,
   WalkaroundCreateInput,
+  WalkaroundListQuery,
   WalkaroundPurpose,
 } from '../../shared/schemas/walkarounds';
 import type { OrgAccess } from '../policies/access';
-import { authorize } from '../policies/access';
+import { authorize, hasRole } from '../policies/access';
 import { canDoWalkaround, canInspect } from '../policies/walkaround';
 import { loadMachine } from './machines';
 import { writeReadings } from './readings';
@@ -431,4 +432,42 @@ export async function storeWalkaroundPhoto(access: OrgAccess, machine: Machine, 
     objectKey: key,
     uploadedBy: access.userId,
   });
+}
+
+/** Walkarounds, newest first; operators see those of the machines they may see. */
+export async function listWalkarounds(access: OrgAccess, query: WalkaroundListQuery) {
+  const where = ['w.organization_id = :org'];
+  const replacements: Record<string, unknown> = {
+    org: access.organization.id,
+    user: access.userId,
+    limit: query.pageSize,
+    offset: (query.page - 1) * query.pageSize,
+  };
+  if (query.machineId) {
+    where.push('w.machine_id = :machineId');
+    replacements.machineId = query.machineId;
+  }
+  if (query.result) {
+    where.push('w.result = :result');
+    replacements.result = query.result;
+  }
+  if (hasRole(access, 'operator')) {
+    where.push(`(NOT EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = w.organization_id AND o.machine_id = w.machine_id)
+      OR EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = w.organization_id AND o.machine_id = w.machine_id AND o.user_id = :user))`);
+  }
+  const rows = await sequelize.query<{ id: string; total: string }>(
+    `SELECT w.id, count(*) OVER () AS total FROM walkarounds w
+     WHERE ${where.join(' AND ')}
+     ORDER BY w.performed_at DESC, w.id
+     LIMIT :limit OFFSET :offset`,
+    { replacements, type: QueryTypes.SELECT },
+  );
+  const found = await Walkaround.findAll({
+    where: { organizationId: access.organization.id, id: { [Op.in]: rows.map((r) => r.id) } },
+  });
+  const byId = new Map(found.map((w) => [w.id, w]));
+  return {
+    total: rows.length ? Number(rows[0].total) : 0,
+    walkarounds: rows.map((r) => byId.get(r.id)!),
+  };
 }

@@ -37,10 +37,10 @@ const NAV_ENTRIES: readonly NavEntry[] = [
   {
     label: 'Reminders',
     to: org.reminders.href,
-    icon: 'clock',
+    icon: 'mail',
     roles: ['manager', 'technician', 'operator'],
   },
-  { label: 'Messages', to: org.messages.href, icon: 'mail', roles: ['manager'] },
+  { label: 'Messages', to: org.messages.href, icon: 'external', roles: ['manager'] },
   { label: 'Account', to: org.account.href, icon: 'person', roles: everyone },
 ];
 

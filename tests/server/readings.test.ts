@@ -248,6 +248,13 @@ describe('readings API — corrections and meter replacement', () => {
       [4080, 4080],
       [4000, 4000],
     ]);
+    // screens show the number on the meter fitted now, and the lifetime value beside it
+    const latest = await agent.get(`/api/v1/organizations/${org.id}/readings/latest`);
+    expect(latest.body.data[0].lastReading).toMatchObject({ value: 30, lifetimeValue: 4130 });
+    await createTask(machine, { intervalMeter: 250, lastDoneMeter: 4000 });
+    const due = await agent.get(`/api/v1/organizations/${org.id}/due`);
+    expect(due.body.data[0].due.dueMeter).toBe(4250);
+    expect(due.body.data[0].dueOnMeter).toBe(150); // 4,250 lifetime − (4,130 − 30) offset
     // a raw value of 20 on the new meter would be lifetime 4,120: below 4,130 → backwards
     const back = await agent.post(url).send({ value: 20, takenAt: iso(30_000) });
     expect(back.status).toBe(422);

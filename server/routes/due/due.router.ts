@@ -2,7 +2,7 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
 import { dueListQuerySchema } from '../../../shared/schemas/readings';
-import { duePointSchema } from '../../presenters/machine';
+import { duePointSchema, lastReadingSchema } from '../../presenters/machine';
 import { dueList } from '../../services/due-list';
 import { loadMachine } from '../../services/machines';
 
@@ -23,7 +23,11 @@ const dueRowSchema = z
       meterUnit: z.string(),
     }),
     due: duePointSchema,
-    lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
+    lastReading: lastReadingSchema.nullable(),
+    dueOnMeter: z
+      .number()
+      .nullable()
+      .openapi({ description: 'the due value as the meter fitted now shows it' }),
     usage: z
       .object({ method: z.string(), rate: z.number(), low: z.number(), high: z.number() })
       .nullable(),

@@ -15,6 +15,8 @@ import {
   canReplaceMeter,
 } from '../../policies/machine';
 import {
+  lastReadingSchema,
+  presentLastReading,
   presentReading,
   presentReplacement,
   readingSchema,
@@ -150,7 +152,7 @@ export function readingsRouter(): Router {
             status: z.string(),
             category: z.string(),
           }),
-          lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
+          lastReading: lastReadingSchema.nullable(),
         }),
       ),
     }),
@@ -174,10 +176,7 @@ export function readingsRouter(): Router {
               status: i.machine.status,
               category: i.machine.category,
             },
-            lastReading:
-              i.forecast?.lastValue != null && i.forecast.lastTakenAt
-                ? { value: i.forecast.lastValue, takenAt: i.forecast.lastTakenAt.toISOString() }
-                : null,
+            lastReading: presentLastReading(i.forecast),
           })),
       };
     },

@@ -9,12 +9,12 @@ import {
 } from '../../../shared/schemas/services';
 import { uuid } from '../../../shared/schemas/common';
 import { authorize } from '../../policies/access';
+import { canRecordService, isShop, serviceRecordAbilities } from '../../policies/service-record';
 import {
-  canRecordService,
-  isShop,
-  serviceRecordAbilities,
-} from '../../policies/service-record';
-import { presentRecord, presentRecords, serviceRecordSchema } from '../../presenters/service-record';
+  presentRecord,
+  presentRecords,
+  serviceRecordSchema,
+} from '../../presenters/service-record';
 import { loadMachine } from '../../services/machines';
 import {
   cancelRecord,
@@ -128,7 +128,10 @@ export function registerServiceRecordRoutes(router: Router): void {
     handler: async ({ req, params, query }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
-      const ids = (query.taskIds ?? '').split(',').map((s) => s.trim()).filter(Boolean);
+      const ids = (query.taskIds ?? '')
+        .split(',')
+        .map((s) => s.trim())
+        .filter(Boolean);
       const bad = ids.findIndex((id) => !uuid.safeParse(id).success);
       if (bad >= 0) throw invalid({ [`taskIds.${bad}`]: 'Must be an id (uuid)' });
       const tasks = await resolveTasks(access, machine, ids);

@@ -30,7 +30,8 @@ export const sentMessagesLoader =
   (queryClient: QueryClient) =>
   ({ params, request }: LoaderFunctionArgs) => {
     const orgId = params.orgId ?? '';
-    if (params.messageId) void queryClient.prefetchQuery(messageQueryOptions(orgId, params.messageId));
+    if (params.messageId)
+      void queryClient.prefetchQuery(messageQueryOptions(orgId, params.messageId));
     else
       void queryClient.prefetchQuery(
         messagesQueryOptions(orgId, filtersFrom(new URL(request.url).searchParams)),

@@ -4,10 +4,9 @@ import { reminderKeys } from './keys';
 import type { ReminderPreferences } from './types';
 
 export const getPreferences = (orgId: string, signal?: AbortSignal) =>
-  apiClient.get<ReminderPreferences>(
-    `/organizations/${segment(orgId)}/notification-preferences`,
-    { signal },
-  );
+  apiClient.get<ReminderPreferences>(`/organizations/${segment(orgId)}/notification-preferences`, {
+    signal,
+  });
 
 export const preferencesQueryOptions = (orgId: string) =>
   queryOptions({

@@ -9,7 +9,8 @@ export interface MessageFilters {
 export const messageKeys = {
   all: ['messages'] as const,
   lists: () => [...messageKeys.all, 'list'] as const,
-  list: (orgId: string, filters: MessageFilters) => [...messageKeys.lists(), orgId, filters] as const,
+  list: (orgId: string, filters: MessageFilters) =>
+    [...messageKeys.lists(), orgId, filters] as const,
   details: () => [...messageKeys.all, 'detail'] as const,
   detail: (orgId: string, id: string) => [...messageKeys.details(), orgId, id] as const,
 };

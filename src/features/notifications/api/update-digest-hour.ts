@@ -5,9 +5,10 @@ import { reminderKeys } from './keys';
 
 export const updateDigestHour = (orgId: string, input: ReminderSettingsInput) =>
   apiClient
-    .patch<
-      DataEnvelope<{ digestHour: number; timeZone: string }>
-    >(`/organizations/${segment(orgId)}/reminder-settings`, input)
+    .patch<DataEnvelope<{ digestHour: number; timeZone: string }>>(
+      `/organizations/${segment(orgId)}/reminder-settings`,
+      input,
+    )
     .then((body) => body.data);
 
 export function useUpdateDigestHour(orgId: string) {

@@ -86,9 +86,9 @@ export function DigestPreferencesForm({ orgId, preferences }: DigestPreferencesF
       <fieldset className="flex flex-col gap-2">
         <legend className="mb-1.5 font-bold text-field-900">Due list by e-mail</legend>
         <p className="-mt-1 text-sm text-field-600">
-          Overdue, due soon and what the forecast brings due in the next {DIGEST_HORIZON_DAYS}{' '}
-          days, per machine. It goes out after {hourLabel(meta.digestHour)} ({meta.timeZone}) and
-          only when something is due.
+          Overdue, due soon and what the forecast brings due in the next {DIGEST_HORIZON_DAYS} days,
+          per machine. It goes out after {hourLabel(meta.digestHour)} ({meta.timeZone}) and only
+          when something is due.
         </p>
         <div className="grid gap-2 sm:grid-cols-3">
           {DIGEST_FREQUENCIES.map((value) => (

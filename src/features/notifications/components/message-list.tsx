@@ -16,7 +16,8 @@ import type { MessageFilters } from '../api/keys';
 import type { SentMessage } from '../api/types';
 import { MessageStatusBadge, messageStatusLabel } from './message-status-badge';
 
-export const kindLabel = (kind: string) => NOTIFICATION_KIND_LABELS[kind] ?? kind.replace(/_/g, ' ');
+export const kindLabel = (kind: string) =>
+  NOTIFICATION_KIND_LABELS[kind] ?? kind.replace(/_/g, ' ');
 
 interface MessageListProps {
   orgId: string;
@@ -83,7 +84,10 @@ export function MessageList({
   const counts = messages.data?.meta.counts;
   const choices: { value: NotificationStatusName | undefined; label: string }[] = [
     { value: undefined, label: 'All' },
-    ...NOTIFICATION_STATUSES.map((status) => ({ value: status, label: messageStatusLabel(status) })),
+    ...NOTIFICATION_STATUSES.map((status) => ({
+      value: status,
+      label: messageStatusLabel(status),
+    })),
   ];
 
   return (
@@ -131,7 +135,10 @@ export function MessageList({
           retrying={messages.isRefetching}
         />
       ) : messages.data.data.length === 0 ? (
-        <EmptyState icon="mail" title={filters.status ? 'No messages with this status' : 'No messages yet'}>
+        <EmptyState
+          icon="mail"
+          title={filters.status ? 'No messages with this status' : 'No messages yet'}
+        >
           Due lists, log-hours reminders, overdue alerts and invitations appear here as soon as
           Hourstone writes them, with what happened when it tried to send them.
         </EmptyState>

@@ -2,12 +2,11 @@ import { Badge, type BadgeTone } from '../../../components/ui/badge';
 import type { IconName } from '../../../components/ui/icons';
 import type { NotificationStatusName } from '../../../../shared/schemas/notifications';
 
-const STATUS: Record<NotificationStatusName, { tone: BadgeTone; icon: IconName; label: string }> =
-  {
-    sent: { tone: 'ok', icon: 'check', label: 'Sent' },
-    queued: { tone: 'due-soon', icon: 'clock', label: 'Queued' },
-    failed: { tone: 'overdue', icon: 'error', label: 'Failed' },
-  };
+const STATUS: Record<NotificationStatusName, { tone: BadgeTone; icon: IconName; label: string }> = {
+  sent: { tone: 'ok', icon: 'check', label: 'Sent' },
+  queued: { tone: 'due-soon', icon: 'clock', label: 'Queued' },
+  failed: { tone: 'overdue', icon: 'error', label: 'Failed' },
+};
 
 export const messageStatusLabel = (status: NotificationStatusName) => STATUS[status].label;
 

@@ -1,0 +1,271 @@
+import { randomUUID } from 'node:crypto';
+import { Router } from 'express';
+import { z } from 'zod';
+import { route } from '../route';
+import {
+  WALKAROUND_PHOTO_MAX_BYTES,
+  WALKAROUND_PURPOSES,
+  checklistQuerySchema,
+  walkaroundCreateSchema,
+  walkaroundListQuerySchema,
+} from '../../../shared/schemas/walkarounds';
+import { authorize } from '../../policies/access';
+import { canDoWalkaround, canEditChecklists, canInspect } from '../../policies/walkaround';
+import { loadMachine } from '../../services/machines';
+import {
+  assertMayStart,
+  checklistFor,
+  listWalkarounds,
+  storeWalkaroundPhoto,
+  submitWalkaround,
+} from '../../services/walkarounds';
+import { taggedOutMessage } from '../../services/defects';
+import { getObject, putObject } from '../../services/storage';
+import { prepareImage } from '../../services/images';
+import { fileUpload } from '../../middlewares/upload';
+import { AppError, notFound } from '../../errors';
+import { Defect, Machine, MachineForecast, Walkaround, WalkaroundPhoto } from '../../models';
+import {
+  checklistItemOutSchema,
+  presentChecklistItem,
+  presentWalkaround,
+  walkaroundSchema,
+} from '../../presenters/walkaround';
+import {
+  defectSchema,
+  machineRefSchema,
+  presentDefect,
+  presentMachineRef,
+  walkaroundPhotoUrls,
+} from '../../presenters/defect';
+import { peopleById } from '../../presenters/people';
+import { sendObject } from '../services/attachments.router';
+import { registerChecklistTemplateRoutes } from './checklists.router';
+import { registerLabelRoutes } from './label.router';
+import { Op } from 'sequelize';
+
+const orgParams = z.object({ orgId: z.uuid() });
+const machineParams = orgParams.extend({ machineId: z.uuid() });
+
+const CRITICAL_NOTE =
+  'A fail on an item marked critical tags the machine out: it must not be used until a technician or manager clears it.';
+
+const outcomeSchema = z.object({
+  data: walkaroundSchema,
+  defects: z.array(defectSchema),
+  machine: machineRefSchema,
+  taggedOut: z.boolean(),
+  message: z.string().nullable(),
+  duplicate: z.boolean(),
+});
+
+/** Walkarounds: the checklist for a machine, submission (offline-safe), photos, history, labels. */
+export function walkaroundsRouter(): Router {
+  const router = Router();
+  registerChecklistTemplateRoutes(router);
+  registerLabelRoutes(router);
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/machines/:machineId/checklist',
+    summary:
+      "Start a walkaround: the machine's checklist (its category's template, else the built-in list). purpose=use is refused (409 tagged_out) on a tagged-out machine",
+    tags: ['walkarounds'],
+    params: machineParams,
+    query: checklistQuerySchema,
+    response: z.object({
+      data: z.object({
+        machine: machineRefSchema.extend({
+          lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
+        }),
+        purpose: z.enum(WALKAROUND_PURPOSES),
+        template: z.object({
+          id: z.string().nullable(),
+          name: z.string(),
+          description: z.string(),
+          source: z.enum(['farm', 'built_in']),
+        }),
+        items: z.array(checklistItemOutSchema),
+        criticalNote: z.string(),
+      }),
+      abilities: z.object({ editTemplate: z.boolean(), inspect: z.boolean() }),
+    }),
+    handler: async ({ req, params, query }) => {
+      const access = req.access!;
+      const { machine } = await loadMachine(access, params.machineId);
+      assertMayStart(access, machine, query.purpose);
+      const [checklist, forecast] = await Promise.all([
+        checklistFor(access, machine.category),
+        MachineForecast.findByPk(machine.id),
+      ]);
+      return {
+        data: {
+          machine: {
+            ...presentMachineRef(machine),
+            lastReading:
+              forecast?.lastValue != null && forecast.lastTakenAt
+                ? { value: forecast.lastValue, takenAt: forecast.lastTakenAt.toISOString() }
+                : null,
+          },
+          purpose: query.purpose,
+          template: checklist.template,
+          items: checklist.items.map(presentChecklistItem),
+          criticalNote: CRITICAL_NOTE,
+        },
+        abilities: { editTemplate: canEditChecklists(access), inspect: canInspect(access) },
+      };
+    },
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/organizations/:orgId/walkarounds',
+    summary:
+      'Submit a walkaround (201). A clientId already used answers 200 with the first one, so a re-sent offline form is not doubled. Fails and attentions raise defects; a critical fail tags the machine out',
+    tags: ['walkarounds'],
+    params: orgParams,
+    body: walkaroundCreateSchema,
+    status: 201,
+    response: outcomeSchema,
+    handler: async ({ req, res, body }) => {
+      const access = req.access!;
+      const outcome = await submitWalkaround(access, body);
+      const machine = (await Machine.findByPk(outcome.machine.id))!;
+      const defects = await Defect.findAll({
+        where: { organizationId: access.organization.id, id: { [Op.in]: outcome.defectIds } },
+        order: [['createdAt', 'ASC']],
+      });
+      const people = await peopleById([
+        outcome.walkaround.operatorId,
+        ...defects.flatMap((d) => [d.reportedBy, d.assignedTo, d.fixedBy]),
+      ]);
+      const taggedOut = machine.status === 'tagged_out';
+      const result = {
+        data: presentWalkaround(outcome.walkaround, machine, people),
+        defects: defects.map((d) => presentDefect(d, machine, people)),
+        machine: presentMachineRef(machine),
+        taggedOut,
+        message: taggedOut ? taggedOutMessage(machine) : null,
+        duplicate: !outcome.created,
+      };
+      if (outcome.created) return result;
+      res.status(200).json(result);
+    },
+  });
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/walkarounds',
+    summary: 'Walkarounds, newest first (operators: of the machines they may see)',
+    tags: ['walkarounds'],
+    params: orgParams,
+    query: walkaroundListQuerySchema,
+    response: z.object({
+      data: z.array(walkaroundSchema),
+      meta: z.object({ total: z.number(), page: z.number(), pageSize: z.number() }),
+    }),
+    handler: async ({ req, query }) => {
+      const access = req.access!;
+      if (query.machineId) await loadMachine(access, query.machineId);
+      const { total, walkarounds } = await listWalkarounds(access, query);
+      const machines = await Machine.findAll({
+        where: {
+          organizationId: access.organization.id,
+          id: { [Op.in]: [...new Set(walkarounds.map((w) => w.machineId))] },
+        },
+      });
+      const machineOf = new Map(machines.map((m) => [m.id, m]));
+      const people = await peopleById(walkarounds.map((w) => w.operatorId));
+      return {
+        data: walkarounds.map((w) => presentWalkaround(w, machineOf.get(w.machineId)!, people)),
+        meta: { total, page: query.page, pageSize: query.pageSize },
+      };
+    },
+  });
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/walkarounds/:walkaroundId',
+    summary: 'One walkaround with the defects it raised',
+    tags: ['walkarounds'],
+    params: orgParams.extend({ walkaroundId: z.uuid() }),
+    response: z.object({ data: walkaroundSchema, defects: z.array(defectSchema) }),
+    handler: async ({ req, params }) => {
+      const access = req.access!;
+      const w = await Walkaround.findOne({
+        where: { id: params.walkaroundId, organizationId: access.organization.id },
+      });
+      if (!w) throw notFound('Walkaround');
+      const { machine } = await loadMachine(access, w.machineId).catch(() => {
+        throw notFound('Walkaround');
+      });
+      const defects = await Defect.findAll({
+        where: { organizationId: access.organization.id, walkaroundId: w.id },
+        order: [['createdAt', 'ASC']],
+      });
+      const people = await peopleById([
+        w.operatorId,
+        ...defects.flatMap((d) => [d.reportedBy, d.assignedTo, d.fixedBy]),
+      ]);
+      return {
+        data: presentWalkaround(w, machine, people),
+        defects: defects.map((d) => presentDefect(d, machine, people)),
+      };
+    },
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/organizations/:orgId/machines/:machineId/walkaround-photos',
+    summary:
+      'Upload a photo for a walkaround item before submitting (JPEG, PNG, WebP or HEIC, at most 10 MB, checked by content); answer with its id',
+    tags: ['walkarounds'],
+    params: machineParams,
+    before: [fileUpload('photo', WALKAROUND_PHOTO_MAX_BYTES, 'a photo')],
+    multipartBody: z.object({ photo: z.string().openapi({ format: 'binary' }) }),
+    status: 201,
+    response: z.object({
+      data: z.object({ id: z.string(), photoUrl: z.string(), thumbnailUrl: z.string() }),
+    }),
+    handler: async ({ req, params }) => {
+      const access = req.access!;
+      const { machine } = await loadMachine(access, params.machineId);
+      authorize(canDoWalkaround(access, machine), 'Your role does not do walkarounds');
+      if (machine.status === 'sold')
+        throw new AppError(409, 'machine_sold', `${machine.fleetNumber} is sold`);
+      const { full, thumb, contentType } = await prepareImage(req.file!.buffer, 'photo');
+      const key = `org/${access.organization.id}/walkarounds/${machine.id}/${randomUUID()}`;
+      await putObject(`${key}.webp`, full, contentType);
+      await putObject(`${key}-thumb.webp`, thumb, contentType);
+      const photo = await storeWalkaroundPhoto(access, machine, key);
+      const urls = walkaroundPhotoUrls(access.organization.id, photo.id);
+      return { data: { id: photo.id, photoUrl: urls.photoUrl!, thumbnailUrl: urls.thumbnailUrl! } };
+    },
+  });
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/walkaround-photos/:photoId',
+    summary: 'A walkaround photo (size=thumb for the thumbnail), to people who may see the machine',
+    tags: ['walkarounds'],
+    params: orgParams.extend({ photoId: z.uuid() }),
+    query: z.object({ size: z.enum(['full', 'thumb']).default('full') }),
+    response: z.string().openapi({ format: 'binary' }),
+    handler: async ({ req, res, params, query }) => {
+      const access = req.access!;
+      const photo = await WalkaroundPhoto.findOne({
+        where: { id: params.photoId, organizationId: access.organization.id },
+      });
+      if (!photo) throw notFound('Photo');
+      await loadMachine(access, photo.machineId).catch(() => {
+        throw notFound('Photo');
+      });
+      await sendObject(
+        res,
+        await getObject(`${photo.objectKey}${query.size === 'thumb' ? '-thumb' : ''}.webp`),
+      );
+    },
+  });
+
+  return router;
+}
