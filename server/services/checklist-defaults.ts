@@ -263,11 +263,7 @@ const DEFINITIONS: Record<MachineCategory, ChecklistDefinition> = {
         'Locks hold in transport; breakaways return.',
         { critical: true, hazards: ['raised_load', 'hydraulic_pressure'] },
       ),
-      item(
-        'spray-lines',
-        'Tank, lines and nozzles',
-        'No leaks or drips of product; lids closed.',
-      ),
+      item('spray-lines', 'Tank, lines and nozzles', 'No leaks or drips of product; lids closed.'),
       item(
         'clean-water',
         'Clean-water tank and protective gear',
@@ -354,9 +350,14 @@ const DEFINITIONS: Record<MachineCategory, ChecklistDefinition> = {
         'Air builds to working pressure with no audible leaks; brakes hold.',
         { critical: true, hazards: ['stored_energy'] },
       ),
-      item('body-prop', 'Body down; body prop works', 'Never work under a raised body without its prop.', {
-        hazards: ['raised_load'],
-      }),
+      item(
+        'body-prop',
+        'Body down; body prop works',
+        'Never work under a raised body without its prop.',
+        {
+          hazards: ['raised_load'],
+        },
+      ),
       item('mirrors', 'Mirrors and windscreen', 'Clean, not cracked, adjusted.'),
       I.lights,
       item('seatbelt', 'Seatbelt', 'Latches and is not frayed.', { critical: true }),

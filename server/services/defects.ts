@@ -375,3 +375,30 @@ export async function listDefects(access: OrgAccess, query: DefectListQuery) {
     defects: rows.map((r) => byId.get(r.id)!),
   };
 }
+
+/** Active defects (open or in repair) per severity, for the list's counters. */
+export async function activeDefectCounts(access: OrgAccess, machineId?: string) {
+  const rows = await sequelize.query<{ severity: DefectSeverity; n: number }>(
+    `SELECT d.severity, count(*)::int AS n FROM defects d
+     WHERE d.organization_id = :org AND d.status IN ('open','in_repair')
+       ${machineId ? 'AND d.machine_id = :machineId' : ''}
+       ${
+         hasRole(access, 'operator')
+           ? `AND (NOT EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = d.organization_id AND o.machine_id = d.machine_id)
+                OR EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = d.organization_id AND o.machine_id = d.machine_id AND o.user_id = :user))`
+           : ''
+       }
+     GROUP BY d.severity`,
+    {
+      replacements: {
+        org: access.organization.id,
+        user: access.userId,
+        machineId: machineId ?? null,
+      },
+      type: QueryTypes.SELECT,
+    },
+  );
+  const counts = { critical: 0, major: 0, minor: 0 };
+  for (const r of rows) counts[r.severity] = r.n;
+  return counts;
+}

@@ -44,7 +44,10 @@ export type PreparedAttachment =
  * Checks an attachment by its content: a photo (prepared as by prepareImage) or a PDF (kept as
  * sent). Anything else, whatever its name says, is refused naming the field.
  */
-export async function prepareAttachment(buffer: Buffer, field: string): Promise<PreparedAttachment> {
+export async function prepareAttachment(
+  buffer: Buffer,
+  field: string,
+): Promise<PreparedAttachment> {
   const type = await fileTypeFromBuffer(buffer);
   if (type?.mime === 'application/pdf') {
     return { kind: 'pdf', body: buffer, contentType: 'application/pdf' };

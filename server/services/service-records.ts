@@ -46,7 +46,10 @@ export async function loadRecord(access: OrgAccess, recordId: string, transactio
 const round = (n: number, places = 2) => Math.round(n * 10 ** places) / 10 ** places;
 
 /** Parts and fluids the tasks' lists call for, summed by part number (and by fluid kind + unit). */
-export function prefillLines(tasks: ServiceTask[]): { parts: ServicePart[]; fluids: ServiceFluid[] } {
+export function prefillLines(tasks: ServiceTask[]): {
+  parts: ServicePart[];
+  fluids: ServiceFluid[];
+} {
   const parts = new Map<string, ServicePart>();
   const fluids = new Map<string, ServiceFluid>();
   for (const t of tasks) {
@@ -123,7 +126,8 @@ async function checkDefectsActive(access: OrgAccess, machine: Machine, ids: stri
     const d = byId.get(id);
     if (!d || d.machineId !== machine.id)
       errors[`closesDefectIds.${i}`] = `No such defect on ${machine.fleetNumber}`;
-    else if (d.status === 'fixed') errors[`closesDefectIds.${i}`] = `"${d.title}" is closed already`;
+    else if (d.status === 'fixed')
+      errors[`closesDefectIds.${i}`] = `"${d.title}" is closed already`;
   });
   if (Object.keys(errors).length) throw invalid(errors);
 }
@@ -190,7 +194,10 @@ async function serviceReading(
   } catch (err) {
     if (err instanceof AppError && err.fields) {
       const renamed = Object.fromEntries(
-        Object.entries(err.fields).map(([k, v]) => [k === 'takenAt' ? 'performedOn' : 'meterValue', v]),
+        Object.entries(err.fields).map(([k, v]) => [
+          k === 'takenAt' ? 'performedOn' : 'meterValue',
+          v,
+        ]),
       );
       throw invalid(renamed);
     }
@@ -313,7 +320,9 @@ export async function createRecord(
     plannedFor: input.plannedFor,
     tasks: snapshot(tasks),
     technicianIds:
-      completed && !input.technicianIds.length ? [access.userId] : [...new Set(input.technicianIds)],
+      completed && !input.technicianIds.length
+        ? [access.userId]
+        : [...new Set(input.technicianIds)],
     labourHours: input.labourHours,
     parts: input.parts ?? prefilled.parts,
     fluids: input.fluids ?? prefilled.fluids,
@@ -398,7 +407,11 @@ export async function completeRecord(
 ): Promise<{ record: ServiceRecord; machine: Machine; resets: TaskReset[] }> {
   const { record: current, machine } = await loadRecord(access, recordId);
   if (current.status !== 'planned')
-    throw new AppError(409, 'not_planned', `This record is ${current.status}; only a plan can be completed`);
+    throw new AppError(
+      409,
+      'not_planned',
+      `This record is ${current.status}; only a plan can be completed`,
+    );
   const taskIds = input.taskIds ?? current.tasks.map((t) => t.taskId);
   const tasks = await resolveTasks(access, machine, taskIds);
   if (input.technicianIds) await checkTechnicians(access, input.technicianIds);
@@ -472,7 +485,11 @@ export async function completeRecord(
       access,
       'service.complete',
       record,
-      { performedOn: input.performedOn, meterValue: input.meterValue, taskIds: tasks.map((t) => t.id) },
+      {
+        performedOn: input.performedOn,
+        meterValue: input.meterValue,
+        taskIds: tasks.map((t) => t.id),
+      },
       transaction,
     );
     return { record, machine, resets };
@@ -534,7 +551,11 @@ export async function cancelRecord(access: OrgAccess, recordId: string) {
   return sequelize.transaction(async (transaction) => {
     const { record, machine } = await loadRecord(access, recordId, transaction);
     if (record.status !== 'planned')
-      throw new AppError(409, 'not_planned', `This record is ${record.status}; only a plan can be cancelled`);
+      throw new AppError(
+        409,
+        'not_planned',
+        `This record is ${record.status}; only a plan can be cancelled`,
+      );
     await record.update({ status: 'cancelled' }, { transaction });
     await audit(access, 'service.cancel', record, {}, transaction);
     return { record, machine };
@@ -544,7 +565,11 @@ export async function cancelRecord(access: OrgAccess, recordId: string) {
 const likeOf = (q: string) => `%${q.replace(/[%_\\]/g, (c) => `\\${c}`)}%`;
 
 /** A machine's records, newest first (by the date done, or booked); q searches notes, task names and parts. */
-export async function machineHistory(access: OrgAccess, machine: Machine, query: ServiceHistoryQuery) {
+export async function machineHistory(
+  access: OrgAccess,
+  machine: Machine,
+  query: ServiceHistoryQuery,
+) {
   const where = ['r.organization_id = :org', 'r.machine_id = :machine'];
   const replacements: Record<string, unknown> = {
     org: access.organization.id,

@@ -34,7 +34,11 @@ export function sumLines(records: { parts: ServicePart[]; fluids: ServiceFluid[]
   for (const r of records) {
     for (const p of r.parts) {
       const key = p.partNumber.trim().toUpperCase();
-      const line = parts.get(key) ?? { partNumber: p.partNumber, description: p.description, quantity: 0 };
+      const line = parts.get(key) ?? {
+        partNumber: p.partNumber,
+        description: p.description,
+        quantity: 0,
+      };
       line.quantity = round(line.quantity + p.quantity);
       parts.set(key, line);
     }
@@ -82,7 +86,10 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
   ]);
   const [machines, tasks, people] = await Promise.all([
     Machine.findAll({
-      where: { organizationId: org.id, id: { [Op.in]: [...new Set(planned.map((r) => r.machineId))] } },
+      where: {
+        organizationId: org.id,
+        id: { [Op.in]: [...new Set(planned.map((r) => r.machineId))] },
+      },
     }),
     ServiceTask.findAll({
       where: {
@@ -97,9 +104,12 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
   const labourOf = new Map(tasks.map((t) => [t.id, t.labourHours]));
   // A task already booked on a plan (any date) is shown as such beside its due date.
   const bookedOn = new Map<string, { recordId: string; plannedFor: string }>();
-  for (const r of [...allPlanned].sort((a, b) => (a.plannedFor ?? '').localeCompare(b.plannedFor ?? '')))
+  for (const r of [...allPlanned].sort((a, b) =>
+    (a.plannedFor ?? '').localeCompare(b.plannedFor ?? ''),
+  ))
     for (const t of r.tasks)
-      if (!bookedOn.has(t.taskId)) bookedOn.set(t.taskId, { recordId: r.id, plannedFor: r.plannedFor! });
+      if (!bookedOn.has(t.taskId))
+        bookedOn.set(t.taskId, { recordId: r.id, plannedFor: r.plannedFor! });
   const withBooking = (row: DueRow) => ({ ...row, booked: bookedOn.get(row.taskId) ?? null });
 
   const plannedItem = (r: ServiceRecord) => {
@@ -144,7 +154,10 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
     };
   });
   const overdue = due.rows
-    .filter((row) => row.due.status === 'overdue' && (!row.due.effectiveDate || row.due.effectiveDate < start))
+    .filter(
+      (row) =>
+        row.due.status === 'overdue' && (!row.due.effectiveDate || row.due.effectiveDate < start),
+    )
     .map(withBooking);
   const week = sumLines(planned);
   return {

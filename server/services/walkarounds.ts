@@ -62,7 +62,12 @@ export async function checklistFor(
     };
   const builtIn = defaultChecklist(category);
   return {
-    template: { id: null, name: builtIn.name, description: builtIn.description, source: 'built_in' },
+    template: {
+      id: null,
+      name: builtIn.name,
+      description: builtIn.description,
+      source: 'built_in',
+    },
     items: builtIn.items,
   };
 }
@@ -73,7 +78,11 @@ export async function checklistFor(
  */
 export function walkaroundRefusal(machine: Machine, purpose: WalkaroundPurpose): AppError | null {
   if (machine.status === 'sold')
-    return new AppError(409, 'machine_sold', `${machine.fleetNumber} is sold; walkarounds are closed`);
+    return new AppError(
+      409,
+      'machine_sold',
+      `${machine.fleetNumber} is sold; walkarounds are closed`,
+    );
   if (purpose === 'use' && machine.status === 'tagged_out')
     return new AppError(409, 'tagged_out', taggedOutMessage(machine));
   return null;
@@ -221,7 +230,8 @@ async function checkAnswers(
   answers.forEach((a, i) => {
     if (!known.has(a.itemId))
       errors[`items.${i}.itemId`] = `No item "${a.itemId}" on the ${checklist.template.name} list`;
-    else if (seen.has(a.itemId)) errors[`items.${i}.itemId`] = `"${known.get(a.itemId)!.label}" is answered twice`;
+    else if (seen.has(a.itemId))
+      errors[`items.${i}.itemId`] = `"${known.get(a.itemId)!.label}" is answered twice`;
     seen.add(a.itemId);
   });
   const missing = checklist.items.filter((i) => !seen.has(i.id));
@@ -240,7 +250,8 @@ async function checkAnswers(
       const p = byId.get(a.photoId);
       if (!p || p.machineId !== machine.id)
         errors[`items.${i}.photoId`] = `No such photo of ${machine.fleetNumber}; upload it first`;
-      else if (p.walkaroundId) errors[`items.${i}.photoId`] = 'This photo belongs to another walkaround';
+      else if (p.walkaroundId)
+        errors[`items.${i}.photoId`] = 'This photo belongs to another walkaround';
     });
     if (new Set(photoIds).size !== photoIds.length) errors.items ??= 'A photo is attached twice';
   }
@@ -291,7 +302,13 @@ export async function submitWalkaround(
       const checklist = await checklistFor(access, machine.category, transaction);
       const items = await checkAnswers(access, machine, checklist, input.items, transaction);
       const performedAt = input.performedAt ? new Date(input.performedAt) : new Date();
-      const reading = await walkaroundReading(access, machine, input.meterValue, performedAt, transaction);
+      const reading = await walkaroundReading(
+        access,
+        machine,
+        input.meterValue,
+        performedAt,
+        transaction,
+      );
       const result = items.some((i) => i.result === 'fail')
         ? 'fail'
         : items.some((i) => i.result === 'attention')
@@ -414,7 +431,10 @@ async function walkaroundReading(
   } catch (err) {
     if (err instanceof AppError && err.fields) {
       const renamed = Object.fromEntries(
-        Object.entries(err.fields).map(([k, v]) => [k === 'takenAt' ? 'performedAt' : 'meterValue', v]),
+        Object.entries(err.fields).map(([k, v]) => [
+          k === 'takenAt' ? 'performedAt' : 'meterValue',
+          v,
+        ]),
       );
       throw invalid(renamed);
     }

@@ -115,9 +115,7 @@ const recordFields = {
   otherCosts: z.array(otherCostSchema).max(50, { error: 'At most 50 cost lines' }),
   notes: z.string().max(10_000, { error: 'Use at most 10,000 characters' }),
   measurements: z.array(measurementSchema).max(100, { error: 'At most 100 measurements' }),
-  reassemblySettings: z
-    .array(reassemblySettingSchema)
-    .max(100, { error: 'At most 100 settings' }),
+  reassemblySettings: z.array(reassemblySettingSchema).max(100, { error: 'At most 100 settings' }),
   /** why a setting is not ticked as restored, when completing anyway */
   unrestoredReason: z.string().trim().max(2000, { error: 'Use at most 2,000 characters' }),
   closesDefectIds: idList(50, 'defects'),

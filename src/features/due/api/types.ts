@@ -16,7 +16,10 @@ export interface DueRow {
     meterUnit: MeterUnit;
   };
   due: DuePoint;
-  lastReading: { value: number; takenAt: string } | null;
+  /** last reading: value on the meter fitted now, and on the lifetime scale */
+  lastReading: { value: number; lifetimeValue: number; takenAt: string } | null;
+  /** the due value as the meter fitted now shows it (differs after a meter replacement) */
+  dueOnMeter: number | null;
   usage: { method: 'trend' | 'season' | 'none'; rate: number; low: number; high: number } | null;
 }
 

@@ -19,7 +19,12 @@ export function DueAtFigure({ row }: { row: DueRow }) {
     <div className="flex flex-col">
       {dueMeter !== null ? (
         <span className={governs === 'meter' ? 'font-bold' : undefined}>
-          {formatMeter(dueMeter, row.machine.meterUnit)}
+          {formatMeter(row.dueOnMeter ?? dueMeter, row.machine.meterUnit)}
+          {row.dueOnMeter !== null && row.dueOnMeter !== dueMeter ? (
+            <span className="block text-xs font-normal text-field-600">
+              on the meter fitted now ({formatMeter(dueMeter, row.machine.meterUnit)} lifetime)
+            </span>
+          ) : null}
         </span>
       ) : null}
       {dueDate !== null ? (

@@ -10,7 +10,7 @@ export interface LatestReading {
     status: MachineStatus;
     category: MachineCategory;
   };
-  lastReading: { value: number; takenAt: string } | null;
+  lastReading: { value: number; lifetimeValue: number; takenAt: string } | null;
 }
 
 export interface BulkReadingOutcome {
