@@ -1,5 +1,6 @@
 import { z } from 'zod';
-import type { ChecklistItem, ChecklistTemplate, Machine, Walkaround } from '../models';
+import type { ChecklistTemplate, Machine, Walkaround } from '../models';
+import type { ChecklistItem } from '../models/walkaround';
 import { MACHINE_CATEGORIES } from '../../shared/constants';
 import { HAZARDS } from '../../shared/schemas/schedule';
 import { WALKAROUND_PURPOSES, WALKAROUND_RESULTS } from '../../shared/schemas/walkarounds';

@@ -3,7 +3,7 @@
 // daily inspection items (CHECKS.md §5); the others are common practice. Cautions follow CHECKS.md §6.
 import type { MachineCategory } from '../../shared/constants';
 import type { Hazard } from '../../shared/schemas/schedule';
-import type { ChecklistItem } from '../models';
+import type { ChecklistItem } from '../models/walkaround';
 
 const DEFER = "Follow the operator's manual and local rules.";
 

@@ -118,12 +118,13 @@ export function renderDigest(input: {
   const tasks = machines.flatMap((m) => m.tasks);
   const count = (s: DigestSection) => tasks.filter((t) => t.section === s).length;
   const summary = (['overdue', 'due_soon', 'coming_up'] as const)
+    .filter((s) => count(s) > 0)
     .map((s) => `${count(s)} ${SECTION_LABELS[s].toLowerCase()}`)
     .join(', ');
   const title = `${input.frequency === 'weekly' ? 'Weekly due list' : 'Due list'}: ${organization.name}`;
   const subject = `${title} — ${summary}`;
   const settingsUrl = appLinks.reminders(organization.id);
-  const intro = `Hello ${input.recipientName}, here is what is due on ${formatIsoDate(input.asOf)}: ${summary} (coming up = due within ${DIGEST_HORIZON_DAYS} days by the forecast).`;
+  const intro = `Hello ${input.recipientName}, here is what is due on ${formatIsoDate(input.asOf)}: ${summary} (coming up = falls due within ${DIGEST_HORIZON_DAYS} days by the forecast).`;
 
   const text = [
     title,

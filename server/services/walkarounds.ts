@@ -8,10 +8,9 @@ import {
   MeterReading,
   Walkaround,
   WalkaroundPhoto,
-  type ChecklistItem,
   type Machine,
-  type WalkaroundItem,
 } from '../models';
+import type { ChecklistItem, WalkaroundItem } from '../models/walkaround';
 import type { MachineCategory } from '../../shared/constants';
 import type {
   ChecklistItemInput,
@@ -175,11 +174,12 @@ export async function updateChecklistTemplate(
   template: ChecklistTemplate,
   input: ChecklistTemplateUpdateInput,
 ) {
-  const items = input.items ? normaliseItems(input.items) : undefined;
+  const { items: given, ...fields } = input;
+  const items = given ? normaliseItems(given) : undefined;
   try {
     return await sequelize.transaction(async (transaction) => {
       const before = { category: template.category, name: template.name };
-      await template.update({ ...input, ...(items && { items }) }, { transaction });
+      await template.update({ ...fields, ...(items && { items }) }, { transaction });
       await recordAudit(
         {
           organizationId: access.organization.id,

@@ -20,8 +20,9 @@ const attachmentParams = recordParams.extend({ attachmentId: z.uuid() });
 
 /** A file name safe to store and to send back in a header. */
 const cleanName = (name: string) =>
-  name
-    .replace(/[\\/\0-\x1f"]/g, '_')
+  [...name]
+    .map((c) => (c.charCodeAt(0) < 32 || '\\/"'.includes(c) ? '_' : c))
+    .join('')
     .trim()
     .slice(0, 200) || 'attachment';
 

@@ -115,6 +115,7 @@ export function NotificationSettingsPage() {
             <CalendarFeedCard
               orgId={organization.id}
               scope="personal"
+              title="Your feed"
               feed={data.personal}
               timeZone={organization.timeZone}
               description="One all-day event per task on the date it falls due, for the machines in your due list (and only those you chose above)."
@@ -139,6 +140,7 @@ export function NotificationSettingsPage() {
                   <CalendarFeedCard
                     orgId={organization.id}
                     scope="farm"
+                    title="Farm calendar"
                     feed={data.farm}
                     timeZone={organization.timeZone}
                     description="Every machine's service dates, for a shared shop or office calendar."

@@ -198,11 +198,23 @@ export function MeterChart({
               : {line.label}
             </li>
           ))}
-          {data.dueBeyond.map((line) => (
-            <li key={line.value} className="text-field-600">
-              Due at {formatMeter(line.value, unit)} (above the chart): {line.label}
+          {data.dueBeyond.length > 0 ? (
+            <li>
+              <details>
+                <summary className="cursor-pointer py-1 text-field-700">
+                  {data.dueBeyond.length} more due{' '}
+                  {data.dueBeyond.length === 1 ? 'meter' : 'meters'} above the chart
+                </summary>
+                <ul className="mt-1 flex flex-col gap-1 pl-4 text-field-600">
+                  {data.dueBeyond.map((line) => (
+                    <li key={line.value}>
+                      Due at {formatMeter(line.value, unit)}: {line.label}
+                    </li>
+                  ))}
+                </ul>
+              </details>
             </li>
-          ))}
+          ) : null}
         </ul>
       ) : null}
       <ChartSummaryTable data={data} unit={unit} timeZone={timeZone} />

@@ -1,10 +1,23 @@
+import { lazy, Suspense } from 'react';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
 import { Skeleton } from '../../../components/ui/skeleton';
 import { Card } from '../../../components/ui/card';
 import { useReadings } from '../api/get-readings';
 import type { MachineDetail } from '../api/types';
-import { MeterChart } from './meter-chart';
+
+// recharts is most of the bundle's weight: it loads only when a machine page shows a chart, so the
+// fleet list and the log-hours screen stay light on a phone.
+const MeterChart = lazy(() => import('./meter-chart').then((m) => ({ default: m.MeterChart })));
+
+function ChartSkeleton({ label }: { label: string }) {
+  return (
+    <div role="status">
+      <span className="sr-only">{label}</span>
+      <Skeleton className="h-80 w-full rounded-xl" />
+    </div>
+  );
+}
 
 /** The "Meter" section: the chart of the machine's readings, or why there is none. */
 export function MeterSection({
@@ -21,12 +34,7 @@ export function MeterSection({
 }) {
   const readings = useReadings(orgId, machine.id);
   if (readings.isPending) {
-    return (
-      <div role="status">
-        <span className="sr-only">Loading the meter chart</span>
-        <Skeleton className="h-80 w-full rounded-xl" />
-      </div>
-    );
+    return <ChartSkeleton label="Loading the meter chart" />;
   }
   if (readings.isError) {
     return (
@@ -47,14 +55,16 @@ export function MeterSection({
   }
   return (
     <Card>
-      <MeterChart
-        readings={readings.data.data}
-        replacements={readings.data.replacements}
-        usage={machine.usage}
-        dues={dues}
-        unit={machine.meterUnit}
-        timeZone={timeZone}
-      />
+      <Suspense fallback={<ChartSkeleton label="Loading the meter chart" />}>
+        <MeterChart
+          readings={readings.data.data}
+          replacements={readings.data.replacements}
+          usage={machine.usage}
+          dues={dues}
+          unit={machine.meterUnit}
+          timeZone={timeZone}
+        />
+      </Suspense>
     </Card>
   );
 }

@@ -18,6 +18,7 @@ interface CalendarFeedCardProps {
   scope: CalendarFeedScope;
   feed: CalendarFeed | null;
   timeZone: string;
+  title: string;
   /** what the feed holds, in words */
   description: string;
 }
@@ -28,6 +29,7 @@ export function CalendarFeedCard({
   scope,
   feed,
   timeZone,
+  title,
   description,
 }: CalendarFeedCardProps) {
   const create = useCreateCalendarFeed(orgId);
@@ -50,6 +52,7 @@ export function CalendarFeedCard({
 
   return (
     <Card className="flex flex-col gap-3">
+      <h3 className="text-lg font-black text-field-900">{title}</h3>
       <p className="text-field-700">{description}</p>
       {create.error ? <Alert>{errorText(create.error)}</Alert> : null}
       {feed ? (

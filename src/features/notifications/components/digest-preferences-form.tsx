@@ -84,7 +84,7 @@ export function DigestPreferencesForm({ orgId, preferences }: DigestPreferencesF
       ) : null}
 
       <fieldset className="flex flex-col gap-2">
-        <legend className="mb-1.5 font-bold text-field-900">Due list by e-mail</legend>
+        <legend className="mb-1.5 font-bold text-field-900">How often</legend>
         <p className="-mt-1 text-sm text-field-600">
           Overdue, due soon and what the forecast brings due in the next {DIGEST_HORIZON_DAYS} days,
           per machine. It goes out after {hourLabel(meta.digestHour)} ({meta.timeZone}) and only

@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { MachineCategory } from '../../../../shared/constants';
+import { DUE_STATUS_LABELS, type MachineCategory } from '../../../../shared/constants';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
@@ -53,9 +53,18 @@ export function DueSection({ orgId, machine, timeZone }: DueSectionProps) {
 
   const { edit: canEdit, setLastDone: canSetLastDone } = tasks.data.abilities;
   const list = [...tasks.data.data].sort(byUrgency);
+  const counts = (['overdue', 'due_soon', 'ok', 'no_forecast'] as const)
+    .map((status) => ({ status, n: list.filter((t) => t.due?.status === status).length }))
+    .filter((c) => c.n > 0);
 
   return (
     <div className="flex flex-col gap-4">
+      {counts.length > 0 ? (
+        <p className="font-bold text-field-800">
+          {list.length} {list.length === 1 ? 'task' : 'tasks'}:{' '}
+          {counts.map((c) => `${c.n} ${DUE_STATUS_LABELS[c.status].toLowerCase()}`).join(' · ')}
+        </p>
+      ) : null}
       {notice ? <Alert tone="success">{notice}</Alert> : null}
       {canEdit && panel === 'none' ? (
         <div className="flex flex-wrap gap-2">

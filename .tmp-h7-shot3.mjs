@@ -1,0 +1,30 @@
+import { chromium } from 'playwright-core';
+import fs from 'node:fs';
+const dir = fs.mkdtempSync('/tmp/pg-h7/chrome-');
+const ctx = await chromium.launchPersistentContext(dir, { executablePath: '/usr/bin/chromium', headless: true,
+  args: ['--headless','--no-sandbox','--disable-gpu','--disable-quic','--no-first-run','--disable-background-networking','--disable-component-update','--disable-sync'],
+  viewport: { width: 1280, height: 900 } });
+const page = await ctx.newPage();
+const base = 'http://127.0.0.1:45508';
+await page.goto(base + '/sign-in');
+await page.getByLabel('Email', { exact: true }).fill('lena@larkspur.example');
+await page.getByLabel('Password', { exact: true }).fill('hourstone-demo');
+await page.getByRole('button', { name: 'Sign in' }).click();
+await page.waitForURL((u) => u.pathname.startsWith('/o/'));
+await page.getByRole('navigation', { name: 'Main' }).getByRole('link', { name: 'Reminders' }).click();
+await page.getByRole('heading', { name: 'Reminders', level: 1 }).waitFor();
+await page.waitForTimeout(2000); await page.screenshot({ path: '/tmp/pg-h7/op-debug.png', fullPage: true }); await page.getByRole('button', { name: 'Create feed link' }).click();
+const input = page.getByLabel('Your calendar address');
+await input.waitFor();
+console.log('url', await input.inputValue());
+await page.getByLabel('Once a week').check();
+await page.getByLabel('Day of the week').selectOption('Friday');
+await page.getByRole('button', { name: 'Save reminders' }).click();
+await page.getByText('Saved. The next digest').waitFor();
+const nav = await page.getByRole('navigation', { name: 'Main' }).getByRole('link').allInnerTexts();
+console.log('nav', nav.join('|'));
+await page.screenshot({ path: '/tmp/pg-h7/reminders-operator.png', fullPage: true });
+await page.goto(base + new URL(page.url()).pathname.replace('/reminders', '/messages'));
+await page.waitForTimeout(1000);
+await page.screenshot({ path: '/tmp/pg-h7/messages-operator.png' });
+await ctx.close();
