@@ -12,4 +12,5 @@ export const canClearTagOut = (access: OrgAccess) => isShop(access);
 export const defectAbilities = (access: OrgAccess) => ({
   update: canHandleDefects(access),
   close: canHandleDefects(access),
+  clearTagOut: canClearTagOut(access),
 });

@@ -38,10 +38,22 @@ export function presentNotificationSummary(n: Notification) {
   };
 }
 
+/**
+ * Messages whose content is a secret of their recipient: an invitation link sets the password of
+ * the invited account, a reset link that of an existing one. Their content is never shown.
+ */
+const SECRET_KINDS = new Set(['invitation', 'password_reset']);
+const SECRET_NOTE =
+  'This message carries a single-use link for its recipient only, so its content is not shown here.';
+// Each digest's unsubscribe link is its recipient's: shown to a manager it would let them switch
+// someone else's digest off.
+const UNSUBSCRIBE_LINK = /(\/api\/v1\/unsubscribe\/)[A-Za-z0-9._-]+/g;
+const withoutUnsubscribeLinks = (body: string) => body.replace(UNSUBSCRIBE_LINK, '$1…');
+
 export const presentNotification = (n: Notification) => ({
   ...presentNotificationSummary(n),
-  text: n.textBody,
-  html: n.htmlBody,
+  text: SECRET_KINDS.has(n.kind) ? SECRET_NOTE : withoutUnsubscribeLinks(n.textBody),
+  html: SECRET_KINDS.has(n.kind) || !n.htmlBody ? null : withoutUnsubscribeLinks(n.htmlBody),
 });
 
 export const preferenceSchema = z

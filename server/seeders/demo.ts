@@ -35,6 +35,8 @@ import {
 } from './demo-people';
 import { planLastDone } from './service-plan';
 import { buildTemplates } from './templates';
+import { writeServiceHistory, type DemoMachineWorld } from './demo-services';
+import { writeWalkarounds } from './demo-walkarounds';
 
 export interface DemoSummary {
   organizations: number;
@@ -270,6 +272,34 @@ async function writeScenario(
   });
   await inChunks(taskRows, (chunk) =>
     ServiceTask.bulkCreate(chunk, { transaction, returning: false }),
+  );
+
+  // Service history and plans, checklists, walkarounds and defects, on the last-done points above.
+  const worlds: DemoMachineWorld[] = DEMO_MACHINES.map((m) => {
+    const org = orgOf(m.organization);
+    const id = machineId(m);
+    return {
+      organizationKey: m.organization,
+      organizationId: orgId(m.organization),
+      id,
+      fleetNumber: m.fleetNumber,
+      category: m.category,
+      timeZone: org.timeZone,
+      units: org.units,
+      readings: history.get(m.fleetNumber)!.readings,
+      operatorIds: (m.operators ?? []).map(userId),
+      shopPersonId:
+        staff(m.organization, 'technician')[0] ?? staff(m.organization, 'manager')[0] ?? null,
+      tasks: taskRows.filter((t) => t.machineId === id),
+    };
+  });
+  await writeServiceHistory(worlds, today, demoId, transaction);
+  await writeWalkarounds(
+    farms.map((f) => ({ key: f.key, id: orgId(f.key) })),
+    worlds,
+    today,
+    demoId,
+    transaction,
   );
 
   await AuditEvent.bulkCreate(

@@ -144,7 +144,16 @@ export async function acceptInvitation(
       ),
       transaction,
     });
-    if (user) await user.update({ name, passwordHash }, { transaction });
+    if (user?.passwordHash) {
+      // An existing account joins with its own password: an invitation never resets a password
+      // (otherwise whoever holds the link could take over the account).
+      if (!(await bcrypt.compare(password, user.passwordHash))) {
+        throw invalid({
+          password:
+            'An account with this e-mail exists already: enter its current password to join (or reset it first)',
+        });
+      }
+    } else if (user) await user.update({ name, passwordHash }, { transaction });
     else
       user = await User.create(
         { email: invitation.email.toLowerCase(), name, passwordHash },

@@ -284,14 +284,14 @@ export async function closeDefect(access: OrgAccess, defectId: string, input: De
       if (record.status !== 'completed')
         throw invalid({ serviceRecordId: 'Link a completed service record' });
     }
-    await closeDefects(
+    const [closed] = await closeDefects(
       access,
       machine,
       [defect.id],
       { note: input.note, serviceRecordId: input.serviceRecordId ?? null },
       transaction,
     );
-    return { defect, machine };
+    return { defect: closed, machine };
   });
 }
 

@@ -46,7 +46,7 @@ export async function loadRecord(access: OrgAccess, recordId: string, transactio
 const round = (n: number, places = 2) => Math.round(n * 10 ** places) / 10 ** places;
 
 /** Parts and fluids the tasks' lists call for, summed by part number (and by fluid kind + unit). */
-export function prefillLines(tasks: ServiceTask[]): {
+export function prefillLines(tasks: Pick<ServiceTask, 'parts' | 'fluids'>[]): {
   parts: ServicePart[];
   fluids: ServiceFluid[];
 } {
@@ -499,8 +499,11 @@ export async function completeRecord(
 const FIXED_AFTER_COMPLETION = {
   taskIds: "A completed record's tasks cannot change: they have reset the schedule",
   closesDefectIds: "A completed record's defects cannot change: close others from the defect list",
-  plannedFor: 'A completed record has no booking date to change',
+  plannedFor: "A completed record's booking date cannot change",
 } as const;
+
+const sameSet = (a: string[], b: string[]) =>
+  new Set(a).size === new Set(b).size && a.every((x) => b.includes(x));
 
 /** Edits a plan freely; a completed record's costs, notes, measurements and settings only. */
 export async function updateRecord(
@@ -508,19 +511,32 @@ export async function updateRecord(
   recordId: string,
   input: ServiceRecordUpdateInput,
 ) {
-  const { record, machine } = await loadRecord(access, recordId);
-  if (record.status === 'cancelled')
+  const { record: found, machine } = await loadRecord(access, recordId);
+  if (found.status === 'cancelled')
     throw new AppError(409, 'cancelled', 'This record is cancelled; it cannot change');
-  const completed = record.status === 'completed';
-  if (completed) {
+  if (found.status === 'completed') {
+    // A form sent back whole repeats these unchanged; only a change is refused.
+    const changed = {
+      taskIds:
+        input.taskIds !== undefined &&
+        !sameSet(
+          input.taskIds,
+          found.tasks.map((t) => t.taskId),
+        ),
+      closesDefectIds:
+        input.closesDefectIds !== undefined && !sameSet(input.closesDefectIds, found.defectIds),
+      plannedFor: input.plannedFor !== undefined && input.plannedFor !== found.plannedFor,
+    };
     const fields: Record<string, string> = {};
     for (const [k, message] of Object.entries(FIXED_AFTER_COMPLETION))
-      if (input[k as keyof typeof FIXED_AFTER_COMPLETION] !== undefined) fields[k] = message;
+      if (changed[k as keyof typeof changed]) fields[k] = message;
     if (Object.keys(fields).length) throw invalid(fields);
     checkReassembly(
-      input.reassemblySettings ?? record.reassemblySettings,
-      input.unrestoredReason ?? record.unrestoredReason,
+      input.reassemblySettings ?? found.reassemblySettings,
+      input.unrestoredReason ?? found.unrestoredReason,
     );
+    const { taskIds: _t, closesDefectIds: _d, plannedFor: _p, ...editable } = input;
+    input = editable;
   }
   if (input.plannedFor === null) throw invalid({ plannedFor: 'A plan needs its booking date' });
   const tasks = input.taskIds ? await resolveTasks(access, machine, input.taskIds) : null;
@@ -529,6 +545,7 @@ export async function updateRecord(
   // New tasks on a plan bring their parts lists unless the lines are given too.
   const prefilled = tasks ? prefillLines(tasks) : null;
   const { measurements, closesDefectIds, taskIds: _taskIds, ...rest } = input;
+  const record = found;
   return sequelize.transaction(async (transaction) => {
     await record.update(
       {

@@ -40,6 +40,8 @@ function listHeaders(mail: CaughtMail) {
   };
 }
 
+// Provenance: derived — the due list is worked by hand in reminders-fixture.ts (steady use of
+// 10 h/day, the trend method of CHECKS.md §3); the digest must carry exactly those figures.
 describe('due digest — content (hand-worked due list, see reminders-fixture.ts)', () => {
   beforeEach(async () => {
     await resetDatabase();

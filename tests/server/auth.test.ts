@@ -246,3 +246,42 @@ describe('auth — invitation and password reset through the mail catcher', () =
     expect(notes.map((n) => [n.kind, n.status])).toEqual([['password_reset', 'sent']]);
   });
 });
+
+describe('auth — an invitation never takes over an existing account', () => {
+  beforeEach(async () => {
+    await resetDatabase();
+    await clearMail();
+  });
+
+  it('invitation — to an e-mail with an account: a new password is refused (422 on password); the right one joins', async () => {
+    const home = await createOrganization({ name: 'Home Farm' });
+    const other = await createOrganization({ name: 'Other Farm' });
+    const { user: existing } = await createMember(home, 'technician');
+    const { user: manager } = await createMember(other, 'manager');
+    const agent = await signedInAgent(app, manager);
+    await agent
+      .post(`/api/v1/organizations/${other.id}/invitations`)
+      .send({ email: existing.email, name: 'Whoever', role: 'operator' });
+    const mail = await mailTo(existing.email);
+    const token = new URL(firstLink(mail.text)).pathname.split('/').pop()!;
+    const takeover = await request(app)
+      .post(`/api/v1/invitations/${token}/accept`)
+      .send({ name: 'Whoever', password: 'attacker-chosen-password' });
+    expect(takeover.status).toBe(422);
+    expect(takeover.body.error.fields.password).toMatch(/enter its current password/);
+    const old = await request(app)
+      .post('/api/v1/auth/sign-in')
+      .send({ email: existing.email, password: TEST_PASSWORD });
+    expect(old.status).toBe(200);
+    expect(old.body.data.memberships).toHaveLength(1);
+    const join = await request(app)
+      .post(`/api/v1/invitations/${token}/accept`)
+      .send({ name: existing.name, password: TEST_PASSWORD });
+    expect(join.status).toBe(200);
+    expect(
+      join.body.data.memberships.map(
+        (m: { organization: { name: string } }) => m.organization.name,
+      ),
+    ).toEqual(['Home Farm', 'Other Farm']);
+  });
+});

@@ -70,6 +70,8 @@ describe('calendar feeds — managing the links', () => {
     expect((await request(app).post(feedsUrl(org.id)).send({ scope: 'personal' })).status).toBe(
       401,
     );
+    const id = '00000000-0000-4000-8000-000000000000';
+    expect((await request(app).delete(`${feedsUrl(org.id)}/${id}`)).status).toBe(401);
   });
 
   it('feeds — 400 on a bad scope, nothing written', async () => {
@@ -79,6 +81,7 @@ describe('calendar feeds — managing the links', () => {
     const res = await agent.post(feedsUrl(org.id)).send({ scope: 'everyone' });
     expect(res.status).toBe(400);
     expect(res.body.error.fields.scope).toMatch(/personal or farm/);
+    expect((await agent.delete(`${feedsUrl(org.id)}/not-an-id`)).status).toBe(400);
     expect(await countRows('calendar_feeds')).toBe(0);
   });
 

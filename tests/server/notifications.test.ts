@@ -40,9 +40,11 @@ describe('sent messages API (the outbox)', () => {
   beforeEach(resetDatabase);
   const list = (orgId: string) => `/api/v1/organizations/${orgId}/notifications`;
 
-  it('messages — 401 without sign-in', async () => {
+  it('messages — 401 without sign-in (list and one message)', async () => {
     const org = await createOrganization();
+    const { a } = await outbox(org.id);
     expect((await request(app).get(list(org.id))).status).toBe(401);
+    expect((await request(app).get(`${list(org.id)}/${a.id}`)).status).toBe(401);
   });
 
   it('messages — 400 on a bad status filter', async () => {
@@ -64,12 +66,17 @@ describe('sent messages API (the outbox)', () => {
     expect((await agent.get(`${list(other.id)}/${a.id}`)).status).toBe(404);
   });
 
-  it('messages — 403 for technicians and operators', async () => {
+  it('messages — 403 for technicians and operators (list and one message); 400 for a bad id', async () => {
     const org = await createOrganization();
+    const { a } = await outbox(org.id);
     for (const role of ['technician', 'operator'] as const) {
       const { user } = await createMember(org, role);
-      expect((await (await signedInAgent(app, user)).get(list(org.id))).status).toBe(403);
+      const agent = await signedInAgent(app, user);
+      expect((await agent.get(list(org.id))).status).toBe(403);
+      expect((await agent.get(`${list(org.id)}/${a.id}`)).status).toBe(403);
     }
+    const { user } = await createMember(org, 'manager');
+    expect((await (await signedInAgent(app, user)).get(`${list(org.id)}/nope`)).status).toBe(400);
   });
 
   it('messages — 200: newest first with status, attempts and last error; counts; one message with its content', async () => {
@@ -103,6 +110,37 @@ describe('sent messages API (the outbox)', () => {
       html: '<p>HTML body</p>',
       status: 'queued',
     });
+  });
+
+  it('messages — the content of invitations (a single-use link that sets a password) and digest unsubscribe links are never shown', async () => {
+    const org = await createOrganization();
+    const invitation = await queueMessage({
+      organizationId: org.id,
+      recipient: 'new@test.example',
+      kind: 'invitation',
+      periodKey: 'inv-1',
+      subject: 'You are invited',
+      text: 'Open http://127.0.0.1/invitations/SECRET-TOKEN',
+      html: '<a href="http://127.0.0.1/invitations/SECRET-TOKEN">Join</a>',
+    });
+    const digest = await queueMessage({
+      organizationId: org.id,
+      recipient: 'tech@test.example',
+      kind: 'due_digest',
+      periodKey: 'daily:2026-04-07',
+      subject: 'Due list',
+      text: 'Stop these e-mails: http://127.0.0.1/api/v1/unsubscribe/abc.SIGNATURE',
+      html: '<a href="http://127.0.0.1/api/v1/unsubscribe/abc.SIGNATURE">Stop</a>',
+    });
+    const { user } = await createMember(org, 'manager');
+    const agent = await signedInAgent(app, user);
+    const inv = (await agent.get(`${list(org.id)}/${invitation!.id}`)).body.data;
+    expect(JSON.stringify(inv)).not.toContain('SECRET-TOKEN');
+    expect(inv.html).toBeNull();
+    expect(inv.text).toMatch(/not shown/);
+    const dig = (await agent.get(`${list(org.id)}/${digest!.id}`)).body.data;
+    expect(JSON.stringify(dig)).not.toContain('SIGNATURE');
+    expect(dig.text).toContain('/api/v1/unsubscribe/…');
   });
 });
 

@@ -16,9 +16,11 @@ import {
   Machine,
   MachineOperator,
   MeterReading,
+  ServiceRecord,
   ServiceTask,
   TaskDuePoint,
 } from '../../server/models';
+import { loadDemo } from '../../server/seeders/demo';
 import { addDaysIso, todayIso } from '../../shared/domain';
 
 const app = createApp();
@@ -121,8 +123,12 @@ describe('service records — completing', () => {
     const created = await s.agent.post(s.records).send(completed({ taskIds: [s.oil.id] }));
     expect(created.status).toBe(201);
     const id = created.body.data.id;
-    expect((await strangerAgent.get(`/api/v1/organizations/${s.org.id}/service-records/${id}`)).status).toBe(404);
-    expect((await strangerAgent.get(`/api/v1/organizations/${other.id}/service-records/${id}`)).status).toBe(404);
+    expect(
+      (await strangerAgent.get(`/api/v1/organizations/${s.org.id}/service-records/${id}`)).status,
+    ).toBe(404);
+    expect(
+      (await strangerAgent.get(`/api/v1/organizations/${other.id}/service-records/${id}`)).status,
+    ).toBe(404);
     const history = await opAgent.get(s.records);
     expect(history.status).toBe(200);
     expect(history.body.abilities).toEqual({ create: false });
@@ -156,23 +162,46 @@ describe('service records — completing', () => {
     });
     // parts prefilled from the tasks' lists, summed by part number (OF-100 appears in both)
     expect(data.parts).toEqual([
-      { partNumber: 'OF-100', description: 'Oil filter', quantity: 2, unitCost: null, lineCost: null },
-      { partNumber: 'HF-200', description: 'Hydraulic filter', quantity: 2, unitCost: null, lineCost: null },
+      {
+        partNumber: 'OF-100',
+        description: 'Oil filter',
+        quantity: 2,
+        unitCost: null,
+        lineCost: null,
+      },
+      {
+        partNumber: 'HF-200',
+        description: 'Hydraulic filter',
+        quantity: 2,
+        unitCost: null,
+        lineCost: null,
+      },
     ]);
     expect(data.fluids).toEqual([
       { kind: 'Engine oil 15W-40', volume: 18, unit: 'L', unitCost: null, lineCost: null },
     ]);
-    expect(data.costs).toEqual({ parts: 0, fluids: 0, other: 12.5, total: 12.5, linesWithoutCost: 3 });
-    expect(res.body.resets.map((r: { name: string; reset: boolean }) => [r.name, r.reset])).toEqual([
-      ['Engine oil and filter', true],
-      ['Hydraulic filters', true],
-    ]);
+    expect(data.costs).toEqual({
+      parts: 0,
+      fluids: 0,
+      other: 12.5,
+      total: 12.5,
+      linesWithoutCost: 3,
+    });
+    expect(res.body.resets.map((r: { name: string; reset: boolean }) => [r.name, r.reset])).toEqual(
+      [
+        ['Engine oil and filter', true],
+        ['Hydraulic filters', true],
+      ],
+    );
     for (const id of [s.oil.id, s.hydraulic.id]) {
       const t = (await ServiceTask.findByPk(id))!;
       expect([t.lastDoneMeter, t.lastDoneOn]).toEqual([1200, today()]);
     }
     const air = (await ServiceTask.findByPk(s.air.id))!;
-    expect([air.lastDoneMeter, air.lastDoneOn]).toEqual([airBefore.lastDoneMeter, airBefore.lastDoneOn]);
+    expect([air.lastDoneMeter, air.lastDoneOn]).toEqual([
+      airBefore.lastDoneMeter,
+      airBefore.lastDoneOn,
+    ]);
     const due = (await TaskDuePoint.findByPk(s.oil.id))!.due;
     expect(due.dueMeter).toBe(1450);
     const reading = (await MeterReading.findOne({ where: { source: 'service' } }))!;
@@ -261,9 +290,11 @@ describe('service records — completing', () => {
 
   it('service record — a record for an earlier visit leaves a task already done later as it is', async () => {
     const s = await shop();
-    const res = await s.agent.post(s.records).send(
-      completed({ performedOn: daysAgoIso(35), meterValue: 1020, taskIds: [s.oil.id, s.air.id] }),
-    );
+    const res = await s.agent
+      .post(s.records)
+      .send(
+        completed({ performedOn: daysAgoIso(35), meterValue: 1020, taskIds: [s.oil.id, s.air.id] }),
+      );
     expect(res.status).toBe(201);
     const resets = Object.fromEntries(
       res.body.resets.map((r: { name: string; reset: boolean }) => [r.name, r.reset]),
@@ -351,8 +382,17 @@ describe('service records — plans, history, measurements, shop week', () => {
       technicianIds: [s.tech.id],
     });
     expect(plan.status).toBe(201);
-    expect(plan.body.data).toMatchObject({ status: 'planned', performedOn: null, meterValue: null });
-    expect(plan.body.abilities).toEqual({ update: true, complete: true, cancel: true, attach: true });
+    expect(plan.body.data).toMatchObject({
+      status: 'planned',
+      performedOn: null,
+      meterValue: null,
+    });
+    expect(plan.body.abilities).toEqual({
+      update: true,
+      complete: true,
+      cancel: true,
+      attach: true,
+    });
     expect(await countRows('meter_readings')).toBe(3);
     expect((await ServiceTask.findByPk(s.oil.id))!.lastDoneMeter).toBe(1000);
     const noDate = await s.agent.post(s.records).send({ status: 'planned' });
@@ -360,15 +400,25 @@ describe('service records — plans, history, measurements, shop week', () => {
     expect(noDate.body.error.fields.plannedFor).toBe('Give the date it is booked for');
 
     const url = `${s.base}/service-records/${plan.body.data.id}`;
-    const done = await s.agent.post(`${url}/complete`).send({ performedOn: today(), meterValue: 1205 });
+    const done = await s.agent
+      .post(`${url}/complete`)
+      .send({ performedOn: today(), meterValue: 1205 });
     expect(done.status).toBe(200);
     expect(done.body.resets.every((r: { reset: boolean }) => r.reset)).toBe(true);
     expect((await ServiceTask.findByPk(s.hydraulic.id))!.lastDoneMeter).toBe(1205);
-    const again = await s.agent.post(`${url}/complete`).send({ performedOn: today(), meterValue: 1206 });
+    const again = await s.agent
+      .post(`${url}/complete`)
+      .send({ performedOn: today(), meterValue: 1206 });
     expect(again.status).toBe(409);
     const edit = await s.agent.patch(url).send({ taskIds: [s.air.id] });
     expect(edit.status).toBe(422);
     expect(edit.body.error.fields.taskIds).toMatch(/cannot change/);
+    // the whole form sent back with the tasks unchanged is fine: only the notes change
+    const same = await s.agent
+      .patch(url)
+      .send({ taskIds: [s.hydraulic.id, s.oil.id], notes: 'Filters from the van stock' });
+    expect(same.status).toBe(200);
+    expect(same.body.data.notes).toBe('Filters from the van stock');
     const cancel = await s.agent.post(`${url}/cancel`);
     expect(cancel.status).toBe(409);
   });
@@ -379,13 +429,21 @@ describe('service records — plans, history, measurements, shop week', () => {
     expect(
       (
         await post(
-          completed({ performedOn: daysAgoIso(30), meterValue: 1050, taskIds: [s.air.id], notes: 'Outer element replaced' }),
+          completed({
+            performedOn: daysAgoIso(30),
+            meterValue: 1050,
+            taskIds: [s.air.id],
+            notes: 'Outer element replaced',
+          }),
         )
       ).status,
     ).toBe(201);
     expect(
-      (await post(completed({ performedOn: daysAgoIso(10), meterValue: 1150, taskIds: [s.hydraulic.id] })))
-        .status,
+      (
+        await post(
+          completed({ performedOn: daysAgoIso(10), meterValue: 1150, taskIds: [s.hydraulic.id] }),
+        )
+      ).status,
     ).toBe(201);
     expect((await post(completed({ taskIds: [s.oil.id], notes: 'Routine' }))).status).toBe(201);
     const all = await s.agent.get(s.records);
@@ -420,7 +478,10 @@ describe('service records — plans, history, measurements, shop week', () => {
     );
     expect(first.status).toBe(201);
     expect(
-      first.body.data.measurements.map((m: { inSpec: boolean; specStatus: string }) => [m.inSpec, m.specStatus]),
+      first.body.data.measurements.map((m: { inSpec: boolean; specStatus: string }) => [
+        m.inSpec,
+        m.specStatus,
+      ]),
     ).toEqual([
       [true, 'in'],
       [true, 'in'],
@@ -435,9 +496,9 @@ describe('service records — plans, history, measurements, shop week', () => {
     );
     expect(second.body.data.measurements[0]).toMatchObject({ inSpec: false, specStatus: 'low' });
     expect(second.body.data.measurements[1]).toMatchObject({ inSpec: null, specStatus: null });
-    const badSpec = await s.agent.post(s.records).send(
-      completed({ measurements: [{ name: 'Torque', value: 1, specMin: 5, specMax: 2 }] }),
-    );
+    const badSpec = await s.agent
+      .post(s.records)
+      .send(completed({ measurements: [{ name: 'Torque', value: 1, specMin: 5, specMax: 2 }] }));
     expect(badSpec.status).toBe(400);
     expect(badSpec.body.error.fields['measurements.0.specMax']).toMatch(/not be below/);
 
@@ -501,7 +562,10 @@ describe('service records — plans, history, measurements, shop week', () => {
     const day = data.days[3];
     expect(day.date).toBe(planFor);
     expect(day.planned).toHaveLength(1);
-    expect(day.planned[0]).toMatchObject({ estimatedLabourHours: 1.75, machine: { fleetNumber: 'T-01' } });
+    expect(day.planned[0]).toMatchObject({
+      estimatedLabourHours: 1.75,
+      machine: { fleetNumber: 'T-01' },
+    });
     expect(day.partsToPull).toEqual([
       { partNumber: 'HF-200', description: 'Hydraulic filter', quantity: 2 },
       { partNumber: 'OF-100', description: 'Oil filter', quantity: 2 },
@@ -510,13 +574,18 @@ describe('service records — plans, history, measurements, shop week', () => {
     // every due row sits on the day its stored due point falls due
     const stored = await TaskDuePoint.findAll({ where: { organizationId: s.org.id } });
     const inWeek = stored.filter(
-      (d) => d.due.effectiveDate && d.due.effectiveDate >= monday && d.due.effectiveDate <= data.end,
+      (d) =>
+        d.due.effectiveDate && d.due.effectiveDate >= monday && d.due.effectiveDate <= data.end,
     );
-    const listed = data.days.flatMap((d: { date: string; due: { taskId: string; due: { effectiveDate: string }; booked: unknown }[] }) =>
-      d.due.map((r) => {
-        expect(r.due.effectiveDate).toBe(d.date);
-        return r.taskId;
-      }),
+    const listed = data.days.flatMap(
+      (d: {
+        date: string;
+        due: { taskId: string; due: { effectiveDate: string }; booked: unknown }[];
+      }) =>
+        d.due.map((r) => {
+          expect(r.due.effectiveDate).toBe(d.date);
+          return r.taskId;
+        }),
     );
     expect(listed.sort()).toEqual(inWeek.map((d) => d.taskId).sort());
     expect(listed).toContain(inspection.id);
@@ -533,11 +602,17 @@ describe('service records — plans, history, measurements, shop week', () => {
   it('service record — an operator cannot see the records of a machine they are not assigned to', async () => {
     const s = await shop();
     const { user: other } = await createMember(s.org, 'operator');
-    await MachineOperator.create({ organizationId: s.org.id, machineId: s.machine.id, userId: other.id });
+    await MachineOperator.create({
+      organizationId: s.org.id,
+      machineId: s.machine.id,
+      userId: other.id,
+    });
     const created = await s.agent.post(s.records).send(completed());
     const opAgent = await signedInAgent(app, s.op);
     expect((await opAgent.get(s.records)).status).toBe(404);
-    expect((await opAgent.get(`${s.base}/service-records/${created.body.data.id}`)).status).toBe(404);
+    expect((await opAgent.get(`${s.base}/service-records/${created.body.data.id}`)).status).toBe(
+      404,
+    );
     const assigned = await signedInAgent(app, other);
     expect((await assigned.get(s.records)).status).toBe(200);
   });
@@ -583,13 +658,21 @@ describe('service records — attachments', () => {
     const s = await withRecord();
     const photo = await s.agent.post(s.url).attach('file', await png(), 'gauge.png');
     expect(photo.status).toBe(201);
-    expect(photo.body.data).toMatchObject({ kind: 'image', contentType: 'image/webp', fileName: 'gauge.webp' });
+    expect(photo.body.data).toMatchObject({
+      kind: 'image',
+      contentType: 'image/webp',
+      fileName: 'gauge.webp',
+    });
     const thumb = await s.agent.get(photo.body.data.thumbnailUrl).buffer(true).parse(binary);
     expect(thumb.status).toBe(200);
     expect((await sharp(thumb.body as Buffer).metadata()).width).toBe(320);
     const sheet = await s.agent.post(s.url).attach('file', pdf(), 'pressure test.pdf');
     expect(sheet.status).toBe(201);
-    expect(sheet.body.data).toMatchObject({ kind: 'pdf', thumbnailUrl: null, fileName: 'pressure test.pdf' });
+    expect(sheet.body.data).toMatchObject({
+      kind: 'pdf',
+      thumbnailUrl: null,
+      fileName: 'pressure test.pdf',
+    });
     const got = await s.agent.get(sheet.body.data.url).buffer(true).parse(binary);
     expect(got.status).toBe(200);
     expect(got.headers['content-type']).toBe('application/pdf');
@@ -608,9 +691,10 @@ describe('service records — attachments', () => {
 
   it('attachments — the type is checked by content: a text file named .pdf is refused (422 on file); nothing stored', async () => {
     const s = await withRecord();
-    const res = await s.agent
-      .post(s.url)
-      .attach('file', Buffer.from('an invoice, honestly'), { filename: 'invoice.pdf', contentType: 'application/pdf' });
+    const res = await s.agent.post(s.url).attach('file', Buffer.from('an invoice, honestly'), {
+      filename: 'invoice.pdf',
+      contentType: 'application/pdf',
+    });
     expect(res.status).toBe(422);
     expect(res.body.error.fields.file).toMatch(/attach a photo .* or a PDF/);
     const zip = await s.agent
@@ -642,5 +726,47 @@ describe('service records — attachments', () => {
     // the same ids under the stranger's own organization find nothing either
     const own = up.body.data.url.replace(s.org.id, other.id);
     expect((await strangerAgent.get(own)).status).toBe(404);
+  });
+});
+
+describe('demo scenario — service history', () => {
+  beforeEach(resetDatabase);
+
+  it("demo — each task's latest completed record is its last-done point; statuses keep a few overdue and due soon", async () => {
+    await loadDemo({ reset: true });
+    const [tasks, records] = await Promise.all([
+      ServiceTask.findAll(),
+      ServiceRecord.findAll({ where: { status: 'completed' } }),
+    ]);
+    expect(records.length).toBeGreaterThan(50);
+    const latest = new Map<string, { performedOn: string; meterLifetime: number }>();
+    for (const r of records)
+      for (const t of r.tasks) {
+        const seen = latest.get(t.taskId);
+        if (!seen || r.performedOn! > seen.performedOn)
+          latest.set(t.taskId, { performedOn: r.performedOn!, meterLifetime: r.meterLifetime! });
+      }
+    expect(latest.size).toBeGreaterThan(40);
+    for (const task of tasks) {
+      const last = latest.get(task.id);
+      if (!last) continue;
+      expect([task.name, last.performedOn, last.meterLifetime]).toEqual([
+        task.name,
+        task.lastDoneOn,
+        task.lastDoneMeter,
+      ]);
+    }
+    const statuses = (await TaskDuePoint.findAll()).map((d) => d.status);
+    const count = (s: string) => statuses.filter((x) => x === s).length;
+    expect(count('overdue')).toBeGreaterThanOrEqual(3);
+    expect(count('due_soon')).toBeGreaterThanOrEqual(3);
+    expect(count('ok')).toBeGreaterThan(statuses.length / 2);
+    const tagged = await Machine.findAll({ where: { status: 'tagged_out' } });
+    expect(tagged.map((m) => m.fleetNumber)).toEqual(['T-03']);
+    expect(
+      await Defect.count({
+        where: { machineId: tagged[0].id, severity: 'critical', status: 'open' },
+      }),
+    ).toBe(1);
   });
 });

@@ -43,7 +43,11 @@ const machineParams = orgParams.extend({ machineId: z.uuid() });
 const defectParams = orgParams.extend({ defectId: z.uuid() });
 const shopOnly = 'Only a technician or manager handles defects';
 
-const abilitiesSchema = z.object({ update: z.boolean(), close: z.boolean() });
+const abilitiesSchema = z.object({
+  update: z.boolean(),
+  close: z.boolean(),
+  clearTagOut: z.boolean(),
+});
 const listResponse = z.object({
   data: z.array(defectSchema),
   meta: z.object({

@@ -65,6 +65,8 @@ export async function launchBrowser(): Promise<TestBrowser> {
 
 /** Signs in through the sign-in form, as a person would, and waits to leave /sign-in. */
 export async function signIn(page: Page, email: string, password: string): Promise<void> {
+  // The profile is shared by every page of the run: start each sign-in signed out.
+  await page.context().clearCookies();
   if (!new URL(page.url(), baseUrl).pathname.startsWith('/sign-in')) {
     await page.goto(`${baseUrl}/sign-in`);
   }

@@ -7,8 +7,10 @@ import type {
 import type { DueStatus } from '../../../../shared/domain/types';
 
 export interface LastReading {
-  /** lifetime meter value */
+  /** the value shown on the meter fitted now */
   value: number;
+  /** the same reading on the machine's lifetime scale (differs after a meter replacement) */
+  lifetimeValue: number;
   takenAt: string;
 }
 
