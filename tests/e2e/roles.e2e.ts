@@ -94,7 +94,7 @@ describe('sign-in and navigation by role (browser)', () => {
         const page = await browser.newPage(viewport);
         await signIn(page, r.who, PASSWORD);
         expect(await navLabels(page)).toEqual([...r.nav]);
-        await page.getByText(r.org).first().waitFor({ state: 'visible' });
+        await page.locator('main').getByText(r.org).first().waitFor({ state: 'visible' });
         await screenshot(page, `roles-${label}-${r.role}-${r.who.split('@')[0]}`);
         await signOut(page);
         await page.close();
