@@ -44,6 +44,29 @@ export const paths = {
       path: '/o/:orgId/machines/:machineId',
       href: (orgId: string, machineId: string) => `/o/${q(orgId)}/machines/${q(machineId)}`,
     },
+    machineLabel: {
+      path: '/o/:orgId/machines/:machineId/label',
+      href: (orgId: string, machineId: string) =>
+        `/o/${q(orgId)}/machines/${q(machineId)}/label`,
+    },
+    walkaroundPick: {
+      path: '/o/:orgId/walkaround',
+      href: (orgId: string) => `/o/${q(orgId)}/walkaround`,
+    },
+    walkaround: {
+      path: '/o/:orgId/walkaround/:machineId',
+      href: (orgId: string, machineId: string) => `/o/${q(orgId)}/walkaround/${q(machineId)}`,
+    },
+    defects: {
+      path: '/o/:orgId/defects',
+      /** `machineId`: show one machine's defects */
+      href: (orgId: string, machineId?: string) =>
+        `/o/${q(orgId)}/defects${machineId ? `?machineId=${q(machineId)}` : ''}`,
+    },
+    checklists: {
+      path: '/o/:orgId/checklists',
+      href: (orgId: string) => `/o/${q(orgId)}/checklists`,
+    },
   },
   devMail: {
     path: '/dev/mail',

@@ -2,37 +2,11 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
 import { dueListQuerySchema } from '../../../shared/schemas/readings';
-import { duePointSchema, lastReadingSchema } from '../../presenters/machine';
+import { dueRowSchema } from '../../presenters/due';
 import { dueList } from '../../services/due-list';
 import { loadMachine } from '../../services/machines';
 
 const orgParams = z.object({ orgId: z.uuid() });
-
-const dueRowSchema = z
-  .object({
-    taskId: z.string(),
-    taskName: z.string(),
-    hazards: z.array(z.string()),
-    labourHours: z.number().nullable(),
-    machine: z.object({
-      id: z.string(),
-      fleetNumber: z.string(),
-      name: z.string(),
-      category: z.string(),
-      status: z.string(),
-      meterUnit: z.string(),
-    }),
-    due: duePointSchema,
-    lastReading: lastReadingSchema.nullable(),
-    dueOnMeter: z
-      .number()
-      .nullable()
-      .openapi({ description: 'the due value as the meter fitted now shows it' }),
-    usage: z
-      .object({ method: z.string(), rate: z.number(), low: z.number(), high: z.number() })
-      .nullable(),
-  })
-  .openapi('DueRow');
 
 const dueResponse = z.object({
   data: z.array(dueRowSchema),

@@ -12,7 +12,7 @@ import { measurementNames, measurementSeries } from '../../services/service-reco
 import { shopWeek } from '../../services/shop-week';
 import { machineRefSchema } from '../../presenters/defect';
 import { personSchema } from '../../presenters/people';
-import { duePointSchema } from '../../presenters/machine';
+import { dueRowSchema } from '../../presenters/due';
 import { specStatus } from '../../presenters/service-record';
 import { registerServiceRecordRoutes, machineParams, orgParams } from './service-records.router';
 import { registerAttachmentRoutes } from './attachments.router';
@@ -22,24 +22,7 @@ const partsToPull = z.array(
 );
 const fluidsToPull = z.array(z.object({ kind: z.string(), unit: z.string(), volume: z.number() }));
 // The due list's row (as GET …/due answers it), with the plan that covers the task, if any.
-const bookedDueRow = z.object({
-  taskId: z.string(),
-  taskName: z.string(),
-  hazards: z.array(z.string()),
-  labourHours: z.number().nullable(),
-  machine: z.object({
-    id: z.string(),
-    fleetNumber: z.string(),
-    name: z.string(),
-    category: z.string(),
-    status: z.string(),
-    meterUnit: z.string(),
-  }),
-  due: duePointSchema,
-  lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
-  usage: z
-    .object({ method: z.string(), rate: z.number(), low: z.number(), high: z.number() })
-    .nullable(),
+const bookedDueRow = dueRowSchema.extend({
   booked: z.object({ recordId: z.string(), plannedFor: z.string() }).nullable(),
 });
 

@@ -8,7 +8,7 @@ import { PageSkeleton } from '../../../components/ui/skeleton';
 import { isApiError } from '../../../lib/api-client';
 import { formatDateTime } from '../../../lib/format';
 import { useMessage } from '../api/get-message';
-import { MessageBody } from './message-body';
+import { MessageBody } from '../../../components/ui/message-body';
 import { kindLabel } from './message-list';
 import { MessageStatusBadge } from './message-status-badge';
 

@@ -1,52 +1,42 @@
-import { Fragment, useState } from 'react';
-import { cx } from '../../../components/ui/cx';
+import { useState } from 'react';
+import { cx } from './cx';
+import { LinkifiedText } from './linkified-text';
 
-const URL_PATTERN = /(https?:\/\/[^\s<>"')\]]+)/g;
+type View = 'html' | 'text';
 
-// The HTML part is markup we generated but still render it like mail: in a sandboxed frame with
-// no scripts and no access to this page; links open in a new tab.
-const SANDBOX = 'allow-popups allow-popups-to-escape-sandbox';
-const framed = (html: string) => `<!doctype html><base target="_blank">${html}`;
+// The HTML part renders like mail: in a sandboxed frame with no scripts and no access to this
+// page. `same-tab` lets a click on its links navigate this tab (the caught-mail page, where following
+// invitation and reset links is the point); `new-tab` opens them beside the app.
+const SANDBOX = {
+  'same-tab': 'allow-popups allow-popups-to-escape-sandbox allow-top-navigation-by-user-activation',
+  'new-tab': 'allow-popups allow-popups-to-escape-sandbox',
+} as const;
+const framed = (html: string, target: '_top' | '_blank') =>
+  `<!doctype html><base target="${target}">${html}`;
 
-function LinkedText({ text }: { text: string }) {
-  const parts = text.split(URL_PATTERN);
-  return (
-    <pre className="font-sans text-base break-words whitespace-pre-wrap text-field-900">
-      {parts.map((part, index) =>
-        index % 2 === 1 ? (
-          <a
-            key={index}
-            href={part}
-            className="font-bold break-all text-sky-700 underline underline-offset-2"
-          >
-            {part}
-          </a>
-        ) : (
-          <Fragment key={index}>{part}</Fragment>
-        ),
-      )}
-    </pre>
-  );
-}
-
-/** A message's content: plain text (links live), or the formatted HTML part as the person saw it. */
+/** A message's content: plain text with live links, or its formatted HTML part, with a switch. */
 export function MessageBody({
   subject,
   text,
   html,
+  defaultView = 'text',
+  links = 'new-tab',
 }: {
   subject: string;
   text: string;
   html: string | null;
+  defaultView?: View;
+  links?: keyof typeof SANDBOX;
 }) {
-  const [view, setView] = useState<'text' | 'html'>('text');
-  const shown = html ? view : 'text';
+  const [view, setView] = useState<View>(defaultView);
+  const shown: View = html ? view : 'text';
+  const options: View[] = defaultView === 'html' ? ['html', 'text'] : ['text', 'html'];
   return (
     <div className="flex flex-col gap-3">
       {html ? (
         <fieldset className="flex gap-2">
           <legend className="sr-only">Show the message as</legend>
-          {(['text', 'html'] as const).map((option) => (
+          {options.map((option) => (
             <label
               key={option}
               className={cx(
@@ -72,13 +62,13 @@ export function MessageBody({
       {shown === 'html' && html ? (
         <iframe
           title={`Message: ${subject}`}
-          sandbox={SANDBOX}
-          srcDoc={framed(html)}
+          sandbox={SANDBOX[links]}
+          srcDoc={framed(html, links === 'same-tab' ? '_top' : '_blank')}
           className="h-[60dvh] w-full rounded-lg border border-field-200 bg-white"
         />
       ) : (
         <div className="rounded-lg border border-field-200 bg-oat-50 p-4">
-          <LinkedText text={text} />
+          <LinkifiedText text={text} />
         </div>
       )}
     </div>
