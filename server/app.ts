@@ -21,6 +21,7 @@ import { walkaroundsRouter } from './routes/walkarounds/walkarounds.router';
 import { defectsRouter } from './routes/defects/defects.router';
 import { notificationsRouter } from './routes/notifications/notifications.router';
 import { calendarRouter } from './routes/calendar/calendar.router';
+import { dealersRouter } from './routes/dealers/dealers.router';
 import './models';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -76,6 +77,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(defectsRouter());
   api.use(notificationsRouter());
   api.use(calendarRouter());
+  api.use(dealersRouter());
   api.use(devRouter());
   api.use(notFoundHandler);
   app.use('/api/v1', api);

@@ -16,6 +16,8 @@ import { MachineForecast, TaskDuePoint } from './machine-forecast';
 import { ServiceAttachment, ServiceMeasurement, ServiceRecord } from './service-record';
 import { ChecklistTemplate, Walkaround, WalkaroundPhoto } from './walkaround';
 import { Defect } from './defect';
+import { DealerLink } from './dealer-link';
+import { ServiceBooking } from './service-booking';
 
 Membership.belongsTo(Organization, { foreignKey: 'organizationId', as: 'organization' });
 Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
@@ -26,6 +28,8 @@ Machine.hasMany(MachineOperator, { foreignKey: 'machineId', as: 'operators' });
 Machine.hasOne(MachineForecast, { foreignKey: 'machineId', as: 'forecast' });
 ServiceTask.belongsTo(Machine, { foreignKey: 'machineId', as: 'machine' });
 ServiceTask.hasOne(TaskDuePoint, { foreignKey: 'taskId', as: 'duePoint' });
+DealerLink.belongsTo(Organization, { foreignKey: 'dealerOrganizationId', as: 'dealer' });
+DealerLink.belongsTo(Organization, { foreignKey: 'farmOrganizationId', as: 'farm' });
 
 export {
   Organization,
@@ -52,4 +56,6 @@ export {
   Walkaround,
   WalkaroundPhoto,
   Defect,
+  DealerLink,
+  ServiceBooking,
 };

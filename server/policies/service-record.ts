@@ -1,14 +1,17 @@
 import type { Machine, ServiceRecord } from '../models';
-import { hasRole, type OrgAccess } from './access';
+import { dealerHas, hasRole, type OrgAccess } from './access';
 
 /**
- * The people who do a farm's shop work: its managers and technicians. A dealer holding a `service`
- * link (issue 6) joins here, so every service and defect policy below follows without edits.
+ * The people who do a farm's shop work: its managers and technicians, and a dealer holding a
+ * `service` link, so every service and defect policy below follows without edits. (Which routes
+ * a dealer reaches at all is listed in policies/dealer-link.ts.)
  */
-export const isShop = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
+export const isShop = (access: OrgAccess) =>
+  hasRole(access, 'manager', 'technician') || dealerHas(access, 'service');
 
-/** Anyone who may see the machine sees its service history (operators included). */
-export const canViewServiceRecords = (_access: OrgAccess, _machine: Machine) => true;
+/** Anyone on the farm who may see the machine sees its history; a dealer only with `service`. */
+export const canViewServiceRecords = (access: OrgAccess, _machine: Machine) =>
+  access.via === 'member' || dealerHas(access, 'service');
 export const canRecordService = (access: OrgAccess, machine: Machine) =>
   isShop(access) && machine.status !== 'sold';
 export const canUpdateServiceRecord = (access: OrgAccess, record: ServiceRecord) =>

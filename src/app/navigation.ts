@@ -1,4 +1,4 @@
-import { ROLES, type Role } from '../../shared/constants';
+import type { Role } from '../../shared/constants';
 import type { IconName } from '../components/ui/icons';
 import { paths } from './paths';
 
@@ -10,39 +10,66 @@ export interface NavItem {
   end?: boolean;
 }
 
-interface NavEntry extends NavItem {
-  roles: readonly Role[];
-}
-
-const everyone = ROLES;
 const org = paths.organization;
 
-// The whole main navigation, in display order: one line per item, with the roles that see it.
-// The server still checks every request; this only decides what is offered.
-const NAV_ENTRIES: readonly NavEntry[] = [
-  { label: 'Dashboard', to: org.dashboard.href, icon: 'gauge', roles: everyone, end: true },
-  {
-    label: 'Fleet',
-    to: org.machines.href,
-    icon: 'field',
-    roles: ['manager', 'technician', 'operator'],
-  },
-  {
-    label: 'Log hours',
-    to: (orgId: string) => org.logHours.href(orgId),
-    icon: 'clock',
-    roles: ['manager', 'technician', 'operator'],
-  },
-  { label: 'Team', to: org.team.href, icon: 'team', roles: ['manager'] },
-  {
-    label: 'Reminders',
-    to: org.reminders.href,
-    icon: 'mail',
-    roles: ['manager', 'technician', 'operator'],
-  },
-  { label: 'Messages', to: org.messages.href, icon: 'external', roles: ['manager'] },
-  { label: 'Account', to: org.account.href, icon: 'person', roles: everyone },
-];
+type ItemId =
+  | 'dashboard'
+  | 'walkaround'
+  | 'fleet'
+  | 'logHours'
+  | 'defects'
+  | 'shopWeek'
+  | 'team'
+  | 'reminders'
+  | 'messages'
+  | 'checklists'
+  | 'account';
+
+// Every item of the main navigation once. The server still checks every request; this only
+// decides what is offered.
+const ITEMS: Record<ItemId, NavItem> = {
+  dashboard: { label: 'Dashboard', to: org.dashboard.href, icon: 'gauge', end: true },
+  walkaround: { label: 'Walkaround', to: org.walkaroundPick.href, icon: 'check' },
+  fleet: { label: 'Fleet', to: org.machines.href, icon: 'field' },
+  logHours: { label: 'Log hours', to: (orgId: string) => org.logHours.href(orgId), icon: 'clock' },
+  defects: { label: 'Defects', to: (orgId: string) => org.defects.href(orgId), icon: 'alert' },
+  shopWeek: { label: 'Shop week', to: shopWeekHref, icon: 'refresh' },
+  team: { label: 'Team', to: org.team.href, icon: 'team' },
+  reminders: { label: 'Reminders', to: org.reminders.href, icon: 'mail' },
+  messages: { label: 'Messages', to: org.messages.href, icon: 'external' },
+  checklists: { label: 'Checklists', to: org.checklists.href, icon: 'info' },
+  account: { label: 'Account', to: org.account.href, icon: 'person' },
+};
+
+// Per role, most used first: on a phone the first four sit in the bottom bar and the rest go
+// under "More" (components/layouts/main-nav.tsx), so the order decides what is one tap away.
+const ORDER: Record<Role, readonly ItemId[]> = {
+  operator: ['walkaround', 'logHours', 'fleet', 'dashboard', 'defects', 'reminders', 'account'],
+  technician: [
+    'dashboard',
+    'shopWeek',
+    'defects',
+    'fleet',
+    'logHours',
+    'walkaround',
+    'reminders',
+    'account',
+  ],
+  manager: [
+    'dashboard',
+    'fleet',
+    'logHours',
+    'defects',
+    'shopWeek',
+    'team',
+    'reminders',
+    'messages',
+    'checklists',
+    'walkaround',
+    'account',
+  ],
+  advisor: ['dashboard', 'account'],
+};
 
 /** role → the items that role sees, in order */
 export const navigationByRole: Record<Role, readonly NavItem[]> = {
@@ -53,5 +80,10 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
 };
 
 function itemsFor(role: Role): readonly NavItem[] {
-  return NAV_ENTRIES.filter((entry) => entry.roles.includes(role));
+  return ORDER[role].map((id) => ITEMS[id]);
+}
+
+// TODO(shop week): use paths.organization.shopWeek.href once the shop week page's path lands.
+function shopWeekHref(orgId: string): string {
+  return `/o/${encodeURIComponent(orgId)}/shop`;
 }

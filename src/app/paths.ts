@@ -44,10 +44,44 @@ export const paths = {
       path: '/o/:orgId/machines/:machineId',
       href: (orgId: string, machineId: string) => `/o/${q(orgId)}/machines/${q(machineId)}`,
     },
+    serviceRecordNew: {
+      path: '/o/:orgId/machines/:machineId/services/new',
+      /**
+       * `taskIds`: tasks to preselect; `plan`: book a plan instead of recording a visit (`on`: the
+       * date to book, yyyy-mm-dd); `complete`: the id of a plan to complete
+       */
+      href: (
+        orgId: string,
+        machineId: string,
+        options: {
+          taskIds?: readonly string[];
+          plan?: boolean;
+          on?: string | null;
+          complete?: string;
+        } = {},
+      ) => {
+        const search = new URLSearchParams();
+        if (options.taskIds?.length) search.set('taskIds', options.taskIds.join(','));
+        if (options.plan) search.set('plan', '1');
+        if (options.plan && options.on) search.set('on', options.on);
+        if (options.complete) search.set('complete', options.complete);
+        const query = search.toString();
+        return `/o/${q(orgId)}/machines/${q(machineId)}/services/new${query ? `?${query}` : ''}`;
+      },
+    },
+    serviceRecord: {
+      path: '/o/:orgId/service-records/:recordId',
+      href: (orgId: string, recordId: string) => `/o/${q(orgId)}/service-records/${q(recordId)}`,
+    },
+    shopWeek: {
+      path: '/o/:orgId/shop',
+      /** `start`: the Monday of the week to show (yyyy-mm-dd); none: this week */
+      href: (orgId: string, start?: string) =>
+        `/o/${q(orgId)}/shop${start ? `?start=${q(start)}` : ''}`,
+    },
     machineLabel: {
       path: '/o/:orgId/machines/:machineId/label',
-      href: (orgId: string, machineId: string) =>
-        `/o/${q(orgId)}/machines/${q(machineId)}/label`,
+      href: (orgId: string, machineId: string) => `/o/${q(orgId)}/machines/${q(machineId)}/label`,
     },
     walkaroundPick: {
       path: '/o/:orgId/walkaround',
@@ -55,7 +89,9 @@ export const paths = {
     },
     walkaround: {
       path: '/o/:orgId/walkaround/:machineId',
-      href: (orgId: string, machineId: string) => `/o/${q(orgId)}/walkaround/${q(machineId)}`,
+      /** `purpose` 'inspection': a shop check (technician, manager), allowed while tagged out */
+      href: (orgId: string, machineId: string, purpose?: 'use' | 'inspection') =>
+        `/o/${q(orgId)}/walkaround/${q(machineId)}${purpose === 'inspection' ? '?purpose=inspection' : ''}`,
     },
     defects: {
       path: '/o/:orgId/defects',

@@ -23,6 +23,12 @@ import { SentMessagesPage, sentMessagesLoader } from './routes/sent-messages';
 import { MachinePage, machineLoader } from './routes/machine';
 import { MachineNewPage } from './routes/machine-new';
 import { MachinesPage, machinesLoader } from './routes/machines';
+import { ServiceRecordPage, serviceRecordLoader } from './routes/service-record';
+import { ServiceRecordNewPage, serviceRecordNewLoader } from './routes/service-record-new';
+import { ShopWeekPage, shopWeekLoader } from './routes/shop-week';
+import { WalkaroundPickPage, walkaroundPickLoader } from './routes/walkaround-pick';
+import { WalkaroundPage, walkaroundLoader } from './routes/walkaround';
+import { WalkaroundOutboxSender } from '../features/walkarounds/components/outbox-sender';
 
 const home = paths.home.href();
 
@@ -46,7 +52,13 @@ export function createAppRouter(queryClient: QueryClient) {
         {
           path: paths.organization.dashboard.path,
           loader: organizationLoader(queryClient),
-          element: <OrganizationLayout />,
+          element: (
+            <>
+              {/* walkarounds saved on the phone go out as soon as the app runs online */}
+              <WalkaroundOutboxSender />
+              <OrganizationLayout />
+            </>
+          ),
           children: [
             {
               // errors of a page show inside the shell, so the navigation stays usable
@@ -69,6 +81,31 @@ export function createAppRouter(queryClient: QueryClient) {
                   path: paths.organization.machine.path,
                   loader: machineLoader(queryClient),
                   element: <MachinePage />,
+                },
+                {
+                  path: paths.organization.serviceRecordNew.path,
+                  loader: serviceRecordNewLoader(queryClient),
+                  element: <ServiceRecordNewPage />,
+                },
+                {
+                  path: paths.organization.serviceRecord.path,
+                  loader: serviceRecordLoader(queryClient),
+                  element: <ServiceRecordPage />,
+                },
+                {
+                  path: paths.organization.shopWeek.path,
+                  loader: shopWeekLoader(queryClient),
+                  element: <ShopWeekPage />,
+                },
+                {
+                  path: paths.organization.walkaroundPick.path,
+                  loader: walkaroundPickLoader(queryClient),
+                  element: <WalkaroundPickPage />,
+                },
+                {
+                  path: paths.organization.walkaround.path,
+                  loader: walkaroundLoader(queryClient),
+                  element: <WalkaroundPage />,
                 },
                 {
                   path: paths.organization.team.path,

@@ -12,31 +12,55 @@ import {
 const PASSWORD = 'hourstone-demo';
 const DESKTOP: Viewport = { width: 1280, height: 800 };
 
-// What each demo role is offered in the main navigation (SCENARIO.md people).
+// What each demo role is offered in the main navigation (SCENARIO.md people), most used first:
+// on a phone the first four are in the bottom bar and the rest behind "More".
+const MANAGER_NAV = [
+  'Dashboard',
+  'Fleet',
+  'Log hours',
+  'Defects',
+  'Shop week',
+  'Team',
+  'Reminders',
+  'Messages',
+  'Checklists',
+  'Walkaround',
+  'Account',
+] as const;
+
 const ROLES = [
   {
     who: 'marta@larkspur.example',
     role: 'manager',
     org: 'Larkspur Flats Farm',
-    nav: ['Dashboard', 'Fleet', 'Log hours', 'Team', 'Reminders', 'Messages', 'Account'],
+    nav: MANAGER_NAV,
   },
   {
     who: 'dev@larkspur.example',
     role: 'technician',
     org: 'Larkspur Flats Farm',
-    nav: ['Dashboard', 'Fleet', 'Log hours', 'Reminders', 'Account'],
+    nav: [
+      'Dashboard',
+      'Shop week',
+      'Defects',
+      'Fleet',
+      'Log hours',
+      'Walkaround',
+      'Reminders',
+      'Account',
+    ],
   },
   {
     who: 'lena@larkspur.example',
     role: 'operator',
     org: 'Larkspur Flats Farm',
-    nav: ['Dashboard', 'Fleet', 'Log hours', 'Reminders', 'Account'],
+    nav: ['Walkaround', 'Log hours', 'Fleet', 'Dashboard', 'Defects', 'Reminders', 'Account'],
   },
   {
     who: 'aoife@osiercreek.example',
     role: 'manager',
     org: 'Osier Creek Dairy',
-    nav: ['Dashboard', 'Fleet', 'Log hours', 'Team', 'Reminders', 'Messages', 'Account'],
+    nav: MANAGER_NAV,
   },
   {
     who: 'ravi@quillon.example',
@@ -46,9 +70,18 @@ const ROLES = [
   },
 ] as const;
 
+/** Opens the phone bar's "More" panel, when there is one, so every item is a link on the page. */
+async function openMore(page: Page) {
+  const more = page.getByRole('navigation', { name: 'Main' }).getByRole('button', { name: 'More' });
+  if ((await more.count()) === 0) return;
+  if ((await more.getAttribute('aria-expanded')) !== 'true') await more.click();
+  await page.locator(`[id="${await more.getAttribute('aria-controls')}"]`).waitFor();
+}
+
 async function navLabels(page: Page): Promise<string[]> {
   const nav = page.getByRole('navigation', { name: 'Main' });
   await nav.waitFor({ state: 'visible', timeout: 15000 });
+  await openMore(page);
   const links = nav.getByRole('link');
   const labels: string[] = [];
   for (let i = 0; i < (await links.count()); i++)
@@ -57,6 +90,7 @@ async function navLabels(page: Page): Promise<string[]> {
 }
 
 async function signOut(page: Page) {
+  await openMore(page);
   const account = page
     .getByRole('navigation', { name: 'Main' })
     .getByRole('link', { name: 'Account' });

@@ -4,6 +4,7 @@ import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { NotFound } from '../../components/errors/route-error';
 import { Section } from '../../components/ui/card';
 import { ErrorState } from '../../components/ui/error-state';
+import { buttonClasses } from '../../components/ui/button';
 import { Icon } from '../../components/ui/icons';
 import { PageHeader } from '../../components/ui/page-header';
 import { PageSkeleton } from '../../components/ui/skeleton';
@@ -15,6 +16,14 @@ import { MeterSection } from '../../features/machines/components/meter-section';
 import { ReadingsSection } from '../../features/machines/components/readings-section';
 import { tasksQueryOptions, useTasks } from '../../features/schedules/api/get-tasks';
 import { DueSection } from '../../features/schedules/components/due-section';
+import {
+  serviceEventsQueryOptions,
+  serviceHistoryQueryOptions,
+  useCanRecordService,
+  useServiceEvents,
+} from '../../features/services/api/get-service-history';
+import { MeasurementsSection } from '../../features/services/components/measurements-section';
+import { ServiceActions, ServiceHistory } from '../../features/services/components/service-history';
 import { isApiError } from '../../lib/api-client';
 import { useCurrentMembership } from '../../lib/auth';
 import { paths } from '../paths';
@@ -24,16 +33,20 @@ export const machineLoader =
   ({ params }: LoaderFunctionArgs) => {
     const orgId = params.orgId ?? '';
     const machineId = params.machineId ?? '';
-    // start all three at once; the page shows each part as it arrives
+    // start them all at once; the page shows each part as it arrives
     void queryClient.prefetchQuery(machineQueryOptions(orgId, machineId));
     void queryClient.prefetchQuery(tasksQueryOptions(orgId, machineId));
     void queryClient.prefetchQuery(readingsQueryOptions(orgId, machineId));
+    void queryClient.prefetchQuery(serviceHistoryQueryOptions(orgId, machineId));
+    void queryClient.prefetchQuery(serviceEventsQueryOptions(orgId, machineId));
     return null;
   };
 
 const SECTIONS = [
   { id: 'due', label: 'Due' },
+  { id: 'history', label: 'History' },
   { id: 'meter', label: 'Meter' },
+  { id: 'measurements', label: 'Measurements' },
   { id: 'readings', label: 'Readings' },
   { id: 'details', label: 'Details' },
 ] as const;
@@ -54,6 +67,9 @@ export function MachinePage() {
     [tasks.data],
   );
   const fleetHref = paths.organization.machines.href(orgId);
+  const canRecordService = useCanRecordService(orgId, machineId);
+  const serviceEvents = useServiceEvents(orgId, machineId);
+  const isShop = membership.role === 'manager' || membership.role === 'technician';
 
   if (machine.isPending) return <PageSkeleton label="Loading the machine" />;
   if (machine.isError) {
@@ -70,6 +86,10 @@ export function MachinePage() {
   }
 
   const { data: detail, abilities } = machine.data;
+  const org = paths.organization;
+  const defectsHref = org.defects.href(orgId, detail.id);
+  const recordHref = (taskIds?: string[]) =>
+    org.serviceRecordNew.href(orgId, detail.id, { taskIds });
 
   return (
     <>
@@ -85,9 +105,49 @@ export function MachinePage() {
         description={
           [detail.make, detail.model, detail.year].filter(Boolean).join(' · ') || undefined
         }
+        actions={
+          <ServiceActions
+            canCreate={canRecordService}
+            recordHref={recordHref()}
+            planHref={org.serviceRecordNew.href(orgId, detail.id, { plan: true })}
+          />
+        }
       />
       <div className="flex flex-col gap-8">
-        <MachineStatusPanel machine={detail} timeZone={timeZone} />
+        <MachineStatusPanel machine={detail} timeZone={timeZone} defectsHref={defectsHref} />
+
+        <ul aria-label="For this machine" className="-mt-4 flex flex-wrap gap-2">
+          {detail.status === 'in_service' || (detail.status === 'tagged_out' && isShop) ? (
+            <li>
+              <Link
+                to={org.walkaround.href(
+                  orgId,
+                  detail.id,
+                  detail.status === 'tagged_out' ? 'inspection' : 'use',
+                )}
+                className={buttonClasses('secondary')}
+              >
+                <Icon name="check" />
+                {detail.status === 'tagged_out' ? 'Inspection walkaround' : 'Daily walkaround'}
+              </Link>
+            </li>
+          ) : null}
+          <li>
+            <Link
+              to={org.machineLabel.href(orgId, detail.id)}
+              className={buttonClasses('secondary')}
+            >
+              <Icon name="external" />
+              Print label
+            </Link>
+          </li>
+          <li>
+            <Link to={defectsHref} className={buttonClasses('secondary')}>
+              <Icon name="alert" />
+              Defects
+            </Link>
+          </li>
+        </ul>
 
         <nav aria-label="On this page" className="-mt-2">
           <ul className="flex flex-wrap gap-2">
@@ -113,13 +173,42 @@ export function MachinePage() {
               orgId={orgId}
               machine={{ id: detail.id, category: detail.category, meterUnit: detail.meterUnit }}
               timeZone={timeZone}
+              recordServiceHref={canRecordService ? (taskId) => recordHref([taskId]) : undefined}
+            />
+          </Section>
+        </div>
+
+        <div id="history" className="scroll-mt-20">
+          <Section
+            title="Service history"
+            description="Visits done and booked, newest first. Open one for its parts, measurements and files."
+          >
+            <ServiceHistory
+              orgId={orgId}
+              machineId={detail.id}
+              recordHref={(recordId) => org.serviceRecord.href(orgId, recordId)}
             />
           </Section>
         </div>
 
         <div id="meter" className="scroll-mt-20">
           <Section title="Meter" description="Lifetime meter over time and the trend ahead.">
-            <MeterSection orgId={orgId} machine={detail} dues={dues} timeZone={timeZone} />
+            <MeterSection
+              orgId={orgId}
+              machine={detail}
+              dues={dues}
+              services={serviceEvents.data}
+              timeZone={timeZone}
+            />
+          </Section>
+        </div>
+
+        <div id="measurements" className="scroll-mt-20">
+          <Section
+            title="Measurements"
+            description="A reading taken at each service visit, against the manual's limits."
+          >
+            <MeasurementsSection orgId={orgId} machineId={detail.id} meterUnit={detail.meterUnit} />
           </Section>
         </div>
 

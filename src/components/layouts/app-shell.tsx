@@ -29,7 +29,7 @@ export function AppShell({ homeHref, navItems, headerEnd, children }: AppShellPr
   return (
     <div className="min-h-dvh">
       <SkipLink />
-      <header className="sticky top-0 z-40 border-b border-field-200 bg-oat-50/95 backdrop-blur">
+      <header className="sticky top-0 z-40 border-b border-field-200 bg-oat-50/95 backdrop-blur print:hidden">
         <div className="flex h-16 items-center gap-3 px-3 sm:px-5">
           <Link to={homeHref} className="flex min-h-touch items-center rounded-lg pr-1">
             <Brand compact />
@@ -39,16 +39,17 @@ export function AppShell({ homeHref, navItems, headerEnd, children }: AppShellPr
           </div>
         </div>
       </header>
-      <div className="sm:grid sm:grid-cols-[14rem_minmax(0,1fr)]">
+      {/* printing (a machine label) shows the page alone, without the frame */}
+      <div className="sm:grid sm:grid-cols-[14rem_minmax(0,1fr)] print:block">
         {/* the column carries the divider so it runs the page's full height */}
-        <div className="sm:border-r sm:border-field-200">
+        <div className="sm:border-r sm:border-field-200 print:hidden">
           <MainNav items={navItems} />
         </div>
         <main
           id="main"
           ref={mainRef}
           tabIndex={-1}
-          className="mx-auto w-full max-w-5xl px-4 pt-6 pb-28 focus:outline-none sm:px-8 sm:pt-8 sm:pb-12"
+          className="mx-auto w-full max-w-5xl px-4 pt-6 pb-28 focus:outline-none sm:px-8 sm:pt-8 sm:pb-12 print:max-w-none print:p-0"
         >
           {children}
         </main>

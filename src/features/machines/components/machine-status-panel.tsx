@@ -1,3 +1,4 @@
+import { Link } from 'react-router-dom';
 import { Alert } from '../../../components/ui/alert';
 import { DueStatusBadge, MachineStatusBadge } from '../../../components/ui/status-badges';
 import { formatLocalDate, formatRate } from '../../../lib/fleet-format';
@@ -8,9 +9,12 @@ import { MeterReadingSummary } from './meter-reading-summary';
 export function MachineStatusPanel({
   machine,
   timeZone,
+  defectsHref,
 }: {
   machine: MachineDetail['data'];
   timeZone: string;
+  /** the machine's defects, where a technician or manager clears a tag-out */
+  defectsHref?: string;
 }) {
   const { usage } = machine;
   return (
@@ -19,6 +23,14 @@ export function MachineStatusPanel({
         <Alert tone="error" title="Tagged out — do not use">
           This machine is out of service until it is repaired and released. Do not start or operate
           it.
+          {defectsHref ? (
+            <>
+              {' '}
+              <Link to={defectsHref} className="font-bold underline">
+                Its defects, and clearing the tag-out
+              </Link>
+            </>
+          ) : null}
         </Alert>
       ) : null}
       {machine.status === 'sold' ? (

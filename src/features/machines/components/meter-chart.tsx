@@ -6,6 +6,7 @@ import {
   CartesianGrid,
   ComposedChart,
   Line,
+  ReferenceDot,
   ReferenceLine,
   ResponsiveContainer,
   Tooltip,
@@ -32,12 +33,22 @@ const TREND = '#92633d'; // loam-500
 const BAND = '#f4da8a'; // straw-200
 const DUE = '#a92c1c'; // poppy-600
 const REPLACED = '#235f8e'; // sky-600
+const SERVICE = '#235f8e'; // sky-600, drawn as a square
+
+/** A completed service visit: the day it was done and the lifetime meter at service. */
+export interface ServiceMark {
+  performedOn: string;
+  meter: number;
+  label: string;
+}
 
 interface MeterChartProps {
   readings: Reading[];
   replacements: MeterReplacement[];
   usage: Usage | null;
   dues: { taskName: string; dueMeter: number }[];
+  /** completed service visits, shown as marks on the line */
+  services?: ServiceMark[];
   unit: string;
   timeZone: string;
 }
@@ -54,6 +65,7 @@ export function MeterChart({
   replacements,
   usage,
   dues,
+  services = NO_SERVICES,
   unit,
   timeZone,
 }: MeterChartProps) {
@@ -62,6 +74,15 @@ export function MeterChart({
   const data = useMemo(
     () => buildMeterChartData(readings, replacements, usage, dues, period),
     [readings, replacements, usage, dues, period],
+  );
+  const marks = useMemo(
+    () =>
+      data
+        ? services
+            .map((s) => ({ ...s, t: middayOf(s.performedOn, timeZone) }))
+            .filter((s) => s.t >= data.xDomain[0] && s.t <= data.xDomain[1])
+        : [],
+    [services, data, timeZone],
   );
   if (!data) return null;
   const historyDays = (data.last.t - data.firstReading.t) / 86_400_000;
@@ -166,6 +187,14 @@ export function MeterChart({
                 }}
               />
             ))}
+            {marks.map((m) => (
+              <ReferenceDot
+                key={`${m.t}-${m.meter}`}
+                x={m.t}
+                y={m.meter}
+                shape={(props) => <ServiceSquare cx={props.cx} cy={props.cy} />}
+              />
+            ))}
             {data.replacements.map((r) => (
               <ReferenceLine
                 key={r.t}
@@ -187,6 +216,7 @@ export function MeterChart({
       <ChartLegend
         hasProjection={Boolean(data.projection)}
         hasReplacement={data.replacements.length > 0}
+        hasServices={marks.length > 0}
       />
       {data.dueLines.length > 0 || data.dueBeyond.length > 0 ? (
         <ul className="flex flex-col gap-1 text-sm text-field-800">
@@ -217,12 +247,34 @@ export function MeterChart({
           ) : null}
         </ul>
       ) : null}
-      <ChartSummaryTable data={data} unit={unit} timeZone={timeZone} />
+      <ChartSummaryTable data={data} marks={marks} unit={unit} timeZone={timeZone} />
     </figure>
   );
 }
 
 const compactNumber = new Intl.NumberFormat(undefined, { maximumFractionDigits: 0 });
+const NO_SERVICES: ServiceMark[] = [];
+
+/** Midday of a farm-local date (yyyy-mm-dd), as an instant: where a day's service sits on the time axis. */
+function middayOf(isoDate: string, timeZone: string): number {
+  const [y, m, d] = isoDate.split('-').map(Number);
+  return new TZDate(y, m - 1, d, 12, 0, timeZone).getTime();
+}
+
+function ServiceSquare({ cx, cy }: { cx?: number; cy?: number }) {
+  if (cx === undefined || cy === undefined) return <g />;
+  return (
+    <rect
+      x={cx - 5}
+      y={cy - 5}
+      width={10}
+      height={10}
+      fill="white"
+      stroke={SERVICE}
+      strokeWidth={2.5}
+    />
+  );
+}
 
 /**
  * Ticks on the first of a month in the farm's time zone, at most `max` of them; a span shorter
@@ -317,9 +369,11 @@ function ChartTooltip({
 function ChartLegend({
   hasProjection,
   hasReplacement,
+  hasServices,
 }: {
   hasProjection: boolean;
   hasReplacement: boolean;
+  hasServices: boolean;
 }) {
   const item = 'flex items-center gap-2';
   return (
@@ -358,6 +412,22 @@ function ChartLegend({
         </svg>
         Due meter
       </li>
+      {hasServices ? (
+        <li className={item}>
+          <svg width="14" height="14">
+            <rect
+              x="2"
+              y="2"
+              width="10"
+              height="10"
+              fill="white"
+              stroke={SERVICE}
+              strokeWidth="2.5"
+            />
+          </svg>
+          Service done
+        </li>
+      ) : null}
       {hasReplacement ? (
         <li className={item}>
           <svg width="8" height="14">
@@ -373,10 +443,12 @@ function ChartLegend({
 /** The chart's figures as a table, for screen readers (the drawing itself is hidden from them). */
 function ChartSummaryTable({
   data,
+  marks,
   unit,
   timeZone,
 }: {
   data: NonNullable<ReturnType<typeof buildMeterChartData>>;
+  marks: (ServiceMark & { t: number })[];
   unit: string;
   timeZone: string;
 }) {
@@ -412,6 +484,13 @@ function ChartSummaryTable({
             </td>
           </tr>
         ) : null}
+        {marks.map((m) => (
+          <tr key={`${m.t}-${m.meter}`}>
+            <th scope="row">Service: {m.label}</th>
+            <td>{date(m.t)}</td>
+            <td>{formatMeter(m.meter, unit)}</td>
+          </tr>
+        ))}
         {data.replacements.map((r) => (
           <tr key={r.t}>
             <th scope="row">Meter replaced</th>

@@ -24,12 +24,15 @@ export function MeterSection({
   orgId,
   machine,
   dues,
+  services,
   timeZone,
 }: {
   orgId: string;
   machine: MachineDetail['data'];
   /** the next due meter of each task (from the schedule), for the reference lines */
   dues: { taskName: string; dueMeter: number }[];
+  /** completed service visits (date done, lifetime meter), marked on the line */
+  services?: { performedOn: string; meter: number; label: string }[];
   timeZone: string;
 }) {
   const readings = useReadings(orgId, machine.id);
@@ -61,6 +64,7 @@ export function MeterSection({
           replacements={readings.data.replacements}
           usage={machine.usage}
           dues={dues}
+          services={services}
           unit={machine.meterUnit}
           timeZone={timeZone}
         />

@@ -16,6 +16,8 @@ interface DueSectionProps {
   orgId: string;
   machine: { id: string; category: MachineCategory; meterUnit: string };
   timeZone: string;
+  /** the service form with one task chosen; given to those who may record services */
+  recordServiceHref?: (taskId: string) => string;
 }
 
 const RANK = { overdue: 0, due_soon: 1, ok: 2, no_forecast: 3 } as const;
@@ -30,7 +32,7 @@ function byUrgency(a: Task, b: Task): number {
 }
 
 /** The machine's schedule with every task's due point, and (for those who may) its editing. */
-export function DueSection({ orgId, machine, timeZone }: DueSectionProps) {
+export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueSectionProps) {
   const tasks = useTasks(orgId, machine.id);
   const create = useCreateTask(orgId, machine.id);
   const [panel, setPanel] = useState<'none' | 'add' | 'template'>('none');
@@ -118,7 +120,7 @@ export function DueSection({ orgId, machine, timeZone }: DueSectionProps) {
           </p>
         </EmptyState>
       ) : (
-        <ul className="flex flex-col gap-3" aria-label="Service tasks">
+        <ul className="grid items-start gap-3 lg:grid-cols-2" aria-label="Service tasks">
           {list.map((task) => (
             <TaskCard
               key={task.id}
@@ -128,6 +130,7 @@ export function DueSection({ orgId, machine, timeZone }: DueSectionProps) {
               timeZone={timeZone}
               canEdit={canEdit}
               canSetLastDone={canSetLastDone}
+              recordServiceHref={recordServiceHref}
             />
           ))}
         </ul>

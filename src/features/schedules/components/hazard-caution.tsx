@@ -29,3 +29,18 @@ export function HazardCaution({
     </aside>
   );
 }
+
+/** The one-line caution of a folded task: which hazards, and the deferral. */
+export function HazardCautionLine({ hazards }: { hazards: Hazard[] }) {
+  return (
+    <p className="flex items-start gap-1.5 text-sm text-straw-900">
+      <Icon name="alert" className="mt-0.5 size-4 shrink-0 text-straw-700" />
+      <span>
+        <span className="font-bold">
+          Caution: {hazards.map((h) => HAZARD_LABELS[h]).join(', ')}.
+        </span>{' '}
+        {SAFETY_DEFERRAL}
+      </span>
+    </p>
+  );
+}

@@ -1,5 +1,7 @@
 import { useState } from 'react';
-import { Button } from '../../../components/ui/button';
+import { Link } from 'react-router-dom';
+import { Button, buttonClasses } from '../../../components/ui/button';
+import { Icon } from '../../../components/ui/icons';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { DueStatusBadge } from '../../../components/ui/status-badges';
 import { isApiError } from '../../../lib/api-client';
@@ -7,9 +9,10 @@ import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
 import { useDeleteTask } from '../api/delete-task';
 import { useUpdateTask } from '../api/update-task';
 import type { Task } from '../api/types';
-import { describeInterval, describeWarning } from '../lib/task-text';
+import { describeInterval, describeRemaining, describeWarning } from '../lib/task-text';
+import type { DuePoint } from '../../../../shared/domain/types';
 import { DuePointDetails } from './due-point-details';
-import { HazardCaution } from './hazard-caution';
+import { HazardCaution, HazardCautionLine } from './hazard-caution';
 import { LastDoneForm } from './last-done-form';
 import { TaskForm, taskToInput } from './task-form';
 
@@ -20,6 +23,8 @@ interface TaskCardProps {
   timeZone: string;
   canEdit: boolean;
   canSetLastDone: boolean;
+  /** the service form with this task chosen, for those who may record services */
+  recordServiceHref?: (taskId: string) => string;
 }
 
 const STATUS_BORDER = {
@@ -30,7 +35,15 @@ const STATUS_BORDER = {
 } as const;
 
 /** One task of the schedule: its due point, its caution, what it takes, and its actions. */
-export function TaskCard({ orgId, task, unit, timeZone, canEdit, canSetLastDone }: TaskCardProps) {
+export function TaskCard({
+  orgId,
+  task,
+  unit,
+  timeZone,
+  canEdit,
+  canSetLastDone,
+  recordServiceHref,
+}: TaskCardProps) {
   const [mode, setMode] = useState<'view' | 'edit' | 'last-done'>('view');
   const [confirmingRemoval, setConfirmingRemoval] = useState(false);
   const update = useUpdateTask(orgId, task.machineId);
@@ -40,7 +53,7 @@ export function TaskCard({ orgId, task, unit, timeZone, canEdit, canSetLastDone 
 
   if (mode === 'edit') {
     return (
-      <li className="rounded-xl border border-field-300 bg-white p-4 shadow-card">
+      <li className="rounded-xl border border-field-300 bg-white p-4 shadow-card lg:col-span-2">
         <h3 className="mb-4 text-lg font-black text-field-950">Edit {task.name}</h3>
         <TaskForm
           unit={unit}
@@ -59,7 +72,7 @@ export function TaskCard({ orgId, task, unit, timeZone, canEdit, canSetLastDone 
 
   return (
     <li
-      className={`flex flex-col gap-3 rounded-xl border border-l-8 border-field-200 bg-white p-4 shadow-card ${
+      className={`flex flex-col gap-2 rounded-xl border border-l-8 border-field-200 bg-white p-4 shadow-card ${
         STATUS_BORDER[task.due?.status ?? 'no_forecast']
       }`}
     >
@@ -74,72 +87,98 @@ export function TaskCard({ orgId, task, unit, timeZone, canEdit, canSetLastDone 
             {warning ? ` · due soon ${warning}` : ''}
           </p>
         </div>
-        {task.due ? <DueStatusBadge status={task.due.status} /> : null}
-      </div>
-
-      {task.due ? (
-        <DuePointDetails due={task.due} unit={unit} />
-      ) : (
-        <p className="text-field-600">No due point yet.</p>
-      )}
-
-      <p className="text-sm text-field-600">
-        Last done:{' '}
-        {task.lastDoneOn || task.lastDoneMeter !== null
-          ? [
-              task.lastDoneMeter !== null ? formatMeter(task.lastDoneMeter, unit) : null,
-              task.lastDoneOn ? formatLocalDate(task.lastDoneOn) : null,
-            ]
-              .filter(Boolean)
-              .join(' on ')
-          : 'not recorded'}
-      </p>
-
-      {hasHazard ? <HazardCaution hazards={task.hazards} safetyNotes={task.safetyNotes} /> : null}
-
-      <TaskContents task={task} showSafetyNotes={!hasHazard} />
-
-      {mode === 'last-done' ? (
-        <LastDoneForm
-          orgId={orgId}
-          task={task}
-          unit={unit}
-          timeZone={timeZone}
-          onDone={() => setMode('view')}
-        />
-      ) : canEdit || canSetLastDone ? (
-        <div className="flex flex-wrap gap-2">
-          {canSetLastDone ? (
-            <Button
-              variant="secondary"
-              icon="check"
-              aria-label={`Set last done for ${task.name}`}
-              onClick={() => setMode('last-done')}
+        <div className="flex flex-col items-end gap-2">
+          {task.due ? <DueStatusBadge status={task.due.status} /> : null}
+          {recordServiceHref ? (
+            <Link
+              to={recordServiceHref(task.id)}
+              className={buttonClasses('secondary', 'px-3')}
+              aria-label={`Record service for ${task.name}`}
             >
-              Set last done
-            </Button>
-          ) : null}
-          {canEdit ? (
-            <>
-              <Button
-                variant="secondary"
-                aria-label={`Edit ${task.name}`}
-                onClick={() => setMode('edit')}
-              >
-                Edit
-              </Button>
-              <Button
-                variant="ghost"
-                icon="trash"
-                aria-label={`Remove ${task.name}`}
-                onClick={() => setConfirmingRemoval(true)}
-              >
-                Remove
-              </Button>
-            </>
+              <Icon name="check" />
+              Record service
+            </Link>
           ) : null}
         </div>
-      ) : null}
+      </div>
+
+      {task.due ? <DueSummary due={task.due} unit={unit} /> : null}
+      {hasHazard ? <HazardCautionLine hazards={task.hazards} /> : null}
+
+      {/* The full due point, last done, caution, contents and editing fold away: a machine has
+          many tasks, and the summary above is what a glance at the page needs. */}
+      <details className="group">
+        <summary className="flex min-h-touch cursor-pointer items-center gap-1 font-bold text-field-800">
+          Details{canEdit || canSetLastDone ? ' and editing' : ''}
+        </summary>
+        <div className="mt-2 flex flex-col gap-3">
+          {task.due ? (
+            <DuePointDetails due={task.due} unit={unit} />
+          ) : (
+            <p className="text-field-600">No due point yet.</p>
+          )}
+
+          <p className="text-sm text-field-600">
+            Last done:{' '}
+            {task.lastDoneOn || task.lastDoneMeter !== null
+              ? [
+                  task.lastDoneMeter !== null ? formatMeter(task.lastDoneMeter, unit) : null,
+                  task.lastDoneOn ? formatLocalDate(task.lastDoneOn) : null,
+                ]
+                  .filter(Boolean)
+                  .join(' on ')
+              : 'not recorded'}
+          </p>
+
+          {hasHazard ? (
+            <HazardCaution hazards={task.hazards} safetyNotes={task.safetyNotes} />
+          ) : null}
+
+          <TaskContents task={task} showSafetyNotes={!hasHazard} />
+
+          {mode === 'last-done' ? (
+            <LastDoneForm
+              orgId={orgId}
+              task={task}
+              unit={unit}
+              timeZone={timeZone}
+              onDone={() => setMode('view')}
+            />
+          ) : canEdit || canSetLastDone ? (
+            <div className="flex flex-wrap gap-2">
+              {canSetLastDone ? (
+                <Button
+                  variant="secondary"
+                  icon="check"
+                  aria-label={`Set last done for ${task.name}`}
+                  onClick={() => setMode('last-done')}
+                >
+                  Set last done
+                </Button>
+              ) : null}
+              {canEdit ? (
+                <>
+                  <Button
+                    variant="secondary"
+                    aria-label={`Edit ${task.name}`}
+                    onClick={() => setMode('edit')}
+                  >
+                    Edit
+                  </Button>
+                  <Button
+                    variant="ghost"
+                    icon="trash"
+                    aria-label={`Remove ${task.name}`}
+                    onClick={() => setConfirmingRemoval(true)}
+                  >
+                    Remove
+                  </Button>
+                </>
+              ) : null}
+            </div>
+          ) : null}
+        </div>
+      </details>
 
       <ConfirmDialog
         open={confirmingRemoval}
@@ -225,5 +264,22 @@ function TaskContents({ task, showSafetyNotes }: { task: Task; showSafetyNotes: 
         ) : null}
       </div>
     </details>
+  );
+}
+
+/** One line of the due point: where and when it falls due, and what is left (the server's figures). */
+function DueSummary({ due, unit }: { due: DuePoint; unit: string }) {
+  const at = [
+    due.dueMeter !== null ? formatMeter(due.dueMeter, unit) : null,
+    due.effectiveDate ? formatLocalDate(due.effectiveDate) : null,
+  ].filter(Boolean);
+  const remaining = describeRemaining(due.remainingMeter, due.remainingDays, unit);
+  if (!at.length && !remaining) return null;
+  return (
+    <p className="font-bold text-field-900 tabular-nums">
+      {at.length ? `Due ${at.join(' · ')}` : ''}
+      {at.length && remaining ? ' — ' : ''}
+      {remaining ?? ''}
+    </p>
   );
 }

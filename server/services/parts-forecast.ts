@@ -1,0 +1,73 @@
+import { Op } from 'sequelize';
+import { addDaysIso, todayIso } from '../../shared/domain';
+import type { PartsForecastQuery } from '../../shared/schemas/dealers';
+import { ServiceTask } from '../models';
+import type { OrgAccess } from '../policies/access';
+import { boardRows, type BoardRow } from './dealer-board';
+import { sumPartsForecast, type ForecastService } from './parts-sum';
+
+/**
+ * When a board row's parts are first needed: today for an overdue service, else the date it
+ * falls due; null when it falls outside the horizon or has no forecast (it cannot be dated).
+ */
+function neededOn(row: BoardRow, horizon: number, now: Date): string | null {
+  const today = todayIso(row.customer.timeZone, now);
+  if (row.due.status === 'no_forecast') return null;
+  if (row.due.status === 'overdue') return today;
+  const date = row.due.effectiveDate ?? row.due.projectedDate ?? row.due.dueDate;
+  if (!date || date > addDaysIso(today, horizon)) return null;
+  return date < today ? today : date;
+}
+
+/**
+ * The parts and fluids the dealer's customers' due services call for inside the horizon, summed
+ * by part number per customer and in total. The services come from the board (the farms' own
+ * due lists); the lists from each task's schedule line.
+ */
+export async function partsForecast(
+  access: OrgAccess,
+  query: PartsForecastQuery,
+  path: string,
+  now = new Date(),
+) {
+  const board = await boardRows(
+    access,
+    { horizon: query.horizon, customerId: query.customerId },
+    path,
+    now,
+  );
+  const dated = board.rows.flatMap((row) => {
+    const on = neededOn(row, query.horizon, now);
+    return on ? [{ row, on }] : [];
+  });
+  const byFarm = new Map<string, string[]>();
+  for (const { row } of dated)
+    byFarm.set(row.customer.id, [...(byFarm.get(row.customer.id) ?? []), row.taskId]);
+  const tasks = new Map<string, ServiceTask>();
+  for (const [farmId, ids] of byFarm) {
+    const found = await ServiceTask.findAll({
+      where: { organizationId: farmId, id: { [Op.in]: ids } },
+      attributes: ['id', 'parts', 'fluids'],
+    });
+    for (const t of found) tasks.set(t.id, t);
+  }
+  const services: ForecastService[] = dated.map(({ row, on }) => ({
+    customer: { id: row.customer.id, name: row.customer.name },
+    machineId: row.machine.id,
+    neededOn: on,
+    parts: tasks.get(row.taskId)?.parts ?? [],
+    fluids: tasks.get(row.taskId)?.fluids ?? [],
+  }));
+  const summary = sumPartsForecast(services);
+  return {
+    asOf: board.asOf,
+    horizon: query.horizon,
+    services: services.length,
+    /** due rows left out because they cannot be dated (no forecast) */
+    undated: board.rows.filter((r) => r.due.status === 'no_forecast').length,
+    customers: board.customers,
+    parts: summary.parts,
+    fluids: summary.fluids,
+    byCustomer: summary.customers,
+  };
+}

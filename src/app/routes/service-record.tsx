@@ -1,0 +1,84 @@
+import type { QueryClient } from '@tanstack/react-query';
+import { Link, useLocation, useParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { NotFound } from '../../components/errors/route-error';
+import { ErrorState } from '../../components/ui/error-state';
+import { Icon } from '../../components/ui/icons';
+import { PageHeader } from '../../components/ui/page-header';
+import { PageSkeleton } from '../../components/ui/skeleton';
+import {
+  serviceRecordQueryOptions,
+  useServiceRecord,
+} from '../../features/services/api/get-service-record';
+import type { TaskReset } from '../../features/services/api/types';
+import { ServiceRecordView } from '../../features/services/components/service-record-view';
+import { isApiError } from '../../lib/api-client';
+import { useCurrentMembership } from '../../lib/auth';
+import { formatLocalDate } from '../../lib/fleet-format';
+import { paths } from '../paths';
+
+export const serviceRecordLoader =
+  (queryClient: QueryClient) =>
+  ({ params }: LoaderFunctionArgs) => {
+    void queryClient.prefetchQuery(
+      serviceRecordQueryOptions(params.orgId ?? '', params.recordId ?? ''),
+    );
+    return null;
+  };
+
+/** The resets the service form passed along when it completed this record (history state). */
+function resetsFrom(state: unknown): TaskReset[] | null {
+  const resets = (state as { resets?: unknown } | null)?.resets;
+  return Array.isArray(resets) ? (resets as TaskReset[]) : null;
+}
+
+export function ServiceRecordPage() {
+  const { recordId = '' } = useParams();
+  const location = useLocation();
+  const { membership } = useCurrentMembership();
+  const orgId = membership.organization.id;
+  const record = useServiceRecord(orgId, recordId);
+
+  if (record.isPending) return <PageSkeleton label="Loading the service record" />;
+  if (record.isError) {
+    if (isApiError(record.error) && record.error.status === 404)
+      return <NotFound homeHref={paths.organization.machines.href(orgId)} inShell />;
+    return (
+      <ErrorState
+        title="This service record didn't load"
+        message={record.error.message}
+        onRetry={() => record.refetch()}
+        retrying={record.isRefetching}
+      />
+    );
+  }
+
+  const { data, abilities } = record.data;
+  const date = data.performedOn ?? data.plannedFor;
+  const kind = data.status === 'planned' ? 'Planned service' : 'Service';
+  return (
+    <>
+      <Link
+        to={paths.organization.machine.href(orgId, data.machine.id)}
+        className="mb-3 inline-flex min-h-touch items-center gap-1 font-bold text-field-700 hover:text-field-950"
+      >
+        <Icon name="back" />
+        {data.machine.fleetNumber} · {data.machine.name}
+      </Link>
+      <PageHeader
+        title={`${kind} · ${data.machine.fleetNumber}${date ? ` · ${formatLocalDate(date)}` : ''}`}
+        description={data.tasks.map((t) => t.name).join(', ') || undefined}
+      />
+      <ServiceRecordView
+        orgId={orgId}
+        record={data}
+        abilities={abilities}
+        resets={data.status === 'completed' ? resetsFrom(location.state) : null}
+        timeZone={membership.organization.timeZone}
+        completeHref={paths.organization.serviceRecordNew.href(orgId, data.machine.id, {
+          complete: data.id,
+        })}
+        defectsHref={paths.organization.defects.href(orgId, data.machine.id)}
+      />
+    </>
+  );
+}

@@ -1,0 +1,29 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { serviceKeys } from './keys';
+import type { ActiveDefect } from './types';
+
+/** The machine's open and in-repair defects, which a visit may close. */
+export const getActiveDefects = (orgId: string, machineId: string, signal?: AbortSignal) =>
+  apiClient
+    .get<{ data: ActiveDefect[] }>(
+      `/organizations/${segment(orgId)}/machines/${segment(machineId)}/defects?status=active&pageSize=100`,
+      { signal },
+    )
+    .then((body) =>
+      body.data.map((d): ActiveDefect => ({
+        id: d.id,
+        title: d.title,
+        severity: d.severity,
+        status: d.status,
+      })),
+    );
+
+export const activeDefectsQueryOptions = (orgId: string, machineId: string) =>
+  queryOptions({
+    queryKey: serviceKeys.activeDefects(orgId, machineId),
+    queryFn: ({ signal }) => getActiveDefects(orgId, machineId, signal),
+  });
+
+export const useActiveDefects = (orgId: string, machineId: string) =>
+  useQuery(activeDefectsQueryOptions(orgId, machineId));

@@ -1,0 +1,24 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { walkaroundKeys } from './keys';
+import type { PickableMachine } from './types';
+
+// The server answers only the machines the caller may see (an operator: the ones assigned to
+// them, where assignments exist). 200 is the page limit; a yard's walkaround list is far shorter.
+const PICK_QUERY = 'sort=fleetNumber&order=asc&page=1&pageSize=200';
+
+/** Machines to pick for a walkaround: sold ones are left out, tagged-out ones kept (and shown). */
+export const getPickableMachines = (orgId: string, signal?: AbortSignal) =>
+  apiClient
+    .get<{ data: PickableMachine[] }>(`/organizations/${segment(orgId)}/machines?${PICK_QUERY}`, {
+      signal,
+    })
+    .then((body) => body.data.filter((machine) => machine.status !== 'sold'));
+
+export const pickableMachinesQueryOptions = (orgId: string) =>
+  queryOptions({
+    queryKey: walkaroundKeys.machines(orgId),
+    queryFn: ({ signal }) => getPickableMachines(orgId, signal),
+  });
+
+export const usePickableMachines = (orgId: string) => useQuery(pickableMachinesQueryOptions(orgId));

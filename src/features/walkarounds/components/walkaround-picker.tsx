@@ -1,0 +1,144 @@
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { CATEGORY_LABELS } from '../../../../shared/constants';
+import { Badge } from '../../../components/ui/badge';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { ErrorState } from '../../../components/ui/error-state';
+import { TextField } from '../../../components/ui/field';
+import { Icon } from '../../../components/ui/icons';
+import { ListSkeleton } from '../../../components/ui/skeleton';
+import { formatMeter } from '../../../lib/fleet-format';
+import { usePickableMachines } from '../api/get-pickable-machines';
+import type { PickableMachine } from '../api/types';
+import { loadDraft } from '../lib/draft';
+import { OutboxList } from './outbox-list';
+
+/** Past this many machines the list gets a search box. */
+const SEARCH_FROM = 8;
+
+/**
+ * The machines this person may walk round, in fleet-number order. Tagged-out ones are listed
+ * (so nobody thinks they are missing) but are not links: they must not be used.
+ */
+export function WalkaroundPicker({
+  orgId,
+  userId,
+  timeZone,
+  walkaroundHref,
+  emptyHint,
+}: {
+  orgId: string;
+  userId: string;
+  timeZone: string;
+  walkaroundHref: (machineId: string) => string;
+  emptyHint: string;
+}) {
+  const machines = usePickableMachines(orgId);
+  const [find, setFind] = useState('');
+
+  if (machines.isPending) return <ListSkeleton rows={5} label="Loading machines" />;
+  if (machines.isError)
+    return (
+      <ErrorState
+        title="The machines didn't load"
+        message={machines.error.message}
+        onRetry={() => machines.refetch()}
+        retrying={machines.isRefetching}
+      />
+    );
+
+  const needle = find.trim().toLowerCase();
+  const shown = needle
+    ? machines.data.filter((m) => `${m.fleetNumber} ${m.name}`.toLowerCase().includes(needle))
+    : machines.data;
+
+  return (
+    <div className="flex flex-col gap-4">
+      <OutboxList orgId={orgId} userId={userId} timeZone={timeZone} />
+      {machines.data.length === 0 ? (
+        <EmptyState icon="field" title="No machines to walk round">
+          <p>{emptyHint}</p>
+        </EmptyState>
+      ) : (
+        <>
+          {machines.data.length >= SEARCH_FROM ? (
+            <TextField
+              label="Find machine"
+              type="search"
+              value={find}
+              onChange={(event) => setFind(event.target.value)}
+              placeholder="Fleet number or name"
+            />
+          ) : null}
+          <ul aria-label="Machines" className="flex flex-col gap-3">
+            {shown.map((machine) => (
+              <li key={machine.id}>
+                <MachineChoice
+                  machine={machine}
+                  href={walkaroundHref(machine.id)}
+                  inProgress={inProgress(orgId, machine.id)}
+                />
+              </li>
+            ))}
+          </ul>
+          {shown.length === 0 ? (
+            <p className="text-field-700">No machine matches “{find.trim()}”.</p>
+          ) : null}
+        </>
+      )}
+    </div>
+  );
+}
+
+const inProgress = (orgId: string, machineId: string) => {
+  const draft = loadDraft(orgId, machineId, 'use');
+  return !!draft && Object.values(draft.answers).some((answer) => answer.result);
+};
+
+function MachineChoice({
+  machine,
+  href,
+  inProgress,
+}: {
+  machine: PickableMachine;
+  href: string;
+  inProgress: boolean;
+}) {
+  const details = (
+    <span className="flex min-w-0 flex-1 flex-col">
+      <span className="text-xl font-black text-field-950">{machine.fleetNumber}</span>
+      <span className="truncate text-field-800">{machine.name}</span>
+      <span className="text-sm text-field-600">
+        {CATEGORY_LABELS[machine.category]}
+        {machine.lastReading
+          ? ` · last ${formatMeter(machine.lastReading.value, machine.meterUnit)}`
+          : ''}
+      </span>
+    </span>
+  );
+
+  if (machine.status === 'tagged_out') {
+    return (
+      <div
+        aria-disabled="true"
+        className="flex min-h-16 items-center gap-3 rounded-xl border-2 border-dashed border-poppy-300 bg-poppy-50/60 p-4"
+      >
+        {details}
+        <Badge tone="overdue" icon="lock" className="whitespace-normal">
+          Tagged out — do not use
+        </Badge>
+      </div>
+    );
+  }
+
+  return (
+    <Link
+      to={href}
+      className="flex min-h-16 items-center gap-3 rounded-xl border border-field-200 bg-white p-4 shadow-card hover:border-field-400 active:bg-field-50"
+    >
+      {details}
+      {inProgress ? <Badge tone="info">In progress</Badge> : null}
+      <Icon name="back" className="size-6 rotate-180 text-field-500" />
+    </Link>
+  );
+}

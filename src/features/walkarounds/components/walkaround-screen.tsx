@@ -1,0 +1,172 @@
+import { useEffect, useState } from 'react';
+import type { UnitSystem } from '../../../../shared/constants';
+import type { WalkaroundPurpose } from '../../../../shared/schemas/walkarounds';
+import { ErrorState } from '../../../components/ui/error-state';
+import { PageHeader } from '../../../components/ui/page-header';
+import { PageSkeleton } from '../../../components/ui/skeleton';
+import { isApiError } from '../../../lib/api-client';
+import { useChecklist } from '../api/get-checklist';
+import { usePickableMachines } from '../api/get-pickable-machines';
+import type { Checklist } from '../api/types';
+import { useSendWalkaround, type SendResult } from '../lib/use-send-walkaround';
+import { useWalkaroundDraft } from '../lib/use-walkaround-draft';
+import { QueuedWalkaround } from './queued-walkaround';
+import { TaggedOutNotice } from './tagged-out-notice';
+import { WalkaroundForm } from './walkaround-form';
+import { WalkaroundOutcomeView } from './walkaround-outcome';
+
+export interface WalkaroundHrefs {
+  pick: string;
+  defects: string;
+  /** the same machine's shop inspection (null: not offered) */
+  inspect: string | null;
+}
+
+interface WalkaroundScreenProps {
+  orgId: string;
+  machineId: string;
+  purpose: WalkaroundPurpose;
+  userId: string;
+  units: UnitSystem;
+  timeZone: string;
+  hrefs: WalkaroundHrefs;
+}
+
+const isUnreachable = (error: unknown) => isApiError(error) && error.code === 'unreachable';
+
+/**
+ * One machine's walkaround, from the checklist to the server's answer. The checklist comes from
+ * the server, or from the draft on the phone when the connection is gone.
+ */
+export function WalkaroundScreen(props: WalkaroundScreenProps) {
+  const { orgId, machineId, purpose, hrefs } = props;
+  const [result, setResult] = useState<SendResult | null>(null);
+  const query = useChecklist(orgId, machineId, purpose, !result);
+  const draftApi = useWalkaroundDraft(orgId, machineId, purpose);
+  const { update } = draftApi;
+
+  // Keep the checklist with the draft, for carrying on without a connection.
+  const loaded = query.data?.data;
+  useEffect(() => {
+    if (!loaded || result) return;
+    update((d) =>
+      JSON.stringify(d.checklist) === JSON.stringify(loaded) ? d : { ...d, checklist: loaded },
+    );
+  }, [loaded, result, update]);
+
+  const offlineChecklist = isUnreachable(query.error) ? draftApi.draft.checklist : null;
+  const checklist = loaded ?? offlineChecklist;
+  const taggedOut =
+    isApiError(query.error) && query.error.code === 'tagged_out' ? query.error.message : null;
+  const machines = usePickableMachines(orgId);
+  const fleetNumber =
+    checklist?.machine.fleetNumber ??
+    machines.data?.find((machine) => machine.id === machineId)?.fleetNumber;
+  const title = `${purpose === 'inspection' ? 'Shop inspection' : 'Walkaround'}${fleetNumber ? ` · ${fleetNumber}` : ''}`;
+
+  let body;
+  if (result?.kind === 'sent') {
+    body = (
+      <WalkaroundOutcomeView
+        outcome={result.outcome}
+        pickHref={hrefs.pick}
+        defectsHref={hrefs.defects}
+      />
+    );
+  } else if (result?.kind === 'queued') {
+    body = (
+      <QueuedWalkaround
+        clientId={result.clientId}
+        fleetNumber={fleetNumber ?? 'this machine'}
+        photosLeftOut={result.photosLeftOut}
+        pickHref={hrefs.pick}
+        defectsHref={hrefs.defects}
+        onDiscarded={() => {
+          draftApi.startOver();
+          setResult(null);
+        }}
+      />
+    );
+  } else if (checklist) {
+    body = (
+      <ReadyScreen
+        {...props}
+        checklist={checklist}
+        offline={!loaded}
+        draftApi={draftApi}
+        onSent={setResult}
+      />
+    );
+  } else if (taggedOut) {
+    body = (
+      <TaggedOutNotice
+        message={taggedOut}
+        pickHref={hrefs.pick}
+        defectsHref={hrefs.defects}
+        inspectHref={hrefs.inspect}
+      />
+    );
+  } else if (query.isError) {
+    body = (
+      <ErrorState
+        title="The checklist didn't load"
+        message={query.error.message}
+        onRetry={() => query.refetch()}
+        retrying={query.isRefetching}
+      />
+    );
+  } else {
+    body = <PageSkeleton label="Loading the checklist" />;
+  }
+
+  return (
+    <>
+      <PageHeader title={title} description={checklist ? checklist.machine.name : undefined} />
+      {body}
+    </>
+  );
+}
+
+function ReadyScreen({
+  orgId,
+  userId,
+  purpose,
+  units,
+  timeZone,
+  checklist,
+  offline,
+  draftApi,
+  onSent,
+}: WalkaroundScreenProps & {
+  checklist: Checklist;
+  offline: boolean;
+  draftApi: ReturnType<typeof useWalkaroundDraft>;
+  onSent: (result: SendResult) => void;
+}) {
+  const send = useSendWalkaround({
+    orgId,
+    userId,
+    machine: checklist.machine,
+    onDone: draftApi.finish,
+  });
+  return (
+    <div className="flex flex-col gap-4">
+      {offline ? (
+        <p role="status" className="rounded-lg border-2 border-sky-300 bg-sky-50 p-3 text-sky-900">
+          No connection: this is the checklist saved on this phone. Carry on; the walkaround is kept
+          here and sent when the connection returns.
+        </p>
+      ) : null}
+      <WalkaroundForm
+        orgId={orgId}
+        checklist={checklist}
+        purpose={purpose}
+        units={units}
+        timeZone={timeZone}
+        draftApi={draftApi}
+        send={send}
+        onSent={onSent}
+      />
+    </div>
+  );
+}

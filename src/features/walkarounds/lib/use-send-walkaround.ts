@@ -1,0 +1,65 @@
+import { useCallback } from 'react';
+import { useQueryClient } from '@tanstack/react-query';
+import type { WalkaroundCreateInput } from '../../../../shared/schemas/walkarounds';
+import { isApiError } from '../../../lib/api-client';
+import { changedByWalkaround, walkaroundKeys } from '../api/keys';
+import { submitWalkaround } from '../api/submit-walkaround';
+import type { MachineRef, WalkaroundOutcome } from '../api/types';
+import { enqueueWalkaround } from './outbox';
+
+export type SendResult =
+  | { kind: 'sent'; outcome: WalkaroundOutcome }
+  | { kind: 'queued'; clientId: string; photosLeftOut: number };
+
+/**
+ * Sends a finished walkaround, or keeps it on the phone when there is no connection (the browser
+ * says it is offline, or the request never reached the server). Errors the server answered
+ * (422, 409) are thrown for the form to show.
+ */
+export function useSendWalkaround({
+  orgId,
+  userId,
+  machine,
+  onDone,
+}: {
+  orgId: string;
+  userId: string;
+  machine: MachineRef;
+  /** the walkaround left the form (sent or queued): the draft can go */
+  onDone: () => void;
+}) {
+  const queryClient = useQueryClient();
+  return useCallback(
+    async (input: WalkaroundCreateInput, photosLeftOut: number): Promise<SendResult> => {
+      const queue = (): SendResult => {
+        enqueueWalkaround({
+          clientId: input.clientId,
+          orgId,
+          userId,
+          machine: { id: machine.id, fleetNumber: machine.fleetNumber, name: machine.name },
+          input,
+          queuedAt: new Date().toISOString(),
+        });
+        onDone();
+        return { kind: 'queued', clientId: input.clientId, photosLeftOut };
+      };
+      if (!navigator.onLine) return queue();
+      try {
+        const outcome = await submitWalkaround(orgId, input);
+        onDone();
+        // the machine may be tagged out now: its checklist is fetched again on the next visit
+        queryClient.removeQueries({ queryKey: walkaroundKeys.checklists() });
+        void Promise.all(
+          [walkaroundKeys.allMachines(), ...changedByWalkaround].map((queryKey) =>
+            queryClient.invalidateQueries({ queryKey }),
+          ),
+        );
+        return { kind: 'sent', outcome };
+      } catch (error) {
+        if (isApiError(error) && error.code === 'unreachable') return queue();
+        throw error;
+      }
+    },
+    [orgId, userId, machine, onDone, queryClient],
+  );
+}
