@@ -37,6 +37,7 @@ import { planLastDone } from './service-plan';
 import { buildTemplates } from './templates';
 import { writeServiceHistory, type DemoMachineWorld } from './demo-services';
 import { writeWalkarounds } from './demo-walkarounds';
+import { writeDealerLinks } from './demo-dealers';
 
 export interface DemoSummary {
   organizations: number;
@@ -299,6 +300,20 @@ async function writeScenario(
     worlds,
     today,
     demoId,
+    transaction,
+  );
+
+  await writeDealerLinks(
+    {
+      today,
+      orgId,
+      userId,
+      machineId,
+      demoId,
+      timeZoneOf: (key) => orgOf(key).timeZone,
+      machineName: (fleetNumber) => DEMO_MACHINES.find((m) => m.fleetNumber === fleetNumber)!.name,
+      tasks: taskRows,
+    },
     transaction,
   );
 

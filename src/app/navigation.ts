@@ -23,6 +23,10 @@ type ItemId =
   | 'reminders'
   | 'messages'
   | 'checklists'
+  | 'dealers'
+  | 'parts'
+  | 'customers'
+  | 'bookings'
   | 'account';
 
 // Every item of the main navigation once. The server still checks every request; this only
@@ -33,11 +37,24 @@ const ITEMS: Record<ItemId, NavItem> = {
   fleet: { label: 'Fleet', to: org.machines.href, icon: 'field' },
   logHours: { label: 'Log hours', to: (orgId: string) => org.logHours.href(orgId), icon: 'clock' },
   defects: { label: 'Defects', to: (orgId: string) => org.defects.href(orgId), icon: 'alert' },
-  shopWeek: { label: 'Shop week', to: shopWeekHref, icon: 'refresh' },
+  shopWeek: {
+    label: 'Shop week',
+    to: (orgId: string) => org.shopWeek.href(orgId),
+    icon: 'refresh',
+  },
   team: { label: 'Team', to: org.team.href, icon: 'team' },
   reminders: { label: 'Reminders', to: org.reminders.href, icon: 'mail' },
   messages: { label: 'Messages', to: org.messages.href, icon: 'external' },
-  checklists: { label: 'Checklists', to: org.checklists.href, icon: 'info' },
+  checklists: {
+    label: 'Checklists',
+    to: (orgId: string) => org.checklists.href(orgId),
+    icon: 'info',
+  },
+  // dealer links: the farm manager's Dealers page; the advisor's parts, bookings and customers
+  dealers: { label: 'Dealers', to: org.farmDealers.href, icon: 'lock' },
+  parts: { label: 'Parts forecast', to: org.partsForecast.href, icon: 'plus' },
+  bookings: { label: 'Bookings', to: org.bookings.href, icon: 'clock' },
+  customers: { label: 'Customers', to: org.customers.href, icon: 'team' },
   account: { label: 'Account', to: org.account.href, icon: 'person' },
 };
 
@@ -62,13 +79,14 @@ const ORDER: Record<Role, readonly ItemId[]> = {
     'defects',
     'shopWeek',
     'team',
+    'dealers',
     'reminders',
     'messages',
     'checklists',
     'walkaround',
     'account',
   ],
-  advisor: ['dashboard', 'account'],
+  advisor: ['dashboard', 'parts', 'bookings', 'customers', 'account'],
 };
 
 /** role → the items that role sees, in order */
@@ -81,9 +99,4 @@ export const navigationByRole: Record<Role, readonly NavItem[]> = {
 
 function itemsFor(role: Role): readonly NavItem[] {
   return ORDER[role].map((id) => ITEMS[id]);
-}
-
-// TODO(shop week): use paths.organization.shopWeek.href once the shop week page's path lands.
-function shopWeekHref(orgId: string): string {
-  return `/o/${encodeURIComponent(orgId)}/shop`;
 }

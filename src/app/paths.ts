@@ -15,6 +15,10 @@ export const paths = {
     href: (token?: string) => (token ? `/reset-password?token=${q(token)}` : '/reset-password'),
   },
   invitation: { path: '/invitations/:token', href: (token: string) => `/invitations/${q(token)}` },
+  dealerInvitation: {
+    path: '/dealer-invitations/:token',
+    href: (token: string) => `/dealer-invitations/${q(token)}`,
+  },
   organization: {
     dashboard: { path: '/o/:orgId', href: (orgId: string) => `/o/${q(orgId)}` },
     team: { path: '/o/:orgId/team', href: (orgId: string) => `/o/${q(orgId)}/team` },
@@ -101,8 +105,21 @@ export const paths = {
     },
     checklists: {
       path: '/o/:orgId/checklists',
-      href: (orgId: string) => `/o/${q(orgId)}/checklists`,
+      /** `category`: open that machine category's checklist */
+      href: (orgId: string, category?: string) =>
+        `/o/${q(orgId)}/checklists${category ? `?category=${q(category)}` : ''}`,
     },
+    // dealer links: the dealer's board, parts, customers; the farm's dealers; both sides' bookings
+    dealerBoard: {
+      path: '/o/:orgId/board',
+      /** `customerId`: open the board filtered to one customer */
+      href: (orgId: string, customerId?: string) =>
+        `/o/${q(orgId)}/board${customerId ? `?customer=${q(customerId)}` : ''}`,
+    },
+    partsForecast: { path: '/o/:orgId/parts', href: (orgId: string) => `/o/${q(orgId)}/parts` },
+    customers: { path: '/o/:orgId/customers', href: (orgId: string) => `/o/${q(orgId)}/customers` },
+    bookings: { path: '/o/:orgId/bookings', href: (orgId: string) => `/o/${q(orgId)}/bookings` },
+    farmDealers: { path: '/o/:orgId/dealers', href: (orgId: string) => `/o/${q(orgId)}/dealers` },
   },
   devMail: {
     path: '/dev/mail',

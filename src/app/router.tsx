@@ -28,6 +28,15 @@ import { ServiceRecordNewPage, serviceRecordNewLoader } from './routes/service-r
 import { ShopWeekPage, shopWeekLoader } from './routes/shop-week';
 import { WalkaroundPickPage, walkaroundPickLoader } from './routes/walkaround-pick';
 import { WalkaroundPage, walkaroundLoader } from './routes/walkaround';
+import { DefectsPage, defectsLoader } from './routes/defects';
+import { MachineLabelPage, machineLabelLoader } from './routes/machine-label';
+import { ChecklistsPage, checklistsLoader } from './routes/checklists';
+import { DealerBoardPage, dealerBoardLoader } from './routes/dealer-board';
+import { PartsForecastPage } from './routes/parts-forecast';
+import { CustomersPage, customersLoader } from './routes/customers';
+import { BookingsPage, bookingsLoader } from './routes/bookings';
+import { FarmDealersPage, farmDealersLoader } from './routes/farm-dealers';
+import { DealerInvitationPage, dealerInvitationLoader } from './routes/dealer-invitation';
 import { WalkaroundOutboxSender } from '../features/walkarounds/components/outbox-sender';
 
 const home = paths.home.href();
@@ -48,6 +57,11 @@ export function createAppRouter(queryClient: QueryClient) {
           path: paths.invitation.path,
           loader: acceptInvitationLoader(queryClient),
           element: <AcceptInvitationPage />,
+        },
+        {
+          path: paths.dealerInvitation.path,
+          loader: dealerInvitationLoader(queryClient),
+          element: <DealerInvitationPage />,
         },
         {
           path: paths.organization.dashboard.path,
@@ -106,6 +120,42 @@ export function createAppRouter(queryClient: QueryClient) {
                   path: paths.organization.walkaround.path,
                   loader: walkaroundLoader(queryClient),
                   element: <WalkaroundPage />,
+                },
+                {
+                  path: paths.organization.defects.path,
+                  loader: defectsLoader(queryClient),
+                  element: <DefectsPage />,
+                },
+                {
+                  path: paths.organization.machineLabel.path,
+                  loader: machineLabelLoader(queryClient),
+                  element: <MachineLabelPage />,
+                },
+                {
+                  path: paths.organization.checklists.path,
+                  loader: checklistsLoader(queryClient),
+                  element: <ChecklistsPage />,
+                },
+                {
+                  path: paths.organization.dealerBoard.path,
+                  loader: dealerBoardLoader(queryClient),
+                  element: <DealerBoardPage />,
+                },
+                { path: paths.organization.partsForecast.path, element: <PartsForecastPage /> },
+                {
+                  path: paths.organization.customers.path,
+                  loader: customersLoader(queryClient),
+                  element: <CustomersPage />,
+                },
+                {
+                  path: paths.organization.bookings.path,
+                  loader: bookingsLoader(queryClient),
+                  element: <BookingsPage />,
+                },
+                {
+                  path: paths.organization.farmDealers.path,
+                  loader: farmDealersLoader(queryClient),
+                  element: <FarmDealersPage />,
                 },
                 {
                   path: paths.organization.team.path,

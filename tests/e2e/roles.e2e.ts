@@ -21,6 +21,7 @@ const MANAGER_NAV = [
   'Defects',
   'Shop week',
   'Team',
+  'Dealers',
   'Reminders',
   'Messages',
   'Checklists',
@@ -66,7 +67,7 @@ const ROLES = [
     who: 'ravi@quillon.example',
     role: 'advisor',
     org: 'Quillon Equipment & Service',
-    nav: ['Dashboard', 'Account'],
+    nav: ['Dashboard', 'Parts forecast', 'Bookings', 'Customers', 'Account'],
   },
 ] as const;
 

@@ -65,7 +65,11 @@ export function registerBoardRoutes(router: Router): void {
       const access = advisor(req);
       const board = await dealerBoard(access, query, pathOf(req));
       return {
-        data: board.rows,
+        // the customer's time zone served the server's date arithmetic only
+        data: board.rows.map(({ customer: { timeZone: _tz, ...customer }, ...row }) => ({
+          ...row,
+          customer,
+        })),
         meta: {
           asOf: board.asOf,
           total: board.total,

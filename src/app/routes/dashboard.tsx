@@ -1,13 +1,14 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Section } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
 import { dueQueryOptions } from '../../features/due/api/get-due';
 import type { DueFilters } from '../../features/due/api/types';
-import { DealerBoardEmpty } from '../../features/due/components/dealer-board-empty';
 import { DueBoard } from '../../features/due/components/due-board';
 import { readDueFilters, writeDueFilters } from '../../features/due/filters';
 import { findMembership, meQueryOptions, useCurrentMembership } from '../../lib/auth';
 import { paths } from '../paths';
+import { DealerBoardSection, dealerBoardLoader } from './dealer-board';
 
 /** Starts loading the due list with the page (farms only: a dealer has no machines of its own). */
 export const dashboardLoader =
@@ -20,6 +21,9 @@ export const dashboardLoader =
       const filters = readDueFilters(new URL(request.url).searchParams);
       void queryClient.prefetchQuery(dueQueryOptions(orgId, filters));
     }
+    // a dealer's dashboard is its board across customers
+    if (membership?.organization.kind === 'dealer')
+      return dealerBoardLoader(queryClient)({ request, params } as LoaderFunctionArgs);
     return null;
   };
 
@@ -51,7 +55,20 @@ export function DashboardPage() {
         }
       />
       {organization.kind === 'dealer' ? (
-        <DealerBoardEmpty organizationName={organization.name} />
+        <Section
+          title="Coming due"
+          description="Across your customers, by the date each service falls due."
+          actions={
+            <Link
+              className="font-bold text-field-800 underline"
+              to={paths.organization.dealerBoard.href(organization.id)}
+            >
+              Open the board
+            </Link>
+          }
+        >
+          <DealerBoardSection />
+        </Section>
       ) : (
         <DueBoard
           orgId={organization.id}

@@ -162,7 +162,7 @@ function MainNavLink({ item }: { item: MainNavItem }) {
           >
             <Icon name={item.icon} className="size-5" />
           </span>
-          <span className="max-w-full truncate sm:overflow-visible sm:whitespace-normal">
+          <span className="max-w-full leading-tight">
             {item.label}
           </span>
         </>

@@ -187,9 +187,9 @@ export function MeterChart({
                 }}
               />
             ))}
-            {marks.map((m) => (
+            {marks.map((m, i) => (
               <ReferenceDot
-                key={`${m.t}-${m.meter}`}
+                key={i}
                 x={m.t}
                 y={m.meter}
                 shape={(props) => <ServiceSquare cx={props.cx} cy={props.cy} />}
@@ -484,8 +484,8 @@ function ChartSummaryTable({
             </td>
           </tr>
         ) : null}
-        {marks.map((m) => (
-          <tr key={`${m.t}-${m.meter}`}>
+        {marks.map((m, i) => (
+          <tr key={`service-${i}`}>
             <th scope="row">Service: {m.label}</th>
             <td>{date(m.t)}</td>
             <td>{formatMeter(m.meter, unit)}</td>

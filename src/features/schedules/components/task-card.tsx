@@ -87,8 +87,12 @@ export function TaskCard({
             {warning ? ` · due soon ${warning}` : ''}
           </p>
         </div>
-        <div className="flex flex-col items-end gap-2">
-          {task.due ? <DueStatusBadge status={task.due.status} /> : null}
+        {task.due ? <DueStatusBadge status={task.due.status} /> : null}
+      </div>
+
+      {task.due || recordServiceHref ? (
+        <div className="flex flex-wrap items-center justify-between gap-2">
+          {task.due ? <DueSummary due={task.due} unit={unit} /> : <span />}
           {recordServiceHref ? (
             <Link
               to={recordServiceHref(task.id)}
@@ -100,9 +104,7 @@ export function TaskCard({
             </Link>
           ) : null}
         </div>
-      </div>
-
-      {task.due ? <DueSummary due={task.due} unit={unit} /> : null}
+      ) : null}
       {hasHazard ? <HazardCautionLine hazards={task.hazards} /> : null}
 
       {/* The full due point, last done, caution, contents and editing fold away: a machine has

@@ -55,20 +55,27 @@ export function ChoiceList({
       {options.length === 0 ? (
         <p className="text-field-600">{emptyText}</p>
       ) : (
-        <ul className="flex flex-col gap-2">
-          {options.map((option) => (
+        <ul className="grid gap-2 lg:grid-cols-2">
+          {options.map((option, i) => (
             <li key={option.value}>
               <label className="flex min-h-touch cursor-pointer items-start gap-3 rounded-lg border border-field-200 bg-white px-3 py-2.5 has-[:checked]:border-field-600 has-[:checked]:bg-field-50">
+                {/* named by the label line alone; the detail line is its description */}
                 <input
                   type="checkbox"
                   className="mt-0.5 size-5 shrink-0 accent-field-800"
+                  aria-labelledby={`${id}-${i}-label`}
+                  aria-describedby={option.detail ? `${id}-${i}-detail` : undefined}
                   checked={value.includes(option.value)}
                   onChange={(event) => toggle(option.value, event.target.checked)}
                 />
                 <span className="flex min-w-0 flex-col gap-0.5">
-                  <span className="font-bold text-field-950">{option.label}</span>
+                  <span id={`${id}-${i}-label`} className="font-bold text-field-950">
+                    {option.label}
+                  </span>
                   {option.detail ? (
-                    <span className="text-sm text-field-700">{option.detail}</span>
+                    <span id={`${id}-${i}-detail`} className="text-sm text-field-700">
+                      {option.detail}
+                    </span>
                   ) : null}
                 </span>
               </label>

@@ -15,6 +15,7 @@ import type { DotItemDotProps } from 'recharts/types/util/types';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
 import { useMediaQuery } from '../../../lib/use-media-query';
 import type { MeasurementPoint } from '../api/types';
+import { roundTicks } from '../lib/chart-ticks';
 import { formatQuantity, specRangeText } from '../lib/record-format';
 
 // Palette colours (tailwind.config.ts). Out-of-spec visits differ by shape (a hollow diamond) as
@@ -50,7 +51,8 @@ export function MeasurementChart({
   const value = (v: number) => `${formatQuantity(v)}${unit ? ` ${unit}` : ''}`;
   const limits = [last.specMin, last.specMax].filter((v): v is number => v !== null);
   const values = [...rows.map((r) => r.value), ...limits];
-  const pad = Math.max((Math.max(...values) - Math.min(...values)) * 0.15, 1);
+  const pad = Math.max((Math.max(...values) - Math.min(...values)) * 0.1, 0.1);
+  const yTicks = roundTicks(Math.min(...values) - pad, Math.max(...values) + pad, 5);
 
   return (
     <figure className="flex flex-col gap-3">
@@ -88,8 +90,9 @@ export function MeasurementChart({
             />
             <YAxis
               type="number"
-              domain={[Math.min(...values) - pad, Math.max(...values) + pad]}
-              tickFormatter={(v: number) => formatQuantity(Math.round(v * 10) / 10)}
+              domain={[yTicks[0], yTicks[yTicks.length - 1]]}
+              ticks={yTicks}
+              tickFormatter={(v: number) => formatQuantity(v)}
               tick={{ fill: '#4a5b4d', fontSize: 13 }}
               stroke="#a3b2a3"
               width={narrow ? 44 : 56}

@@ -28,7 +28,11 @@ export function PartsFields({
   return (
     <LineList
       legend="Parts"
-      hint="Filled in from the chosen tasks' parts lists; change any line to what was actually used."
+      hint={
+        showCosts
+          ? "Filled in from the chosen tasks' parts lists; change any line to what was actually used."
+          : "Filled in from the chosen tasks' parts lists; change any line to what the visit needs."
+      }
       emptyText="No parts."
       addLabel="Add part"
       onAdd={() => rows.append({ partNumber: '', description: '', quantity: 1, unitCost: null })}

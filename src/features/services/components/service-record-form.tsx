@@ -209,10 +209,8 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
 
       {!isPlan ? (
         <>
-          <FormBlock title="Measurements">
+          <FormBlock title="Measurements and reassembly">
             <MeasurementsFields form={form} rows={measurements} />
-          </FormBlock>
-          <FormBlock title="Reassembly">
             <ReassemblyFields
               form={form}
               rows={settings}

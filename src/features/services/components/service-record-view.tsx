@@ -91,7 +91,7 @@ export function ServiceRecordView({
         <Alert tone="info">This plan was cancelled; its tasks are no longer booked.</Alert>
       ) : null}
 
-      <dl className={`grid grid-cols-1 gap-4 sm:grid-cols-3 ${card}`}>
+      <dl className={`grid grid-cols-2 gap-4 sm:grid-cols-3 ${card}`}>
         {facts.map((f) => (
           <div key={f.term} className="flex flex-col gap-1">
             <dt className="text-sm font-bold text-field-600">{f.term}</dt>

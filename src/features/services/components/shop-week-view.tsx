@@ -1,4 +1,5 @@
 import { useId } from 'react';
+import { Badge } from '../../../components/ui/badge';
 import { Section } from '../../../components/ui/card';
 import { formatLocalDate } from '../../../lib/fleet-format';
 import type { ShopDay, ShopWeek } from '../api/types';
@@ -72,18 +73,24 @@ function DayCard({ day, isToday, links }: { day: ShopDay; isToday: boolean; link
   return (
     <li
       aria-labelledby={headingId}
-      className={`grid gap-3 rounded-xl border bg-white p-4 shadow-card lg:grid-cols-[11rem_1fr_16rem] ${
+      className={`grid gap-3 rounded-xl border bg-white p-4 shadow-card lg:grid-cols-[12rem_1fr_16rem] ${
         isToday ? 'border-2 border-field-600' : 'border-field-200'
       }`}
     >
       <div className="flex flex-col gap-1">
         <h3 id={headingId} className="text-lg font-black text-field-950">
           {dateText}
-          {isToday ? <span className="ml-2 text-sm font-bold text-field-700">(today)</span> : null}
         </h3>
+        {isToday ? (
+          <Badge tone="accent" className="self-start">
+            Today
+          </Badge>
+        ) : null}
         {!empty ? (
           <p className="text-sm text-field-700">
-            Planned {formatHours(day.plannedLabourHours)}
+            {day.planned.length
+              ? `Planned labour ${formatHours(day.plannedLabourHours)}`
+              : 'No visit booked'}
             {day.unbookedDueLabourHours > 0
               ? ` · unbooked due ${formatHours(day.unbookedDueLabourHours)}`
               : ''}

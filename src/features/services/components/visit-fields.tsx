@@ -59,6 +59,7 @@ export function VisitFields({
         <div className="grid gap-4 sm:grid-cols-3">
           <TextField
             label="Date performed"
+            hint="The day the work was done."
             type="date"
             max={today}
             error={errors.performedOn?.message}
@@ -68,7 +69,7 @@ export function VisitFields({
             label="Meter at service"
             hint={
               last
-                ? `In ${meterUnitLabel(unit)}, as the meter reads. Last reading ${formatMeter(last.value, unit)} on ${formatDateTime(last.takenAt, timeZone)}.`
+                ? `In ${meterUnitLabel(unit)}, as the meter reads. Last reading ${formatMeter(last.value, unit)}, ${formatDateTime(last.takenAt, timeZone)}.`
                 : `In ${meterUnitLabel(unit)}, as the meter reads.`
             }
             type="number"

@@ -121,10 +121,10 @@ function MachineChoice({
     return (
       <div
         aria-disabled="true"
-        className="flex min-h-16 items-center gap-3 rounded-xl border-2 border-dashed border-poppy-300 bg-poppy-50/60 p-4"
+        className="flex min-h-16 flex-col items-start gap-2 rounded-xl border-2 border-dashed border-poppy-400 bg-poppy-50/60 p-4"
       >
         {details}
-        <Badge tone="overdue" icon="lock" className="whitespace-normal">
+        <Badge tone="overdue" icon="lock">
           Tagged out — do not use
         </Badge>
       </div>

@@ -45,6 +45,11 @@ export function WalkaroundScreen(props: WalkaroundScreenProps) {
   const draftApi = useWalkaroundDraft(orgId, machineId, purpose);
   const { update } = draftApi;
 
+  // The answer replaces a long form: show it from the top, where the heading is.
+  useEffect(() => {
+    if (result) window.scrollTo({ top: 0 });
+  }, [result]);
+
   // Keep the checklist with the draft, for carrying on without a connection.
   const loaded = query.data?.data;
   useEffect(() => {

@@ -1,0 +1,20 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { checklistKeys, walkaroundChecklistsKey } from './keys';
+
+/** DELETE a farm checklist: its category goes back to the built-in list. */
+export const deleteTemplate = (orgId: string, templateId: string) =>
+  apiClient.delete(`/organizations/${segment(orgId)}/checklist-templates/${segment(templateId)}`);
+
+export function useDeleteTemplate(orgId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (templateId: string) => deleteTemplate(orgId, templateId),
+    onSuccess: () =>
+      Promise.all(
+        [checklistKeys.list(orgId), walkaroundChecklistsKey].map((queryKey) =>
+          queryClient.invalidateQueries({ queryKey }),
+        ),
+      ),
+  });
+}

@@ -1,0 +1,18 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { checklistKeys } from './keys';
+import type { ChecklistTemplateList } from './types';
+
+/** The farm's checklists, one per category at most. */
+export const getTemplates = (orgId: string, signal?: AbortSignal) =>
+  apiClient.get<ChecklistTemplateList>(`/organizations/${segment(orgId)}/checklist-templates`, {
+    signal,
+  });
+
+export const templatesQueryOptions = (orgId: string) =>
+  queryOptions({
+    queryKey: checklistKeys.list(orgId),
+    queryFn: ({ signal }) => getTemplates(orgId, signal),
+  });
+
+export const useTemplates = (orgId: string) => useQuery(templatesQueryOptions(orgId));

@@ -1,0 +1,18 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { dealerKeys } from './keys';
+import type { Customer } from './types';
+
+export const getCustomers = (orgId: string, signal?: AbortSignal) =>
+  apiClient.get<{ data: Customer[]; abilities: { invite: boolean } }>(
+    `/organizations/${segment(orgId)}/customers`,
+    { signal },
+  );
+
+export const customersQueryOptions = (orgId: string) =>
+  queryOptions({
+    queryKey: dealerKeys.customers(orgId),
+    queryFn: ({ signal }) => getCustomers(orgId, signal),
+  });
+
+export const useCustomers = (orgId: string) => useQuery(customersQueryOptions(orgId));

@@ -1,0 +1,18 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
+import { dealerKeys } from './keys';
+import type { DealerInvitation } from './types';
+
+export const getDealerInvitation = (token: string, signal?: AbortSignal) =>
+  apiClient
+    .get<DataEnvelope<DealerInvitation>>(`/dealer-invitations/${segment(token)}`, { signal })
+    .then((body) => body.data);
+
+export const dealerInvitationQueryOptions = (token: string) =>
+  queryOptions({
+    queryKey: dealerKeys.invitation(token),
+    queryFn: ({ signal }) => getDealerInvitation(token, signal),
+    retry: false,
+  });
+
+export const useDealerInvitation = (token: string) => useQuery(dealerInvitationQueryOptions(token));

@@ -1,0 +1,51 @@
+import { Icon } from '../../../components/ui/icons';
+import type { BoardRow } from '../api/types';
+import { dateText, isStaleReading, meterText, rangeText, readingAgeText } from './dealer-format';
+
+/** The due meter value (as the meter fitted now reads) and the calendar limit, if any. */
+export function DueAt({ row }: { row: BoardRow }) {
+  const meter = row.dueOnMeter ?? row.due.dueMeter;
+  return (
+    <span className="flex flex-col">
+      {meter !== null ? (
+        <span className="tabular-nums">{meterText(meter, row.machine.meterUnit)}</span>
+      ) : null}
+      {row.due.dueDate ? (
+        <span className="text-sm text-field-600">
+          {meter !== null ? 'or by' : 'by'} {dateText(row.due.dueDate)}
+        </span>
+      ) : null}
+      {meter === null && !row.due.dueDate ? <span className="text-field-600">—</span> : null}
+    </span>
+  );
+}
+
+/** The date it falls due and the projected range (slower and faster use). */
+export function Projected({ row }: { row: BoardRow }) {
+  const range = rangeText(row.due.projectedLow, row.due.projectedHigh);
+  if (!row.due.effectiveDate && !range) return <span className="text-field-600">No forecast</span>;
+  return (
+    <span className="flex flex-col">
+      {row.due.effectiveDate ? <span>{dateText(row.due.effectiveDate)}</span> : null}
+      {range ? <span className="text-sm text-field-600">range {range}</span> : null}
+    </span>
+  );
+}
+
+/** How old the last reading is: the forecast is only as fresh as the meter. */
+export function ReadingAge({ row }: { row: BoardRow }) {
+  const stale = isStaleReading(row.lastReadingAgeDays);
+  return (
+    <span className="flex flex-col">
+      <span className={stale ? 'flex items-center gap-1 font-bold text-straw-900' : undefined}>
+        {stale ? <Icon name="alert" className="size-4" /> : null}
+        {readingAgeText(row.lastReadingAgeDays)}
+      </span>
+      {row.lastReading ? (
+        <span className="text-sm text-field-600 tabular-nums">
+          at {meterText(row.lastReading.value, row.machine.meterUnit)}
+        </span>
+      ) : null}
+    </span>
+  );
+}

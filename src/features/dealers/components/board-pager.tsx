@@ -1,0 +1,40 @@
+import { Button } from '../../../components/ui/button';
+
+/** "Showing 26–42 of 42" with previous/next; the total is the server's meta.total. */
+export function BoardPager({
+  page,
+  pageSize,
+  total,
+  onPage,
+}: {
+  page: number;
+  pageSize: number;
+  total: number;
+  onPage: (page: number) => void;
+}) {
+  const pages = Math.max(1, Math.ceil(total / pageSize));
+  const first = total === 0 ? 0 : (page - 1) * pageSize + 1;
+  const last = Math.min(total, page * pageSize);
+  return (
+    <nav aria-label="Pages of the board" className="flex flex-wrap items-center gap-3">
+      <p className="text-field-700" aria-live="polite">
+        Showing {first}–{last} of {total} {total === 1 ? 'service' : 'services'}
+      </p>
+      {pages > 1 ? (
+        <div className="ml-auto flex gap-2">
+          <Button
+            variant="secondary"
+            icon="back"
+            disabled={page <= 1}
+            onClick={() => onPage(page - 1)}
+          >
+            Previous page
+          </Button>
+          <Button variant="secondary" disabled={page >= pages} onClick={() => onPage(page + 1)}>
+            Next page
+          </Button>
+        </div>
+      ) : null}
+    </nav>
+  );
+}

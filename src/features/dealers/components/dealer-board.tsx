@@ -1,0 +1,257 @@
+import { useCallback, useRef, useState } from 'react';
+import { Link } from 'react-router-dom';
+import { DUE_STATUSES, DUE_STATUS_LABELS } from '../../../../shared/constants';
+import type { DueStatus } from '../../../../shared/domain/types';
+import { Alert } from '../../../components/ui/alert';
+import { Button, buttonClasses } from '../../../components/ui/button';
+import { cx } from '../../../components/ui/cx';
+import { EmptyState } from '../../../components/ui/empty-state';
+import { ErrorState } from '../../../components/ui/error-state';
+import { Icon } from '../../../components/ui/icons';
+import { LoadingRegion, Skeleton } from '../../../components/ui/skeleton';
+import { DueStatusBadge } from '../../../components/ui/status-badges';
+import { boardCsvHref, useBoard } from '../api/get-board';
+import type { BoardFilters, BoardRow, DueCounts } from '../api/types';
+import { BoardFiltersBar, type BoardFilterChange } from './board-filters';
+import { BoardList } from './board-list';
+import { BoardPager } from './board-pager';
+import { BookingDialog } from './booking-dialog';
+import { dateText } from './dealer-format';
+import { ReminderDialog } from './reminder-dialog';
+
+interface DealerBoardProps {
+  orgId: string;
+  timeZone: string;
+  filters: BoardFilters;
+  onFiltersChange: (change: BoardFilterChange & { page?: number }) => void;
+  customersHref: string;
+}
+
+/**
+ * "Coming due": every active customer's due services in one list (the farms' own due points),
+ * with filters, CSV export, and reminders and bookings for the selected services.
+ */
+export function DealerBoard({
+  orgId,
+  timeZone,
+  filters,
+  onFiltersChange,
+  customersHref,
+}: DealerBoardProps) {
+  const board = useBoard(orgId, filters);
+  const [selected, setSelected] = useState<Map<string, BoardRow>>(new Map());
+  const [dialog, setDialog] = useState<'reminder' | 'booking' | null>(null);
+  const listTop = useRef<HTMLDivElement>(null);
+
+  const change = useCallback(
+    (c: BoardFilterChange & { page?: number }) => {
+      if (c.page === undefined) setSelected(new Map());
+      onFiltersChange(c);
+    },
+    [onFiltersChange],
+  );
+  const toggle = (row: BoardRow, checked: boolean) =>
+    setSelected((prev) => {
+      const next = new Map(prev);
+      if (checked) next.set(row.taskId, row);
+      else next.delete(row.taskId);
+      return next;
+    });
+
+  if (board.isPending) return <BoardSkeleton />;
+  if (board.isError && !board.data)
+    return (
+      <ErrorState
+        title="The board didn't load"
+        message={board.error.message}
+        onRetry={() => board.refetch()}
+        retrying={board.isRefetching}
+      />
+    );
+
+  const { data: rows, meta } = board.data;
+  if (meta.customers.length === 0)
+    return (
+      <EmptyState
+        icon="team"
+        title="No customers linked yet"
+        action={
+          <Link className={buttonClasses('primary')} to={customersHref}>
+            Invite a customer
+          </Link>
+        }
+      >
+        <p>
+          When a farm links its fleet to your dealership, the machines coming due across your
+          customers show here.
+        </p>
+      </EmptyState>
+    );
+
+  const chosen = [...selected.values()];
+  const customers = [...new Map(chosen.map((r) => [r.customer.id, r.customer])).values()];
+  const oneCustomer = customers.length === 1 ? customers[0] : null;
+  const filtered = Boolean(
+    filters.customerId || filters.category || filters.status || filters.task,
+  );
+
+  return (
+    <div className="flex flex-col gap-6">
+      <Counts
+        counts={meta.counts}
+        active={filters.status}
+        onSelect={(status) => change({ status })}
+      />
+      <BoardFiltersBar filters={filters} customers={meta.customers} onChange={change} />
+      <div className="flex flex-wrap items-center gap-2">
+        <a className={buttonClasses('secondary')} href={boardCsvHref(orgId, filters)} download>
+          <Icon name="external" />
+          Download CSV
+        </a>
+        <Button icon="mail" disabled={!oneCustomer} onClick={() => setDialog('reminder')}>
+          Send reminder
+        </Button>
+        <Button
+          variant="secondary"
+          icon="clock"
+          disabled={!oneCustomer}
+          onClick={() => setDialog('booking')}
+        >
+          Propose booking
+        </Button>
+        <p className="text-sm text-field-700" aria-live="polite">
+          {chosen.length === 0
+            ? 'Tick services of one customer to send a reminder or propose a booking.'
+            : oneCustomer
+              ? `${chosen.length} selected at ${oneCustomer.name}.`
+              : 'The selection spans customers: keep services of one customer.'}
+        </p>
+      </div>
+      {board.isError ? <Alert>Couldn&apos;t refresh the board: {board.error.message}</Alert> : null}
+      <div
+        ref={listTop}
+        aria-busy={board.isPlaceholderData || undefined}
+        className="flex scroll-mt-20 flex-col gap-3"
+      >
+        <p className="text-sm text-field-700">
+          Overdue first, then by the date each service falls due, within the next {filters.horizon}{' '}
+          days. As of {dateText(meta.asOf)}.
+        </p>
+        {board.isPlaceholderData ? (
+          <p role="status" className="text-sm text-field-600">
+            Updating…
+          </p>
+        ) : null}
+        {rows.length === 0 ? (
+          <EmptyState
+            icon="check"
+            title={
+              filtered
+                ? 'No services match these filters'
+                : `Nothing due in ${filters.horizon} days`
+            }
+          >
+            <p>
+              {filtered
+                ? 'Clear a filter, or look further ahead.'
+                : 'Choose a longer horizon to see what comes after.'}
+            </p>
+          </EmptyState>
+        ) : (
+          <BoardList rows={rows} selected={new Set(selected.keys())} onToggle={toggle} />
+        )}
+        {meta.total > 0 && rows.length > 0 ? (
+          <BoardPager
+            page={meta.page}
+            pageSize={meta.pageSize}
+            total={meta.total}
+            onPage={(page) => {
+              change({ page });
+              listTop.current?.scrollIntoView({ block: 'start' });
+            }}
+          />
+        ) : null}
+        <p className="flex items-start gap-1.5 text-sm text-field-700">
+          <Icon name="alert" className="mt-0.5 size-4" />
+          <span>
+            Dates are projected from each farm&apos;s meter readings; an old reading makes them less
+            sure. Intervals are guides: follow the operator&apos;s manual and qualified service
+            practice.
+          </span>
+        </p>
+      </div>
+      {dialog === 'reminder' && oneCustomer ? (
+        <ReminderDialog
+          orgId={orgId}
+          customer={oneCustomer}
+          taskIds={chosen.map((r) => r.taskId)}
+          onClose={() => setDialog(null)}
+        />
+      ) : null}
+      {dialog === 'booking' && oneCustomer ? (
+        <BookingDialog
+          orgId={orgId}
+          timeZone={timeZone}
+          customer={oneCustomer}
+          rows={chosen}
+          onClose={() => setDialog(null)}
+        />
+      ) : null}
+    </div>
+  );
+}
+
+function Counts({
+  counts,
+  active,
+  onSelect,
+}: {
+  counts: DueCounts;
+  active: DueStatus | null;
+  onSelect: (status: DueStatus | null) => void;
+}) {
+  return (
+    <ul aria-label="Service counts" className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+      {DUE_STATUSES.map((status) => {
+        const pressed = active === status;
+        return (
+          <li key={status}>
+            <button
+              type="button"
+              aria-pressed={pressed}
+              aria-label={`${DUE_STATUS_LABELS[status]}: ${counts[status]}`}
+              onClick={() => onSelect(pressed ? null : status)}
+              className={cx(
+                'flex min-h-touch w-full flex-col items-start gap-1 rounded-xl border-2 bg-white p-3 text-left shadow-card hover:bg-oat-50',
+                pressed ? 'border-field-700' : 'border-transparent',
+              )}
+            >
+              <DueStatusBadge status={status} />
+              <span className="text-3xl font-black text-field-950 tabular-nums">
+                {counts[status]}
+              </span>
+            </button>
+          </li>
+        );
+      })}
+    </ul>
+  );
+}
+
+function BoardSkeleton() {
+  return (
+    <LoadingRegion label="Loading the board">
+      <div className="flex flex-col gap-6">
+        <div className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+          {Array.from({ length: 4 }, (_, i) => (
+            <Skeleton key={i} className="h-24 rounded-xl" />
+          ))}
+        </div>
+        <Skeleton className="h-12 w-full rounded-lg" />
+        {Array.from({ length: 5 }, (_, i) => (
+          <Skeleton key={i} className="h-16 w-full rounded-xl" />
+        ))}
+      </div>
+    </LoadingRegion>
+  );
+}

@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { DefectCloseInput } from '../../../../shared/schemas/defects';
+import { apiClient, segment } from '../../../lib/api-client';
+import { invalidateAfterDefectChange } from './invalidate';
+import type { Defect, DefectAbilities, MachineRef } from './types';
+
+/** POST …/defects/:defectId/close with a note or a completed service record of the machine. */
+export const closeDefect = (orgId: string, defectId: string, input: DefectCloseInput) =>
+  apiClient.post<{ data: Defect; abilities: DefectAbilities; machine: MachineRef }>(
+    `/organizations/${segment(orgId)}/defects/${segment(defectId)}/close`,
+    input,
+  );
+
+export function useCloseDefect(orgId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ defectId, input }: { defectId: string; input: DefectCloseInput }) =>
+      closeDefect(orgId, defectId, input),
+    onSuccess: () => invalidateAfterDefectChange(queryClient),
+  });
+}

@@ -1,0 +1,19 @@
+import { useQuery } from '@tanstack/react-query';
+import { apiClient, segment } from '../../../lib/api-client';
+import { defectKeys } from './keys';
+import type { CompletedRecord } from './types';
+
+/** The machine's latest completed service records, one of which may have fixed the defect. */
+export const getCompletedRecords = (orgId: string, machineId: string, signal?: AbortSignal) =>
+  apiClient
+    .get<{ data: CompletedRecord[] }>(
+      `/organizations/${segment(orgId)}/machines/${segment(machineId)}/service-records?status=completed&page=1&pageSize=20`,
+      { signal },
+    )
+    .then((body) => body.data);
+
+export const useCompletedRecords = (orgId: string, machineId: string) =>
+  useQuery({
+    queryKey: defectKeys.completedRecords(orgId, machineId),
+    queryFn: ({ signal }) => getCompletedRecords(orgId, machineId, signal),
+  });

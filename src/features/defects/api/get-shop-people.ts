@@ -1,0 +1,30 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { Role } from '../../../../shared/constants';
+import { apiClient, segment } from '../../../lib/api-client';
+import { defectKeys } from './keys';
+import type { PersonRef } from './types';
+
+interface MemberRow {
+  role: Role;
+  user: { id: string; name: string };
+}
+
+/** Who a defect can be assigned to: the farm's technicians and managers (from the members). */
+export const getShopPeople = (orgId: string, signal?: AbortSignal) =>
+  apiClient
+    .get<{ data: MemberRow[] }>(`/organizations/${segment(orgId)}/members`, { signal })
+    .then((body) =>
+      body.data
+        .filter((m) => m.role === 'technician' || m.role === 'manager')
+        .map((m): PersonRef => ({ id: m.user.id, name: m.user.name })),
+    );
+
+export const useShopPeople = (orgId: string, options: { enabled: boolean }) =>
+  useQuery({
+    ...queryOptions({
+      queryKey: defectKeys.shopPeople(orgId),
+      queryFn: ({ signal }) => getShopPeople(orgId, signal),
+      staleTime: 5 * 60_000,
+    }),
+    enabled: options.enabled,
+  });

@@ -1,0 +1,21 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { DefectUpdateInput } from '../../../../shared/schemas/defects';
+import { apiClient, segment } from '../../../lib/api-client';
+import { invalidateAfterDefectChange } from './invalidate';
+import type { Defect, DefectAbilities } from './types';
+
+/** PATCH …/defects/:defectId: assign, start or stop the repair, re-grade (technician, manager). */
+export const updateDefect = (orgId: string, defectId: string, input: DefectUpdateInput) =>
+  apiClient.patch<{ data: Defect; abilities: DefectAbilities }>(
+    `/organizations/${segment(orgId)}/defects/${segment(defectId)}`,
+    input,
+  );
+
+export function useUpdateDefect(orgId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ defectId, input }: { defectId: string; input: DefectUpdateInput }) =>
+      updateDefect(orgId, defectId, input),
+    onSuccess: () => invalidateAfterDefectChange(queryClient),
+  });
+}

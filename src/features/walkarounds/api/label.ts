@@ -1,0 +1,32 @@
+import { queryOptions, useQuery } from '@tanstack/react-query';
+import { API_BASE, apiClient, segment } from '../../../lib/api-client';
+import { walkaroundKeys } from './keys';
+import type { MachineRef } from './types';
+
+/** The printable label (SVG, 60 × 76 mm); the cookie session goes along with an <img>. */
+export const labelSvgUrl = (orgId: string, machineId: string, download = false) =>
+  `${API_BASE}/organizations/${segment(orgId)}/machines/${segment(machineId)}/label.svg${download ? '?download=1' : ''}`;
+
+/** The machine a label is for: its fleet number and name (GET machines/:id, trimmed). */
+export const getLabelMachine = (orgId: string, machineId: string, signal?: AbortSignal) =>
+  apiClient
+    .get<{ data: MachineRef }>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}`, {
+      signal,
+    })
+    .then(({ data: { id, fleetNumber, name, category, status, meterUnit } }) => ({
+      id,
+      fleetNumber,
+      name,
+      category,
+      status,
+      meterUnit,
+    }));
+
+export const labelMachineQueryOptions = (orgId: string, machineId: string) =>
+  queryOptions({
+    queryKey: [...walkaroundKeys.all, 'label-machine', orgId, machineId] as const,
+    queryFn: ({ signal }) => getLabelMachine(orgId, machineId, signal),
+  });
+
+export const useLabelMachine = (orgId: string, machineId: string) =>
+  useQuery(labelMachineQueryOptions(orgId, machineId));
