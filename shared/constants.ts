@@ -72,3 +72,21 @@ export const DUE_STATUS_LABELS = {
 export const DUE_HORIZONS = [7, 30, 90] as const;
 /** A machine in season with no reading for this many days is flagged as stale. */
 export const STALE_READING_DAYS = 14;
+
+/** The hazards a task or checklist item can carry (shared/schemas/schedule.ts HAZARDS), in words. */
+export const HAZARD_LABELS = {
+  pto: 'PTO shaft',
+  hydraulic_pressure: 'Stored hydraulic pressure',
+  raised_load: 'Raised implement or load',
+  stored_energy: 'Springs and other stored energy',
+  hot_fluid: 'Hot fluids',
+  battery: 'Battery',
+} as const;
+
+/** A hazard's words, also for a value this client does not know yet. */
+export const hazardLabel = (hazard: string): string =>
+  (HAZARD_LABELS as Record<string, string>)[hazard] ?? hazard.replace(/_/g, ' ');
+
+/** The line every caution ends with: the product defers to those who know the machine. */
+export const SAFETY_DEFERRAL =
+  "Follow the operator's manual, local regulations and qualified service practice.";

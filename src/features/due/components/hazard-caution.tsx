@@ -1,23 +1,17 @@
 import { Icon } from '../../../components/ui/icons';
+import { hazardLabel, SAFETY_DEFERRAL } from '../../../../shared/constants';
 
-// The hazards a task can carry (shared/schemas/schedule.ts HAZARDS), in words for the caution.
-const HAZARD_LABELS: Record<string, string> = {
-  pto: 'PTO shaft',
-  hydraulic_pressure: 'stored hydraulic pressure',
-  raised_load: 'raised implement or load',
-  stored_energy: 'stored energy (springs, snap rings)',
-  hot_fluid: 'hot fluids',
-  battery: 'battery',
-};
-
-export const hazardLabel = (hazard: string) => HAZARD_LABELS[hazard] ?? hazard.replace(/_/g, ' ');
+export { hazardLabel };
 
 /** "Caution: hot fluids and battery. Follow the operator's manual, …" */
 export function cautionText(hazards: readonly string[]): string {
-  const names = hazards.map(hazardLabel);
+  // mid-sentence: lower-case the first letter, but keep abbreviations such as PTO
+  const names = hazards
+    .map(hazardLabel)
+    .map((n) => (/^[A-Z]{2}/.test(n) ? n : n[0].toLowerCase() + n.slice(1)));
   const list =
     names.length > 1 ? `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}` : names[0];
-  return `Caution: ${list}. Follow the operator's manual, local regulations and qualified service practice.`;
+  return `Caution: ${list}. ${SAFETY_DEFERRAL}`;
 }
 
 /**

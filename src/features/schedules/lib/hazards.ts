@@ -1,14 +1,1 @@
-import type { Hazard } from '../../../../shared/schemas/schedule';
-
-export const HAZARD_LABELS: Record<Hazard, string> = {
-  pto: 'PTO shaft',
-  hydraulic_pressure: 'Stored hydraulic pressure',
-  raised_load: 'Raised implement or load',
-  stored_energy: 'Springs and other stored energy',
-  hot_fluid: 'Hot fluids',
-  battery: 'Battery',
-};
-
-/** The line every caution ends with: the product defers to those who know the machine. */
-export const SAFETY_DEFERRAL =
-  "Follow the operator's manual, local regulations and qualified service practice.";
+export { HAZARD_LABELS, SAFETY_DEFERRAL } from '../../../../shared/constants';
