@@ -43,6 +43,9 @@ interface RequestOptions {
   signal?: AbortSignal;
 }
 
+// 413 from an upload: the server's JSON names the field and the limit; this is for a proxy's page.
+const UPLOAD_TOO_LARGE = 'The file is too large.';
+
 // Shown when the answer is not our JSON at all (API down behind the dev proxy, a gateway page).
 const FALLBACK_MESSAGES: Record<number, string> = {
   0: "Couldn't reach Hourstone. Check your connection and try again.",
@@ -53,6 +56,7 @@ const FALLBACK_MESSAGES: Record<number, string> = {
   403: "You don't have access to that.",
   404: "That doesn't exist, or you don't have access to it.",
   429: 'Too many attempts. Wait a minute and try again.',
+  413: UPLOAD_TOO_LARGE,
 };
 
 function fallbackMessage(status: number): string {
@@ -105,7 +109,8 @@ async function toApiError(response: Response): Promise<ApiError> {
 
 async function request<T>(method: Method, path: string, options: RequestOptions = {}): Promise<T> {
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (options.body !== undefined) headers['Content-Type'] = 'application/json';
+  const multipart = options.body instanceof FormData;
+  if (options.body !== undefined && !multipart) headers['Content-Type'] = 'application/json';
 
   let response: Response;
   try {
@@ -113,7 +118,12 @@ async function request<T>(method: Method, path: string, options: RequestOptions 
       method,
       headers,
       credentials: 'include',
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
+      body:
+        options.body === undefined
+          ? undefined
+          : multipart
+            ? (options.body as FormData)
+            : JSON.stringify(options.body),
       signal: options.signal,
     });
   } catch (cause) {
@@ -137,6 +147,12 @@ export const apiClient = {
   put: <T>(path: string, body?: unknown, options?: RequestOptions) =>
     request<T>('PUT', path, { ...options, body }),
   delete: <T = void>(path: string, options?: RequestOptions) => request<T>('DELETE', path, options),
+  /** Sends one file as multipart form data in `field` (the browser sets the boundary header). */
+  upload: <T>(path: string, field: string, file: File, method: 'POST' | 'PUT' = 'POST') => {
+    const body = new FormData();
+    body.append(field, file);
+    return request<T>(method, path, { body });
+  },
 };
 
 /** Path segments from the URL or the user go through this so ids cannot break out of the path. */

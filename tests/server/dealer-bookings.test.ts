@@ -162,13 +162,11 @@ describe('service bookings', () => {
       'items.0.taskIds.1': "No such task on A-01's schedule",
       'items.1.machineId': 'No such machine at Alder Farm',
     });
-    const unlinked = await a
-      .post(path)
-      .send({
-        ...good,
-        customerId: w.unlinked.org.id,
-        items: [{ machineId: w.unlinked.machine.id }],
-      });
+    const unlinked = await a.post(path).send({
+      ...good,
+      customerId: w.unlinked.org.id,
+      items: [{ machineId: w.unlinked.machine.id }],
+    });
     expect(unlinked.status).toBe(422);
     expect(unlinked.body.error.fields).toEqual({ customerId: 'Not one of your linked customers' });
     expect(await countRows('service_bookings')).toBe(0);

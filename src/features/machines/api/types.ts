@@ -34,6 +34,9 @@ export interface Machine {
   dueStatus: DueStatus | null;
   /** ISO local date (yyyy-mm-dd) */
   nextDueDate: string | null;
+  /** served by the API to people who may see the machine; null without a photo */
+  photoUrl: string | null;
+  thumbnailUrl: string | null;
 }
 
 /** The server's usage estimate: meter units per day, with a low/high range. */

@@ -10,6 +10,7 @@ import type { MachineAbilities, MachineDetail } from '../api/types';
 import { useUpdateMachine } from '../api/update-machine';
 import { formatSeason } from '../lib/season-months';
 import { MachineForm } from './machine-form';
+import { MachinePhoto } from './machine-photo';
 
 const money = new Intl.NumberFormat(undefined, { maximumFractionDigits: 0 });
 
@@ -74,6 +75,9 @@ export function MachineDetails({
     <div className="flex flex-col gap-4">
       {notice ? <Alert tone="success">{notice}</Alert> : null}
       <Card>
+        <div className="mb-4">
+          <MachinePhoto orgId={orgId} machine={machine} canEdit={abilities.update} />
+        </div>
         <dl className="grid gap-x-6 gap-y-3 sm:grid-cols-2">
           {rows.map(([term, detail]) => (
             <div key={term} className="flex flex-col">

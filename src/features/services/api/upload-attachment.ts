@@ -1,46 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import { API_BASE, ApiError, apiClient, segment, type FieldErrors } from '../../../lib/api-client';
+import { apiClient, segment } from '../../../lib/api-client';
 import { serviceKeys } from './keys';
 import type { Attachment } from './types';
 
-// lib/api-client sends JSON only; a file goes as multipart form data here, and failures become
-// the same ApiError every other call throws (422 wrong type on `file`, 413 too large).
-
-const FALLBACK: Record<number, string> = {
-  0: "Couldn't reach Hourstone. Check your connection and try again.",
-  413: 'The file is too large: at most 10 MB.',
-};
-
+/** Uploads a photo or PDF (multipart field `file`): 422 wrong type, 413 too large, both on `file`. */
 export async function uploadAttachment(
   orgId: string,
   recordId: string,
   file: File,
 ): Promise<Attachment> {
-  const body = new FormData();
-  body.append('file', file);
-  let response: Response;
-  try {
-    response = await fetch(
-      `${API_BASE}/organizations/${segment(orgId)}/service-records/${segment(recordId)}/attachments`,
-      { method: 'POST', headers: { Accept: 'application/json' }, credentials: 'include', body },
-    );
-  } catch {
-    throw new ApiError({ status: 0, code: 'unreachable', message: FALLBACK[0] });
-  }
-  const parsed = (await response.json().catch(() => null)) as {
-    data?: Attachment;
-    error?: { code?: string; message?: string; fields?: FieldErrors };
-  } | null;
-  if (response.ok && parsed?.data) return parsed.data;
-  throw new ApiError({
-    status: response.status,
-    code: parsed?.error?.code ?? `http_${response.status}`,
-    message:
-      parsed?.error?.message ??
-      FALLBACK[response.status] ??
-      'Hourstone had a problem with that file. Try again in a moment.',
-    fields: parsed?.error?.fields,
-  });
+  const path = `/organizations/${segment(orgId)}/service-records/${segment(recordId)}/attachments`;
+  return (await apiClient.upload<{ data: Attachment }>(path, 'file', file)).data;
 }
 
 export const deleteAttachment = (orgId: string, recordId: string, attachmentId: string) =>
