@@ -214,7 +214,7 @@ describe('daily walkaround on a phone (browser)', () => {
     const row = page
       .getByRole('list', { name: 'Machines' })
       .getByRole('listitem')
-      .filter({ hasText: startsWith(fleet) });
+      .filter({ has: page.getByText(fleet, { exact: true }) });
     await row.waitFor();
     expect(await row.innerText()).toContain('Tagged out — do not use');
     expect(await row.getByRole('link').count()).toBe(0);

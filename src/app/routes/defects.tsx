@@ -54,6 +54,7 @@ export function DefectsPage() {
         filters={filtersFromSearch(search)}
         onFiltersChange={(next) => setSearch(searchFromFilters(next), { replace: true })}
         machineHref={(machineId) => paths.organization.machine.href(organization.id, machineId)}
+        recordHref={(recordId) => paths.organization.serviceRecord.href(organization.id, recordId)}
       />
     </>
   );

@@ -100,7 +100,7 @@ export function MainNav({ items }: { items: MainNavItem[] }) {
               >
                 {panelOpen ? <Icon name="close" className="size-5" /> : <MoreIcon />}
               </span>
-              <span>More</span>
+              <span className="leading-tight">More</span>
             </button>
           </li>
         ) : null}
@@ -162,9 +162,7 @@ function MainNavLink({ item }: { item: MainNavItem }) {
           >
             <Icon name={item.icon} className="size-5" />
           </span>
-          <span className="max-w-full leading-tight">
-            {item.label}
-          </span>
+          <span className="max-w-full leading-tight">{item.label}</span>
         </>
       )}
     </NavLink>

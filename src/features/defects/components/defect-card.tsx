@@ -12,12 +12,14 @@ export function DefectCard({
   defect,
   timeZone,
   machineHref,
+  recordHref,
   people,
 }: {
   orgId: string;
   defect: Defect;
   timeZone: string;
   machineHref: (machineId: string) => string;
+  recordHref: (recordId: string) => string;
   /** null: the caller may not handle defects (read-only) */
   people: PersonRef[] | null;
 }) {
@@ -76,8 +78,15 @@ export function DefectCard({
               Fixed
               {defect.fixedBy ? ` by ${defect.fixedBy.name}` : ''}
               {defect.fixedAt ? `, ${formatDateTime(defect.fixedAt, timeZone)}` : ''}
-              {defect.fixedByRecordId ? ' (closed by a service record)' : ''}
               {defect.fixNote ? `: ${defect.fixNote}` : ''}
+              {defect.fixedByRecordId ? (
+                <>
+                  {' · '}
+                  <Link to={recordHref(defect.fixedByRecordId)} className="font-bold underline">
+                    the service record that fixed it
+                  </Link>
+                </>
+              ) : null}
             </p>
           )}
         </div>

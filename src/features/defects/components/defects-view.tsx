@@ -21,6 +21,7 @@ interface DefectsViewProps {
   filters: DefectFilters;
   onFiltersChange: (next: DefectFilters) => void;
   machineHref: (machineId: string) => string;
+  recordHref: (recordId: string) => string;
 }
 
 /** The defects page: tagged-out machines, counts, filters, the list, and "Report a defect". */
@@ -31,6 +32,7 @@ export function DefectsView({
   filters,
   onFiltersChange,
   machineHref,
+  recordHref,
 }: DefectsViewProps) {
   const defects = useDefects(orgId, filters);
   const machines = useMachineOptions(orgId);
@@ -118,6 +120,7 @@ export function DefectsView({
                     defect={defect}
                     timeZone={timeZone}
                     machineHref={machineHref}
+                    recordHref={recordHref}
                     people={canHandle ? (people.data ?? []) : null}
                   />
                 </li>

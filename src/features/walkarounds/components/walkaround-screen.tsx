@@ -5,9 +5,11 @@ import { ErrorState } from '../../../components/ui/error-state';
 import { PageHeader } from '../../../components/ui/page-header';
 import { PageSkeleton } from '../../../components/ui/skeleton';
 import { isApiError } from '../../../lib/api-client';
+import { formatDateTime } from '../../../lib/format';
 import { useChecklist } from '../api/get-checklist';
 import { usePickableMachines } from '../api/get-pickable-machines';
 import type { Checklist } from '../api/types';
+import { useOutbox } from '../lib/use-outbox';
 import { useSendWalkaround, type SendResult } from '../lib/use-send-walkaround';
 import { useWalkaroundDraft } from '../lib/use-walkaround-draft';
 import { QueuedWalkaround } from './queued-walkaround';
@@ -148,6 +150,10 @@ function ReadyScreen({
   draftApi: ReturnType<typeof useWalkaroundDraft>;
   onSent: (result: SendResult) => void;
 }) {
+  const { items: queue } = useOutbox();
+  const waiting = queue.filter(
+    (item) => item.machine.id === checklist.machine.id && item.userId === userId,
+  );
   const send = useSendWalkaround({
     orgId,
     userId,
@@ -160,6 +166,17 @@ function ReadyScreen({
         <p role="status" className="rounded-lg border-2 border-sky-300 bg-sky-50 p-3 text-sky-900">
           No connection: this is the checklist saved on this phone. Carry on; the walkaround is kept
           here and sent when the connection returns.
+        </p>
+      ) : null}
+      {waiting.length > 0 ? (
+        <p className="rounded-lg border border-sky-300 bg-sky-50 p-3 text-sky-900">
+          {waiting.length === 1 ? 'A walkaround' : `${waiting.length} walkarounds`} of{' '}
+          {checklist.machine.fleetNumber} from this phone {waiting.length === 1 ? 'is' : 'are'}{' '}
+          still waiting to be sent (done{' '}
+          {waiting
+            .map((item) => formatDateTime(item.input.performedAt ?? item.queuedAt, timeZone))
+            .join(', ')}
+          ). Start this one only for a new check.
         </p>
       ) : null}
       <WalkaroundForm
