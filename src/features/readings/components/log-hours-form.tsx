@@ -10,7 +10,7 @@ import { isApiError } from '../../../lib/api-client';
 import { fromDateTimeLocalValue, toDateTimeLocalValue } from '../../../lib/fleet-format';
 import { useSaveReadings } from '../api/save-readings';
 import type { LatestReading } from '../api/types';
-import { parseMeterInput } from './reading-input';
+import { parseMeterInput } from '../../../lib/meter-input';
 import { ReadingRow } from './reading-row';
 
 interface Entry {

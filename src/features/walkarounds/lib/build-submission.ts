@@ -1,4 +1,5 @@
 import type { UnitSystem } from '../../../../shared/constants';
+import { parseMeterInput } from '../../../lib/meter-input';
 import {
   walkaroundCreateSchema,
   type WalkaroundCreateInput,
@@ -15,17 +16,7 @@ export interface SubmissionErrors {
   form?: string;
 }
 
-/**
- * A typed meter value as a number, NaN when it is not one. Imperial farms write 3,118.5 (comma
- * groups thousands); metric farms often type 3118,5 on a phone keypad (comma is the decimal).
- * (The same reading as the log-hours form's; a feature does not import another.)
- */
-export function parseMeterInput(text: string, units: UnitSystem): number {
-  let s = text.replace(/\s/g, '');
-  if (units === 'imperial') s = s.replace(/,/g, '');
-  else if (/^\d+,\d+$/.test(s)) s = s.replace(',', '.');
-  return /^\d+(\.\d+)?$/.test(s) ? Number(s) : Number.NaN;
-}
+export { parseMeterInput };
 
 export const UNANSWERED = 'Choose OK, Attention or Fail';
 

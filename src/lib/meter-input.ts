@@ -1,4 +1,4 @@
-import type { UnitSystem } from '../../../../shared/constants';
+import type { UnitSystem } from '../../shared/constants';
 
 /**
  * A typed meter value as a number, NaN when it is not one. Imperial farms write 3,118.5 (comma
