@@ -149,33 +149,56 @@ export async function dueList(
   return { asOf, rows, counts, total, stale: await staleMachines(access, asOf, now) };
 }
 
+/** The SQL of the due counters: tasks per status, with the list's filters (status aside). */
+export function dueCountsSql(filters: {
+  category?: boolean;
+  machineId?: boolean;
+  horizon?: boolean;
+  operator?: boolean;
+}) {
+  const where = ['d.organization_id = :org', "m.status <> 'sold'"];
+  if (filters.category) where.push('m.category = :category');
+  if (filters.machineId) where.push('d.machine_id = :machineId');
+  if (filters.horizon)
+    where.push("(d.status IN ('overdue','due_soon','no_forecast') OR d.sort_date <= :until)");
+  if (filters.operator) where.push(visibleToOperator);
+  return `SELECT d.status, count(*)::int AS n FROM task_due_points d
+     JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
+     WHERE ${where.join(' AND ')} GROUP BY d.status`;
+}
+
 /** Tasks per status with the same filters as the list (status aside), for the counters. */
 async function dueCounts(access: OrgAccess, query: DueQuery, asOf: string) {
-  const where = ['d.organization_id = :org', "m.status <> 'sold'"];
-  if (query.category) where.push('m.category = :category');
-  if (query.machineId) where.push('d.machine_id = :machineId');
-  if (query.horizon)
-    where.push("(d.status IN ('overdue','due_soon','no_forecast') OR d.sort_date <= :until)");
-  if (hasRole(access, 'operator')) where.push(visibleToOperator);
-  const rows = await sequelize.query<{ status: DuePoint['status']; n: number }>(
-    `SELECT d.status, count(*)::int AS n FROM task_due_points d
-     JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
-     WHERE ${where.join(' AND ')} GROUP BY d.status`,
-    {
-      replacements: {
-        org: access.organization.id,
-        user: access.userId,
-        category: query.category ?? null,
-        machineId: query.machineId ?? null,
-        until: query.horizon ? addDaysIso(asOf, query.horizon) : null,
-      },
-      type: QueryTypes.SELECT,
+  const sql = dueCountsSql({
+    category: !!query.category,
+    machineId: !!query.machineId,
+    horizon: !!query.horizon,
+    operator: hasRole(access, 'operator'),
+  });
+  const rows = await sequelize.query<{ status: DuePoint['status']; n: number }>(sql, {
+    replacements: {
+      org: access.organization.id,
+      user: access.userId,
+      category: query.category ?? null,
+      machineId: query.machineId ?? null,
+      until: query.horizon ? addDaysIso(asOf, query.horizon) : null,
     },
-  );
+    type: QueryTypes.SELECT,
+  });
   const counts = { overdue: 0, due_soon: 0, ok: 0, no_forecast: 0 };
   for (const r of rows) counts[r.status] = r.n;
   return counts;
 }
+
+/** The SQL of the stale-meter list (replacements :org, :user, :month, :cutoff). */
+export const staleSql = (operator: boolean) =>
+  `SELECT m.id, m.fleet_number, m.name, f.last_taken_at
+     FROM machines m LEFT JOIN machine_forecasts f ON f.machine_id = m.id AND f.organization_id = m.organization_id
+     WHERE m.organization_id = :org AND m.status <> 'sold'
+       AND (cardinality(m.season_months) = 0 OR :month = ANY(m.season_months))
+       AND (f.last_taken_at IS NULL OR f.last_taken_at < :cutoff)
+       ${operator ? `AND ${visibleToOperator}` : ''}
+     ORDER BY f.last_taken_at ASC NULLS FIRST`;
 
 /** Machines in season (or with no season set) with no reading for STALE_READING_DAYS days. */
 export async function staleMachines(access: OrgAccess, asOf: string, now = new Date()) {
@@ -185,24 +208,15 @@ export async function staleMachines(access: OrgAccess, asOf: string, now = new D
     fleet_number: string;
     name: string;
     last_taken_at: Date | null;
-  }>(
-    `SELECT m.id, m.fleet_number, m.name, f.last_taken_at
-     FROM machines m LEFT JOIN machine_forecasts f ON f.machine_id = m.id AND f.organization_id = m.organization_id
-     WHERE m.organization_id = :org AND m.status <> 'sold'
-       AND (cardinality(m.season_months) = 0 OR :month = ANY(m.season_months))
-       AND (f.last_taken_at IS NULL OR f.last_taken_at < :cutoff)
-       ${hasRole(access, 'operator') ? `AND ${visibleToOperator}` : ''}
-     ORDER BY f.last_taken_at ASC NULLS FIRST`,
-    {
-      replacements: {
-        org: access.organization.id,
-        user: access.userId,
-        month,
-        cutoff: new Date(now.getTime() - STALE_READING_DAYS * 86_400_000),
-      },
-      type: QueryTypes.SELECT,
+  }>(staleSql(hasRole(access, 'operator')), {
+    replacements: {
+      org: access.organization.id,
+      user: access.userId,
+      month,
+      cutoff: new Date(now.getTime() - STALE_READING_DAYS * 86_400_000),
     },
-  );
+    type: QueryTypes.SELECT,
+  });
   return rows.map((r) => ({
     machine: { id: r.id, fleetNumber: r.fleet_number, name: r.name },
     lastReadingAt: r.last_taken_at ? new Date(r.last_taken_at).toISOString() : null,
