@@ -201,6 +201,46 @@ export async function planReadings(
   return { outcomes, errors, toInsert };
 }
 
+/**
+ * Writes the one reading that comes with a service record or a walkaround, through the same rules
+ * as any other; an identical repeat returns the reading already stored. A refusal is renamed to
+ * the caller's form fields (e.g. value → meterValue, takenAt → performedOn).
+ */
+export async function writeAccompanyingReading(
+  access: OrgAccess,
+  item: NewReading,
+  fields: { value: string; takenAt: string },
+  transaction: Transaction,
+): Promise<MeterReading> {
+  try {
+    const [outcome] = await writeReadings(access, [item], transaction);
+    const reading =
+      outcome.reading ??
+      (await MeterReading.findOne({
+        where: {
+          organizationId: access.organization.id,
+          machineId: item.machine.id,
+          takenAt: item.takenAt,
+          value: item.value,
+        },
+        transaction,
+      }));
+    return reading!;
+  } catch (err) {
+    if (err instanceof AppError && err.fields) {
+      throw invalid(
+        Object.fromEntries(
+          Object.entries(err.fields).map(([k, v]) => [
+            k === 'takenAt' ? fields.takenAt : fields.value,
+            v,
+          ]),
+        ),
+      );
+    }
+    throw err;
+  }
+}
+
 /** Corrects a reading's value or time (rules re-checked against its neighbours); audited. */
 export async function correctReading(
   access: OrgAccess,

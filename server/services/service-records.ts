@@ -5,7 +5,6 @@ import { AppError, invalid, notFound } from '../errors';
 import {
   Defect,
   Membership,
-  MeterReading,
   ServiceMeasurement,
   ServiceRecord,
   ServiceTask,
@@ -24,7 +23,7 @@ import type {
 import { localDayNumber, isoFromDayNumber, todayIso } from '../../shared/domain';
 import type { OrgAccess } from '../policies/access';
 import { loadMachine } from './machines';
-import { writeReadings } from './readings';
+import { writeAccompanyingReading } from './readings';
 import { recomputeDuePoints } from './forecast';
 import { closeDefects } from './defects';
 import { recordAudit } from './audit';
@@ -170,40 +169,20 @@ function meterTime(access: OrgAccess, performedOn: string, meterReadAt?: string)
   return new Date(new TZDate(y, m - 1, d, 12, 0, 0, tz).getTime());
 }
 
-/** The service's meter reading through the reading rules; errors are named meterValue / performedOn. */
-async function serviceReading(
+/** The service's meter reading, through the reading rules (errors on meterValue / performedOn). */
+const serviceReading = (
   access: OrgAccess,
   machine: Machine,
   value: number,
   takenAt: Date,
   transaction: Transaction,
-) {
-  try {
-    const [outcome] = await writeReadings(
-      access,
-      [{ machine, value, takenAt, source: 'service' }],
-      transaction,
-    );
-    const reading =
-      outcome.reading ??
-      (await MeterReading.findOne({
-        where: { organizationId: access.organization.id, machineId: machine.id, takenAt, value },
-        transaction,
-      }));
-    return reading!;
-  } catch (err) {
-    if (err instanceof AppError && err.fields) {
-      const renamed = Object.fromEntries(
-        Object.entries(err.fields).map(([k, v]) => [
-          k === 'takenAt' ? 'performedOn' : 'meterValue',
-          v,
-        ]),
-      );
-      throw invalid(renamed);
-    }
-    throw err;
-  }
-}
+) =>
+  writeAccompanyingReading(
+    access,
+    { machine, value, takenAt, source: 'service' },
+    { value: 'meterValue', takenAt: 'performedOn' },
+    transaction,
+  );
 
 export interface TaskReset {
   taskId: string;

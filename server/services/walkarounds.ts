@@ -5,7 +5,6 @@ import { AppError, invalid, notFound } from '../errors';
 import {
   ChecklistTemplate,
   Defect,
-  MeterReading,
   Walkaround,
   WalkaroundPhoto,
   type Machine,
@@ -24,7 +23,7 @@ import type { OrgAccess } from '../policies/access';
 import { authorize, hasRole } from '../policies/access';
 import { canDoWalkaround, canInspect } from '../policies/walkaround';
 import { loadMachine } from './machines';
-import { writeReadings } from './readings';
+import { writeAccompanyingReading } from './readings';
 import { raiseDefect, taggedOutMessage } from './defects';
 import { recordAudit } from './audit';
 import { cautionFor, defaultChecklist } from './checklist-defaults';
@@ -407,40 +406,20 @@ async function findByClientId(
   return { walkaround: existing, machine, created: false, defectIds: defects.map((d) => d.id) };
 }
 
-/** The walkaround's meter reading through the reading rules; its errors are named meterValue / performedAt. */
-async function walkaroundReading(
+/** The walkaround's meter reading, through the reading rules (errors on meterValue / performedAt). */
+const walkaroundReading = (
   access: OrgAccess,
   machine: Machine,
   value: number,
   takenAt: Date,
   transaction: Transaction,
-) {
-  try {
-    const [outcome] = await writeReadings(
-      access,
-      [{ machine, value, takenAt, source: 'walkaround' }],
-      transaction,
-    );
-    return (
-      outcome.reading ??
-      (await MeterReading.findOne({
-        where: { organizationId: access.organization.id, machineId: machine.id, takenAt, value },
-        transaction,
-      }))
-    );
-  } catch (err) {
-    if (err instanceof AppError && err.fields) {
-      const renamed = Object.fromEntries(
-        Object.entries(err.fields).map(([k, v]) => [
-          k === 'takenAt' ? 'performedAt' : 'meterValue',
-          v,
-        ]),
-      );
-      throw invalid(renamed);
-    }
-    throw err;
-  }
-}
+) =>
+  writeAccompanyingReading(
+    access,
+    { machine, value, takenAt, source: 'walkaround' },
+    { value: 'meterValue', takenAt: 'performedAt' },
+    transaction,
+  );
 
 /** Stores an uploaded walkaround photo (already prepared); the walkaround claims it by id later. */
 export async function storeWalkaroundPhoto(access: OrgAccess, machine: Machine, key: string) {

@@ -14,7 +14,7 @@ import { boardCsvHref, useBoard } from '../api/get-board';
 import type { BoardFilters, BoardRow, DueCounts } from '../api/types';
 import { BoardFiltersBar, type BoardFilterChange } from './board-filters';
 import { BoardList } from './board-list';
-import { BoardPager } from './board-pager';
+import { Pager } from '../../../components/ui/pager';
 import { BookingDialog } from './booking-dialog';
 import { dateText } from './dealer-format';
 import { ReminderDialog } from './reminder-dialog';
@@ -161,7 +161,9 @@ export function DealerBoard({
           <BoardList rows={rows} selected={new Set(selected.keys())} onToggle={toggle} />
         )}
         {meta.total > 0 && rows.length > 0 ? (
-          <BoardPager
+          <Pager
+            label="Pages of the board"
+            noun={['service', 'services']}
             page={meta.page}
             pageSize={meta.pageSize}
             total={meta.total}

@@ -11,7 +11,7 @@ import { useDue } from '../api/get-due';
 import type { DueFilters } from '../api/types';
 import { DueFiltersBar } from './due-filters-bar';
 import { DueList } from './due-list';
-import { Pager } from './pager';
+import { Pager } from '../../../components/ui/pager';
 import { StaleMeters } from './stale-meters';
 import { StatusCounts } from './status-counts';
 
@@ -104,6 +104,8 @@ export function DueBoard({
           )}
           {meta.total > 0 && rows.length > 0 ? (
             <Pager
+              label="Pages of the due list"
+              noun={['task', 'tasks']}
               page={meta.page}
               pageSize={meta.pageSize}
               total={meta.total}
