@@ -2,13 +2,7 @@ import { randomUUID } from 'node:crypto';
 import { Op, QueryTypes, UniqueConstraintError, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { AppError, invalid, notFound } from '../errors';
-import {
-  ChecklistTemplate,
-  Defect,
-  Walkaround,
-  WalkaroundPhoto,
-  type Machine,
-} from '../models';
+import { ChecklistTemplate, Defect, Walkaround, WalkaroundPhoto, type Machine } from '../models';
 import type { ChecklistItem, WalkaroundItem } from '../models/walkaround';
 import type { MachineCategory } from '../../shared/constants';
 import type {
