@@ -1,17 +1,14 @@
 import { useCallback, useRef, useState } from 'react';
 import { Link } from 'react-router-dom';
-import { DUE_STATUSES, DUE_STATUS_LABELS } from '../../../../shared/constants';
-import type { DueStatus } from '../../../../shared/domain/types';
 import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClasses } from '../../../components/ui/button';
-import { cx } from '../../../components/ui/cx';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
 import { Icon } from '../../../components/ui/icons';
 import { LoadingRegion, Skeleton } from '../../../components/ui/skeleton';
-import { DueStatusBadge } from '../../../components/ui/status-badges';
+import { StatusCounts } from '../../../components/ui/status-counts';
 import { boardCsvHref, useBoard } from '../api/get-board';
-import type { BoardFilters, BoardRow, DueCounts } from '../api/types';
+import type { BoardFilters, BoardRow } from '../api/types';
 import { BoardFiltersBar, type BoardFilterChange } from './board-filters';
 import { BoardList } from './board-list';
 import { Pager } from '../../../components/ui/pager';
@@ -97,7 +94,8 @@ export function DealerBoard({
 
   return (
     <div className="flex flex-col gap-6">
-      <Counts
+      <StatusCounts
+        label="Service counts"
         counts={meta.counts}
         active={filters.status}
         onSelect={(status) => change({ status })}
@@ -200,43 +198,6 @@ export function DealerBoard({
         />
       ) : null}
     </div>
-  );
-}
-
-function Counts({
-  counts,
-  active,
-  onSelect,
-}: {
-  counts: DueCounts;
-  active: DueStatus | null;
-  onSelect: (status: DueStatus | null) => void;
-}) {
-  return (
-    <ul aria-label="Service counts" className="grid grid-cols-2 gap-3 sm:grid-cols-4">
-      {DUE_STATUSES.map((status) => {
-        const pressed = active === status;
-        return (
-          <li key={status}>
-            <button
-              type="button"
-              aria-pressed={pressed}
-              aria-label={`${DUE_STATUS_LABELS[status]}: ${counts[status]}`}
-              onClick={() => onSelect(pressed ? null : status)}
-              className={cx(
-                'flex min-h-touch w-full flex-col items-start gap-1 rounded-xl border-2 bg-white p-3 text-left shadow-card hover:bg-oat-50',
-                pressed ? 'border-field-700' : 'border-transparent',
-              )}
-            >
-              <DueStatusBadge status={status} />
-              <span className="text-3xl font-black text-field-950 tabular-nums">
-                {counts[status]}
-              </span>
-            </button>
-          </li>
-        );
-      })}
-    </ul>
   );
 }
 

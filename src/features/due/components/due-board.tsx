@@ -13,7 +13,7 @@ import { DueFiltersBar } from './due-filters-bar';
 import { DueList } from './due-list';
 import { Pager } from '../../../components/ui/pager';
 import { StaleMeters } from './stale-meters';
-import { StatusCounts } from './status-counts';
+import { StatusCounts } from '../../../components/ui/status-counts';
 
 type FilterChange = Partial<Omit<DueFilters, 'pageSize'>>;
 

@@ -1,8 +1,9 @@
-import { DUE_STATUSES, DUE_STATUS_LABELS } from '../../../../shared/constants';
-import type { DueStatus } from '../../../../shared/domain/types';
-import { cx } from '../../../components/ui/cx';
-import { DueStatusBadge } from '../../../components/ui/status-badges';
-import type { DueCounts } from '../api/types';
+import { DUE_STATUSES, DUE_STATUS_LABELS } from '../../../shared/constants';
+import type { DueStatus } from '../../../shared/domain/types';
+import { cx } from './cx';
+import { DueStatusBadge } from './status-badges';
+
+export type DueCounts = Record<DueStatus, number>;
 
 const RING: Record<DueStatus, string> = {
   overdue: 'border-poppy-600',
@@ -19,13 +20,16 @@ export function StatusCounts({
   counts,
   active,
   onSelect,
+  label = 'Task counts',
 }: {
+  /** the list's accessible name */
+  label?: string;
   counts: DueCounts;
   active: DueStatus | null;
   onSelect: (status: DueStatus | null) => void;
 }) {
   return (
-    <ul aria-label="Task counts" className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+    <ul aria-label={label} className="grid grid-cols-2 gap-3 sm:grid-cols-4">
       {DUE_STATUSES.map((status) => {
         const pressed = active === status;
         return (
