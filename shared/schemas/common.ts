@@ -18,3 +18,18 @@ export const personName = z
   .max(120, { error: 'Use at most 120 characters' });
 
 export const uuid = z.uuid({ error: 'Must be an id (uuid)' });
+
+/** The `page` and `pageSize` query fields of every paged list (pageSize defaults to `size`, at most `max`). */
+export const pagingFields = (size: number, max: number) => ({
+  page: z.coerce
+    .number({ error: 'Page must be a number' })
+    .int({ error: 'Page must be a whole number' })
+    .min(1, { error: 'Page starts at 1' })
+    .default(1),
+  pageSize: z.coerce
+    .number({ error: 'Page size must be a number' })
+    .int({ error: 'Page size must be a whole number' })
+    .min(1, { error: 'Page size is at least 1' })
+    .max(max, { error: `At most ${max} rows per page` })
+    .default(size),
+});

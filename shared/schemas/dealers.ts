@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { DUE_STATUSES, MACHINE_CATEGORIES } from '../constants';
-import { email, uuid } from './common';
+import { email, uuid, pagingFields } from './common';
 
 // Dealer links, the dealer's board and parts forecast, reminders and bookings. The client's forms
 // use these schemas with react-hook-form; the server validates with the same ones.
@@ -71,13 +71,7 @@ export const boardQuerySchema = z.object({
   status: z
     .enum(DUE_STATUSES, { error: `Status must be one of: ${DUE_STATUSES.join(', ')}` })
     .optional(),
-  page: z.coerce.number().int().min(1, { error: 'Page starts at 1' }).default(1),
-  pageSize: z.coerce
-    .number()
-    .int()
-    .min(1)
-    .max(200, { error: 'At most 200 rows per page' })
-    .default(25),
+  ...pagingFields(25, 200),
 });
 export type BoardQuery = z.infer<typeof boardQuerySchema>;
 
@@ -136,7 +130,6 @@ export const auditQuerySchema = z.object({
   dealerOrganizationId: uuid.optional(),
   /** 'dealer': everything done through a dealer link */
   via: z.enum(['dealer']).optional(),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(200).default(50),
+  ...pagingFields(50, 200),
 });
 export type AuditQuery = z.infer<typeof auditQuerySchema>;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { uuid } from './common';
+import { uuid, pagingFields } from './common';
 
 // Defects: found on a walkaround or reported directly, handled by the shop.
 
@@ -77,8 +77,7 @@ export const defectListQuerySchema = z.object({
       error: 'Assigned to must be a user id, me or none',
     })
     .optional(),
-  page: z.coerce.number().int().min(1, { error: 'Page starts at 1' }).default(1),
-  pageSize: z.coerce.number().int().min(1).max(200, { error: 'At most 200 per page' }).default(50),
+  ...pagingFields(50, 200),
 });
 export type DefectListQuery = z.infer<typeof defectListQuerySchema>;
 

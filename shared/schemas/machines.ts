@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { MACHINE_CATEGORIES, MACHINE_STATUSES, METER_UNITS } from '../constants';
-import { uuid } from './common';
+import { uuid, pagingFields } from './common';
 
 const money = (label: string) =>
   z
@@ -62,7 +62,6 @@ export const machineListQuerySchema = z.object({
   q: z.string().trim().max(100).optional(),
   sort: z.enum(MACHINE_SORTS).default('fleetNumber'),
   order: z.enum(['asc', 'desc']).default('asc'),
-  page: z.coerce.number().int().min(1).default(1),
-  pageSize: z.coerce.number().int().min(1).max(200).default(50),
+  ...pagingFields(50, 200),
 });
 export type MachineListQuery = z.infer<typeof machineListQuerySchema>;

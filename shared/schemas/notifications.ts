@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { MACHINE_CATEGORIES } from '../constants';
-import { uuid } from './common';
+import { uuid, pagingFields } from './common';
 
 export const DIGEST_FREQUENCIES = ['daily', 'weekly', 'off'] as const;
 export type DigestFrequency = (typeof DIGEST_FREQUENCIES)[number];
@@ -59,13 +59,7 @@ export type NotificationStatusName = (typeof NOTIFICATION_STATUSES)[number];
 
 export const notificationListQuerySchema = z.object({
   status: z.enum(NOTIFICATION_STATUSES, { error: 'Status is queued, sent or failed' }).optional(),
-  page: z.coerce.number().int().min(1, { error: 'Page starts at 1' }).default(1),
-  pageSize: z.coerce
-    .number()
-    .int()
-    .min(1)
-    .max(200, { error: 'At most 200 rows per page' })
-    .default(50),
+  ...pagingFields(50, 200),
 });
 export type NotificationListQuery = z.infer<typeof notificationListQuerySchema>;
 

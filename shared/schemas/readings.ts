@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { uuid } from './common';
+import { uuid, pagingFields } from './common';
 
 export const readingCreateSchema = z.object({
   value: z
@@ -50,12 +50,6 @@ export const dueQuerySchema = z.object({
 export type DueQuery = z.infer<typeof dueQuerySchema>;
 
 export const dueListQuerySchema = dueQuerySchema.extend({
-  page: z.coerce.number().int().min(1, { error: 'Page starts at 1' }).default(1),
-  pageSize: z.coerce
-    .number()
-    .int()
-    .min(1)
-    .max(500, { error: 'At most 500 rows per page' })
-    .default(100),
+  ...pagingFields(100, 500),
 });
-export type DueListQuery = z.infer<typeof dueQuerySchema>;
+export type DueListQuery = z.infer<typeof dueListQuerySchema>;

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { uuid } from './common';
+import { uuid, pagingFields } from './common';
 import { FLUID_UNITS } from './schedule';
 
 // Service records: one visit to a machine, planned or done. The client's forms use these schemas
@@ -192,13 +192,7 @@ export const serviceHistoryQuerySchema = z.object({
   status: z
     .enum(SERVICE_STATUSES, { error: `Status must be one of: ${SERVICE_STATUSES.join(', ')}` })
     .optional(),
-  page: z.coerce.number().int().min(1, { error: 'Page starts at 1' }).default(1),
-  pageSize: z.coerce
-    .number()
-    .int()
-    .min(1)
-    .max(100, { error: 'At most 100 records per page' })
-    .default(20),
+  ...pagingFields(20, 100),
 });
 export type ServiceHistoryQuery = z.infer<typeof serviceHistoryQuerySchema>;
 

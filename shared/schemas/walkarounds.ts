@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { MACHINE_CATEGORIES } from '../constants';
-import { uuid } from './common';
+import { uuid, pagingFields } from './common';
 import { HAZARDS } from './schedule';
 
 // Daily walkarounds (pre-operation inspections) and the checklist templates they follow.
@@ -115,8 +115,7 @@ export type WalkaroundCreateInput = z.infer<typeof walkaroundCreateSchema>;
 export const walkaroundListQuerySchema = z.object({
   machineId: uuid.optional(),
   result: z.enum(WALKAROUND_RESULTS).optional(),
-  page: z.coerce.number().int().min(1, { error: 'Page starts at 1' }).default(1),
-  pageSize: z.coerce.number().int().min(1).max(100, { error: 'At most 100 per page' }).default(20),
+  ...pagingFields(20, 100),
 });
 export type WalkaroundListQuery = z.infer<typeof walkaroundListQuerySchema>;
 

@@ -22,7 +22,7 @@ import {
   readingSchema,
   replacementSchema,
 } from '../../presenters/machine';
-import { listMachines, loadMachine } from '../../services/machines';
+import { listMachines, loadMachine, loadVisibleMachines } from '../../services/machines';
 import {
   correctReading,
   deleteReading,
@@ -197,21 +197,25 @@ export function readingsRouter(): Router {
       const access = req.access!;
       const items: NewReading[] = [];
       const missing: Record<string, string> = {};
+      const machines = await loadVisibleMachines(
+        access,
+        body.readings.map((r) => r.machineId),
+      );
       for (const [i, r] of body.readings.entries()) {
-        try {
-          const { machine } = await loadMachine(access, r.machineId);
-          if (!canLogReading(access, machine))
-            missing[`readings.${i}.machineId`] =
-              `${machine.fleetNumber} is sold; readings are closed`;
-          items.push({
-            machine,
-            value: r.value,
-            takenAt: r.takenAt ? new Date(r.takenAt) : new Date(),
-            source: 'manual' as const,
-          });
-        } catch {
+        const machine = machines.get(r.machineId);
+        if (!machine) {
           missing[`readings.${i}.machineId`] = 'No such machine in this farm';
+          continue;
         }
+        if (!canLogReading(access, machine))
+          missing[`readings.${i}.machineId`] =
+            `${machine.fleetNumber} is sold; readings are closed`;
+        items.push({
+          machine,
+          value: r.value,
+          takenAt: r.takenAt ? new Date(r.takenAt) : new Date(),
+          source: 'manual' as const,
+        });
       }
       if (Object.keys(missing).length) throw invalid(missing);
       const outcomes = await sequelize.transaction((transaction) =>
