@@ -16,11 +16,19 @@ import { runCommand, stopAll } from './lib/processes.mjs';
 import { runTsScript, startApi, startFakeS3, startMailCatcher } from './lib/app.mjs';
 import { addCounts, countVitestReport, exitCodeFor, summaryLine } from './lib/report.mjs';
 
-const TEST_API_PORT = 4311;
-const TEST_SMTP_PORT = 2527;
-const TEST_CATCHER_PORT = 2528;
-const TEST_S3_PORT = 4570;
-const REPORTS_DIR = path.join(projectRoot, 'tests', '.reports');
+// HOURSTONE_TEST_SLOT=N (1-9) lets several test runs share one checkout: each slot has its own
+// ports, PostgreSQL cluster, object-store folder and reports. Slot 0 (unset) is what CI runs.
+const SLOT = Number(process.env.HOURSTONE_TEST_SLOT ?? 0);
+if (!Number.isInteger(SLOT) || SLOT < 0 || SLOT > 9) {
+  throw new Error(`HOURSTONE_TEST_SLOT must be a whole number from 0 to 9 (got ${SLOT})`);
+}
+const slotSuffix = SLOT === 0 ? '' : `-${SLOT}`;
+const TEST_API_PORT = 4311 + SLOT * 10;
+const TEST_SMTP_PORT = 2527 + SLOT * 10;
+const TEST_CATCHER_PORT = 2528 + SLOT * 10;
+const TEST_S3_PORT = 4570 + SLOT * 10;
+const TEST_PG_PORT = 54311 + SLOT * 10;
+const REPORTS_DIR = path.join(projectRoot, 'tests', `.reports${slotSuffix}`);
 const UNIT_REPORT = path.join(REPORTS_DIR, 'unit.json');
 const E2E_REPORT = path.join(REPORTS_DIR, 'e2e.json');
 const CHROMIUM_CANDIDATES = ['/usr/bin/chromium', '/usr/bin/chromium-browser'];
@@ -169,8 +177,8 @@ async function main() {
   section('services for the tests');
   try {
     postgres = await startPostgres({
-      name: 'test',
-      port: process.env.PG_TEST_PORT,
+      name: `test${slotSuffix}`,
+      port: process.env.PG_TEST_PORT ?? TEST_PG_PORT,
       externalUrl: process.env.TEST_DATABASE_URL,
     });
     if (!postgres.external) postgres.recreateDatabase('hourstone_test');
@@ -190,7 +198,7 @@ async function main() {
     });
     env.SMTP_URL = mail.smtpUrl;
     env.MAIL_CATCHER_URL = mail.catcherUrl;
-    const s3Dir = path.join(projectRoot, '.data', 's3-test');
+    const s3Dir = path.join(projectRoot, '.data', `s3-test${slotSuffix}`);
     rmSync(s3Dir, { recursive: true, force: true });
     Object.assign(
       env,

@@ -286,9 +286,10 @@ export async function startPostgres({ name, port, database, externalUrl } = {}) 
       },
     };
   }
-  if (!DEFAULT_PORTS[name]) throw new PostgresError(`unknown cluster name: ${name}`);
-  const wantedPort = Number(port || DEFAULT_PORTS[name]);
-  const dbName = identifier(database ?? DEFAULT_DATABASES[name]);
+  const kind = name.replace(/-\d+$/, '');
+  if (!DEFAULT_PORTS[kind]) throw new PostgresError(`unknown cluster name: ${name}`);
+  const wantedPort = Number(port || DEFAULT_PORTS[kind]);
+  const dbName = identifier(database ?? DEFAULT_DATABASES[kind]);
 
   let binDir = findServerBinaries();
   if (!binDir) {
@@ -328,7 +329,7 @@ export async function startPostgres({ name, port, database, externalUrl } = {}) 
         listen_addresses: '127.0.0.1',
         port: wantedPort,
         unix_socket_directories: socketDir,
-        ...(name === 'test' ? FAST_TEST_SETTINGS : {}),
+        ...(kind === 'test' ? FAST_TEST_SETTINGS : {}),
       },
       ids,
     );
