@@ -4,6 +4,7 @@ import { UniqueConstraintError, ValidationError } from 'sequelize';
 import { AppError } from '../errors';
 import { logger } from '../logger';
 import { fieldErrors } from './validate';
+import { DATABASE_RETRY_AFTER_SECONDS, isDatabaseUnavailable } from './database-unavailable';
 
 export const notFoundHandler: RequestHandler = (_req, _res, next) => {
   next(new AppError(404, 'not_found', 'No such route'));
@@ -29,6 +30,16 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   } else if (err instanceof ValidationError) {
     status = 422;
     body = { code: 'invalid', message: err.message };
+  } else if (isDatabaseUnavailable(err)) {
+    // Down, restarting or out of connections: not the caller's fault, so 503 and when to retry.
+    status = 503;
+    body = {
+      code: 'unavailable',
+      message:
+        "Hourstone's database is not answering right now (it may be restarting). Try again in a few seconds.",
+    };
+    res.set('Retry-After', String(DATABASE_RETRY_AFTER_SECONDS));
+    logger.warn({ err, url: req.originalUrl }, 'database unavailable');
   } else if (err?.type === 'entity.parse.failed') {
     status = 400;
     body = { code: 'bad_json', message: 'The request body is not valid JSON' };

@@ -2,6 +2,7 @@ import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router-dom';
 import { FullPageMessage } from '../components/errors/full-page-message';
 import { ErrorBoundary } from '../components/errors/error-boundary';
+import { ReconnectingBanner } from '../components/errors/reconnecting-banner';
 import { Button } from '../components/ui/button';
 import { clearSession, sessionKeys, type Me } from '../lib/auth';
 import { createQueryClient } from '../lib/query-client';
@@ -40,6 +41,7 @@ export function AppProviders() {
     >
       <QueryClientProvider client={queryClient}>
         <RouterProvider router={router} />
+        <ReconnectingBanner />
       </QueryClientProvider>
     </ErrorBoundary>
   );

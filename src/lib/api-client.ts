@@ -10,7 +10,7 @@ export class ApiError extends Error {
   readonly status: number;
   readonly code: string;
   readonly fields: FieldErrors;
-  /** seconds to wait before trying again (429), when the server said so */
+  /** seconds to wait before trying again (429, 503), when the server said so */
   readonly retryAfter: number | null;
 
   constructor(init: {
@@ -30,6 +30,13 @@ export class ApiError extends Error {
 }
 
 export const isApiError = (error: unknown): error is ApiError => error instanceof ApiError;
+
+/**
+ * The server (or its database) cannot answer now: no connection, a gateway without the API, or
+ * our 503 while PostgreSQL restarts. Trying again later can succeed; the request itself was fine.
+ */
+export const isUnavailable = (error: unknown): error is ApiError =>
+  isApiError(error) && [0, 502, 503, 504].includes(error.status);
 
 /** The response body of a successful call that returns one record or a list. */
 export interface DataEnvelope<T> {

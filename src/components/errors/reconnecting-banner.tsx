@@ -1,0 +1,25 @@
+import { useIsFetching, type Query } from '@tanstack/react-query';
+import { isUnavailable } from '../../lib/api-client';
+import { Spinner } from '../ui/spinner';
+
+/** A read that failed because the server or its database was away, and is being tried again. */
+export const isRetryingUnavailable = (query: Query) =>
+  query.state.fetchFailureCount > 0 && isUnavailable(query.state.fetchFailureReason);
+
+/**
+ * Says plainly, while reads are retried after a 503 or a dropped connection, that Hourstone is
+ * trying again by itself, so a page that stays on its skeleton does not look broken.
+ */
+export function ReconnectingBanner() {
+  const retrying = useIsFetching({ predicate: isRetryingUnavailable });
+  if (retrying === 0) return null;
+  return (
+    <div
+      role="status"
+      className="fixed inset-x-0 bottom-0 z-50 flex items-center justify-center gap-2 border-t-2 border-straw-400 bg-straw-50 px-4 py-2 text-straw-900"
+    >
+      <Spinner />
+      <span>Hourstone&rsquo;s server isn&rsquo;t answering right now. Trying again&hellip;</span>
+    </div>
+  );
+}
