@@ -12,6 +12,7 @@ import {
   type ReminderFarm,
 } from '../server/services/reminders';
 import { todayIso } from '../shared/domain';
+import { localDaysSince, staleCutoff } from '../server/services/stale-meters';
 import { loadJobSchedule } from './schedule';
 import { withJobLock } from './lock';
 
@@ -30,7 +31,8 @@ interface StaleAssignment {
 
 /**
  * People assigned to a machine that is in service and in season (or has no season set) with no
- * reading for `days` days (counted from the machine's creation when it never had one).
+ * reading for `days` of the farm's calendar days (counted from the machine's creation when it
+ * never had one).
  */
 async function staleAssignments(farm: ReminderFarm, month: number, cutoff: Date) {
   return sequelize.query<StaleAssignment>(
@@ -78,13 +80,13 @@ function nudgeMessage(farm: ReminderFarm, a: StaleAssignment, daysSince: number)
 export async function perform(now = new Date(), days = loadJobSchedule().STALE_NUDGE_DAYS) {
   return withJobLock('stale-meter-nudge', async () => {
     let queued = 0;
-    const cutoff = new Date(now.getTime() - days * 86_400_000);
     for (const farm of await farmsForReminders()) {
       const clock = localClock(farm.timeZone, now);
       if (clock.hour < farm.digestHour) continue;
+      const cutoff = staleCutoff(farm.timeZone, now, days);
       for (const a of await staleAssignments(farm, clock.month, cutoff)) {
         const since = new Date(a.since);
-        const daysSince = Math.floor((now.getTime() - since.getTime()) / 86_400_000);
+        const daysSince = localDaysSince(since, farm.timeZone, now);
         const round = Math.floor(daysSince / days);
         const added = await queueMessage({
           organizationId: farm.id,

@@ -2,10 +2,11 @@ import { QueryTypes } from 'sequelize';
 import { sequelize } from '../db';
 import type { OrgAccess } from '../policies/access';
 import { hasRole } from '../policies/access';
-import { addDaysIso, daysBetweenIso, todayIso, type DuePoint } from '../../shared/domain';
+import { addDaysIso, todayIso, type DuePoint } from '../../shared/domain';
 import { STALE_READING_DAYS } from '../../shared/constants';
 import type { DueQuery } from '../../shared/schemas/readings';
 import { ensureDuePointsCurrent } from './forecast';
+import { localDaysSince, staleCutoff } from './stale-meters';
 
 export interface DueRow {
   taskId: string;
@@ -200,7 +201,7 @@ export const staleSql = (operator: boolean) =>
        ${operator ? `AND ${visibleToOperator}` : ''}
      ORDER BY f.last_taken_at ASC NULLS FIRST`;
 
-/** Machines in season (or with no season set) with no reading for STALE_READING_DAYS days. */
+/** Machines in season (or with no season set) with no reading for STALE_READING_DAYS local days. */
 export async function staleMachines(access: OrgAccess, asOf: string, now = new Date()) {
   const month = Number(asOf.slice(5, 7));
   const rows = await sequelize.query<{
@@ -213,7 +214,7 @@ export async function staleMachines(access: OrgAccess, asOf: string, now = new D
       org: access.organization.id,
       user: access.userId,
       month,
-      cutoff: new Date(now.getTime() - STALE_READING_DAYS * 86_400_000),
+      cutoff: staleCutoff(access.organization.timeZone, now, STALE_READING_DAYS),
     },
     type: QueryTypes.SELECT,
   });
@@ -221,10 +222,7 @@ export async function staleMachines(access: OrgAccess, asOf: string, now = new D
     machine: { id: r.id, fleetNumber: r.fleet_number, name: r.name },
     lastReadingAt: r.last_taken_at ? new Date(r.last_taken_at).toISOString() : null,
     daysSince: r.last_taken_at
-      ? daysBetweenIso(
-          new Date(r.last_taken_at).toISOString().slice(0, 10),
-          now.toISOString().slice(0, 10),
-        )
+      ? localDaysSince(new Date(r.last_taken_at), access.organization.timeZone, now)
       : null,
   }));
 }
