@@ -14,6 +14,7 @@ import { devRouter } from './routes/dev/dev.router';
 import { machinesRouter } from './routes/machines/machines.router';
 import { machinePhotoRouter } from './routes/machines/photo.router';
 import { tasksRouter } from './routes/tasks/tasks.router';
+import { machineStatusRouter } from './routes/machines/status.router';
 import { readingsRouter } from './routes/readings/readings.router';
 import { dueRouter } from './routes/due/due.router';
 import { servicesRouter } from './routes/services/services.router';
@@ -74,6 +75,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(dueRouter());
   api.use(servicesRouter());
   api.use(walkaroundsRouter());
+  api.use(machineStatusRouter());
   api.use(defectsRouter());
   api.use(notificationsRouter());
   api.use(calendarRouter());

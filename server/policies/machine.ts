@@ -15,6 +15,9 @@ export const canLogReading = (access: OrgAccess, machine: Machine) =>
 export const canCorrectReading = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
 export const canReplaceMeter = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
 export const canImportReadings = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
+/** Returning a tagged-out machine to service: the farm's technicians and managers, never a dealer. */
+export const canReturnToService = (access: OrgAccess) =>
+  access.via === 'member' && hasRole(access, 'manager', 'technician');
 
 export const machineAbilities = (access: OrgAccess, machine: Machine) => ({
   update: canUpdateMachine(access),
@@ -23,4 +26,5 @@ export const machineAbilities = (access: OrgAccess, machine: Machine) => ({
   logReading: canLogReading(access, machine),
   correctReading: canCorrectReading(access),
   replaceMeter: canReplaceMeter(access),
+  returnToService: canReturnToService(access) && machine.status === 'tagged_out',
 });

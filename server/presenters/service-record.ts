@@ -139,8 +139,19 @@ export const serviceRecordSchema = z
   .openapi('ServiceRecord');
 export type PresentedRecord = z.infer<typeof serviceRecordSchema>;
 
-/** Presents records with their machine, measurements, attachments, people and task labour (batched). */
-export async function presentRecords(records: ServiceRecord[]): Promise<PresentedRecord[]> {
+/** Whether the reader may see which defects a record closes: a farm's members, never a dealer. */
+export interface RecordView {
+  withDefects: boolean;
+}
+
+/**
+ * Presents records with their machine, measurements, attachments, people and task labour
+ * (batched). `defectIds` is empty unless the view allows defects (the caller says; hidden by default).
+ */
+export async function presentRecords(
+  records: ServiceRecord[],
+  view: RecordView = { withDefects: false },
+): Promise<PresentedRecord[]> {
   if (!records.length) return [];
   const ids = records.map((r) => r.id);
   const orgId = records[0].organizationId;
@@ -221,7 +232,7 @@ export async function presentRecords(records: ServiceRecord[]): Promise<Presente
       measurements: (measurementsOf.get(r.id) ?? []).map(presentMeasurement),
       reassemblySettings: r.reassemblySettings,
       unrestoredReason: r.unrestoredReason,
-      defectIds: r.defectIds,
+      defectIds: view.withDefects ? r.defectIds : [],
       attachments: (attachmentsOf.get(r.id) ?? []).map((a) => ({
         id: a.id,
         kind: a.kind,
@@ -242,6 +253,6 @@ export async function presentRecords(records: ServiceRecord[]): Promise<Presente
   });
 }
 
-export async function presentRecord(record: ServiceRecord) {
-  return (await presentRecords([record]))[0];
+export async function presentRecord(record: ServiceRecord, view?: RecordView) {
+  return (await presentRecords([record], view))[0];
 }

@@ -1,17 +1,17 @@
-import { Op, QueryTypes, type Transaction } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
-import { AppError, invalid, notFound } from '../errors';
+import { AppError, forbidden, invalid, notFound } from '../errors';
 import { Defect, Machine, Membership, ServiceRecord } from '../models';
 import type {
   DefectCloseInput,
   DefectCreateInput,
-  DefectListQuery,
   DefectSeverity,
   DefectUpdateInput,
 } from '../../shared/schemas/defects';
-import { hasRole, type OrgAccess } from '../policies/access';
+import type { OrgAccess } from '../policies/access';
 import { loadMachine } from './machines';
 import { recordAudit } from './audit';
+import { openCriticalDefects, tagOut } from './machine-status';
 
 const SEVERITY_RANK: Record<DefectSeverity, number> = { critical: 0, major: 1, minor: 2 };
 const ACTIVE = ['open', 'in_repair'] as const;
@@ -53,50 +53,6 @@ const audit = (
     },
     transaction,
   );
-
-/** Open (or in repair) critical defects of a machine. */
-export const openCriticalDefects = (machine: Machine, transaction?: Transaction) =>
-  Defect.findAll({
-    where: {
-      organizationId: machine.organizationId,
-      machineId: machine.id,
-      severity: 'critical',
-      status: { [Op.in]: [...ACTIVE] },
-    },
-    order: [['createdAt', 'ASC']],
-    transaction,
-  });
-
-/** Tags a machine out (a sold one stays sold). Returns whether its status changed. */
-export async function tagOut(
-  access: OrgAccess,
-  machine: Machine,
-  reason: string,
-  transaction: Transaction,
-): Promise<boolean> {
-  if (machine.status !== 'in_service') return false;
-  await machine.update({ status: 'tagged_out' }, { transaction });
-  await audit(access, 'machine.tag_out', 'machine', machine.id, { reason }, transaction);
-  return true;
-}
-
-/**
- * The machine's status follows its defects: once the last critical defect is closed, a tagged-out
- * machine returns to service.
- */
-async function followDefects(access: OrgAccess, machine: Machine, transaction: Transaction) {
-  if (machine.status !== 'tagged_out') return;
-  if ((await openCriticalDefects(machine, transaction)).length) return;
-  await machine.update({ status: 'in_service' }, { transaction });
-  await audit(
-    access,
-    'machine.return_to_service',
-    'machine',
-    machine.id,
-    { reason: 'no critical defect remains open' },
-    transaction,
-  );
-}
 
 interface DefectSource {
   walkaroundId?: string | null;
@@ -175,7 +131,12 @@ export async function raiseDefect(
   }
   const taggedOut =
     defect.severity === 'critical' &&
-    (await tagOut(access, machine, `critical defect: ${defect.title}`, transaction));
+    (await tagOut(
+      access,
+      machine,
+      `${source.walkaroundId ? 'Critical fail on a walkaround' : 'Critical defect reported'}: ${defect.title}`,
+      transaction,
+    ));
   return { defect, created: !existing, taggedOut };
 }
 
@@ -188,7 +149,10 @@ async function checkAssignee(access: OrgAccess, userId: string, transaction: Tra
     throw invalid({ assignedTo: 'Assign a technician or manager of this farm' });
 }
 
-/** Assigns, re-titles, re-grades or moves a defect between open and in repair; the machine follows. */
+/**
+ * Assigns, re-titles, re-grades or moves a defect between open and in repair. Raising it to
+ * critical tags the machine out; lowering it never returns the machine to service.
+ */
 export async function updateDefect(access: OrgAccess, defectId: string, input: DefectUpdateInput) {
   return sequelize.transaction(async (transaction) => {
     const { defect, machine } = await loadDefect(access, defectId, transaction);
@@ -208,15 +172,20 @@ export async function updateDefect(access: OrgAccess, defectId: string, input: D
       transaction,
     );
     if (input.severity === 'critical')
-      await tagOut(access, machine, `critical defect: ${defect.title}`, transaction);
-    else if (before.severity === 'critical') await followDefects(access, machine, transaction);
+      await tagOut(access, machine, `Defect raised to critical: ${defect.title}`, transaction);
     return { defect, machine };
   });
 }
 
+/** The refusal a dealer gets for any attempt on a farm's defects: it names no defect. */
+export const DEALER_DEFECTS_REFUSAL =
+  "Defects are the farm's own: only its technicians and managers close them. Record the service without closing defects.";
+
 /**
  * Closes defects of one machine as fixed, in the caller's transaction (a service record's, or
- * its own). Each must be active on this machine; a bad one is named by `field.index`.
+ * its own). Each must be active on this machine; a bad one is named by `field.index`. The
+ * machine's status does not change: a tagged-out machine stays so until someone returns it to
+ * service (services/machine-status.ts). Farm members only: a dealer is refused before any lookup.
  */
 export async function closeDefects(
   access: OrgAccess,
@@ -227,6 +196,7 @@ export async function closeDefects(
   field = 'defectIds',
 ): Promise<Defect[]> {
   if (!defectIds.length) return [];
+  if (access.via !== 'member') throw forbidden(DEALER_DEFECTS_REFUSAL);
   const rows = await Defect.findAll({
     where: { organizationId: access.organization.id, id: { [Op.in]: defectIds } },
     transaction,
@@ -263,12 +233,13 @@ export async function closeDefects(
       transaction,
     );
   }
-  if (closed.some((d) => d.severity === 'critical'))
-    await followDefects(access, machine, transaction);
   return closed;
 }
 
-/** Closes one defect with a note, or by a completed service record of the same machine. */
+/**
+ * Closes one defect with a note, or by a completed service record of the same machine. Answers
+ * how many critical defects the machine still has open, for the "stays tagged out" notice.
+ */
 export async function closeDefect(access: OrgAccess, defectId: string, input: DefectCloseInput) {
   return sequelize.transaction(async (transaction) => {
     const { defect, machine } = await loadDefect(access, defectId, transaction);
@@ -291,114 +262,7 @@ export async function closeDefect(access: OrgAccess, defectId: string, input: De
       { note: input.note, serviceRecordId: input.serviceRecordId ?? null },
       transaction,
     );
-    return { defect: closed, machine };
+    const openCritical = (await openCriticalDefects(machine, transaction)).length;
+    return { defect: closed, machine, openCritical };
   });
-}
-
-/** Returns a tagged-out machine to service; refused while a critical defect is still open. */
-export async function clearTagOut(access: OrgAccess, machineId: string, note: string) {
-  return sequelize.transaction(async (transaction) => {
-    const { machine } = await loadMachine(access, machineId, transaction);
-    await sequelize.query('SELECT id FROM machines WHERE id = :id FOR UPDATE', {
-      replacements: { id: machine.id },
-      transaction,
-    });
-    await machine.reload({ transaction });
-    if (machine.status !== 'tagged_out')
-      throw new AppError(409, 'not_tagged_out', `${machine.fleetNumber} is not tagged out`);
-    const critical = await openCriticalDefects(machine, transaction);
-    if (critical.length) {
-      const list = critical.map((d) => `"${d.title}" (${d.status.replace('_', ' ')})`).join(', ');
-      throw new AppError(
-        409,
-        'critical_defects_open',
-        `${machine.fleetNumber} has critical defects still open: ${list}. Close them first.`,
-      );
-    }
-    await machine.update({ status: 'in_service' }, { transaction });
-    await audit(access, 'machine.clear_tag_out', 'machine', machine.id, { note }, transaction);
-    return machine;
-  });
-}
-
-export interface DefectListRow {
-  id: string;
-  total: string;
-}
-
-/** The shop's defect list (or one machine's): worst first, then newest; operators see their machines'. */
-export async function listDefects(access: OrgAccess, query: DefectListQuery) {
-  const where = ['d.organization_id = :org'];
-  const replacements: Record<string, unknown> = {
-    org: access.organization.id,
-    user: access.userId,
-    limit: query.pageSize,
-    offset: (query.page - 1) * query.pageSize,
-  };
-  if (query.status === 'active') where.push("d.status IN ('open','in_repair')");
-  else if (query.status !== 'all') {
-    where.push('d.status = :status');
-    replacements.status = query.status;
-  }
-  if (query.severity) {
-    where.push('d.severity = :severity');
-    replacements.severity = query.severity;
-  }
-  if (query.machineId) {
-    where.push('d.machine_id = :machineId');
-    replacements.machineId = query.machineId;
-  }
-  if (query.assignedTo === 'none') where.push('d.assigned_to IS NULL');
-  else if (query.assignedTo) {
-    where.push('d.assigned_to = :assignedTo');
-    replacements.assignedTo = query.assignedTo === 'me' ? access.userId : query.assignedTo;
-  }
-  if (hasRole(access, 'operator')) {
-    where.push(`(NOT EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = d.organization_id AND o.machine_id = d.machine_id)
-      OR EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = d.organization_id AND o.machine_id = d.machine_id AND o.user_id = :user))`);
-  }
-  const rows = await sequelize.query<DefectListRow>(
-    `SELECT d.id, count(*) OVER () AS total FROM defects d
-     WHERE ${where.join(' AND ')}
-     ORDER BY CASE d.status WHEN 'fixed' THEN 1 ELSE 0 END,
-       CASE d.severity WHEN 'critical' THEN 0 WHEN 'major' THEN 1 ELSE 2 END,
-       d.last_reported_at DESC, d.id
-     LIMIT :limit OFFSET :offset`,
-    { replacements, type: QueryTypes.SELECT },
-  );
-  const defects = await Defect.findAll({
-    where: { organizationId: access.organization.id, id: { [Op.in]: rows.map((r) => r.id) } },
-  });
-  const byId = new Map(defects.map((d) => [d.id, d]));
-  return {
-    total: rows.length ? Number(rows[0].total) : 0,
-    defects: rows.map((r) => byId.get(r.id)!),
-  };
-}
-
-/** Active defects (open or in repair) per severity, for the list's counters. */
-export async function activeDefectCounts(access: OrgAccess, machineId?: string) {
-  const rows = await sequelize.query<{ severity: DefectSeverity; n: number }>(
-    `SELECT d.severity, count(*)::int AS n FROM defects d
-     WHERE d.organization_id = :org AND d.status IN ('open','in_repair')
-       ${machineId ? 'AND d.machine_id = :machineId' : ''}
-       ${
-         hasRole(access, 'operator')
-           ? `AND (NOT EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = d.organization_id AND o.machine_id = d.machine_id)
-                OR EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = d.organization_id AND o.machine_id = d.machine_id AND o.user_id = :user))`
-           : ''
-       }
-     GROUP BY d.severity`,
-    {
-      replacements: {
-        org: access.organization.id,
-        user: access.userId,
-        machineId: machineId ?? null,
-      },
-      type: QueryTypes.SELECT,
-    },
-  );
-  const counts = { critical: 0, major: 0, minor: 0 };
-  for (const r of rows) counts[r.severity] = r.n;
-  return counts;
 }

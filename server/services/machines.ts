@@ -12,6 +12,7 @@ import { hasRole } from '../policies/access';
 import { canViewMachine } from '../policies/machine';
 import { recordAudit } from './audit';
 import { refreshMachineForecast } from './forecast';
+import { applyStatusEdit } from './machine-status';
 
 export async function operatorIdsOf(
   machineIds: string[],
@@ -237,6 +238,7 @@ export async function updateMachine(
       await fleetNumberTaken(access, input.fleetNumber, machine.id, transaction);
     if (input.operatorIds !== undefined)
       await checkOperators(access, input.operatorIds, transaction);
+    input = await applyStatusEdit(access, machine, input, transaction);
     const { operatorIds, ...fields } = input;
     const before = Object.fromEntries(
       Object.keys(fields).map((k) => [k, machine.get(k as keyof Machine)]),

@@ -22,10 +22,11 @@ import type {
 } from '../../shared/schemas/services';
 import { localDayNumber, isoFromDayNumber, todayIso } from '../../shared/domain';
 import type { OrgAccess } from '../policies/access';
+import { canHandleDefects } from '../policies/defect';
 import { loadMachine } from './machines';
 import { writeAccompanyingReading } from './readings';
 import { recomputeDuePoints } from './forecast';
-import { closeDefects } from './defects';
+import { closeDefects, DEALER_DEFECTS_REFUSAL } from './defects';
 import { recordAudit } from './audit';
 
 /** The record if it is in the caller's organization on a machine they may see; else 404. */
@@ -111,6 +112,17 @@ async function checkTechnicians(access: OrgAccess, ids: string[]) {
     if (!known.has(id)) errors[`technicianIds.${i}`] = 'Not a member of this farm';
   });
   if (Object.keys(errors).length) throw invalid(errors);
+}
+
+/**
+ * A dealer's `service` link records services but never closes (nor books the closing of) a farm's
+ * defects: any defect id from a dealer is refused before it is looked up, and the refusal names none.
+ */
+function refuseDealerDefects(access: OrgAccess, ids: string[] | undefined) {
+  if (ids?.length && !canHandleDefects(access))
+    throw new AppError(403, 'forbidden', DEALER_DEFECTS_REFUSAL, {
+      closesDefectIds: DEALER_DEFECTS_REFUSAL,
+    });
 }
 
 /** Defects a plan is to fix: each active on this machine. */
@@ -285,6 +297,7 @@ export async function createRecord(
   machine: Machine,
   input: ServiceRecordCreateInput,
 ): Promise<{ record: ServiceRecord; resets: TaskReset[] }> {
+  refuseDealerDefects(access, input.closesDefectIds);
   const tasks = await resolveTasks(access, machine, input.taskIds);
   await checkTechnicians(access, input.technicianIds);
   const prefilled = prefillLines(tasks);
@@ -377,7 +390,9 @@ export async function createRecord(
 
 /**
  * Completes a planned record in one transaction, with any changes given on the way. Defects the
- * plan named that were closed meanwhile are skipped; defects named here must still be open.
+ * plan named that were closed meanwhile are skipped; defects named here must still be open. A
+ * dealer completing a farm's plan closes none of its defects: they stay open for the farm's shop
+ * (and the record names none), and the machine's status never changes here.
  */
 export async function completeRecord(
   access: OrgAccess,
@@ -391,6 +406,7 @@ export async function completeRecord(
       'not_planned',
       `This record is ${current.status}; only a plan can be completed`,
     );
+  refuseDealerDefects(access, input.closesDefectIds);
   const taskIds = input.taskIds ?? current.tasks.map((t) => t.taskId);
   const tasks = await resolveTasks(access, machine, taskIds);
   if (input.technicianIds) await checkTechnicians(access, input.technicianIds);
@@ -403,7 +419,8 @@ export async function completeRecord(
     if (record.status !== 'planned')
       throw new AppError(409, 'not_planned', `This record is ${record.status} already`);
     let defectIds = input.closesDefectIds;
-    if (!defectIds) {
+    if (!canHandleDefects(access)) defectIds = [];
+    else if (!defectIds) {
       const stillOpen = await Defect.findAll({
         where: {
           organizationId: access.organization.id,
@@ -490,6 +507,12 @@ export async function updateRecord(
   recordId: string,
   input: ServiceRecordUpdateInput,
 ) {
+  refuseDealerDefects(access, input.closesDefectIds);
+  if (input.closesDefectIds && !canHandleDefects(access)) {
+    // a dealer's form sends the (empty) list it was given: that changes nothing
+    const { closesDefectIds: _none, ...rest } = input;
+    input = rest;
+  }
   const { record: found, machine } = await loadRecord(access, recordId);
   if (found.status === 'cancelled')
     throw new AppError(409, 'cancelled', 'This record is cancelled; it cannot change');

@@ -32,7 +32,7 @@ const severity = z.enum(DEFECT_SEVERITIES, {
 export const defectCreateSchema = z.object({
   title,
   description: description.default(''),
-  /** critical tags the machine out until a technician or manager clears it */
+  /** critical tags the machine out until a technician or manager returns it to service */
   severity: severity.default('major'),
 });
 export type DefectCreateInput = z.infer<typeof defectCreateSchema>;
@@ -81,11 +81,12 @@ export const defectListQuerySchema = z.object({
 });
 export type DefectListQuery = z.infer<typeof defectListQuerySchema>;
 
-export const clearTagOutSchema = z.object({
+/** Returning a tagged-out machine to service: its own step, with the note of what was checked. */
+export const returnToServiceSchema = z.object({
   note: z
     .string({ error: 'Say what was checked before returning it to service' })
     .trim()
     .min(1, { error: 'Say what was checked before returning it to service' })
     .max(2000, { error: 'Use at most 2,000 characters' }),
 });
-export type ClearTagOutInput = z.infer<typeof clearTagOutSchema>;
+export type ReturnToServiceInput = z.infer<typeof returnToServiceSchema>;

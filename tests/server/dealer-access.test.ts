@@ -114,6 +114,7 @@ describe('dealer access to a linked farm', () => {
       logReading: false,
       correctReading: false,
       replaceMeter: false,
+      returnToService: false,
     });
     for (const path of [
       `/machines/${machine.id}/service-records`,

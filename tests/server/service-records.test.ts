@@ -617,7 +617,7 @@ describe('service records — plans, history, measurements, shop week', () => {
     expect((await assigned.get(s.records)).status).toBe(200);
   });
 
-  it('service record — completing it closes the defects it names; the tagged-out machine returns to service', async () => {
+  it('service record — completing it closes the defects it names; the tagged-out machine stays tagged out until someone returns it to service', async () => {
     const s = await shop();
     await Machine.update({ status: 'tagged_out' }, { where: { id: s.machine.id } });
     const defect = await Defect.create({
@@ -640,7 +640,7 @@ describe('service records — plans, history, measurements, shop week', () => {
     expect(res.status).toBe(201);
     await defect.reload();
     expect([defect.status, defect.fixedByRecordId]).toEqual(['fixed', res.body.data.id]);
-    expect((await Machine.findByPk(s.machine.id))!.status).toBe('in_service');
+    expect((await Machine.findByPk(s.machine.id))!.status).toBe('tagged_out');
   });
 });
 

@@ -3,25 +3,17 @@ import { Op } from 'sequelize';
 import { z } from 'zod';
 import { route } from '../route';
 import {
-  clearTagOutSchema,
   defectCloseSchema,
   defectCreateSchema,
   defectListQuerySchema,
   defectUpdateSchema,
 } from '../../../shared/schemas/defects';
 import { authorize } from '../../policies/access';
-import {
-  canClearTagOut,
-  canHandleDefects,
-  canReportDefect,
-  defectAbilities,
-} from '../../policies/defect';
+import { canHandleDefects, canReportDefect, defectAbilities } from '../../policies/defect';
 import { loadMachine } from '../../services/machines';
+import { activeDefectCounts, listDefects } from '../../services/defect-list';
 import {
-  activeDefectCounts,
-  clearTagOut,
   closeDefect,
-  listDefects,
   loadDefect,
   raiseDefect,
   taggedOutMessage,
@@ -46,7 +38,7 @@ const shopOnly = 'Only a technician or manager handles defects';
 const abilitiesSchema = z.object({
   update: z.boolean(),
   close: z.boolean(),
-  clearTagOut: z.boolean(),
+  returnToService: z.boolean(),
 });
 const listResponse = z.object({
   data: z.array(defectSchema),
@@ -77,7 +69,7 @@ async function presentOne(access: OrgAccess, defect: Defect) {
   return { data: (await present([defect]))[0], abilities: defectAbilities(access) };
 }
 
-/** Defects: the shop's list, reporting, assignment, repair, closing, and clearing a tag-out. */
+/** Defects: the shop's list, reporting, assignment, repair and closing (farm members only). */
 export function defectsRouter(): Router {
   const router = Router();
 
@@ -136,7 +128,7 @@ export function defectsRouter(): Router {
     method: 'post',
     path: '/organizations/:orgId/machines/:machineId/defects',
     summary:
-      'Report a defect on a machine (any farm role); severity critical tags the machine out until a technician or manager clears it',
+      "Report a defect on a machine (any farm role); severity critical tags the machine out (and e-mails the farm's managers and technicians) until a technician or manager returns it to service",
     tags: ['defects'],
     params: machineParams,
     body: defectCreateSchema,
@@ -199,36 +191,24 @@ export function defectsRouter(): Router {
     method: 'post',
     path: '/organizations/:orgId/defects/:defectId/close',
     summary:
-      'Close a defect as fixed, with a note or by a completed service record of the machine; a tagged-out machine returns to service when no critical defect remains open',
+      'Close a defect as fixed, with a note or by a completed service record of the machine. The machine status does not change: a tagged-out machine stays tagged out until someone returns it to service (…/machines/:machineId/return-to-service); openCriticalDefects says how many critical defects it still has open',
     tags: ['defects'],
     params: defectParams,
     body: defectCloseSchema,
-    response: oneResponse.extend({ machine: machineRefSchema }),
+    response: oneResponse.extend({
+      machine: machineRefSchema,
+      openCriticalDefects: z.number(),
+    }),
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       await loadDefect(access, params.defectId);
       authorize(canHandleDefects(access), shopOnly);
-      const { defect, machine } = await closeDefect(access, params.defectId, body);
-      await machine.reload();
-      return { ...(await presentOne(access, defect)), machine: presentMachineRef(machine) };
-    },
-  });
-
-  route(router, {
-    method: 'post',
-    path: '/organizations/:orgId/machines/:machineId/clear-tag-out',
-    summary:
-      'Return a tagged-out machine to service (technician, manager); refused (409) while a critical defect is open or in repair',
-    tags: ['defects'],
-    params: machineParams,
-    body: clearTagOutSchema,
-    response: z.object({ data: machineRefSchema }),
-    handler: async ({ req, params, body }) => {
-      const access = req.access!;
-      await loadMachine(access, params.machineId);
-      authorize(canClearTagOut(access), 'Only a technician or manager may clear a tag-out');
-      const machine = await clearTagOut(access, params.machineId, body.note);
-      return { data: presentMachineRef(machine) };
+      const { defect, machine, openCritical } = await closeDefect(access, params.defectId, body);
+      return {
+        ...(await presentOne(access, defect)),
+        machine: presentMachineRef(machine),
+        openCriticalDefects: openCritical,
+      };
     },
   });
 

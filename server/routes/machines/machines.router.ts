@@ -12,6 +12,7 @@ import { machineSchema, presentMachine, presentUsage, usageSchema } from '../../
 import { createMachine, listMachines, loadMachine, updateMachine } from '../../services/machines';
 import { MachineForecast, TaskDuePoint } from '../../models';
 import { ensureDuePointsCurrent } from '../../services/forecast';
+import { tagOutState } from '../../services/machine-status';
 
 const orgParams = z.object({ orgId: z.uuid() });
 export const machineParams = orgParams.extend({ machineId: z.uuid() });
@@ -23,6 +24,14 @@ const abilitiesSchema = z.object({
   logReading: z.boolean(),
   correctReading: z.boolean(),
   replaceMeter: z.boolean(),
+  returnToService: z.boolean(),
+});
+
+/** Why and since when the machine is tagged out (a dealer sees neither why nor how many defects). */
+const tagOutSchema = z.object({
+  since: z.string().nullable(),
+  reason: z.string().nullable(),
+  openCriticalDefects: z.number().nullable(),
 });
 
 export function machinesRouter(): Router {
@@ -79,7 +88,10 @@ export function machinesRouter(): Router {
     tags: ['machines'],
     params: machineParams,
     response: z.object({
-      data: machineSchema.extend({ usage: usageSchema.nullable() }),
+      data: machineSchema.extend({
+        usage: usageSchema.nullable(),
+        tagOut: tagOutSchema.nullable(),
+      }),
       abilities: abilitiesSchema,
     }),
     handler: async ({ req, params }) => {
@@ -106,6 +118,7 @@ export function machinesRouter(): Router {
             nextDueDate: next,
           }),
           usage: presentUsage(forecast?.usage ?? null),
+          tagOut: await tagOutState(access, machine),
         },
         abilities: machineAbilities(access, machine),
       };

@@ -56,8 +56,14 @@ const recordWithResets = recordResponse.extend({ resets: z.array(resetSchema) })
 
 const shopOnly = 'Only a technician or manager records services';
 
+/** Which defects a record closes is the farm's own: a dealer's answers carry none. */
+const viewOf = (access: OrgAccess) => ({ withDefects: access.via === 'member' });
+
 async function respond(access: OrgAccess, record: ServiceRecord) {
-  return { data: await presentRecord(record), abilities: serviceRecordAbilities(access, record) };
+  return {
+    data: await presentRecord(record, viewOf(access)),
+    abilities: serviceRecordAbilities(access, record),
+  };
 }
 
 /** Service records: history, plans, completion (one transaction), prefill from the tasks. */
@@ -80,7 +86,7 @@ export function registerServiceRecordRoutes(router: Router): void {
       const { machine } = await loadMachine(access, params.machineId);
       const { total, records } = await machineHistory(access, machine, query);
       return {
-        data: await presentRecords(records),
+        data: await presentRecords(records, viewOf(access)),
         meta: { total, page: query.page, pageSize: query.pageSize },
         abilities: { create: canRecordService(access, machine) },
       };
