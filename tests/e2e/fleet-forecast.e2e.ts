@@ -7,6 +7,7 @@ import {
   signIn,
   type TestBrowser,
 } from './support/browser';
+import { LOG_HOURS_FLEET } from './support/demo-fleet';
 
 // The farm manager's main job (issue "Fleet, hour-meter readings and the due forecast"), in the browser.
 const DESKTOP = { width: 1280, height: 800 };
@@ -61,8 +62,11 @@ describe('fleet and forecast — the manager in the browser', () => {
     const latest = (
       await (await page.request.get(`/api/v1/organizations/${org}/readings/latest`)).json()
     ).data as Latest[];
-    const picks = latest.filter((l) => l.machine.meterUnit === 'h' && l.lastReading).slice(0, 2);
-    expect(picks).toHaveLength(2);
+    // machines no other browser file writes to, so the hours added are the only change
+    const picks = LOG_HOURS_FLEET.map((fleet) =>
+      latest.find((l) => l.machine.fleetNumber === fleet)!,
+    );
+    expect(picks.map((p) => p?.machine.meterUnit === 'h' && !!p.lastReading)).toEqual([true, true]);
     const before = await Promise.all(picks.map((p) => dueOf(page, org, p.machine.id)));
 
     await page
@@ -72,9 +76,9 @@ describe('fleet and forecast — the manager in the browser', () => {
     await page.getByRole('heading', { name: 'Log hours' }).waitFor();
     const added: number[] = [];
     for (const p of picks) {
-      // stay inside 24 h per elapsed day since the last reading
+      // stay inside 24 h per elapsed day since the last reading (rounded down, never up past it)
       const elapsedDays = (Date.now() - new Date(p.lastReading!.takenAt).getTime()) / 86_400_000;
-      const add = Math.round(Math.min(6, 20 * elapsedDays) * 10) / 10;
+      const add = Math.floor(Math.min(6, 20 * elapsedDays) * 10) / 10;
       added.push(add);
       await page
         .getByLabel(`${p.machine.fleetNumber} reading`)
@@ -94,6 +98,13 @@ describe('fleet and forecast — the manager in the browser', () => {
   });
 
   it('import — a CSV with a bad row is refused and that row is shown by line number', async () => {
+    // from the dashboard's navigation, whichever test ran before
+    await page.goto('/');
+    await page
+      .getByRole('navigation', { name: 'Main' })
+      .getByRole('link', { name: 'Log hours' })
+      .click();
+    await page.getByRole('heading', { name: 'Log hours' }).waitFor();
     await page.getByRole('link', { name: 'Import a CSV file' }).click();
     await page.getByRole('heading', { name: 'Import readings' }).waitFor();
     const today = new Date().toISOString().slice(0, 10);

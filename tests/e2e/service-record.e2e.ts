@@ -8,12 +8,15 @@ import {
   signIn,
   type TestBrowser,
 } from './support/browser';
+import { SERVICE_RECORD_FLEET } from './support/demo-fleet';
 
 // The shop's side (issue "Service records, daily walkarounds and defects"), in the browser: a
-// technician records a visit on M-01 (a machine no other browser test writes to), is refused
-// while a reassembly setting is unticked, ticks it, completes, and sees the task reset.
+// technician records a visit on a machine no other browser test writes to (support/demo-fleet.ts),
+// is refused while a reassembly setting is unticked, ticks it, completes, and sees the task reset.
+// Each test opens its own page from the dashboard and needs nothing another test did, so the
+// tests pass in any order and alone (`-t`); only the sign-in is shared (the browser's cookies).
 const DESKTOP = { width: 1280, height: 800 };
-const FLEET_NUMBER = 'M-01';
+const FLEET_NUMBER = SERVICE_RECORD_FLEET;
 
 interface MachineRow {
   id: string;
@@ -41,19 +44,24 @@ async function api<T>(page: Page, path: string): Promise<T> {
   return (await res.json()) as T;
 }
 
+/** A fresh desktop page on the dashboard, with the page errors it logs. */
+async function openDashboard(browser: TestBrowser) {
+  const page = await browser.newPage(DESKTOP);
+  const errors = collectPageErrors(page);
+  await page.goto('/');
+  await page.getByRole('navigation', { name: 'Main' }).waitFor();
+  return { page, errors };
+}
+
 describe('service records — the technician in the browser', () => {
   let browser: TestBrowser;
-  let page: Page;
-  let errors: string[];
   let org: string;
   let machine: MachineRow;
   let task: TaskRow;
-  let recordPath: string;
 
   beforeAll(async () => {
     browser = await launchBrowser();
-    page = await browser.newPage(DESKTOP);
-    errors = collectPageErrors(page);
+    const page = await browser.newPage(DESKTOP);
     await signIn(page, 'dev@larkspur.example', 'hourstone-demo');
     org = await orgId(page);
     const machines = await api<{ data: MachineRow[] }>(
@@ -69,14 +77,16 @@ describe('service records — the technician in the browser', () => {
     task =
       tasks.data.find((t) => t.intervalMeter !== null && t.intervalDays === null) ??
       tasks.data.find((t) => t.intervalMeter !== null)!;
+    await page.close();
   });
   afterAll(async () => {
     await browser?.close();
   });
 
-  it('record service — refused beside an unticked reassembly setting, completed once it is ticked; the record shows the task reset', async () => {
+  it('record service — refused beside an unticked reassembly setting, completed once it is ticked; the record shows the task reset, the machine page a whole interval left', async () => {
     expect(machine?.lastReading).not.toBeNull();
     expect(task).toBeDefined();
+    const { page, errors } = await openDashboard(browser);
     await page
       .getByRole('navigation', { name: 'Main' })
       .getByRole('link', { name: 'Fleet' })
@@ -121,7 +131,7 @@ describe('service records — the technician in the browser', () => {
     expect(await resets.innerText()).toContain(`${task.name}: reset`);
     const restored = page.getByRole('list', { name: 'Reassembly settings' });
     expect(await restored.innerText()).toMatch(/Charge pump relief shims[\s\S]*Restored/);
-    recordPath = new URL(page.url()).pathname;
+    const recordPath = new URL(page.url()).pathname;
     await screenshot(page, 'service-record-completed');
 
     const phone = await browser.newPage(PHONE_VIEWPORT);
@@ -129,9 +139,8 @@ describe('service records — the technician in the browser', () => {
     await phone.getByRole('heading', { name: new RegExp(`^Service · ${FLEET_NUMBER}`) }).waitFor();
     await screenshot(phone, 'service-record-completed-phone');
     await phone.close();
-  });
 
-  it("machine page — the task's new due point counts a whole interval from the visit", async () => {
+    // the machine page: the task's new due point counts a whole interval from the visit
     await page.getByRole('link', { name: `${FLEET_NUMBER} · ${machine.name}` }).click();
     const list = page.getByRole('list', { name: 'Service tasks' });
     await list.waitFor();
@@ -154,9 +163,14 @@ describe('service records — the technician in the browser', () => {
     const entry = history.locator(`a[href="${recordPath}"]`);
     expect(await entry.innerText()).toContain(task.name);
     await screenshot(page, 'service-record-machine-page');
-  });
+
+    // the refusal (422) is the only error the page logged
+    expect(errors.filter((e) => !/status of (401|422)/.test(e))).toEqual([]);
+    await page.close();
+  }, 120_000);
 
   it('shop week — a day of the week shows planned work (the demo books visits in the coming days)', async () => {
+    const { page, errors } = await openDashboard(browser);
     await page
       .getByRole('navigation', { name: 'Main' })
       .getByRole('link', { name: 'Shop week' })
@@ -185,7 +199,7 @@ describe('service records — the technician in the browser', () => {
     await screenshot(phone, 'service-shop-week-phone');
     await phone.close();
 
-    // the refusal (422) is the only error the pages logged
-    expect(errors.filter((e) => !/status of (401|422)/.test(e))).toEqual([]);
+    expect(errors.filter((e) => !/status of 401/.test(e))).toEqual([]);
+    await page.close();
   });
 });

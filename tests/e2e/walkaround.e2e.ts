@@ -1,19 +1,18 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { request, type Page } from 'playwright-core';
+import type { Page } from 'playwright-core';
 import {
   PHONE_VIEWPORT,
-  baseUrl,
   launchBrowser,
   screenshot,
   signIn,
   type TestBrowser,
 } from './support/browser';
+import { WRITTEN_OR_READ_BY_OTHERS } from './support/demo-fleet';
 
 // The operator's daily walkaround on a phone (issue 4): every item answered, a photo, a critical
 // fail that tags the machine out; and the offline queue that must not send a walkaround twice.
-// The browser tests share one seeded database and run in file order: the machines used here are
-// kept clear of the ones the other files use (T-01, T-02, and the first two hour-metered machines
-// of the manager's latest readings, which the fleet test logs hours on).
+// The browser tests share one seeded database and their files run in any order: the machines used
+// here are kept clear of the ones the other files use (support/demo-fleet.ts).
 
 const PASSWORD = 'hourstone-demo';
 const OUTBOX_KEY = 'hourstone.walkaround.outbox';
@@ -55,29 +54,6 @@ const api = (page: Page, path: string) =>
     return response.json();
   });
 
-/** Fleet numbers the other browser tests write to: never tag those out. */
-async function machinesOthersUse(orgId: string): Promise<Set<string>> {
-  const manager = await request.newContext({ baseURL: baseUrl });
-  try {
-    const signedIn = await manager.post('/api/v1/auth/sign-in', {
-      data: { email: 'marta@larkspur.example', password: PASSWORD },
-    });
-    expect(signedIn.status()).toBe(200);
-    const latest = (await (
-      await manager.get(`/api/v1/organizations/${orgId}/readings/latest`)
-    ).json()) as {
-      data: { machine: Machine; lastReading: unknown }[];
-    };
-    const logged = latest.data
-      .filter((l) => l.machine.meterUnit === 'h' && l.lastReading)
-      .slice(0, 2)
-      .map((l) => l.machine.fleetNumber);
-    return new Set(['T-01', 'T-02', ...logged]);
-  } finally {
-    await manager.dispose();
-  }
-}
-
 /** A meter value that keeps inside the reading rules (at most 20 h per elapsed day here). */
 function nextMeter(checklist: Checklist): string {
   const last = checklist.machine.lastReading;
@@ -115,10 +91,11 @@ describe('daily walkaround on a phone (browser)', () => {
     ).organization.id;
 
     // machines lena may use, in service, that no other browser test writes to
-    const avoid = await machinesOthersUse(orgId);
     const mine = (await api(page, `/organizations/${orgId}/machines?sort=fleetNumber&pageSize=200`))
       .data as Machine[];
-    const free = mine.filter((m) => m.status === 'in_service' && !avoid.has(m.fleetNumber));
+    const free = mine.filter(
+      (m) => m.status === 'in_service' && !WRITTEN_OR_READ_BY_OTHERS.has(m.fleetNumber),
+    );
     const withChecklists = await Promise.all(
       free.map(async (machine) => ({
         machine,

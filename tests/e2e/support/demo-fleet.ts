@@ -1,0 +1,19 @@
+// The browser tests share one seeded demo, and vitest orders their files itself (by size and past
+// duration), so a file must pass whichever ran before it. Each file therefore writes only to
+// machines of Larkspur Flats Farm that no other file touches, and takes them from here.
+
+/** fleet-forecast.e2e.ts logs hours on these two (hour-metered, with readings in the demo). */
+export const LOG_HOURS_FLEET = ['C-01', 'T-03'] as const;
+
+/** service-record.e2e.ts completes a visit on this one (a task reset and a meter reading). */
+export const SERVICE_RECORD_FLEET = 'M-01';
+
+/** Read by fleet-forecast.e2e.ts (T-02's page, an import it refuses) as the demo loaded them. */
+export const READ_AS_LOADED_FLEET = ['T-01', 'T-02'] as const;
+
+/** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
+export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
+  ...LOG_HOURS_FLEET,
+  SERVICE_RECORD_FLEET,
+  ...READ_AS_LOADED_FLEET,
+]);
