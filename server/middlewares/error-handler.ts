@@ -4,6 +4,7 @@ import { UniqueConstraintError, ValidationError } from 'sequelize';
 import { AppError } from '../errors';
 import { logger } from '../logger';
 import { fieldErrors } from './validate';
+import { INPUT_RANGE_MESSAGE, isInputRangeError } from './input-range-error';
 import { DATABASE_RETRY_AFTER_SECONDS, isDatabaseUnavailable } from './database-unavailable';
 
 export const notFoundHandler: RequestHandler = (_req, _res, next) => {
@@ -30,6 +31,11 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
   } else if (err instanceof ValidationError) {
     status = 422;
     body = { code: 'invalid', message: err.message };
+  } else if (isInputRangeError(err)) {
+    // Safety net for input the schemas let through (they must refuse it first): a 400, logged.
+    status = 400;
+    body = { code: 'out_of_range', message: INPUT_RANGE_MESSAGE };
+    logger.warn({ err, url: req.originalUrl }, 'input refused by the database');
   } else if (isDatabaseUnavailable(err)) {
     // Down, restarting or out of connections: not the caller's fault, so 503 and when to retry.
     status = 503;

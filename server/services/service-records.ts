@@ -544,8 +544,8 @@ export async function updateRecord(
   const tasks = input.taskIds ? await resolveTasks(access, machine, input.taskIds) : null;
   if (input.technicianIds) await checkTechnicians(access, input.technicianIds);
   if (input.closesDefectIds) await checkDefectsActive(access, machine, input.closesDefectIds);
-  // New tasks on a plan bring their parts lists unless the lines are given too.
-  const prefilled = tasks ? prefillLines(tasks) : null;
+  // A PATCH writes only what it names: new tasks do not rewrite parts or fluids (a new record
+  // prefills them; an edit sends its own lines).
   const { measurements, closesDefectIds, taskIds: _taskIds, ...rest } = input;
   const record = found;
   return sequelize.transaction(async (transaction) => {
@@ -554,8 +554,6 @@ export async function updateRecord(
         ...rest,
         ...(rest.technicianIds && { technicianIds: [...new Set(rest.technicianIds)] }),
         ...(tasks && { tasks: snapshot(tasks) }),
-        ...(prefilled && !input.parts && { parts: prefilled.parts }),
-        ...(prefilled && !input.fluids && { fluids: prefilled.fluids }),
         ...(closesDefectIds && { defectIds: [...new Set(closesDefectIds)] }),
       },
       { transaction },

@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { ROLES } from '../constants';
-import { email, password, personName } from './common';
+import { email, password, personName, plainText } from './common';
 
 export const signInSchema = z.object({
   email,
@@ -20,12 +20,22 @@ export const passwordResetRequestSchema = z.object({ email });
 export type PasswordResetRequestInput = z.infer<typeof passwordResetRequestSchema>;
 
 export const passwordResetConfirmSchema = z.object({
-  token: z
-    .string({ error: 'The reset link is incomplete' })
-    .min(20, { error: 'The reset link is incomplete' }),
+  token: plainText(200, { required: 'The reset link is incomplete', untrimmed: true }).min(20, {
+    error: 'The reset link is incomplete',
+  }),
   password,
 });
 export type PasswordResetConfirmInput = z.infer<typeof passwordResetConfirmSchema>;
 
-export const membershipUpdateSchema = z.object({ role: roleSchema });
+/** Only the role; an unknown field is refused by name. */
+export const passwordChangeSchema = z.object({
+  currentPassword: z
+    .string({ error: 'Enter your current password' })
+    .min(1, { error: 'Enter your current password' })
+    .max(200, { error: 'Use at most 200 characters' }),
+  password,
+});
+export type PasswordChangeInput = z.infer<typeof passwordChangeSchema>;
+
+export const membershipUpdateSchema = z.object({ role: roleSchema }).strict();
 export type MembershipUpdateInput = z.infer<typeof membershipUpdateSchema>;

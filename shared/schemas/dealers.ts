@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { DUE_STATUSES, MACHINE_CATEGORIES } from '../constants';
-import { email, uuid, pagingFields } from './common';
+import { email, isoDate, pagingFields, PLAN_DATES, plainText, uuid } from './common';
 
 // Dealer links, the dealer's board and parts forecast, reminders and bookings. The client's forms
 // use these schemas with react-hook-form; the server validates with the same ones.
@@ -31,8 +31,7 @@ export const BOOKING_STATUS_LABELS: Record<BookingStatus, string> = {
 };
 
 const accessSchema = z.enum(DEALER_ACCESS, { error: 'Access must be view or service' });
-const isoDate = (label: string) => z.iso.date({ error: `${label} must be a date, yyyy-mm-dd` });
-const note = z.string().trim().max(1000, { error: 'Use at most 1,000 characters' }).default('');
+const note = plainText(1000, { multiline: true }).default('');
 
 /** A dealer asks a farm for access: the farm manager's e-mail gets a single-use link. */
 export const customerInvitationSchema = z.object({ email, message: note });
@@ -42,7 +41,8 @@ export type CustomerInvitationInput = z.infer<typeof customerInvitationSchema>;
 export const dealerInvitationSchema = z.object({ email, access: accessSchema });
 export type DealerInvitationInput = z.infer<typeof dealerInvitationSchema>;
 
-export const dealerLinkUpdateSchema = z.object({ access: accessSchema });
+/** Only the access; an unknown field is refused by name. */
+export const dealerLinkUpdateSchema = z.object({ access: accessSchema }).strict();
 export type DealerLinkUpdateInput = z.infer<typeof dealerLinkUpdateSchema>;
 
 /** The farm manager accepts a dealer's request for one of the farms they manage. */
@@ -67,7 +67,7 @@ export const boardQuerySchema = z.object({
       error: `Category must be one of: ${MACHINE_CATEGORIES.join(', ')}`,
     })
     .optional(),
-  task: z.string().trim().max(100, { error: 'Use at most 100 characters' }).optional(),
+  task: plainText(100).optional(),
   status: z
     .enum(DUE_STATUSES, { error: `Status must be one of: ${DUE_STATUSES.join(', ')}` })
     .optional(),
@@ -86,16 +86,8 @@ const taskIds = z
 /** A reminder e-mail to a customer's managers about due services; the advisor edits the text. */
 export const reminderSchema = z.object({
   taskIds,
-  subject: z
-    .string({ error: 'Enter a subject' })
-    .trim()
-    .min(1, { error: 'Enter a subject' })
-    .max(200, { error: 'Use at most 200 characters' }),
-  body: z
-    .string({ error: 'Enter the message' })
-    .trim()
-    .min(1, { error: 'Enter the message' })
-    .max(5000, { error: 'Use at most 5,000 characters' }),
+  subject: plainText(200, { required: 'Enter a subject' }),
+  body: plainText(5000, { required: 'Enter the message', multiline: true }),
   /** made when the dialog opens: a second click of the same dialog sends nothing more */
   requestId: uuid,
 });
@@ -103,12 +95,15 @@ export type ReminderInput = z.infer<typeof reminderSchema>;
 
 export const bookingItemSchema = z.object({
   machineId: uuid,
-  taskIds: z.array(uuid).max(50, { error: 'At most 50 tasks per machine' }).default([]),
+  taskIds: z
+    .array(uuid, { error: 'Tasks must be a list of ids' })
+    .max(50, { error: 'At most 50 tasks per machine' })
+    .default([]),
 });
 
 export const bookingCreateSchema = z.object({
   customerId: uuid,
-  proposedFor: isoDate('Proposed date'),
+  proposedFor: isoDate('Proposed date', PLAN_DATES),
   items: z
     .array(bookingItemSchema, { error: 'Choose at least one machine' })
     .min(1, { error: 'Choose at least one machine' })

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { uuid, pagingFields } from './common';
+import { pagingFields, plainText, uuid } from './common';
 
 // Defects: found on a walkaround or reported directly, handled by the shop.
 
@@ -19,12 +19,8 @@ export const DEFECT_STATUS_LABELS: Record<DefectStatus, string> = {
   fixed: 'Fixed',
 };
 
-const title = z
-  .string({ error: 'Say what is wrong' })
-  .trim()
-  .min(1, { error: 'Say what is wrong' })
-  .max(160, { error: 'Use at most 160 characters' });
-const description = z.string().trim().max(2000, { error: 'Use at most 2,000 characters' });
+const title = plainText(160, { required: 'Say what is wrong' });
+const description = plainText(2000, { multiline: true });
 const severity = z.enum(DEFECT_SEVERITIES, {
   error: `Severity must be one of: ${DEFECT_SEVERITIES.join(', ')}`,
 });
@@ -47,7 +43,8 @@ export const defectUpdateSchema = z
     }),
     assignedTo: uuid.nullable(),
   })
-  .partial();
+  .partial()
+  .strict();
 export type DefectUpdateInput = z.infer<typeof defectUpdateSchema>;
 
 export const defectCloseSchema = z
@@ -83,10 +80,9 @@ export type DefectListQuery = z.infer<typeof defectListQuerySchema>;
 
 /** Returning a tagged-out machine to service: its own step, with the note of what was checked. */
 export const returnToServiceSchema = z.object({
-  note: z
-    .string({ error: 'Say what was checked before returning it to service' })
-    .trim()
-    .min(1, { error: 'Say what was checked before returning it to service' })
-    .max(2000, { error: 'Use at most 2,000 characters' }),
+  note: plainText(2000, {
+    required: 'Say what was checked before returning it to service',
+    multiline: true,
+  }),
 });
 export type ReturnToServiceInput = z.infer<typeof returnToServiceSchema>;

@@ -32,18 +32,28 @@ export const notificationPreferenceSchema = z.object({
     .min(1, { error: 'Weekday is 1 (Monday) to 7 (Sunday)' })
     .max(7, { error: 'Weekday is 1 (Monday) to 7 (Sunday)' })
     .default(1),
-  machineIds: z.array(uuid).max(1000, { error: 'At most 1,000 machines' }).default([]),
-  categories: z.array(z.enum(MACHINE_CATEGORIES, { error: 'Not a machine category' })).default([]),
+  machineIds: z
+    .array(uuid, { error: 'Machines must be a list of ids' })
+    .max(1000, { error: 'At most 1,000 machines' })
+    .default([]),
+  categories: z
+    .array(z.enum(MACHINE_CATEGORIES, { error: 'Not a machine category' }), {
+      error: 'Categories must be a list',
+    })
+    .max(MACHINE_CATEGORIES.length, { error: 'Each category once' })
+    .default([]),
 });
 export type NotificationPreferenceInput = z.infer<typeof notificationPreferenceSchema>;
 
-export const reminderSettingsSchema = z.object({
-  digestHour: z
-    .number({ error: 'Choose an hour' })
-    .int({ error: 'Use a whole hour' })
-    .min(0, { error: 'The hour is 0 to 23' })
-    .max(23, { error: 'The hour is 0 to 23' }),
-});
+export const reminderSettingsSchema = z
+  .object({
+    digestHour: z
+      .number({ error: 'Choose an hour' })
+      .int({ error: 'Use a whole hour' })
+      .min(0, { error: 'The hour is 0 to 23' })
+      .max(23, { error: 'The hour is 0 to 23' }),
+  })
+  .strict();
 export type ReminderSettingsInput = z.infer<typeof reminderSettingsSchema>;
 
 export const CALENDAR_FEED_SCOPES = ['personal', 'farm'] as const;
@@ -54,11 +64,11 @@ export const calendarFeedCreateSchema = z.object({
 });
 export type CalendarFeedCreateInput = z.infer<typeof calendarFeedCreateSchema>;
 
-export const NOTIFICATION_STATUSES = ['queued', 'sent', 'failed'] as const;
+export const NOTIFICATION_STATUSES = ['queued', 'sending', 'sent', 'failed'] as const;
 export type NotificationStatusName = (typeof NOTIFICATION_STATUSES)[number];
 
 export const notificationListQuerySchema = z.object({
-  status: z.enum(NOTIFICATION_STATUSES, { error: 'Status is queued, sent or failed' }).optional(),
+  status: z.enum(NOTIFICATION_STATUSES, { error: 'Status is queued, sending, sent or failed' }).optional(),
   ...pagingFields(50, 200),
 });
 export type NotificationListQuery = z.infer<typeof notificationListQuerySchema>;

@@ -1,27 +1,35 @@
 import { z } from 'zod';
+import { MACHINE_CATEGORIES } from '../constants';
+import { boundedNumber, isoDate, PAST_DATES, plainText } from './common';
 
-const optionalPositive = (label: string) =>
-  z
-    .number({ error: `${label} must be a number` })
-    .positive({ error: `${label} must be greater than 0` })
-    .nullable()
-    .default(null);
+/**
+ * Ranges of a task's numbers (meter units, days, hours). They fit the columns (intervals and
+ * warnings numeric(12,2), labour numeric(6,2), days integer) and the trade: a million units
+ * covers the longest km interval, twenty years the longest calendar item.
+ */
+export const TASK_BOUNDS = {
+  intervalMeter: { min: 0, max: 1_000_000, exclusiveMin: true },
+  intervalDays: { min: 0, max: 7300, exclusiveMin: true, int: true },
+  firstServiceMeter: { min: 0, max: 10_000_000, exclusiveMin: true },
+  warnMeter: { min: 0, max: 1_000_000, exclusiveMin: true },
+  warnDays: { min: 0, max: 365, exclusiveMin: true, int: true },
+  labourHours: { min: 0, max: 1000, exclusiveMin: true },
+  quantity: { min: 0, max: 100_000, exclusiveMin: true },
+  /** a meter value, as readings (numeric(14,2)) */
+  meter: { min: 0, max: 10_000_000 },
+} as const;
 
 export const taskPartSchema = z.object({
-  partNumber: z.string().trim().min(1, { error: 'Enter the part number' }).max(60),
-  description: z.string().trim().max(200).default(''),
-  quantity: z
-    .number({ error: 'Quantity must be a number' })
-    .positive({ error: 'Quantity must be greater than 0' }),
+  partNumber: plainText(60, { required: 'Enter the part number' }),
+  description: plainText(200).default(''),
+  quantity: boundedNumber('Quantity', TASK_BOUNDS.quantity),
 });
 export type TaskPart = z.infer<typeof taskPartSchema>;
 
 export const FLUID_UNITS = ['L', 'gal', 'qt', 'kg', 'lb'] as const;
 export const taskFluidSchema = z.object({
-  kind: z.string().trim().min(1, { error: 'Enter the fluid kind' }).max(80),
-  volume: z
-    .number({ error: 'Volume must be a number' })
-    .positive({ error: 'Volume must be greater than 0' }),
+  kind: plainText(80, { required: 'Enter the fluid kind' }),
+  volume: boundedNumber('Volume', TASK_BOUNDS.quantity),
   unit: z.enum(FLUID_UNITS, { error: `Unit must be one of: ${FLUID_UNITS.join(', ')}` }),
 });
 export type TaskFluid = z.infer<typeof taskFluidSchema>;
@@ -36,33 +44,28 @@ export const HAZARDS = [
 ] as const;
 export type Hazard = (typeof HAZARDS)[number];
 
+/** A task's fields, without defaults: an update changes only the fields it names. */
 const taskFields = {
-  name: z
-    .string({ error: 'Enter a task name' })
-    .trim()
-    .min(1, { error: 'Enter a task name' })
-    .max(120),
-  intervalMeter: optionalPositive('Meter interval'),
-  intervalDays: z
-    .number({ error: 'Day interval must be a number' })
-    .int({ error: 'Day interval must be whole days' })
-    .positive({ error: 'Day interval must be greater than 0' })
-    .nullable()
-    .default(null),
-  firstServiceMeter: optionalPositive('First service point'),
-  warnMeter: optionalPositive('Warning window (meter)'),
-  warnDays: z
-    .number({ error: 'Warning window (days) must be a number' })
-    .int({ error: 'Warning window must be whole days' })
-    .positive({ error: 'Warning window (days) must be greater than 0' })
-    .nullable()
-    .default(null),
-  parts: z.array(taskPartSchema).max(50).default([]),
-  fluids: z.array(taskFluidSchema).max(20).default([]),
-  labourHours: optionalPositive('Estimated labour'),
-  instructions: z.string().max(5000).default(''),
-  safetyNotes: z.string().max(2000).default(''),
-  hazards: z.array(z.enum(HAZARDS)).default([]),
+  name: plainText(120, { required: 'Enter a task name' }),
+  intervalMeter: boundedNumber('Meter interval', TASK_BOUNDS.intervalMeter).nullable(),
+  intervalDays: boundedNumber('Day interval', TASK_BOUNDS.intervalDays).nullable(),
+  firstServiceMeter: boundedNumber('First service point', TASK_BOUNDS.firstServiceMeter).nullable(),
+  warnMeter: boundedNumber('Warning window (meter)', TASK_BOUNDS.warnMeter).nullable(),
+  warnDays: boundedNumber('Warning window (days)', TASK_BOUNDS.warnDays).nullable(),
+  parts: z
+    .array(taskPartSchema, { error: 'Parts must be a list' })
+    .max(50, { error: 'At most 50 parts' }),
+  fluids: z
+    .array(taskFluidSchema, { error: 'Fluids must be a list' })
+    .max(20, { error: 'At most 20 fluids' }),
+  labourHours: boundedNumber('Estimated labour', TASK_BOUNDS.labourHours).nullable(),
+  instructions: plainText(5000, { multiline: true }),
+  safetyNotes: plainText(2000, { multiline: true }),
+  hazards: z
+    .array(z.enum(HAZARDS, { error: `Hazards must be among: ${HAZARDS.join(', ')}` }), {
+      error: 'Hazards must be a list',
+    })
+    .max(HAZARDS.length, { error: `At most ${HAZARDS.length} hazards` }),
 };
 
 const atLeastOneInterval = {
@@ -72,16 +75,43 @@ const atLeastOneInterval = {
 };
 
 export const taskInputSchema = z
-  .object(taskFields)
+  .object({
+    ...taskFields,
+    intervalMeter: taskFields.intervalMeter.default(null),
+    intervalDays: taskFields.intervalDays.default(null),
+    firstServiceMeter: taskFields.firstServiceMeter.default(null),
+    warnMeter: taskFields.warnMeter.default(null),
+    warnDays: taskFields.warnDays.default(null),
+    parts: taskFields.parts.default([]),
+    fluids: taskFields.fluids.default([]),
+    labourHours: taskFields.labourHours.default(null),
+    instructions: taskFields.instructions.default(''),
+    safetyNotes: taskFields.safetyNotes.default(''),
+    hazards: taskFields.hazards.default([]),
+  })
   .refine(atLeastOneInterval.check, atLeastOneInterval.params);
 export type TaskInput = z.infer<typeof taskInputSchema>;
 
-export const taskUpdateSchema = z.object(taskFields).partial();
+/** Only the fields sent; an unknown field is refused by name. */
+export const taskUpdateSchema = z.object(taskFields).partial().strict();
+export type TaskUpdateInput = z.infer<typeof taskUpdateSchema>;
+
+/** A schedule template of a machine category: a named list of tasks applied in one step. */
+export const scheduleTemplateCreateSchema = z.object({
+  category: z.enum(MACHINE_CATEGORIES, {
+    error: `Category must be one of: ${MACHINE_CATEGORIES.join(', ')}`,
+  }),
+  name: plainText(120, { required: 'Enter a template name' }),
+  description: plainText(2000, { multiline: true }).default(''),
+  tasks: z
+    .array(taskInputSchema, { error: 'A template needs at least one task' })
+    .min(1, { error: 'A template needs at least one task' })
+    .max(60, { error: 'At most 60 tasks' }),
+});
+export type ScheduleTemplateCreateInput = z.infer<typeof scheduleTemplateCreateSchema>;
 
 export const lastDoneSchema = z.object({
-  lastDoneMeter: z
-    .number({ error: 'Meter value must be a number' })
-    .min(0, { error: 'Meter value may not be negative' }),
-  lastDoneOn: z.iso.date({ error: 'Date must be yyyy-mm-dd' }),
+  lastDoneMeter: boundedNumber('Meter value', TASK_BOUNDS.meter),
+  lastDoneOn: isoDate('Date', PAST_DATES),
 });
 export type LastDoneInput = z.infer<typeof lastDoneSchema>;

@@ -1,5 +1,15 @@
 import { z } from 'zod';
-import { uuid, pagingFields } from './common';
+import {
+  boundedNumber,
+  CALENDAR_DATES,
+  isoDate,
+  isoDateTime,
+  pagingFields,
+  PAST_DATES,
+  PLAN_DATES,
+  plainText,
+  uuid,
+} from './common';
 import { FLUID_UNITS } from './schedule';
 
 // Service records: one visit to a machine, planned or done. The client's forms use these schemas
@@ -13,38 +23,31 @@ export const SERVICE_STATUS_LABELS: Record<ServiceStatus, string> = {
   cancelled: 'Cancelled',
 };
 
-const isoDate = (label: string) => z.iso.date({ error: `${label} must be a date, yyyy-mm-dd` });
-const cost = (label: string) =>
-  z
-    .number({ error: `${label} must be a number` })
-    .min(0, { error: `${label} may not be negative` })
-    .max(10_000_000, { error: `${label} is too large` });
+/**
+ * Ranges of a record's numbers. Labour fits numeric(8,2), meter values numeric(14,2) and
+ * measurements numeric(16,4); costs and quantities live in JSON but keep to the trade.
+ */
+export const SERVICE_BOUNDS = {
+  cost: { min: 0, max: 10_000_000 },
+  quantity: { min: 0, max: 100_000, exclusiveMin: true },
+  labourHours: { min: 0, max: 2000 },
+  meter: { min: 0, max: 10_000_000 },
+  measurement: { min: -1_000_000, max: 1_000_000 },
+} as const;
+
+const cost = (label: string) => boundedNumber(label, SERVICE_BOUNDS.cost);
 
 export const servicePartSchema = z.object({
-  partNumber: z
-    .string({ error: 'Enter the part number' })
-    .trim()
-    .min(1, { error: 'Enter the part number' })
-    .max(60, { error: 'Use at most 60 characters' }),
-  description: z.string().trim().max(200, { error: 'Use at most 200 characters' }).default(''),
-  quantity: z
-    .number({ error: 'Quantity must be a number' })
-    .positive({ error: 'Quantity must be greater than 0' })
-    .max(100_000, { error: 'Quantity is too large' }),
+  partNumber: plainText(60, { required: 'Enter the part number' }),
+  description: plainText(200).default(''),
+  quantity: boundedNumber('Quantity', SERVICE_BOUNDS.quantity),
   unitCost: cost('Unit cost').nullable().default(null),
 });
 export type ServicePart = z.infer<typeof servicePartSchema>;
 
 export const serviceFluidSchema = z.object({
-  kind: z
-    .string({ error: 'Enter the fluid kind' })
-    .trim()
-    .min(1, { error: 'Enter the fluid kind' })
-    .max(80, { error: 'Use at most 80 characters' }),
-  volume: z
-    .number({ error: 'Volume must be a number' })
-    .positive({ error: 'Volume must be greater than 0' })
-    .max(100_000, { error: 'Volume is too large' }),
+  kind: plainText(80, { required: 'Enter the fluid kind' }),
+  volume: boundedNumber('Volume', SERVICE_BOUNDS.quantity),
   unit: z.enum(FLUID_UNITS, { error: `Unit must be one of: ${FLUID_UNITS.join(', ')}` }),
   /** cost per unit of volume (per L, gal, …) */
   unitCost: cost('Unit cost').nullable().default(null),
@@ -52,29 +55,18 @@ export const serviceFluidSchema = z.object({
 export type ServiceFluid = z.infer<typeof serviceFluidSchema>;
 
 export const otherCostSchema = z.object({
-  description: z
-    .string({ error: 'Describe the cost' })
-    .trim()
-    .min(1, { error: 'Describe the cost' })
-    .max(200, { error: 'Use at most 200 characters' }),
+  description: plainText(200, { required: 'Describe the cost' }),
   amount: cost('Amount'),
 });
 export type OtherCost = z.infer<typeof otherCostSchema>;
 
 export const measurementSchema = z
   .object({
-    name: z
-      .string({ error: 'Name the measurement' })
-      .trim()
-      .min(1, { error: 'Name the measurement' })
-      .max(80, { error: 'Use at most 80 characters' }),
-    value: z
-      .number({ error: 'Value must be a number' })
-      .min(-1_000_000, { error: 'Value is out of range' })
-      .max(1_000_000, { error: 'Value is out of range' }),
-    unit: z.string().trim().max(20, { error: 'Use at most 20 characters' }).default(''),
-    specMin: z.number({ error: 'Spec minimum must be a number' }).nullable().default(null),
-    specMax: z.number({ error: 'Spec maximum must be a number' }).nullable().default(null),
+    name: plainText(80, { required: 'Name the measurement' }),
+    value: boundedNumber('Value', SERVICE_BOUNDS.measurement),
+    unit: plainText(20).default(''),
+    specMin: boundedNumber('Spec minimum', SERVICE_BOUNDS.measurement).nullable().default(null),
+    specMax: boundedNumber('Spec maximum', SERVICE_BOUNDS.measurement).nullable().default(null),
   })
   .refine((m) => m.specMin === null || m.specMax === null || m.specMin <= m.specMax, {
     error: 'Spec maximum must not be below the spec minimum',
@@ -84,40 +76,40 @@ export type MeasurementInput = z.infer<typeof measurementSchema>;
 
 /** Something counted, removed or set on the way apart that must go back the same way. */
 export const reassemblySettingSchema = z.object({
-  what: z
-    .string({ error: 'Say what was counted, removed or set' })
-    .trim()
-    .min(1, { error: 'Say what was counted, removed or set' })
-    .max(200, { error: 'Use at most 200 characters' }),
-  value: z
-    .string({ error: 'Enter the setting, e.g. 3½ turns out' })
-    .trim()
-    .min(1, { error: 'Enter the setting, e.g. 3½ turns out' })
-    .max(200, { error: 'Use at most 200 characters' }),
+  what: plainText(200, { required: 'Say what was counted, removed or set' }),
+  value: plainText(200, { required: 'Enter the setting, e.g. 3½ turns out' }),
   restored: z.boolean({ error: 'Restored must be true or false' }).default(false),
 });
 export type ReassemblySetting = z.infer<typeof reassemblySettingSchema>;
 
 const idList = (max: number, what: string) =>
-  z.array(uuid).max(max, { error: `At most ${max} ${what}` });
+  z
+    .array(uuid, { error: `Give the ${what} as a list of ids` })
+    .max(max, { error: `At most ${max} ${what}` });
 
 /** Fields any record carries, planned or done (no defaults: an update changes only what it names). */
 const recordFields = {
   taskIds: idList(60, 'tasks'),
   technicianIds: idList(20, 'technicians'),
-  labourHours: z
-    .number({ error: 'Labour hours must be a number' })
-    .min(0, { error: 'Labour hours may not be negative' })
-    .max(2000, { error: 'Labour hours is too large' })
-    .nullable(),
-  parts: z.array(servicePartSchema).max(100, { error: 'At most 100 part lines' }),
-  fluids: z.array(serviceFluidSchema).max(50, { error: 'At most 50 fluid lines' }),
-  otherCosts: z.array(otherCostSchema).max(50, { error: 'At most 50 cost lines' }),
-  notes: z.string().max(10_000, { error: 'Use at most 10,000 characters' }),
-  measurements: z.array(measurementSchema).max(100, { error: 'At most 100 measurements' }),
-  reassemblySettings: z.array(reassemblySettingSchema).max(100, { error: 'At most 100 settings' }),
+  labourHours: boundedNumber('Labour hours', SERVICE_BOUNDS.labourHours).nullable(),
+  parts: z
+    .array(servicePartSchema, { error: 'Parts must be a list' })
+    .max(100, { error: 'At most 100 part lines' }),
+  fluids: z
+    .array(serviceFluidSchema, { error: 'Fluids must be a list' })
+    .max(50, { error: 'At most 50 fluid lines' }),
+  otherCosts: z
+    .array(otherCostSchema, { error: 'Other costs must be a list' })
+    .max(50, { error: 'At most 50 cost lines' }),
+  notes: plainText(10_000, { multiline: true }),
+  measurements: z
+    .array(measurementSchema, { error: 'Measurements must be a list' })
+    .max(100, { error: 'At most 100 measurements' }),
+  reassemblySettings: z
+    .array(reassemblySettingSchema, { error: 'Reassembly settings must be a list' })
+    .max(100, { error: 'At most 100 settings' }),
   /** why a setting is not ticked as restored, when completing anyway */
-  unrestoredReason: z.string().trim().max(2000, { error: 'Use at most 2,000 characters' }),
+  unrestoredReason: plainText(2000, { multiline: true }),
   closesDefectIds: idList(50, 'defects'),
 };
 
@@ -137,21 +129,16 @@ const newRecordFields = {
 };
 
 const completionFields = {
-  performedOn: isoDate('Performed on'),
-  meterValue: z
-    .number({ error: 'Meter value at service must be a number' })
-    .min(0, { error: 'Meter value may not be negative' })
-    .max(10_000_000, { error: 'Meter value is too large' }),
+  performedOn: isoDate('Performed on', PAST_DATES),
+  meterValue: boundedNumber('Meter value at service', SERVICE_BOUNDS.meter),
   /** when the meter was read; default: now when performed today, else midday local time */
-  meterReadAt: z.iso
-    .datetime({ offset: true, error: 'Meter read at must be an ISO date-time' })
-    .optional(),
+  meterReadAt: isoDateTime('Meter read at', PAST_DATES).optional(),
 };
 
 export const serviceRecordCreateSchema = z
   .object({
     status: z.enum(['planned', 'completed'], { error: 'Status must be planned or completed' }),
-    plannedFor: isoDate('Planned for').nullable().default(null),
+    plannedFor: isoDate('Planned for', PLAN_DATES).nullable().default(null),
     performedOn: completionFields.performedOn.optional(),
     meterValue: completionFields.meterValue.optional(),
     meterReadAt: completionFields.meterReadAt,
@@ -175,9 +162,11 @@ export const serviceRecordCreateSchema = z
   });
 export type ServiceRecordCreateInput = z.infer<typeof serviceRecordCreateSchema>;
 
+/** Only the fields sent; an unknown field is refused by name. */
 export const serviceRecordUpdateSchema = z
-  .object({ plannedFor: isoDate('Planned for').nullable(), ...recordFields })
-  .partial();
+  .object({ plannedFor: isoDate('Planned for', PLAN_DATES).nullable(), ...recordFields })
+  .partial()
+  .strict();
 export type ServiceRecordUpdateInput = z.infer<typeof serviceRecordUpdateSchema>;
 
 /** Completing a planned record: the visit's facts, plus any field to change on the way. */
@@ -188,7 +177,7 @@ export const serviceRecordCompleteSchema = z
 export type ServiceRecordCompleteInput = z.infer<typeof serviceRecordCompleteSchema>;
 
 export const serviceHistoryQuerySchema = z.object({
-  q: z.string().trim().max(100, { error: 'Use at most 100 characters' }).optional(),
+  q: plainText(100).optional(),
   status: z
     .enum(SERVICE_STATUSES, { error: `Status must be one of: ${SERVICE_STATUSES.join(', ')}` })
     .optional(),
@@ -197,15 +186,11 @@ export const serviceHistoryQuerySchema = z.object({
 export type ServiceHistoryQuery = z.infer<typeof serviceHistoryQuerySchema>;
 
 export const shopWeekQuerySchema = z.object({
-  start: isoDate('Start').optional(),
+  start: isoDate('Start', CALENDAR_DATES).optional(),
 });
 
 export const measurementSeriesQuerySchema = z.object({
-  name: z
-    .string({ error: 'Give the measurement name' })
-    .trim()
-    .min(1, { error: 'Give the measurement name' })
-    .max(80),
+  name: plainText(80, { required: 'Give the measurement name' }),
 });
 
 /** Largest attachment (photo or PDF), bytes. */

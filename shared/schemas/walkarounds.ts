@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { MACHINE_CATEGORIES } from '../constants';
-import { uuid, pagingFields } from './common';
+import { boundedNumber, isoDateTime, pagingFields, PAST_DATES, plainText, uuid } from './common';
 import { HAZARDS } from './schedule';
+import { METER_BOUNDS } from './readings';
 
 // Daily walkarounds (pre-operation inspections) and the checklist templates they follow.
 
@@ -26,12 +27,8 @@ export const checklistItemSchema = z.object({
       error: 'Item id: lower-case letters, digits and hyphens, at most 60',
     })
     .optional(),
-  label: z
-    .string({ error: 'Enter what to check' })
-    .trim()
-    .min(1, { error: 'Enter what to check' })
-    .max(160, { error: 'Use at most 160 characters' }),
-  guidance: z.string().trim().max(600, { error: 'Use at most 600 characters' }).default(''),
+  label: plainText(160, { required: 'Enter what to check' }),
+  guidance: plainText(600, { multiline: true }).default(''),
   /** a fail here tags the machine out */
   critical: z.boolean({ error: 'Critical must be true or false' }).default(false),
   hazards: z
@@ -39,12 +36,12 @@ export const checklistItemSchema = z.object({
     .max(6)
     .default([]),
   /** shown beside the item; left empty, the standard caution of its hazards is used */
-  caution: z.string().trim().max(1200, { error: 'Use at most 1,200 characters' }).default(''),
+  caution: plainText(1200, { multiline: true }).default(''),
 });
 export type ChecklistItemInput = z.infer<typeof checklistItemSchema>;
 
 const items = z
-  .array(checklistItemSchema)
+  .array(checklistItemSchema, { error: 'A checklist needs at least one item' })
   .min(1, { error: 'A checklist needs at least one item' })
   .max(80, { error: 'At most 80 items' });
 
@@ -52,12 +49,8 @@ const templateFields = {
   category: z.enum(MACHINE_CATEGORIES, {
     error: `Category must be one of: ${MACHINE_CATEGORIES.join(', ')}`,
   }),
-  name: z
-    .string({ error: 'Enter a name' })
-    .trim()
-    .min(1, { error: 'Enter a name' })
-    .max(120, { error: 'Use at most 120 characters' }),
-  description: z.string().trim().max(2000, { error: 'Use at most 2,000 characters' }),
+  name: plainText(120, { required: 'Enter a name' }),
+  description: plainText(2000, { multiline: true }),
   items,
 };
 
@@ -67,7 +60,8 @@ export const checklistTemplateCreateSchema = z.object({
 });
 export type ChecklistTemplateCreateInput = z.infer<typeof checklistTemplateCreateSchema>;
 
-export const checklistTemplateUpdateSchema = z.object(templateFields).partial();
+/** Only the fields sent (items, when sent, replace the list); an unknown field is refused by name. */
+export const checklistTemplateUpdateSchema = z.object(templateFields).partial().strict();
 export type ChecklistTemplateUpdateInput = z.infer<typeof checklistTemplateUpdateSchema>;
 
 export const checklistQuerySchema = z.object({
@@ -77,13 +71,9 @@ export const checklistQuerySchema = z.object({
 });
 
 export const walkaroundAnswerSchema = z.object({
-  itemId: z
-    .string({ error: 'Give the checklist item id' })
-    .trim()
-    .min(1, { error: 'Give the checklist item id' })
-    .max(60),
+  itemId: plainText(60, { required: 'Give the checklist item id' }),
   result: z.enum(WALKAROUND_RESULTS, { error: 'Result must be ok, attention or fail' }),
-  note: z.string().trim().max(1000, { error: 'Use at most 1,000 characters' }).default(''),
+  note: plainText(1000, { multiline: true }).default(''),
   /** id from POST …/walkaround-photos */
   photoId: uuid.nullable().default(null),
 });
@@ -96,19 +86,14 @@ export const walkaroundCreateSchema = z.object({
   purpose: z
     .enum(WALKAROUND_PURPOSES, { error: 'Purpose must be use or inspection' })
     .default('use'),
-  meterValue: z
-    .number({ error: 'Hour meter must be a number' })
-    .min(0, { error: 'Hour meter may not be negative' })
-    .max(10_000_000, { error: 'Hour meter value is too large' }),
+  meterValue: boundedNumber('Hour meter', METER_BOUNDS),
   /** when the walkaround was done (kept on the phone when offline); default now */
-  performedAt: z.iso
-    .datetime({ offset: true, error: 'Performed at must be an ISO date-time' })
-    .optional(),
+  performedAt: isoDateTime('Performed at', PAST_DATES).optional(),
   items: z
-    .array(walkaroundAnswerSchema)
+    .array(walkaroundAnswerSchema, { error: 'Answer the checklist items' })
     .min(1, { error: 'Answer the checklist items' })
     .max(100, { error: 'At most 100 items' }),
-  notes: z.string().trim().max(2000, { error: 'Use at most 2,000 characters' }).default(''),
+  notes: plainText(2000, { multiline: true }).default(''),
 });
 export type WalkaroundCreateInput = z.infer<typeof walkaroundCreateSchema>;
 

@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { route } from '../route';
 import {
   lastDoneSchema,
+  scheduleTemplateCreateSchema,
   taskInputSchema,
   taskUpdateSchema,
 } from '../../../shared/schemas/schedule';
@@ -39,15 +40,6 @@ const templateSchema = z
     tasks: z.array(z.object({ name: z.string() }).passthrough()),
   })
   .openapi('ScheduleTemplate');
-
-const templateInputSchema = z.object({
-  category: z.enum(MACHINE_CATEGORIES, {
-    error: `Category must be one of: ${MACHINE_CATEGORIES.join(', ')}`,
-  }),
-  name: z.string().trim().min(1, { error: 'Enter a template name' }).max(120),
-  description: z.string().max(2000).default(''),
-  tasks: z.array(taskInputSchema).min(1, { error: 'A template needs at least one task' }).max(60),
-});
 
 async function tasksWithDue(organizationId: string, machineId: string) {
   const [tasks, due] = await Promise.all([
@@ -207,7 +199,7 @@ export function tasksRouter(): Router {
     summary: 'Create a schedule template',
     tags: ['schedule'],
     params: orgParams,
-    body: templateInputSchema,
+    body: scheduleTemplateCreateSchema,
     status: 201,
     response: z.object({ data: templateSchema }),
     handler: async ({ req, body }) => {

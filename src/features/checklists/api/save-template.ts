@@ -1,15 +1,20 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { ChecklistTemplateCreateInput } from '../../../../shared/schemas/walkarounds';
+import type { z } from 'zod';
+import type {
+  ChecklistTemplateCreateInput,
+  checklistTemplateUpdateSchema,
+} from '../../../../shared/schemas/walkarounds';
 import { apiClient, segment } from '../../../lib/api-client';
 import { checklistKeys, walkaroundChecklistsKey } from './keys';
 import type { ChecklistTemplate } from './types';
 
+/** A category's first farm checklist (every field), or the fields changed on the existing one. */
+export type SaveTemplateInput =
+  | { templateId: null; input: ChecklistTemplateCreateInput }
+  | { templateId: string; input: z.input<typeof checklistTemplateUpdateSchema> };
+
 /** POST a category's first farm checklist, or PATCH the existing one (items replace the list). */
-export const saveTemplate = (
-  orgId: string,
-  templateId: string | null,
-  input: ChecklistTemplateCreateInput,
-) =>
+export const saveTemplate = (orgId: string, { templateId, input }: SaveTemplateInput) =>
   (templateId
     ? apiClient.patch<{ data: ChecklistTemplate }>(
         `/organizations/${segment(orgId)}/checklist-templates/${segment(templateId)}`,
@@ -24,13 +29,7 @@ export const saveTemplate = (
 export function useSaveTemplate(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: ({
-      templateId,
-      input,
-    }: {
-      templateId: string | null;
-      input: ChecklistTemplateCreateInput;
-    }) => saveTemplate(orgId, templateId, input),
+    mutationFn: (save: SaveTemplateInput) => saveTemplate(orgId, save),
     onSuccess: () =>
       Promise.all(
         [checklistKeys.list(orgId), walkaroundChecklistsKey].map((queryKey) =>

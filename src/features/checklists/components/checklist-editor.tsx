@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useRef, useState } from 'react';
 import { useFieldArray, useForm, useWatch, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { CATEGORY_LABELS, type MachineCategory } from '../../../../shared/constants';
@@ -7,6 +7,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { TextareaField } from '../../../components/ui/textarea-field';
+import { changedFields } from '../../../lib/changed-fields';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useSaveTemplate } from '../api/save-template';
 import type { BuiltInChecklist, ChecklistTemplate } from '../api/types';
@@ -39,6 +40,13 @@ export function ChecklistEditor({
   const save = useSaveTemplate(orgId);
   const [formError, setFormError] = useState<string | null>(null);
   const [openKeys, setOpenKeys] = useState<Set<string>>(new Set());
+  // what the server holds: an edit of the farm's checklist sends only the fields changed from it
+  const saved = useRef<ChecklistFormValues>({
+    category,
+    name: start.name,
+    description: start.description,
+    items: start.items,
+  });
   const {
     register,
     control,
@@ -48,12 +56,7 @@ export function ChecklistEditor({
     formState: { errors, isSubmitting, isDirty },
   } = useForm({
     resolver: zodResolver(checklistTemplateCreateSchema),
-    defaultValues: {
-      category,
-      name: start.name,
-      description: start.description,
-      items: start.items,
-    } satisfies ChecklistFormValues,
+    defaultValues: saved.current,
   });
   // the items carry their own `id` (kept so past walkarounds still match): rows get `key`
   const items = useFieldArray({ control, name: 'items', keyName: 'key' });
@@ -79,13 +82,18 @@ export function ChecklistEditor({
     async (values) => {
       setFormError(null);
       try {
-        const result = await save.mutateAsync({ templateId: template?.id ?? null, input: values });
-        reset({
+        const result = await save.mutateAsync(
+          template
+            ? { templateId: template.id, input: changedFields(saved.current, values) }
+            : { templateId: null, input: values },
+        );
+        saved.current = {
           category,
           name: result.name,
           description: result.description,
           items: result.items,
-        });
+        };
+        reset(saved.current);
         onSaved();
       } catch (error) {
         const names = ['name', 'description', 'items'].concat(

@@ -39,8 +39,8 @@ export function MachineDetails({
           orgId={orgId}
           machine={machine}
           submitLabel="Save machine"
-          onSubmit={async (values) => {
-            await update.mutateAsync(values);
+          onSubmit={async (_values, changed) => {
+            if (Object.keys(changed).length) await update.mutateAsync(changed);
             setEditing(false);
             setNotice('Machine saved.');
           }}

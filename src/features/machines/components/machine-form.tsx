@@ -9,12 +9,17 @@ import {
   MACHINE_STATUS_LABELS,
   type MachineStatus,
 } from '../../../../shared/constants';
-import { machineCreateSchema, type MachineCreateInput } from '../../../../shared/schemas/machines';
+import {
+  machineCreateSchema,
+  type MachineCreateInput,
+  type MachineUpdateInput,
+} from '../../../../shared/schemas/machines';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { CheckboxGroup } from '../../../components/ui/checkbox-group';
 import { SelectField, TextField } from '../../../components/ui/field';
 import { TextareaField } from '../../../components/ui/textarea-field';
+import { changedFields } from '../../../lib/changed-fields';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useOperators } from '../api/get-operators';
 import type { Machine } from '../api/types';
@@ -78,7 +83,8 @@ interface MachineFormProps {
   /** the machine being edited; a new machine without it */
   machine?: Machine;
   submitLabel: string;
-  onSubmit: (values: MachineCreateInput) => Promise<unknown>;
+  /** every value (to create), and the fields changed from the machine's (to edit: send only those) */
+  onSubmit: (values: MachineCreateInput, changed: MachineUpdateInput) => Promise<unknown>;
   onCancel?: () => void;
 }
 
@@ -100,7 +106,7 @@ export function MachineForm({ orgId, machine, submitLabel, onSubmit, onCancel }:
   const submit = handleSubmit(async (values) => {
     setFormError(null);
     try {
-      await onSubmit(values);
+      await onSubmit(values, changedFields(defaultsFrom(machine), values));
     } catch (error) {
       setFormError(applyServerErrors(error, setError, FIELD_NAMES));
     }

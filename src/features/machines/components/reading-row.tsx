@@ -156,18 +156,16 @@ function CorrectReadingForm({
 }) {
   const correct = useCorrectReading(orgId, machineId);
   const [formError, setFormError] = useState<string | null>(null);
+  const initial = {
+    value: reading.value,
+    takenAt: toDateTimeLocalValue(reading.takenAt, timeZone),
+  };
   const {
     register,
     handleSubmit,
     setError,
     formState: { errors, isSubmitting },
-  } = useForm({
-    resolver: zodResolver(readingFormSchema),
-    defaultValues: {
-      value: reading.value,
-      takenAt: toDateTimeLocalValue(reading.takenAt, timeZone),
-    },
-  });
+  } = useForm({ resolver: zodResolver(readingFormSchema), defaultValues: initial });
 
   const submit = handleSubmit(async (values) => {
     setFormError(null);
@@ -177,7 +175,12 @@ function CorrectReadingForm({
       return;
     }
     try {
-      await correct.mutateAsync({ readingId: reading.id, value: values.value, takenAt });
+      // only what changed: an untouched time keeps its seconds (the field shows minutes)
+      await correct.mutateAsync({
+        readingId: reading.id,
+        ...(values.value !== initial.value && { value: values.value }),
+        ...(values.takenAt !== initial.takenAt && { takenAt }),
+      });
       onDone();
     } catch (error) {
       setFormError(applyServerErrors(error, setError, ['value', 'takenAt']));

@@ -5,6 +5,7 @@ import { Icon } from '../../../components/ui/icons';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { DueStatusBadge } from '../../../components/ui/status-badges';
 import { isApiError } from '../../../lib/api-client';
+import { changedFields } from '../../../lib/changed-fields';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
 import { useDeleteTask } from '../api/delete-task';
 import { useUpdateTask } from '../api/update-task';
@@ -52,16 +53,19 @@ export function TaskCard({
   const hasHazard = task.hazards.length > 0;
 
   if (mode === 'edit') {
+    const initial = taskToInput(task);
     return (
       <li className="rounded-xl border border-field-300 bg-white p-4 shadow-card lg:col-span-2">
         <h3 className="mb-4 text-lg font-black text-field-950">Edit {task.name}</h3>
         <TaskForm
           unit={unit}
           label={`Edit ${task.name}`}
-          initial={taskToInput(task)}
+          initial={initial}
           submitLabel="Save task"
           onSubmit={async (values) => {
-            await update.mutateAsync({ taskId: task.id, ...values });
+            const changed = changedFields(initial, values);
+            if (Object.keys(changed).length)
+              await update.mutateAsync({ taskId: task.id, ...changed });
             setMode('view');
           }}
           onCancel={() => setMode('view')}
