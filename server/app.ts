@@ -23,6 +23,7 @@ import { defectsRouter } from './routes/defects/defects.router';
 import { notificationsRouter } from './routes/notifications/notifications.router';
 import { calendarRouter } from './routes/calendar/calendar.router';
 import { dealersRouter } from './routes/dealers/dealers.router';
+import { exportRouter } from './routes/export/export.router';
 import './models';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -80,6 +81,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(notificationsRouter());
   api.use(calendarRouter());
   api.use(dealersRouter());
+  api.use(exportRouter());
   api.use(devRouter());
   api.use(notFoundHandler);
   app.use('/api/v1', api);

@@ -12,7 +12,13 @@ export const notFoundHandler: RequestHandler = (_req, _res, next) => {
 };
 
 // The one place errors become JSON: { error: { code, message, fields? } }.
-export const errorHandler: ErrorRequestHandler = (err, req, res, _next) => {
+export const errorHandler: ErrorRequestHandler = (err, req, res, next) => {
+  // A stream (a download) failed after its headers went out: no JSON can follow. Express's own
+  // handler then cuts the connection, so the client sees an incomplete file, not a complete one.
+  if (res.headersSent) {
+    logger.warn({ err, url: req.originalUrl }, 'response failed after its headers were sent');
+    return next(err);
+  }
   let status = 500;
   let body: { code: string; message: string; fields?: Record<string, string> } = {
     code: 'internal',

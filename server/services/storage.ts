@@ -2,6 +2,7 @@ import type { Readable } from 'node:stream';
 import {
   DeleteObjectCommand,
   GetObjectCommand,
+  ListObjectsV2Command,
   PutObjectCommand,
   S3Client,
 } from '@aws-sdk/client-s3';
@@ -40,4 +41,22 @@ export async function getObject(
 
 export async function deleteObject(key: string): Promise<void> {
   await s3().send(new DeleteObjectCommand({ Bucket: env.S3_BUCKET, Key: key }));
+}
+
+/** True when the store answered that the object does not exist. */
+export function isMissingObject(error: unknown): boolean {
+  const e = error as { name?: string; $metadata?: { httpStatusCode?: number } };
+  return e?.name === 'NoSuchKey' || e?.$metadata?.httpStatusCode === 404;
+}
+
+/** Every key in the bucket under `prefix` (all of them by default), page by page. */
+export async function* listObjectKeys(prefix = ''): AsyncGenerator<string> {
+  let token: string | undefined;
+  do {
+    const page = await s3().send(
+      new ListObjectsV2Command({ Bucket: env.S3_BUCKET, Prefix: prefix, ContinuationToken: token }),
+    );
+    for (const item of page.Contents ?? []) if (item.Key) yield item.Key;
+    token = page.IsTruncated ? page.NextContinuationToken : undefined;
+  } while (token);
 }

@@ -1,0 +1,56 @@
+import { Router } from 'express';
+import { z } from 'zod';
+import { route } from '../route';
+import { authorize } from '../../policies/access';
+import { canExportFarmData } from '../../policies/farm-export';
+import { recordAudit } from '../../services/audit';
+import { writeFarmExport } from '../../services/farm-export';
+import { todayIso } from '../../../shared/domain';
+
+const params = z.object({ orgId: z.uuid() });
+
+/** A file name a person recognises: hourstone-<farm>-<local date>.zip */
+const fileName = (name: string, date: string) => {
+  const slug = name
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-|-$/g, '');
+  return `hourstone-${slug || 'farm'}-${date}.zip`;
+};
+
+export function exportRouter(): Router {
+  const router = Router();
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/export',
+    summary:
+      "All of the farm's data as one zip of CSV files (machines, readings, tasks, service records with parts and measurements, walkarounds, defects), organization.json, the stored files and a README.txt of the columns. Managers only.",
+    tags: ['organizations'],
+    params,
+    response: z.string().openapi({ format: 'binary', description: 'application/zip' }),
+    handler: async ({ req, res }) => {
+      const access = req.access!;
+      authorize(canExportFarmData(access), "Only the farm's manager may download its data");
+      const { organization } = access;
+      const now = new Date();
+      await recordAudit({
+        organizationId: organization.id,
+        actorUserId: access.userId,
+        action: 'organization.export',
+        entityType: 'organization',
+        entityId: organization.id,
+      });
+      res.setHeader('Content-Type', 'application/zip');
+      res.setHeader(
+        'Content-Disposition',
+        `attachment; filename="${fileName(organization.name, todayIso(organization.timeZone, now))}"`,
+      );
+      res.setHeader('Cache-Control', 'no-store');
+      res.status(200);
+      await writeFarmExport(organization, res, now);
+    },
+  });
+
+  return router;
+}
