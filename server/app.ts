@@ -14,6 +14,7 @@ import { devRouter } from './routes/dev/dev.router';
 import { machinesRouter } from './routes/machines/machines.router';
 import { machinePhotoRouter } from './routes/machines/photo.router';
 import { tasksRouter } from './routes/tasks/tasks.router';
+import { taskHistoryRouter } from './routes/tasks/history.router';
 import { machineStatusRouter } from './routes/machines/status.router';
 import { readingsRouter } from './routes/readings/readings.router';
 import { dueRouter } from './routes/due/due.router';
@@ -72,6 +73,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(machinesRouter());
   api.use(machinePhotoRouter());
   api.use(tasksRouter());
+  api.use(taskHistoryRouter());
   api.use(readingsRouter());
   api.use(dueRouter());
   api.use(servicesRouter());

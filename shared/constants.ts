@@ -61,10 +61,19 @@ export const MACHINE_STATUS_LABELS: Record<MachineStatus, string> = {
 export const READING_SOURCES = ['manual', 'walkaround', 'import', 'service', 'telematics'] as const;
 export type ReadingSource = (typeof READING_SOURCES)[number];
 
-export const DUE_STATUSES = ['overdue', 'due_soon', 'ok', 'no_forecast'] as const;
+// history_unknown: a task on a machine that came with hours, whose last service nobody has
+// given yet; it is not guessed, so it is neither OK nor due.
+export const DUE_STATUSES = [
+  'overdue',
+  'due_soon',
+  'history_unknown',
+  'ok',
+  'no_forecast',
+] as const;
 export const DUE_STATUS_LABELS = {
   overdue: 'Overdue',
   due_soon: 'Due soon',
+  history_unknown: 'History unknown',
   ok: 'OK',
   no_forecast: 'No forecast',
 } as const;

@@ -24,6 +24,8 @@ export class MachineForecast extends Model<
   declare lastRawValue: number | null;
   declare lastTakenAt: Date | null;
   declare firstTakenAt: Date | null;
+  /** lifetime value of the first reading: above 0 means the machine came with hours */
+  declare firstValue: CreationOptional<number | null>;
   declare usage: UsageEstimate | null;
   declare computedOn: string | null;
   declare updatedAt: CreationOptional<Date>;
@@ -39,6 +41,7 @@ MachineForecast.init(
     lastRawValue: numericColumn('lastRawValue', 14, 2, true),
     lastTakenAt: { type: DataTypes.DATE, allowNull: true },
     firstTakenAt: { type: DataTypes.DATE, allowNull: true },
+    firstValue: numericColumn('firstValue', 14, 2, true),
     usage: { type: DataTypes.JSONB, allowNull: true },
     computedOn: { type: DataTypes.DATEONLY, allowNull: true },
     updatedAt: DataTypes.DATE,

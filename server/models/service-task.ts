@@ -31,6 +31,11 @@ export class ServiceTask extends Model<
   declare lastDoneMeter: number | null;
   /** ISO date, local to the organization */
   declare lastDoneOn: string | null;
+  /** added without a last service; counts only while the machine came with hours (see due point) */
+  declare historyUnknown: CreationOptional<boolean>;
+  /** "start counting from now" in place of an unknown last service: lifetime meter and ISO date */
+  declare countFromMeter: CreationOptional<number | null>;
+  declare countFromOn: CreationOptional<string | null>;
   declare position: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -55,6 +60,9 @@ ServiceTask.init(
     hazards: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
     lastDoneMeter: numericColumn('lastDoneMeter', 14, 2, true),
     lastDoneOn: { type: DataTypes.DATEONLY, allowNull: true },
+    historyUnknown: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
+    countFromMeter: numericColumn('countFromMeter', 14, 2, true),
+    countFromOn: { type: DataTypes.DATEONLY, allowNull: true },
     position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

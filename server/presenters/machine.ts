@@ -27,7 +27,7 @@ export const duePointSchema = z
     effectiveDate: z.string().nullable(),
     remainingMeter: z.number().nullable(),
     remainingDays: z.number().nullable(),
-    basis: z.enum(['recorded', 'first_service', 'assumed']),
+    basis: z.enum(['recorded', 'first_service', 'assumed', 'counted', 'unknown']),
   })
   .openapi('DuePoint');
 
@@ -158,6 +158,9 @@ export const taskSchema = z
     hazards: z.array(z.string()),
     lastDoneMeter: z.number().nullable(),
     lastDoneOn: z.string().nullable(),
+    /** "start counting from now" in place of an unknown last service (lifetime meter, ISO date) */
+    countFromMeter: z.number().nullable(),
+    countFromOn: z.string().nullable(),
     due: duePointSchema.nullable(),
   })
   .openapi('ServiceTask');
@@ -179,6 +182,8 @@ export const presentTask = (t: ServiceTask, due: DuePoint | null) => ({
   hazards: t.hazards,
   lastDoneMeter: t.lastDoneMeter,
   lastDoneOn: t.lastDoneOn,
+  countFromMeter: t.countFromMeter ?? null,
+  countFromOn: t.countFromOn ?? null,
   due,
 });
 

@@ -6,7 +6,13 @@ import { dueList, type DueRow } from './due-list';
 import { activeLinks, dealerAccessFor, recordDealerRead } from './dealer-links';
 
 const DAY_MS = 86_400_000;
-const STATUS_RANK: Record<DueStatus, number> = { overdue: 0, due_soon: 1, ok: 2, no_forecast: 3 };
+const STATUS_RANK: Record<DueStatus, number> = {
+  overdue: 0,
+  due_soon: 1,
+  history_unknown: 2,
+  ok: 3,
+  no_forecast: 4,
+};
 
 export interface BoardRow extends DueRow {
   customer: { id: string; name: string; timeZone: string; access: 'view' | 'service' };
@@ -57,7 +63,13 @@ export async function boardRows(
   }
   const task = query.task?.toLowerCase();
   const matching = task ? rows.filter((r) => r.taskName.toLowerCase().includes(task)) : rows;
-  const counts: Record<DueStatus, number> = { overdue: 0, due_soon: 0, ok: 0, no_forecast: 0 };
+  const counts: Record<DueStatus, number> = {
+    overdue: 0,
+    due_soon: 0,
+    history_unknown: 0,
+    ok: 0,
+    no_forecast: 0,
+  };
   for (const r of matching) counts[r.due.status]++;
   const listed = query.status ? matching.filter((r) => r.due.status === query.status) : matching;
   listed.sort(

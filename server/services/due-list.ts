@@ -44,7 +44,9 @@ export function dueListSql(filters: {
   if (filters.status) where.push('d.status = :status');
   if (filters.machineId) where.push('d.machine_id = :machineId');
   if (filters.horizon)
-    where.push("(d.status IN ('overdue','due_soon','no_forecast') OR d.sort_date <= :until)");
+    where.push(
+      "(d.status IN ('overdue','due_soon','history_unknown','no_forecast') OR d.sort_date <= :until)",
+    );
   if (filters.operator) where.push(visibleToOperator);
   return `SELECT d.task_id, d.due, t.name AS task_name, t.hazards, t.labour_hours,
       m.id AS machine_id, m.fleet_number, m.name AS machine_name, m.category, m.status AS machine_status, m.meter_unit,
@@ -161,7 +163,9 @@ export function dueCountsSql(filters: {
   if (filters.category) where.push('m.category = :category');
   if (filters.machineId) where.push('d.machine_id = :machineId');
   if (filters.horizon)
-    where.push("(d.status IN ('overdue','due_soon','no_forecast') OR d.sort_date <= :until)");
+    where.push(
+      "(d.status IN ('overdue','due_soon','history_unknown','no_forecast') OR d.sort_date <= :until)",
+    );
   if (filters.operator) where.push(visibleToOperator);
   return `SELECT d.status, count(*)::int AS n FROM task_due_points d
      JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
@@ -186,7 +190,7 @@ async function dueCounts(access: OrgAccess, query: DueQuery, asOf: string) {
     },
     type: QueryTypes.SELECT,
   });
-  const counts = { overdue: 0, due_soon: 0, ok: 0, no_forecast: 0 };
+  const counts = { overdue: 0, due_soon: 0, history_unknown: 0, ok: 0, no_forecast: 0 };
   for (const r of rows) counts[r.status] = r.n;
   return counts;
 }

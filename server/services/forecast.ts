@@ -66,6 +66,7 @@ export async function refreshMachineForecast(
       lastRawValue: last ? Number(last.value) : null,
       lastTakenAt: last ? new Date(last.taken_at) : null,
       firstTakenAt: readings[0] ? new Date(readings[0].taken_at) : null,
+      firstValue: readings[0] ? Number(readings[0].lifetime_value) : null,
       usage: null,
       computedOn: null,
     },
@@ -76,7 +77,7 @@ export async function refreshMachineForecast(
 
 /** The due point of each task of one machine, from its summary, as of a local date. */
 export function duePointsFor(
-  forecast: Pick<MachineForecast, 'daily' | 'lastValue' | 'firstTakenAt'> | null,
+  forecast: Pick<MachineForecast, 'daily' | 'lastValue' | 'firstTakenAt' | 'firstValue'> | null,
   tasks: ServiceTask[],
   timeZone: string,
   asOfIso: string,
@@ -87,6 +88,9 @@ export function duePointsFor(
   const startIso = forecast?.firstTakenAt
     ? isoFromDayNumber(localDayNumber(forecast.firstTakenAt, timeZone))
     : null;
+  // A machine whose first reading was above zero came with hours: a task added to it without a
+  // last service has an unknown history, not the "serviced on time since new" assumption.
+  const cameWithHours = (forecast?.firstValue ?? 0) > 0;
   const points = new Map<string, DuePoint>();
   for (const task of tasks) {
     points.set(
@@ -100,6 +104,9 @@ export function duePointsFor(
           warnDays: task.warnDays,
           lastDoneMeter: task.lastDoneMeter,
           lastDoneOn: task.lastDoneOn,
+          countFromMeter: task.countFromMeter,
+          countFromOn: task.countFromOn,
+          historyUnknown: task.historyUnknown && cameWithHours,
         },
         usage,
         asOfIso,
@@ -156,6 +163,7 @@ export async function recomputeDuePoints(
       lastRawValue: forecast?.lastRawValue ?? null,
       lastTakenAt: forecast?.lastTakenAt ?? null,
       firstTakenAt: forecast?.firstTakenAt ?? null,
+      firstValue: forecast?.firstValue ?? null,
       usage,
       computedOn: asOfIso,
       updatedAt: now,

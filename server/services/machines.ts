@@ -70,7 +70,7 @@ const SORT_SQL: Record<MachineListQuery['sort'], string> = {
   nextDue: 'd.next_due',
 };
 
-const STATUS_RANK = `CASE t.status WHEN 'overdue' THEN 0 WHEN 'due_soon' THEN 1 WHEN 'no_forecast' THEN 2 ELSE 3 END`;
+const STATUS_RANK = `CASE t.status WHEN 'overdue' THEN 0 WHEN 'due_soon' THEN 1 WHEN 'history_unknown' THEN 2 WHEN 'no_forecast' THEN 3 ELSE 4 END`;
 
 /** One page of the fleet, filtered and sorted in SQL (stays fast at thousands of machines). */
 export async function listMachines(access: OrgAccess, query: MachineListQuery) {

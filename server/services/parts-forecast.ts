@@ -64,7 +64,9 @@ export async function partsForecast(
     horizon: query.horizon,
     services: services.length,
     /** due rows left out because they cannot be dated (no forecast) */
-    undated: board.rows.filter((r) => r.due.status === 'no_forecast').length,
+    undated: board.rows.filter(
+      (r) => r.due.status === 'no_forecast' || r.due.status === 'history_unknown',
+    ).length,
     customers: board.customers,
     parts: summary.parts,
     fluids: summary.fluids,

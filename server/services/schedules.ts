@@ -43,37 +43,40 @@ const refresh = (access: OrgAccess, machineId: string, transaction: Transaction)
     timeZone: access.organization.timeZone,
   });
 
-/** Adds tasks to a machine in one transaction and refreshes its due points. */
+/** Adds tasks to a machine in one transaction (the caller's, if given) and refreshes its due points. */
 export async function addTasks(
   access: OrgAccess,
   machine: Machine,
   inputs: TaskInput[],
   action = 'task.create',
-) {
-  return sequelize.transaction(async (transaction) => {
-    const start = await ServiceTask.count({
-      where: { organizationId: access.organization.id, machineId: machine.id },
-      transaction,
-    });
-    const tasks: ServiceTask[] = [];
-    for (const [i, input] of inputs.entries()) {
-      const task = await ServiceTask.create(
-        {
-          ...input,
-          organizationId: access.organization.id,
-          machineId: machine.id,
-          lastDoneMeter: null,
-          lastDoneOn: null,
-          position: start + i,
-        },
-        { transaction },
-      );
-      await audit(access, action, task, {}, transaction);
-      tasks.push(task);
-    }
-    await refresh(access, machine.id, transaction);
-    return tasks;
+  outer?: Transaction,
+): Promise<ServiceTask[]> {
+  if (!outer) return sequelize.transaction((t) => addTasks(access, machine, inputs, action, t));
+  const transaction = outer;
+  const start = await ServiceTask.count({
+    where: { organizationId: access.organization.id, machineId: machine.id },
+    transaction,
   });
+  const tasks: ServiceTask[] = [];
+  for (const [i, input] of inputs.entries()) {
+    const task = await ServiceTask.create(
+      {
+        ...input,
+        organizationId: access.organization.id,
+        machineId: machine.id,
+        lastDoneMeter: null,
+        lastDoneOn: null,
+        // no last service given: "history unknown" if the machine came with hours
+        historyUnknown: true,
+        position: start + i,
+      },
+      { transaction },
+    );
+    await audit(access, action, task, {}, transaction);
+    tasks.push(task);
+  }
+  await refresh(access, machine.id, transaction);
+  return tasks;
 }
 
 export async function updateTask(access: OrgAccess, task: ServiceTask, input: Partial<TaskInput>) {
@@ -101,21 +104,45 @@ export async function deleteTask(access: OrgAccess, task: ServiceTask) {
   });
 }
 
+/** What is wrong with a last-done entry: a date after today, a meter above the latest reading. */
+export function lastDoneProblems(
+  input: LastDoneInput,
+  today: string,
+  latestValue: number | null,
+): Partial<Record<keyof LastDoneInput, string>> {
+  const problems: Partial<Record<keyof LastDoneInput, string>> = {};
+  if (input.lastDoneOn > today) problems.lastDoneOn = `The date may not be after today (${today})`;
+  if (latestValue != null && input.lastDoneMeter > latestValue)
+    problems.lastDoneMeter = `The meter value may not be above the latest reading (${latestValue.toLocaleString('en-US')})`;
+  return problems;
+}
+
+/** Stores a checked last-done entry in the caller's transaction (it answers an unknown history). */
+export async function recordLastDone(
+  access: OrgAccess,
+  task: ServiceTask,
+  input: LastDoneInput,
+  transaction: Transaction,
+) {
+  const before = { lastDoneMeter: task.lastDoneMeter, lastDoneOn: task.lastDoneOn };
+  await task.update(
+    { ...input, historyUnknown: false, countFromMeter: null, countFromOn: null },
+    { transaction },
+  );
+  await audit(access, 'task.last_done', task, { before, after: input }, transaction);
+}
+
 /** Sets when a task was last done before the machine came into the system. */
 export async function setLastDone(access: OrgAccess, task: ServiceTask, input: LastDoneInput) {
-  const today = todayIso(access.organization.timeZone);
-  if (input.lastDoneOn > today)
-    throw invalid({ lastDoneOn: `The date may not be after today (${today})` });
   const forecast = await MachineForecast.findByPk(task.machineId);
-  if (forecast?.lastValue != null && input.lastDoneMeter > forecast.lastValue) {
-    throw invalid({
-      lastDoneMeter: `The meter value may not be above the latest reading (${forecast.lastValue.toLocaleString('en-US')})`,
-    });
-  }
+  const problems = lastDoneProblems(
+    input,
+    todayIso(access.organization.timeZone),
+    forecast?.lastValue ?? null,
+  );
+  if (Object.keys(problems).length) throw invalid(problems);
   return sequelize.transaction(async (transaction) => {
-    const before = { lastDoneMeter: task.lastDoneMeter, lastDoneOn: task.lastDoneOn };
-    await task.update(input, { transaction });
-    await audit(access, 'task.last_done', task, { before, after: input }, transaction);
+    await recordLastDone(access, task, input, transaction);
     await refresh(access, task.machineId, transaction);
     return task;
   });

@@ -80,9 +80,13 @@ function meterDue(task: TaskSchedule, current: number | null): MeterDue | null {
   if (interval === null || !(interval > 0)) return null;
   if (task.lastDoneMeter !== null)
     return { value: task.lastDoneMeter + interval, basis: 'recorded' };
-  if (task.firstServiceMeter !== null && task.firstServiceMeter > 0) {
-    return { value: task.firstServiceMeter, basis: 'first_service' };
-  }
+  const breakIn =
+    task.firstServiceMeter !== null && task.firstServiceMeter > 0 ? task.firstServiceMeter : null;
+  const countFrom = task.lastDoneOn === null ? (task.countFromMeter ?? null) : null;
+  // A start counted from (in place of an unknown history) before the break-in point keeps it.
+  if (countFrom !== null && !(breakIn !== null && breakIn > countFrom))
+    return { value: countFrom + interval, basis: 'counted' };
+  if (breakIn !== null) return { value: breakIn, basis: 'first_service' };
   // Never recorded: assume the schedule ran on multiples of the interval since new, so the next
   // one is the multiple at or above the meter (at least one interval).
   if (current === null) return { value: interval, basis: 'assumed' };
@@ -94,6 +98,8 @@ function calendarDue(task: TaskSchedule, machineStartIso: string | null): string
   const interval = task.intervalDays;
   if (interval === null || !(interval > 0)) return null;
   if (task.lastDoneOn) return addDaysIso(task.lastDoneOn, interval);
+  if (task.lastDoneMeter === null && task.countFromOn)
+    return addDaysIso(task.countFromOn, interval);
   if (machineStartIso) return addDaysIso(machineStartIso, interval);
   return null;
 }
@@ -103,18 +109,42 @@ function defaultWarn(explicit: number | null, interval: number | null): number |
   return interval !== null && interval > 0 ? Math.round(interval * DEFAULT_WARN_FRACTION) : null;
 }
 
+/** Whether a task's start is known: a last service, or a start someone set in its place. */
+const neverRecorded = (task: TaskSchedule) =>
+  task.lastDoneMeter === null && task.lastDoneOn === null;
+const counted = (task: TaskSchedule) =>
+  neverRecorded(task) && (task.countFromMeter != null || task.countFromOn != null);
+
 function basisOf(task: TaskSchedule, meter: MeterDue | null): DuePoint['basis'] {
   if (meter?.basis === 'first_service') return 'first_service';
+  if (counted(task)) return 'counted';
   const meterRecorded = task.intervalMeter === null || task.lastDoneMeter !== null;
   const calendarRecorded = task.intervalDays === null || task.lastDoneOn !== null;
   const anyRecord = task.lastDoneMeter !== null || task.lastDoneOn !== null;
   return meterRecorded && calendarRecorded && anyRecord ? 'recorded' : 'assumed';
 }
 
+/** A task whose last service nobody knows yet: no figure is guessed until someone says. */
+const HISTORY_UNKNOWN: DuePoint = {
+  status: 'history_unknown',
+  governs: null,
+  dueMeter: null,
+  dueDate: null,
+  projectedDate: null,
+  projectedLow: null,
+  projectedHigh: null,
+  effectiveDate: null,
+  remainingMeter: null,
+  remainingDays: null,
+  basis: 'unknown',
+};
+
 /**
  * Due point of a task as of a local ISO date. currentValue = lifetime meter now (null → the last
  * reading's value from usage); machineStartIso anchors the calendar of a task never done.
  * Due meter and remainingMeter in meter units, remainingDays in calendar days, dates ISO.
+ * A task with historyUnknown, no last service and no start to count from is 'history_unknown',
+ * without figures.
  */
 export function computeDuePoint(
   task: TaskSchedule,
@@ -123,6 +153,7 @@ export function computeDuePoint(
   currentValue: number | null,
   machineStartIso: string | null = null,
 ): DuePoint {
+  if (task.historyUnknown && neverRecorded(task) && !counted(task)) return HISTORY_UNKNOWN;
   const asOfDay = dayNumberFromIso(asOfIso);
   const current = currentValue ?? usage.lastValue;
   const meter = meterDue(task, current);

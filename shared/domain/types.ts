@@ -47,9 +47,20 @@ export interface TaskSchedule {
   lastDoneMeter: number | null;
   /** ISO date (yyyy-mm-dd), local to the organization */
   lastDoneOn: string | null;
+  /**
+   * A start to count from when the last service is not known ("start counting from now"): a
+   * lifetime meter value and an ISO date; used only while lastDone* are null.
+   */
+  countFromMeter?: number | null;
+  countFromOn?: string | null;
+  /**
+   * true when the task came onto a machine that already had hours and nobody has said when it was
+   * last done: the due point is then not guessed (status 'history_unknown').
+   */
+  historyUnknown?: boolean;
 }
 
-export type DueStatus = 'overdue' | 'due_soon' | 'ok' | 'no_forecast';
+export type DueStatus = 'overdue' | 'due_soon' | 'ok' | 'no_forecast' | 'history_unknown';
 
 /** The computed due point of one task. Dates are ISO local dates (yyyy-mm-dd). */
 export interface DuePoint {
@@ -66,6 +77,10 @@ export interface DuePoint {
   effectiveDate: string | null;
   remainingMeter: number | null;
   remainingDays: number | null;
-  /** 'recorded' when last done is known, 'first_service' for the break-in point, 'assumed' otherwise */
-  basis: 'recorded' | 'first_service' | 'assumed';
+  /**
+   * 'recorded' when last done is known, 'first_service' for the break-in point, 'counted' from a
+   * start someone set in place of an unknown history, 'unknown' while that history is unanswered,
+   * 'assumed' otherwise
+   */
+  basis: 'recorded' | 'first_service' | 'assumed' | 'counted' | 'unknown';
 }

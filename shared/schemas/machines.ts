@@ -62,7 +62,7 @@ export const MACHINE_SORTS = ['fleetNumber', 'name', 'category', 'status', 'next
 export const machineListQuerySchema = z.object({
   category: z.enum(MACHINE_CATEGORIES).optional(),
   status: z.enum(MACHINE_STATUSES).optional(),
-  dueStatus: z.enum(['overdue', 'due_soon', 'ok', 'no_forecast']).optional(),
+  dueStatus: z.enum(['overdue', 'due_soon', 'ok', 'no_forecast', 'history_unknown']).optional(),
   q: plainText(100).optional(),
   sort: z.enum(MACHINE_SORTS).default('fleetNumber'),
   order: z.enum(['asc', 'desc']).default('asc'),

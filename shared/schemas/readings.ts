@@ -48,7 +48,7 @@ export const dueQuerySchema = z.object({
       error: `Category must be one of: ${MACHINE_CATEGORIES.join(', ')}`,
     })
     .optional(),
-  status: z.enum(['overdue', 'due_soon', 'ok', 'no_forecast']).optional(),
+  status: z.enum(['overdue', 'due_soon', 'ok', 'no_forecast', 'history_unknown']).optional(),
   machineId: uuid.optional(),
 });
 export type DueQuery = z.infer<typeof dueQuerySchema>;

@@ -47,7 +47,7 @@ describe("the dealer's board", () => {
       total: 4,
       page: 1,
       pageSize: 25,
-      counts: { overdue: 2, due_soon: 0, ok: 2, no_forecast: 0 },
+      counts: { overdue: 2, due_soon: 0, history_unknown: 0, ok: 2, no_forecast: 0 },
       customers: [
         { id: w.serviced.org.id, name: 'Alder Farm', access: 'service' },
         { id: w.viewed.org.id, name: 'Birch Farm', access: 'view' },

@@ -78,7 +78,13 @@ describe('due list API', () => {
     expect([addDaysIso(today, 9), addDaysIso(today, 10), addDaysIso(today, 11)]).toContain(
       projected,
     );
-    expect(res.body.meta.counts).toEqual({ overdue: 1, due_soon: 0, ok: 2, no_forecast: 0 });
+    expect(res.body.meta.counts).toEqual({
+      overdue: 1,
+      due_soon: 0,
+      history_unknown: 0,
+      ok: 2,
+      no_forecast: 0,
+    });
   });
 
   it('due — horizon filter keeps overdue and what falls due inside it; status and category filters', async () => {

@@ -18,6 +18,7 @@ const dueResponse = z.object({
     counts: z.object({
       overdue: z.number(),
       due_soon: z.number(),
+      history_unknown: z.number(),
       ok: z.number(),
       no_forecast: z.number(),
     }),

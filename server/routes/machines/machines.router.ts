@@ -102,7 +102,7 @@ export function machinesRouter(): Router {
       const due = await TaskDuePoint.findAll({
         where: { organizationId: access.organization.id, machineId: machine.id },
       });
-      const rank = { overdue: 0, due_soon: 1, no_forecast: 2, ok: 3 } as const;
+      const rank = { overdue: 0, due_soon: 1, history_unknown: 2, no_forecast: 3, ok: 4 } as const;
       const worst = [...due].sort((a, b) => rank[a.status] - rank[b.status])[0];
       const next =
         due

@@ -9,6 +9,7 @@ import type { IconName } from './icons';
 const DUE: Record<DueStatus, { tone: BadgeTone; icon: IconName }> = {
   overdue: { tone: 'overdue', icon: 'error' },
   due_soon: { tone: 'due-soon', icon: 'clock' },
+  history_unknown: { tone: 'accent', icon: 'alert' },
   ok: { tone: 'ok', icon: 'check' },
   no_forecast: { tone: 'neutral', icon: 'info' },
 };

@@ -8,6 +8,7 @@ export type DueCounts = Record<DueStatus, number>;
 const RING: Record<DueStatus, string> = {
   overdue: 'border-poppy-600',
   due_soon: 'border-straw-600',
+  history_unknown: 'border-loam-600',
   ok: 'border-clover-600',
   no_forecast: 'border-field-600',
 };
@@ -29,7 +30,7 @@ export function StatusCounts({
   onSelect: (status: DueStatus | null) => void;
 }) {
   return (
-    <ul aria-label={label} className="grid grid-cols-2 gap-3 sm:grid-cols-4">
+    <ul aria-label={label} className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-5">
       {DUE_STATUSES.map((status) => {
         const pressed = active === status;
         return (

@@ -14,6 +14,8 @@ const muted = 'text-sm text-field-600';
 /** The due meter value and/or due date, and which of the two falls first. */
 export function DueAtFigure({ row }: { row: DueRow }) {
   const { dueMeter, dueDate, governs } = row.due;
+  if (row.due.status === 'history_unknown')
+    return <span className={muted}>Not known until last done is set</span>;
   if (dueMeter === null && dueDate === null) return <span className={muted}>Not scheduled</span>;
   return (
     <div className="flex flex-col">
@@ -43,6 +45,7 @@ export function DueAtFigure({ row }: { row: DueRow }) {
 export function ProjectedFigure({ row }: { row: DueRow }) {
   const { projectedDate, projectedLow, projectedHigh, status, dueMeter } = row.due;
   if (status === 'no_forecast') return <span className={muted}>Not enough readings</span>;
+  if (status === 'history_unknown') return <span className={muted}>—</span>;
   if (!projectedDate)
     return (
       <span className={muted}>

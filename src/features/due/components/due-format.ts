@@ -39,4 +39,6 @@ export const BASIS_TEXT = {
   recorded: null,
   first_service: 'First service (break-in)',
   assumed: 'Last service not recorded',
+  counted: 'Counted from a start set in place of an unknown last service',
+  unknown: 'History unknown — set last done on the machine page',
 } as const;

@@ -22,6 +22,9 @@ export interface Task {
   lastDoneMeter: number | null;
   /** ISO local date (yyyy-mm-dd) */
   lastDoneOn: string | null;
+  /** "start counting from now" in place of an unknown last service: lifetime meter, ISO date */
+  countFromMeter: number | null;
+  countFromOn: string | null;
   due: DuePoint | null;
 }
 

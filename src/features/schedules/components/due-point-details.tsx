@@ -11,6 +11,8 @@ const BASIS: Record<DuePoint['basis'], string | null> = {
   recorded: null,
   first_service: 'First service (break-in point)',
   assumed: 'Never recorded as done: counted from the first reading',
+  counted: 'Last service not known: counted from the start set for it',
+  unknown: null,
 };
 
 /** The figures of one due point, all as the server computed them. */

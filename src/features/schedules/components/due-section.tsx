@@ -1,5 +1,9 @@
 import { useState } from 'react';
-import { DUE_STATUS_LABELS, type MachineCategory } from '../../../../shared/constants';
+import {
+  DUE_STATUSES,
+  DUE_STATUS_LABELS,
+  type MachineCategory,
+} from '../../../../shared/constants';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
@@ -9,6 +13,7 @@ import { useCreateTask } from '../api/create-task';
 import { useTasks } from '../api/get-tasks';
 import type { Task } from '../api/types';
 import { ApplyTemplatePanel } from './apply-template-panel';
+import { HistoryUnknownSummary } from './history-unknown-panel';
 import { TaskCard } from './task-card';
 import { emptyTask, TaskForm } from './task-form';
 
@@ -20,7 +25,7 @@ interface DueSectionProps {
   recordServiceHref?: (taskId: string) => string;
 }
 
-const RANK = { overdue: 0, due_soon: 1, ok: 2, no_forecast: 3 } as const;
+const RANK = { overdue: 0, due_soon: 1, history_unknown: 2, ok: 3, no_forecast: 4 } as const;
 
 // Most urgent first: overdue, then due soon, then by the date the task falls due.
 function byUrgency(a: Task, b: Task): number {
@@ -55,9 +60,10 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
 
   const { edit: canEdit, setLastDone: canSetLastDone } = tasks.data.abilities;
   const list = [...tasks.data.data].sort(byUrgency);
-  const counts = (['overdue', 'due_soon', 'ok', 'no_forecast'] as const)
-    .map((status) => ({ status, n: list.filter((t) => t.due?.status === status).length }))
-    .filter((c) => c.n > 0);
+  const counts = DUE_STATUSES.map((status) => ({
+    status,
+    n: list.filter((t) => t.due?.status === status).length,
+  })).filter((c) => c.n > 0);
 
   return (
     <div className="flex flex-col gap-4">
@@ -68,6 +74,12 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
         </p>
       ) : null}
       {notice ? <Alert tone="success">{notice}</Alert> : null}
+      <HistoryUnknownSummary
+        orgId={orgId}
+        machineId={machine.id}
+        count={list.filter((t) => t.due?.status === 'history_unknown').length}
+        canAnswer={canSetLastDone}
+      />
       {canEdit && panel === 'none' ? (
         <div className="flex flex-wrap gap-2">
           <Button icon="plus" onClick={() => open('add')}>

@@ -14,6 +14,7 @@ import { describeInterval, describeRemaining, describeWarning } from '../lib/tas
 import type { DuePoint } from '../../../../shared/domain/types';
 import { DuePointDetails } from './due-point-details';
 import { HazardCaution, HazardCautionLine } from './hazard-caution';
+import { HistoryUnknownPanel } from './history-unknown-panel';
 import { LastDoneForm } from './last-done-form';
 import { TaskForm, taskToInput } from './task-form';
 
@@ -31,6 +32,7 @@ interface TaskCardProps {
 const STATUS_BORDER = {
   overdue: 'border-l-poppy-600',
   due_soon: 'border-l-straw-500',
+  history_unknown: 'border-l-loam-500',
   ok: 'border-l-clover-500',
   no_forecast: 'border-l-field-300',
 } as const;
@@ -110,6 +112,15 @@ export function TaskCard({
         </div>
       ) : null}
       {hasHazard ? <HazardCautionLine hazards={task.hazards} /> : null}
+      {task.due?.status === 'history_unknown' ? (
+        <HistoryUnknownPanel
+          orgId={orgId}
+          task={task}
+          unit={unit}
+          timeZone={timeZone}
+          canAnswer={canSetLastDone}
+        />
+      ) : null}
 
       {/* The full due point, last done, caution, contents and editing fold away: a machine has
           many tasks, and the summary above is what a glance at the page needs. */}
@@ -133,7 +144,14 @@ export function TaskCard({
                 ]
                   .filter(Boolean)
                   .join(' on ')
-              : 'not recorded'}
+              : task.countFromOn
+                ? `not known; counting from ${[
+                    task.countFromMeter !== null ? formatMeter(task.countFromMeter, unit) : null,
+                    formatLocalDate(task.countFromOn),
+                  ]
+                    .filter(Boolean)
+                    .join(' on ')}`
+                : 'not recorded'}
           </p>
 
           {hasHazard ? (

@@ -1,0 +1,62 @@
+import { Op } from 'sequelize';
+import { sequelize } from '../db';
+import { invalid } from '../errors';
+import { MachineForecast, ServiceTask, TaskDuePoint, type Machine } from '../models';
+import { todayIso } from '../../shared/domain';
+import type { OrgAccess } from '../policies/access';
+import { recordAudit } from './audit';
+import { recomputeDuePoints } from './forecast';
+
+/** The machine's tasks whose last service nobody has given yet (status history_unknown). */
+export async function unknownHistoryTasks(access: OrgAccess, machineId: string) {
+  const due = await TaskDuePoint.findAll({
+    where: { organizationId: access.organization.id, machineId, status: 'history_unknown' },
+    attributes: ['taskId'],
+  });
+  if (!due.length) return [];
+  return ServiceTask.findAll({
+    where: {
+      organizationId: access.organization.id,
+      machineId,
+      id: { [Op.in]: due.map((d) => d.taskId) },
+    },
+  });
+}
+
+/**
+ * "Start counting from now" for tasks whose last service is not known: each counts its interval
+ * from the latest reading and today, without pretending a service was done. One transaction;
+ * refused (422) while the machine has no reading to count from.
+ */
+export async function countFromNow(access: OrgAccess, machine: Machine, tasks: ServiceTask[]) {
+  const forecast = await MachineForecast.findOne({
+    where: { organizationId: access.organization.id, machineId: machine.id },
+  });
+  if (forecast?.lastValue == null)
+    throw invalid({
+      task: `${machine.fleetNumber} has no meter reading yet; log one first, then count from it`,
+    });
+  const countFromMeter = forecast.lastValue;
+  const countFromOn = todayIso(access.organization.timeZone);
+  await sequelize.transaction(async (transaction) => {
+    for (const task of tasks) {
+      await task.update({ countFromMeter, countFromOn, historyUnknown: false }, { transaction });
+      await recordAudit(
+        {
+          organizationId: access.organization.id,
+          actorUserId: access.userId,
+          action: 'task.count_from_now',
+          entityType: 'service_task',
+          entityId: task.id,
+          changes: { machineId: machine.id, name: task.name, countFromMeter, countFromOn },
+        },
+        transaction,
+      );
+    }
+    await recomputeDuePoints(access.organization.id, [machine.id], {
+      transaction,
+      timeZone: access.organization.timeZone,
+    });
+  });
+  return tasks;
+}
