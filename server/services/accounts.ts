@@ -8,7 +8,7 @@ import type { InvitationCreateInput } from '../../shared/schemas/auth';
 import { ROLE_LABELS } from '../../shared/constants';
 import type { OrgAccess } from '../policies/access';
 import { rolesFor } from '../policies/membership';
-import { sendNow } from './mailer';
+import { queueMessage } from './mailer';
 import { hashToken, newToken } from './tokens';
 import { recordAudit } from './audit';
 
@@ -88,25 +88,28 @@ export async function inviteMember(access: OrgAccess, input: InvitationCreateInp
       },
       transaction,
     );
+    const link = `${env.APP_URL}/invitations/${token}`;
+    await queueMessage(
+      {
+        organizationId: access.organization.id,
+        recipient: input.email,
+        kind: 'invitation',
+        periodKey: row.id,
+        subject: `You are invited to ${access.organization.name} on Hourstone`,
+        text: [
+          `Hello ${input.name},`,
+          '',
+          `You have been invited to join ${access.organization.name} on Hourstone as ${ROLE_LABELS[input.role].toLowerCase()}.`,
+          `Open this link to set your password and join (it works once and expires in ${INVITATION_DAYS} days):`,
+          link,
+          '',
+          'If you did not expect this, ignore this message.',
+        ].join('\n'),
+        html: `<p>Hello ${escapeHtml(input.name)},</p><p>You have been invited to join <strong>${escapeHtml(access.organization.name)}</strong> on Hourstone as ${ROLE_LABELS[input.role].toLowerCase()}.</p><p><a href="${link}">Set your password and join</a> (works once, expires in ${INVITATION_DAYS} days).</p><p>If you did not expect this, ignore this message.</p>`,
+      },
+      transaction,
+    );
     return row;
-  });
-  const link = `${env.APP_URL}/invitations/${token}`;
-  await sendNow({
-    organizationId: access.organization.id,
-    recipient: input.email,
-    kind: 'invitation',
-    periodKey: invitation.id,
-    subject: `You are invited to ${access.organization.name} on Hourstone`,
-    text: [
-      `Hello ${input.name},`,
-      '',
-      `You have been invited to join ${access.organization.name} on Hourstone as ${ROLE_LABELS[input.role].toLowerCase()}.`,
-      `Open this link to set your password and join (it works once and expires in ${INVITATION_DAYS} days):`,
-      link,
-      '',
-      'If you did not expect this, ignore this message.',
-    ].join('\n'),
-    html: `<p>Hello ${escapeHtml(input.name)},</p><p>You have been invited to join <strong>${escapeHtml(access.organization.name)}</strong> on Hourstone as ${ROLE_LABELS[input.role].toLowerCase()}.</p><p><a href="${link}">Set your password and join</a> (works once, expires in ${INVITATION_DAYS} days).</p><p>If you did not expect this, ignore this message.</p>`,
   });
   return invitation;
 }
@@ -191,21 +194,30 @@ export async function requestPasswordReset(email: string): Promise<void> {
   });
   if (!user) return;
   const { token, hash } = newToken();
-  const reset = await PasswordReset.create({
-    userId: user.id,
-    tokenHash: hash,
-    expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000),
-    usedAt: null,
-  });
   const link = `${env.APP_URL}/reset-password?token=${token}`;
-  await sendNow({
-    organizationId: null,
-    recipient: user.email,
-    kind: 'password_reset',
-    periodKey: reset.id,
-    subject: 'Reset your Hourstone password',
-    text: `Hello ${user.name},\n\nOpen this link to choose a new password. It works once and expires in ${RESET_MINUTES} minutes:\n${link}\n\nIf you did not ask for this, ignore this message; your password stays as it is.`,
-    html: `<p>Hello ${escapeHtml(user.name)},</p><p><a href="${link}">Choose a new password</a>. The link works once and expires in ${RESET_MINUTES} minutes.</p><p>If you did not ask for this, ignore this message; your password stays as it is.</p>`,
+  // The reset and its e-mail commit together; the worker sends it (the request never waits on SMTP).
+  await sequelize.transaction(async (transaction) => {
+    const reset = await PasswordReset.create(
+      {
+        userId: user.id,
+        tokenHash: hash,
+        expiresAt: new Date(Date.now() + RESET_MINUTES * 60_000),
+        usedAt: null,
+      },
+      { transaction },
+    );
+    await queueMessage(
+      {
+        organizationId: null,
+        recipient: user.email,
+        kind: 'password_reset',
+        periodKey: reset.id,
+        subject: 'Reset your Hourstone password',
+        text: `Hello ${user.name},\n\nOpen this link to choose a new password. It works once and expires in ${RESET_MINUTES} minutes:\n${link}\n\nIf you did not ask for this, ignore this message; your password stays as it is.`,
+        html: `<p>Hello ${escapeHtml(user.name)},</p><p><a href="${link}">Choose a new password</a>. The link works once and expires in ${RESET_MINUTES} minutes.</p><p>If you did not ask for this, ignore this message; your password stays as it is.</p>`,
+      },
+      transaction,
+    );
   });
 }
 

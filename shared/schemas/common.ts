@@ -8,7 +8,10 @@ import { z } from 'zod';
 const grouped = (n: number) => n.toLocaleString('en-US', { maximumFractionDigits: 4 });
 
 // C0 controls, DEL and C1 controls; multi-line text keeps tab and line feed (CR LF becomes LF).
+// Matching control characters is the point of these two patterns.
+// eslint-disable-next-line no-control-regex
 const CONTROL_ONE_LINE = /^[^\u0000-\u001f\u007f-\u009f]*$/;
+// eslint-disable-next-line no-control-regex
 const CONTROL_MULTI_LINE = /^[^\u0000-\u0008\u000b-\u001f\u007f-\u009f]*$/;
 const LONE_SURROGATE = /[\ud800-\udbff](?![\udc00-\udfff])|(?<![\ud800-\udbff])[\udc00-\udfff]/;
 
