@@ -17,7 +17,7 @@ import { todayIso } from '../../shared/domain';
 import type { BookingCreateInput, BookingStatus } from '../../shared/schemas/dealers';
 import { recordAudit } from './audit';
 import { requireCustomer } from './dealer-links';
-import { sendNow } from './mailer';
+import { queueMessage } from './mailer';
 import { prefillLines } from './service-records';
 
 const appUrl = () => env.APP_URL.replace(/\/+$/, '');
@@ -99,7 +99,8 @@ export async function proposeBooking(access: OrgAccess, input: BookingCreateInpu
   if (input.proposedFor < today)
     throw invalid({ proposedFor: `The date may not be before today (${today} at ${farm.name})` });
   const items = await resolveItems(farm, input.items);
-  const booking = await sequelize.transaction(async (transaction) => {
+  const managers = await managerEmails(farm.id);
+  return sequelize.transaction(async (transaction) => {
     const row = await ServiceBooking.create(
       {
         organizationId: farm.id,
@@ -114,26 +115,28 @@ export async function proposeBooking(access: OrgAccess, input: BookingCreateInpu
       { transaction },
     );
     await audit(access, 'booking.propose', row, { proposedFor: input.proposedFor }, transaction);
+    const machines = items.map((i) => `${i.fleetNumber} ${i.machineName}`).join(', ');
+    for (const manager of managers)
+      await queueMessage(
+        {
+          organizationId: access.organization.id,
+          recipient: manager.email,
+          kind: 'booking_proposed',
+          periodKey: row.id,
+          subject: `${access.organization.name} proposes a service on ${input.proposedFor}`,
+          text: [
+            `Hello ${manager.name},`,
+            '',
+            `${access.organization.name} proposes to service ${machines} on ${input.proposedFor}.`,
+            ...(input.note ? ['', input.note] : []),
+            '',
+            `Accept or decline it here: ${appUrl()}/o/${farm.id}/bookings`,
+          ].join('\n'),
+        },
+        transaction,
+      );
     return row;
   });
-  const machines = items.map((i) => `${i.fleetNumber} ${i.machineName}`).join(', ');
-  for (const manager of await managerEmails(farm.id))
-    await sendNow({
-      organizationId: access.organization.id,
-      recipient: manager.email,
-      kind: 'booking_proposed',
-      periodKey: booking.id,
-      subject: `${access.organization.name} proposes a service on ${input.proposedFor}`,
-      text: [
-        `Hello ${manager.name},`,
-        '',
-        `${access.organization.name} proposes to service ${machines} on ${input.proposedFor}.`,
-        ...(input.note ? ['', input.note] : []),
-        '',
-        `Accept or decline it here: ${appUrl()}/o/${farm.id}/bookings`,
-      ].join('\n'),
-    });
-  return booking;
 }
 
 /** Bookings of this organization: a dealer's proposals, or a farm's, soonest date first. */
@@ -181,25 +184,29 @@ async function tellDealer(
   farm: Organization,
   subject: string,
   text: string,
+  transaction: Transaction,
 ) {
   const advisor = booking.proposedBy
-    ? await User.findByPk(booking.proposedBy, { attributes: ['email', 'name'] })
+    ? await User.findByPk(booking.proposedBy, { attributes: ['email', 'name'], transaction })
     : null;
   if (!advisor) return;
-  await sendNow({
-    organizationId: farm.id,
-    recipient: advisor.email,
-    kind: `booking_${booking.status}`,
-    periodKey: booking.id,
-    subject,
-    text: [
-      `Hello ${advisor.name},`,
-      '',
-      text,
-      '',
-      `${appUrl()}/o/${booking.dealerOrganizationId}/bookings`,
-    ].join('\n'),
-  });
+  await queueMessage(
+    {
+      organizationId: farm.id,
+      recipient: advisor.email,
+      kind: `booking_${booking.status}`,
+      periodKey: booking.id,
+      subject,
+      text: [
+        `Hello ${advisor.name},`,
+        '',
+        text,
+        '',
+        `${appUrl()}/o/${booking.dealerOrganizationId}/bookings`,
+      ].join('\n'),
+    },
+    transaction,
+  );
 }
 
 /**
@@ -297,14 +304,15 @@ export async function acceptBooking(access: OrgAccess, id: string, note: string)
       { transaction },
     );
     await audit(access, 'booking.accept', b, { serviceRecordIds: recordIds }, transaction);
+    await tellDealer(
+      b,
+      farm,
+      `${farm.name} accepted the service on ${b.proposedFor}`,
+      `${farm.name} accepted your proposed service on ${b.proposedFor}.${note ? `\n\n${note}` : ''}`,
+      transaction,
+    );
     return b;
   });
-  await tellDealer(
-    booking,
-    farm,
-    `${farm.name} accepted the service on ${booking.proposedFor}`,
-    `${farm.name} accepted your proposed service on ${booking.proposedFor}.${note ? `\n\n${note}` : ''}`,
-  );
   return booking;
 }
 
@@ -318,14 +326,15 @@ export async function declineBooking(access: OrgAccess, id: string, note: string
       { transaction },
     );
     await audit(access, 'booking.decline', b, {}, transaction);
+    await tellDealer(
+      b,
+      farm,
+      `${farm.name} declined the service on ${b.proposedFor}`,
+      `${farm.name} declined your proposed service on ${b.proposedFor}.${note ? `\n\n${note}` : ''}`,
+      transaction,
+    );
     return b;
   });
-  await tellDealer(
-    booking,
-    farm,
-    `${farm.name} declined the service on ${booking.proposedFor}`,
-    `${farm.name} declined your proposed service on ${booking.proposedFor}.${note ? `\n\n${note}` : ''}`,
-  );
   return booking;
 }
 

@@ -14,7 +14,7 @@ import {
   type DealerInvitationInput,
 } from '../../shared/schemas/dealers';
 import { recordAudit } from './audit';
-import { sendNow } from './mailer';
+import { queueMessage } from './mailer';
 import { hashToken, newToken } from './tokens';
 
 export const DEALER_INVITATION_DAYS = 14;
@@ -135,7 +135,9 @@ const byEmail = (column: string, value: string) =>
 export async function inviteCustomer(access: OrgAccess, input: CustomerInvitationInput) {
   const dealer = access.organization;
   const { token, hash } = newToken();
-  const link = await sequelize.transaction(async (transaction) => {
+  const advisor = await User.findByPk(access.userId, { attributes: ['name', 'email'] });
+  const url = `${env.APP_URL.replace(/\/+$/, '')}/dealer-invitations/${token}`;
+  return sequelize.transaction(async (transaction) => {
     const row = await DealerLink.create(
       {
         dealerOrganizationId: dealer.id,
@@ -156,34 +158,34 @@ export async function inviteCustomer(access: OrgAccess, input: CustomerInvitatio
       { transaction },
     );
     await audit(access, dealer.id, 'dealer_link.request', row, { email: input.email }, transaction);
+    await queueMessage(
+      {
+        organizationId: dealer.id,
+        recipient: input.email,
+        kind: 'dealer_link_request',
+        periodKey: row.id,
+        subject: `${dealer.name} asks to see your machines on Hourstone`,
+        text: [
+          'Hello,',
+          '',
+          `${advisor?.name ?? 'A service advisor'} at ${dealer.name} asks for access to your farm's machines on Hourstone, to see what is coming due and propose service dates.`,
+          ...(input.message ? ['', input.message] : []),
+          '',
+          'As the farm manager you choose the access, and you can change or revoke it at any time:',
+          `- ${DEALER_ACCESS_LABELS.view}: ${DEALER_ACCESS_DESCRIPTIONS.view}`,
+          `- ${DEALER_ACCESS_LABELS.service}: ${DEALER_ACCESS_DESCRIPTIONS.service}`,
+          '',
+          `Sign in and answer here (the link works once and expires in ${DEALER_INVITATION_DAYS} days):`,
+          url,
+          '',
+          'If you did not expect this, ignore this message: nothing is shared unless you accept.',
+        ].join('\n'),
+        headers: advisor ? { 'Reply-To': advisor.email } : undefined,
+      },
+      transaction,
+    );
     return row;
   });
-  const advisor = await User.findByPk(access.userId, { attributes: ['name', 'email'] });
-  const url = `${env.APP_URL.replace(/\/+$/, '')}/dealer-invitations/${token}`;
-  await sendNow({
-    organizationId: dealer.id,
-    recipient: input.email,
-    kind: 'dealer_link_request',
-    periodKey: link.id,
-    subject: `${dealer.name} asks to see your machines on Hourstone`,
-    text: [
-      'Hello,',
-      '',
-      `${advisor?.name ?? 'A service advisor'} at ${dealer.name} asks for access to your farm's machines on Hourstone, to see what is coming due and propose service dates.`,
-      ...(input.message ? ['', input.message] : []),
-      '',
-      'As the farm manager you choose the access, and you can change or revoke it at any time:',
-      `- ${DEALER_ACCESS_LABELS.view}: ${DEALER_ACCESS_DESCRIPTIONS.view}`,
-      `- ${DEALER_ACCESS_LABELS.service}: ${DEALER_ACCESS_DESCRIPTIONS.service}`,
-      '',
-      `Sign in and answer here (the link works once and expires in ${DEALER_INVITATION_DAYS} days):`,
-      url,
-      '',
-      'If you did not expect this, ignore this message: nothing is shared unless you accept.',
-    ].join('\n'),
-    headers: advisor ? { 'Reply-To': advisor.email } : undefined,
-  });
-  return link;
 }
 
 /** Withdraws a dealer's pending request. */
@@ -293,24 +295,27 @@ export async function grantDealer(access: OrgAccess, input: DealerInvitationInpu
       { transaction },
     );
     await audit(access, farm.id, 'dealer_link.grant', row, { access: input.access }, transaction);
+    await queueMessage(
+      {
+        organizationId: farm.id,
+        recipient: advisor.email,
+        kind: 'dealer_link_granted',
+        periodKey: row.id,
+        subject: `${farm.name} linked its machines to ${dealer.name} on Hourstone`,
+        text: [
+          `Hello ${advisor.name},`,
+          '',
+          `${farm.name} has given ${dealer.name} ${DEALER_ACCESS_LABELS[input.access].toLowerCase()} access to its machines on Hourstone.`,
+          DEALER_ACCESS_DESCRIPTIONS[input.access],
+          '',
+          `Their machines now show on your board: ${env.APP_URL.replace(/\/+$/, '')}/o/${dealer.id}/board`,
+        ].join('\n'),
+      },
+      transaction,
+    );
     return row;
   });
   link.dealer = dealer;
-  await sendNow({
-    organizationId: farm.id,
-    recipient: advisor.email,
-    kind: 'dealer_link_granted',
-    periodKey: link.id,
-    subject: `${farm.name} linked its machines to ${dealer.name} on Hourstone`,
-    text: [
-      `Hello ${advisor.name},`,
-      '',
-      `${farm.name} has given ${dealer.name} ${DEALER_ACCESS_LABELS[input.access].toLowerCase()} access to its machines on Hourstone.`,
-      DEALER_ACCESS_DESCRIPTIONS[input.access],
-      '',
-      `Their machines now show on your board: ${env.APP_URL.replace(/\/+$/, '')}/o/${dealer.id}/board`,
-    ].join('\n'),
-  });
   return link;
 }
 

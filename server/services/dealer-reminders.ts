@@ -1,4 +1,5 @@
 import { format, parseISO } from 'date-fns';
+import { sequelize } from '../db';
 import { invalid } from '../errors';
 import { Membership, User } from '../models';
 import type { OrgAccess } from '../policies/access';
@@ -7,7 +8,7 @@ import { DUE_STATUS_LABELS } from '../../shared/constants';
 import { recordAudit } from './audit';
 import { dealerAccessFor, recordDealerRead, requireCustomer } from './dealer-links';
 import { dueList, type DueRow } from './due-list';
-import { sendNow } from './mailer';
+import { queueMessage } from './mailer';
 
 const day = (iso: string) => format(parseISO(iso), 'd MMM yyyy');
 const meter = (n: number, unit: string) =>
@@ -93,30 +94,40 @@ export async function sendReminder(
   const advisor = await User.findByPk(access.userId, { attributes: ['name', 'email'] });
   const managers = await managersOf(farm.id);
   if (!managers.length) throw invalid({ customerId: `${farm.name} has no manager to write to` });
-  let queued = 0;
-  for (const manager of managers) {
-    const row = await sendNow({
-      organizationId: access.organization.id,
-      recipient: manager.email,
-      kind: 'dealer_reminder',
-      periodKey: `reminder:${input.requestId}`,
-      subject: input.subject,
-      text: `${input.body}\n\n--\nSent by ${advisor?.name ?? 'a service advisor'} of ${access.organization.name} through Hourstone. Reply to this e-mail to reach them.`,
-      headers: advisor ? { 'Reply-To': advisor.email } : undefined,
-    });
-    if (row) queued++;
-  }
-  if (queued)
-    await recordAudit({
-      organizationId: farm.id,
-      actorUserId: access.userId,
-      action: 'dealer.reminder',
-      entityType: 'due',
-      changes: {
-        dealerOrganizationId: access.organization.id,
-        taskIds: input.taskIds,
-        subject: input.subject,
-      },
-    });
+  // The messages and the audit entry commit together; the worker sends them.
+  const queued = await sequelize.transaction(async (transaction) => {
+    let count = 0;
+    for (const manager of managers) {
+      const row = await queueMessage(
+        {
+          organizationId: access.organization.id,
+          recipient: manager.email,
+          kind: 'dealer_reminder',
+          periodKey: `reminder:${input.requestId}`,
+          subject: input.subject,
+          text: `${input.body}\n\n--\nSent by ${advisor?.name ?? 'a service advisor'} of ${access.organization.name} through Hourstone. Reply to this e-mail to reach them.`,
+          headers: advisor ? { 'Reply-To': advisor.email } : undefined,
+        },
+        transaction,
+      );
+      if (row) count++;
+    }
+    if (count)
+      await recordAudit(
+        {
+          organizationId: farm.id,
+          actorUserId: access.userId,
+          action: 'dealer.reminder',
+          entityType: 'due',
+          changes: {
+            dealerOrganizationId: access.organization.id,
+            taskIds: input.taskIds,
+            subject: input.subject,
+          },
+        },
+        transaction,
+      );
+    return count;
+  });
   return { recipients: managers.length, queued, duplicate: queued === 0 };
 }

@@ -5,7 +5,7 @@ import { parse } from 'csv-parse/sync';
 import { AuditEvent, Notification } from '../../server/models';
 import { countRows, resetDatabase } from '../support/db';
 import { createTask, signedInAgent } from '../support/factories';
-import { caughtMail, clearMail } from '../support/mail';
+import { clearMail, deliveredMail } from '../support/mail';
 import { api, app, dealerWorld } from './dealer-fixture';
 
 interface Row {
@@ -183,7 +183,7 @@ describe('reminders to a customer', () => {
     const rows = await Notification.findAll({ where: { kind: 'dealer_reminder' } });
     expect(rows).toHaveLength(1);
     expect(rows[0]).toMatchObject({ recipient: manager.email, subject: 'Oil change due on A-01' });
-    const mail = (await caughtMail()).filter((m) => m.subject === 'Oil change due on A-01');
+    const mail = (await deliveredMail()).filter((m) => m.subject === 'Oil change due on A-01');
     expect(mail).toHaveLength(1);
     expect(mail[0].text).toContain('Shall we book it in on Friday?');
     expect(mail[0].headers['reply-to']).toContain(w.advisor.email);

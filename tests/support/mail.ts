@@ -1,4 +1,6 @@
 // Reads the local mail catcher that `npm test` starts (MAIL_CATCHER_URL).
+import { deliverQueued } from '../../server/services/mailer';
+
 export interface CaughtMail {
   id: string;
   to: string[];
@@ -31,17 +33,23 @@ export async function setMailAccepting(accept: boolean): Promise<void> {
   });
 }
 
-/** The first mail to this address, waiting briefly for delivery. */
-export async function mailTo(address: string, timeoutMs = 5000): Promise<CaughtMail> {
-  const until = Date.now() + timeoutMs;
-  while (Date.now() < until) {
-    const found = (await caughtMail()).find((m) =>
-      m.to.some((t) => t.toLowerCase().includes(address.toLowerCase())),
-    );
-    if (found) return found;
-    await new Promise((r) => setTimeout(r, 100));
-  }
-  throw new Error(`no mail to ${address} within ${timeoutMs} ms`);
+/**
+ * Runs the outbox delivery once, as the worker would (requests only queue their e-mail), then
+ * returns everything the mail catcher holds. Delivery has finished when this reads: the send
+ * resolves once the catcher has stored the message.
+ */
+export async function deliveredMail(): Promise<CaughtMail[]> {
+  await deliverQueued({ limit: 200 });
+  return caughtMail();
+}
+
+/** Delivers the outbox, then the newest mail to this address (throws when there is none). */
+export async function mailTo(address: string): Promise<CaughtMail> {
+  const found = (await deliveredMail()).find((m) =>
+    m.to.some((t) => t.toLowerCase().includes(address.toLowerCase())),
+  );
+  if (!found) throw new Error(`no mail to ${address} after delivering the outbox`);
+  return found;
 }
 
 /** The first http(s) link in a text. */
