@@ -1,7 +1,9 @@
-import { deliverQueued } from '../server/services/mailer';
+import { deliverQueued, type DeliveryOptions } from '../server/services/mailer';
 
-/** Sends queued e-mail whose time has come (retries with backoff are decided by the mailer). */
-export async function perform() {
-  // Rows are claimed with SKIP LOCKED, so no job-wide lock is needed for several workers.
-  return deliverQueued({ limit: 200 });
+/**
+ * Sends queued e-mail whose time has come (retries with backoff are decided by the mailer). Rows
+ * are claimed one at a time with SKIP LOCKED, so no job-wide lock is needed for several workers.
+ */
+export async function perform(now?: Date, options: Omit<DeliveryOptions, 'now'> = {}) {
+  return deliverQueued({ limit: 200, ...options, now });
 }

@@ -11,6 +11,12 @@ const schema = z.object({
   SMTP_URL: z.string().default('smtp://127.0.0.1:2525'),
   MAIL_FROM: z.string().default('Hourstone <no-reply@hourstone.example>'),
   MAIL_CATCHER_URL: z.string().default(''),
+  // A hung mail server must fail a delivery attempt within seconds (nodemailer waits minutes).
+  SMTP_CONNECTION_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(5000),
+  SMTP_GREETING_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(5000),
+  SMTP_SOCKET_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(10_000),
+  // How long a worker's claim on a message lasts; keep it well above the timeouts above.
+  MAIL_CLAIM_LEASE_SECONDS: z.coerce.number().int().min(10).max(86_400).default(120),
   JWT_SECRET: z.string().min(8, 'JWT_SECRET must be at least 8 characters'),
   SESSION_TTL_HOURS: z.coerce.number().positive().default(12),
   COOKIE_SECURE: z.enum(['auto', 'true', 'false']).default('auto'),

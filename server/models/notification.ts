@@ -7,7 +7,8 @@ import {
 } from 'sequelize';
 import { sequelize } from '../db';
 
-export type NotificationStatus = 'queued' | 'sent' | 'failed';
+/** queued → sending (claimed, with a lease) → sent; back to queued to retry; failed after the last try. */
+export type NotificationStatus = 'queued' | 'sending' | 'sent' | 'failed';
 
 export class Notification extends Model<
   InferAttributes<Notification>,
@@ -27,6 +28,9 @@ export class Notification extends Model<
   declare lastError: string | null;
   declare nextAttemptAt: CreationOptional<Date>;
   declare sentAt: Date | null;
+  declare claimedAt: CreationOptional<Date | null>;
+  /** while `sending`: the claim's lease; once it has passed, another worker may retry */
+  declare claimedUntil: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -47,6 +51,8 @@ Notification.init(
     lastError: { type: DataTypes.TEXT, allowNull: true },
     nextAttemptAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
     sentAt: { type: DataTypes.DATE, allowNull: true },
+    claimedAt: { type: DataTypes.DATE, allowNull: true },
+    claimedUntil: { type: DataTypes.DATE, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

@@ -68,7 +68,9 @@ export const NOTIFICATION_STATUSES = ['queued', 'sending', 'sent', 'failed'] as 
 export type NotificationStatusName = (typeof NOTIFICATION_STATUSES)[number];
 
 export const notificationListQuerySchema = z.object({
-  status: z.enum(NOTIFICATION_STATUSES, { error: 'Status is queued, sending, sent or failed' }).optional(),
+  status: z
+    .enum(NOTIFICATION_STATUSES, { error: 'Status is queued, sending, sent or failed' })
+    .optional(),
   ...pagingFields(50, 200),
 });
 export type NotificationListQuery = z.infer<typeof notificationListQuerySchema>;

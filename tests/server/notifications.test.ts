@@ -52,7 +52,7 @@ describe('sent messages API (the outbox)', () => {
     const { user } = await createMember(org, 'manager');
     const res = await (await signedInAgent(app, user)).get(`${list(org.id)}?status=lost`);
     expect(res.status).toBe(400);
-    expect(res.body.error.fields.status).toMatch(/queued, sent or failed/);
+    expect(res.body.error.fields.status).toBe('Status is queued, sending, sent or failed');
   });
 
   it('messages — 404 for another farm, and for a message of another farm', async () => {
@@ -90,7 +90,10 @@ describe('sent messages API (the outbox)', () => {
     const agent = await signedInAgent(app, user);
     const res = await agent.get(list(org.id));
     expect(res.status).toBe(200);
-    expect(res.body.meta).toMatchObject({ total: 2, counts: { queued: 1, sent: 0, failed: 1 } });
+    expect(res.body.meta).toMatchObject({
+      total: 2,
+      counts: { queued: 1, sending: 0, sent: 0, failed: 1 },
+    });
     expect(res.body.data.map((m: { id: string }) => m.id)).toEqual([b.id, a.id]);
     expect(res.body.data[0]).toMatchObject({
       status: 'failed',
@@ -141,6 +144,28 @@ describe('sent messages API (the outbox)', () => {
     const dig = (await agent.get(`${list(org.id)}/${digest!.id}`)).body.data;
     expect(JSON.stringify(dig)).not.toContain('SIGNATURE');
     expect(dig.text).toContain('/api/v1/unsubscribe/…');
+  });
+});
+
+describe('sent messages API — a message being sent', () => {
+  beforeEach(resetDatabase);
+
+  it('messages — a message claimed by a worker shows as sending, counted apart, with no next try; the sending filter finds it', async () => {
+    const org = await createOrganization();
+    const { a } = await outbox(org.id);
+    await a.update({ status: 'sending', attempts: 1, claimedUntil: new Date(Date.now() + 60_000) });
+    const { user } = await createMember(org, 'manager');
+    const agent = await signedInAgent(app, user);
+    const url = `/api/v1/organizations/${org.id}/notifications`;
+    const res = await agent.get(url);
+    expect(res.body.meta.counts).toEqual({ queued: 0, sending: 1, sent: 0, failed: 1 });
+    expect(res.body.meta.total).toBe(2);
+    const sending = await agent.get(`${url}?status=sending`);
+    expect(sending.status).toBe(200);
+    expect(sending.body.meta.total).toBe(1);
+    expect(sending.body.data).toEqual([
+      expect.objectContaining({ id: a.id, status: 'sending', attempts: 1, nextAttemptAt: null }),
+    ]);
   });
 });
 

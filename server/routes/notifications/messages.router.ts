@@ -11,7 +11,11 @@ import {
   presentNotification,
   presentNotificationSummary,
 } from '../../presenters/notification';
-import { notificationListQuerySchema } from '../../../shared/schemas/notifications';
+import {
+  NOTIFICATION_STATUSES,
+  notificationListQuerySchema,
+  type NotificationStatusName,
+} from '../../../shared/schemas/notifications';
 import { sequelize } from '../../db';
 
 const orgParams = z.object({ orgId: z.uuid() });
@@ -34,7 +38,7 @@ export function messagesRouter(): Router {
         total: z.number(),
         page: z.number(),
         pageSize: z.number(),
-        counts: z.object({ queued: z.number(), sent: z.number(), failed: z.number() }),
+        counts: z.record(z.enum(NOTIFICATION_STATUSES), z.number()),
       }),
     }),
     handler: async ({ req, query }) => {
@@ -58,13 +62,16 @@ export function messagesRouter(): Router {
           attributes: ['status', [sequelize.fn('count', sequelize.col('id')), 'n']],
           group: ['status'],
           raw: true,
-        }) as unknown as Promise<{ status: 'queued' | 'sent' | 'failed'; n: string }[]>,
+        }) as unknown as Promise<{ status: NotificationStatusName; n: string }[]>,
       ]);
-      const counts = { queued: 0, sent: 0, failed: 0 };
+      const counts = Object.fromEntries(NOTIFICATION_STATUSES.map((s) => [s, 0])) as Record<
+        NotificationStatusName,
+        number
+      >;
       for (const g of grouped) counts[g.status] = Number(g.n);
       const total = query.status
         ? counts[query.status]
-        : counts.queued + counts.sent + counts.failed;
+        : Object.values(counts).reduce((a, b) => a + b, 0);
       return {
         data: rows.map(presentNotificationSummary),
         meta: { total, page: query.page, pageSize: query.pageSize, counts },

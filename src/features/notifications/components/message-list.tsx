@@ -99,7 +99,7 @@ export function MessageList({
           const count = counts
             ? choice.value
               ? counts[choice.value]
-              : counts.queued + counts.sent + counts.failed
+              : Object.values(counts).reduce((a, b) => a + b, 0)
             : null;
           return (
             <label
