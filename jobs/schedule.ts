@@ -10,7 +10,30 @@ const cron = (name: string, fallback: string) =>
       error: `${name} must be a node-cron expression, e.g. "*/5 * * * *"`,
     });
 
+export const JOB_NAMES = [
+  'deliver-mail',
+  'refresh-forecasts',
+  'due-digest',
+  'stale-meter-nudge',
+  'overdue-escalation',
+] as const;
+export type JobName = (typeof JOB_NAMES)[number];
+
+const JOBS_ERROR = `WORKER_JOBS is "all" or a comma-separated list of: ${JOB_NAMES.join(', ')}`;
+
 export const jobScheduleSchema = z.object({
+  // Which jobs this worker runs (the browser tests run only deliver-mail, so no digest arrives
+  // in the middle of a test).
+  WORKER_JOBS: z
+    .string()
+    .default('all')
+    .transform((v) =>
+      v.trim() === 'all' ? [...JOB_NAMES] : v.split(',').map((name) => name.trim()),
+    )
+    .refine((names) => names.length > 0 && names.every((n) => JOB_NAMES.includes(n as JobName)), {
+      error: JOBS_ERROR,
+    })
+    .transform((names) => names as JobName[]),
   DELIVER_MAIL_CRON: cron('DELIVER_MAIL_CRON', '* * * * *'),
   REFRESH_FORECASTS_CRON: cron('REFRESH_FORECASTS_CRON', '15 * * * *'),
   // Hourly: each run sends to the farms whose local hour has reached their digest hour.
