@@ -114,7 +114,13 @@ export function MachinePage() {
         }
       />
       <div className="flex flex-col gap-8">
-        <MachineStatusPanel machine={detail} timeZone={timeZone} defectsHref={defectsHref} />
+        <MachineStatusPanel
+          orgId={orgId}
+          machine={detail}
+          abilities={abilities}
+          timeZone={timeZone}
+          defectsHref={membership.organization.kind === 'farm' ? defectsHref : undefined}
+        />
 
         <ul aria-label="For this machine" className="-mt-4 flex flex-wrap gap-2">
           {detail.status === 'in_service' || (detail.status === 'tagged_out' && isShop) ? (

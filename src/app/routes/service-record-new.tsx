@@ -210,7 +210,9 @@ export function ServiceRecordNewPage() {
       />
       {detail.status === 'tagged_out' ? (
         <Alert tone="warning" title={`${detail.fleetNumber} is tagged out`} className="mb-6">
-          Record the repair here. Closing its critical defects releases the machine for use.
+          Record the repair here and tick the defects it fixes. Closing them does not release the
+          machine: it stays tagged out until a technician or manager returns it to service, with a
+          note of what was checked, from the saved record or the machine page.
         </Alert>
       ) : null}
       {prefill.isError ? (

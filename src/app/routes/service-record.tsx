@@ -1,10 +1,12 @@
-import type { QueryClient } from '@tanstack/react-query';
+import { useQuery, type QueryClient } from '@tanstack/react-query';
 import { Link, useLocation, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { NotFound } from '../../components/errors/route-error';
 import { ErrorState } from '../../components/ui/error-state';
 import { Icon } from '../../components/ui/icons';
 import { PageHeader } from '../../components/ui/page-header';
 import { PageSkeleton } from '../../components/ui/skeleton';
+import { machineQueryOptions } from '../../features/machines/api/get-machine';
+import { TagOutPanel } from '../../features/machines/components/tag-out-panel';
 import {
   serviceRecordQueryOptions,
   useServiceRecord,
@@ -37,6 +39,9 @@ export function ServiceRecordPage() {
   const { membership } = useCurrentMembership();
   const orgId = membership.organization.id;
   const record = useServiceRecord(orgId, recordId);
+  // the machine's tag-out shows here too: closing its defects did not release it
+  const machineId = record.data?.data.machine.id ?? '';
+  const machine = useQuery({ ...machineQueryOptions(orgId, machineId), enabled: !!machineId });
 
   if (record.isPending) return <PageSkeleton label="Loading the service record" />;
   if (record.isError) {
@@ -68,6 +73,21 @@ export function ServiceRecordPage() {
         title={`${kind} · ${data.machine.fleetNumber}${date ? ` · ${formatLocalDate(date)}` : ''}`}
         description={data.tasks.map((t) => t.name).join(', ') || undefined}
       />
+      {machine.data ? (
+        <div className="mb-6">
+          <TagOutPanel
+            orgId={orgId}
+            machine={machine.data.data}
+            abilities={machine.data.abilities}
+            timeZone={membership.organization.timeZone}
+            defectsHref={
+              membership.organization.kind === 'farm'
+                ? paths.organization.defects.href(orgId, data.machine.id)
+                : undefined
+            }
+          />
+        </div>
+      ) : null}
       <ServiceRecordView
         orgId={orgId}
         record={data}

@@ -2,11 +2,14 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DefectCloseInput } from '../../../../shared/schemas/defects';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterDefectChange } from './invalidate';
-import type { Defect, DefectAbilities, MachineRef } from './types';
+import type { ClosedDefect } from './types';
 
-/** POST …/defects/:defectId/close with a note or a completed service record of the machine. */
+/**
+ * POST …/defects/:defectId/close with a note or a completed service record of the machine. The
+ * machine's status does not change (a tagged-out machine stays tagged out).
+ */
 export const closeDefect = (orgId: string, defectId: string, input: DefectCloseInput) =>
-  apiClient.post<{ data: Defect; abilities: DefectAbilities; machine: MachineRef }>(
+  apiClient.post<ClosedDefect>(
     `/organizations/${segment(orgId)}/defects/${segment(defectId)}/close`,
     input,
   );

@@ -3,18 +3,21 @@ import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterDefectChange } from './invalidate';
 import type { MachineRef } from './types';
 
-/** POST …/machines/:machineId/clear-tag-out; 409 while a critical defect is still open. */
-export const clearTagOut = (orgId: string, machineId: string, note: string) =>
+/**
+ * POST …/machines/:machineId/return-to-service with the note of what was checked: its own step,
+ * never a side effect of closing defects; 409 while a critical defect is still open.
+ */
+export const returnToService = (orgId: string, machineId: string, note: string) =>
   apiClient.post<{ data: MachineRef }>(
-    `/organizations/${segment(orgId)}/machines/${segment(machineId)}/clear-tag-out`,
+    `/organizations/${segment(orgId)}/machines/${segment(machineId)}/return-to-service`,
     { note },
   );
 
-export function useClearTagOut(orgId: string) {
+export function useReturnToService(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: ({ machineId, note }: { machineId: string; note: string }) =>
-      clearTagOut(orgId, machineId, note),
+      returnToService(orgId, machineId, note),
     onSuccess: () => invalidateAfterDefectChange(queryClient),
   });
 }

@@ -42,7 +42,16 @@ export interface Defect {
 export interface DefectAbilities {
   update: boolean;
   close: boolean;
-  clearTagOut: boolean;
+  /** the caller may return tagged-out machines to service (the farm's technicians, managers) */
+  returnToService: boolean;
+}
+
+/** What closing a defect answers: the machine (its status unchanged) and its open critical count. */
+export interface ClosedDefect {
+  data: Defect;
+  abilities: DefectAbilities;
+  machine: MachineRef;
+  openCriticalDefects: number;
 }
 
 export interface DefectList {

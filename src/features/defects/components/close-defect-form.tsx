@@ -10,7 +10,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { formatLocalDate } from '../../../lib/fleet-format';
 import { useCloseDefect } from '../api/close-defect';
 import { useCompletedRecords } from '../api/get-completed-records';
-import type { CompletedRecord, Defect } from '../api/types';
+import type { ClosedDefect, CompletedRecord, Defect } from '../api/types';
 
 const recordLabel = (record: CompletedRecord) =>
   [
@@ -20,15 +20,20 @@ const recordLabel = (record: CompletedRecord) =>
       'Service visit',
   ].join(' · ');
 
-/** Close a defect as fixed: say what was done, or pick the completed service record that did it. */
+/**
+ * Close a defect as fixed: say what was done, or pick the completed service record that did it.
+ * Closing never releases a tagged-out machine; the form says so before and after.
+ */
 export function CloseDefectForm({
   orgId,
   defect,
   onDone,
+  onClosed,
 }: {
   orgId: string;
   defect: Defect;
   onDone: () => void;
+  onClosed: (closed: ClosedDefect) => void;
 }) {
   const close = useCloseDefect(orgId);
   const records = useCompletedRecords(orgId, defect.machine.id);
@@ -46,7 +51,8 @@ export function CloseDefectForm({
   const onSubmit = handleSubmit(async (values) => {
     setFormError(null);
     try {
-      await close.mutateAsync({ defectId: defect.id, input: values });
+      const closed = await close.mutateAsync({ defectId: defect.id, input: values });
+      onClosed(closed);
       onDone();
     } catch (error) {
       setFormError(applyServerErrors(error, setError, ['note', 'serviceRecordId']));
@@ -66,6 +72,12 @@ export function CloseDefectForm({
       className="flex flex-col gap-3 rounded-lg border border-field-200 bg-field-50 p-3"
     >
       {formError ? <Alert>{formError}</Alert> : null}
+      {defect.machine.status === 'tagged_out' ? (
+        <Alert tone="warning" title={`${defect.machine.fleetNumber} stays tagged out`}>
+          Closing this defect does not release the machine. It stays tagged out until a technician
+          or manager returns it to service, with a note of what was checked.
+        </Alert>
+      ) : null}
       <TextareaField
         label="What was done"
         hint="Enough for the next person to know it is fixed (a note, or the service record below)."

@@ -4,7 +4,7 @@ import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
 import { useUpdateDefect } from '../api/update-defect';
-import type { Defect, PersonRef } from '../api/types';
+import type { ClosedDefect, Defect, PersonRef } from '../api/types';
 import { CloseDefectForm } from './close-defect-form';
 
 /** The shop's actions on an open defect: assign, start or stop the repair, close it. */
@@ -12,10 +12,12 @@ export function DefectActions({
   orgId,
   defect,
   people,
+  onClosed,
 }: {
   orgId: string;
   defect: Defect;
   people: PersonRef[];
+  onClosed: (closed: ClosedDefect) => void;
 }) {
   const update = useUpdateDefect(orgId);
   const [closing, setClosing] = useState(false);
@@ -84,7 +86,12 @@ export function DefectActions({
         </div>
       </div>
       {closing ? (
-        <CloseDefectForm orgId={orgId} defect={defect} onDone={() => setClosing(false)} />
+        <CloseDefectForm
+          orgId={orgId}
+          defect={defect}
+          onDone={() => setClosing(false)}
+          onClosed={onClosed}
+        />
       ) : null}
     </div>
   );

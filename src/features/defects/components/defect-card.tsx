@@ -2,7 +2,7 @@ import { useId } from 'react';
 import { Link } from 'react-router-dom';
 import { MachineStatusBadge } from '../../../components/ui/status-badges';
 import { formatDateTime } from '../../../lib/format';
-import type { Defect, PersonRef } from '../api/types';
+import type { ClosedDefect, Defect, PersonRef } from '../api/types';
 import { DefectActions } from './defect-actions';
 import { DefectStatusBadge, SeverityBadge } from './severity-badge';
 
@@ -14,6 +14,7 @@ export function DefectCard({
   machineHref,
   recordHref,
   people,
+  onClosed,
 }: {
   orgId: string;
   defect: Defect;
@@ -22,6 +23,7 @@ export function DefectCard({
   recordHref: (recordId: string) => string;
   /** null: the caller may not handle defects (read-only) */
   people: PersonRef[] | null;
+  onClosed: (closed: ClosedDefect) => void;
 }) {
   const titleId = useId();
   const { machine } = defect;
@@ -92,7 +94,7 @@ export function DefectCard({
         </div>
       </div>
       {people && defect.status !== 'fixed' ? (
-        <DefectActions orgId={orgId} defect={defect} people={people} />
+        <DefectActions orgId={orgId} defect={defect} people={people} onClosed={onClosed} />
       ) : null}
     </article>
   );

@@ -1,4 +1,5 @@
 import { useId, useState } from 'react';
+import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
@@ -6,7 +7,8 @@ import { ListSkeleton } from '../../../components/ui/skeleton';
 import { DEFECTS_PAGE_SIZE, useDefects } from '../api/get-defects';
 import { useMachineOptions } from '../api/get-machine-options';
 import { useShopPeople } from '../api/get-shop-people';
-import type { DefectFilters } from '../api/types';
+import type { ClosedDefect, DefectFilters } from '../api/types';
+import { ClosedDefectNotice } from './closed-defect-notice';
 import { DefectCard } from './defect-card';
 import { DefectFiltersBar } from './defect-filters';
 import { ReportDefectForm } from './report-defect-form';
@@ -38,6 +40,8 @@ export function DefectsView({
   const machines = useMachineOptions(orgId);
   const people = useShopPeople(orgId, { enabled: shop });
   const [reporting, setReporting] = useState(false);
+  const [closed, setClosed] = useState<ClosedDefect | null>(null);
+  const [returned, setReturned] = useState<string | null>(null);
   const reportId = useId();
 
   const allMachines = machines.data ?? [];
@@ -46,13 +50,34 @@ export function DefectsView({
   );
   const abilities = defects.data?.abilities;
   const canHandle = shop && (abilities?.update ?? false);
+  const canReturn = abilities?.returnToService ?? false;
+  const onReturned = (fleetNumber: string) => {
+    setClosed(null);
+    setReturned(fleetNumber);
+  };
 
   return (
     <div className="flex flex-col gap-5">
+      {returned ? (
+        <Alert tone="success" title={`${returned} is back in service`}>
+          Your note of what was checked is kept with its history.
+        </Alert>
+      ) : null}
+      {closed ? (
+        <ClosedDefectNotice
+          key={closed.data.id}
+          orgId={orgId}
+          closed={closed}
+          canReturn={canReturn}
+          onReturned={onReturned}
+          onDismiss={() => setClosed(null)}
+        />
+      ) : null}
       <TaggedOutMachines
         orgId={orgId}
         machines={taggedOut}
-        canClear={abilities?.clearTagOut ?? false}
+        canReturn={canReturn}
+        onReturned={onReturned}
       />
 
       <div className="flex flex-col gap-3">
@@ -122,6 +147,10 @@ export function DefectsView({
                     machineHref={machineHref}
                     recordHref={recordHref}
                     people={canHandle ? (people.data ?? []) : null}
+                    onClosed={(result) => {
+                      setReturned(null);
+                      setClosed(result);
+                    }}
                   />
                 </li>
               ))}

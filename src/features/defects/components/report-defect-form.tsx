@@ -96,7 +96,7 @@ export function ReportDefectForm({
           options={SEVERITY_ORDER.map((s) => ({ value: s, label: DEFECT_SEVERITY_LABELS[s] }))}
           hint={
             severity === 'critical'
-              ? 'Critical tags the machine out: nobody may use it until a technician or manager clears it.'
+              ? 'Critical tags the machine out: nobody may use it until a technician or manager returns it to service.'
               : 'Critical when the machine must not be used.'
           }
           error={errors.severity?.message}

@@ -19,10 +19,13 @@ export const machineReadingKeys = {
 };
 
 /**
- * Keys of other features that a reading changes. A feature never imports another, so these are
- * the literal prefixes: the schedules feature's task list of a machine, and the due list.
+ * Keys of other features that a machine change touches. A feature never imports another, so
+ * these are the literal prefixes: the schedules feature's task list of a machine, the due list,
+ * and (a status change) the defects and the walkaround picker.
  */
 export const foreignKeys = {
   machineTasks: (orgId: string, machineId: string) => ['tasks', 'list', orgId, machineId] as const,
   due: ['due'] as const,
+  defects: ['defects'] as const,
+  walkaroundMachines: ['walkarounds', 'machines'] as const,
 };

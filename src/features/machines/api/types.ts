@@ -56,10 +56,19 @@ export interface MachineAbilities {
   logReading: boolean;
   correctReading: boolean;
   replaceMeter: boolean;
+  /** the machine is tagged out and the caller is one of the farm's technicians or managers */
+  returnToService: boolean;
+}
+
+/** Why and since when a machine is tagged out; a dealer is told neither why nor how many. */
+export interface TagOut {
+  since: string | null;
+  reason: string | null;
+  openCriticalDefects: number | null;
 }
 
 export interface MachineDetail {
-  data: Machine & { usage: Usage | null };
+  data: Machine & { usage: Usage | null; tagOut: TagOut | null };
   abilities: MachineAbilities;
 }
 

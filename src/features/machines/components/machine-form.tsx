@@ -50,10 +50,12 @@ const UNIT_OPTIONS = METER_UNITS.map((value) => ({
   value,
   label: `${METER_UNIT_LABELS[value]} (${value})`,
 }));
+// A tagged-out machine goes back into service by its own noted step on the machine page, not here.
 const statusOptions = (current: MachineStatus) =>
-  (['in_service', 'tagged_out', ...(current === 'sold' ? ['sold' as const] : [])] as const).map(
-    (value) => ({ value, label: MACHINE_STATUS_LABELS[value] }),
-  );
+  (current === 'tagged_out'
+    ? (['tagged_out'] as const)
+    : (['in_service', 'tagged_out', ...(current === 'sold' ? ['sold' as const] : [])] as const)
+  ).map((value) => ({ value, label: MACHINE_STATUS_LABELS[value] }));
 
 // Empty number inputs mean "not given" (null), not zero; anything else goes to the schema as a
 // number, so "abc" is refused with the schema's own message.
@@ -142,7 +144,11 @@ export function MachineForm({ orgId, machine, submitLabel, onSubmit, onCancel }:
           <SelectField
             label="Status"
             options={statusOptions(machine?.status ?? 'in_service')}
-            hint="A tagged-out machine is shown to operators as not to be used."
+            hint={
+              machine?.status === 'tagged_out'
+                ? 'Tagged out: it goes back into service with "Return to service" at the top of its page, with a note of what was checked.'
+                : 'A tagged-out machine is shown to operators as not to be used.'
+            }
             error={errors.status?.message}
             {...register('status')}
           />

@@ -1,38 +1,35 @@
-import { Link } from 'react-router-dom';
 import { Alert } from '../../../components/ui/alert';
 import { DueStatusBadge, MachineStatusBadge } from '../../../components/ui/status-badges';
 import { formatLocalDate, formatRate } from '../../../lib/fleet-format';
-import type { MachineDetail } from '../api/types';
+import type { MachineAbilities, MachineDetail } from '../api/types';
 import { MeterReadingSummary } from './meter-reading-summary';
+import { TagOutPanel } from './tag-out-panel';
 
 /** The top of a machine's page: whether it may be used, where its meter stands, how fast it runs. */
 export function MachineStatusPanel({
+  orgId,
   machine,
+  abilities,
   timeZone,
   defectsHref,
 }: {
+  orgId: string;
   machine: MachineDetail['data'];
+  abilities: Pick<MachineAbilities, 'returnToService'>;
   timeZone: string;
-  /** the machine's defects, where a technician or manager clears a tag-out */
+  /** the machine's defects (farm members) */
   defectsHref?: string;
 }) {
   const { usage } = machine;
   return (
     <div className="flex flex-col gap-4">
-      {machine.status === 'tagged_out' ? (
-        <Alert tone="error" title="Tagged out — do not use">
-          This machine is out of service until it is repaired and released. Do not start or operate
-          it.
-          {defectsHref ? (
-            <>
-              {' '}
-              <Link to={defectsHref} className="font-bold underline">
-                Its defects, and clearing the tag-out
-              </Link>
-            </>
-          ) : null}
-        </Alert>
-      ) : null}
+      <TagOutPanel
+        orgId={orgId}
+        machine={machine}
+        abilities={abilities}
+        timeZone={timeZone}
+        defectsHref={defectsHref}
+      />
       {machine.status === 'sold' ? (
         <Alert tone="info" title="Sold">
           This machine has left the fleet. Its history stays here; no new readings are taken.

@@ -14,7 +14,10 @@ const STATUS: Record<ActiveDefect['status'], string> = {
   fixed: 'Fixed',
 };
 
-/** The machine's open defects; the ones ticked are closed by this record when it is completed. */
+/**
+ * The machine's open defects; the ones ticked are closed by this record when it is completed.
+ * Closing never changes the machine's status: returning to service is its own step.
+ */
 export function DefectChoiceList({
   form,
   defects,
@@ -35,8 +38,8 @@ export function DefectChoiceList({
           legend="Defects this visit fixes"
           hint={
             isPlan
-              ? 'Ticked defects are closed when the plan is completed.'
-              : 'Ticked defects are closed by this record; a tagged-out machine is released when its last critical defect closes.'
+              ? 'Ticked defects are closed when the plan is completed. Closing them does not release a tagged-out machine.'
+              : 'Ticked defects are closed by this record. A tagged-out machine stays tagged out until a technician or manager returns it to service, with a note of what was checked, from this record or the machine page.'
           }
           emptyText={`${fleetNumber} has no open defects.`}
           value={field.value ?? []}
