@@ -2,9 +2,10 @@ import type { Machine, ServiceRecord } from '../models';
 import { dealerHas, hasRole, type OrgAccess } from './access';
 
 /**
- * The people who do a farm's shop work: its managers and technicians, and a dealer holding a
- * `service` link, so every service and defect policy below follows without edits. (Which routes
- * a dealer reaches at all is listed in policies/dealer-link.ts.)
+ * The people who do a farm's service work: its managers and technicians, and a dealer holding a
+ * `service` link, so every service policy below follows without edits. Defects and the machine's
+ * status are the farm's own (policies/defect.ts, machine.ts), never `isShop`. (Which routes a
+ * dealer reaches at all is listed in policies/dealer-link.ts.)
  */
 export const isShop = (access: OrgAccess) =>
   hasRole(access, 'manager', 'technician') || dealerHas(access, 'service');
