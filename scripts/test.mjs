@@ -12,8 +12,8 @@ import path from 'node:path';
 import { ensureDependencies } from './lib/setup.mjs';
 import { bin, isRoot, log, projectRoot, warn } from './lib/common.mjs';
 import { startPostgres } from './lib/postgres.mjs';
-import { runCommand, stopAll } from './lib/processes.mjs';
-import { runTsScript, startApi, startFakeS3, startMailCatcher } from './lib/app.mjs';
+import { runCommand, startService, stopAll } from './lib/processes.mjs';
+import { runTsScript, startApi, startFakeS3, startMailCatcher, tsx } from './lib/app.mjs';
 import { addCounts, countVitestReport, exitCodeFor, summaryLine } from './lib/report.mjs';
 
 // HOURSTONE_TEST_SLOT=N (1-9) lets several test runs share one checkout: each slot has its own
@@ -133,6 +133,15 @@ async function browserTests(env) {
       services,
       onExit: (code, signal) => warn(`[api] exited during the browser tests (${signal ?? code})`),
     });
+    // Requests only queue their e-mail: the worker delivers it (on the outbox NOTIFY) to the
+    // catcher. Only mail delivery runs, so no digest or nudge lands in the middle of a test.
+    services.push(
+      startService('worker', tsx, ['jobs/index.ts'], {
+        env: { ...env, WORKER_JOBS: 'deliver-mail', LOG_LEVEL: 'warn' },
+        onExit: (code, signal) =>
+          warn(`[worker] exited during the browser tests (${signal ?? code})`),
+      }),
+    );
     await runVitest(
       'browser tests',
       E2E_REPORT,
