@@ -13,6 +13,7 @@ import { membersRouter } from './routes/members/members.router';
 import { devRouter } from './routes/dev/dev.router';
 import { machinesRouter } from './routes/machines/machines.router';
 import { machinePhotoRouter } from './routes/machines/photo.router';
+import { fleetImportRouter } from './routes/machines/fleet-import.router';
 import { tasksRouter } from './routes/tasks/tasks.router';
 import { taskHistoryRouter } from './routes/tasks/history.router';
 import { machineStatusRouter } from './routes/machines/status.router';
@@ -72,6 +73,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(membersRouter());
   api.use(machinesRouter());
   api.use(machinePhotoRouter());
+  api.use(fleetImportRouter());
   api.use(tasksRouter());
   api.use(taskHistoryRouter());
   api.use(readingsRouter());

@@ -202,8 +202,17 @@ async function setOperators(
   }
 }
 
-export async function createMachine(access: OrgAccess, input: MachineCreateInput) {
-  return sequelize.transaction(async (transaction) => {
+/** Runs fn in the caller's transaction when there is one (an import), else in its own. */
+const inTransaction = <T>(outer: Transaction | undefined, fn: (t: Transaction) => Promise<T>) =>
+  outer ? fn(outer) : sequelize.transaction(fn);
+
+/** Adds a machine (in the caller's transaction, when given). */
+export async function createMachine(
+  access: OrgAccess,
+  input: MachineCreateInput,
+  outer?: Transaction,
+) {
+  return inTransaction(outer, async (transaction) => {
     await fleetNumberTaken(access, input.fleetNumber, null, transaction);
     await checkOperators(access, input.operatorIds, transaction);
     const { operatorIds, ...fields } = input;
@@ -232,8 +241,9 @@ export async function updateMachine(
   access: OrgAccess,
   machine: Machine,
   input: MachineUpdateInput,
+  outer?: Transaction,
 ) {
-  return sequelize.transaction(async (transaction) => {
+  return inTransaction(outer, async (transaction) => {
     if (input.fleetNumber !== undefined)
       await fleetNumberTaken(access, input.fleetNumber, machine.id, transaction);
     if (input.operatorIds !== undefined)
