@@ -1,7 +1,7 @@
 import { z } from 'zod';
 
 // The environment, validated once at start. Every variable is documented in .env.example.
-const schema = z.object({
+const fields = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   HOST: z.string().default('127.0.0.1'),
   PORT: z.coerce.number().int().positive().default(4310),
@@ -17,12 +17,19 @@ const schema = z.object({
   SMTP_SOCKET_TIMEOUT_MS: z.coerce.number().int().min(100).max(600_000).default(10_000),
   // How long a worker's claim on a message lasts; keep it well above the timeouts above.
   MAIL_CLAIM_LEASE_SECONDS: z.coerce.number().int().min(10).max(86_400).default(120),
-  JWT_SECRET: z.string().min(8, 'JWT_SECRET must be at least 8 characters'),
+  // Signs session tokens and feed/unsubscribe links: at least 32 bytes outside development and
+  // test (checked below); `npm start` generates one into .data/secrets.json when unset.
+  JWT_SECRET: z.string({ error: 'JWT_SECRET is required (npm start generates one when unset)' }),
+  // bcrypt cost of stored passwords (and of the dummy compared for unknown e-mails); 4 in tests.
+  BCRYPT_ROUNDS: z.coerce.number().int().min(4).max(15).optional(),
   SESSION_TTL_HOURS: z.coerce.number().positive().default(12),
   COOKIE_SECURE: z.enum(['auto', 'true', 'false']).default('auto'),
   CSP_UPGRADE_INSECURE: z.enum(['true', 'false']).default('false'),
   TRUST_PROXY: z.string().default('loopback'),
   SERVE_CLIENT: z.enum(['0', '1']).default('0'),
+  // open: anyone may sign up and create a farm or dealer; closed: only invitations and
+  // `npm run org:create` bring people in.
+  SIGNUP: z.enum(['open', 'closed']).default('open'),
   SIGN_IN_LIMIT_PER_ACCOUNT: z.coerce.number().int().positive().default(5),
   SIGN_IN_LIMIT_PER_ADDRESS: z.coerce.number().int().positive().default(30),
   SIGN_IN_WINDOW_MINUTES: z.coerce.number().positive().default(15),
@@ -33,6 +40,21 @@ const schema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().default('S3RVER'),
   S3_FORCE_PATH_STYLE: z.enum(['true', 'false']).default('true'),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+});
+
+// A guessable secret lets anyone forge a session: 32 bytes at least wherever real people sign in.
+const jwtSecretMinBytes = (nodeEnv: string) => (nodeEnv === 'production' ? 32 : 8);
+
+const schema = fields.superRefine((value, ctx) => {
+  const bytes = Buffer.byteLength(value.JWT_SECRET, 'utf8');
+  const min = jwtSecretMinBytes(value.NODE_ENV);
+  if (bytes < min) {
+    ctx.addIssue({
+      code: 'custom',
+      path: ['JWT_SECRET'],
+      message: `JWT_SECRET must be at least ${min} bytes${value.NODE_ENV === 'production' ? ' outside development and test' : ''} (it has ${bytes}); generate one with \`openssl rand -base64 48\`, or leave it unset for \`npm start\` to generate and keep one`,
+    });
+  }
 });
 
 export type Env = z.infer<typeof schema>;
