@@ -1,11 +1,13 @@
 import type { RequestHandler } from 'express';
-import { Membership, Organization, User } from '../models';
+import type { Membership, User } from '../models';
 import { unauthenticated } from '../errors';
-import { readSession, SESSION_COOKIE } from '../services/session';
+import { loadSession, SESSION_COOKIE } from '../services/session';
 
 export interface AuthContext {
   user: User;
   memberships: Membership[];
+  /** the `sessions` row of this request's cookie */
+  sessionId: string;
 }
 
 declare module 'express-serve-static-core' {
@@ -15,21 +17,17 @@ declare module 'express-serve-static-core' {
   }
 }
 
-/** Loads the signed-in user and their memberships (one query each request: no server-side session state). */
+/**
+ * Loads the live session with its user and memberships in one query on every request, so a
+ * sign-out, a password reset, a role change or a removal counts from the next request.
+ */
 export const requireAuth: RequestHandler = async (req, _res, next) => {
-  const userId = readSession(req.cookies?.[SESSION_COOKIE]);
-  if (!userId) throw unauthenticated();
-  const user = await User.findByPk(userId, {
-    include: [
-      {
-        model: Membership,
-        as: 'memberships',
-        include: [{ model: Organization, as: 'organization' }],
-      },
-    ],
-  });
-  if (!user) throw unauthenticated();
-  const memberships = (user as User & { memberships: Membership[] }).memberships ?? [];
-  req.auth = { user, memberships };
+  const session = await loadSession(req.cookies?.[SESSION_COOKIE]);
+  if (!session) throw unauthenticated();
+  req.auth = {
+    user: session.user,
+    memberships: session.user.memberships,
+    sessionId: session.sessionId,
+  };
   next();
 };

@@ -4,6 +4,7 @@ import { User } from './user';
 import { Membership } from './membership';
 import { Invitation } from './invitation';
 import { PasswordReset } from './password-reset';
+import { Session } from './session';
 import { Notification } from './notification';
 import { NotificationPreference } from './notification-preference';
 import { CalendarFeed } from './calendar-feed';
@@ -22,6 +23,7 @@ import { ServiceBooking } from './service-booking';
 Membership.belongsTo(Organization, { foreignKey: 'organizationId', as: 'organization' });
 Membership.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 User.hasMany(Membership, { foreignKey: 'userId', as: 'memberships' });
+Session.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Invitation.belongsTo(Organization, { foreignKey: 'organizationId', as: 'organization' });
 Machine.hasMany(ServiceTask, { foreignKey: 'machineId', as: 'tasks' });
 Machine.hasMany(MachineOperator, { foreignKey: 'machineId', as: 'operators' });
@@ -37,6 +39,7 @@ export {
   Membership,
   Invitation,
   PasswordReset,
+  Session,
   Notification,
   NotificationPreference,
   CalendarFeed,

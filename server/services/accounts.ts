@@ -1,5 +1,5 @@
 import bcrypt from 'bcryptjs';
-import { Op } from 'sequelize';
+import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { env } from '../env';
 import { AppError, invalid } from '../errors';
@@ -11,31 +11,20 @@ import { rolesFor } from '../policies/membership';
 import { queueMessage } from './mailer';
 import { hashToken, newToken } from './tokens';
 import { recordAudit } from './audit';
+import { hashPassword } from './password-hash';
+import { endOtherSessions } from './session';
+import { forgetFailures, throttleKey } from './sign-in-throttle';
 
-const BCRYPT_ROUNDS = env.NODE_ENV === 'test' ? 4 : 11;
 export const INVITATION_DAYS = 7;
 export const RESET_MINUTES = 60;
+// A reset request answers no sooner than this whether the e-mail has an account or not: the
+// known one writes a link and an outbox row, the unknown one nothing, and the time must not tell.
+export const RESET_ANSWER_MS = 250;
 
-// A fixed hash to compare against when the e-mail is unknown, so timing does not reveal accounts.
-const DUMMY_HASH = bcrypt.hashSync('not-a-real-password', 4);
+export { hashPassword };
 
-export const hashPassword = (password: string) => bcrypt.hash(password, BCRYPT_ROUNDS);
-
-/** The user with these credentials, or an AppError 401 naming no detail. */
-export async function verifyCredentials(email: string, password: string): Promise<User> {
-  const user = await User.findOne({
-    where: sequelize.where(sequelize.fn('lower', sequelize.col('email')), email),
-  });
-  const ok = await bcrypt.compare(password, user?.passwordHash ?? DUMMY_HASH);
-  if (!user || !user.passwordHash || !ok) {
-    throw new AppError(
-      401,
-      'invalid_credentials',
-      'That e-mail and password do not match an account',
-    );
-  }
-  return user;
-}
+const byEmail = (email: string) =>
+  sequelize.where(sequelize.fn('lower', sequelize.col('email')), email.toLowerCase());
 
 export async function loadMemberships(userId: string) {
   return Membership.findAll({
@@ -187,16 +176,38 @@ export async function acceptInvitation(
   });
 }
 
-/** Starts a password reset; silent when the e-mail is unknown (accounts cannot be probed). */
+const NO_USER = '00000000-0000-0000-0000-000000000000';
+
+const waitUntil = (at: number) =>
+  new Promise<void>((resolve) => setTimeout(resolve, Math.max(0, at - Date.now())));
+
+/**
+ * Starts a password reset: a new link voids the older ones. Silent when the e-mail is unknown,
+ * and answers after RESET_ANSWER_MS either way, so neither the answer nor its time tells
+ * whether an account exists.
+ */
 export async function requestPasswordReset(email: string): Promise<void> {
-  const user = await User.findOne({
-    where: sequelize.where(sequelize.fn('lower', sequelize.col('email')), email),
-  });
-  if (!user) return;
+  const answerAt = Date.now() + RESET_ANSWER_MS;
+  try {
+    await writePasswordReset(email);
+  } finally {
+    await waitUntil(answerAt);
+  }
+}
+
+async function writePasswordReset(email: string): Promise<void> {
   const { token, hash } = newToken();
   const link = `${env.APP_URL}/reset-password?token=${token}`;
   // The reset and its e-mail commit together; the worker sends it (the request never waits on SMTP).
   await sequelize.transaction(async (transaction) => {
+    // Locking the account makes two requests at once leave exactly one live link.
+    const user = await User.findOne({
+      where: byEmail(email),
+      lock: transaction.LOCK.UPDATE,
+      transaction,
+    });
+    await voidOpenResets(user?.id ?? NO_USER, transaction);
+    if (!user) return;
     const reset = await PasswordReset.create(
       {
         userId: user.id,
@@ -221,10 +232,21 @@ export async function requestPasswordReset(email: string): Promise<void> {
   });
 }
 
-/** Sets a new password with a reset token (single use, unexpired). */
+/** Voids the user's open reset links (a newer link, or the password just changed). */
+async function voidOpenResets(userId: string, transaction: Transaction) {
+  await PasswordReset.update(
+    { expiresAt: new Date() },
+    { where: { userId, usedAt: null, expiresAt: { [Op.gt]: new Date() } }, transaction },
+  );
+}
+
+/**
+ * Sets a new password with a reset token (single use, unexpired, the newest of its user). Every
+ * session of the user ends and the account's failed sign-ins are forgotten.
+ */
 export async function confirmPasswordReset(token: string, password: string): Promise<User> {
   const passwordHash = await hashPassword(password);
-  return sequelize.transaction(async (transaction) => {
+  const user = await sequelize.transaction(async (transaction) => {
     const reset = await PasswordReset.findOne({
       where: { tokenHash: hashToken(token), usedAt: null, expiresAt: { [Op.gt]: new Date() } },
       lock: transaction.LOCK.UPDATE,
@@ -237,6 +259,8 @@ export async function confirmPasswordReset(token: string, password: string): Pro
       throw invalid({ token: 'This link has expired or was already used. Ask for a new one.' });
     await user.update({ passwordHash }, { transaction });
     await reset.update({ usedAt: new Date() }, { transaction });
+    await voidOpenResets(user.id, transaction);
+    await endOtherSessions(user.id, null, transaction);
     await recordAudit(
       {
         organizationId: null,
@@ -249,6 +273,8 @@ export async function confirmPasswordReset(token: string, password: string): Pro
     );
     return user;
   });
+  await forgetFailures(throttleKey(user.email));
+  return user;
 }
 
 export function escapeHtml(s: string): string {

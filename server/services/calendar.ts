@@ -4,6 +4,7 @@
 // moves the date instead of adding a second one.
 import { createHmac, randomUUID } from 'node:crypto';
 import ical from 'ical-generator';
+import type { Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { env } from '../env';
 import { notFound } from '../errors';
@@ -88,6 +89,18 @@ export async function revokeFeed(access: OrgAccess, feedId: string): Promise<voi
   await feed.update({ revokedAt: new Date() });
 }
 
+/** Revokes the personal feeds of someone leaving the organization (inside the removal). */
+export async function revokePersonalFeeds(
+  organizationId: string,
+  userId: string,
+  transaction?: Transaction,
+): Promise<void> {
+  await CalendarFeed.update(
+    { revokedAt: new Date() },
+    { where: { organizationId, userId, revokedAt: null }, transaction },
+  );
+}
+
 function eventDescription(orgId: string, row: DueRow): string {
   const caution = cautionLine(row.hazards);
   return [
@@ -113,7 +126,9 @@ export async function feedCalendar(token: string, now = new Date()): Promise<str
     const membership = await Membership.findOne({
       where: { organizationId: organization.id, userId: feed.userId },
     });
-    if (!membership) return null;
+    // Leaving the farm ends the feed for good: joining again later starts a new membership,
+    // and a link made before it stays dead (the person makes a new one).
+    if (!membership || membership.createdAt > feed.createdAt) return null;
     access = { organization, userId: feed.userId, role: membership.role, via: 'member' };
     // "My machines": what the person sees (an operator: their own), narrowed like their digest.
     filter = effectivePreference(

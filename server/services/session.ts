@@ -1,50 +1,146 @@
+// Sessions live in PostgreSQL: the cookie carries a signed token naming one `sessions` row, and
+// every request checks that row (not revoked, not expired) while loading the user and their
+// memberships in the same query. Any API copy sees a sign-out or a password reset at once.
 import type { Request, Response } from 'express';
 import jwt from 'jsonwebtoken';
+import { Op, type Transaction } from 'sequelize';
 import { env } from '../env';
+import { Membership, Organization, Session, User } from '../models';
 
 export const SESSION_COOKIE = 'hs_session';
 
+// last_seen_at is written at most this often per session, so reads do not each cost a write.
+const TOUCH_EVERY_MS = 5 * 60_000;
+// Ended and expired rows are kept a while (who was signed in when), then dropped at sign-in.
+const KEEP_ENDED_DAYS = 30;
+
 interface SessionClaims {
   sub: string;
+  sid: string;
 }
+
+export type SessionUser = User & { memberships: Membership[] };
 
 function cookieSecure(req: Request): boolean {
   if (env.COOKIE_SECURE === 'auto') return req.secure;
   return env.COOKIE_SECURE === 'true';
 }
 
-/** Signs a session token for the user and sets it as an httpOnly, SameSite=Lax cookie. */
-export function startSession(req: Request, res: Response, userId: string): void {
+const cookieOptions = (req: Request) => ({
+  httpOnly: true,
+  sameSite: 'lax' as const,
+  secure: cookieSecure(req),
+  path: '/',
+});
+
+/** Opens a session row for the user and sets its signed token as an httpOnly, SameSite=Lax cookie. */
+export async function startSession(req: Request, res: Response, userId: string): Promise<void> {
   const maxAgeMs = env.SESSION_TTL_HOURS * 3600_000;
-  const token = jwt.sign({ sub: userId } satisfies SessionClaims, env.JWT_SECRET, {
+  await Session.destroy({
+    where: {
+      userId,
+      [Op.or]: [
+        { expiresAt: { [Op.lt]: new Date(Date.now() - KEEP_ENDED_DAYS * 86_400_000) } },
+        { revokedAt: { [Op.lt]: new Date(Date.now() - KEEP_ENDED_DAYS * 86_400_000) } },
+      ],
+    },
+  });
+  const session = await Session.create({
+    userId,
+    userAgent: String(req.get('user-agent') ?? '').slice(0, 500),
+    expiresAt: new Date(Date.now() + maxAgeMs),
+    revokedAt: null,
+  });
+  const token = jwt.sign({ sub: userId, sid: session.id } satisfies SessionClaims, env.JWT_SECRET, {
     expiresIn: Math.round(maxAgeMs / 1000),
     issuer: 'hourstone',
   });
-  res.cookie(SESSION_COOKIE, token, {
-    httpOnly: true,
-    sameSite: 'lax',
-    secure: cookieSecure(req),
-    maxAge: maxAgeMs,
-    path: '/',
-  });
+  res.cookie(SESSION_COOKIE, token, { ...cookieOptions(req), maxAge: maxAgeMs });
 }
 
-export function endSession(req: Request, res: Response): void {
-  res.clearCookie(SESSION_COOKIE, {
-    httpOnly: true,
-    sameSite: 'lax',
-    secure: cookieSecure(req),
-    path: '/',
-  });
+/** Ends the session of this request's cookie (if any) on the server and clears the cookie. */
+export async function endSession(req: Request, res: Response): Promise<void> {
+  const claims = readSession(req.cookies?.[SESSION_COOKIE]);
+  if (claims) {
+    await Session.update(
+      { revokedAt: new Date() },
+      { where: { id: claims.sessionId, userId: claims.userId, revokedAt: null } },
+    );
+  }
+  res.clearCookie(SESSION_COOKIE, cookieOptions(req));
 }
 
-/** The user id of a valid session token, or null. */
-export function readSession(token: string | undefined): string | null {
+/** Ends every live session of the user but `keepSessionId` (a password change keeps its own). */
+export async function endOtherSessions(
+  userId: string,
+  keepSessionId: string | null,
+  transaction?: Transaction,
+): Promise<number> {
+  const [count] = await Session.update(
+    { revokedAt: new Date() },
+    {
+      where: {
+        userId,
+        revokedAt: null,
+        ...(keepSessionId && { id: { [Op.ne]: keepSessionId } }),
+      },
+      transaction,
+    },
+  );
+  return count;
+}
+
+/** The user and session ids of a validly signed token, or null. */
+export function readSession(
+  token: string | undefined,
+): { userId: string; sessionId: string } | null {
   if (!token) return null;
   try {
     const claims = jwt.verify(token, env.JWT_SECRET, { issuer: 'hourstone' }) as SessionClaims;
-    return typeof claims.sub === 'string' ? claims.sub : null;
+    if (typeof claims.sub !== 'string' || typeof claims.sid !== 'string') return null;
+    return { userId: claims.sub, sessionId: claims.sid };
   } catch {
     return null;
   }
+}
+
+/**
+ * The live session of a token with its user and memberships (one query), or null when the
+ * token is invalid or its session was ended or has expired.
+ */
+export async function loadSession(
+  token: string | undefined,
+): Promise<{ sessionId: string; user: SessionUser } | null> {
+  const claims = readSession(token);
+  // A token signed before sessions had ids, or tampered with, names no row.
+  if (!claims || !/^[0-9a-f-]{36}$/i.test(claims.sessionId)) return null;
+  const session = await Session.findOne({
+    where: {
+      id: claims.sessionId,
+      userId: claims.userId,
+      revokedAt: null,
+      expiresAt: { [Op.gt]: new Date() },
+    },
+    include: [
+      {
+        model: User,
+        as: 'user',
+        required: true,
+        include: [
+          {
+            model: Membership,
+            as: 'memberships',
+            include: [{ model: Organization, as: 'organization' }],
+          },
+        ],
+      },
+    ],
+  });
+  if (!session?.user) return null;
+  if (Date.now() - session.lastSeenAt.getTime() > TOUCH_EVERY_MS) {
+    await Session.update({ lastSeenAt: new Date() }, { where: { id: session.id } });
+  }
+  const user = session.user as SessionUser;
+  user.memberships ??= [];
+  return { sessionId: session.id, user };
 }

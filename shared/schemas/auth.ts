@@ -27,7 +27,7 @@ export const passwordResetConfirmSchema = z.object({
 });
 export type PasswordResetConfirmInput = z.infer<typeof passwordResetConfirmSchema>;
 
-/** Only the role; an unknown field is refused by name. */
+/** A signed-in person's new password, with the current one. */
 export const passwordChangeSchema = z.object({
   currentPassword: z
     .string({ error: 'Enter your current password' })
@@ -37,5 +37,6 @@ export const passwordChangeSchema = z.object({
 });
 export type PasswordChangeInput = z.infer<typeof passwordChangeSchema>;
 
+/** Only the role; an unknown field is refused by name. */
 export const membershipUpdateSchema = z.object({ role: roleSchema }).strict();
 export type MembershipUpdateInput = z.infer<typeof membershipUpdateSchema>;

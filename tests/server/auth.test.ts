@@ -83,39 +83,7 @@ describe('auth — sign-in', () => {
     expect(res.body.error.fields.password).toMatch(/password/i);
   });
 
-  it('sign-in — throttled per account after 5 failures, even with the right password', async () => {
-    const org = await createOrganization();
-    const { user } = await createMember(org, 'manager');
-    for (let i = 0; i < 5; i++) {
-      const r = await request(app)
-        .post('/api/v1/auth/sign-in')
-        .send({ email: user.email, password: 'wrong-wrong' });
-      expect(r.status).toBe(401);
-    }
-    const blocked = await request(app)
-      .post('/api/v1/auth/sign-in')
-      .send({ email: user.email, password: TEST_PASSWORD });
-    expect(blocked.status).toBe(429);
-    expect(blocked.body.error.code).toBe('throttled');
-    // another account from the same address is not blocked by this account's failures
-    const { user: other } = await createMember(org, 'operator');
-    const ok = await request(app)
-      .post('/api/v1/auth/sign-in')
-      .send({ email: other.email, password: TEST_PASSWORD });
-    expect(ok.status).toBe(200);
-  });
-
-  it('sign-in — throttled per address after 30 attempts across accounts', async () => {
-    const statuses: number[] = [];
-    for (let i = 0; i < 31; i++) {
-      const r = await request(app)
-        .post('/api/v1/auth/sign-in')
-        .send({ email: `someone${i}@test.example`, password: 'whatever' });
-      statuses.push(r.status);
-    }
-    expect(statuses.slice(0, 30).every((s) => s === 401)).toBe(true);
-    expect(statuses[30]).toBe(429);
-  });
+  // Throttling (failures per address, the progressive delay per account): sign-in-throttle.test.ts.
 
   it('me — without a session — 401; after sign-out — 401', async () => {
     expect((await request(app).get('/api/v1/me')).status).toBe(401);

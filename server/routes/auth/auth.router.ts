@@ -3,6 +3,7 @@ import { z } from 'zod';
 import { route } from '../route';
 import {
   invitationAcceptSchema,
+  passwordChangeSchema,
   passwordResetConfirmSchema,
   passwordResetRequestSchema,
   signInSchema,
@@ -15,9 +16,14 @@ import {
   findOpenInvitation,
   loadMemberships,
   requestPasswordReset,
-  verifyCredentials,
 } from '../../services/accounts';
-import { signInPerAccount, signInPerAddress } from '../../middlewares/rate-limit';
+import { changePassword, verifyCredentials } from '../../services/credentials';
+import {
+  resetPerAddress,
+  resetPerEmail,
+  signInAccountDelay,
+  signInPerAddress,
+} from '../../middlewares/rate-limit';
 import { ROLES } from '../../../shared/constants';
 
 const meResponse = z.object({ data: meSchema });
@@ -28,15 +34,16 @@ export function authRouter(): Router {
   route(router, {
     method: 'post',
     path: '/auth/sign-in',
-    summary: 'Sign in with e-mail and password; sets the session cookie',
+    summary:
+      'Sign in with e-mail and password; sets the session cookie. After repeated failures the account waits (429 with Retry-After)',
     tags: ['auth'],
     access: 'public',
-    before: [signInPerAddress, signInPerAccount],
+    before: [signInPerAddress, signInAccountDelay],
     body: signInSchema,
     response: meResponse,
     handler: async ({ req, res, body }) => {
       const user = await verifyCredentials(body.email, body.password);
-      startSession(req, res, user.id);
+      await startSession(req, res, user.id);
       return { data: presentMe(user, await loadMemberships(user.id)) };
     },
   });
@@ -44,12 +51,26 @@ export function authRouter(): Router {
   route(router, {
     method: 'post',
     path: '/auth/sign-out',
-    summary: 'Sign out (clears the session cookie)',
+    summary: 'Sign out: ends the session on the server and clears the cookie',
     tags: ['auth'],
     access: 'public',
     status: 204,
-    handler: ({ req, res }) => {
-      endSession(req, res);
+    handler: async ({ req, res }) => {
+      await endSession(req, res);
+    },
+  });
+
+  route(router, {
+    method: 'post',
+    path: '/auth/password',
+    summary: 'Change the password (the current one is required); ends every other session',
+    tags: ['auth'],
+    access: 'user',
+    status: 204,
+    body: passwordChangeSchema,
+    handler: async ({ req, body }) => {
+      const { user, sessionId } = req.auth!;
+      await changePassword(user, sessionId, body.currentPassword, body.password);
     },
   });
 
@@ -66,10 +87,11 @@ export function authRouter(): Router {
   route(router, {
     method: 'post',
     path: '/auth/password-reset',
-    summary: 'E-mail a single-use password reset link (answers the same for unknown addresses)',
+    summary:
+      'E-mail a single-use password reset link that voids older ones (answers the same, in the same time, for unknown addresses)',
     tags: ['auth'],
     access: 'public',
-    before: [signInPerAddress],
+    before: [resetPerAddress, resetPerEmail],
     status: 202,
     body: passwordResetRequestSchema,
     response: z.object({ data: z.object({ sent: z.boolean() }) }),
@@ -82,14 +104,14 @@ export function authRouter(): Router {
   route(router, {
     method: 'post',
     path: '/auth/password-reset/confirm',
-    summary: 'Set a new password with a reset token; signs in',
+    summary: 'Set a new password with a reset token; ends every session of the user, then signs in',
     tags: ['auth'],
     access: 'public',
     body: passwordResetConfirmSchema,
     response: meResponse,
     handler: async ({ req, res, body }) => {
       const user = await confirmPasswordReset(body.token, body.password);
-      startSession(req, res, user.id);
+      await startSession(req, res, user.id);
       return { data: presentMe(user, await loadMemberships(user.id)) };
     },
   });
@@ -139,7 +161,7 @@ export function authRouter(): Router {
     response: meResponse,
     handler: async ({ req, res, params, body }) => {
       const user = await acceptInvitation(params.token, body.name, body.password);
-      startSession(req, res, user.id);
+      await startSession(req, res, user.id);
       return { data: presentMe(user, await loadMemberships(user.id)) };
     },
   });

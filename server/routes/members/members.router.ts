@@ -20,6 +20,7 @@ import {
 } from '../../presenters/membership';
 import { inviteMember } from '../../services/accounts';
 import { recordAudit } from '../../services/audit';
+import { revokePersonalFeeds } from '../../services/calendar';
 import { sequelize } from '../../db';
 import type { OrgAccess } from '../../policies/access';
 
@@ -123,6 +124,7 @@ export function membersRouter(): Router {
       );
       await sequelize.transaction(async (transaction) => {
         await member.destroy({ transaction });
+        await revokePersonalFeeds(access.organization.id, member.userId, transaction);
         await recordAudit(
           {
             organizationId: access.organization.id,
