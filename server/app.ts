@@ -8,6 +8,7 @@ import { env } from './env';
 import { logger } from './logger';
 import { buildOpenApiDocument } from './openapi';
 import { errorHandler, notFoundHandler } from './middlewares/error-handler';
+import { jsonBodiesOnly, refuseCrossSiteWrites } from './middlewares/request-guard';
 import { authRouter } from './routes/auth/auth.router';
 import { membersRouter } from './routes/members/members.router';
 import { devRouter } from './routes/dev/dev.router';
@@ -60,6 +61,8 @@ export function createApp(options: { serveClient?: boolean } = {}) {
     );
   }
   app.use(cookieParser());
+  // Before any body is read: cross-site writes answer 403, bodies other than JSON 415.
+  app.use('/api/v1', refuseCrossSiteWrites(env.APP_URL), jsonBodiesOnly);
   app.use(express.json({ limit: '1mb' }));
 
   const api = Router();
