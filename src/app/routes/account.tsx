@@ -1,7 +1,8 @@
 import { useNavigate } from 'react-router-dom';
 import { Button } from '../../components/ui/button';
-import { Card } from '../../components/ui/card';
+import { Card, Section } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
+import { ChangePasswordForm } from '../../features/auth/components/change-password-form';
 import { AccountDetails } from '../../features/settings/components/account-details';
 import { useCurrentMembership, useSignOut } from '../../lib/auth';
 import { paths } from '../paths';
@@ -17,6 +18,13 @@ export function AccountPage() {
       <Card>
         <AccountDetails me={me} />
       </Card>
+      <div className="mt-6">
+        <Section title="Change password">
+          <Card>
+            <ChangePasswordForm />
+          </Card>
+        </Section>
+      </div>
       <div className="mt-6">
         <Button
           variant="secondary"
