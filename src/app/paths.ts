@@ -44,6 +44,10 @@ export const paths = {
       path: '/o/:orgId/machines/new',
       href: (orgId: string) => `/o/${q(orgId)}/machines/new`,
     },
+    importFleet: {
+      path: '/o/:orgId/machines/import',
+      href: (orgId: string) => `/o/${q(orgId)}/machines/import`,
+    },
     machine: {
       path: '/o/:orgId/machines/:machineId',
       href: (orgId: string, machineId: string) => `/o/${q(orgId)}/machines/${q(machineId)}`,

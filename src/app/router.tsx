@@ -22,6 +22,7 @@ import {
 import { SentMessagesPage, sentMessagesLoader } from './routes/sent-messages';
 import { MachinePage, machineLoader } from './routes/machine';
 import { MachineNewPage } from './routes/machine-new';
+import { ImportFleetPage } from './routes/import-fleet';
 import { MachinesPage, machinesLoader } from './routes/machines';
 import { ServiceRecordPage, serviceRecordLoader } from './routes/service-record';
 import { ServiceRecordNewPage, serviceRecordNewLoader } from './routes/service-record-new';
@@ -91,6 +92,7 @@ export function createAppRouter(queryClient: QueryClient) {
                   element: <MachinesPage />,
                 },
                 { path: paths.organization.machineNew.path, element: <MachineNewPage /> },
+                { path: paths.organization.importFleet.path, element: <ImportFleetPage /> },
                 {
                   path: paths.organization.machine.path,
                   loader: machineLoader(queryClient),

@@ -27,10 +27,18 @@ export function MachinesPage() {
   const abilities = useFleetAbilities(organization.id, filtersFromSearch(search));
 
   const addLink = abilities.create ? (
-    <Link to={paths.organization.machineNew.href(organization.id)} className={buttonClasses()}>
-      <Icon name="plus" />
-      Add machine
-    </Link>
+    <div className="flex flex-wrap gap-2">
+      <Link to={paths.organization.machineNew.href(organization.id)} className={buttonClasses()}>
+        <Icon name="plus" />
+        Add machine
+      </Link>
+      <Link
+        to={paths.organization.importFleet.href(organization.id)}
+        className={buttonClasses('secondary')}
+      >
+        Import fleet
+      </Link>
+    </div>
   ) : null;
 
   return (
