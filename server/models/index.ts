@@ -5,6 +5,7 @@ import { Membership } from './membership';
 import { Invitation } from './invitation';
 import { PasswordReset } from './password-reset';
 import { Session } from './session';
+import { EmailVerification } from './email-verification';
 import { Notification } from './notification';
 import { NotificationPreference } from './notification-preference';
 import { CalendarFeed } from './calendar-feed';
@@ -40,6 +41,7 @@ export {
   Invitation,
   PasswordReset,
   Session,
+  EmailVerification,
   Notification,
   NotificationPreference,
   CalendarFeed,
