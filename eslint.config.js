@@ -5,7 +5,7 @@ import prettier from 'eslint-config-prettier';
 import globals from 'globals';
 
 export default tseslint.config(
-  { ignores: ['dist', 'node_modules', '.data', 'tests/.reports', '.screenshots'] },
+  { ignores: ['dist', 'node_modules', '.data', 'tests/.reports*', '.screenshots', '.stryker-tmp'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {
