@@ -162,9 +162,9 @@ async function main() {
   line('connections the hanging server took', hanging.accepted);
   line('longest run against the hanging server', `${b.hangAttemptSeconds.toFixed(1)} s`);
   line('12 password resets during the hang', JSON.stringify(b.resetStatuses));
-  line('due list p95, normal', `${b.dueP95NormalMs.toFixed(1)} ms`);
+  line(`due list p95, normal (${b.dueSamples[0]} requests)`, `${b.dueP95NormalMs.toFixed(1)} ms`);
   line(
-    'due list p95, during the hang',
+    `due list p95, during the hang (${b.dueSamples[1]} requests)`,
     `${b.dueP95HangMs.toFixed(1)} ms (${(b.dueP95HangMs / b.dueP95NormalMs).toFixed(2)}×)`,
   );
   line(

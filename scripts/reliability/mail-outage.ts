@@ -22,6 +22,8 @@ export interface MailFigures {
   hangAttemptSeconds: number;
   dueP95NormalMs: number;
   dueP95HangMs: number;
+  /** due-list requests timed: normal, during the hang */
+  dueSamples: [number, number];
   resetStatuses: Record<string, number>;
   crashResentSameMessageId: boolean;
 }
@@ -57,7 +59,7 @@ export async function mailOutage(options: {
 
   // The unrelated request, before any mail trouble.
   await dueTimings(session, orgId, 5, 10_000); // warm-up
-  const normal = await dueTimings(session, orgId, 40, 20_000);
+  const normal = await dueTimings(session, orgId, 100, 20_000);
 
   // Twenty messages waiting in the outbox.
   for (let i = 0; i < 20; i++)
@@ -95,7 +97,7 @@ export async function mailOutage(options: {
   const resetAnswers = await Promise.all(
     resets.map((email) => options.anonymous.request('POST', '/auth/password-reset', { email })),
   );
-  const during = await dueTimings(session, orgId, 40, HANG_WINDOW_MS - 1000);
+  const during = await dueTimings(session, orgId, 100, HANG_WINDOW_MS - 1000);
   await hanging;
   hang.close();
 
@@ -137,6 +139,7 @@ export async function mailOutage(options: {
     hangAttemptSeconds: hangRuns.length ? Math.max(...hangRuns.map((r) => r.ms)) / 1000 : 0,
     dueP95NormalMs: percentile(normal, 95),
     dueP95HangMs: percentile(during, 95),
+    dueSamples: [normal.length, during.length],
     resetStatuses: resetAnswers.reduce<Record<string, number>>((c, a) => {
       c[a.status] = (c[a.status] ?? 0) + 1;
       return c;

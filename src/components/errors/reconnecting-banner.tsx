@@ -16,7 +16,8 @@ export function ReconnectingBanner() {
   return (
     <div
       role="status"
-      className="fixed inset-x-0 bottom-0 z-50 flex items-center justify-center gap-2 border-t-2 border-straw-400 bg-straw-50 px-4 py-2 text-straw-900"
+      // Top centre: the phone's navigation bar sits at the bottom and stays usable.
+      className="fixed left-1/2 top-2 z-50 flex max-w-[calc(100vw-1rem)] -translate-x-1/2 items-center gap-2 rounded-full border-2 border-straw-400 bg-straw-50 px-4 py-2 text-straw-900 shadow-card print:hidden"
     >
       <Spinner />
       <span>Hourstone&rsquo;s server isn&rsquo;t answering right now. Trying again&hellip;</span>
