@@ -194,6 +194,8 @@ async function main() {
     const env = {
       ...baseEnv,
       NODE_ENV: 'test',
+      // route() checks every JSON body against its response schema (server/routes/response-check.ts)
+      VALIDATE_RESPONSES: '1',
       JWT_SECRET: 'test-secret',
       APP_URL: `http://127.0.0.1:${TEST_API_PORT}`,
       DATABASE_URL: postgres.databaseUrl,

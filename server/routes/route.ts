@@ -6,10 +6,26 @@ import { requireAuth } from '../middlewares/auth';
 import { resolveOrgAccess } from '../middlewares/org-access';
 import { AppError } from '../errors';
 import { fieldErrors } from '../middlewares/validate';
+import {
+  assertResponse,
+  isRawResponse,
+  validatingResponses,
+  type RawResponse,
+} from './response-check';
+
+export { rawResponse } from './response-check';
 
 type Method = 'get' | 'post' | 'patch' | 'put' | 'delete';
 
-interface RouteSpec<P extends ZodType, Q extends ZodType, B extends ZodType> {
+/** What a handler may return: the input of its response schema (or nothing: a 204). */
+type HandlerResult<R> = R extends ZodType ? z.input<R> | undefined | void : undefined | void;
+
+interface RouteSpec<
+  P extends ZodType,
+  Q extends ZodType,
+  B extends ZodType,
+  R extends ZodType | RawResponse | undefined,
+> {
   method: Method;
   /** Express path under /api/v1, e.g. '/organizations/:orgId/machines/:machineId' */
   path: string;
@@ -20,8 +36,12 @@ interface RouteSpec<P extends ZodType, Q extends ZodType, B extends ZodType> {
   params?: P;
   query?: Q;
   body?: B;
-  /** zod schema of the success body, for the OpenAPI document */
-  response?: ZodType;
+  /**
+   * zod schema of the success body (from shared/schemas): types the handler's result, documents
+   * it, and under tests every JSON body is checked against it. `rawResponse(mediaType)` for a body
+   * the handler writes itself (file, CSV, zip); only 204 routes may leave it out.
+   */
+  response?: R;
   status?: 200 | 201 | 202 | 204;
   /** extra middlewares run after access checks and before validation (rate limits, uploads) */
   before?: RequestHandler[];
@@ -33,7 +53,7 @@ interface RouteSpec<P extends ZodType, Q extends ZodType, B extends ZodType> {
     params: z.infer<P>;
     query: z.infer<Q>;
     body: z.infer<B>;
-  }) => Promise<unknown> | unknown;
+  }) => Promise<HandlerResult<R>> | HandlerResult<R>;
 }
 
 const errorBody = z
@@ -59,23 +79,29 @@ function parseOr400<T extends ZodType>(schema: T | undefined, value: unknown, wh
   return result.data;
 }
 
+/** The OpenAPI content of the success body: JSON by its schema, or a raw body's media type. */
+function successContent(response: ZodType | RawResponse | undefined) {
+  if (isRawResponse(response)) {
+    return { [response.raw]: { schema: z.string().openapi({ format: 'binary' }) } };
+  }
+  return { 'application/json': { schema: response ?? z.object({ data: z.unknown() }) } };
+}
+
 /** Declares one API route: Express handler, access checks, zod validation and its OpenAPI entry. */
 export function route<
   P extends ZodType = ZodType,
   Q extends ZodType = ZodType,
   B extends ZodType = ZodType,
->(router: Router, spec: RouteSpec<P, Q, B>): void {
+  R extends ZodType | RawResponse | undefined = undefined,
+>(router: Router, spec: RouteSpec<P, Q, B, R>): void {
   const access = spec.access ?? 'org';
   const status = spec.status ?? 200;
   const openApiPath = spec.path.replace(/:(\w+)/g, '{$1}');
+  const routeName = `${spec.method.toUpperCase()} ${spec.path}`;
   const responses: RouteConfig['responses'] = {
     [status]: {
-      description: 'Success',
-      ...(status !== 204 && {
-        content: {
-          'application/json': { schema: spec.response ?? z.object({ data: z.unknown() }) },
-        },
-      }),
+      description: (isRawResponse(spec.response) && spec.response.description) || 'Success',
+      ...(status !== 204 && { content: successContent(spec.response) }),
     },
     400: { description: 'Invalid input', content: { 'application/json': { schema: errorBody } } },
   };
@@ -118,10 +144,27 @@ export function route<
     const params = parseOr400(spec.params, req.params, 'path') as z.infer<P>;
     const query = parseOr400(spec.query, req.query, 'query') as z.infer<Q>;
     const body = parseOr400(spec.body, req.body, 'body') as z.infer<B>;
-    const result = await spec.handler({ req, res, params, query, body });
+    const validating = validatingResponses();
+    const json = res.json;
+    // A handler that writes JSON itself (res.json, res.send of an object) is checked too.
+    if (validating) {
+      res.json = (sent: unknown) => {
+        if (res.statusCode < 300) assertResponse(routeName, spec.response, sent);
+        return json.call(res, sent);
+      };
+    }
+    let result: unknown;
+    try {
+      result = await spec.handler({ req, res, params, query, body });
+    } finally {
+      res.json = json;
+    }
     if (res.headersSent) return;
     if (status === 204 || result === undefined) res.status(204).end();
-    else res.status(status).json(result);
+    else {
+      if (validating) assertResponse(routeName, spec.response, result);
+      res.status(status).json(result);
+    }
   });
   router[spec.method](spec.path, ...chain);
 }
