@@ -8,3 +8,5 @@ export * from './usage-season';
 export * from './due-point';
 export * from './reading-rules';
 export * from './cost';
+export * from './money';
+export * from './record-costs';
