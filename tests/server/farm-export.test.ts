@@ -32,10 +32,12 @@ const app = createApp();
 const exportUrl = (orgId: string) => `/api/v1/organizations/${orgId}/export`;
 
 /** Collects the body as bytes (supertest parses only text and JSON by itself). */
-const binary = (res: NodeJS.ReadableStream, done: (err: Error | null, body: Buffer) => void) => {
+const binary = (res: unknown, done: (err: Error | null, body: Buffer) => void) => {
+  // superagent hands the parser the response stream itself (typed as its Response object)
+  const stream = res as NodeJS.ReadableStream;
   const chunks: Buffer[] = [];
-  res.on('data', (chunk: Buffer) => chunks.push(chunk));
-  res.on('end', () => done(null, Buffer.concat(chunks)));
+  stream.on('data', (chunk: Buffer) => chunks.push(chunk));
+  stream.on('end', () => done(null, Buffer.concat(chunks)));
 };
 
 const csvRows = (files: Record<string, Uint8Array>, name: string) =>
@@ -62,7 +64,7 @@ async function farmWithRecords(name: string, fleetNumber: string) {
     meterLifetime: 150,
     readingId: null,
     labourHours: 1.5,
-    parts: [{ partNumber: 'OF-1', description: 'Oil filter', quantity: 1, unitCost: 12.5 }],
+    parts: [{ partNumber: 'OF-1', description: 'Oil filter', quantity: 1, unitCostMinor: 1250 }],
     notes: '=SUM(A1:A9) is how the invoice adds up',
     createdBy: manager.id,
     completedBy: manager.id,
@@ -206,7 +208,7 @@ describe('farm data export — GET /organizations/:orgId/export', () => {
     expect(part).toMatchObject({
       part_number: 'OF-1',
       quantity: '1',
-      unit_cost: '12.5',
+      unit_cost_minor: '1250',
       line: '1',
     });
     const [measurement] = csvRows(files, 'service-measurements.csv');

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { route } from '../route';
+import { rawResponse, route } from '../route';
 import { authorize } from '../../policies/access';
 import { canExportFarmData } from '../../policies/farm-export';
 import { recordAudit } from '../../services/audit';
@@ -28,7 +28,7 @@ export function exportRouter(): Router {
       "All of the farm's data as one zip of CSV files (machines, readings, tasks, service records with parts and measurements, walkarounds, defects), organization.json, the stored files and a README.txt of the columns. Managers only.",
     tags: ['organizations'],
     params,
-    response: z.string().openapi({ format: 'binary', description: 'application/zip' }),
+    response: rawResponse('application/zip', 'the farm’s data (an attachment)'),
     handler: async ({ req, res }) => {
       const access = req.access!;
       authorize(canExportFarmData(access), "Only the farm's manager may download its data");
