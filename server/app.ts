@@ -10,6 +10,8 @@ import { buildOpenApiDocument } from './openapi';
 import { errorHandler, notFoundHandler } from './middlewares/error-handler';
 import { jsonBodiesOnly, refuseCrossSiteWrites } from './middlewares/request-guard';
 import { authRouter } from './routes/auth/auth.router';
+import { accountRouter } from './routes/account/account.router';
+import { organizationsRouter } from './routes/organizations/organizations.router';
 import { membersRouter } from './routes/members/members.router';
 import { devRouter } from './routes/dev/dev.router';
 import { machinesRouter } from './routes/machines/machines.router';
@@ -73,6 +75,8 @@ export function createApp(options: { serveClient?: boolean } = {}) {
     res.json(buildOpenApiDocument());
   });
   api.use(authRouter());
+  api.use(accountRouter());
+  api.use(organizationsRouter());
   api.use(membersRouter());
   api.use(machinesRouter());
   api.use(machinePhotoRouter());

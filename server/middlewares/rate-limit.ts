@@ -6,7 +6,7 @@ import { reserveAttempt, throttleKey, waitInWords } from '../services/sign-in-th
 
 // Counters live in PostgreSQL (an UNLOGGED table) so every API copy behind a load balancer
 // shares them; the in-memory default would let each copy allow its own quota.
-class PostgresStore implements Store {
+export class PostgresStore implements Store {
   windowMs = 60_000;
   constructor(public prefix: string) {}
   init(options: Options): void {

@@ -7,7 +7,7 @@ const isManagerOf = (access: OrgAccess) =>
   access.organization.kind === 'farm' ? hasRole(access, 'manager') : hasRole(access, 'advisor');
 
 /** Roles that exist in this kind of organization. */
-export const rolesFor = (access: OrgAccess): readonly Role[] =>
+export const rolesFor = (access: Pick<OrgAccess, 'organization'>): readonly Role[] =>
   access.organization.kind === 'farm' ? FARM_ROLES : DEALER_ROLES;
 
 export const canListMembers = (_access: OrgAccess) => true;

@@ -33,8 +33,11 @@ export async function loadMemberships(userId: string) {
   });
 }
 
+/** Who invites: a member (their access), or the server's operator (`org:create`, no user). */
+export type Inviter = Pick<OrgAccess, 'organization'> & { userId: string | null };
+
 /** Creates an invitation and e-mails its single-use link. */
-export async function inviteMember(access: OrgAccess, input: InvitationCreateInput) {
+export async function inviteMember(access: Inviter, input: InvitationCreateInput) {
   if (!rolesFor(access).includes(input.role)) {
     throw invalid({
       role: `Role must be one of: ${rolesFor(access).join(', ')} in this organization`,

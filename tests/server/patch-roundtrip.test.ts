@@ -166,6 +166,26 @@ const ROUTES: Record<string, PatchRoute> = {
     url: (w) => farm(w, `/dealers/${w.ids.linkId}`),
     cases: [{ field: 'access', value: v('view') }],
   },
+  '/organizations/{orgId}': {
+    table: 'organizations',
+    id: (w) => w.farmId,
+    url: (w) => farm(w, ''),
+    cases: [
+      { field: 'name', value: v('Ridgeback Farm North') },
+      { field: 'timeZone', value: v('Europe/Dublin') },
+      { field: 'currency', value: v('EUR') },
+      { field: 'units', value: v('imperial') },
+      { field: 'labourRateMinor', value: v(6200) },
+      { field: 'seasonMonths', value: v([4, 5, 6]) },
+      { field: 'digestHour', value: v(8) },
+    ],
+  },
+  '/account': {
+    table: 'users',
+    id: (w) => w.ids.managerUserId,
+    url: () => '/api/v1/account',
+    cases: [{ field: 'name', value: v('Ridgeback Manager') }],
+  },
 };
 
 /** Every column of one stored row, as JSON text (dates as ISO, numerics as PostgreSQL prints them). */
