@@ -41,6 +41,17 @@ export function s3Client(store: StoreSettings): S3Client {
   });
 }
 
+/** A clearer message when the store does not answer at all (the local fake runs with npm start). */
+export function explainStoreError(error: unknown, store: StoreSettings): Error {
+  const code = (error as { code?: string; cause?: { code?: string } }).code;
+  if (code === 'ECONNREFUSED' || (error as Error).message?.includes('ECONNREFUSED'))
+    return new Error(
+      `the object store at ${store.endpoint} does not answer: start it (npm start runs the ` +
+        'local one) or set S3_ENDPOINT and the other S3_* settings',
+    );
+  return error as Error;
+}
+
 export interface Fingerprint {
   /** rows per table of the public schema */
   tables: Record<string, number>;
@@ -84,7 +95,11 @@ export async function fingerprintWith(client: pg.Client): Promise<Fingerprint> {
 /** Runs `work` with a client connected to the database, and closes it after. */
 export async function withClient<T>(databaseUrl: string, work: (client: pg.Client) => Promise<T>) {
   const client = new pg.Client({ connectionString: databaseUrl });
-  await client.connect();
+  await client.connect().catch((error: Error) => {
+    throw new Error(
+      `could not connect to the database ${describeDatabase(databaseUrl)}: ${error.message}`,
+    );
+  });
   try {
     return await work(client);
   } finally {

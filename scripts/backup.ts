@@ -18,6 +18,7 @@ import {
   MANIFEST_FILE,
   OBJECTS_DIR,
   describeDatabase,
+  explainStoreError,
   fingerprintWith,
   libpqEnv,
   pgProgram,
@@ -123,7 +124,9 @@ export async function makeBackup(options: {
     await client.query('COMMIT');
     return result;
   });
-  const objects = await copyObjects(options.store, dir);
+  const objects = await copyObjects(options.store, dir).catch((error: unknown) => {
+    throw explainStoreError(error, options.store);
+  });
   const manifest: Manifest = {
     format: 'hourstone-backup-1',
     createdAt: now.toISOString(),

@@ -17,6 +17,7 @@ import {
   DUMP_FILE,
   MANIFEST_FILE,
   describeDatabase,
+  explainStoreError,
   fingerprint,
   libpqEnv,
   pgProgram,
@@ -113,7 +114,9 @@ export async function restoreBackup(options: {
   const s3 = s3Client(options.store);
   try {
     await assertDatabaseEmpty(options.databaseUrl);
-    await assertStoreEmpty(s3, options.store);
+    await assertStoreEmpty(s3, options.store).catch((error: unknown) => {
+      throw error instanceof RestoreRefused ? error : explainStoreError(error, options.store);
+    });
     await runPg(
       pgProgram('pg_restore'),
       [
