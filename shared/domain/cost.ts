@@ -113,7 +113,11 @@ export function repairFactorKindForCategory(category: string): RepairFactorKind 
   return byCategory[category] ?? null;
 }
 
-/** Remaining-value coefficients (dimensionless) of tractors by power class, CHECKS.md §2. */
+/**
+ * Remaining-value coefficients (dimensionless) of tractors by power class, CHECKS.md §2: from
+ * memory, not verified against the ASABE document; 150 hp+ at 15 years and 400 h/yr agrees with
+ * the 23 % that Ag Decision Maker A3-29 prints.
+ */
 export const REMAINING_VALUE_COEFFICIENTS = {
   tractor_under_80hp: { label: 'Tractor, under 80 hp', c1: 0.981, c2: 0.093, c3: 0.0058 },
   tractor_80_149hp: { label: 'Tractor, 80–149 hp', c1: 0.942, c2: 0.1, c3: 0.0008 },

@@ -66,22 +66,51 @@ describe('cost — ASABE D497 repair and maintenance model', () => {
     expect(accumulatedRepairCost(150_000, 0.007, 2, 0)).toBe(0);
   });
 
-  it('cost — every repair-factor row names its provenance', () => {
-    for (const f of Object.values(REPAIR_FACTORS)) expect(f.provenance.length).toBeGreaterThan(10);
+  it('cost — every repair-factor row names its provenance as CHECKS.md §1 gives it', () => {
+    // Tractors: factors derived from PM 710 Table 3, life and total-life % from memory; plow,
+    // disk, chisel: factors derived from the table, life from memory; the rest from memory.
+    const table = 'derived from Iowa State University Extension PM 710, Table 3';
+    const provenance = Object.fromEntries(
+      Object.entries(REPAIR_FACTORS).map(([kind, f]) => [kind, f.provenance]),
+    );
+    expect(provenance).toEqual({
+      tractor_2wd: `factors: ${table} (accumulated repair costs); life and total-life %: from memory`,
+      tractor_4wd: `factors: ${table} (accumulated repair costs); life and total-life %: from memory`,
+      moldboard_plow: `factors: ${table}; life: from memory`,
+      tandem_disk: `factors: ${table}; life: from memory`,
+      chisel_plow: `factors: ${table}; life: from memory`,
+      combine_self_propelled:
+        'ASABE D497 form; factors, life and total-life %: from memory, not verified',
+      round_baler_large:
+        'ASABE D497 form; factors, life and total-life %: from memory, not verified',
+      mower_conditioner_rotary:
+        'ASABE D497 form; factors, life and total-life %: from memory, not verified',
+      row_crop_planter:
+        'ASABE D497 form; factors, life and total-life %: from memory, not verified',
+    });
   });
 });
 
-describe('cost — remaining value (ASABE D497 form, CHECKS.md §2)', () => {
-  it('remaining value — 150 hp+, 15 years, 400 h/yr — 0.2276 (ISU A3-29 prints 23 %, published)', () => {
+// The remaining-value coefficients C1–C3 are from memory (CHECKS.md §2: not verified against the
+// ASABE document); the fractions below are derived from them, and one is checked against a
+// published figure.
+describe('cost — remaining value (ASABE D497 form; coefficients from memory, CHECKS.md §2)', () => {
+  it('remaining value — 150 hp+, 15 years, 400 h/yr — 0.2276 (derived; ISU A3-29 prints 23 %, published)', () => {
+    // (0.976 − 0.119 × √15 − 0.0019 × √400)² = (0.976 − 0.46089 − 0.038)² = 0.47711² = 0.2276.
     const c = REMAINING_VALUE_COEFFICIENTS.tractor_150hp_plus;
+    expect(c).toEqual({ label: 'Tractor, 150 hp and over', c1: 0.976, c2: 0.119, c3: 0.0019 });
     const fraction = remainingValueFraction(c.c1, c.c2, c.c3, 15, 400);
     expect(fraction).toBeCloseTo(0.2276, 4);
     expect(roundHalfUp(fraction * 100)).toBe(23);
   });
 
-  it('remaining value — 80–149 hp 15 y 400 h → 0.2902; under 80 hp 1 y 200 h → 0.6496 (derived)', () => {
+  it('remaining value — 80–149 hp 15 y 400 h → 0.2902; under 80 hp 1 y 200 h → 0.6496 (derived from coefficients from memory)', () => {
+    // (0.942 − 0.1 × √15 − 0.0008 × √400)² = (0.942 − 0.38730 − 0.016)² = 0.53870² = 0.2902;
+    // (0.981 − 0.093 × √1 − 0.0058 × √200)² = (0.981 − 0.093 − 0.08202)² = 0.80598² = 0.6496.
     const mid = REMAINING_VALUE_COEFFICIENTS.tractor_80_149hp;
     const small = REMAINING_VALUE_COEFFICIENTS.tractor_under_80hp;
+    expect([mid.c1, mid.c2, mid.c3]).toEqual([0.942, 0.1, 0.0008]);
+    expect([small.c1, small.c2, small.c3]).toEqual([0.981, 0.093, 0.0058]);
     expect(remainingValueFraction(mid.c1, mid.c2, mid.c3, 15, 400)).toBeCloseTo(0.2902, 4);
     expect(remainingValueFraction(small.c1, small.c2, small.c3, 1, 200)).toBeCloseTo(0.6496, 4);
   });

@@ -97,7 +97,10 @@ describe('reading rules', () => {
     expect(result?.message).toContain('with no time elapsed');
   });
 
-  it('reading rules — km meter uses its own default maximum (1,500 km/day)', () => {
+  // Daily maxima: 24 h a day for an hour meter is a hard limit (a day has 24 hours); 1,500 km,
+  // 2,000 bales, 300 ha and 750 acres a day are common practice (generous ceilings for one
+  // machine in one day, no published source).
+  it('reading rules — km meter uses its own default maximum (1,500 km/day, common practice)', () => {
     const prev = { value: 200_000, takenAtMs: at('2024-03-11T08:00') };
     const day = prev.takenAtMs + 24 * hour;
     const km = { ...opts, meterUnit: 'km' };
