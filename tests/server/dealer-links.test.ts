@@ -36,7 +36,8 @@ describe('dealer links — a dealer asks, the farm manager accepts', () => {
     expect(mail.subject).toBe('Tern Dealer asks to see your machines on Hourstone');
     expect(mail.text).toContain('We service your tractors.');
     const token = firstLink(mail.text).split('/dealer-invitations/')[1];
-    expect(token.length).toBeGreaterThan(20);
+    // 32 random bytes in base64url: ⌈32 × 8 / 6⌉ = 43 characters, no padding (derived)
+    expect(token).toMatch(/^[A-Za-z0-9_-]{43}$/);
     // not shared until accepted
     expect((await w.advisorAgent.get(api(w.farm.org.id, '/machines'))).status).toBe(404);
 

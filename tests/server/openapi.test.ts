@@ -29,8 +29,9 @@ describe('OpenAPI document', () => {
     const undocumented = answered.filter(
       (r) => !documented.has(r) && !/\/(health|openapi\.json)$/.test(r),
     );
-    expect(answered.length).toBeGreaterThan(10);
     expect(undocumented).toEqual([]);
+    // …and every documented operation is a route the API answers (so the walk found them all).
+    expect([...documented].filter((d) => !answered.includes(d))).toEqual([]);
   });
 });
 

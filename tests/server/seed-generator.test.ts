@@ -206,6 +206,7 @@ describe('demo seed — schedule templates', () => {
   it('demo templates — tractor — PTO check carries the PTO caution; oil is in gallons on an imperial farm', () => {
     const tractor = buildTemplates('imperial').find((t) => t.category === 'tractor')!;
     const pto = tractor.tasks.find((t) => t.name === 'PTO clutch and brake check')!;
+    // Demo intervals are common practice (CHECKS.md §7: no published source gives universal hours).
     expect(pto.intervalMeter).toBe(1000);
     expect(pto.hazards).toEqual(['pto', 'stored_energy']);
     expect(pto.safetyNotes).toMatch(/540 rpm shaft turns 9 times a second/);
