@@ -19,6 +19,7 @@ import { machinePhotoRouter } from './routes/machines/photo.router';
 import { fleetImportRouter } from './routes/machines/fleet-import.router';
 import { tasksRouter } from './routes/tasks/tasks.router';
 import { taskHistoryRouter } from './routes/tasks/history.router';
+import { firstRunRouter } from './routes/onboarding/first-run.router';
 import { machineStatusRouter } from './routes/machines/status.router';
 import { readingsRouter } from './routes/readings/readings.router';
 import { dueRouter } from './routes/due/due.router';
@@ -83,6 +84,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(fleetImportRouter());
   api.use(tasksRouter());
   api.use(taskHistoryRouter());
+  api.use(firstRunRouter());
   api.use(readingsRouter());
   api.use(dueRouter());
   api.use(servicesRouter());

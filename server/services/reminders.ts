@@ -9,6 +9,7 @@ import { env } from '../env';
 import { invalid, notFound } from '../errors';
 import { Machine, Membership, NotificationPreference, Organization } from '../models';
 import type { OrgAccess } from '../policies/access';
+import { recordAudit } from './audit';
 import type { Role } from '../../shared/constants';
 import { dayNumberFromIso, todayIso } from '../../shared/domain';
 import type {
@@ -74,11 +75,30 @@ export async function digestHourOf(organizationId: string): Promise<number> {
   return row?.digest_hour ?? 6;
 }
 
-export async function setDigestHour(organizationId: string, digestHour: number): Promise<void> {
-  await sequelize.query(
-    'UPDATE organizations SET digest_hour = :digestHour, updated_at = now() WHERE id = :organizationId',
-    { replacements: { organizationId, digestHour } },
-  );
+/** Sets the farm's digest hour; a person's choice (actorUserId given) is audited with it. */
+export async function setDigestHour(
+  organizationId: string,
+  digestHour: number,
+  actorUserId?: string,
+): Promise<void> {
+  await sequelize.transaction(async (transaction) => {
+    await sequelize.query(
+      'UPDATE organizations SET digest_hour = :digestHour, updated_at = now() WHERE id = :organizationId',
+      { replacements: { organizationId, digestHour }, transaction },
+    );
+    if (actorUserId === undefined) return;
+    await recordAudit(
+      {
+        organizationId,
+        actorUserId,
+        action: 'organization.digest_hour',
+        entityType: 'organization',
+        entityId: organizationId,
+        changes: { digestHour },
+      },
+      transaction,
+    );
+  });
 }
 
 // ---- preferences ------------------------------------------------------------------------------

@@ -1,6 +1,6 @@
 import { Router, type Request } from 'express';
 import { z } from 'zod';
-import { route } from '../route';
+import { rawResponse, route } from '../route';
 import {
   fleetImportPreviewSchema,
   fleetImportResultSchema,
@@ -66,7 +66,7 @@ export function fleetImportRouter(): Router {
     summary: "An example fleet file (invented machines) in this farm's date and number format",
     tags: ['machines'],
     params: orgParams,
-    response: z.string().openapi({ description: 'text/csv; an attachment' }),
+    response: rawResponse('text/csv', 'an example fleet file (an attachment)'),
     handler: async ({ req, res }) => {
       const access = manager(req);
       res.setHeader('Content-Type', 'text/csv; charset=utf-8');

@@ -110,7 +110,7 @@ export function preferencesRouter(): Router {
     handler: async ({ req, body }) => {
       const access = req.access!;
       authorize(canSetDigestHour(access), 'Only a manager may change the digest hour');
-      await setDigestHour(access.organization.id, body.digestHour);
+      await setDigestHour(access.organization.id, body.digestHour, access.userId);
       return { data: { digestHour: body.digestHour, timeZone: access.organization.timeZone } };
     },
   });

@@ -5,6 +5,7 @@ import { PageHeader } from '../../components/ui/page-header';
 import { dueQueryOptions } from '../../features/due/api/get-due';
 import type { DueFilters } from '../../features/due/api/types';
 import { DueBoard } from '../../features/due/components/due-board';
+import { FirstRunChecklistPanel } from '../../features/onboarding/components/first-run-checklist';
 import { readDueFilters, writeDueFilters } from '../../features/due/filters';
 import { findMembership, meQueryOptions, useCurrentMembership } from '../../lib/auth';
 import { paths } from '../paths';
@@ -53,6 +54,19 @@ export function DashboardPage() {
             ) : null}
           </>
         }
+      />
+      <FirstRunChecklistPanel
+        orgId={organization.id}
+        enabled={organization.kind === 'farm' && membership.role === 'manager'}
+        links={{
+          importFleet: paths.organization.importFleet.href(organization.id),
+          addMachine: paths.organization.machineNew.href(organization.id),
+          fleet: paths.organization.machines.href(organization.id),
+          machine: (machineId) => paths.organization.machine.href(organization.id, machineId),
+          team: paths.organization.team.href(organization.id),
+          dealers: paths.organization.farmDealers.href(organization.id),
+          reminders: paths.organization.reminders.href(organization.id),
+        }}
       />
       {organization.kind === 'dealer' ? (
         <Section

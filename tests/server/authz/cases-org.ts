@@ -108,6 +108,14 @@ export const ORG_CASES: Record<string, Case> = {
     ids: 'none',
     build: (c) => ({ params: onFarm(c), body: { digestHour: 7 } }),
   },
+  'GET /organizations/{orgId}/first-run-checklist': {
+    ids: 'none',
+    build: (c) => ({ params: onFarm(c) }),
+  },
+  'PUT /organizations/{orgId}/first-run-checklist/dismissal': {
+    ids: 'none',
+    build: (c) => ({ params: onFarm(c), body: { dismissed: true } }),
+  },
   'GET /unsubscribe/{token}': {
     ids: 'none',
     build: (c) => ({ params: { token: unsubscribeToken(c.w.farm.memberId) } }),

@@ -163,6 +163,9 @@ export const EXPECTED: Record<string, Row> = {
   'GET /organizations/{orgId}/notification-preferences': farmOnly,
   'PUT /organizations/{orgId}/notification-preferences': farmOnly,
   'PATCH /organizations/{orgId}/reminder-settings': managers,
+  // the first-run checklist of a new farm's dashboard
+  'GET /organizations/{orgId}/first-run-checklist': managers,
+  'PUT /organizations/{orgId}/first-run-checklist/dismissal': managers,
   'GET /unsubscribe/{token}': everyone(),
   'POST /unsubscribe/{token}': everyone(),
   'GET /calendar/{token}.ics': everyone(),
