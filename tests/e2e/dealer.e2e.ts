@@ -11,13 +11,28 @@ import {
 
 // The demo's dealer service advisor (SCENARIO.md: Quillon Equipment & Service, linked to Larkspur
 // Flats with service access and Osier Creek with view access) in the browser. This file only adds
-// a booking proposal: the other browser tests rely on the rest of the demo data as loaded.
+// a booking proposal: the other browser tests rely on the rest of the demo data as loaded. Each
+// test starts from the dashboard, so none needs another to have run first.
 const DESKTOP = { width: 1280, height: 800 };
 
 async function boardTable(page: Page) {
   const table = page.getByRole('table', { name: 'Services coming due across customers' });
   await table.waitFor();
   return table;
+}
+
+/** The board, filtered to one customer once its answer is on screen. */
+async function boardOf(page: Page, customer: string) {
+  await page.goto('/');
+  await page.getByRole('link', { name: 'Open the board' }).click();
+  await page.getByRole('heading', { name: 'Coming due', level: 1 }).waitFor();
+  await page.getByLabel('Customer').selectOption({ label: customer });
+  await page.waitForURL((url) => url.searchParams.has('customer'));
+  // the previous page stays on screen (marked busy) until the filtered answer arrives
+  await page.waitForFunction((name) => {
+    const cells = [...document.querySelectorAll('tbody tr td:nth-child(3)')];
+    return cells.length > 0 && cells.every((c) => c.textContent?.startsWith(name));
+  }, customer);
 }
 
 async function customerColumn(page: Page) {
@@ -38,6 +53,7 @@ describe('dealer board — the demo service advisor in the browser', () => {
   });
 
   it('board — the dashboard shows machines coming due at Larkspur Flats and Osier Creek', async () => {
+    await page.goto('/');
     await page.getByRole('heading', { name: 'Coming due' }).waitFor();
     const customers = await customerColumn(page);
     expect(customers).toContain('Larkspur Flats Farm');
@@ -51,15 +67,7 @@ describe('dealer board — the demo service advisor in the browser', () => {
   });
 
   it('board — filters by customer, and the CSV download carries the same filter', async () => {
-    await page.getByRole('link', { name: 'Open the board' }).click();
-    await page.getByRole('heading', { name: 'Coming due', level: 1 }).waitFor();
-    await page.getByLabel('Customer').selectOption({ label: 'Osier Creek Dairy' });
-    await page.waitForURL((url) => url.searchParams.has('customer'));
-    // the previous page stays on screen (marked busy) until the filtered answer arrives
-    await page.waitForFunction(() => {
-      const cells = [...document.querySelectorAll('tbody tr td:nth-child(3)')];
-      return cells.length > 0 && cells.every((c) => c.textContent?.startsWith('Osier Creek Dairy'));
-    });
+    await boardOf(page, 'Osier Creek Dairy');
     const customers = (await customerColumn(page)).split('\n').filter(Boolean);
     expect(customers.some((c) => c.startsWith('Larkspur'))).toBe(false);
 
@@ -77,13 +85,15 @@ describe('dealer board — the demo service advisor in the browser', () => {
   });
 
   it('booking — proposes a date for a selected service; Bookings shows it waiting for the farm', async () => {
+    // a customer whose link is `service`: proposing a date is service work
+    await boardOf(page, 'Larkspur Flats Farm');
     const table = await boardTable(page);
     const first = table.getByRole('checkbox').first();
     const label = (await first.getAttribute('aria-label'))!;
     const fleetNumber = label.replace(/^Select /, '').split(' ')[0];
     await first.check();
     await page.getByRole('button', { name: 'Propose booking' }).click();
-    const dialog = page.getByRole('dialog', { name: 'Propose a booking to Osier Creek Dairy' });
+    const dialog = page.getByRole('dialog', { name: 'Propose a booking to Larkspur Flats Farm' });
     await dialog.waitFor();
     const date = dialog.getByLabel('Proposed date');
     const min = (await date.getAttribute('min'))!;
@@ -107,7 +117,7 @@ describe('dealer board — the demo service advisor in the browser', () => {
     await card.waitFor();
     expect(await card.innerText()).toContain(fleetNumber);
     expect(await card.innerText()).toContain('Awaiting the farm');
-    expect(await card.innerText()).toContain('Osier Creek Dairy');
+    expect(await card.innerText()).toContain('Larkspur Flats Farm');
   });
 
   it('board — works on a phone: cards with the customer, and the reminder dialog opens prefilled', async () => {

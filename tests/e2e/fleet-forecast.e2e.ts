@@ -44,6 +44,7 @@ describe('fleet and forecast — the manager in the browser', () => {
   });
 
   it('dashboard — shows what is overdue and due soon across the Larkspur fleet', async () => {
+    await page.goto('/');
     await page.getByRole('heading', { name: 'Dashboard' }).waitFor();
     const overdue = page.getByRole('button', { name: /^Overdue: \d+/ });
     await overdue.waitFor();
@@ -141,19 +142,24 @@ describe('fleet and forecast — the manager in the browser', () => {
   });
 
   it('phone — the operator logs hours on a 360 px screen', async () => {
-    const phone = await browser.newPage(PHONE_VIEWPORT);
-    await signIn(phone, 'lena@larkspur.example', 'hourstone-demo');
-    await phone
-      .getByRole('navigation', { name: 'Main' })
-      .getByRole('link', { name: 'Log hours' })
-      .click();
-    await phone.getByRole('heading', { name: 'Log hours' }).waitFor();
-    const inputs = phone.getByRole('textbox', { name: / reading$/ });
-    expect(await inputs.count()).toBeGreaterThan(0);
-    const box = await inputs.first().boundingBox();
-    expect(box!.height).toBeGreaterThanOrEqual(40); // big touch target
-    expect(box!.x + box!.width).toBeLessThanOrEqual(PHONE_VIEWPORT.width);
-    await screenshot(phone, 'forecast-log-hours-phone');
-    await phone.close();
+    // a browser of its own: signing lena in must not sign the manager out of the other tests' page
+    const phoneBrowser = await launchBrowser();
+    try {
+      const phone = await phoneBrowser.newPage(PHONE_VIEWPORT);
+      await signIn(phone, 'lena@larkspur.example', 'hourstone-demo');
+      await phone
+        .getByRole('navigation', { name: 'Main' })
+        .getByRole('link', { name: 'Log hours' })
+        .click();
+      await phone.getByRole('heading', { name: 'Log hours' }).waitFor();
+      const inputs = phone.getByRole('textbox', { name: / reading$/ });
+      expect(await inputs.count()).toBeGreaterThan(0);
+      const box = await inputs.first().boundingBox();
+      expect(box!.height).toBeGreaterThanOrEqual(40); // big touch target
+      expect(box!.x + box!.width).toBeLessThanOrEqual(PHONE_VIEWPORT.width);
+      await screenshot(phone, 'forecast-log-hours-phone');
+    } finally {
+      await phoneBrowser.close();
+    }
   });
 });

@@ -259,34 +259,39 @@ describe('daily walkaround on a phone (browser)', () => {
 
   it('defects and label — the shop sees the critical defect and the tag-out; the manager prints the QR label', async () => {
     const { machine, critical } = tagged;
-    const shop = await browser.newPage({ width: 1280, height: 800 });
-    await signIn(shop, 'dev@larkspur.example', PASSWORD);
-    await shop.goto(`/o/${orgId}/defects?machineId=${machine.id}`);
-    await shop.getByRole('heading', { name: 'Defects', exact: true }).waitFor();
-    const defect = shop.getByRole('article', {
-      name: new RegExp(`^${escapeRegex(critical.label)}:`),
-    });
-    await defect.waitFor();
-    expect(await defect.innerText()).toContain('Critical — do not use');
-    expect(await defect.getByRole('img', { name: /^Photo of / }).count()).toBe(1);
-    expect(
-      await shop.getByRole('region', { name: 'Tagged out — do not use' }).innerText(),
-    ).toContain(machine.fleetNumber);
-    await screenshot(shop, 'walkaround-defects-desktop');
+    // a browser of its own: signing the shop in must not sign lena out of the other tests' page
+    const shopBrowser = await launchBrowser();
+    try {
+      const shop = await shopBrowser.newPage({ width: 1280, height: 800 });
+      await signIn(shop, 'dev@larkspur.example', PASSWORD);
+      await shop.goto(`/o/${orgId}/defects?machineId=${machine.id}`);
+      await shop.getByRole('heading', { name: 'Defects', exact: true }).waitFor();
+      const defect = shop.getByRole('article', {
+        name: new RegExp(`^${escapeRegex(critical.label)}:`),
+      });
+      await defect.waitFor();
+      expect(await defect.innerText()).toContain('Critical — do not use');
+      expect(await defect.getByRole('img', { name: /^Photo of / }).count()).toBe(1);
+      expect(
+        await shop.getByRole('region', { name: 'Tagged out — do not use' }).innerText(),
+      ).toContain(machine.fleetNumber);
+      await screenshot(shop, 'walkaround-defects-desktop');
 
-    await signIn(shop, 'marta@larkspur.example', PASSWORD);
-    await shop.goto(`/o/${orgId}/machines/${machine.id}/label`);
-    await shop.getByRole('heading', { name: `QR label · ${machine.fleetNumber}` }).waitFor();
-    const label = shop.getByRole('img', { name: /^Walkaround QR code for / });
-    await label.waitFor();
-    await expect
-      .poll(() => label.evaluate((img: HTMLImageElement) => img.naturalWidth))
-      .toBeGreaterThan(0);
-    expect(await shop.getByRole('button', { name: 'Print' }).count()).toBe(1);
-    expect(await shop.getByRole('link', { name: 'Download SVG' }).getAttribute('href')).toContain(
-      'label.svg?download=1',
-    );
-    await screenshot(shop, 'walkaround-label-desktop');
-    await shop.close();
+      await signIn(shop, 'marta@larkspur.example', PASSWORD);
+      await shop.goto(`/o/${orgId}/machines/${machine.id}/label`);
+      await shop.getByRole('heading', { name: `QR label · ${machine.fleetNumber}` }).waitFor();
+      const label = shop.getByRole('img', { name: /^Walkaround QR code for / });
+      await label.waitFor();
+      await expect
+        .poll(() => label.evaluate((img: HTMLImageElement) => img.naturalWidth))
+        .toBeGreaterThan(0);
+      expect(await shop.getByRole('button', { name: 'Print' }).count()).toBe(1);
+      expect(await shop.getByRole('link', { name: 'Download SVG' }).getAttribute('href')).toContain(
+        'label.svg?download=1',
+      );
+      await screenshot(shop, 'walkaround-label-desktop');
+    } finally {
+      await shopBrowser.close();
+    }
   });
 });
