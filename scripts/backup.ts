@@ -12,7 +12,7 @@ import path from 'node:path';
 import { pipeline } from 'node:stream/promises';
 import type { Readable } from 'node:stream';
 import { fileURLToPath, pathToFileURL } from 'node:url';
-import { GetObjectCommand, ListObjectsV2Command } from '@aws-sdk/client-s3';
+import { GetObjectCommand, ListObjectsCommand } from '@aws-sdk/client-s3';
 import {
   DUMP_FILE,
   MANIFEST_FILE,
@@ -56,33 +56,37 @@ export function objectFile(key: string): string {
   return path.posix.join(OBJECTS_DIR, key);
 }
 
-/** Copies every object of the store into `dir`/objects, returning the manifest's list. */
+/**
+ * Copies every object of the store into `dir`/objects, returning the manifest's list. ListObjects
+ * (v1, paged by the last key): the local fake store cannot page ListObjectsV2 on Node 20.
+ */
 async function copyObjects(store: StoreSettings, dir: string) {
   const s3 = s3Client(store);
   const objects: Manifest['objects'] = [];
-  let token: string | undefined;
-  do {
-    const page = await s3.send(
-      new ListObjectsV2Command({ Bucket: store.bucket, ContinuationToken: token }),
-    );
-    for (const item of page.Contents ?? []) {
-      if (!item.Key) continue;
-      const file = objectFile(item.Key);
-      const target = path.join(dir, file);
-      await mkdir(path.dirname(target), { recursive: true });
-      const got = await s3.send(new GetObjectCommand({ Bucket: store.bucket, Key: item.Key }));
-      await pipeline(got.Body as Readable, createWriteStream(target));
-      objects.push({
-        key: item.Key,
-        file,
-        bytes: got.ContentLength ?? item.Size ?? 0,
-        contentType: got.ContentType ?? 'application/octet-stream',
-      });
+  let marker: string | undefined;
+  try {
+    for (;;) {
+      const page = await s3.send(new ListObjectsCommand({ Bucket: store.bucket, Marker: marker }));
+      const keys = (page.Contents ?? []).flatMap((item) => (item.Key ? [item.Key] : []));
+      for (const key of keys) {
+        const file = objectFile(key);
+        const target = path.join(dir, file);
+        await mkdir(path.dirname(target), { recursive: true });
+        const got = await s3.send(new GetObjectCommand({ Bucket: store.bucket, Key: key }));
+        await pipeline(got.Body as Readable, createWriteStream(target));
+        objects.push({
+          key,
+          file,
+          bytes: got.ContentLength ?? 0,
+          contentType: got.ContentType ?? 'application/octet-stream',
+        });
+      }
+      if (!page.IsTruncated || !keys.length) return objects;
+      marker = page.NextMarker ?? keys[keys.length - 1];
     }
-    token = page.IsTruncated ? page.NextContinuationToken : undefined;
-  } while (token);
-  s3.destroy();
-  return objects;
+  } finally {
+    s3.destroy();
+  }
 }
 
 /** The folder name of a backup made at `now`: 2026-04-07T13-00-00Z. */

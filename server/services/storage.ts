@@ -2,7 +2,7 @@ import type { Readable } from 'node:stream';
 import {
   DeleteObjectCommand,
   GetObjectCommand,
-  ListObjectsV2Command,
+  ListObjectsCommand,
   PutObjectCommand,
   S3Client,
 } from '@aws-sdk/client-s3';
@@ -49,14 +49,20 @@ export function isMissingObject(error: unknown): boolean {
   return e?.name === 'NoSuchKey' || e?.$metadata?.httpStatusCode === 404;
 }
 
-/** Every key in the bucket under `prefix` (all of them by default), page by page. */
+/**
+ * Every key in the bucket under `prefix` (all of them by default), page by page. ListObjects
+ * (v1, paged by the last key) because the local fake store cannot page ListObjectsV2 on Node 20
+ * (its continuation token needs a cipher OpenSSL 3 no longer offers).
+ */
 export async function* listObjectKeys(prefix = ''): AsyncGenerator<string> {
-  let token: string | undefined;
-  do {
+  let marker: string | undefined;
+  for (;;) {
     const page = await s3().send(
-      new ListObjectsV2Command({ Bucket: env.S3_BUCKET, Prefix: prefix, ContinuationToken: token }),
+      new ListObjectsCommand({ Bucket: env.S3_BUCKET, Prefix: prefix, Marker: marker }),
     );
-    for (const item of page.Contents ?? []) if (item.Key) yield item.Key;
-    token = page.IsTruncated ? page.NextContinuationToken : undefined;
-  } while (token);
+    const keys = (page.Contents ?? []).flatMap((item) => (item.Key ? [item.Key] : []));
+    yield* keys;
+    if (!page.IsTruncated || !keys.length) return;
+    marker = page.NextMarker ?? keys[keys.length - 1];
+  }
 }
