@@ -27,6 +27,7 @@ type ItemId =
   | 'parts'
   | 'customers'
   | 'bookings'
+  | 'settings'
   | 'account';
 
 // Every item of the main navigation once. The server still checks every request; this only
@@ -55,6 +56,7 @@ const ITEMS: Record<ItemId, NavItem> = {
   parts: { label: 'Parts forecast', to: org.partsForecast.href, icon: 'plus' },
   bookings: { label: 'Bookings', to: org.bookings.href, icon: 'clock' },
   customers: { label: 'Customers', to: org.customers.href, icon: 'team' },
+  settings: { label: 'Settings', to: org.settings.href, icon: 'info' },
   account: { label: 'Account', to: org.account.href, icon: 'person' },
 };
 
@@ -84,9 +86,10 @@ const ORDER: Record<Role, readonly ItemId[]> = {
     'messages',
     'checklists',
     'walkaround',
+    'settings',
     'account',
   ],
-  advisor: ['dashboard', 'parts', 'bookings', 'customers', 'account'],
+  advisor: ['dashboard', 'parts', 'bookings', 'customers', 'settings', 'account'],
 };
 
 /** role → the items that role sees, in order */

@@ -10,6 +10,10 @@ export const paths = {
     href: (next?: string | null) => (next ? `/sign-in?next=${q(next)}` : '/sign-in'),
   },
   forgotPassword: { path: '/forgot-password', href: () => '/forgot-password' },
+  signUp: { path: '/sign-up', href: () => '/sign-up' },
+  verifyEmail: { path: '/verify-email', href: () => '/verify-email' },
+  confirmEmail: { path: '/confirm-email', href: () => '/confirm-email' },
+  organizationNew: { path: '/organizations/new', href: () => '/organizations/new' },
   resetPassword: {
     path: '/reset-password',
     href: (token?: string) => (token ? `/reset-password?token=${q(token)}` : '/reset-password'),
@@ -23,6 +27,10 @@ export const paths = {
     dashboard: { path: '/o/:orgId', href: (orgId: string) => `/o/${q(orgId)}` },
     team: { path: '/o/:orgId/team', href: (orgId: string) => `/o/${q(orgId)}/team` },
     account: { path: '/o/:orgId/account', href: (orgId: string) => `/o/${q(orgId)}/account` },
+    settings: {
+      path: '/o/:orgId/settings',
+      href: (orgId: string) => `/o/${q(orgId)}/settings`,
+    },
     reminders: {
       path: '/o/:orgId/reminders',
       href: (orgId: string) => `/o/${q(orgId)}/reminders`,

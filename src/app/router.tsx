@@ -14,6 +14,14 @@ import { OrganizationLayout, organizationLoader } from './routes/organization-la
 import { ResetPasswordPage } from './routes/reset-password';
 import { AppLoading, RootLayout } from './routes/root';
 import { SignInPage, signInLoader } from './routes/sign-in';
+import { SignUpPage, signUpLoader } from './routes/sign-up';
+import { VerifyEmailPage } from './routes/verify-email';
+import { ConfirmEmailPage } from './routes/confirm-email';
+import { OrganizationNewPage, organizationNewLoader } from './routes/organization-new';
+import {
+  OrganizationSettingsPage,
+  organizationSettingsLoader,
+} from './routes/organization-settings';
 import { TeamPage, teamLoader } from './routes/team';
 import {
   NotificationSettingsPage,
@@ -53,6 +61,14 @@ export function createAppRouter(queryClient: QueryClient) {
         { index: true, loader: homeLoader(queryClient), element: <HomePage /> },
         { path: paths.signIn.path, loader: signInLoader(queryClient), element: <SignInPage /> },
         { path: paths.forgotPassword.path, element: <ForgotPasswordPage /> },
+        { path: paths.signUp.path, loader: signUpLoader(queryClient), element: <SignUpPage /> },
+        { path: paths.verifyEmail.path, element: <VerifyEmailPage /> },
+        { path: paths.confirmEmail.path, element: <ConfirmEmailPage /> },
+        {
+          path: paths.organizationNew.path,
+          loader: organizationNewLoader(queryClient),
+          element: <OrganizationNewPage />,
+        },
         { path: paths.resetPassword.path, element: <ResetPasswordPage /> },
         {
           path: paths.invitation.path,
@@ -165,6 +181,11 @@ export function createAppRouter(queryClient: QueryClient) {
                   element: <TeamPage />,
                 },
                 { path: paths.organization.account.path, element: <AccountPage /> },
+                {
+                  path: paths.organization.settings.path,
+                  loader: organizationSettingsLoader(queryClient),
+                  element: <OrganizationSettingsPage />,
+                },
                 {
                   path: paths.organization.reminders.path,
                   loader: notificationSettingsLoader(queryClient),

@@ -26,6 +26,7 @@ const MANAGER_NAV = [
   'Messages',
   'Checklists',
   'Walkaround',
+  'Settings',
   'Account',
 ] as const;
 
@@ -67,7 +68,7 @@ const ROLES = [
     who: 'ravi@quillon.example',
     role: 'advisor',
     org: 'Quillon Equipment & Service',
-    nav: ['Dashboard', 'Parts forecast', 'Bookings', 'Customers', 'Account'],
+    nav: ['Dashboard', 'Parts forecast', 'Bookings', 'Customers', 'Settings', 'Account'],
   },
 ] as const;
 

@@ -1,9 +1,10 @@
-import { useNavigate } from 'react-router-dom';
-import { Button } from '../../components/ui/button';
+import { Link, useNavigate } from 'react-router-dom';
+import { Button, buttonClasses } from '../../components/ui/button';
 import { Card, Section } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
 import { ChangePasswordForm } from '../../features/auth/components/change-password-form';
 import { AccountDetails } from '../../features/settings/components/account-details';
+import { AccountSettings } from '../../features/settings/components/account-settings';
 import { useCurrentMembership, useSignOut } from '../../lib/auth';
 import { paths } from '../paths';
 
@@ -18,12 +19,22 @@ export function AccountPage() {
       <Card>
         <AccountDetails me={me} />
       </Card>
-      <div className="mt-6">
-        <Section title="Change password">
-          <Card>
-            <ChangePasswordForm />
-          </Card>
-        </Section>
+      <div className="mt-3">
+        <Link to={paths.organizationNew.href()} className={buttonClasses('secondary')}>
+          Set up another farm or dealer
+        </Link>
+      </div>
+      <div className="mt-8">
+        <AccountSettings
+          teamHref={paths.organization.team.href}
+          onDeleted={() => navigate(paths.signIn.href(), { replace: true })}
+        >
+          <Section title="Change password">
+            <Card>
+              <ChangePasswordForm />
+            </Card>
+          </Section>
+        </AccountSettings>
       </div>
       <div className="mt-6">
         <Button

@@ -1,7 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { redirect, useNavigate, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, redirect, useNavigate, type LoaderFunctionArgs } from 'react-router-dom';
 import { FullPageMessage } from '../../components/errors/full-page-message';
-import { Button } from '../../components/ui/button';
+import { Button, buttonClasses } from '../../components/ui/button';
 import { homeOrganizationId, useMe, useSignOut } from '../../lib/auth';
 import { requireMe } from '../guards';
 import { homeHref, paths } from '../paths';
@@ -26,23 +26,29 @@ export function HomePage() {
       icon="team"
       title="You're not in an organization yet"
       actions={
-        <Button
-          variant="secondary"
-          icon="signOut"
-          pending={signOut.isPending}
-          onClick={() =>
-            signOut.mutate(undefined, {
-              onSettled: () => navigate(paths.signIn.href(), { replace: true }),
-            })
-          }
-        >
-          Sign out
-        </Button>
+        <>
+          <Link to={paths.organizationNew.href()} className={buttonClasses('primary')}>
+            Set up a farm or dealer
+          </Link>
+          <Button
+            variant="secondary"
+            icon="signOut"
+            pending={signOut.isPending}
+            onClick={() =>
+              signOut.mutate(undefined, {
+                onSettled: () => navigate(paths.signIn.href(), { replace: true }),
+              })
+            }
+          >
+            Sign out
+          </Button>
+        </>
       }
     >
       <p>
-        You're signed in{me ? ` as ${me.user.email}` : ''}, but no farm or dealer has added you. Ask
-        a manager to send you an invitation; the link in it brings you straight in.
+        You're signed in{me ? ` as ${me.user.email}` : ''}, but no farm or dealer has added you. Set
+        up your own, or ask a manager to send you an invitation; the link in it brings you straight
+        in.
       </p>
     </FullPageMessage>
   );

@@ -21,6 +21,9 @@ import { requireMe } from '../guards';
 import { navigationByRole } from '../navigation';
 import { paths } from '../paths';
 
+// The switcher's last choice opens the form for another organization.
+const NEW_ORGANIZATION = 'new';
+
 /** Every /o/:orgId page: signed in, and a member of that organization (else 404, not 403). */
 export const organizationLoader =
   (queryClient: QueryClient) =>
@@ -58,11 +61,20 @@ export function OrganizationLayout() {
         headerEnd={
           <OrganizationSwitcher
             value={orgId}
-            options={me.memberships.map((m) => ({
-              value: m.organization.id,
-              label: membershipLabel(m),
-            }))}
-            onChange={(nextId) => navigate(paths.organization.dashboard.href(nextId))}
+            options={[
+              ...me.memberships.map((m) => ({
+                value: m.organization.id,
+                label: membershipLabel(m),
+              })),
+              { value: NEW_ORGANIZATION, label: 'New farm or dealer…' },
+            ]}
+            onChange={(nextId) =>
+              navigate(
+                nextId === NEW_ORGANIZATION
+                  ? paths.organizationNew.href()
+                  : paths.organization.dashboard.href(nextId),
+              )
+            }
           />
         }
       >

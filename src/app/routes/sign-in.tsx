@@ -2,6 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { AuthLayout } from '../../components/layouts/auth-layout';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
+import { SignUpLink } from '../../features/auth/components/sign-up-link';
 import { homeOrganizationId, type Me } from '../../lib/auth';
 import { optionalMe } from '../guards';
 import { homeHref, paths, safeNextPath } from '../paths';
@@ -31,6 +32,7 @@ export function SignInPage() {
           ? 'Sign in to continue where you were.'
           : 'Service intervals, hour meters and the team, in one place.'
       }
+      footer={<SignUpLink href={paths.signUp.href()} />}
     >
       <SignInForm
         forgotPasswordHref={paths.forgotPassword.href()}

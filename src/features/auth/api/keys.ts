@@ -3,4 +3,5 @@ export const authKeys = {
   all: ['auth'] as const,
   invitations: () => [...authKeys.all, 'invitation'] as const,
   invitation: (token: string) => [...authKeys.invitations(), token] as const,
+  signUpStatus: () => [...authKeys.all, 'sign-up-status'] as const,
 };

@@ -11,3 +11,14 @@ export const invitationKeys = {
   lists: () => [...invitationKeys.all, 'list'] as const,
   list: (orgId: string) => [...invitationKeys.lists(), orgId] as const,
 };
+
+export const organizationKeys = {
+  all: ['organizations'] as const,
+  details: () => [...organizationKeys.all, 'detail'] as const,
+  detail: (orgId: string) => [...organizationKeys.details(), orgId] as const,
+};
+
+export const accountKeys = {
+  all: ['account'] as const,
+  detail: () => [...accountKeys.all, 'detail'] as const,
+};

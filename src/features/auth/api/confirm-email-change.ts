@@ -1,0 +1,20 @@
+import { useMutation, useQueryClient } from '@tanstack/react-query';
+import type { EmailTokenInput } from '../../../../shared/schemas/account';
+import { apiClient, type DataEnvelope } from '../../../lib/api-client';
+import { sessionKeys } from '../../../lib/auth';
+
+/** Opens an address change's link: the account uses the new address from now on. */
+export const confirmEmailChange = (input: EmailTokenInput) =>
+  apiClient
+    .post<DataEnvelope<{ email: string }>>('/account/email/confirm', input)
+    .then((b) => b.data);
+
+export function useConfirmEmailChange() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: confirmEmailChange,
+    meta: { allowUnauthorized: true },
+    // whoever is signed in here may be the one whose address changed
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: sessionKeys.me() }),
+  });
+}

@@ -1,0 +1,49 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type {
+  Account,
+  AccountUpdateInput,
+  EmailChangeInput,
+} from '../../../../shared/schemas/account';
+import { apiClient, type DataEnvelope } from '../../../lib/api-client';
+import { clearSession, sessionKeys } from '../../../lib/auth';
+import { accountKeys } from './keys';
+
+export const getAccount = (signal?: AbortSignal) =>
+  apiClient.get<DataEnvelope<Account>>('/account', { signal }).then((b) => b.data);
+
+export const accountQueryOptions = () =>
+  queryOptions({ queryKey: accountKeys.detail(), queryFn: ({ signal }) => getAccount(signal) });
+
+export const useAccount = () => useQuery(accountQueryOptions());
+
+export function useUpdateAccount() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: AccountUpdateInput) =>
+      apiClient.patch<DataEnvelope<Account>>('/account', input).then((b) => b.data),
+    onSuccess: async (account) => {
+      queryClient.setQueryData(accountKeys.detail(), account);
+      await queryClient.invalidateQueries({ queryKey: sessionKeys.me() });
+    },
+  });
+}
+
+/** Sends the confirmation link to the new address; the account keeps its address until then. */
+export function useRequestEmailChange() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (input: EmailChangeInput) =>
+      apiClient.post<DataEnvelope<Account>>('/account/email', input).then((b) => b.data),
+    onSuccess: (account) => queryClient.setQueryData(accountKeys.detail(), account),
+  });
+}
+
+export function useDeleteAccount() {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (currentPassword: string) =>
+      apiClient.delete('/account', { body: { currentPassword } }),
+    // the account and its session are gone: nothing cached belongs to anyone now
+    onSuccess: () => clearSession(queryClient),
+  });
+}
