@@ -1,37 +1,21 @@
-import { z } from 'zod';
 import type { Membership, Organization, User } from '../models';
-import { ORGANIZATION_KINDS, ROLES, UNIT_SYSTEMS } from '../../shared/constants';
+import type { Me, OrganizationSummary } from '../../shared/schemas/auth';
 
-export const organizationSummarySchema = z
-  .object({
-    id: z.string(),
-    name: z.string(),
-    kind: z.enum(ORGANIZATION_KINDS),
-    timeZone: z.string(),
-    units: z.enum(UNIT_SYSTEMS),
-  })
-  .openapi('OrganizationSummary');
+// The route files of sign-up and account settings still take the schema from here.
+export { meSchema } from '../../shared/schemas/auth';
 
-export const meSchema = z
-  .object({
-    user: z.object({ id: z.string(), email: z.string(), name: z.string() }),
-    memberships: z.array(
-      z.object({ id: z.string(), role: z.enum(ROLES), organization: organizationSummarySchema }),
-    ),
-  })
-  .openapi('Me');
-
-export const presentOrganization = (o: Organization) => ({
+export const presentOrganization = (o: Organization): OrganizationSummary => ({
   id: o.id,
   name: o.name,
   kind: o.kind,
   timeZone: o.timeZone,
   units: o.units,
+  currency: o.currency,
 });
 
-export const presentUser = (u: User) => ({ id: u.id, email: u.email, name: u.name });
+export const presentUser = (u: User): Me['user'] => ({ id: u.id, email: u.email, name: u.name });
 
-export function presentMe(user: User, memberships: Membership[]) {
+export function presentMe(user: User, memberships: Membership[]): Me {
   return {
     user: presentUser(user),
     memberships: memberships

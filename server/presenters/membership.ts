@@ -1,17 +1,7 @@
-import { z } from 'zod';
 import type { Invitation, Membership } from '../models';
-import { ROLES } from '../../shared/constants';
+import type { Member, PendingInvitation } from '../../shared/schemas/members';
 
-export const memberSchema = z
-  .object({
-    id: z.string(),
-    role: z.enum(ROLES),
-    user: z.object({ id: z.string(), name: z.string(), email: z.string() }),
-    abilities: z.object({ update: z.boolean(), remove: z.boolean() }),
-  })
-  .openapi('Member');
-
-export function presentMember(m: Membership, abilities: { update: boolean; remove: boolean }) {
+export function presentMember(m: Membership, abilities: Member['abilities']): Member {
   return {
     id: m.id,
     role: m.role,
@@ -20,18 +10,7 @@ export function presentMember(m: Membership, abilities: { update: boolean; remov
   };
 }
 
-export const invitationSchema = z
-  .object({
-    id: z.string(),
-    email: z.string(),
-    name: z.string(),
-    role: z.enum(ROLES),
-    expiresAt: z.string(),
-    createdAt: z.string(),
-  })
-  .openapi('Invitation');
-
-export const presentInvitation = (i: Invitation) => ({
+export const presentInvitation = (i: Invitation): PendingInvitation => ({
   id: i.id,
   email: i.email,
   name: i.name,

@@ -5,27 +5,13 @@ import { hasRole } from '../policies/access';
 import { addDaysIso, todayIso, type DuePoint } from '../../shared/domain';
 import { STALE_READING_DAYS } from '../../shared/constants';
 import type { DueQuery } from '../../shared/schemas/readings';
+import type { DueRow } from '../../shared/schemas/due';
+import type { Usage } from '../../shared/schemas/machines';
+import type { MachineRef } from '../../shared/schemas/refs';
 import { ensureDuePointsCurrent } from './forecast';
 import { localDaysSince, staleCutoff } from './stale-meters';
 
-export interface DueRow {
-  taskId: string;
-  taskName: string;
-  hazards: string[];
-  labourHours: number | null;
-  machine: {
-    id: string;
-    fleetNumber: string;
-    name: string;
-    category: string;
-    status: string;
-    meterUnit: string;
-  };
-  due: DuePoint;
-  lastReading: { value: number; lifetimeValue: number; takenAt: string } | null;
-  dueOnMeter: number | null;
-  usage: { method: string; rate: number; low: number; high: number } | null;
-}
+export type { DueRow } from '../../shared/schemas/due';
 
 const visibleToOperator = `(NOT EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = m.organization_id AND o.machine_id = m.id)
   OR EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = m.organization_id AND o.machine_id = m.id AND o.user_id = :user))`;
@@ -69,13 +55,13 @@ interface RawDueRow {
   machine_id: string;
   fleet_number: string;
   machine_name: string;
-  category: string;
-  machine_status: string;
-  meter_unit: string;
+  category: MachineRef['category'];
+  machine_status: MachineRef['status'];
+  meter_unit: MachineRef['meterUnit'];
   last_value: number | null;
   last_raw_value: number | null;
   last_taken_at: Date | null;
-  usage: { method: string; rate: number; low: number; high: number } | null;
+  usage: Pick<Usage, 'method' | 'rate' | 'low' | 'high'> | null;
 }
 
 /** The due list of an organization: overdue first, then by the date each task falls due. */

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { ROLES } from '../constants';
+import { ORGANIZATION_KINDS, ROLES, UNIT_SYSTEMS } from '../constants';
 import { email, password, personName, plainText } from './common';
 
 export const signInSchema = z.object({
@@ -40,3 +40,49 @@ export type PasswordChangeInput = z.infer<typeof passwordChangeSchema>;
 /** Only the role; an unknown field is refused by name. */
 export const membershipUpdateSchema = z.object({ role: roleSchema }).strict();
 export type MembershipUpdateInput = z.infer<typeof membershipUpdateSchema>;
+
+// ── Responses ────────────────────────────────────────────────────────────────────────────────
+
+/** An organization as the session lists it (the switcher, the home page). */
+export const organizationSummarySchema = z
+  .object({
+    id: z.string(),
+    name: z.string(),
+    kind: z.enum(ORGANIZATION_KINDS),
+    timeZone: z.string(),
+    units: z.enum(UNIT_SYSTEMS),
+    /** ISO 4217: money amounts of this organization are integer minor units of it */
+    currency: z.string(),
+  })
+  .meta({ id: 'OrganizationSummary' });
+export type OrganizationSummary = z.infer<typeof organizationSummarySchema>;
+
+/** The signed-in person and the organizations they belong to, with their role in each. */
+export const meSchema = z
+  .object({
+    user: z.object({ id: z.string(), email: z.string(), name: z.string() }),
+    memberships: z.array(
+      z.object({ id: z.string(), role: z.enum(ROLES), organization: organizationSummarySchema }),
+    ),
+  })
+  .meta({ id: 'Me' });
+export type Me = z.infer<typeof meSchema>;
+
+/** GET /auth/me, sign-in, and every step that ends signed in. */
+export const meResponseSchema = z.object({ data: meSchema });
+export type MeResponse = z.infer<typeof meResponseSchema>;
+
+/** A request that sends an e-mail (answered alike whether or not the address has an account). */
+export const mailSentResponseSchema = z.object({ data: z.object({ sent: z.boolean() }) });
+export type MailSentResponse = z.infer<typeof mailSentResponseSchema>;
+
+/** GET an invitation by its token: whom it invites, to what, as what. */
+export const invitationLookupSchema = z.object({
+  email: z.string(),
+  name: z.string(),
+  role: z.enum(ROLES),
+  organization: z.object({ id: z.string(), name: z.string(), kind: z.enum(ORGANIZATION_KINDS) }),
+});
+export type InvitationLookup = z.infer<typeof invitationLookupSchema>;
+export const invitationLookupResponseSchema = z.object({ data: invitationLookupSchema });
+export type InvitationLookupResponse = z.infer<typeof invitationLookupResponseSchema>;

@@ -1,6 +1,7 @@
 import { z } from 'zod';
-import { MACHINE_CATEGORIES, MACHINE_STATUSES, METER_UNITS } from '../constants';
+import { DUE_STATUSES, MACHINE_CATEGORIES, MACHINE_STATUSES, METER_UNITS } from '../constants';
 import { boundedNumber, pagingFields, plainText, uuid } from './common';
+import { machineRefSchema, pageMetaSchema } from './refs';
 
 /** Ranges of a machine's numbers; prices fit numeric(12,2), years integer. */
 export const MACHINE_BOUNDS = {
@@ -69,3 +70,114 @@ export const machineListQuerySchema = z.object({
   ...pagingFields(50, 200),
 });
 export type MachineListQuery = z.infer<typeof machineListQuerySchema>;
+
+// ── Responses ────────────────────────────────────────────────────────────────────────────────
+
+/** The last reading: `value` as shown on the meter fitted now, `lifetimeValue` on the machine's lifetime scale. */
+export const lastReadingSchema = z
+  .object({
+    /** the value shown on the meter fitted now */
+    value: z.number(),
+    /** the same reading on the machine's lifetime scale (differs after a meter replacement) */
+    lifetimeValue: z.number(),
+    takenAt: z.string(),
+  })
+  .meta({ id: 'LastReading' });
+export type LastReading = z.infer<typeof lastReadingSchema>;
+
+/** The server's usage estimate: meter units per day, with a low/high range. */
+export const usageSchema = z
+  .object({
+    method: z.enum(['trend', 'season', 'none']),
+    rate: z.number(),
+    low: z.number(),
+    high: z.number(),
+    readingCount: z.number(),
+    explanation: z.string(),
+  })
+  .meta({ id: 'Usage' });
+export type Usage = z.infer<typeof usageSchema>;
+
+export const machineSchema = z
+  .object({
+    id: z.string(),
+    fleetNumber: z.string(),
+    name: z.string(),
+    category: z.enum(MACHINE_CATEGORIES),
+    make: z.string(),
+    model: z.string(),
+    serialNumber: z.string(),
+    year: z.number().nullable(),
+    purchasePrice: z.number().nullable(),
+    listPrice: z.number().nullable(),
+    meterUnit: z.enum(METER_UNITS),
+    status: z.enum(MACHINE_STATUSES),
+    seasonMonths: z.array(z.number()),
+    notes: z.string(),
+    operatorIds: z.array(z.string()),
+    lastReading: lastReadingSchema.nullable(),
+    dueStatus: z.enum(DUE_STATUSES).nullable(),
+    /** ISO local date (yyyy-mm-dd) */
+    nextDueDate: z.string().nullable(),
+    /** served by the API to people who may see the machine; null without a photo */
+    photoUrl: z.string().nullable(),
+    thumbnailUrl: z.string().nullable(),
+  })
+  .meta({ id: 'Machine' });
+export type Machine = z.infer<typeof machineSchema>;
+
+export const machineAbilitiesSchema = z
+  .object({
+    update: z.boolean(),
+    editSchedule: z.boolean(),
+    setLastDone: z.boolean(),
+    logReading: z.boolean(),
+    correctReading: z.boolean(),
+    replaceMeter: z.boolean(),
+    /** the machine is tagged out and the caller is one of the farm's technicians or managers */
+    returnToService: z.boolean(),
+  })
+  .meta({ id: 'MachineAbilities' });
+export type MachineAbilities = z.infer<typeof machineAbilitiesSchema>;
+
+/** Why and since when a machine is tagged out; a dealer is told neither why nor how many. */
+export const tagOutSchema = z
+  .object({
+    since: z.string().nullable(),
+    reason: z.string().nullable(),
+    openCriticalDefects: z.number().nullable(),
+  })
+  .meta({ id: 'TagOut' });
+export type TagOut = z.infer<typeof tagOutSchema>;
+
+/** GET machines: one page of the fleet. */
+export const machineListResponseSchema = z.object({
+  data: z.array(machineSchema),
+  meta: pageMetaSchema,
+  abilities: z.object({ create: z.boolean() }),
+});
+export type MachineList = z.infer<typeof machineListResponseSchema>;
+
+/** POST and PATCH of a machine: the machine as stored, with the caller's abilities on it. */
+export const machineResponseSchema = z.object({
+  data: machineSchema,
+  abilities: machineAbilitiesSchema,
+});
+export type MachineResponse = z.infer<typeof machineResponseSchema>;
+
+/** GET one machine: with its usage estimate and tag-out state. */
+export const machineDetailResponseSchema = z.object({
+  data: machineSchema.extend({ usage: usageSchema.nullable(), tagOut: tagOutSchema.nullable() }),
+  abilities: machineAbilitiesSchema,
+});
+export type MachineDetail = z.infer<typeof machineDetailResponseSchema>;
+
+/** Return to service: the machine with its new status. */
+export const machineRefResponseSchema = z.object({ data: machineRefSchema });
+export type MachineRefResponse = z.infer<typeof machineRefResponseSchema>;
+
+/** PUT photo: where the new photo and its thumbnail are served. */
+export const machinePhotoResponseSchema = z.object({
+  data: z.object({ photoUrl: z.string(), thumbnailUrl: z.string() }),
+});
+export type MachinePhotoResponse = z.infer<typeof machinePhotoResponseSchema>;

@@ -1,6 +1,8 @@
 import { z } from 'zod';
-import { MACHINE_CATEGORIES } from '../constants';
+import { MACHINE_CATEGORIES, READING_SOURCES } from '../constants';
 import { boundedNumber, isoDateTime, pagingFields, PAST_DATES, plainText, uuid } from './common';
+import { lastReadingSchema } from './machines';
+import { machineRefSchema } from './refs';
 
 /** Range of a meter value in any unit; fits numeric(14,2) with room for lifetime totals. */
 export const METER_BOUNDS = { min: 0, max: 10_000_000 } as const;
@@ -57,3 +59,109 @@ export const dueListQuerySchema = dueQuerySchema.extend({
   ...pagingFields(100, 500),
 });
 export type DueListQuery = z.infer<typeof dueListQuerySchema>;
+
+// ── Responses ────────────────────────────────────────────────────────────────────────────────
+
+export const readingSchema = z
+  .object({
+    id: z.string(),
+    /** as the meter showed it */
+    value: z.number(),
+    /** continuous across meter replacements; what the forecast and the chart use */
+    lifetimeValue: z.number(),
+    takenAt: z.string(),
+    source: z.enum(READING_SOURCES),
+    enteredBy: z.string().nullable(),
+  })
+  .meta({ id: 'MeterReading' });
+export type Reading = z.infer<typeof readingSchema>;
+
+export const meterReplacementRecordSchema = z
+  .object({
+    id: z.string(),
+    replacedAt: z.string(),
+    oldFinalValue: z.number(),
+    newStartValue: z.number(),
+    note: z.string(),
+  })
+  .meta({ id: 'MeterReplacement' });
+export type MeterReplacement = z.infer<typeof meterReplacementRecordSchema>;
+
+/** GET a machine's readings: newest first, with its meter replacements. */
+export const readingHistoryResponseSchema = z.object({
+  data: z.array(readingSchema),
+  replacements: z.array(meterReplacementRecordSchema),
+});
+export type ReadingHistory = z.infer<typeof readingHistoryResponseSchema>;
+
+/** What one logged reading became: stored, or an identical repeat that was ignored. */
+export const READING_OUTCOMES = ['added', 'duplicate'] as const;
+
+/** POST a reading: the stored reading, or null for an ignored repeat. */
+export const readingLoggedResponseSchema = z.object({
+  data: readingSchema.nullable(),
+  status: z.enum(READING_OUTCOMES),
+});
+export type ReadingLogged = z.infer<typeof readingLoggedResponseSchema>;
+
+/** PATCH a reading. */
+export const readingResponseSchema = z.object({ data: readingSchema });
+export type ReadingResponse = z.infer<typeof readingResponseSchema>;
+
+/** POST a meter replacement. */
+export const meterReplacementResponseSchema = z.object({ data: meterReplacementRecordSchema });
+export type MeterReplacementResponse = z.infer<typeof meterReplacementResponseSchema>;
+
+/** One machine the caller may log hours for, with its last reading (GET readings/latest). */
+export const latestReadingSchema = z.object({
+  machine: machineRefSchema,
+  lastReading: lastReadingSchema.nullable(),
+});
+export type LatestReading = z.infer<typeof latestReadingSchema>;
+export const latestReadingsResponseSchema = z.object({ data: z.array(latestReadingSchema) });
+export type LatestReadings = z.infer<typeof latestReadingsResponseSchema>;
+
+export const bulkReadingOutcomeSchema = z.object({
+  machineId: z.string(),
+  status: z.enum(READING_OUTCOMES),
+});
+export type BulkReadingOutcome = z.infer<typeof bulkReadingOutcomeSchema>;
+export const bulkReadingsResponseSchema = z.object({ data: z.array(bulkReadingOutcomeSchema) });
+export type BulkReadingsResponse = z.infer<typeof bulkReadingsResponseSchema>;
+
+/** One row of a CSV file of readings as the server read and checked it. */
+export const readingImportRowSchema = z.object({
+  /** the file line (the header is line 1) */
+  line: z.number(),
+  fleetNumber: z.string(),
+  machine: z
+    .object({ id: z.string(), name: z.string(), fleetNumber: z.string(), meterUnit: z.string() })
+    .nullable(),
+  takenAt: z.string().nullable(),
+  value: z.number().nullable(),
+  status: z.enum(['new', 'duplicate', 'error']),
+  error: z.string().nullable(),
+});
+export type ImportPreviewRow = z.infer<typeof readingImportRowSchema>;
+
+export const readingImportPreviewSchema = z.object({
+  rows: z.array(readingImportRowSchema),
+  summary: z.object({
+    total: z.number(),
+    new: z.number(),
+    duplicates: z.number(),
+    errors: z.number(),
+  }),
+});
+export type ImportPreview = z.infer<typeof readingImportPreviewSchema>;
+export const readingImportPreviewResponseSchema = z.object({ data: readingImportPreviewSchema });
+export type ImportPreviewResponse = z.infer<typeof readingImportPreviewResponseSchema>;
+
+export const readingImportResultSchema = z.object({
+  added: z.number(),
+  duplicates: z.number(),
+  total: z.number(),
+});
+export type ImportResult = z.infer<typeof readingImportResultSchema>;
+export const readingImportResultResponseSchema = z.object({ data: readingImportResultSchema });
+export type ImportResultResponse = z.infer<typeof readingImportResultResponseSchema>;

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { MACHINE_CATEGORIES } from '../constants';
 import { boundedNumber, isoDate, PAST_DATES, plainText } from './common';
+import { duePointSchema } from './due';
 
 /**
  * Ranges of a task's numbers (meter units, days, hours). They fit the columns (intervals and
@@ -115,3 +116,75 @@ export const lastDoneSchema = z.object({
   lastDoneOn: isoDate('Date', PAST_DATES),
 });
 export type LastDoneInput = z.infer<typeof lastDoneSchema>;
+
+// ── Responses ────────────────────────────────────────────────────────────────────────────────
+
+/** A task's fields as stored and sent (a template's tasks carry these too). */
+const storedTaskFields = {
+  name: z.string(),
+  intervalMeter: z.number().nullable(),
+  intervalDays: z.number().nullable(),
+  firstServiceMeter: z.number().nullable(),
+  warnMeter: z.number().nullable(),
+  warnDays: z.number().nullable(),
+  parts: z.array(
+    z.object({ partNumber: z.string(), description: z.string(), quantity: z.number() }),
+  ),
+  fluids: z.array(z.object({ kind: z.string(), volume: z.number(), unit: z.enum(FLUID_UNITS) })),
+  labourHours: z.number().nullable(),
+  instructions: z.string(),
+  safetyNotes: z.string(),
+  hazards: z.array(z.enum(HAZARDS)),
+};
+
+/** One line of a machine's schedule, with the due point the server computed for it. */
+export const taskSchema = z
+  .object({
+    id: z.string(),
+    machineId: z.string(),
+    ...storedTaskFields,
+    /** lifetime meter value */
+    lastDoneMeter: z.number().nullable(),
+    /** ISO local date (yyyy-mm-dd) */
+    lastDoneOn: z.string().nullable(),
+    /** "start counting from now" in place of an unknown last service: lifetime meter, ISO date */
+    countFromMeter: z.number().nullable(),
+    countFromOn: z.string().nullable(),
+    due: duePointSchema.nullable(),
+  })
+  .meta({ id: 'ServiceTask' });
+export type Task = z.infer<typeof taskSchema>;
+
+export const scheduleAbilitiesSchema = z.object({ edit: z.boolean(), setLastDone: z.boolean() });
+
+/** GET a machine's tasks. */
+export const taskListResponseSchema = z.object({
+  data: z.array(taskSchema),
+  abilities: scheduleAbilitiesSchema,
+});
+export type TaskList = z.infer<typeof taskListResponseSchema>;
+
+/** POST, PATCH, last done and count-from-now of one task. */
+export const taskResponseSchema = z.object({ data: taskSchema });
+export type TaskResponse = z.infer<typeof taskResponseSchema>;
+/** Tasks created or changed together (apply a template, add several, count a machine from now). */
+export const tasksResponseSchema = z.object({ data: z.array(taskSchema) });
+export type TasksResponse = z.infer<typeof tasksResponseSchema>;
+
+export const scheduleTemplateSchema = z
+  .object({
+    id: z.string(),
+    category: z.enum(MACHINE_CATEGORIES),
+    name: z.string(),
+    description: z.string(),
+    tasks: z.array(z.object(storedTaskFields)),
+  })
+  .meta({ id: 'ScheduleTemplate' });
+export type ScheduleTemplate = z.infer<typeof scheduleTemplateSchema>;
+
+export const scheduleTemplateListResponseSchema = z.object({
+  data: z.array(scheduleTemplateSchema),
+  abilities: z.object({ edit: z.boolean() }),
+});
+export type ScheduleTemplateList = z.infer<typeof scheduleTemplateListResponseSchema>;
+export const scheduleTemplateResponseSchema = z.object({ data: scheduleTemplateSchema });

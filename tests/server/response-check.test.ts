@@ -89,7 +89,13 @@ describe('route() under tests — response checks', () => {
 
   it('a JSON route without a response schema — 500 saying it declares none', async () => {
     const app = appWith((router) =>
-      route(router, { ...base, method: 'get', path: '/bare', handler: () => ({ data: 1 }) }),
+      route(router, {
+        ...base,
+        method: 'get',
+        path: '/bare',
+        // The type already refuses a result without a schema; the cast stands for code that slips by.
+        handler: () => ({ data: 1 }) as unknown as undefined,
+      }),
     );
     const res = await request(app).get('/bare');
     expect(res.status).toBe(500);

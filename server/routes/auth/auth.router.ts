@@ -6,9 +6,12 @@ import {
   passwordChangeSchema,
   passwordResetConfirmSchema,
   passwordResetRequestSchema,
+  invitationLookupResponseSchema,
+  mailSentResponseSchema,
+  meResponseSchema,
   signInSchema,
 } from '../../../shared/schemas/auth';
-import { meSchema, presentMe } from '../../presenters/me';
+import { presentMe } from '../../presenters/me';
 import { endSession, startSession } from '../../services/session';
 import {
   acceptInvitation,
@@ -24,9 +27,6 @@ import {
   signInAccountDelay,
   signInPerAddress,
 } from '../../middlewares/rate-limit';
-import { ROLES } from '../../../shared/constants';
-
-const meResponse = z.object({ data: meSchema });
 
 export function authRouter(): Router {
   const router = Router();
@@ -40,7 +40,7 @@ export function authRouter(): Router {
     access: 'public',
     before: [signInPerAddress, signInAccountDelay],
     body: signInSchema,
-    response: meResponse,
+    response: meResponseSchema,
     handler: async ({ req, res, body }) => {
       const user = await verifyCredentials(body.email, body.password);
       await startSession(req, res, user.id);
@@ -80,7 +80,7 @@ export function authRouter(): Router {
     summary: 'The signed-in user and their memberships',
     tags: ['auth'],
     access: 'user',
-    response: meResponse,
+    response: meResponseSchema,
     handler: ({ req }) => ({ data: presentMe(req.auth!.user, req.auth!.memberships) }),
   });
 
@@ -94,7 +94,7 @@ export function authRouter(): Router {
     before: [resetPerAddress, resetPerEmail],
     status: 202,
     body: passwordResetRequestSchema,
-    response: z.object({ data: z.object({ sent: z.boolean() }) }),
+    response: mailSentResponseSchema,
     handler: async ({ body }) => {
       await requestPasswordReset(body.email);
       return { data: { sent: true } };
@@ -108,7 +108,7 @@ export function authRouter(): Router {
     tags: ['auth'],
     access: 'public',
     body: passwordResetConfirmSchema,
-    response: meResponse,
+    response: meResponseSchema,
     handler: async ({ req, res, body }) => {
       const user = await confirmPasswordReset(body.token, body.password);
       await startSession(req, res, user.id);
@@ -125,14 +125,7 @@ export function authRouter(): Router {
     tags: ['auth'],
     access: 'public',
     params: tokenParams,
-    response: z.object({
-      data: z.object({
-        email: z.string(),
-        name: z.string(),
-        role: z.enum(ROLES),
-        organization: z.object({ id: z.string(), name: z.string(), kind: z.string() }),
-      }),
-    }),
+    response: invitationLookupResponseSchema,
     handler: async ({ params }) => {
       const inv = await findOpenInvitation(params.token);
       return {
@@ -158,7 +151,7 @@ export function authRouter(): Router {
     access: 'public',
     params: tokenParams,
     body: invitationAcceptSchema,
-    response: meResponse,
+    response: meResponseSchema,
     handler: async ({ req, res, params, body }) => {
       const user = await acceptInvitation(params.token, body.name, body.password);
       await startSession(req, res, user.id);

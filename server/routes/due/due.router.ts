@@ -2,35 +2,11 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
 import { dueListQuerySchema } from '../../../shared/schemas/readings';
-import { dueRowSchema } from '../../presenters/due';
+import { dueListResponseSchema } from '../../../shared/schemas/due';
 import { dueList } from '../../services/due-list';
 import { loadMachine } from '../../services/machines';
 
 const orgParams = z.object({ orgId: z.uuid() });
-
-const dueResponse = z.object({
-  data: z.array(dueRowSchema),
-  meta: z.object({
-    asOf: z.string(),
-    total: z.number(),
-    page: z.number(),
-    pageSize: z.number(),
-    counts: z.object({
-      overdue: z.number(),
-      due_soon: z.number(),
-      history_unknown: z.number(),
-      ok: z.number(),
-      no_forecast: z.number(),
-    }),
-    stale: z.array(
-      z.object({
-        machine: z.object({ id: z.string(), fleetNumber: z.string(), name: z.string() }),
-        lastReadingAt: z.string().nullable(),
-        daysSince: z.number().nullable(),
-      }),
-    ),
-  }),
-});
 
 export function dueRouter(): Router {
   const router = Router();
@@ -43,7 +19,7 @@ export function dueRouter(): Router {
     tags: ['due'],
     params: orgParams,
     query: dueListQuerySchema,
-    response: dueResponse,
+    response: dueListResponseSchema,
     handler: async ({ req, query }) => {
       const { asOf, rows, counts, stale, total } = await dueList(req.access!, query);
       return {
@@ -59,7 +35,7 @@ export function dueRouter(): Router {
     summary: "One machine's due points",
     tags: ['due'],
     params: orgParams.extend({ machineId: z.uuid() }),
-    response: dueResponse,
+    response: dueListResponseSchema,
     handler: async ({ req, params }) => {
       await loadMachine(req.access!, params.machineId);
       const { asOf, rows, counts, stale, total } = await dueList(req.access!, {

@@ -3,12 +3,15 @@ import { z } from 'zod';
 import { route } from '../route';
 import {
   machineCreateSchema,
+  machineDetailResponseSchema,
   machineListQuerySchema,
+  machineListResponseSchema,
+  machineResponseSchema,
   machineUpdateSchema,
 } from '../../../shared/schemas/machines';
 import { authorize } from '../../policies/access';
 import { canCreateMachine, canUpdateMachine, machineAbilities } from '../../policies/machine';
-import { machineSchema, presentMachine, presentUsage, usageSchema } from '../../presenters/machine';
+import { presentMachine, presentUsage } from '../../presenters/machine';
 import { createMachine, listMachines, loadMachine, updateMachine } from '../../services/machines';
 import { MachineForecast, TaskDuePoint } from '../../models';
 import { ensureDuePointsCurrent } from '../../services/forecast';
@@ -16,23 +19,6 @@ import { tagOutState } from '../../services/machine-status';
 
 const orgParams = z.object({ orgId: z.uuid() });
 export const machineParams = orgParams.extend({ machineId: z.uuid() });
-
-const abilitiesSchema = z.object({
-  update: z.boolean(),
-  editSchedule: z.boolean(),
-  setLastDone: z.boolean(),
-  logReading: z.boolean(),
-  correctReading: z.boolean(),
-  replaceMeter: z.boolean(),
-  returnToService: z.boolean(),
-});
-
-/** Why and since when the machine is tagged out (a dealer sees neither why nor how many defects). */
-const tagOutSchema = z.object({
-  since: z.string().nullable(),
-  reason: z.string().nullable(),
-  openCriticalDefects: z.number().nullable(),
-});
 
 export function machinesRouter(): Router {
   const router = Router();
@@ -44,11 +30,7 @@ export function machinesRouter(): Router {
     tags: ['machines'],
     params: orgParams,
     query: machineListQuerySchema,
-    response: z.object({
-      data: z.array(machineSchema),
-      meta: z.object({ total: z.number(), page: z.number(), pageSize: z.number() }),
-      abilities: z.object({ create: z.boolean() }),
-    }),
+    response: machineListResponseSchema,
     handler: async ({ req, query }) => {
       const access = req.access!;
       await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
@@ -69,7 +51,7 @@ export function machinesRouter(): Router {
     params: orgParams,
     body: machineCreateSchema,
     status: 201,
-    response: z.object({ data: machineSchema, abilities: abilitiesSchema }),
+    response: machineResponseSchema,
     handler: async ({ req, body }) => {
       const access = req.access!;
       authorize(canCreateMachine(access), 'Only a manager may add machines');
@@ -87,13 +69,7 @@ export function machinesRouter(): Router {
     summary: 'One machine with its usage estimate and abilities',
     tags: ['machines'],
     params: machineParams,
-    response: z.object({
-      data: machineSchema.extend({
-        usage: usageSchema.nullable(),
-        tagOut: tagOutSchema.nullable(),
-      }),
-      abilities: abilitiesSchema,
-    }),
+    response: machineDetailResponseSchema,
     handler: async ({ req, params }) => {
       const access = req.access!;
       await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
@@ -132,7 +108,7 @@ export function machinesRouter(): Router {
     tags: ['machines'],
     params: machineParams,
     body: machineUpdateSchema,
-    response: z.object({ data: machineSchema, abilities: abilitiesSchema }),
+    response: machineResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);

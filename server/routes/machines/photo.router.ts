@@ -1,7 +1,8 @@
 import { randomUUID } from 'node:crypto';
 import { Router } from 'express';
 import { z } from 'zod';
-import { route } from '../route';
+import { rawResponse, route } from '../route';
+import { machinePhotoResponseSchema } from '../../../shared/schemas/machines';
 import { authorize } from '../../policies/access';
 import { canUpdateMachine } from '../../policies/machine';
 import { loadMachine } from '../../services/machines';
@@ -26,7 +27,7 @@ export function machinePhotoRouter(): Router {
     params,
     before: [fileUpload('photo', IMAGE_MAX_BYTES, 'a photo')],
     multipartBody: z.object({ photo: z.string().openapi({ format: 'binary' }) }),
-    response: z.object({ data: z.object({ photoUrl: z.string(), thumbnailUrl: z.string() }) }),
+    response: machinePhotoResponseSchema,
     handler: async ({ req, params: p }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, p.machineId);
@@ -61,7 +62,7 @@ export function machinePhotoRouter(): Router {
     tags: ['machines'],
     params,
     query: z.object({ size: z.enum(['full', 'thumb']).default('full') }),
-    response: z.string().openapi({ format: 'binary' }),
+    response: rawResponse('image/webp', 'the photo or its thumbnail'),
     handler: async ({ req, res, params: p, query }) => {
       const { machine } = await loadMachine(req.access!, p.machineId);
       if (!machine.photoKey) throw notFound('Photo');

@@ -4,7 +4,8 @@ import { route } from '../route';
 import { returnToServiceSchema } from '../../../shared/schemas/defects';
 import { authorize } from '../../policies/access';
 import { canReturnToService } from '../../policies/machine';
-import { machineRefSchema, presentMachineRef } from '../../presenters/defect';
+import { presentMachineRef } from '../../presenters/defect';
+import { machineRefResponseSchema } from '../../../shared/schemas/machines';
 import { loadMachine } from '../../services/machines';
 import { returnToService } from '../../services/machine-status';
 
@@ -22,7 +23,7 @@ export function machineStatusRouter(): Router {
     tags: ['machines'],
     params: machineParams,
     body: returnToServiceSchema,
-    response: z.object({ data: machineRefSchema }),
+    response: machineRefResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine: loaded } = await loadMachine(access, params.machineId);

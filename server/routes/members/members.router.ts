@@ -12,12 +12,13 @@ import {
   canUpdateMember,
   rolesFor,
 } from '../../policies/membership';
+import { presentInvitation, presentMember } from '../../presenters/membership';
 import {
-  invitationSchema,
-  memberSchema,
-  presentInvitation,
-  presentMember,
-} from '../../presenters/membership';
+  invitationListResponseSchema,
+  invitationResponseSchema,
+  memberListResponseSchema,
+  memberResponseSchema,
+} from '../../../shared/schemas/members';
 import { inviteMember } from '../../services/accounts';
 import { recordAudit } from '../../services/audit';
 import { revokePersonalFeeds } from '../../services/calendar';
@@ -50,10 +51,7 @@ export function membersRouter(): Router {
     summary: 'Members of the organization with their roles',
     tags: ['members'],
     params: orgParams,
-    response: z.object({
-      data: z.array(memberSchema),
-      abilities: z.object({ invite: z.boolean() }),
-    }),
+    response: memberListResponseSchema,
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canListMembers(access));
@@ -76,7 +74,7 @@ export function membersRouter(): Router {
     tags: ['members'],
     params: memberParams,
     body: membershipUpdateSchema,
-    response: z.object({ data: memberSchema }),
+    response: memberResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const member = await findMember(access, params.id);
@@ -146,7 +144,7 @@ export function membersRouter(): Router {
     summary: 'Pending invitations',
     tags: ['members'],
     params: orgParams,
-    response: z.object({ data: z.array(invitationSchema) }),
+    response: invitationListResponseSchema,
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canInviteMembers(access));
@@ -166,7 +164,7 @@ export function membersRouter(): Router {
     params: orgParams,
     body: invitationCreateSchema,
     status: 201,
-    response: z.object({ data: invitationSchema }),
+    response: invitationResponseSchema,
     handler: async ({ req, body }) => {
       const access = req.access!;
       authorize(canInviteMembers(access), 'Only a manager may invite people');

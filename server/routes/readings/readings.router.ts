@@ -2,9 +2,17 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
 import {
+  bulkReadingsResponseSchema,
   bulkReadingsSchema,
+  latestReadingsResponseSchema,
+  meterReplacementResponseSchema,
   meterReplacementSchema,
   readingCreateSchema,
+  readingHistoryResponseSchema,
+  readingImportPreviewResponseSchema,
+  readingImportResultResponseSchema,
+  readingLoggedResponseSchema,
+  readingResponseSchema,
   readingUpdateSchema,
 } from '../../../shared/schemas/readings';
 import { authorize } from '../../policies/access';
@@ -14,14 +22,8 @@ import {
   canLogReading,
   canReplaceMeter,
 } from '../../policies/machine';
-import {
-  lastReadingSchema,
-  presentLastReading,
-  presentReading,
-  presentReplacement,
-  readingSchema,
-  replacementSchema,
-} from '../../presenters/machine';
+import { presentLastReading } from '../../presenters/machine';
+import { presentReading, presentReplacement } from '../../presenters/reading';
 import { listMachines, loadMachine, loadVisibleMachines } from '../../services/machines';
 import {
   correctReading,
@@ -40,17 +42,6 @@ const orgParams = z.object({ orgId: z.uuid() });
 const machineParams = orgParams.extend({ machineId: z.uuid() });
 const readingParams = orgParams.extend({ readingId: z.uuid() });
 
-const importRowSchema = z.object({
-  line: z.number(),
-  fleetNumber: z.string(),
-  machine: z
-    .object({ id: z.string(), name: z.string(), fleetNumber: z.string(), meterUnit: z.string() })
-    .nullable(),
-  takenAt: z.string().nullable(),
-  value: z.number().nullable(),
-  status: z.enum(['new', 'duplicate', 'error']),
-  error: z.string().nullable(),
-});
 const csvBody = z.object({
   file: z.string().openapi({ format: 'binary', description: 'CSV: fleet number, taken at, value' }),
 });
@@ -71,7 +62,7 @@ export function readingsRouter(): Router {
     tags: ['readings'],
     params: machineParams,
     query: z.object({ limit: z.coerce.number().int().min(1).max(5000).default(200) }),
-    response: z.object({ data: z.array(readingSchema), replacements: z.array(replacementSchema) }),
+    response: readingHistoryResponseSchema,
     handler: async ({ req, params, query }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
@@ -105,7 +96,7 @@ export function readingsRouter(): Router {
     params: machineParams,
     body: readingCreateSchema,
     status: 201,
-    response: z.object({ data: readingSchema.nullable(), status: z.enum(['added', 'duplicate']) }),
+    response: readingLoggedResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
@@ -141,21 +132,7 @@ export function readingsRouter(): Router {
       'Every machine the caller may log hours for, with its last reading (the log-hours screen)',
     tags: ['readings'],
     params: orgParams,
-    response: z.object({
-      data: z.array(
-        z.object({
-          machine: z.object({
-            id: z.string(),
-            fleetNumber: z.string(),
-            name: z.string(),
-            meterUnit: z.string(),
-            status: z.string(),
-            category: z.string(),
-          }),
-          lastReading: lastReadingSchema.nullable(),
-        }),
-      ),
-    }),
+    response: latestReadingsResponseSchema,
     handler: async ({ req }) => {
       const access = req.access!;
       const { items } = await listMachines(access, {
@@ -190,9 +167,7 @@ export function readingsRouter(): Router {
     params: orgParams,
     body: bulkReadingsSchema,
     status: 201,
-    response: z.object({
-      data: z.array(z.object({ machineId: z.string(), status: z.enum(['added', 'duplicate']) })),
-    }),
+    response: bulkReadingsResponseSchema,
     handler: async ({ req, body }) => {
       const access = req.access!;
       const items: NewReading[] = [];
@@ -234,7 +209,7 @@ export function readingsRouter(): Router {
     tags: ['readings'],
     params: readingParams,
     body: readingUpdateSchema,
-    response: z.object({ data: readingSchema }),
+    response: readingResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const reading = await loadReading(access.organization.id, params.readingId);
@@ -273,7 +248,7 @@ export function readingsRouter(): Router {
     params: machineParams,
     body: meterReplacementSchema,
     status: 201,
-    response: z.object({ data: replacementSchema }),
+    response: meterReplacementResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
@@ -298,17 +273,7 @@ export function readingsRouter(): Router {
     params: orgParams,
     before: [csvUpload()],
     multipartBody: csvBody,
-    response: z.object({
-      data: z.object({
-        rows: z.array(importRowSchema),
-        summary: z.object({
-          total: z.number(),
-          new: z.number(),
-          duplicates: z.number(),
-          errors: z.number(),
-        }),
-      }),
-    }),
+    response: readingImportPreviewResponseSchema,
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canImportReadings(access), 'Only a manager or technician may import readings');
@@ -326,9 +291,7 @@ export function readingsRouter(): Router {
     before: [csvUpload()],
     multipartBody: csvBody,
     status: 201,
-    response: z.object({
-      data: z.object({ added: z.number(), duplicates: z.number(), total: z.number() }),
-    }),
+    response: readingImportResultResponseSchema,
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canImportReadings(access), 'Only a manager or technician may import readings');

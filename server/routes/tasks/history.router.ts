@@ -3,7 +3,8 @@ import { z } from 'zod';
 import { route } from '../route';
 import { authorize } from '../../policies/access';
 import { canSetLastDone } from '../../policies/machine';
-import { presentTask, taskSchema } from '../../presenters/machine';
+import { presentTask } from '../../presenters/schedule';
+import { taskResponseSchema, tasksResponseSchema } from '../../../shared/schemas/schedule';
 import { TaskDuePoint } from '../../models';
 import { invalid } from '../../errors';
 import { loadMachine } from '../../services/machines';
@@ -32,7 +33,7 @@ export function taskHistoryRouter(): Router {
       'Start counting a task from the latest reading and today, when its last service is not known',
     tags: ['schedule'],
     params: orgParams.extend({ taskId: z.uuid() }),
-    response: z.object({ data: taskSchema }),
+    response: taskResponseSchema,
     handler: async ({ req, params }) => {
       const access = req.access!;
       const task = await loadTask(access, params.taskId);
@@ -55,7 +56,7 @@ export function taskHistoryRouter(): Router {
       'Start counting every task of a machine whose history is unknown from the latest reading and today',
     tags: ['schedule'],
     params: orgParams.extend({ machineId: z.uuid() }),
-    response: z.object({ data: z.array(taskSchema) }),
+    response: tasksResponseSchema,
     handler: async ({ req, params }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);

@@ -4,13 +4,18 @@ import { route } from '../route';
 import {
   lastDoneSchema,
   scheduleTemplateCreateSchema,
+  scheduleTemplateListResponseSchema,
+  scheduleTemplateResponseSchema,
   taskInputSchema,
+  taskListResponseSchema,
+  taskResponseSchema,
+  tasksResponseSchema,
   taskUpdateSchema,
 } from '../../../shared/schemas/schedule';
 import { MACHINE_CATEGORIES } from '../../../shared/constants';
 import { authorize, hasRole } from '../../policies/access';
 import { canEditSchedule, canSetLastDone } from '../../policies/machine';
-import { presentTask, taskSchema } from '../../presenters/machine';
+import { presentTask, presentTemplate } from '../../presenters/schedule';
 import { loadMachine } from '../../services/machines';
 import {
   addTasks,
@@ -30,16 +35,6 @@ import { invalid } from '../../errors';
 const orgParams = z.object({ orgId: z.uuid() });
 const machineParams = orgParams.extend({ machineId: z.uuid() });
 const taskParams = orgParams.extend({ taskId: z.uuid() });
-
-const templateSchema = z
-  .object({
-    id: z.string(),
-    category: z.enum(MACHINE_CATEGORIES),
-    name: z.string(),
-    description: z.string(),
-    tasks: z.array(z.object({ name: z.string() }).passthrough()),
-  })
-  .openapi('ScheduleTemplate');
 
 async function tasksWithDue(organizationId: string, machineId: string) {
   const [tasks, due] = await Promise.all([
@@ -65,10 +60,7 @@ export function tasksRouter(): Router {
     summary: "A machine's service schedule with each task's due point",
     tags: ['schedule'],
     params: machineParams,
-    response: z.object({
-      data: z.array(taskSchema),
-      abilities: z.object({ edit: z.boolean(), setLastDone: z.boolean() }),
-    }),
+    response: taskListResponseSchema,
     handler: async ({ req, params }) => {
       const access = req.access!;
       await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
@@ -88,7 +80,7 @@ export function tasksRouter(): Router {
     params: machineParams,
     body: taskInputSchema,
     status: 201,
-    response: z.object({ data: taskSchema }),
+    response: taskResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
@@ -106,7 +98,7 @@ export function tasksRouter(): Router {
     tags: ['schedule'],
     params: taskParams,
     body: taskUpdateSchema,
-    response: z.object({ data: taskSchema }),
+    response: taskResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const task = await loadTask(access, params.taskId);
@@ -142,7 +134,7 @@ export function tasksRouter(): Router {
     tags: ['schedule'],
     params: taskParams,
     body: lastDoneSchema,
-    response: z.object({ data: taskSchema }),
+    response: taskResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const task = await loadTask(access, params.taskId);
@@ -164,10 +156,7 @@ export function tasksRouter(): Router {
     tags: ['schedule'],
     params: orgParams,
     query: z.object({ category: z.enum(MACHINE_CATEGORIES).optional() }),
-    response: z.object({
-      data: z.array(templateSchema),
-      abilities: z.object({ edit: z.boolean() }),
-    }),
+    response: scheduleTemplateListResponseSchema,
     handler: async ({ req, query }) => {
       const access = req.access!;
       const rows = await ScheduleTemplate.findAll({
@@ -181,13 +170,7 @@ export function tasksRouter(): Router {
         ],
       });
       return {
-        data: rows.map((t) => ({
-          id: t.id,
-          category: t.category,
-          name: t.name,
-          description: t.description,
-          tasks: t.tasks,
-        })),
+        data: rows.map(presentTemplate),
         abilities: { edit: hasRole(access, 'manager') },
       };
     },
@@ -201,7 +184,7 @@ export function tasksRouter(): Router {
     params: orgParams,
     body: scheduleTemplateCreateSchema,
     status: 201,
-    response: z.object({ data: templateSchema }),
+    response: scheduleTemplateResponseSchema,
     handler: async ({ req, body }) => {
       const access = req.access!;
       authorize(hasRole(access, 'manager'), 'Only a manager may edit schedule templates');
@@ -222,15 +205,7 @@ export function tasksRouter(): Router {
         );
         return row;
       });
-      return {
-        data: {
-          id: t.id,
-          category: t.category,
-          name: t.name,
-          description: t.description,
-          tasks: t.tasks,
-        },
-      };
+      return { data: presentTemplate(t) };
     },
   });
 
@@ -242,7 +217,7 @@ export function tasksRouter(): Router {
     params: machineParams,
     body: z.object({ templateId: z.uuid({ error: 'Choose a template' }) }),
     status: 201,
-    response: z.object({ data: z.array(taskSchema) }),
+    response: tasksResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);

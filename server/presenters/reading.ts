@@ -1,0 +1,22 @@
+import type { MeterReading, MeterReplacement } from '../models';
+import type {
+  MeterReplacement as MeterReplacementJson,
+  Reading,
+} from '../../shared/schemas/readings';
+
+export const presentReading = (r: MeterReading): Reading => ({
+  id: r.id,
+  value: r.value,
+  lifetimeValue: r.lifetimeValue,
+  takenAt: r.takenAt.toISOString(),
+  source: r.source,
+  enteredBy: r.enteredBy,
+});
+
+export const presentReplacement = (r: MeterReplacement): MeterReplacementJson => ({
+  id: r.id,
+  replacedAt: r.replacedAt.toISOString(),
+  oldFinalValue: r.oldFinalValue,
+  newStartValue: r.newStartValue,
+  note: r.note,
+});

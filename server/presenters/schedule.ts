@@ -1,0 +1,38 @@
+import type { ScheduleTemplate, ServiceTask } from '../models';
+import type { DuePoint } from '../../shared/domain';
+import type {
+  Hazard,
+  ScheduleTemplate as ScheduleTemplateJson,
+  Task,
+} from '../../shared/schemas/schedule';
+
+export const presentTask = (t: ServiceTask, due: DuePoint | null): Task => ({
+  id: t.id,
+  machineId: t.machineId,
+  name: t.name,
+  intervalMeter: t.intervalMeter,
+  intervalDays: t.intervalDays,
+  firstServiceMeter: t.firstServiceMeter,
+  warnMeter: t.warnMeter,
+  warnDays: t.warnDays,
+  parts: t.parts,
+  fluids: t.fluids,
+  labourHours: t.labourHours,
+  instructions: t.instructions,
+  safetyNotes: t.safetyNotes,
+  // The column holds only what the task schema let in.
+  hazards: t.hazards as Hazard[],
+  lastDoneMeter: t.lastDoneMeter,
+  lastDoneOn: t.lastDoneOn,
+  countFromMeter: t.countFromMeter ?? null,
+  countFromOn: t.countFromOn ?? null,
+  due,
+});
+
+export const presentTemplate = (t: ScheduleTemplate): ScheduleTemplateJson => ({
+  id: t.id,
+  category: t.category,
+  name: t.name,
+  description: t.description,
+  tasks: t.tasks,
+});

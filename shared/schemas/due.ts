@@ -1,0 +1,82 @@
+import { z } from 'zod';
+import { DUE_STATUSES } from '../constants';
+import { lastReadingSchema, usageSchema } from './machines';
+import { machineRefSchema } from './refs';
+
+// The responses of due points and the due list. Their queries (dueQuerySchema…) live with the
+// readings, which they are computed from.
+
+/** A task's due point as shared/domain computes it (meter units, ISO local dates). */
+export const duePointSchema = z
+  .object({
+    status: z.enum(DUE_STATUSES),
+    /** which limit falls first: meter, calendar, or null when neither can be dated */
+    governs: z.enum(['meter', 'calendar']).nullable(),
+    dueMeter: z.number().nullable(),
+    dueDate: z.string().nullable(),
+    /** projected date the meter reaches dueMeter (point, earliest, latest); null when no forecast */
+    projectedDate: z.string().nullable(),
+    projectedLow: z.string().nullable(),
+    projectedHigh: z.string().nullable(),
+    /** the date the task falls due: the earlier of dueDate and projectedDate */
+    effectiveDate: z.string().nullable(),
+    remainingMeter: z.number().nullable(),
+    remainingDays: z.number().nullable(),
+    /**
+     * 'recorded' when last done is known, 'first_service' for the break-in point, 'counted' from a
+     * start someone set in place of an unknown history, 'unknown' while that history is
+     * unanswered, 'assumed' otherwise
+     */
+    basis: z.enum(['recorded', 'first_service', 'assumed', 'counted', 'unknown']),
+  })
+  .meta({ id: 'DuePoint' });
+
+/** One task of one machine on the due list; reused by every response that carries due rows. */
+export const dueRowSchema = z
+  .object({
+    taskId: z.string(),
+    taskName: z.string(),
+    hazards: z.array(z.string()),
+    labourHours: z.number().nullable(),
+    machine: machineRefSchema,
+    due: duePointSchema,
+    /** last reading: value on the meter fitted now, and on the lifetime scale */
+    lastReading: lastReadingSchema.nullable(),
+    /** the due value as the meter fitted now shows it (differs after a meter replacement) */
+    dueOnMeter: z.number().nullable(),
+    usage: usageSchema.pick({ method: true, rate: true, low: true, high: true }).nullable(),
+  })
+  .meta({ id: 'DueRow' });
+export type DueRow = z.infer<typeof dueRowSchema>;
+
+export const dueCountsSchema = z.object({
+  overdue: z.number(),
+  due_soon: z.number(),
+  history_unknown: z.number(),
+  ok: z.number(),
+  no_forecast: z.number(),
+});
+export type DueCounts = z.infer<typeof dueCountsSchema>;
+
+/** A machine in season whose meter has not been read for STALE_READING_DAYS or more. */
+export const staleMeterSchema = z.object({
+  machine: machineRefSchema.pick({ id: true, fleetNumber: true, name: true }),
+  lastReadingAt: z.string().nullable(),
+  daysSince: z.number().nullable(),
+});
+export type StaleMeter = z.infer<typeof staleMeterSchema>;
+
+/** GET due (the farm) and GET a machine's due: rows, counts by status and stale meters. */
+export const dueListResponseSchema = z.object({
+  data: z.array(dueRowSchema),
+  meta: z.object({
+    /** the farm's today (ISO local date) the figures are computed for */
+    asOf: z.string(),
+    total: z.number(),
+    page: z.number(),
+    pageSize: z.number(),
+    counts: dueCountsSchema,
+    stale: z.array(staleMeterSchema),
+  }),
+});
+export type DueList = z.infer<typeof dueListResponseSchema>;
