@@ -6,30 +6,15 @@ import {
   useQueryClient,
   type QueryClient,
 } from '@tanstack/react-query';
-import type { OrganizationKind, Role, UnitSystem } from '../../shared/constants';
+import type { Me } from '../../shared/schemas/auth';
 import { apiClient, isApiError, type DataEnvelope } from './api-client';
 
 // The signed-in person and their memberships. This lives in lib (not in a feature) because the
 // router guards, the app shell and every feature need to know who is signed in and where.
 
-export interface Organization {
-  id: string;
-  name: string;
-  kind: OrganizationKind;
-  timeZone: string;
-  units: UnitSystem;
-}
-
-export interface Membership {
-  id: string;
-  role: Role;
-  organization: Organization;
-}
-
-export interface Me {
-  user: { id: string; email: string; name: string };
-  memberships: Membership[];
-}
+export type { Me };
+export type Membership = Me['memberships'][number];
+export type Organization = Membership['organization'];
 
 export const sessionKeys = {
   all: ['session'] as const,

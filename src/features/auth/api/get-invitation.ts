@@ -1,19 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { OrganizationKind, Role } from '../../../../shared/constants';
-import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
+import type { InvitationLookup, InvitationLookupResponse } from '../../../../shared/schemas/auth';
+import { apiClient, segment } from '../../../lib/api-client';
 import { authKeys } from './keys';
 
 /** What an invitation link shows before it is accepted. */
-export interface InvitationPreview {
-  email: string;
-  name: string;
-  role: Role;
-  organization: { id: string; name: string; kind: OrganizationKind };
-}
+export type InvitationPreview = InvitationLookup;
 
 export const getInvitation = (token: string, signal?: AbortSignal) =>
   apiClient
-    .get<DataEnvelope<InvitationPreview>>(`/invitations/${segment(token)}`, { signal })
+    .get<InvitationLookupResponse>(`/invitations/${segment(token)}`, { signal })
     .then((body) => body.data);
 
 export const invitationQueryOptions = (token: string) =>

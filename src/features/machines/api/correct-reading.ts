@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ReadingCreateInput } from '../../../../shared/schemas/readings';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterReadingChange } from './invalidate-readings';
-import type { Reading } from './types';
+import type { ReadingResponse } from './types';
 
 export const correctReading = (
   orgId: string,
@@ -10,9 +10,10 @@ export const correctReading = (
   input: Partial<ReadingCreateInput>,
 ) =>
   apiClient
-    .patch<{
-      data: Reading;
-    }>(`/organizations/${segment(orgId)}/readings/${segment(readingId)}`, input)
+    .patch<ReadingResponse>(
+      `/organizations/${segment(orgId)}/readings/${segment(readingId)}`,
+      input,
+    )
     .then((body) => body.data);
 
 export function useCorrectReading(orgId: string, machineId: string) {

@@ -2,11 +2,11 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MachineCreateInput } from '../../../../shared/schemas/machines';
 import { apiClient, segment } from '../../../lib/api-client';
 import { machineKeys } from './keys';
-import type { Machine } from './types';
+import type { MachineResponse } from './types';
 
 export const createMachine = (orgId: string, input: MachineCreateInput) =>
   apiClient
-    .post<{ data: Machine }>(`/organizations/${segment(orgId)}/machines`, input)
+    .post<MachineResponse>(`/organizations/${segment(orgId)}/machines`, input)
     .then((body) => body.data);
 
 export function useCreateMachine(orgId: string) {

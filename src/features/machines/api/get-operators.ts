@@ -1,17 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { machineKeys } from './keys';
+import type { MemberList } from '../../../../shared/schemas/members';
 import type { Operator } from './types';
-
-interface MemberRow {
-  role: string;
-  user: { id: string; name: string };
-}
 
 /** The farm's operators (from the member list), for assigning machines and naming who is assigned. */
 export const getOperators = (orgId: string, signal?: AbortSignal) =>
   apiClient
-    .get<{ data: MemberRow[] }>(`/organizations/${segment(orgId)}/members`, { signal })
+    .get<MemberList>(`/organizations/${segment(orgId)}/members`, { signal })
     .then((body) =>
       body.data
         .filter((m) => m.role === 'operator')

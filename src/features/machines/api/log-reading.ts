@@ -2,13 +2,10 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ReadingCreateInput } from '../../../../shared/schemas/readings';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterReadingChange } from './invalidate-readings';
-import type { Reading } from './types';
+import type { ReadingLogged } from './types';
 
-export interface LogReadingResult {
-  data: Reading | null;
-  /** 'duplicate': the same value at the same time was already there; nothing was added */
-  status: 'added' | 'duplicate';
-}
+/** `status` 'duplicate': the same value at the same time was already there; nothing was added. */
+export type LogReadingResult = ReadingLogged;
 
 export const logReading = (orgId: string, machineId: string, input: ReadingCreateInput) =>
   apiClient.post<LogReadingResult>(

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MeterReplacementInput } from '../../../../shared/schemas/readings';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterReadingChange } from './invalidate-readings';
-import type { MeterReplacement } from './types';
+import type { MeterReplacementResponse } from './types';
 
 export const recordMeterReplacement = (
   orgId: string,
@@ -10,9 +10,10 @@ export const recordMeterReplacement = (
   input: MeterReplacementInput,
 ) =>
   apiClient
-    .post<{
-      data: MeterReplacement;
-    }>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}/meter-replacements`, input)
+    .post<MeterReplacementResponse>(
+      `/organizations/${segment(orgId)}/machines/${segment(machineId)}/meter-replacements`,
+      input,
+    )
     .then((body) => body.data);
 
 /** A replacement shifts the lifetime values of later readings, so it changes what a reading does. */

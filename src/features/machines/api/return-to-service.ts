@@ -1,14 +1,14 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { foreignKeys, machineKeys } from './keys';
-import type { Machine } from './types';
+import type { MachineRefResponse } from './types';
 
 /**
  * POST …/machines/:machineId/return-to-service with the note of what was checked; 409 while a
  * critical defect is open or in repair (the message says how many).
  */
 export const returnToService = (orgId: string, machineId: string, note: string) =>
-  apiClient.post<{ data: Pick<Machine, 'id' | 'fleetNumber' | 'status'> }>(
+  apiClient.post<MachineRefResponse>(
     `/organizations/${segment(orgId)}/machines/${segment(machineId)}/return-to-service`,
     { note },
   );

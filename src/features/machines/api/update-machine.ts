@@ -2,11 +2,11 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MachineUpdateInput } from '../../../../shared/schemas/machines';
 import { apiClient, segment } from '../../../lib/api-client';
 import { foreignKeys, machineKeys } from './keys';
-import type { Machine } from './types';
+import type { MachineResponse } from './types';
 
 export const updateMachine = (orgId: string, machineId: string, input: MachineUpdateInput) =>
   apiClient
-    .patch<{ data: Machine }>(
+    .patch<MachineResponse>(
       `/organizations/${segment(orgId)}/machines/${segment(machineId)}`,
       input,
     )

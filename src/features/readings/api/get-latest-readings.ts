@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
+import { apiClient, segment } from '../../../lib/api-client';
 import { readingKeys } from './keys';
-import type { LatestReading } from './types';
+import type { LatestReadings } from './types';
 
 export const getLatestReadings = (orgId: string, signal?: AbortSignal) =>
   apiClient
-    .get<DataEnvelope<LatestReading[]>>(`/organizations/${segment(orgId)}/readings/latest`, {
+    .get<LatestReadings>(`/organizations/${segment(orgId)}/readings/latest`, {
       signal,
     })
     .then((body) => body.data);

@@ -1,19 +1,19 @@
 import { useMutation, useQueryClient, type QueryKey } from '@tanstack/react-query';
-import { segment, type DataEnvelope } from '../../../lib/api-client';
+import { segment } from '../../../lib/api-client';
 import { readingKeys } from './keys';
 import { postCsvFile } from './post-csv-file';
-import type { ImportPreview, ImportResult } from './types';
+import type { ImportPreviewResponse, ImportResultResponse } from './types';
 
 /** Checks every row of the file; the server writes nothing. */
 export const previewImport = (orgId: string, file: File) =>
-  postCsvFile<DataEnvelope<ImportPreview>>(
+  postCsvFile<ImportPreviewResponse>(
     `/organizations/${segment(orgId)}/readings/import/preview`,
     file,
   ).then((body) => body.data);
 
 /** Imports the whole file in one transaction, or nothing (422 with `line N` fields). */
 export const commitImport = (orgId: string, file: File) =>
-  postCsvFile<DataEnvelope<ImportResult>>(
+  postCsvFile<ImportResultResponse>(
     `/organizations/${segment(orgId)}/readings/import/commit`,
     file,
   ).then((body) => body.data);

@@ -1,16 +1,13 @@
 import { useMutation, useQueryClient, type QueryKey } from '@tanstack/react-query';
 import type { BulkReadingsInput } from '../../../../shared/schemas/readings';
-import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
+import { apiClient, segment } from '../../../lib/api-client';
 import { readingKeys } from './keys';
-import type { BulkReadingOutcome } from './types';
+import type { BulkReadingsResponse } from './types';
 
 /** POST readings/bulk: every reading is written, or none (422 with `readings.<i>.<field>`). */
 export const saveReadings = (orgId: string, input: BulkReadingsInput) =>
   apiClient
-    .post<DataEnvelope<BulkReadingOutcome[]>>(
-      `/organizations/${segment(orgId)}/readings/bulk`,
-      input,
-    )
+    .post<BulkReadingsResponse>(`/organizations/${segment(orgId)}/readings/bulk`, input)
     .then((body) => body.data);
 
 /** `alsoInvalidate`: other features' keys the new readings change (the due list). */

@@ -1,15 +1,16 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterScheduleChange } from './invalidate-schedule';
-import type { Task } from './types';
+import type { TasksResponse } from './types';
 
 export const applyTemplate = (orgId: string, machineId: string, templateId: string) =>
   apiClient
-    .post<{
-      data: Task[];
-    }>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}/apply-template`, {
-      templateId,
-    })
+    .post<TasksResponse>(
+      `/organizations/${segment(orgId)}/machines/${segment(machineId)}/apply-template`,
+      {
+        templateId,
+      },
+    )
     .then((body) => body.data);
 
 /** Adds all of a template's tasks to the machine in one step; the tasks already there stay. */

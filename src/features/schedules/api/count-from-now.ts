@@ -1,22 +1,20 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterScheduleChange } from './invalidate-schedule';
-import type { Task } from './types';
+import type { TaskResponse, TasksResponse } from './types';
 
 /** "Start counting from now" for one task whose last service is not known. */
 export const countTaskFromNow = (orgId: string, taskId: string) =>
   apiClient
-    .post<{
-      data: Task;
-    }>(`/organizations/${segment(orgId)}/tasks/${segment(taskId)}/count-from-now`)
+    .post<TaskResponse>(`/organizations/${segment(orgId)}/tasks/${segment(taskId)}/count-from-now`)
     .then((body) => body.data);
 
 /** The same for every task of the machine still waiting for its history. */
 export const countMachineFromNow = (orgId: string, machineId: string) =>
   apiClient
-    .post<{
-      data: Task[];
-    }>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}/count-from-now`)
+    .post<TasksResponse>(
+      `/organizations/${segment(orgId)}/machines/${segment(machineId)}/count-from-now`,
+    )
     .then((body) => body.data);
 
 /** `taskId` null: every task of the machine whose history is unknown. */

@@ -2,13 +2,14 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { TaskInput } from '../../../../shared/schemas/schedule';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterScheduleChange } from './invalidate-schedule';
-import type { Task } from './types';
+import type { TaskResponse } from './types';
 
 export const createTask = (orgId: string, machineId: string, input: TaskInput) =>
   apiClient
-    .post<{
-      data: Task;
-    }>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}/tasks`, input)
+    .post<TaskResponse>(
+      `/organizations/${segment(orgId)}/machines/${segment(machineId)}/tasks`,
+      input,
+    )
     .then((body) => body.data);
 
 export function useCreateTask(orgId: string, machineId: string) {

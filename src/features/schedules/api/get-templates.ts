@@ -2,10 +2,10 @@ import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { MachineCategory } from '../../../../shared/constants';
 import { apiClient, segment } from '../../../lib/api-client';
 import { templateKeys } from './keys';
-import type { ScheduleTemplate } from './types';
+import type { ScheduleTemplateList } from './types';
 
 export const getTemplates = (orgId: string, category: MachineCategory, signal?: AbortSignal) =>
-  apiClient.get<{ data: ScheduleTemplate[]; abilities: { edit: boolean } }>(
+  apiClient.get<ScheduleTemplateList>(
     `/organizations/${segment(orgId)}/schedule-templates?category=${segment(category)}`,
     { signal },
   );

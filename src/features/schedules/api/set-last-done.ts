@@ -2,13 +2,11 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { LastDoneInput } from '../../../../shared/schemas/schedule';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterScheduleChange } from './invalidate-schedule';
-import type { Task } from './types';
+import type { TaskResponse } from './types';
 
 export const setLastDone = (orgId: string, taskId: string, input: LastDoneInput) =>
   apiClient
-    .put<{
-      data: Task;
-    }>(`/organizations/${segment(orgId)}/tasks/${segment(taskId)}/last-done`, input)
+    .put<TaskResponse>(`/organizations/${segment(orgId)}/tasks/${segment(taskId)}/last-done`, input)
     .then((body) => body.data);
 
 export function useSetLastDone(orgId: string, machineId: string) {

@@ -2,11 +2,11 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { TaskInput } from '../../../../shared/schemas/schedule';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterScheduleChange } from './invalidate-schedule';
-import type { Task } from './types';
+import type { TaskResponse } from './types';
 
 export const updateTask = (orgId: string, taskId: string, input: Partial<TaskInput>) =>
   apiClient
-    .patch<{ data: Task }>(`/organizations/${segment(orgId)}/tasks/${segment(taskId)}`, input)
+    .patch<TaskResponse>(`/organizations/${segment(orgId)}/tasks/${segment(taskId)}`, input)
     .then((body) => body.data);
 
 export function useUpdateTask(orgId: string, machineId: string) {

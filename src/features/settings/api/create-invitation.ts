@@ -1,12 +1,12 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { InvitationCreateInput } from '../../../../shared/schemas/auth';
-import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
+import { apiClient, segment } from '../../../lib/api-client';
 import { invitationKeys } from './keys';
-import type { PendingInvitation } from './types';
+import type { InvitationResponse } from './types';
 
 export const createInvitation = (orgId: string, input: InvitationCreateInput) =>
   apiClient
-    .post<DataEnvelope<PendingInvitation>>(`/organizations/${segment(orgId)}/invitations`, input)
+    .post<InvitationResponse>(`/organizations/${segment(orgId)}/invitations`, input)
     .then((body) => body.data);
 
 export function useCreateInvitation(orgId: string) {

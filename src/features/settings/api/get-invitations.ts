@@ -1,11 +1,11 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
+import { apiClient, segment } from '../../../lib/api-client';
 import { invitationKeys } from './keys';
-import type { PendingInvitation } from './types';
+import type { InvitationListResponse } from './types';
 
 export const getInvitations = (orgId: string, signal?: AbortSignal) =>
   apiClient
-    .get<DataEnvelope<PendingInvitation[]>>(`/organizations/${segment(orgId)}/invitations`, {
+    .get<InvitationListResponse>(`/organizations/${segment(orgId)}/invitations`, {
       signal,
     })
     .then((body) => body.data);

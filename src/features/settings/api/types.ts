@@ -1,22 +1,10 @@
-import type { Role } from '../../../../shared/constants';
-
-export interface Member {
-  id: string;
-  role: Role;
-  user: { id: string; name: string; email: string };
-  abilities: { update: boolean; remove: boolean };
-}
-
-export interface MemberList {
-  data: Member[];
-  abilities: { invite: boolean };
-}
-
-export interface PendingInvitation {
-  id: string;
-  email: string;
-  name: string;
-  role: Role;
-  expiresAt: string;
-  createdAt: string;
-}
+// The JSON of the member and invitation endpoints, typed by the zod schemas the server checks
+// its answers against (shared/schemas/members.ts).
+export type {
+  InvitationListResponse,
+  InvitationResponse,
+  Member,
+  MemberList,
+  MemberResponse,
+  PendingInvitation,
+} from '../../../../shared/schemas/members';

@@ -1,16 +1,13 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MembershipUpdateInput } from '../../../../shared/schemas/auth';
-import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
+import { apiClient, segment } from '../../../lib/api-client';
 import { sessionKeys } from '../../../lib/auth';
 import { memberKeys } from './keys';
-import type { Member } from './types';
+import type { MemberResponse } from './types';
 
 export const updateMembership = (orgId: string, memberId: string, input: MembershipUpdateInput) =>
   apiClient
-    .patch<DataEnvelope<Member>>(
-      `/organizations/${segment(orgId)}/members/${segment(memberId)}`,
-      input,
-    )
+    .patch<MemberResponse>(`/organizations/${segment(orgId)}/members/${segment(memberId)}`, input)
     .then((body) => body.data);
 
 export function useUpdateMembership(orgId: string) {
