@@ -1,9 +1,11 @@
 import { Op } from 'sequelize';
-import { z } from 'zod';
 import { User } from '../models';
+import type { PersonRef } from '../../shared/schemas/refs';
 
-export const personSchema = z.object({ id: z.string(), name: z.string() }).openapi('PersonRef');
-export type PersonRef = z.infer<typeof personSchema>;
+// The schema moved to shared/schemas/refs.ts; re-exported while presenters of other resources
+// still import it from here.
+export { personRefSchema as personSchema } from '../../shared/schemas/refs';
+export type { PersonRef };
 
 /** Names of the given users in one query, for presenters. */
 export async function peopleById(ids: (string | null | undefined)[]) {
