@@ -90,3 +90,30 @@ describe('calendar — date arithmetic against date-fns addDays (reference libra
     expect(mismatches).toBe(0);
   });
 });
+
+describe('calendar — precision and refusals', () => {
+  it('calendar — local day number keeps minutes, seconds and milliseconds (12:34:56.789 UTC)', () => {
+    // 2026-03-08 is day 20520 (2024-03-01 is day 19783; + 365 to 2025-03-01, + 365 to
+    // 2026-03-01, + 7); the time of day is (12 × 3600 + 34 × 60 + 56.789) / 86400.
+    const expected = 20520 + 45296.789 / 86400;
+    expect(localDayNumber('2026-03-08T12:34:56.789Z', 'UTC')).toBeCloseTo(expected, 9);
+    expect(localDayNumber(new Date('2026-03-08T12:34:56.789Z'), 'UTC')).toBeCloseTo(expected, 9);
+  });
+
+  it('calendar — each refusal says what was wrong', () => {
+    expect(() => localDayNumber('not a time', 'UTC')).toThrow('Invalid instant: not a time');
+    expect(() => localDayNumber(new Date(0), 'Mars/Olympus')).toThrow(
+      'Unknown time zone: Mars/Olympus',
+    );
+    expect(() => isoFromDayNumber(Number.NaN)).toThrow('Invalid day number: NaN');
+    expect(() => dayNumberFromIso('2024-3-1')).toThrow('Not an ISO date (yyyy-mm-dd): 2024-3-1');
+    expect(() => dayNumberFromIso('2023-02-29')).toThrow('No such date: 2023-02-29');
+  });
+
+  it('calendar — an ISO date with anything before or after it, or month 13 — refused', () => {
+    expect(() => dayNumberFromIso('x2024-03-01')).toThrow(RangeError);
+    expect(() => dayNumberFromIso('2024-03-01T00:00')).toThrow(RangeError);
+    // Month 13 would roll over to 1 January 2025, the same day of the month.
+    expect(() => dayNumberFromIso('2024-13-01')).toThrow('No such date: 2024-13-01');
+  });
+});

@@ -2,7 +2,9 @@ import { describe, expect, it } from 'vitest';
 import {
   accumulatedRepairCost,
   REMAINING_VALUE_COEFFICIENTS,
+  REMAINING_VALUE_PROVENANCE,
   remainingValueFraction,
+  repairFactorKindForCategory,
   REPAIR_FACTORS,
   repairCostBetween,
   roundHalfUp,
@@ -118,5 +120,25 @@ describe('cost — remaining value (ASABE D497 form; coefficients from memory, C
   it('remaining value — past the curve’s zero (80 years) — 0, not rising again', () => {
     const c = REMAINING_VALUE_COEFFICIENTS.tractor_150hp_plus;
     expect(remainingValueFraction(c.c1, c.c2, c.c3, 80, 400)).toBe(0);
+  });
+});
+
+describe('cost — edges', () => {
+  it('cost — negative hours — no cost (not the square of a negative)', () => {
+    expect(accumulatedRepairCost(150_000, 0.007, 2, -1000)).toBe(0);
+  });
+
+  it('cost — repair-factor kind by category — tractor, combine, baler, mower; none for a sprayer', () => {
+    expect(repairFactorKindForCategory('tractor')).toBe('tractor_2wd');
+    expect(repairFactorKindForCategory('combine')).toBe('combine_self_propelled');
+    expect(repairFactorKindForCategory('baler')).toBe('round_baler_large');
+    expect(repairFactorKindForCategory('mower')).toBe('mower_conditioner_rotary');
+    expect(repairFactorKindForCategory('sprayer')).toBeNull();
+  });
+
+  it('cost — remaining-value provenance — coefficients from memory, checked against A3-29', () => {
+    expect(REMAINING_VALUE_PROVENANCE).toBe(
+      'ASABE D497 form; coefficients from memory, checked against Iowa State University Extension Ag Decision Maker A3-29 (150 hp+, 15 years, 400 h/yr prints 23 %)',
+    );
   });
 });

@@ -111,3 +111,49 @@ describe('reading rules', () => {
     expect(DEFAULT_MAX_PER_DAY).toEqual({ h: 24, km: 1500, bales: 2000, ha: 300, acres: 750 });
   });
 });
+
+describe('reading rules — boundaries', () => {
+  it('reading rules — equal to the previous, equal to the next — accepted (not backwards, not above)', () => {
+    const sameAsPrevious = { value: 1052, takenAtMs: at('2024-03-12T08:00') };
+    expect(checkReading(sameAsPrevious, { previous, next }, opts)).toBeNull();
+    const sameAsNext = { value: 1090, takenAtMs: at('2024-03-13T20:00') };
+    expect(checkReading(sameAsNext, { previous, next }, opts)).toBeNull();
+  });
+
+  it('reading rules — dated exactly now + 5 minutes — accepted', () => {
+    const edge = { value: 1100, takenAtMs: opts.nowMs + 5 * 60_000 };
+    expect(checkReading(edge, { previous }, opts)).toBeNull();
+  });
+
+  it('reading rules — no skew, exactly 24 h in 24 h — accepted (the limit itself is allowed)', () => {
+    const candidate = { value: 1076, takenAtMs: previous.takenAtMs + 24 * hour };
+    expect(checkReading(candidate, { previous }, { ...opts, skewMs: 0 })).toBeNull();
+  });
+
+  it('reading rules — 25 h in 23 h — too_fast on the value, pace to one decimal (26.1 h per day)', () => {
+    // 25 × 24 / 23 = 26.087 h per day, shown as 26.1.
+    const result = checkReading(
+      { value: 1077, takenAtMs: previous.takenAtMs + 23 * hour },
+      { previous },
+      opts,
+    );
+    expect(result?.field).toBe('value');
+    expect(result?.message).toContain('implies 26.1 h per day since');
+  });
+
+  it('reading rules — too fast against the next — the field is the value', () => {
+    const result = checkReading(
+      { value: 1053, takenAtMs: at('2024-03-13T20:00') },
+      { previous, next },
+      opts,
+    );
+    expect(result?.field).toBe('value');
+  });
+
+  it('reading rules — a first reading dated in the future — future, no previous reading named', () => {
+    const result = checkReading({ value: 10, takenAtMs: opts.nowMs + 6 * 60_000 }, {}, opts);
+    expect(result?.message).toBe(
+      'Reading time 2024-03-15 12:06 UTC is in the future (now 2024-03-15 12:00 UTC) — readings may not be dated ahead of now.',
+    );
+  });
+});
