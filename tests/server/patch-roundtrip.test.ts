@@ -93,9 +93,12 @@ const ROUTES: Record<string, PatchRoute> = {
       { field: 'taskIds', value: (ids) => [ids.taskId, ids.otherTaskId], columns: ['tasks'] },
       { field: 'technicianIds', value: (ids) => [ids.managerUserId] },
       { field: 'labourHours', value: v(3) },
-      { field: 'parts', value: v([{ partNumber: 'OF-110', quantity: 2, unitCost: 19 }]) },
+      {
+        field: 'parts',
+        value: v([{ partNumber: 'OF-110', quantity: 2, unitCost: 19, unitCostMinor: 1900 }]),
+      },
       { field: 'fluids', value: v([]) },
-      { field: 'otherCosts', value: v([{ description: 'Rags', amount: 3 }]) },
+      { field: 'otherCosts', value: v([{ description: 'Rags', amount: 3, amountMinor: 300 }]) },
       { field: 'notes', value: v('Long hose packed.') },
       {
         field: 'measurements',
@@ -218,7 +221,7 @@ async function snapshot(route: PatchRoute, w: PopulatedWorld) {
 }
 
 const patchPaths = () => {
-  const doc = buildOpenApiDocument() as {
+  const doc = buildOpenApiDocument() as unknown as {
     paths: Record<string, Record<string, { requestBody?: { content: Record<string, unknown> } }>>;
   };
   return Object.entries(doc.paths)

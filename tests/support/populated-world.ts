@@ -25,7 +25,10 @@ export interface PopulatedWorld {
     readingId: string;
     recordId: string;
     defectId: string;
+    /** the checklist template (checklist-templates/:templateId) */
     templateId: string;
+    /** a schedule template (apply-template's templateId) */
+    scheduleTemplateId: string;
     linkId: string;
     bookingId: string;
     /** the technician's membership (members/:id) */
@@ -35,6 +38,7 @@ export interface PopulatedWorld {
     operatorUserId: string;
   };
   emails: { advisor: string; technician: string };
+  checklistItemIds: string[];
 }
 
 async function send(agent: Agent, method: 'post' | 'patch' | 'put', url: string, body: object) {
@@ -135,9 +139,20 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
     taskIds: [task.id],
     technicianIds: [tech.id],
     labourHours: 2.5,
-    parts: [{ partNumber: 'OF-100', description: 'Oil filter', quantity: 1, unitCost: 18.4 }],
-    fluids: [{ kind: 'Engine oil 15W-40', volume: 18, unit: 'L', unitCost: 6.1 }],
-    otherCosts: [{ description: 'Shop towels', amount: 4 }],
+    // costs in both spellings while they move to minor units (the lines drop the other key)
+    parts: [
+      {
+        partNumber: 'OF-100',
+        description: 'Oil filter',
+        quantity: 1,
+        unitCost: 18.4,
+        unitCostMinor: 1840,
+      },
+    ],
+    fluids: [
+      { kind: 'Engine oil 15W-40', volume: 18, unit: 'L', unitCost: 6.1, unitCostMinor: 610 },
+    ],
+    otherCosts: [{ description: 'Shop towels', amount: 4, amountMinor: 400 }],
     notes: 'Bring the long drain hose.',
     measurements: [{ name: 'Oil pressure', value: 3.4, unit: 'bar', specMin: 2.5, specMax: 4.5 }],
     reassemblySettings: [{ what: 'Belt tensioner', value: '3 turns out', restored: false }],
@@ -164,6 +179,12 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
         caution: 'Engine off before touching the shaft.',
       },
     ],
+  });
+  const scheduleTemplate = await send(agent, 'post', `${org}/schedule-templates`, {
+    category: 'tractor',
+    name: 'Row-crop tractor schedule',
+    description: 'From the operator manual, section 9.',
+    tasks: [fullTask],
   });
   const booking = await send(advisor, 'post', `/organizations/${dealer.id}/bookings`, {
     customerId: farm.id,
@@ -192,6 +213,7 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
       recordId: record.id,
       defectId: defect.id,
       templateId: template.id,
+      scheduleTemplateId: scheduleTemplate.id,
       linkId: link.id,
       bookingId: booking.id,
       membershipId: membership.id,
@@ -200,5 +222,6 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
       operatorUserId: op.id,
     },
     emails: { advisor: advisorUser.email, technician: tech.email },
+    checklistItemIds: (template.items as { id: string }[]).map((item) => item.id),
   };
 }
