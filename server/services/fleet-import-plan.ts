@@ -24,6 +24,8 @@ import {
 export interface RowPlan {
   line: number;
   fleetNumber: string;
+  /** the machine's name after the import: the row's name cell, else the machine's own */
+  name: string | null;
   existing: Machine | null;
   create: MachineCreateInput | null;
   /** only the fields whose value differs from the machine's */
@@ -84,6 +86,7 @@ export function planRow(
   const plan: RowPlan = {
     line,
     fleetNumber,
+    name: cell('name') ?? found?.machine.name ?? null,
     existing: found?.machine ?? null,
     create: null,
     update: {},

@@ -154,7 +154,7 @@ async function runFleetImport(access: OrgAccess, buffer: Buffer, commit: boolean
       const row: FleetImportRow = {
         line: plan.line,
         fleetNumber: plan.fleetNumber,
-        name: plan.create?.name ?? plan.update.name ?? plan.existing?.name ?? null,
+        name: plan.create?.name ?? plan.update.name ?? plan.name,
         machineId: plan.existing?.id ?? null,
         outcome: 'error',
         changes: [],

@@ -40,6 +40,7 @@ const daysAgo = (org: { timeZone: string }, n: number) => addDaysIso(todayIso(or
 type Row = {
   line: number;
   fleetNumber: string;
+  name: string | null;
   outcome: string;
   errors: string[];
   changes: string[];
@@ -92,6 +93,7 @@ describe('fleet import', () => {
     ]);
     expect(rows[0].changes).toEqual(['new machine', expect.stringMatching(/^reading 4210.5 on/)]);
     expect(rows[1].changes).toEqual(['name']);
+    expect(rows[2].name).toBe('Mystery');
     expect(rows[2].errors).toEqual([
       'Line 4, category: "harvester" is not a category; use one of tractor, combine, sprayer, baler, loader, mower, truck, implement, other',
       'Line 4, year: "20x5" must be a year like 2016',

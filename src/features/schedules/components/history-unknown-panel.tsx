@@ -35,8 +35,7 @@ export function HistoryUnknownPanel({
     <div className="flex flex-col gap-2 rounded-lg border border-loam-200 bg-loam-50 p-3">
       <p className="font-bold text-loam-900">History unknown — set last done</p>
       <p className="text-sm text-loam-800">
-        This machine came with hours on it and nobody has said when this task was last done, so
-        Hourstone does not guess when it falls due.
+        Nobody has said when this was last done, so when it falls due is not guessed.
         {canAnswer ? '' : ' A manager or technician can set it.'}
       </p>
       {error ? <Alert>{error}</Alert> : null}
