@@ -1,9 +1,6 @@
 import type { Membership, Organization, User } from '../models';
 import type { Me, OrganizationSummary } from '../../shared/schemas/auth';
 
-// The route files of sign-up and account settings still take the schema from here.
-export { meSchema } from '../../shared/schemas/auth';
-
 export const presentOrganization = (o: Organization): OrganizationSummary => ({
   id: o.id,
   name: o.name,

@@ -33,6 +33,8 @@ export type AccountDeleteInput = z.infer<typeof accountDeleteSchema>;
 
 export const signUpStatusSchema = z.object({ open: z.boolean() });
 export type SignUpStatus = z.infer<typeof signUpStatusSchema>;
+export const signUpStatusResponseSchema = z.object({ data: signUpStatusSchema });
+export type SignUpStatusResponse = z.infer<typeof signUpStatusResponseSchema>;
 
 export const accountSchema = z.object({
   id: z.string(),
@@ -44,3 +46,9 @@ export const accountSchema = z.object({
   lastManagerOf: z.array(z.object({ id: z.string(), name: z.string() })),
 });
 export type Account = z.infer<typeof accountSchema>;
+export const accountResponseSchema = z.object({ data: accountSchema });
+export type AccountResponse = z.infer<typeof accountResponseSchema>;
+
+/** An address change's link opened: the address the account signs in with from now on. */
+export const emailChangedResponseSchema = z.object({ data: z.object({ email: z.string() }) });
+export type EmailChangedResponse = z.infer<typeof emailChangedResponseSchema>;

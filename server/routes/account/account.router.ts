@@ -1,16 +1,17 @@
 import { Router } from 'express';
-import { z } from 'zod';
 import { route } from '../route';
 import {
   accountDeleteSchema,
-  accountSchema,
+  accountResponseSchema,
   accountUpdateSchema,
+  emailChangedResponseSchema,
   emailChangeSchema,
   emailTokenSchema,
   signUpSchema,
-  signUpStatusSchema,
+  signUpStatusResponseSchema,
 } from '../../../shared/schemas/account';
-import { meSchema, presentMe } from '../../presenters/me';
+import { mailSentResponseSchema, meResponseSchema } from '../../../shared/schemas/auth';
+import { presentMe } from '../../presenters/me';
 import {
   confirmEmailChange,
   deleteAccount,
@@ -27,9 +28,6 @@ import {
   signUpPerEmail,
 } from '../../middlewares/sign-up-limit';
 
-const meResponse = z.object({ data: meSchema });
-const accountResponse = z.object({ data: accountSchema });
-
 /** Signing up, and each person's own account settings. */
 export function accountRouter(): Router {
   const router = Router();
@@ -40,7 +38,7 @@ export function accountRouter(): Router {
     summary: 'Whether this server lets people sign up (SIGNUP=open) or only invites them',
     tags: ['auth'],
     access: 'public',
-    response: z.object({ data: signUpStatusSchema }),
+    response: signUpStatusResponseSchema,
     handler: () => ({ data: { open: signUpIsOpen() } }),
   });
 
@@ -54,7 +52,7 @@ export function accountRouter(): Router {
     before: [refuseWhenSignUpClosed, signUpPerAddress, signUpPerEmail],
     status: 202,
     body: signUpSchema,
-    response: z.object({ data: z.object({ sent: z.boolean() }) }),
+    response: mailSentResponseSchema,
     handler: async ({ body }) => {
       await requestSignUp(body);
       return { data: { sent: true } };
@@ -68,7 +66,7 @@ export function accountRouter(): Router {
     tags: ['auth'],
     access: 'public',
     body: emailTokenSchema,
-    response: meResponse,
+    response: meResponseSchema,
     handler: async ({ req, res, body }) => {
       const user = await confirmSignUp(body.token);
       await startSession(req, res, user.id);
@@ -83,7 +81,7 @@ export function accountRouter(): Router {
       'The signed-in account: name, e-mail, an address change waiting for its link, and the organizations it is the last manager of',
     tags: ['account'],
     access: 'user',
-    response: accountResponse,
+    response: accountResponseSchema,
     handler: async ({ req }) => ({ data: await describeAccount(req.auth!.user) }),
   });
 
@@ -94,7 +92,7 @@ export function accountRouter(): Router {
     tags: ['account'],
     access: 'user',
     body: accountUpdateSchema,
-    response: accountResponse,
+    response: accountResponseSchema,
     handler: async ({ req, body }) => {
       const user = await updateAccount(req.auth!.user, body);
       return { data: await describeAccount(user) };
@@ -110,7 +108,7 @@ export function accountRouter(): Router {
     access: 'user',
     status: 202,
     body: emailChangeSchema,
-    response: accountResponse,
+    response: accountResponseSchema,
     handler: async ({ req, body }) => {
       const user = req.auth!.user;
       await requestEmailChange(user, body.email, body.currentPassword);
@@ -125,7 +123,7 @@ export function accountRouter(): Router {
     tags: ['account'],
     access: 'public',
     body: emailTokenSchema,
-    response: z.object({ data: z.object({ email: z.string() }) }),
+    response: emailChangedResponseSchema,
     handler: async ({ body }) => {
       const user = await confirmEmailChange(body.token);
       return { data: { email: user.email } };

@@ -1,13 +1,11 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { EmailTokenInput } from '../../../../shared/schemas/account';
-import { apiClient, type DataEnvelope } from '../../../lib/api-client';
+import type { EmailChangedResponse, EmailTokenInput } from '../../../../shared/schemas/account';
+import { apiClient } from '../../../lib/api-client';
 import { sessionKeys } from '../../../lib/auth';
 
 /** Opens an address change's link: the account uses the new address from now on. */
 export const confirmEmailChange = (input: EmailTokenInput) =>
-  apiClient
-    .post<DataEnvelope<{ email: string }>>('/account/email/confirm', input)
-    .then((b) => b.data);
+  apiClient.post<EmailChangedResponse>('/account/email/confirm', input).then((b) => b.data);
 
 export function useConfirmEmailChange() {
   const queryClient = useQueryClient();

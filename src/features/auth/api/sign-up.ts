@@ -1,11 +1,12 @@
 import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
-import type { SignUpInput, SignUpStatus } from '../../../../shared/schemas/account';
-import { apiClient, type DataEnvelope } from '../../../lib/api-client';
+import type { SignUpInput, SignUpStatusResponse } from '../../../../shared/schemas/account';
+import type { MailSentResponse } from '../../../../shared/schemas/auth';
+import { apiClient } from '../../../lib/api-client';
 import { authKeys } from './keys';
 
 /** Whether this server takes sign-ups (SIGNUP=open) or only invitations. */
 export const getSignUpStatus = (signal?: AbortSignal) =>
-  apiClient.get<DataEnvelope<SignUpStatus>>('/auth/sign-up', { signal }).then((b) => b.data);
+  apiClient.get<SignUpStatusResponse>('/auth/sign-up', { signal }).then((b) => b.data);
 
 export const signUpStatusQueryOptions = () =>
   queryOptions({
@@ -18,7 +19,7 @@ export const useSignUpStatus = () => useQuery(signUpStatusQueryOptions());
 
 // The server answers 202 whether or not the address has an account, so nobody can probe for one.
 export const signUp = (input: SignUpInput) =>
-  apiClient.post<DataEnvelope<{ sent: boolean }>>('/auth/sign-up', input).then((b) => b.data);
+  apiClient.post<MailSentResponse>('/auth/sign-up', input).then((b) => b.data);
 
 export const useSignUp = () =>
   useMutation({ mutationFn: signUp, meta: { allowUnauthorized: true } });

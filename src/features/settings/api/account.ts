@@ -1,15 +1,15 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type {
-  Account,
+  AccountResponse,
   AccountUpdateInput,
   EmailChangeInput,
 } from '../../../../shared/schemas/account';
-import { apiClient, type DataEnvelope } from '../../../lib/api-client';
+import { apiClient } from '../../../lib/api-client';
 import { clearSession, sessionKeys } from '../../../lib/auth';
 import { accountKeys } from './keys';
 
 export const getAccount = (signal?: AbortSignal) =>
-  apiClient.get<DataEnvelope<Account>>('/account', { signal }).then((b) => b.data);
+  apiClient.get<AccountResponse>('/account', { signal }).then((b) => b.data);
 
 export const accountQueryOptions = () =>
   queryOptions({ queryKey: accountKeys.detail(), queryFn: ({ signal }) => getAccount(signal) });
@@ -20,7 +20,7 @@ export function useUpdateAccount() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: AccountUpdateInput) =>
-      apiClient.patch<DataEnvelope<Account>>('/account', input).then((b) => b.data),
+      apiClient.patch<AccountResponse>('/account', input).then((b) => b.data),
     onSuccess: async (account) => {
       queryClient.setQueryData(accountKeys.detail(), account);
       await queryClient.invalidateQueries({ queryKey: sessionKeys.me() });
@@ -33,7 +33,7 @@ export function useRequestEmailChange() {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: EmailChangeInput) =>
-      apiClient.post<DataEnvelope<Account>>('/account/email', input).then((b) => b.data),
+      apiClient.post<AccountResponse>('/account/email', input).then((b) => b.data),
     onSuccess: (account) => queryClient.setQueryData(accountKeys.detail(), account),
   });
 }
