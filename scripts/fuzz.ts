@@ -56,7 +56,8 @@ function tally(t: Tally, sent: SentBody): string[] {
     problems.push(`${sent.status}`);
   } else if (sent.status >= 400) {
     t.refused += 1;
-    const reason = `${sent.status} ${sent.code ?? '-'}${sent.fields[0] ? ` ${sent.fields[0]}` : ''}`;
+    const [field] = Object.keys(sent.fields);
+    const reason = `${sent.status} ${sent.code ?? '-'}${field ? ` ${field}` : ''}`;
     t.reasons.set(reason, (t.reasons.get(reason) ?? 0) + 1);
   } else t.ok += 1;
   if (sent.code === 'out_of_range') {

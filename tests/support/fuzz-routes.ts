@@ -144,8 +144,8 @@ function pathParams(w: PopulatedWorld, dealerSide: boolean): Record<string, stri
 export interface SentBody {
   status: number;
   code: string | undefined;
-  /** the fields a refusal named */
-  fields: string[];
+  /** the fields a refusal named, with their messages */
+  fields: Record<string, string>;
   /** tables whose row count or checksum changed */
   changed: string[];
 }
@@ -209,7 +209,11 @@ export class RouteFuzzer {
       this.last = after;
       this.lastXid = xidAfter;
     }
-    const fields = Object.keys(res.body?.error?.fields ?? {});
-    return { status: res.status, code: res.body?.error?.code, fields, changed };
+    return {
+      status: res.status,
+      code: res.body?.error?.code,
+      fields: res.body?.error?.fields ?? {},
+      changed,
+    };
   }
 }
