@@ -30,7 +30,7 @@ export const CALLER_WORDS: Record<Caller, string> = {
 };
 
 /** The answer a cell expects: any 2xx, or one exact refusal. */
-export type Answer = '2xx' | 401 | 403 | 404 | 422;
+export type Answer = '2xx' | 401 | 403 | 404 | 409 | 422;
 
 /** Own ids: the farm's records; foreign ids: another organization's records in the same request. */
 export type Side = 'own' | 'foreign';

@@ -21,6 +21,8 @@ export interface Ctx {
 export interface Case {
   ids: IdsIn;
   build: (ctx: Ctx) => Built | Promise<Built>;
+  /** puts the world back after a success that changed a caller (not the records it reads) */
+  undo?: (ctx: Ctx, body: { data?: { id?: string } }) => Promise<void>;
 }
 
 /** The farm every farm route is addressed to, whoever calls. */

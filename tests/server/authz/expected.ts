@@ -61,6 +61,27 @@ export const EXPECTED: Record<string, Row> = {
   'GET /invitations/{token}': everyone(),
   'POST /invitations/{token}/accept': everyone(),
   'GET /dev/mail': everyone(),
+  'GET /auth/sign-up': everyone(),
+  'POST /auth/sign-up': everyone(),
+  'POST /auth/verify-email': everyone(),
+  'POST /account/email/confirm': everyone(),
+  'GET /account': signedIn(),
+  'PATCH /account': signedIn(),
+  'POST /account/email': signedIn(),
+  // the last manager of an organization (a dealer's last advisor) keeps the account until
+  // someone else runs it: 409, naming it
+  'DELETE /account': signedIn({
+    manager: 409,
+    viewDealer: 409,
+    serviceDealer: 409,
+    unlinkedDealer: 409,
+    stranger: 409,
+  }),
+  // organizations: anyone signed in starts one; its own people read it, whoever runs it changes it
+  'POST /organizations': signedIn(),
+  'GET /organizations/{orgId}': farmOnly,
+  'PATCH /organizations/{orgId}': managers,
+  'DELETE /organizations/{orgId}': managers,
   // the farm's team
   'GET /organizations/{orgId}/members': farmOnly,
   'PATCH /organizations/{orgId}/members/{id}': managers,

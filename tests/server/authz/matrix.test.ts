@@ -1,16 +1,19 @@
 // The authorization matrix (issue 16): every route of the OpenAPI document × every caller × the
 // farm's own ids and another organization's, each a real request, against the table of expected
-// answers in expected.ts. A refused request must leave every tenant table as it was. A route
-// added later without a row in the table fails the first test.
+// answers in expected.ts. A refused request must leave every tenant table as it was, and no answer
+// to a dealer may name one of the farm's defects. A route added later without a row in the table
+// fails the first test.
 import { beforeAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { resetDatabase } from '../../support/db';
-import { CALLERS, CALLER_WORDS, type Answer, type Caller, type Side } from './callers';
+import { Defect } from '../../../server/models';
+import { CALLERS, CALLER_WORDS, isDealer, type Answer, type Caller, type Side } from './callers';
 import { EXPECTED, routeOf } from './expected';
 import { FLEET_CASES, type Case, type Ctx } from './cases-fleet';
 import { WORK_CASES } from './cases-work';
 import { ORG_CASES } from './cases-org';
 import { DEALER_CASES } from './cases-dealers';
+import { ACCOUNT_CASES } from './cases-account';
 import {
   app,
   changedTables,
@@ -30,6 +33,7 @@ const CASES: Record<string, Case> = {
   ...WORK_CASES,
   ...ORG_CASES,
   ...DEALER_CASES,
+  ...ACCOUNT_CASES,
 };
 
 async function documentedRoutes(): Promise<string[]> {
@@ -46,6 +50,15 @@ async function fingerprint() {
   const mark = await writeMark();
   if (mark !== known.mark) known = { mark, sums: await tenantChecksum() };
   return known;
+}
+
+/** The titles of the farm's defects, which no dealer's answer may carry (issue 16). */
+async function defectTitles(w: World): Promise<string[]> {
+  const rows = await Defect.findAll({
+    where: { organizationId: w.farm.org.id },
+    attributes: ['title'],
+  });
+  return [...new Set(rows.map((d) => d.title))];
 }
 
 /** One cell: the request, its answer against the table, and on a refusal the rows unchanged. */
@@ -65,6 +78,7 @@ async function runCell(w: World, key: string, caller: Caller, side: Side): Promi
   const [method, path] = routeOf(key).split(' ');
   const before = await fingerprint();
   const res = await send(method, ctx.cookie, { ...built, path: fill(path, built.params) });
+  if (spec.undo && res.status < 300) await spec.undo(ctx, res.body);
   const cell = `${CALLER_WORDS[caller]}, ${sideWords(side)}`;
   const problems: string[] = [];
   if (!allowed.some((a) => matches(res.status, a))) {
@@ -72,6 +86,11 @@ async function runCell(w: World, key: string, caller: Caller, side: Side): Promi
     problems.push(
       `${cell}: expected ${allowed.join(' or ')}, got ${res.status}${said ? ` (${said})` : ''}`,
     );
+  }
+  if (isDealer(caller)) {
+    const named = (await defectTitles(w)).filter((title) => res.text?.includes(title));
+    if (named.length)
+      problems.push(`${cell}: the answer names the farm's defects ${named.join(', ')}`);
   }
   if (res.status >= 400) {
     const after = await fingerprint();

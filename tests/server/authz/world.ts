@@ -105,6 +105,11 @@ async function seedFarm(name: string, prefix: string): Promise<FarmWorld> {
     body: { status: 'planned', plannedFor: inDays(3), taskIds: [task.id] },
   });
   farm.planId = plan.data.id;
+  // the visit fixed a defect: a service link reading the record must not learn its title
+  const fixed = await asManager(farm, 'POST', {
+    path: `${onMachine}/defects`,
+    body: { title: 'Seat belt buckle sticks', severity: 'major' },
+  });
   const completed = await asManager(farm, 'POST', {
     path: `${onMachine}/service-records`,
     body: {
@@ -113,6 +118,7 @@ async function seedFarm(name: string, prefix: string): Promise<FarmWorld> {
       meterValue: LAST_METER,
       taskIds: [task.id],
       measurements: [{ name: 'Brake lining', value: 4.2, unit: 'mm', specMin: 3, specMax: 6 }],
+      closesDefectIds: [fixed.data.id],
     },
   });
   farm.completedId = completed.data.id;
