@@ -218,7 +218,13 @@ describe('schedule API', () => {
     const task = await createTask(m, { intervalMeter: 500, intervalDays: 365 });
     const agent = await signedInAgent(app, user);
     const url = `/api/v1/organizations/${org.id}/tasks/${task.id}/last-done`;
-    const future = await agent.put(url).send({ lastDoneMeter: 900, lastDoneOn: '2999-01-01' });
+    // a year far outside the date window is refused by the schema; tomorrow on the farm's calendar
+    // passes the window and is refused by the last-done rule
+    const farOff = await agent.put(url).send({ lastDoneMeter: 900, lastDoneOn: '2999-01-01' });
+    expect(farOff.status).toBe(400);
+    expect(farOff.body.error.fields).toHaveProperty('lastDoneOn');
+    const tomorrow = addDaysIso(todayIso(org.timeZone), 1);
+    const future = await agent.put(url).send({ lastDoneMeter: 900, lastDoneOn: tomorrow });
     expect(future.status).toBe(422);
     expect(future.body.error.fields.lastDoneOn).toMatch(/after today/);
     const high = await agent.put(url).send({ lastDoneMeter: 1200, lastDoneOn: '2025-01-01' });
