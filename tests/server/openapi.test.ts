@@ -2,6 +2,7 @@ import { describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { Validator } from '@seriousme/openapi-schema-validator';
 import { createApp } from '../../server/app';
+import { routesWithoutResponseSchema } from '../../server/routes/route';
 
 const app = createApp();
 
@@ -32,6 +33,10 @@ describe('OpenAPI document', () => {
     expect(undocumented).toEqual([]);
     // …and every documented operation is a route the API answers (so the walk found them all).
     expect([...documented].filter((d) => !answered.includes(d))).toEqual([]);
+  });
+
+  it('route() — every route declares its response schema (or a raw body, or answers 204)', () => {
+    expect(routesWithoutResponseSchema()).toEqual([]);
   });
 });
 

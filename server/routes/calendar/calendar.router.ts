@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { z } from 'zod';
-import { route } from '../route';
+import { rawResponse, route } from '../route';
 import { documentRoute } from '../../openapi';
 import { notFound } from '../../errors';
 import {
@@ -43,6 +43,7 @@ export function calendarRouter(): Router {
     tags: ['calendar'],
     access: 'public',
     params: feedParams,
+    response: rawResponse('text/calendar', 'iCalendar text'),
     handler: async ({ res, params }) => {
       const ics = await feedCalendar(params.token);
       if (ics === null) throw notFound('Calendar feed');
