@@ -41,21 +41,24 @@ describe('server restarting, and the farm export button (browser)', () => {
     await page.close();
   });
 
-  it('team page — the manager has "Download the farm’s data" (a link to the export); a technician has not', async () => {
+  it('settings page — the manager has "Download the farm’s data" (a link to the export); a technician has not', async () => {
     const page = await browser.newPage(DESKTOP);
     await signIn(page, 'marta@larkspur.example', PASSWORD);
-    await page.getByRole('link', { name: 'Team' }).first().click();
-    const download = page.getByRole('link', { name: 'Download the farm’s data' });
+    await page.getByRole('link', { name: 'Settings' }).first().click();
+    // Its own section (the delete card offers the same download again, further down).
+    const download = page
+      .getByRole('region', { name: 'Your farm’s data' })
+      .getByRole('link', { name: 'Download the farm’s data' });
     await download.waitFor({ state: 'visible' });
     const href = (await download.getAttribute('href')) ?? '';
     const orgId = /^\/api\/v1\/organizations\/([0-9a-f-]{36})\/export$/.exec(href)?.[1];
     expect(orgId).toBeDefined();
-    await screenshot(page, 'team-farm-export');
+    await screenshot(page, 'settings-farm-export');
 
-    // The technician's menu has no Team item; the page itself is reachable by its address.
+    // The page itself is reachable by its address, whatever the technician's menu offers.
     await signIn(page, 'dev@larkspur.example', PASSWORD);
-    await page.goto(`/o/${orgId}/team`);
-    await page.getByRole('heading', { name: 'Team', level: 1 }).waitFor({ state: 'visible' });
+    await page.goto(`/o/${orgId}/settings`);
+    await page.getByRole('heading', { name: 'Settings', level: 1 }).waitFor({ state: 'visible' });
     expect(await page.getByRole('link', { name: 'Download the farm’s data' }).count()).toBe(0);
     await page.close();
   });

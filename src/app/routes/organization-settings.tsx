@@ -10,6 +10,7 @@ import {
   useUpdateOrganization,
 } from '../../features/settings/api/organization';
 import { DeleteOrganizationCard } from '../../features/settings/components/delete-organization-card';
+import { FarmExportCard } from '../../features/settings/components/farm-export-card';
 import {
   formValuesOf,
   OrganizationForm,
@@ -64,6 +65,14 @@ export function OrganizationSettingsPage() {
             onUpdate={(input) => update.mutateAsync(input)}
           />
         </Card>
+        {abilities.export ? (
+          <Section
+            title="Your farm’s data"
+            description="Everything the farm keeps here is the farm’s: download a copy at any time."
+          >
+            <FarmExportCard orgId={orgId} />
+          </Section>
+        ) : null}
         {abilities.delete ? (
           <Section
             title={`Delete ${data.kind === 'farm' ? 'the farm' : 'the dealer'}`}

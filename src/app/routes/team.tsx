@@ -8,7 +8,6 @@ import { PageHeader } from '../../components/ui/page-header';
 import { ListSkeleton } from '../../components/ui/skeleton';
 import { membersQueryOptions, useMembers } from '../../features/settings/api/get-members';
 import { InvitationList } from '../../features/settings/components/invitation-list';
-import { FarmExportCard } from '../../features/settings/components/farm-export-card';
 import { InviteForm } from '../../features/settings/components/invite-form';
 import { MemberList } from '../../features/settings/components/member-list';
 import { roleOptionsFor } from '../../features/settings/components/role-options';
@@ -78,15 +77,6 @@ export function TeamPage() {
           </>
         ) : members.isSuccess ? (
           <Alert tone="info">Only a manager can invite people or change roles.</Alert>
-        ) : null}
-
-        {organization.kind === 'farm' && membership.role === 'manager' ? (
-          <Section
-            title="Your farm’s data"
-            description="Everything the farm keeps here is the farm’s: download a copy at any time."
-          >
-            <FarmExportCard orgId={organization.id} />
-          </Section>
         ) : null}
       </div>
     </>
