@@ -42,6 +42,8 @@ export const fleetImportPreviewSchema = z.object({
   }),
 });
 export type FleetImportPreview = z.infer<typeof fleetImportPreviewSchema>;
+export const fleetImportPreviewResponseSchema = z.object({ data: fleetImportPreviewSchema });
+export type FleetImportPreviewResponse = z.infer<typeof fleetImportPreviewResponseSchema>;
 
 export const fleetImportResultSchema = z.object({
   created: z.number(),
@@ -52,3 +54,5 @@ export const fleetImportResultSchema = z.object({
   historyUnknown: z.number(),
 });
 export type FleetImportResult = z.infer<typeof fleetImportResultSchema>;
+export const fleetImportResultResponseSchema = z.object({ data: fleetImportResultSchema });
+export type FleetImportResultResponse = z.infer<typeof fleetImportResultResponseSchema>;

@@ -2,8 +2,8 @@ import { Router, type Request } from 'express';
 import { z } from 'zod';
 import { rawResponse, route } from '../route';
 import {
-  fleetImportPreviewSchema,
-  fleetImportResultSchema,
+  fleetImportPreviewResponseSchema,
+  fleetImportResultResponseSchema,
 } from '../../../shared/schemas/fleet-import';
 import { authorize } from '../../policies/access';
 import { canCreateMachine } from '../../policies/machine';
@@ -40,7 +40,7 @@ export function fleetImportRouter(): Router {
     params: orgParams,
     before: [csvUpload()],
     multipartBody: csvBody,
-    response: z.object({ data: fleetImportPreviewSchema }),
+    response: fleetImportPreviewResponseSchema,
     handler: async ({ req }) => ({
       data: await previewFleetImport(manager(req), req.file!.buffer),
     }),
@@ -56,7 +56,7 @@ export function fleetImportRouter(): Router {
     before: [csvUpload()],
     multipartBody: csvBody,
     status: 201,
-    response: z.object({ data: fleetImportResultSchema }),
+    response: fleetImportResultResponseSchema,
     handler: async ({ req }) => ({ data: await commitFleetImport(manager(req), req.file!.buffer) }),
   });
 
