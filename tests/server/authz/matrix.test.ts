@@ -52,13 +52,13 @@ async function fingerprint() {
   return known;
 }
 
-/** The titles of the farm's defects, which no dealer's answer may carry (issue 16). */
-async function defectTitles(w: World): Promise<string[]> {
+/** The ids and titles of the farm's defects, which no answer to a dealer may carry (issue 16). */
+async function defectNames(w: World): Promise<string[]> {
   const rows = await Defect.findAll({
     where: { organizationId: w.farm.org.id },
-    attributes: ['title'],
+    attributes: ['id', 'title'],
   });
-  return [...new Set(rows.map((d) => d.title))];
+  return [...new Set(rows.flatMap((d) => [d.id, d.title]))];
 }
 
 /** One cell: the request, its answer against the table, and on a refusal the rows unchanged. */
@@ -88,7 +88,7 @@ async function runCell(w: World, key: string, caller: Caller, side: Side): Promi
     );
   }
   if (isDealer(caller)) {
-    const named = (await defectTitles(w)).filter((title) => res.text?.includes(title));
+    const named = (await defectNames(w)).filter((name) => res.text?.includes(name));
     if (named.length)
       problems.push(`${cell}: the answer names the farm's defects ${named.join(', ')}`);
   }
