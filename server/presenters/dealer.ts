@@ -1,31 +1,9 @@
-import { z } from 'zod';
 import type { DealerLink, ServiceBooking } from '../models';
-import {
-  BOOKING_STATUSES,
-  DEALER_ACCESS,
-  DEALER_LINK_STATUSES,
-} from '../../shared/schemas/dealers';
-import { dueRowSchema } from './due';
-import { peopleById, personSchema } from './people';
-
-const orgRef = z.object({ id: z.string(), name: z.string() });
-const accessEnum = z.enum(DEALER_ACCESS);
+import type { Booking, Customer, FarmDealerLink } from '../../shared/schemas/dealer-responses';
+import { peopleById } from './people';
 
 /** A link as the farm sees it: which dealer, what access, since when. */
-export const farmDealerLinkSchema = z
-  .object({
-    id: z.string(),
-    dealer: orgRef,
-    access: accessEnum,
-    status: z.enum(DEALER_LINK_STATUSES),
-    initiatedBy: z.enum(['dealer', 'farm']),
-    acceptedAt: z.string().nullable(),
-    revokedAt: z.string().nullable(),
-    abilities: z.object({ update: z.boolean(), revoke: z.boolean() }),
-  })
-  .openapi('FarmDealerLink');
-
-export function presentFarmLink(link: DealerLink, canManage: boolean) {
+export function presentFarmLink(link: DealerLink, canManage: boolean): FarmDealerLink {
   return {
     id: link.id,
     dealer: { id: link.dealerOrganizationId, name: link.dealer?.name ?? '' },
@@ -42,21 +20,7 @@ export function presentFarmLink(link: DealerLink, canManage: boolean) {
 }
 
 /** A link as the dealer sees it: a customer (active) or a request waiting for the farm. */
-export const customerSchema = z
-  .object({
-    id: z.string(),
-    status: z.enum(DEALER_LINK_STATUSES),
-    customer: orgRef.nullable(),
-    access: accessEnum.nullable(),
-    invitedEmail: z.string(),
-    machineCount: z.number(),
-    acceptedAt: z.string().nullable(),
-    expiresAt: z.string().nullable(),
-    createdAt: z.string(),
-  })
-  .openapi('DealerCustomer');
-
-export function presentCustomer(link: DealerLink, machineCount: number) {
+export function presentCustomer(link: DealerLink, machineCount: number): Customer {
   const active = link.status === 'active';
   return {
     id: link.id,
@@ -71,76 +35,11 @@ export function presentCustomer(link: DealerLink, machineCount: number) {
   };
 }
 
-export const boardRowSchema = dueRowSchema
-  .extend({
-    customer: orgRef.extend({ access: accessEnum }),
-    lastReadingAgeDays: z
-      .number()
-      .nullable()
-      .openapi({ description: 'whole days since the last reading; null without readings' }),
-  })
-  .openapi('BoardRow');
-
-const partLine = z.object({
-  partNumber: z.string(),
-  description: z.string(),
-  quantity: z.number(),
-  machines: z.number(),
-  services: z.number(),
-  firstNeededOn: z.string(),
-});
-const fluidLine = z.object({
-  kind: z.string(),
-  unit: z.string(),
-  volume: z.number(),
-  machines: z.number(),
-  services: z.number(),
-  firstNeededOn: z.string(),
-});
-export const partsForecastSchema = z
-  .object({
-    asOf: z.string(),
-    horizon: z.number(),
-    services: z.number(),
-    undated: z.number(),
-    customers: z.array(orgRef.extend({ access: accessEnum })),
-    parts: z.array(partLine),
-    fluids: z.array(fluidLine),
-    byCustomer: z.array(
-      z.object({ customer: orgRef, parts: z.array(partLine), fluids: z.array(fluidLine) }),
-    ),
-  })
-  .openapi('PartsForecast');
-
-export const bookingSchema = z
-  .object({
-    id: z.string(),
-    status: z.enum(BOOKING_STATUSES),
-    proposedFor: z.string(),
-    note: z.string(),
-    responseNote: z.string(),
-    customer: orgRef,
-    dealer: orgRef,
-    proposedBy: personSchema.nullable(),
-    decidedBy: personSchema.nullable(),
-    decidedAt: z.string().nullable(),
-    createdAt: z.string(),
-    items: z.array(
-      z.object({
-        machine: z.object({ id: z.string(), fleetNumber: z.string(), name: z.string() }),
-        tasks: z.array(z.object({ taskId: z.string(), name: z.string() })),
-        serviceRecordId: z.string().nullable(),
-      }),
-    ),
-    abilities: z.object({ accept: z.boolean(), decline: z.boolean(), cancel: z.boolean() }),
-  })
-  .openapi('ServiceBooking');
-
 export async function presentBookings(
   bookings: ServiceBooking[],
   names: Map<string, string>,
   abilities: (b: ServiceBooking) => { accept: boolean; decline: boolean; cancel: boolean },
-) {
+): Promise<Booking[]> {
   const person = await peopleById(bookings.flatMap((b) => [b.proposedBy, b.decidedBy]));
   return bookings.map((b) => ({
     id: b.id,
@@ -156,24 +55,9 @@ export async function presentBookings(
     createdAt: b.createdAt.toISOString(),
     items: b.items.map((i) => ({
       machine: { id: i.machineId, fleetNumber: i.fleetNumber, name: i.machineName },
-      tasks: i.tasks,
+      tasks: i.tasks.map((t) => ({ taskId: t.taskId, name: t.name })),
       serviceRecordId: i.serviceRecordId,
     })),
     abilities: abilities(b),
   }));
 }
-
-export const auditEventSchema = z
-  .object({
-    id: z.string(),
-    action: z.string(),
-    entityType: z.string(),
-    entityId: z.string().nullable(),
-    path: z.string().nullable(),
-    actor: personSchema.nullable(),
-    dealer: orgRef.nullable().openapi({
-      description: 'the dealer the actor acted for (null: the farm’s own people)',
-    }),
-    createdAt: z.string(),
-  })
-  .openapi('AuditEvent');

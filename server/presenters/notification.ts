@@ -1,28 +1,15 @@
-import { z } from 'zod';
-import type { Notification } from '../models';
-import { DIGEST_FREQUENCIES, NOTIFICATION_STATUSES } from '../../shared/schemas/notifications';
+import type { CalendarFeed, Notification } from '../models';
+import { MACHINE_CATEGORIES, type MachineCategory } from '../../shared/constants';
+import type {
+  CalendarFeed as CalendarFeedJson,
+  DigestPreference,
+  SentMessage,
+  SentMessageDetail,
+} from '../../shared/schemas/notifications';
 import type { EffectivePreference } from '../services/reminders';
+import { feedUrl } from '../services/calendar';
 
-export const notificationSummarySchema = z
-  .object({
-    id: z.string(),
-    recipient: z.string(),
-    kind: z.string(),
-    subject: z.string(),
-    status: z.enum(NOTIFICATION_STATUSES),
-    attempts: z.number(),
-    lastError: z.string().nullable(),
-    createdAt: z.string(),
-    sentAt: z.string().nullable(),
-    nextAttemptAt: z.string().nullable(),
-  })
-  .openapi('NotificationSummary');
-
-export const notificationSchema = notificationSummarySchema
-  .extend({ text: z.string(), html: z.string().nullable() })
-  .openapi('Notification');
-
-export function presentNotificationSummary(n: Notification) {
+export function presentNotificationSummary(n: Notification): SentMessage {
   return {
     id: n.id,
     recipient: n.recipient,
@@ -50,26 +37,26 @@ const SECRET_NOTE =
 const UNSUBSCRIBE_LINK = /(\/api\/v1\/unsubscribe\/)[A-Za-z0-9._-]+/g;
 const withoutUnsubscribeLinks = (body: string) => body.replace(UNSUBSCRIBE_LINK, '$1…');
 
-export const presentNotification = (n: Notification) => ({
+export const presentNotification = (n: Notification): SentMessageDetail => ({
   ...presentNotificationSummary(n),
   text: SECRET_KINDS.has(n.kind) ? SECRET_NOTE : withoutUnsubscribeLinks(n.textBody),
   html: SECRET_KINDS.has(n.kind) || !n.htmlBody ? null : withoutUnsubscribeLinks(n.htmlBody),
 });
 
-export const preferenceSchema = z
-  .object({
-    frequency: z.enum(DIGEST_FREQUENCIES),
-    weekday: z.number(),
-    machineIds: z.array(z.string()),
-    categories: z.array(z.string()),
-    isDefault: z.boolean(),
-  })
-  .openapi('NotificationPreference');
+const isCategory = (c: string): c is MachineCategory =>
+  (MACHINE_CATEGORIES as readonly string[]).includes(c);
 
-export const presentPreference = (p: EffectivePreference) => ({
+export const presentPreference = (p: EffectivePreference): DigestPreference => ({
   frequency: p.frequency,
   weekday: p.weekday,
   machineIds: p.machineIds,
-  categories: p.categories,
+  categories: p.categories.filter(isCategory),
   isDefault: p.isDefault,
+});
+
+export const presentFeed = (feed: CalendarFeed): CalendarFeedJson => ({
+  id: feed.id,
+  scope: feed.userId ? 'personal' : 'farm',
+  url: feedUrl(feed.id),
+  createdAt: feed.createdAt.toISOString(),
 });

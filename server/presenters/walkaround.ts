@@ -1,24 +1,14 @@
-import { z } from 'zod';
 import type { ChecklistTemplate, Machine, Walkaround } from '../models';
 import type { ChecklistItem } from '../models/walkaround';
-import { MACHINE_CATEGORIES } from '../../shared/constants';
-import { HAZARDS } from '../../shared/schemas/schedule';
-import { WALKAROUND_PURPOSES, WALKAROUND_RESULTS } from '../../shared/schemas/walkarounds';
-import { machineRefSchema, presentMachineRef, walkaroundPhotoUrls } from './defect';
-import { personSchema, type PeopleLookup } from './people';
+import type {
+  ChecklistItem as ChecklistItemJson,
+  ChecklistTemplate as ChecklistTemplateJson,
+  Walkaround as WalkaroundJson,
+} from '../../shared/schemas/walkarounds';
+import { presentMachineRef, walkaroundPhotoUrls } from './defect';
+import type { PeopleLookup } from './people';
 
-export const checklistItemOutSchema = z
-  .object({
-    id: z.string(),
-    label: z.string(),
-    guidance: z.string(),
-    critical: z.boolean(),
-    hazards: z.array(z.enum(HAZARDS)),
-    caution: z.string(),
-  })
-  .openapi('ChecklistItem');
-
-export const presentChecklistItem = (i: ChecklistItem) => ({
+export const presentChecklistItem = (i: ChecklistItem): ChecklistItemJson => ({
   id: i.id,
   label: i.label,
   guidance: i.guidance,
@@ -27,18 +17,7 @@ export const presentChecklistItem = (i: ChecklistItem) => ({
   caution: i.caution,
 });
 
-export const checklistTemplateSchema = z
-  .object({
-    id: z.string(),
-    category: z.enum(MACHINE_CATEGORIES),
-    name: z.string(),
-    description: z.string(),
-    items: z.array(checklistItemOutSchema),
-    updatedAt: z.string(),
-  })
-  .openapi('ChecklistTemplate');
-
-export const presentChecklistTemplate = (t: ChecklistTemplate) => ({
+export const presentChecklistTemplate = (t: ChecklistTemplate): ChecklistTemplateJson => ({
   id: t.id,
   category: t.category,
   name: t.name,
@@ -47,39 +26,11 @@ export const presentChecklistTemplate = (t: ChecklistTemplate) => ({
   updatedAt: t.updatedAt.toISOString(),
 });
 
-export const walkaroundSchema = z
-  .object({
-    id: z.string(),
-    clientId: z.string(),
-    machine: machineRefSchema,
-    operator: personSchema.nullable(),
-    purpose: z.enum(WALKAROUND_PURPOSES),
-    performedAt: z.string(),
-    meterValue: z.number(),
-    readingId: z.string().nullable(),
-    templateId: z.string().nullable(),
-    templateName: z.string(),
-    result: z.enum(WALKAROUND_RESULTS),
-    taggedOut: z.boolean(),
-    notes: z.string(),
-    counts: z.object({ ok: z.number(), attention: z.number(), fail: z.number() }),
-    items: z.array(
-      z.object({
-        itemId: z.string(),
-        label: z.string(),
-        critical: z.boolean(),
-        result: z.enum(WALKAROUND_RESULTS),
-        note: z.string(),
-        photoId: z.string().nullable(),
-        photoUrl: z.string().nullable(),
-        thumbnailUrl: z.string().nullable(),
-      }),
-    ),
-    createdAt: z.string(),
-  })
-  .openapi('Walkaround');
-
-export const presentWalkaround = (w: Walkaround, machine: Machine, people: PeopleLookup) => ({
+export const presentWalkaround = (
+  w: Walkaround,
+  machine: Machine,
+  people: PeopleLookup,
+): WalkaroundJson => ({
   id: w.id,
   clientId: w.clientId,
   machine: presentMachineRef(machine),
@@ -99,7 +50,12 @@ export const presentWalkaround = (w: Walkaround, machine: Machine, people: Peopl
     fail: w.items.filter((i) => i.result === 'fail').length,
   },
   items: w.items.map((i) => ({
-    ...i,
+    itemId: i.itemId,
+    label: i.label,
+    critical: i.critical,
+    result: i.result,
+    note: i.note,
+    photoId: i.photoId,
     ...walkaroundPhotoUrls(w.organizationId, i.photoId),
   })),
   createdAt: w.createdAt.toISOString(),

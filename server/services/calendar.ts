@@ -30,15 +30,6 @@ export const feedToken = (feedId: string) =>
 export const feedUrl = (feedId: string) =>
   `${env.APP_URL}/api/v1/calendar/${feedToken(feedId)}.ics`;
 
-export function presentFeed(feed: CalendarFeed) {
-  return {
-    id: feed.id,
-    scope: (feed.userId ? 'personal' : 'farm') as CalendarFeedScope,
-    url: feedUrl(feed.id),
-    createdAt: feed.createdAt.toISOString(),
-  };
-}
-
 const liveFeed = (organizationId: string, userId: string | null) =>
   CalendarFeed.findOne({ where: { organizationId, userId, revokedAt: null } });
 

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { pagingFields, plainText, uuid } from './common';
+import { machineRefSchema, pageMetaSchema, personRefSchema } from './refs';
 
 // Defects: found on a walkaround or reported directly, handled by the shop.
 
@@ -86,3 +87,70 @@ export const returnToServiceSchema = z.object({
   }),
 });
 export type ReturnToServiceInput = z.infer<typeof returnToServiceSchema>;
+
+// --- Responses ---------------------------------------------------------------------------------
+
+export const defectSchema = z
+  .object({
+    id: z.string(),
+    machine: machineRefSchema,
+    title: z.string(),
+    description: z.string(),
+    severity: z.enum(DEFECT_SEVERITIES),
+    status: z.enum(DEFECT_STATUSES),
+    walkaroundId: z.string().nullable(),
+    itemId: z.string().nullable(),
+    photoUrl: z.string().nullable(),
+    thumbnailUrl: z.string().nullable(),
+    /** the same defect found again on later walkarounds adds to this */
+    reportCount: z.number(),
+    lastReportedAt: z.string(),
+    reportedBy: personRefSchema.nullable(),
+    assignedTo: personRefSchema.nullable(),
+    fixedAt: z.string().nullable(),
+    fixedBy: personRefSchema.nullable(),
+    fixedByRecordId: z.string().nullable(),
+    fixNote: z.string(),
+    createdAt: z.string(),
+    updatedAt: z.string(),
+  })
+  .meta({ id: 'Defect' });
+export type Defect = z.infer<typeof defectSchema>;
+
+export const defectAbilitiesSchema = z.object({
+  update: z.boolean(),
+  close: z.boolean(),
+  /** the caller may return tagged-out machines to service (the farm's technicians, managers) */
+  returnToService: z.boolean(),
+});
+export type DefectAbilities = z.infer<typeof defectAbilitiesSchema>;
+
+export const defectListResponseSchema = z.object({
+  data: z.array(defectSchema),
+  meta: pageMetaSchema.extend({
+    activeBySeverity: z.object({ critical: z.number(), major: z.number(), minor: z.number() }),
+  }),
+  abilities: defectAbilitiesSchema,
+});
+export type DefectList = z.infer<typeof defectListResponseSchema>;
+
+export const defectResponseSchema = z.object({
+  data: defectSchema,
+  abilities: defectAbilitiesSchema,
+});
+export type DefectResponse = z.infer<typeof defectResponseSchema>;
+
+/** Reporting answers the machine as it is now (a critical defect tags it out). */
+export const reportedDefectResponseSchema = defectResponseSchema.extend({
+  machine: machineRefSchema,
+  taggedOut: z.boolean(),
+  message: z.string().nullable(),
+});
+export type ReportedDefect = z.infer<typeof reportedDefectResponseSchema>;
+
+/** Closing answers the machine (its status unchanged) and its open critical count. */
+export const closedDefectResponseSchema = defectResponseSchema.extend({
+  machine: machineRefSchema,
+  openCriticalDefects: z.number(),
+});
+export type ClosedDefect = z.infer<typeof closedDefectResponseSchema>;

@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { MACHINE_CATEGORIES } from '../constants';
 import { uuid, pagingFields } from './common';
+import { pageMetaSchema } from './refs';
 
 export const DIGEST_FREQUENCIES = ['daily', 'weekly', 'off'] as const;
 export type DigestFrequency = (typeof DIGEST_FREQUENCIES)[number];
@@ -83,3 +84,88 @@ export const NOTIFICATION_KIND_LABELS: Record<string, string> = {
   invitation: 'Invitation',
   password_reset: 'Password reset',
 };
+
+// --- Responses ---------------------------------------------------------------------------------
+
+export const notificationSummarySchema = z
+  .object({
+    id: z.string(),
+    recipient: z.string(),
+    kind: z.string(),
+    subject: z.string(),
+    status: z.enum(NOTIFICATION_STATUSES),
+    attempts: z.number(),
+    lastError: z.string().nullable(),
+    createdAt: z.string(),
+    sentAt: z.string().nullable(),
+    /** only a queued message has a next attempt */
+    nextAttemptAt: z.string().nullable(),
+  })
+  .meta({ id: 'NotificationSummary' });
+export type SentMessage = z.infer<typeof notificationSummarySchema>;
+
+export const notificationSchema = notificationSummarySchema
+  .extend({ text: z.string(), html: z.string().nullable() })
+  .meta({ id: 'Notification' });
+export type SentMessageDetail = z.infer<typeof notificationSchema>;
+
+export const sentMessageListResponseSchema = z.object({
+  data: z.array(notificationSummarySchema),
+  meta: pageMetaSchema.extend({
+    counts: z.record(z.enum(NOTIFICATION_STATUSES), z.number()),
+  }),
+});
+export type SentMessageList = z.infer<typeof sentMessageListResponseSchema>;
+export const sentMessageResponseSchema = z.object({ data: notificationSchema });
+
+export const preferenceSchema = z
+  .object({
+    frequency: z.enum(DIGEST_FREQUENCIES),
+    /** ISO weekday of the weekly digest */
+    weekday: z.number(),
+    machineIds: z.array(z.string()),
+    categories: z.array(z.enum(MACHINE_CATEGORIES)),
+    /** nothing saved yet: the role's default */
+    isDefault: z.boolean(),
+  })
+  .meta({ id: 'NotificationPreference' });
+export type DigestPreference = z.infer<typeof preferenceSchema>;
+
+export const reminderSettingsOutSchema = z.object({ digestHour: z.number(), timeZone: z.string() });
+
+export const reminderPreferencesResponseSchema = z.object({
+  data: preferenceSchema,
+  meta: reminderSettingsOutSchema.extend({
+    machines: z.array(
+      z.object({
+        id: z.string(),
+        fleetNumber: z.string(),
+        name: z.string(),
+        category: z.enum(MACHINE_CATEGORIES),
+      }),
+    ),
+  }),
+  abilities: z.object({ setDigestHour: z.boolean(), manageFarmFeed: z.boolean() }),
+});
+export type ReminderPreferences = z.infer<typeof reminderPreferencesResponseSchema>;
+export const preferenceResponseSchema = z.object({ data: preferenceSchema });
+export const reminderSettingsResponseSchema = z.object({ data: reminderSettingsOutSchema });
+
+export const calendarFeedSchema = z
+  .object({
+    id: z.string(),
+    scope: z.enum(CALENDAR_FEED_SCOPES),
+    /** the secret address to subscribe to */
+    url: z.string(),
+    createdAt: z.string(),
+  })
+  .meta({ id: 'CalendarFeed' });
+export type CalendarFeed = z.infer<typeof calendarFeedSchema>;
+
+export const calendarFeedsSchema = z.object({
+  personal: calendarFeedSchema.nullable(),
+  farm: calendarFeedSchema.nullable(),
+});
+export type CalendarFeeds = z.infer<typeof calendarFeedsSchema>;
+export const calendarFeedsResponseSchema = z.object({ data: calendarFeedsSchema });
+export const calendarFeedResponseSchema = z.object({ data: calendarFeedSchema });

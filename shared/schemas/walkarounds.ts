@@ -3,6 +3,8 @@ import { MACHINE_CATEGORIES } from '../constants';
 import { boundedNumber, isoDateTime, pagingFields, PAST_DATES, plainText, uuid } from './common';
 import { HAZARDS } from './schedule';
 import { METER_BOUNDS } from './readings';
+import { defectSchema } from './defects';
+import { machineRefSchema, pageMetaSchema, personRefSchema } from './refs';
 
 // Daily walkarounds (pre-operation inspections) and the checklist templates they follow.
 
@@ -106,3 +108,131 @@ export type WalkaroundListQuery = z.infer<typeof walkaroundListQuerySchema>;
 
 /** Largest walkaround photo, bytes. */
 export const WALKAROUND_PHOTO_MAX_BYTES = 10 * 1024 * 1024;
+
+// --- Responses ---------------------------------------------------------------------------------
+
+export const checklistItemOutSchema = z
+  .object({
+    id: z.string(),
+    label: z.string(),
+    guidance: z.string(),
+    /** a fail here tags the machine out */
+    critical: z.boolean(),
+    hazards: z.array(z.enum(HAZARDS)),
+    /** the server's caution text for the item's hazards (empty when it has none) */
+    caution: z.string(),
+  })
+  .meta({ id: 'ChecklistItem' });
+export type ChecklistItem = z.infer<typeof checklistItemOutSchema>;
+
+/** A farm's own checklist of a machine category. */
+export const checklistTemplateSchema = z
+  .object({
+    id: z.string(),
+    category: z.enum(MACHINE_CATEGORIES),
+    name: z.string(),
+    description: z.string(),
+    items: z.array(checklistItemOutSchema),
+    updatedAt: z.string(),
+  })
+  .meta({ id: 'ChecklistTemplate' });
+export type ChecklistTemplate = z.infer<typeof checklistTemplateSchema>;
+
+const editAbilities = z.object({ edit: z.boolean() });
+export const checklistTemplateListResponseSchema = z.object({
+  data: z.array(checklistTemplateSchema),
+  abilities: editAbilities,
+});
+export type ChecklistTemplateList = z.infer<typeof checklistTemplateListResponseSchema>;
+export const checklistTemplateResponseSchema = z.object({ data: checklistTemplateSchema });
+export const checklistTemplateWithAbilitiesSchema = checklistTemplateResponseSchema.extend({
+  abilities: editAbilities,
+});
+
+/** The list Hourstone ships for a category: used where the farm has none, and a starting point. */
+export const builtInChecklistSchema = checklistTemplateSchema.omit({ id: true, updatedAt: true });
+export type BuiltInChecklist = z.infer<typeof builtInChecklistSchema>;
+export const builtInChecklistResponseSchema = z.object({ data: builtInChecklistSchema });
+
+/** The checklist a walkaround starts from, with the machine and its last reading. */
+export const checklistSchema = z.object({
+  machine: machineRefSchema.extend({
+    lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
+  }),
+  purpose: z.enum(WALKAROUND_PURPOSES),
+  template: z.object({
+    id: z.string().nullable(),
+    name: z.string(),
+    description: z.string(),
+    source: z.enum(['farm', 'built_in']),
+  }),
+  items: z.array(checklistItemOutSchema),
+  criticalNote: z.string(),
+});
+export type Checklist = z.infer<typeof checklistSchema>;
+export const checklistResponseSchema = z.object({
+  data: checklistSchema,
+  abilities: z.object({ editTemplate: z.boolean(), inspect: z.boolean() }),
+});
+export type ChecklistResponse = z.infer<typeof checklistResponseSchema>;
+
+export const walkaroundSchema = z
+  .object({
+    id: z.string(),
+    clientId: z.string(),
+    machine: machineRefSchema,
+    operator: personRefSchema.nullable(),
+    purpose: z.enum(WALKAROUND_PURPOSES),
+    performedAt: z.string(),
+    meterValue: z.number(),
+    readingId: z.string().nullable(),
+    templateId: z.string().nullable(),
+    templateName: z.string(),
+    result: z.enum(WALKAROUND_RESULTS),
+    taggedOut: z.boolean(),
+    notes: z.string(),
+    counts: z.object({ ok: z.number(), attention: z.number(), fail: z.number() }),
+    items: z.array(
+      z.object({
+        itemId: z.string(),
+        label: z.string(),
+        critical: z.boolean(),
+        result: z.enum(WALKAROUND_RESULTS),
+        note: z.string(),
+        photoId: z.string().nullable(),
+        photoUrl: z.string().nullable(),
+        thumbnailUrl: z.string().nullable(),
+      }),
+    ),
+    createdAt: z.string(),
+  })
+  .meta({ id: 'Walkaround' });
+export type Walkaround = z.infer<typeof walkaroundSchema>;
+
+/** POST walkarounds: 201 new, 200 duplicate (that clientId was already sent). */
+export const walkaroundOutcomeSchema = z.object({
+  data: walkaroundSchema,
+  defects: z.array(defectSchema),
+  machine: machineRefSchema,
+  taggedOut: z.boolean(),
+  message: z.string().nullable(),
+  duplicate: z.boolean(),
+});
+export type WalkaroundOutcome = z.infer<typeof walkaroundOutcomeSchema>;
+
+export const walkaroundListResponseSchema = z.object({
+  data: z.array(walkaroundSchema),
+  meta: pageMetaSchema,
+});
+export const walkaroundResponseSchema = z.object({
+  data: walkaroundSchema,
+  defects: z.array(defectSchema),
+});
+
+export const walkaroundPhotoSchema = z.object({
+  id: z.string(),
+  photoUrl: z.string(),
+  thumbnailUrl: z.string(),
+});
+export type UploadedPhoto = z.infer<typeof walkaroundPhotoSchema>;
+export const walkaroundPhotoResponseSchema = z.object({ data: walkaroundPhotoSchema });

@@ -5,27 +5,15 @@ import { documentRoute } from '../../openapi';
 import { notFound } from '../../errors';
 import {
   calendarFeedCreateSchema,
-  CALENDAR_FEED_SCOPES,
+  calendarFeedResponseSchema,
+  calendarFeedsResponseSchema,
 } from '../../../shared/schemas/notifications';
-import {
-  createFeed,
-  feedCalendar,
-  feedsFor,
-  presentFeed,
-  revokeFeed,
-} from '../../services/calendar';
+import { createFeed, feedCalendar, feedsFor, revokeFeed } from '../../services/calendar';
+import { presentFeed } from '../../presenters/notification';
 import { authorize } from '../../policies/access';
 import { canHavePersonalFeed } from '../../policies/reminders';
 
 const orgParams = z.object({ orgId: z.uuid() });
-const feedSchema = z
-  .object({
-    id: z.string(),
-    scope: z.enum(CALENDAR_FEED_SCOPES),
-    url: z.string(),
-    createdAt: z.string(),
-  })
-  .openapi('CalendarFeed');
 const feedParams = z.object({
   token: z
     .string()
@@ -77,9 +65,7 @@ export function calendarRouter(): Router {
     summary: "The caller's personal feed link and, for a manager, the farm's",
     tags: ['calendar'],
     params: orgParams,
-    response: z.object({
-      data: z.object({ personal: feedSchema.nullable(), farm: feedSchema.nullable() }),
-    }),
+    response: calendarFeedsResponseSchema,
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canHavePersonalFeed(access), 'Calendar feeds are for the people of a farm');
@@ -102,7 +88,7 @@ export function calendarRouter(): Router {
     params: orgParams,
     body: calendarFeedCreateSchema,
     status: 201,
-    response: z.object({ data: feedSchema }),
+    response: calendarFeedResponseSchema,
     handler: async ({ req, body }) => ({
       data: presentFeed(await createFeed(req.access!, body.scope)),
     }),

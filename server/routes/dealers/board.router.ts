@@ -1,17 +1,21 @@
 import type { Request, Router } from 'express';
 import { z } from 'zod';
-import { route } from '../route';
+import { rawResponse, route } from '../route';
 import {
   boardQuerySchema,
   partsForecastQuerySchema,
   reminderSchema,
 } from '../../../shared/schemas/dealers';
-import { DUE_STATUSES } from '../../../shared/constants';
 import { uuid } from '../../../shared/schemas/common';
 import { invalid } from '../../errors';
 import { authorize } from '../../policies/access';
 import { canSendReminders, canUseDealerBoard } from '../../policies/dealer-link';
-import { boardRowSchema, partsForecastSchema } from '../../presenters/dealer';
+import {
+  boardResponseSchema,
+  partsForecastResponseSchema,
+  reminderDraftResponseSchema,
+  reminderSentResponseSchema,
+} from '../../../shared/schemas/dealer-responses';
 import { boardCsv, partsCsv } from '../../presenters/dealer-csv';
 import { boardRows, dealerBoard } from '../../services/dealer-board';
 import { partsForecast } from '../../services/parts-forecast';
@@ -21,7 +25,7 @@ import { orgParams, requireDealerOrg } from './sides';
 
 const customerParams = orgParams.extend({ customerId: z.uuid() });
 const pathOf = (req: Request) => req.originalUrl.split('?')[0];
-const csvResponse = z.string().openapi({ description: 'text/csv; an attachment' });
+const csvResponse = rawResponse('text/csv', 'CSV, as an attachment');
 
 function sendCsv(req: Request, name: string, body: string) {
   const res = req.res!;
@@ -48,19 +52,7 @@ export function registerBoardRoutes(router: Router): void {
     tags: ['dealers'],
     params: orgParams,
     query: boardQuerySchema,
-    response: z.object({
-      data: z.array(boardRowSchema),
-      meta: z.object({
-        asOf: z.string(),
-        total: z.number(),
-        page: z.number(),
-        pageSize: z.number(),
-        counts: z.object(Object.fromEntries(DUE_STATUSES.map((s) => [s, z.number()]))),
-        customers: z.array(
-          z.object({ id: z.string(), name: z.string(), access: z.enum(['view', 'service']) }),
-        ),
-      }),
-    }),
+    response: boardResponseSchema,
     handler: async ({ req, query }) => {
       const access = advisor(req);
       const board = await dealerBoard(access, query, pathOf(req));
@@ -105,7 +97,7 @@ export function registerBoardRoutes(router: Router): void {
     tags: ['dealers'],
     params: orgParams,
     query: partsForecastQuerySchema,
-    response: z.object({ data: partsForecastSchema }),
+    response: partsForecastResponseSchema,
     handler: async ({ req, query }) => {
       const access = advisor(req);
       return { data: await partsForecast(access, query, pathOf(req)) };
@@ -136,14 +128,7 @@ export function registerBoardRoutes(router: Router): void {
     query: z.object({
       taskIds: z.string().max(3000).openapi({ description: 'task ids, comma-separated' }),
     }),
-    response: z.object({
-      data: z.object({
-        customer: z.object({ id: z.string(), name: z.string() }),
-        subject: z.string(),
-        body: z.string(),
-        recipients: z.array(z.object({ name: z.string() })),
-      }),
-    }),
+    response: reminderDraftResponseSchema,
     handler: async ({ req, params, query }) => {
       const access = advisor(req);
       const ids = query.taskIds
@@ -166,9 +151,7 @@ export function registerBoardRoutes(router: Router): void {
     params: customerParams,
     body: reminderSchema,
     status: 201,
-    response: z.object({
-      data: z.object({ recipients: z.number(), queued: z.number(), duplicate: z.boolean() }),
-    }),
+    response: reminderSentResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = advisor(req);
       authorize(canSendReminders(access));

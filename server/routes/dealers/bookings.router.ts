@@ -11,7 +11,11 @@ import { notFound } from '../../errors';
 import { Organization, type ServiceBooking } from '../../models';
 import { authorize, type OrgAccess } from '../../policies/access';
 import { canDecideBookings, canListBookings, canProposeBookings } from '../../policies/dealer-link';
-import { bookingSchema, presentBookings } from '../../presenters/dealer';
+import { presentBookings } from '../../presenters/dealer';
+import {
+  bookingResponseSchema,
+  bookingsResponseSchema,
+} from '../../../shared/schemas/dealer-responses';
 import {
   acceptBooking,
   cancelBooking,
@@ -22,7 +26,7 @@ import {
 import { orgParams } from './sides';
 
 const bookingParams = orgParams.extend({ bookingId: z.uuid() });
-const one = z.object({ data: bookingSchema });
+const one = bookingResponseSchema;
 
 /** Bookings are reached as a member of either side; a dealer link does not reach them. */
 function side(access: OrgAccess | undefined): OrgAccess {
@@ -58,10 +62,7 @@ export function registerBookingRoutes(router: Router): void {
     tags: ['dealers'],
     params: orgParams,
     query: bookingListQuerySchema,
-    response: z.object({
-      data: z.array(bookingSchema),
-      abilities: z.object({ propose: z.boolean() }),
-    }),
+    response: bookingsResponseSchema,
     handler: async ({ req, query }) => {
       const access = side(req.access);
       authorize(canListBookings(access), 'Your role does not see bookings');

@@ -15,13 +15,15 @@ import {
   canUseDealerBoard,
   canViewAuditLog,
 } from '../../policies/dealer-link';
+import { presentCustomer, presentFarmLink } from '../../presenters/dealer';
 import {
-  auditEventSchema,
-  customerSchema,
-  farmDealerLinkSchema,
-  presentCustomer,
-  presentFarmLink,
-} from '../../presenters/dealer';
+  auditLogResponseSchema,
+  customerResponseSchema,
+  customersResponseSchema,
+  dealerInvitationResponseSchema,
+  farmDealerLinkResponseSchema,
+  farmDealerLinksResponseSchema,
+} from '../../../shared/schemas/dealer-responses';
 import {
   acceptDealerInvitation,
   changeLinkAccess,
@@ -50,10 +52,7 @@ export function registerLinkRoutes(router: Router): void {
     summary: "The dealer's customers (active links) and its requests waiting for a farm manager",
     tags: ['dealers'],
     params: orgParams,
-    response: z.object({
-      data: z.array(customerSchema),
-      abilities: z.object({ invite: z.boolean() }),
-    }),
+    response: customersResponseSchema,
     handler: async ({ req }) => {
       const access = requireDealerOrg(req.access);
       authorize(canUseDealerBoard(access));
@@ -74,7 +73,7 @@ export function registerLinkRoutes(router: Router): void {
     params: orgParams,
     body: customerInvitationSchema,
     status: 201,
-    response: z.object({ data: customerSchema }),
+    response: customerResponseSchema,
     handler: async ({ req, body }) => {
       const access = requireDealerOrg(req.access);
       authorize(canInviteCustomers(access), 'Only a service advisor may invite customers');
@@ -102,10 +101,7 @@ export function registerLinkRoutes(router: Router): void {
     summary: "The farm's dealer links: active ones with their access, then revoked ones",
     tags: ['dealers'],
     params: orgParams,
-    response: z.object({
-      data: z.array(farmDealerLinkSchema),
-      abilities: z.object({ invite: z.boolean() }),
-    }),
+    response: farmDealerLinksResponseSchema,
     handler: async ({ req }) => {
       const access = requireFarmOrg(req.access);
       authorize(canManageDealerLinks(access), managersOnly);
@@ -126,7 +122,7 @@ export function registerLinkRoutes(router: Router): void {
     params: orgParams,
     body: dealerInvitationSchema,
     status: 201,
-    response: z.object({ data: farmDealerLinkSchema }),
+    response: farmDealerLinkResponseSchema,
     handler: async ({ req, body }) => {
       const access = requireFarmOrg(req.access);
       authorize(canManageDealerLinks(access), managersOnly);
@@ -142,7 +138,7 @@ export function registerLinkRoutes(router: Router): void {
     tags: ['dealers'],
     params: linkParams,
     body: dealerLinkUpdateSchema,
-    response: z.object({ data: farmDealerLinkSchema }),
+    response: farmDealerLinkResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = requireFarmOrg(req.access);
       authorize(canManageDealerLinks(access), managersOnly);
@@ -158,7 +154,7 @@ export function registerLinkRoutes(router: Router): void {
     summary: "Revoke a dealer's access: its next request to the farm answers 404",
     tags: ['dealers'],
     params: linkParams,
-    response: z.object({ data: farmDealerLinkSchema }),
+    response: farmDealerLinkResponseSchema,
     handler: async ({ req, params }) => {
       const access = requireFarmOrg(req.access);
       authorize(canManageDealerLinks(access), managersOnly);
@@ -174,11 +170,7 @@ export function registerLinkRoutes(router: Router): void {
     tags: ['dealers'],
     params: orgParams,
     query: auditQuerySchema,
-    response: z.object({
-      data: z.array(auditEventSchema),
-      meta: z.object({ total: z.number(), page: z.number(), pageSize: z.number() }),
-      dealers: z.array(z.object({ id: z.string(), name: z.string() })),
-    }),
+    response: auditLogResponseSchema,
     handler: async ({ req, query }) => {
       const access = requireFarmOrg(req.access);
       authorize(canViewAuditLog(access), 'Only a farm manager may read the audit log');
@@ -199,15 +191,7 @@ export function registerLinkRoutes(router: Router): void {
     tags: ['dealers'],
     access: 'user',
     params: tokenParams,
-    response: z.object({
-      data: z.object({
-        dealer: z.object({ id: z.string(), name: z.string() }),
-        invitedEmail: z.string(),
-        message: z.string(),
-        expiresAt: z.string().nullable(),
-        farms: z.array(z.object({ id: z.string(), name: z.string(), linked: z.boolean() })),
-      }),
-    }),
+    response: dealerInvitationResponseSchema,
     handler: async ({ req, params }) => {
       const link = await findOpenDealerInvitation(params.token);
       const farms = managedFarms(req.auth!);
@@ -243,7 +227,7 @@ export function registerLinkRoutes(router: Router): void {
     access: 'user',
     params: tokenParams,
     body: dealerInvitationAcceptSchema,
-    response: z.object({ data: farmDealerLinkSchema }),
+    response: farmDealerLinkResponseSchema,
     handler: async ({ req, params, body }) => {
       const { link } = await acceptDealerInvitation(req.auth!, params.token, body);
       return { data: presentFarmLink(link, true) };

@@ -3,10 +3,14 @@ import { Op } from 'sequelize';
 import { z } from 'zod';
 import { route } from '../route';
 import {
+  closedDefectResponseSchema,
   defectCloseSchema,
   defectCreateSchema,
   defectListQuerySchema,
+  defectListResponseSchema,
+  defectResponseSchema,
   defectUpdateSchema,
+  reportedDefectResponseSchema,
 } from '../../../shared/schemas/defects';
 import { authorize } from '../../policies/access';
 import { canHandleDefects, canReportDefect, defectAbilities } from '../../policies/defect';
@@ -21,12 +25,7 @@ import {
 } from '../../services/defects';
 import { sequelize } from '../../db';
 import { Defect, Machine } from '../../models';
-import {
-  defectSchema,
-  machineRefSchema,
-  presentDefect,
-  presentMachineRef,
-} from '../../presenters/defect';
+import { presentDefect, presentMachineRef } from '../../presenters/defect';
 import { peopleById } from '../../presenters/people';
 import type { OrgAccess } from '../../policies/access';
 
@@ -35,22 +34,8 @@ const machineParams = orgParams.extend({ machineId: z.uuid() });
 const defectParams = orgParams.extend({ defectId: z.uuid() });
 const shopOnly = 'Only a technician or manager handles defects';
 
-const abilitiesSchema = z.object({
-  update: z.boolean(),
-  close: z.boolean(),
-  returnToService: z.boolean(),
-});
-const listResponse = z.object({
-  data: z.array(defectSchema),
-  meta: z.object({
-    total: z.number(),
-    page: z.number(),
-    pageSize: z.number(),
-    activeBySeverity: z.object({ critical: z.number(), major: z.number(), minor: z.number() }),
-  }),
-  abilities: abilitiesSchema,
-});
-const oneResponse = z.object({ data: defectSchema, abilities: abilitiesSchema });
+const listResponse = defectListResponseSchema;
+const oneResponse = defectResponseSchema;
 
 async function present(defects: Defect[]) {
   if (!defects.length) return [];
@@ -133,11 +118,7 @@ export function defectsRouter(): Router {
     params: machineParams,
     body: defectCreateSchema,
     status: 201,
-    response: oneResponse.extend({
-      machine: machineRefSchema,
-      taggedOut: z.boolean(),
-      message: z.string().nullable(),
-    }),
+    response: reportedDefectResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
@@ -195,10 +176,7 @@ export function defectsRouter(): Router {
     tags: ['defects'],
     params: defectParams,
     body: defectCloseSchema,
-    response: oneResponse.extend({
-      machine: machineRefSchema,
-      openCriticalDefects: z.number(),
-    }),
+    response: closedDefectResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       await loadDefect(access, params.defectId);

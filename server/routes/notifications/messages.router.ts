@@ -5,15 +5,12 @@ import { Notification } from '../../models';
 import { notFound } from '../../errors';
 import { authorize } from '../../policies/access';
 import { canViewSentMessages } from '../../policies/reminders';
-import {
-  notificationSchema,
-  notificationSummarySchema,
-  presentNotification,
-  presentNotificationSummary,
-} from '../../presenters/notification';
+import { presentNotification, presentNotificationSummary } from '../../presenters/notification';
 import {
   NOTIFICATION_STATUSES,
   notificationListQuerySchema,
+  sentMessageListResponseSchema,
+  sentMessageResponseSchema,
   type NotificationStatusName,
 } from '../../../shared/schemas/notifications';
 import { sequelize } from '../../db';
@@ -32,15 +29,7 @@ export function messagesRouter(): Router {
     tags: ['notifications'],
     params: orgParams,
     query: notificationListQuerySchema,
-    response: z.object({
-      data: z.array(notificationSummarySchema),
-      meta: z.object({
-        total: z.number(),
-        page: z.number(),
-        pageSize: z.number(),
-        counts: z.record(z.enum(NOTIFICATION_STATUSES), z.number()),
-      }),
-    }),
+    response: sentMessageListResponseSchema,
     handler: async ({ req, query }) => {
       const access = req.access!;
       authorize(canViewSentMessages(access), FORBIDDEN);
@@ -85,7 +74,7 @@ export function messagesRouter(): Router {
     summary: 'One e-mail of the outbox with its content',
     tags: ['notifications'],
     params: orgParams.extend({ id: z.uuid() }),
-    response: z.object({ data: notificationSchema }),
+    response: sentMessageResponseSchema,
     handler: async ({ req, params }) => {
       const access = req.access!;
       authorize(canViewSentMessages(access), FORBIDDEN);

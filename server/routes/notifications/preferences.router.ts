@@ -6,7 +6,7 @@ import { Machine } from '../../models';
 import { authorize, type OrgAccess } from '../../policies/access';
 import { canViewMachine } from '../../policies/machine';
 import { canChooseDigest, canManageFarmFeed, canSetDigestHour } from '../../policies/reminders';
-import { preferenceSchema, presentPreference } from '../../presenters/notification';
+import { presentPreference } from '../../presenters/notification';
 import { operatorIdsOf } from '../../services/machines';
 import {
   digestHourOf,
@@ -16,6 +16,9 @@ import {
 } from '../../services/reminders';
 import {
   notificationPreferenceSchema,
+  preferenceResponseSchema,
+  reminderPreferencesResponseSchema,
+  reminderSettingsResponseSchema,
   reminderSettingsSchema,
 } from '../../../shared/schemas/notifications';
 
@@ -38,8 +41,6 @@ async function machineChoices(access: OrgAccess) {
     .map((m) => ({ id: m.id, fleetNumber: m.fleetNumber, name: m.name, category: m.category }));
 }
 
-const settingsSchema = z.object({ digestHour: z.number(), timeZone: z.string() });
-
 /** Each person's own digest choices; a manager also sets the farm's digest hour. */
 export function preferencesRouter(): Router {
   const router = Router();
@@ -51,20 +52,7 @@ export function preferencesRouter(): Router {
       "The caller's due-digest choices, the farm's digest hour and the machines to pick from",
     tags: ['notifications'],
     params: orgParams,
-    response: z.object({
-      data: preferenceSchema,
-      meta: settingsSchema.extend({
-        machines: z.array(
-          z.object({
-            id: z.string(),
-            fleetNumber: z.string(),
-            name: z.string(),
-            category: z.string(),
-          }),
-        ),
-      }),
-      abilities: z.object({ setDigestHour: z.boolean(), manageFarmFeed: z.boolean() }),
-    }),
+    response: reminderPreferencesResponseSchema,
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canChooseDigest(access), FARM_ONLY);
@@ -91,7 +79,7 @@ export function preferencesRouter(): Router {
     tags: ['notifications'],
     params: orgParams,
     body: notificationPreferenceSchema,
-    response: z.object({ data: preferenceSchema }),
+    response: preferenceResponseSchema,
     handler: async ({ req, body }) => {
       const access = req.access!;
       authorize(canChooseDigest(access), FARM_ONLY);
@@ -106,7 +94,7 @@ export function preferencesRouter(): Router {
     tags: ['notifications'],
     params: orgParams,
     body: reminderSettingsSchema,
-    response: z.object({ data: settingsSchema }),
+    response: reminderSettingsResponseSchema,
     handler: async ({ req, body }) => {
       const access = req.access!;
       authorize(canSetDigestHour(access), 'Only a manager may change the digest hour');

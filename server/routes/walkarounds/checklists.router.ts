@@ -3,18 +3,17 @@ import { z } from 'zod';
 import { route } from '../route';
 import { MACHINE_CATEGORIES } from '../../../shared/constants';
 import {
+  builtInChecklistResponseSchema,
   checklistTemplateCreateSchema,
+  checklistTemplateListResponseSchema,
+  checklistTemplateResponseSchema,
   checklistTemplateUpdateSchema,
+  checklistTemplateWithAbilitiesSchema,
 } from '../../../shared/schemas/walkarounds';
 import { authorize } from '../../policies/access';
 import { canEditChecklists } from '../../policies/walkaround';
 import { ChecklistTemplate } from '../../models';
-import {
-  checklistItemOutSchema,
-  checklistTemplateSchema,
-  presentChecklistItem,
-  presentChecklistTemplate,
-} from '../../presenters/walkaround';
+import { presentChecklistItem, presentChecklistTemplate } from '../../presenters/walkaround';
 import {
   createChecklistTemplate,
   deleteChecklistTemplate,
@@ -36,10 +35,7 @@ export function registerChecklistTemplateRoutes(router: Router): void {
     tags: ['walkarounds'],
     params: orgParams,
     query: z.object({ category: z.enum(MACHINE_CATEGORIES).optional() }),
-    response: z.object({
-      data: z.array(checklistTemplateSchema),
-      abilities: z.object({ edit: z.boolean() }),
-    }),
+    response: checklistTemplateListResponseSchema,
     handler: async ({ req, query }) => {
       const access = req.access!;
       const rows = await ChecklistTemplate.findAll({
@@ -63,14 +59,7 @@ export function registerChecklistTemplateRoutes(router: Router): void {
       'The built-in checklist of a category (used where the farm has none; a starting point for a new template)',
     tags: ['walkarounds'],
     params: orgParams.extend({ category: z.enum(MACHINE_CATEGORIES) }),
-    response: z.object({
-      data: z.object({
-        category: z.enum(MACHINE_CATEGORIES),
-        name: z.string(),
-        description: z.string(),
-        items: z.array(checklistItemOutSchema),
-      }),
-    }),
+    response: builtInChecklistResponseSchema,
     handler: ({ params }) => {
       const d = defaultChecklist(params.category);
       return {
@@ -93,7 +82,7 @@ export function registerChecklistTemplateRoutes(router: Router): void {
     params: orgParams,
     body: checklistTemplateCreateSchema,
     status: 201,
-    response: z.object({ data: checklistTemplateSchema }),
+    response: checklistTemplateResponseSchema,
     handler: async ({ req, body }) => {
       const access = req.access!;
       authorize(canEditChecklists(access), managerOnly);
@@ -107,10 +96,7 @@ export function registerChecklistTemplateRoutes(router: Router): void {
     summary: 'One walkaround checklist',
     tags: ['walkarounds'],
     params: templateParams,
-    response: z.object({
-      data: checklistTemplateSchema,
-      abilities: z.object({ edit: z.boolean() }),
-    }),
+    response: checklistTemplateWithAbilitiesSchema,
     handler: async ({ req, params }) => {
       const access = req.access!;
       const t = await loadChecklistTemplate(access, params.templateId);
@@ -126,7 +112,7 @@ export function registerChecklistTemplateRoutes(router: Router): void {
     tags: ['walkarounds'],
     params: templateParams,
     body: checklistTemplateUpdateSchema,
-    response: z.object({ data: checklistTemplateSchema }),
+    response: checklistTemplateResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const t = await loadChecklistTemplate(access, params.templateId);

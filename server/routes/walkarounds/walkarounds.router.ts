@@ -4,10 +4,14 @@ import { z } from 'zod';
 import { route } from '../route';
 import {
   WALKAROUND_PHOTO_MAX_BYTES,
-  WALKAROUND_PURPOSES,
   checklistQuerySchema,
+  checklistResponseSchema,
   walkaroundCreateSchema,
   walkaroundListQuerySchema,
+  walkaroundListResponseSchema,
+  walkaroundOutcomeSchema,
+  walkaroundPhotoResponseSchema,
+  walkaroundResponseSchema,
 } from '../../../shared/schemas/walkarounds';
 import { authorize } from '../../policies/access';
 import { canDoWalkaround, canEditChecklists, canInspect } from '../../policies/walkaround';
@@ -25,19 +29,8 @@ import { prepareImage } from '../../services/images';
 import { fileUpload } from '../../middlewares/upload';
 import { AppError, notFound } from '../../errors';
 import { Defect, Machine, MachineForecast, Walkaround, WalkaroundPhoto } from '../../models';
-import {
-  checklistItemOutSchema,
-  presentChecklistItem,
-  presentWalkaround,
-  walkaroundSchema,
-} from '../../presenters/walkaround';
-import {
-  defectSchema,
-  machineRefSchema,
-  presentDefect,
-  presentMachineRef,
-  walkaroundPhotoUrls,
-} from '../../presenters/defect';
+import { presentChecklistItem, presentWalkaround } from '../../presenters/walkaround';
+import { presentDefect, presentMachineRef, walkaroundPhotoUrls } from '../../presenters/defect';
 import { peopleById } from '../../presenters/people';
 import { sendObject } from '../services/attachments.router';
 import { registerChecklistTemplateRoutes } from './checklists.router';
@@ -50,14 +43,7 @@ const machineParams = orgParams.extend({ machineId: z.uuid() });
 const CRITICAL_NOTE =
   'A fail on an item marked critical tags the machine out: it must not be used until a technician or manager clears it.';
 
-const outcomeSchema = z.object({
-  data: walkaroundSchema,
-  defects: z.array(defectSchema),
-  machine: machineRefSchema,
-  taggedOut: z.boolean(),
-  message: z.string().nullable(),
-  duplicate: z.boolean(),
-});
+const outcomeSchema = walkaroundOutcomeSchema;
 
 /** Walkarounds: the checklist for a machine, submission (offline-safe), photos, history, labels. */
 export function walkaroundsRouter(): Router {
@@ -73,23 +59,7 @@ export function walkaroundsRouter(): Router {
     tags: ['walkarounds'],
     params: machineParams,
     query: checklistQuerySchema,
-    response: z.object({
-      data: z.object({
-        machine: machineRefSchema.extend({
-          lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
-        }),
-        purpose: z.enum(WALKAROUND_PURPOSES),
-        template: z.object({
-          id: z.string().nullable(),
-          name: z.string(),
-          description: z.string(),
-          source: z.enum(['farm', 'built_in']),
-        }),
-        items: z.array(checklistItemOutSchema),
-        criticalNote: z.string(),
-      }),
-      abilities: z.object({ editTemplate: z.boolean(), inspect: z.boolean() }),
-    }),
+    response: checklistResponseSchema,
     handler: async ({ req, params, query }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
@@ -160,10 +130,7 @@ export function walkaroundsRouter(): Router {
     tags: ['walkarounds'],
     params: orgParams,
     query: walkaroundListQuerySchema,
-    response: z.object({
-      data: z.array(walkaroundSchema),
-      meta: z.object({ total: z.number(), page: z.number(), pageSize: z.number() }),
-    }),
+    response: walkaroundListResponseSchema,
     handler: async ({ req, query }) => {
       const access = req.access!;
       if (query.machineId) await loadMachine(access, query.machineId);
@@ -189,7 +156,7 @@ export function walkaroundsRouter(): Router {
     summary: 'One walkaround with the defects it raised',
     tags: ['walkarounds'],
     params: orgParams.extend({ walkaroundId: z.uuid() }),
-    response: z.object({ data: walkaroundSchema, defects: z.array(defectSchema) }),
+    response: walkaroundResponseSchema,
     handler: async ({ req, params }) => {
       const access = req.access!;
       const w = await Walkaround.findOne({
@@ -224,9 +191,7 @@ export function walkaroundsRouter(): Router {
     before: [fileUpload('photo', WALKAROUND_PHOTO_MAX_BYTES, 'a photo')],
     multipartBody: z.object({ photo: z.string().openapi({ format: 'binary' }) }),
     status: 201,
-    response: z.object({
-      data: z.object({ id: z.string(), photoUrl: z.string(), thumbnailUrl: z.string() }),
-    }),
+    response: walkaroundPhotoResponseSchema,
     handler: async ({ req, params }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);

@@ -1,34 +1,7 @@
-import type { MachineCategory } from '../../../../shared/constants';
-import type { Hazard } from '../../../../shared/schemas/schedule';
-
-export interface ChecklistItem {
-  id: string;
-  label: string;
-  guidance: string;
-  critical: boolean;
-  hazards: Hazard[];
-  caution: string;
-}
-
-/** A farm's own checklist of a machine category. */
-export interface ChecklistTemplate {
-  id: string;
-  category: MachineCategory;
-  name: string;
-  description: string;
-  items: ChecklistItem[];
-  updatedAt: string;
-}
-
-export interface ChecklistTemplateList {
-  data: ChecklistTemplate[];
-  abilities: { edit: boolean };
-}
-
-/** The list Hourstone ships for a category: used where the farm has none, and a starting point. */
-export interface BuiltInChecklist {
-  category: MachineCategory;
-  name: string;
-  description: string;
-  items: ChecklistItem[];
-}
+// The checklist-template API's answers are the shared schemas' types (shared/schemas/walkarounds.ts).
+export type {
+  BuiltInChecklist,
+  ChecklistItem,
+  ChecklistTemplate,
+  ChecklistTemplateList,
+} from '../../../../shared/schemas/walkarounds';

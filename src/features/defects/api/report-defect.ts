@@ -2,16 +2,9 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DefectCreateInput } from '../../../../shared/schemas/defects';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterDefectChange } from './invalidate';
-import type { Defect, DefectAbilities, MachineRef } from './types';
+import type { ReportedDefect } from './types';
 
-export interface ReportedDefect {
-  data: Defect;
-  abilities: DefectAbilities;
-  machine: MachineRef;
-  taggedOut: boolean;
-  /** what to tell the person when the report tagged the machine out */
-  message: string | null;
-}
+export type { ReportedDefect };
 
 /** POST …/machines/:machineId/defects (any farm role; critical tags the machine out). */
 export const reportDefect = (orgId: string, machineId: string, input: DefectCreateInput) =>

@@ -1,14 +1,14 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterDefectChange } from './invalidate';
-import type { MachineRef } from './types';
+import type { MachineRefResponse } from '../../../../shared/schemas/machines';
 
 /**
  * POST …/machines/:machineId/return-to-service with the note of what was checked: its own step,
  * never a side effect of closing defects; 409 while a critical defect is still open.
  */
 export const returnToService = (orgId: string, machineId: string, note: string) =>
-  apiClient.post<{ data: MachineRef }>(
+  apiClient.post<MachineRefResponse>(
     `/organizations/${segment(orgId)}/machines/${segment(machineId)}/return-to-service`,
     { note },
   );

@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { walkaroundKeys } from './keys';
+import type { MachineList } from '../../../../shared/schemas/machines';
 import type { PickableMachine } from './types';
 
 // The server answers only the machines the caller may see (an operator: the ones assigned to
@@ -10,10 +11,20 @@ const PICK_QUERY = 'sort=fleetNumber&order=asc&page=1&pageSize=200';
 /** Machines to pick for a walkaround: sold ones are left out, tagged-out ones kept (and shown). */
 export const getPickableMachines = (orgId: string, signal?: AbortSignal) =>
   apiClient
-    .get<{ data: PickableMachine[] }>(`/organizations/${segment(orgId)}/machines?${PICK_QUERY}`, {
-      signal,
-    })
-    .then((body) => body.data.filter((machine) => machine.status !== 'sold'));
+    .get<MachineList>(`/organizations/${segment(orgId)}/machines?${PICK_QUERY}`, { signal })
+    .then((body) =>
+      body.data
+        .filter((machine) => machine.status !== 'sold')
+        .map((m): PickableMachine => ({
+          id: m.id,
+          fleetNumber: m.fleetNumber,
+          name: m.name,
+          category: m.category,
+          status: m.status,
+          meterUnit: m.meterUnit,
+          lastReading: m.lastReading,
+        })),
+    );
 
 export const pickableMachinesQueryOptions = (orgId: string) =>
   queryOptions({
