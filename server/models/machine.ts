@@ -6,7 +6,7 @@ import {
   type InferCreationAttributes,
 } from 'sequelize';
 import { sequelize } from '../db';
-import { numericColumn } from './columns';
+import { minorUnitsColumn } from './columns';
 import type { MachineCategory, MachineStatus, MeterUnit } from '../../shared/constants';
 
 export class Machine extends Model<InferAttributes<Machine>, InferCreationAttributes<Machine>> {
@@ -19,8 +19,10 @@ export class Machine extends Model<InferAttributes<Machine>, InferCreationAttrib
   declare model: CreationOptional<string>;
   declare serialNumber: CreationOptional<string>;
   declare year: number | null;
-  declare purchasePrice: number | null;
-  declare listPrice: number | null;
+  /** minor units of the organization's currency */
+  declare purchasePriceMinor: number | null;
+  /** list price when new, minor units of the organization's currency */
+  declare listPriceMinor: number | null;
   declare meterUnit: CreationOptional<MeterUnit>;
   declare status: CreationOptional<MachineStatus>;
   /** months (1–12) the machine normally works; empty = all year */
@@ -42,8 +44,8 @@ Machine.init(
     model: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     serialNumber: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     year: { type: DataTypes.INTEGER, allowNull: true },
-    purchasePrice: numericColumn('purchasePrice', 12, 2, true),
-    listPrice: numericColumn('listPrice', 12, 2, true),
+    purchasePriceMinor: minorUnitsColumn('purchasePriceMinor'),
+    listPriceMinor: minorUnitsColumn('listPriceMinor'),
     meterUnit: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'h' },
     status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'in_service' },
     seasonMonths: { type: DataTypes.ARRAY(DataTypes.INTEGER), allowNull: false, defaultValue: [] },

@@ -1,5 +1,4 @@
 import { Op } from 'sequelize';
-import { z } from 'zod';
 import {
   Machine,
   ServiceAttachment,
@@ -7,14 +6,17 @@ import {
   ServiceRecord,
   ServiceTask,
 } from '../models';
-import { FLUID_UNITS } from '../../shared/schemas/schedule';
-import { SERVICE_STATUSES } from '../../shared/schemas/services';
-import { machineRefSchema, presentMachineRef } from './defect';
-import { peopleById, personSchema } from './people';
+import {
+  SPEC_STATUSES,
+  type Attachment,
+  type Measurement,
+  type ServiceRecord as PresentedRecord,
+} from '../../shared/schemas/service-responses';
+import { recordCosts } from '../../shared/domain/record-costs';
+import { presentMachineRef } from './defect';
+import { peopleById } from './people';
 
-const money = (n: number) => Math.round(n * 100) / 100;
-
-export const SPEC_STATUSES = ['in', 'low', 'high'] as const;
+export { SPEC_STATUSES };
 
 /** In or out of spec: below the minimum is low, above the maximum high; no spec given, null. */
 export function specStatus(
@@ -28,20 +30,7 @@ export function specStatus(
   return 'in';
 }
 
-export const measurementOutSchema = z
-  .object({
-    id: z.string(),
-    name: z.string(),
-    value: z.number(),
-    unit: z.string(),
-    specMin: z.number().nullable(),
-    specMax: z.number().nullable(),
-    inSpec: z.boolean().nullable(),
-    specStatus: z.enum(SPEC_STATUSES).nullable(),
-  })
-  .openapi('Measurement');
-
-export const presentMeasurement = (m: ServiceMeasurement) => {
+export const presentMeasurement = (m: ServiceMeasurement): Measurement => {
   const status = specStatus(m.value, m.specMin, m.specMax);
   return {
     id: m.id,
@@ -55,93 +44,18 @@ export const presentMeasurement = (m: ServiceMeasurement) => {
   };
 };
 
-export const attachmentSchema = z
-  .object({
-    id: z.string(),
-    kind: z.enum(['image', 'pdf']),
-    contentType: z.string(),
-    fileName: z.string(),
-    sizeBytes: z.number(),
-    url: z.string(),
-    thumbnailUrl: z.string().nullable(),
-    uploadedBy: personSchema.nullable(),
-    createdAt: z.string(),
-  })
-  .openapi('ServiceAttachment');
-
 export const attachmentUrl = (a: ServiceAttachment) =>
   `/api/v1/organizations/${a.organizationId}/service-records/${a.serviceRecordId}/attachments/${a.id}`;
 
-const lineCost = (qty: number, unitCost: number | null) =>
-  unitCost === null ? null : money(qty * unitCost);
+const hours2 = (n: number) => Math.round(n * 100) / 100;
 
-export const serviceRecordSchema = z
-  .object({
-    id: z.string(),
-    machine: machineRefSchema,
-    status: z.enum(SERVICE_STATUSES),
-    plannedFor: z.string().nullable(),
-    performedOn: z.string().nullable(),
-    meterValue: z.number().nullable(),
-    meterLifetime: z.number().nullable(),
-    readingId: z.string().nullable(),
-    tasks: z.array(
-      z.object({
-        taskId: z.string(),
-        name: z.string(),
-        onSchedule: z.boolean(),
-        labourHours: z.number().nullable(),
-      }),
-    ),
-    technicians: z.array(personSchema),
-    labourHours: z.number().nullable(),
-    estimatedLabourHours: z.number(),
-    parts: z.array(
-      z.object({
-        partNumber: z.string(),
-        description: z.string(),
-        quantity: z.number(),
-        unitCost: z.number().nullable(),
-        lineCost: z.number().nullable(),
-      }),
-    ),
-    fluids: z.array(
-      z.object({
-        kind: z.string(),
-        volume: z.number(),
-        unit: z.enum(FLUID_UNITS),
-        unitCost: z.number().nullable(),
-        lineCost: z.number().nullable(),
-      }),
-    ),
-    otherCosts: z.array(z.object({ description: z.string(), amount: z.number() })),
-    costs: z.object({
-      parts: z.number(),
-      fluids: z.number(),
-      other: z.number(),
-      total: z.number(),
-      linesWithoutCost: z.number(),
-    }),
-    notes: z.string(),
-    measurements: z.array(measurementOutSchema),
-    reassemblySettings: z.array(
-      z.object({ what: z.string(), value: z.string(), restored: z.boolean() }),
-    ),
-    unrestoredReason: z.string(),
-    defectIds: z.array(z.string()),
-    attachments: z.array(attachmentSchema),
-    createdBy: personSchema.nullable(),
-    completedBy: personSchema.nullable(),
-    completedAt: z.string().nullable(),
-    createdAt: z.string(),
-    updatedAt: z.string(),
-  })
-  .openapi('ServiceRecord');
-export type PresentedRecord = z.infer<typeof serviceRecordSchema>;
-
-/** Whether the reader may see which defects a record closes: a farm's members, never a dealer. */
+/**
+ * How the reader sees records: `withDefects`, whether they may see which defects a record closes
+ * (a farm's members, never a dealer); `currency`, the farm's (its costs are minor units of it).
+ */
 export interface RecordView {
   withDefects: boolean;
+  currency: string;
 }
 
 /**
@@ -150,7 +64,7 @@ export interface RecordView {
  */
 export async function presentRecords(
   records: ServiceRecord[],
-  view: RecordView = { withDefects: false },
+  view: RecordView,
 ): Promise<PresentedRecord[]> {
   if (!records.length) return [];
   const ids = records.map((r) => r.id);
@@ -194,11 +108,7 @@ export async function presentRecords(
   const attachmentsOf = group(attachments);
 
   return records.map((r) => {
-    const parts = r.parts.map((p) => ({ ...p, lineCost: lineCost(p.quantity, p.unitCost) }));
-    const fluids = r.fluids.map((f) => ({ ...f, lineCost: lineCost(f.volume, f.unitCost) }));
-    const partsCost = money(parts.reduce((s, p) => s + (p.lineCost ?? 0), 0));
-    const fluidsCost = money(fluids.reduce((s, f) => s + (f.lineCost ?? 0), 0));
-    const otherCost = money(r.otherCosts.reduce((s, c) => s + c.amount, 0));
+    const costs = recordCosts(r);
     const taskRows = r.tasks.map((t) => ({
       taskId: t.taskId,
       name: t.name,
@@ -217,23 +127,43 @@ export async function presentRecords(
       tasks: taskRows,
       technicians: r.technicianIds.map((id) => people(id) ?? { id, name: 'Former member' }),
       labourHours: r.labourHours,
-      estimatedLabourHours: money(taskRows.reduce((s, t) => s + (t.labourHours ?? 0), 0)),
-      parts,
-      fluids,
-      otherCosts: r.otherCosts,
+      estimatedLabourHours: hours2(taskRows.reduce((s, t) => s + (t.labourHours ?? 0), 0)),
+      currency: view.currency,
+      parts: r.parts.map((p, i) => ({
+        partNumber: p.partNumber,
+        description: p.description,
+        quantity: p.quantity,
+        unitCostMinor: p.unitCostMinor,
+        lineCostMinor: costs.partLines[i],
+      })),
+      fluids: r.fluids.map((f, i) => ({
+        kind: f.kind,
+        volume: f.volume,
+        unit: f.unit,
+        unitCostMinor: f.unitCostMinor,
+        lineCostMinor: costs.fluidLines[i],
+      })),
+      otherCosts: r.otherCosts.map((c) => ({
+        description: c.description,
+        amountMinor: c.amountMinor,
+      })),
       costs: {
-        parts: partsCost,
-        fluids: fluidsCost,
-        other: otherCost,
-        total: money(partsCost + fluidsCost + otherCost),
-        linesWithoutCost: [...parts, ...fluids].filter((l) => l.lineCost === null).length,
+        partsMinor: costs.partsMinor,
+        fluidsMinor: costs.fluidsMinor,
+        otherMinor: costs.otherMinor,
+        totalMinor: costs.totalMinor,
+        linesWithoutCost: costs.linesWithoutCost,
       },
       notes: r.notes,
       measurements: (measurementsOf.get(r.id) ?? []).map(presentMeasurement),
-      reassemblySettings: r.reassemblySettings,
+      reassemblySettings: r.reassemblySettings.map((x) => ({
+        what: x.what,
+        value: x.value,
+        restored: x.restored,
+      })),
       unrestoredReason: r.unrestoredReason,
       defectIds: view.withDefects ? r.defectIds : [],
-      attachments: (attachmentsOf.get(r.id) ?? []).map((a) => ({
+      attachments: (attachmentsOf.get(r.id) ?? []).map((a): Attachment => ({
         id: a.id,
         kind: a.kind,
         contentType: a.contentType,
@@ -253,6 +183,6 @@ export async function presentRecords(
   });
 }
 
-export async function presentRecord(record: ServiceRecord, view?: RecordView) {
+export async function presentRecord(record: ServiceRecord, view: RecordView) {
   return (await presentRecords([record], view))[0];
 }

@@ -55,11 +55,11 @@ export function localTime(iso: string, hour: number, timeZone: string): Date {
   return new Date(new TZDate(y, m - 1, d, hour, 0, 0, timeZone).getTime());
 }
 
-/** A stable invented price for a part number (the demo has no price list). */
+/** A stable invented price for a part number, in cents (the demo has no price list). */
 const partPrice = (partNumber: string) =>
-  round(14 + createRandom(seedFromString(`price/${partNumber}`)).between(0, 150));
+  Math.round((14 + createRandom(seedFromString(`price/${partNumber}`)).between(0, 150)) * 100);
 
-/** Invented prices per litre / kilogram, converted to the line's unit. */
+/** Invented prices per litre / kilogram, converted to the line's unit, in cents. */
 function fluidPrice(kind: string, unit: string) {
   const k = kind.toLowerCase();
   const perBase = k.includes('grease')
@@ -72,7 +72,7 @@ function fluidPrice(kind: string, unit: string) {
           ? 5.8
           : 4.9;
   const factor = { L: 1, kg: 1, gal: 3.78541, qt: 0.946353, lb: 0.453592 }[unit] ?? 1;
-  return round(perBase * factor);
+  return Math.round(perBase * factor * 100);
 }
 
 /** Raw value on the meter fitted at the time (T-03's meter was replaced). */
@@ -247,8 +247,8 @@ function settingsFor(
 const withCosts = (tasks: DemoTaskRow[]) => {
   const lines = prefillLines(tasks);
   return {
-    parts: lines.parts.map((p) => ({ ...p, unitCost: partPrice(p.partNumber) })),
-    fluids: lines.fluids.map((f) => ({ ...f, unitCost: fluidPrice(f.kind, f.unit) })),
+    parts: lines.parts.map((p) => ({ ...p, unitCostMinor: partPrice(p.partNumber) })),
+    fluids: lines.fluids.map((f) => ({ ...f, unitCostMinor: fluidPrice(f.kind, f.unit) })),
   };
 };
 
@@ -287,7 +287,7 @@ export function machineServiceHistory(
       technicianIds: m.shopPersonId ? [m.shopPersonId] : [],
       labourHours: Math.max(0.25, Math.round(labour * rng.between(0.9, 1.25) * 4) / 4),
       ...withCosts(v.tasks),
-      otherCosts: rng.chance(0.3) ? [{ description: 'Shop consumables', amount: 8.5 }] : [],
+      otherCosts: rng.chance(0.3) ? [{ description: 'Shop consumables', amountMinor: 850 }] : [],
       notes: `${v.tasks.map((t) => t.name).join(', ')}. ${rng.pick(REMARKS)}`,
       reassemblySettings: settings,
       unrestoredReason: reason,

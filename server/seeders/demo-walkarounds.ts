@@ -212,7 +212,7 @@ function repairVisit(
         partNumber: 'HS-HH-1188',
         description: 'Hydraulic hose assembly, loader valve',
         quantity: 1,
-        unitCost: 86.4,
+        unitCostMinor: 8640,
       },
     ],
     fluids: [],
@@ -251,7 +251,12 @@ function repairPlan(
     technicianIds: m.shopPersonId ? [m.shopPersonId] : [],
     labourHours: 1,
     parts: [
-      { partNumber: 'HS-PS-1140', description: 'PTO master shield', quantity: 1, unitCost: null },
+      {
+        partNumber: 'HS-PS-1140',
+        description: 'PTO master shield',
+        quantity: 1,
+        unitCostMinor: null,
+      },
     ],
     fluids: [],
     otherCosts: [],

@@ -203,8 +203,9 @@ async function writeScenario(
         model: m.model,
         serialNumber: m.serialNumber,
         year: m.year,
-        purchasePrice: m.purchasePrice,
-        listPrice: m.listPrice,
+        // the demo's prices are whole dollars; the farms count in cents
+        purchasePriceMinor: m.purchasePrice * 100,
+        listPriceMinor: m.listPrice * 100,
         meterUnit: m.meterUnit,
         seasonMonths: m.season.months,
         photoKey: null,

@@ -62,14 +62,14 @@ export function prefillLines(tasks: Pick<ServiceTask, 'parts' | 'fluids'>[]): {
           partNumber: p.partNumber,
           description: p.description,
           quantity: p.quantity,
-          unitCost: null,
+          unitCostMinor: null,
         });
     }
     for (const f of t.fluids) {
       const key = `${f.kind.trim().toLowerCase()}|${f.unit}`;
       const line = fluids.get(key);
       if (line) line.volume = round(line.volume + f.volume, 2);
-      else fluids.set(key, { kind: f.kind, volume: f.volume, unit: f.unit, unitCost: null });
+      else fluids.set(key, { kind: f.kind, volume: f.volume, unit: f.unit, unitCostMinor: null });
     }
   }
   return { parts: [...parts.values()], fluids: [...fluids.values()] };

@@ -2,14 +2,15 @@ import { z } from 'zod';
 import { DUE_STATUSES, MACHINE_CATEGORIES, MACHINE_STATUSES, METER_UNITS } from '../constants';
 import { boundedNumber, pagingFields, plainText, uuid } from './common';
 import { machineRefSchema, pageMetaSchema } from './refs';
+import { MONEY_MAX_MINOR, minorAmount } from './money';
 
-/** Ranges of a machine's numbers; prices fit numeric(12,2), years integer. */
+/** Ranges of a machine's numbers; prices are minor units (bigint), years integer. */
 export const MACHINE_BOUNDS = {
-  price: { min: 0, max: 100_000_000 },
+  priceMinor: { max: MONEY_MAX_MINOR },
   year: { min: 1900, max: 2100, int: true },
 } as const;
 
-const money = (label: string) => boundedNumber(label, MACHINE_BOUNDS.price).nullable();
+const money = (label: string) => minorAmount(label, MACHINE_BOUNDS.priceMinor.max).nullable();
 
 /** A machine's fields, without defaults: an update changes only the fields it names. */
 const machineFields = {
@@ -22,8 +23,10 @@ const machineFields = {
   model: plainText(80),
   serialNumber: plainText(80),
   year: boundedNumber('Year', MACHINE_BOUNDS.year).nullable(),
-  purchasePrice: money('Purchase price'),
-  listPrice: money('List price'),
+  /** minor units of the organization's currency */
+  purchasePriceMinor: money('Purchase price'),
+  /** list price when new, minor units of the organization's currency */
+  listPriceMinor: money('List price'),
   meterUnit: z.enum(METER_UNITS, { error: `Meter unit must be one of: ${METER_UNITS.join(', ')}` }),
   status: z.enum(MACHINE_STATUSES, {
     error: `Status must be one of: ${MACHINE_STATUSES.join(', ')}`,
@@ -45,8 +48,8 @@ export const machineCreateSchema = z.object({
   model: machineFields.model.default(''),
   serialNumber: machineFields.serialNumber.default(''),
   year: machineFields.year.default(null),
-  purchasePrice: machineFields.purchasePrice.default(null),
-  listPrice: machineFields.listPrice.default(null),
+  purchasePriceMinor: machineFields.purchasePriceMinor.default(null),
+  listPriceMinor: machineFields.listPriceMinor.default(null),
   meterUnit: machineFields.meterUnit.default('h'),
   status: machineFields.status.default('in_service'),
   seasonMonths: machineFields.seasonMonths.default([]),
@@ -108,8 +111,9 @@ export const machineSchema = z
     model: z.string(),
     serialNumber: z.string(),
     year: z.number().nullable(),
-    purchasePrice: z.number().nullable(),
-    listPrice: z.number().nullable(),
+    /** minor units of the organization's currency */
+    purchasePriceMinor: z.number().nullable(),
+    listPriceMinor: z.number().nullable(),
     meterUnit: z.enum(METER_UNITS),
     status: z.enum(MACHINE_STATUSES),
     seasonMonths: z.array(z.number()),

@@ -11,6 +11,7 @@ import {
   uuid,
 } from './common';
 import { FLUID_UNITS } from './schedule';
+import { MONEY_MAX_MINOR, minorAmount } from './money';
 
 // Service records: one visit to a machine, planned or done. The client's forms use these schemas
 // with react-hook-form; the server validates the same ones.
@@ -25,38 +26,55 @@ export const SERVICE_STATUS_LABELS: Record<ServiceStatus, string> = {
 
 /**
  * Ranges of a record's numbers. Labour fits numeric(8,2), meter values numeric(14,2) and
- * measurements numeric(16,4); costs and quantities live in JSON but keep to the trade.
+ * measurements numeric(16,4); costs (integer minor units) and quantities live in JSON but keep
+ * to the trade. A line's cost (quantity × unit cost) stays under `lineMinor`, so the sum of a
+ * record's lines is an exact integer.
  */
 export const SERVICE_BOUNDS = {
-  cost: { min: 0, max: 10_000_000 },
+  costMinor: { max: MONEY_MAX_MINOR },
+  lineMinor: { max: 10_000_000_000_000 },
   quantity: { min: 0, max: 100_000, exclusiveMin: true },
   labourHours: { min: 0, max: 2000 },
   meter: { min: 0, max: 10_000_000 },
   measurement: { min: -1_000_000, max: 1_000_000 },
 } as const;
 
-const cost = (label: string) => boundedNumber(label, SERVICE_BOUNDS.cost);
+const cost = (label: string) => minorAmount(label, SERVICE_BOUNDS.costMinor.max);
 
-export const servicePartSchema = z.object({
-  partNumber: plainText(60, { required: 'Enter the part number' }),
-  description: plainText(200).default(''),
-  quantity: boundedNumber('Quantity', SERVICE_BOUNDS.quantity),
-  unitCost: cost('Unit cost').nullable().default(null),
-});
+/** A line's quantity × unit cost stays within SERVICE_BOUNDS.lineMinor (else the rule names unitCostMinor). */
+const withinLineBound = (quantity: number, unitCostMinor: number | null) =>
+  unitCostMinor === null || quantity * unitCostMinor <= SERVICE_BOUNDS.lineMinor.max;
+const lineBoundRule = {
+  error: `The line's cost (quantity × unit cost) must be at most ${SERVICE_BOUNDS.lineMinor.max.toLocaleString('en-US')} minor units`,
+  path: ['unitCostMinor'],
+};
+
+export const servicePartSchema = z
+  .object({
+    partNumber: plainText(60, { required: 'Enter the part number' }),
+    description: plainText(200).default(''),
+    quantity: boundedNumber('Quantity', SERVICE_BOUNDS.quantity),
+    /** price of one, in minor units of the farm's currency */
+    unitCostMinor: cost('Unit cost').nullable().default(null),
+  })
+  .refine((p) => withinLineBound(p.quantity, p.unitCostMinor), lineBoundRule);
 export type ServicePart = z.infer<typeof servicePartSchema>;
 
-export const serviceFluidSchema = z.object({
-  kind: plainText(80, { required: 'Enter the fluid kind' }),
-  volume: boundedNumber('Volume', SERVICE_BOUNDS.quantity),
-  unit: z.enum(FLUID_UNITS, { error: `Unit must be one of: ${FLUID_UNITS.join(', ')}` }),
-  /** cost per unit of volume (per L, gal, …) */
-  unitCost: cost('Unit cost').nullable().default(null),
-});
+export const serviceFluidSchema = z
+  .object({
+    kind: plainText(80, { required: 'Enter the fluid kind' }),
+    volume: boundedNumber('Volume', SERVICE_BOUNDS.quantity),
+    unit: z.enum(FLUID_UNITS, { error: `Unit must be one of: ${FLUID_UNITS.join(', ')}` }),
+    /** price per unit of volume (per L, gal, …), in minor units of the farm's currency */
+    unitCostMinor: cost('Unit cost').nullable().default(null),
+  })
+  .refine((f) => withinLineBound(f.volume, f.unitCostMinor), lineBoundRule);
 export type ServiceFluid = z.infer<typeof serviceFluidSchema>;
 
 export const otherCostSchema = z.object({
   description: plainText(200, { required: 'Describe the cost' }),
-  amount: cost('Amount'),
+  /** minor units of the farm's currency */
+  amountMinor: cost('Amount'),
 });
 export type OtherCost = z.infer<typeof otherCostSchema>;
 

@@ -36,6 +36,7 @@ describe('auth — sign-in', () => {
           kind: 'farm',
           timeZone: 'America/Chicago',
           units: 'metric',
+          currency: 'USD',
         },
       },
     ]);

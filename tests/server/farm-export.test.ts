@@ -64,7 +64,7 @@ async function farmWithRecords(name: string, fleetNumber: string) {
     meterLifetime: 150,
     readingId: null,
     labourHours: 1.5,
-    parts: [{ partNumber: 'OF-1', description: 'Oil filter', quantity: 1, unitCost: 12.5 }],
+    parts: [{ partNumber: 'OF-1', description: 'Oil filter', quantity: 1, unitCostMinor: 1250 }],
     notes: '=SUM(A1:A9) is how the invoice adds up',
     createdBy: manager.id,
     completedBy: manager.id,
@@ -208,7 +208,7 @@ describe('farm data export — GET /organizations/:orgId/export', () => {
     expect(part).toMatchObject({
       part_number: 'OF-1',
       quantity: '1',
-      unit_cost: '12.5',
+      unit_cost_minor: '1250',
       line: '1',
     });
     const [measurement] = csvRows(files, 'service-measurements.csv');

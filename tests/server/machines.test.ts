@@ -35,7 +35,7 @@ describe('machines API', () => {
       category: 'tractor',
       make: 'Example',
       year: 2019,
-      listPrice: 120000,
+      listPriceMinor: 12_000_000,
       meterUnit: 'h',
       operatorIds: [op.id],
     });
@@ -46,7 +46,7 @@ describe('machines API', () => {
       category: 'tractor',
       status: 'in_service',
       meterUnit: 'h',
-      listPrice: 120000,
+      listPriceMinor: 12_000_000,
       operatorIds: [op.id],
       lastReading: null,
     });

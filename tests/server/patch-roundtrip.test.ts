@@ -52,8 +52,8 @@ const ROUTES: Record<string, PatchRoute> = {
       { field: 'model', value: v('TX 2') },
       { field: 'serialNumber', value: v('TM-2-0099') },
       { field: 'year', value: v(2019) },
-      { field: 'purchasePrice', value: v(170_000) },
-      { field: 'listPrice', value: v(null) },
+      { field: 'purchasePriceMinor', value: v(17_000_000) },
+      { field: 'listPriceMinor', value: v(null) },
       { field: 'meterUnit', value: v('h') },
       { field: 'seasonMonths', value: v([6, 7, 8]) },
       { field: 'operatorIds', value: v([]), children: ['machine_operators'] },
@@ -95,10 +95,10 @@ const ROUTES: Record<string, PatchRoute> = {
       { field: 'labourHours', value: v(3) },
       {
         field: 'parts',
-        value: v([{ partNumber: 'OF-110', quantity: 2, unitCost: 19, unitCostMinor: 1900 }]),
+        value: v([{ partNumber: 'OF-110', quantity: 2, unitCostMinor: 1900 }]),
       },
       { field: 'fluids', value: v([]) },
-      { field: 'otherCosts', value: v([{ description: 'Rags', amount: 3, amountMinor: 300 }]) },
+      { field: 'otherCosts', value: v([{ description: 'Rags', amountMinor: 300 }]) },
       { field: 'notes', value: v('Long hose packed.') },
       {
         field: 'measurements',

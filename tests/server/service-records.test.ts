@@ -145,7 +145,7 @@ describe('service records — completing', () => {
         taskIds: [s.oil.id, s.hydraulic.id],
         labourHours: 1.9,
         notes: 'Oil dark; hydraulic filters changed.',
-        otherCosts: [{ description: 'Shop consumables', amount: 12.5 }],
+        otherCosts: [{ description: 'Shop consumables', amountMinor: 1250 }],
       }),
     );
     expect(res.status).toBe(201);
@@ -166,25 +166,32 @@ describe('service records — completing', () => {
         partNumber: 'OF-100',
         description: 'Oil filter',
         quantity: 2,
-        unitCost: null,
-        lineCost: null,
+        unitCostMinor: null,
+        lineCostMinor: null,
       },
       {
         partNumber: 'HF-200',
         description: 'Hydraulic filter',
         quantity: 2,
-        unitCost: null,
-        lineCost: null,
+        unitCostMinor: null,
+        lineCostMinor: null,
       },
     ]);
     expect(data.fluids).toEqual([
-      { kind: 'Engine oil 15W-40', volume: 18, unit: 'L', unitCost: null, lineCost: null },
+      {
+        kind: 'Engine oil 15W-40',
+        volume: 18,
+        unit: 'L',
+        unitCostMinor: null,
+        lineCostMinor: null,
+      },
     ]);
+    expect(data.currency).toBe('USD');
     expect(data.costs).toEqual({
-      parts: 0,
-      fluids: 0,
-      other: 12.5,
-      total: 12.5,
+      partsMinor: 0,
+      fluidsMinor: 0,
+      otherMinor: 1250,
+      totalMinor: 1250,
       linesWithoutCost: 3,
     });
     expect(res.body.resets.map((r: { name: string; reset: boolean }) => [r.name, r.reset])).toEqual(
@@ -216,7 +223,7 @@ describe('service records — completing', () => {
       completed({
         taskIds: [s.oil.id],
         parts: [
-          { partNumber: 'OF-100', quantity: 1, unitCost: 9.5 },
+          { partNumber: 'OF-100', quantity: 1, unitCostMinor: 950 },
           { partNumber: 'HF-200', quantity: -1 },
         ],
       }),

@@ -84,8 +84,8 @@ export async function createMachine(
     name: `Machine ${n}`,
     category: 'tractor',
     year: 2020,
-    purchasePrice: null,
-    listPrice: null,
+    purchasePriceMinor: null,
+    listPriceMinor: null,
     photoKey: null,
     ...overrides,
   });

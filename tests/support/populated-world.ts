@@ -83,8 +83,8 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
     model: 'RX 190',
     serialNumber: 'BR190-00417',
     year: 2018,
-    purchasePrice: 182_500.5,
-    listPrice: 214_000,
+    purchasePriceMinor: 18_250_050,
+    listPriceMinor: 21_400_000,
     meterUnit: 'km',
     status: 'in_service',
     seasonMonths: [3, 4, 5, 9, 10],
@@ -139,20 +139,10 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
     taskIds: [task.id],
     technicianIds: [tech.id],
     labourHours: 2.5,
-    // costs in both spellings while they move to minor units (the lines drop the other key)
-    parts: [
-      {
-        partNumber: 'OF-100',
-        description: 'Oil filter',
-        quantity: 1,
-        unitCost: 18.4,
-        unitCostMinor: 1840,
-      },
-    ],
-    fluids: [
-      { kind: 'Engine oil 15W-40', volume: 18, unit: 'L', unitCost: 6.1, unitCostMinor: 610 },
-    ],
-    otherCosts: [{ description: 'Shop towels', amount: 4, amountMinor: 400 }],
+    // costs in minor units (cents) of the farm's currency
+    parts: [{ partNumber: 'OF-100', description: 'Oil filter', quantity: 1, unitCostMinor: 1840 }],
+    fluids: [{ kind: 'Engine oil 15W-40', volume: 18, unit: 'L', unitCostMinor: 610 }],
+    otherCosts: [{ description: 'Shop towels', amountMinor: 400 }],
     notes: 'Bring the long drain hose.',
     measurements: [{ name: 'Oil pressure', value: 3.4, unit: 'bar', specMin: 2.5, specMax: 4.5 }],
     reassemblySettings: [{ what: 'Belt tensioner', value: '3 turns out', restored: false }],

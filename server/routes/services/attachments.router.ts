@@ -11,7 +11,8 @@ import { fileUpload } from '../../middlewares/upload';
 import { AppError, invalid, notFound } from '../../errors';
 import { recordAudit } from '../../services/audit';
 import { ServiceAttachment } from '../../models';
-import { attachmentSchema, presentRecord } from '../../presenters/service-record';
+import { presentRecord } from '../../presenters/service-record';
+import { attachmentResponseSchema } from '../../../shared/schemas/service-responses';
 import { ATTACHMENT_MAX_BYTES, ATTACHMENTS_PER_RECORD } from '../../../shared/schemas/services';
 import type { Readable } from 'node:stream';
 
@@ -62,7 +63,7 @@ export function registerAttachmentRoutes(router: Router): void {
     before: [fileUpload('file', ATTACHMENT_MAX_BYTES, 'a photo or PDF')],
     multipartBody: z.object({ file: z.string().openapi({ format: 'binary' }) }),
     status: 201,
-    response: z.object({ data: attachmentSchema }),
+    response: attachmentResponseSchema,
     handler: async ({ req, params }) => {
       const access = req.access!;
       const { record } = await loadRecord(access, params.recordId);
@@ -111,7 +112,10 @@ export function registerAttachmentRoutes(router: Router): void {
             fileName: attachment.fileName,
           },
         });
-        const presented = await presentRecord(record);
+        const presented = await presentRecord(record, {
+          withDefects: false,
+          currency: access.organization.currency,
+        });
         return { data: presented.attachments.find((a) => a.id === attachment.id)! };
       } catch (err) {
         await Promise.allSettled(stored.map(deleteObject));

@@ -11,10 +11,12 @@ import { uuid } from '../../../shared/schemas/common';
 import { authorize } from '../../policies/access';
 import { canRecordService, isShop, serviceRecordAbilities } from '../../policies/service-record';
 import {
-  presentRecord,
-  presentRecords,
-  serviceRecordSchema,
-} from '../../presenters/service-record';
+  prefillResponseSchema,
+  serviceHistoryResponseSchema,
+  serviceRecordResponseSchema,
+  serviceRecordWithResetsSchema,
+} from '../../../shared/schemas/service-responses';
+import { presentRecord, presentRecords } from '../../presenters/service-record';
 import { loadMachine } from '../../services/machines';
 import {
   cancelRecord,
@@ -27,7 +29,6 @@ import {
   updateRecord,
 } from '../../services/service-records';
 import { invalid } from '../../errors';
-import { FLUID_UNITS } from '../../../shared/schemas/schedule';
 import type { OrgAccess } from '../../policies/access';
 import type { ServiceRecord } from '../../models';
 
@@ -35,29 +36,16 @@ export const orgParams = z.object({ orgId: z.uuid() });
 export const machineParams = orgParams.extend({ machineId: z.uuid() });
 const recordParams = orgParams.extend({ recordId: z.uuid() });
 
-export const recordAbilitiesSchema = z.object({
-  update: z.boolean(),
-  complete: z.boolean(),
-  cancel: z.boolean(),
-  attach: z.boolean(),
-});
-
-const resetSchema = z.object({
-  taskId: z.string(),
-  name: z.string(),
-  reset: z.boolean(),
-  lastDoneMeter: z.number().nullable(),
-  lastDoneOn: z.string().nullable(),
-  note: z.string(),
-});
-
-const recordResponse = z.object({ data: serviceRecordSchema, abilities: recordAbilitiesSchema });
-const recordWithResets = recordResponse.extend({ resets: z.array(resetSchema) });
+const recordResponse = serviceRecordResponseSchema;
+const recordWithResets = serviceRecordWithResetsSchema;
 
 const shopOnly = 'Only a technician or manager records services';
 
 /** Which defects a record closes is the farm's own: a dealer's answers carry none. */
-const viewOf = (access: OrgAccess) => ({ withDefects: access.via === 'member' });
+const viewOf = (access: OrgAccess) => ({
+  withDefects: access.via === 'member',
+  currency: access.organization.currency,
+});
 
 async function respond(access: OrgAccess, record: ServiceRecord) {
   return {
@@ -76,11 +64,7 @@ export function registerServiceRecordRoutes(router: Router): void {
     tags: ['services'],
     params: machineParams,
     query: serviceHistoryQuerySchema,
-    response: z.object({
-      data: z.array(serviceRecordSchema),
-      meta: z.object({ total: z.number(), page: z.number(), pageSize: z.number() }),
-      abilities: z.object({ create: z.boolean() }),
-    }),
+    response: serviceHistoryResponseSchema,
     handler: async ({ req, params, query }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
@@ -107,30 +91,7 @@ export function registerServiceRecordRoutes(router: Router): void {
         .optional()
         .openapi({ description: 'task ids, comma-separated' }),
     }),
-    response: z.object({
-      data: z.object({
-        tasks: z.array(
-          z.object({ taskId: z.string(), name: z.string(), labourHours: z.number().nullable() }),
-        ),
-        estimatedLabourHours: z.number(),
-        parts: z.array(
-          z.object({
-            partNumber: z.string(),
-            description: z.string(),
-            quantity: z.number(),
-            unitCost: z.number().nullable(),
-          }),
-        ),
-        fluids: z.array(
-          z.object({
-            kind: z.string(),
-            volume: z.number(),
-            unit: z.enum(FLUID_UNITS),
-            unitCost: z.number().nullable(),
-          }),
-        ),
-      }),
-    }),
+    response: prefillResponseSchema,
     handler: async ({ req, params, query }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);

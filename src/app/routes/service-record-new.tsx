@@ -238,6 +238,7 @@ export function ServiceRecordNewPage() {
         recordId={complete ?? undefined}
         today={today}
         timeZone={timeZone}
+        currency={membership.organization.currency}
         cancelHref={complete ? paths.organization.serviceRecord.href(orgId, complete) : machineHref}
         onSaved={(result) =>
           navigate(paths.organization.serviceRecord.href(orgId, result.data.id), {

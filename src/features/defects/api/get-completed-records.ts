@@ -1,16 +1,25 @@
 import { useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { defectKeys } from './keys';
+import type { ServiceHistory } from '../../../../shared/schemas/service-responses';
 import type { CompletedRecord } from './types';
 
 /** The machine's latest completed service records, one of which may have fixed the defect. */
 export const getCompletedRecords = (orgId: string, machineId: string, signal?: AbortSignal) =>
   apiClient
-    .get<{ data: CompletedRecord[] }>(
+    .get<ServiceHistory>(
       `/organizations/${segment(orgId)}/machines/${segment(machineId)}/service-records?status=completed&page=1&pageSize=20`,
       { signal },
     )
-    .then((body) => body.data);
+    .then((body) =>
+      body.data.map(({ id, performedOn, meterValue, tasks, notes }): CompletedRecord => ({
+        id,
+        performedOn,
+        meterValue,
+        tasks,
+        notes,
+      })),
+    );
 
 export const useCompletedRecords = (orgId: string, machineId: string) =>
   useQuery({

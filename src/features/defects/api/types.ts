@@ -1,69 +1,17 @@
-import type { MachineCategory, MachineStatus, MeterUnit } from '../../../../shared/constants';
 import type { DefectSeverity, DefectStatus } from '../../../../shared/schemas/defects';
+import type { Machine } from '../../../../shared/schemas/machines';
+import type { ServiceRecord } from '../../../../shared/schemas/service-responses';
 
-export interface MachineRef {
-  id: string;
-  fleetNumber: string;
-  name: string;
-  category: MachineCategory;
-  status: MachineStatus;
-  meterUnit: MeterUnit;
-}
-
-export interface PersonRef {
-  id: string;
-  name: string;
-}
-
-export interface Defect {
-  id: string;
-  machine: MachineRef;
-  title: string;
-  description: string;
-  severity: DefectSeverity;
-  status: DefectStatus;
-  walkaroundId: string | null;
-  itemId: string | null;
-  photoUrl: string | null;
-  thumbnailUrl: string | null;
-  /** the same defect found again on later walkarounds adds to this */
-  reportCount: number;
-  lastReportedAt: string;
-  reportedBy: PersonRef | null;
-  assignedTo: PersonRef | null;
-  fixedAt: string | null;
-  fixedBy: PersonRef | null;
-  fixedByRecordId: string | null;
-  fixNote: string;
-  createdAt: string;
-  updatedAt: string;
-}
-
-export interface DefectAbilities {
-  update: boolean;
-  close: boolean;
-  /** the caller may return tagged-out machines to service (the farm's technicians, managers) */
-  returnToService: boolean;
-}
-
-/** What closing a defect answers: the machine (its status unchanged) and its open critical count. */
-export interface ClosedDefect {
-  data: Defect;
-  abilities: DefectAbilities;
-  machine: MachineRef;
-  openCriticalDefects: number;
-}
-
-export interface DefectList {
-  data: Defect[];
-  meta: {
-    total: number;
-    page: number;
-    pageSize: number;
-    activeBySeverity: Record<DefectSeverity, number>;
-  };
-  abilities: DefectAbilities;
-}
+// The defect API's answers are the shared schemas' types (shared/schemas/defects.ts); what
+// follows them here are the client's filters and its views of other features' answers.
+export type {
+  ClosedDefect,
+  Defect,
+  DefectAbilities,
+  DefectList,
+  ReportedDefect,
+} from '../../../../shared/schemas/defects';
+export type { MachineRef, PersonRef } from '../../../../shared/schemas/refs';
 
 export type DefectStatusFilter = 'active' | 'all' | DefectStatus;
 
@@ -76,19 +24,11 @@ export interface DefectFilters {
   page: number;
 }
 
-/** A machine to choose in the filters and the report form (a row of GET machines). */
-export interface MachineOption {
-  id: string;
-  fleetNumber: string;
-  name: string;
-  status: MachineStatus;
-}
+/** A machine to choose in the filters and the report form (from a row of GET machines). */
+export type MachineOption = Pick<Machine, 'id' | 'fleetNumber' | 'name' | 'status'>;
 
-/** A completed service record that may have fixed a defect. */
-export interface CompletedRecord {
-  id: string;
-  performedOn: string | null;
-  meterValue: number | null;
-  tasks: { name: string }[];
-  notes: string;
-}
+/** A completed service record that may have fixed a defect (a row of the machine's history). */
+export type CompletedRecord = Pick<
+  ServiceRecord,
+  'id' | 'performedOn' | 'meterValue' | 'tasks' | 'notes'
+>;

@@ -5,14 +5,14 @@ import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { isApiError } from '../../../lib/api-client';
+import { useCurrentMembership } from '../../../lib/auth';
+import { formatMoney } from '../../../lib/format';
 import { useOperators } from '../api/get-operators';
 import type { MachineAbilities, MachineDetail } from '../api/types';
 import { useUpdateMachine } from '../api/update-machine';
 import { formatSeason } from '../lib/season-months';
 import { MachineForm } from './machine-form';
 import { MachinePhoto } from './machine-photo';
-
-const money = new Intl.NumberFormat(undefined, { maximumFractionDigits: 0 });
 
 /** The machine's own fields; a manager edits them here or retires the machine as sold. */
 export function MachineDetails({
@@ -24,6 +24,9 @@ export function MachineDetails({
   machine: MachineDetail['data'];
   abilities: MachineAbilities;
 }) {
+  const { currency } = useCurrentMembership().membership.organization;
+  const price = (minor: number | null) =>
+    minor !== null ? formatMoney(minor, currency, { whole: true }) : '—';
   const [editing, setEditing] = useState(false);
   const [confirmingRetire, setConfirmingRetire] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
@@ -62,8 +65,8 @@ export function MachineDetails({
     ['Serial number', machine.serialNumber || '—'],
     ['Year', machine.year?.toString() ?? '—'],
     ['Meter unit', `${METER_UNIT_LABELS[machine.meterUnit]} (${machine.meterUnit})`],
-    ['Purchase price', machine.purchasePrice !== null ? money.format(machine.purchasePrice) : '—'],
-    ['List price', machine.listPrice !== null ? money.format(machine.listPrice) : '—'],
+    ['Purchase price', price(machine.purchasePriceMinor)],
+    ['List price', price(machine.listPriceMinor)],
     ['Season', formatSeason(machine.seasonMonths)],
     [
       'Assigned operators',

@@ -18,7 +18,9 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { CheckboxGroup } from '../../../components/ui/checkbox-group';
 import { SelectField, TextField } from '../../../components/ui/field';
+import { MoneyField } from '../../../components/ui/money-field';
 import { TextareaField } from '../../../components/ui/textarea-field';
+import { useCurrentMembership } from '../../../lib/auth';
 import { changedFields } from '../../../lib/changed-fields';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useOperators } from '../api/get-operators';
@@ -33,8 +35,8 @@ const FIELD_NAMES = [
   'model',
   'serialNumber',
   'year',
-  'purchasePrice',
-  'listPrice',
+  'purchasePriceMinor',
+  'listPriceMinor',
   'meterUnit',
   'status',
   'seasonMonths',
@@ -70,8 +72,8 @@ function defaultsFrom(machine: Machine | undefined): MachineCreateInput {
     model: machine?.model ?? '',
     serialNumber: machine?.serialNumber ?? '',
     year: machine?.year ?? null,
-    purchasePrice: machine?.purchasePrice ?? null,
-    listPrice: machine?.listPrice ?? null,
+    purchasePriceMinor: machine?.purchasePriceMinor ?? null,
+    listPriceMinor: machine?.listPriceMinor ?? null,
     meterUnit: machine?.meterUnit ?? 'h',
     status: machine?.status ?? 'in_service',
     seasonMonths: machine?.seasonMonths ?? [],
@@ -93,6 +95,7 @@ interface MachineFormProps {
 /** Every field of a machine, for adding one and for editing it. The server's errors go beside the fields. */
 export function MachineForm({ orgId, machine, submitLabel, onSubmit, onCancel }: MachineFormProps) {
   const operators = useOperators(orgId);
+  const { currency } = useCurrentMembership().membership.organization;
   const [formError, setFormError] = useState<string | null>(null);
   const {
     register,
@@ -193,24 +196,20 @@ export function MachineForm({ orgId, machine, submitLabel, onSubmit, onCancel }:
             error={errors.meterUnit?.message}
             {...register('meterUnit')}
           />
-          <TextField
+          <MoneyField
             label="Purchase price"
-            type="number"
-            inputMode="decimal"
-            min={0}
-            step="any"
-            error={errors.purchasePrice?.message}
-            {...register('purchasePrice', optionalNumber)}
+            control={control}
+            name="purchasePriceMinor"
+            currency={currency}
+            error={errors.purchasePriceMinor?.message}
           />
-          <TextField
+          <MoneyField
             label="List price"
-            type="number"
-            inputMode="decimal"
-            min={0}
-            step="any"
+            control={control}
+            name="listPriceMinor"
+            currency={currency}
             hint="New list price, for the repair-cost model"
-            error={errors.listPrice?.message}
-            {...register('listPrice', optionalNumber)}
+            error={errors.listPriceMinor?.message}
           />
         </div>
       </fieldset>

@@ -1,5 +1,6 @@
 import type { UseFieldArrayReturn } from 'react-hook-form';
 import { TextField } from '../../../components/ui/field';
+import { MoneyField } from '../../../components/ui/money-field';
 import {
   optionalNumber,
   requiredNumber,
@@ -14,11 +15,15 @@ const decimal = { type: 'number', inputMode: 'decimal', step: 'any' } as const;
 export function OtherCostsFields({
   form,
   rows,
+  currency,
 }: {
   form: ServiceForm;
   rows: UseFieldArrayReturn<ServiceFormInput, 'otherCosts'>;
+  /** the farm's currency: amounts are typed in it */
+  currency: string;
 }) {
   const {
+    control,
     register,
     formState: { errors },
   } = form;
@@ -27,7 +32,7 @@ export function OtherCostsFields({
       legend="Other costs"
       emptyText="No other costs."
       addLabel="Add cost"
-      onAdd={() => rows.append({ description: '', amount: 0 })}
+      onAdd={() => rows.append({ description: '', amountMinor: 0 })}
       count={rows.fields.length}
     >
       {rows.fields.map((row, i) => (
@@ -43,12 +48,13 @@ export function OtherCostsFields({
             error={errors.otherCosts?.[i]?.description?.message}
             {...register(`otherCosts.${i}.description`)}
           />
-          <TextField
+          <MoneyField
             label="Amount"
-            {...decimal}
-            min={0}
-            error={errors.otherCosts?.[i]?.amount?.message}
-            {...register(`otherCosts.${i}.amount`, requiredNumber)}
+            control={control}
+            name={`otherCosts.${i}.amountMinor`}
+            currency={currency}
+            required
+            error={errors.otherCosts?.[i]?.amountMinor?.message}
           />
         </LineRow>
       ))}

@@ -1,12 +1,8 @@
 import type { UseFieldArrayReturn } from 'react-hook-form';
 import { SelectField, TextField } from '../../../components/ui/field';
+import { MoneyField } from '../../../components/ui/money-field';
 import { FLUID_UNIT_OPTIONS } from '../lib/fluid-units';
-import {
-  optionalNumber,
-  requiredNumber,
-  type ServiceForm,
-  type ServiceFormInput,
-} from '../lib/form-values';
+import { requiredNumber, type ServiceForm, type ServiceFormInput } from '../lib/form-values';
 import { LineList, LineRow } from './line-rows';
 
 const decimal = { type: 'number', inputMode: 'decimal', step: 'any', min: 0 } as const;
@@ -16,12 +12,16 @@ export function PartsFields({
   form,
   rows,
   showCosts,
+  currency,
 }: {
   form: ServiceForm;
   rows: UseFieldArrayReturn<ServiceFormInput, 'parts'>;
   showCosts: boolean;
+  /** the farm's currency: unit costs are typed in it */
+  currency: string;
 }) {
   const {
+    control,
     register,
     formState: { errors },
   } = form;
@@ -35,7 +35,9 @@ export function PartsFields({
       }
       emptyText="No parts."
       addLabel="Add part"
-      onAdd={() => rows.append({ partNumber: '', description: '', quantity: 1, unitCost: null })}
+      onAdd={() =>
+        rows.append({ partNumber: '', description: '', quantity: 1, unitCostMinor: null })
+      }
       count={rows.fields.length}
     >
       {rows.fields.map((row, i) => (
@@ -69,11 +71,12 @@ export function PartsFields({
             {...register(`parts.${i}.quantity`, requiredNumber)}
           />
           {showCosts ? (
-            <TextField
+            <MoneyField
               label="Unit cost"
-              {...decimal}
-              error={errors.parts?.[i]?.unitCost?.message}
-              {...register(`parts.${i}.unitCost`, optionalNumber)}
+              control={control}
+              name={`parts.${i}.unitCostMinor`}
+              currency={currency}
+              error={errors.parts?.[i]?.unitCostMinor?.message}
             />
           ) : null}
         </LineRow>
@@ -87,12 +90,15 @@ export function FluidsFields({
   form,
   rows,
   showCosts,
+  currency,
 }: {
   form: ServiceForm;
   rows: UseFieldArrayReturn<ServiceFormInput, 'fluids'>;
   showCosts: boolean;
+  currency: string;
 }) {
   const {
+    control,
     register,
     formState: { errors },
   } = form;
@@ -104,7 +110,7 @@ export function FluidsFields({
       }
       emptyText="No fluids."
       addLabel="Add fluid"
-      onAdd={() => rows.append({ kind: '', volume: 1, unit: 'L', unitCost: null })}
+      onAdd={() => rows.append({ kind: '', volume: 1, unit: 'L', unitCostMinor: null })}
       count={rows.fields.length}
     >
       {rows.fields.map((row, i) => (
@@ -137,11 +143,12 @@ export function FluidsFields({
             {...register(`fluids.${i}.unit`)}
           />
           {showCosts ? (
-            <TextField
+            <MoneyField
               label="Unit cost"
-              {...decimal}
-              error={errors.fluids?.[i]?.unitCost?.message}
-              {...register(`fluids.${i}.unitCost`, optionalNumber)}
+              control={control}
+              name={`fluids.${i}.unitCostMinor`}
+              currency={currency}
+              error={errors.fluids?.[i]?.unitCostMinor?.message}
             />
           ) : null}
         </LineRow>

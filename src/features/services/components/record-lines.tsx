@@ -1,17 +1,19 @@
 import type { ReactNode } from 'react';
 import { Badge } from '../../../components/ui/badge';
 import type { ServiceRecord } from '../api/types';
-import { formatMoney, formatQuantity, specRangeText } from '../lib/record-format';
+import { formatMoney } from '../../../lib/format';
+import { formatQuantity, specRangeText } from '../lib/record-format';
 import { SpecStatusBadge } from './record-badges';
 
 const line = 'flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1 py-2';
 
 /** Parts, fluids and other costs, each line with its cost as the server worked it out. */
 export function CostLines({ record }: { record: ServiceRecord }) {
-  const { parts, fluids, otherCosts, costs } = record;
+  const { parts, fluids, otherCosts, costs, currency } = record;
   const showCosts = record.status !== 'planned';
-  const cost = (value: number | null) =>
-    value === null ? <span className="text-field-600">no cost given</span> : formatMoney(value);
+  const money = (minor: number) => formatMoney(minor, currency);
+  const cost = (minor: number | null) =>
+    minor === null ? <span className="text-field-600">no cost given</span> : money(minor);
   return (
     <div className="flex flex-col gap-4">
       <LineGroup title="Parts" empty="No parts.">
@@ -21,11 +23,11 @@ export function CostLines({ record }: { record: ServiceRecord }) {
               <span className="font-bold tabular-nums">{formatQuantity(p.quantity)} ×</span>{' '}
               <span className="font-bold">{p.partNumber}</span>
               {p.description ? ` — ${p.description}` : ''}
-              {showCosts && p.unitCost !== null ? (
-                <span className="text-field-600"> · {formatMoney(p.unitCost)} each</span>
+              {showCosts && p.unitCostMinor !== null ? (
+                <span className="text-field-600"> · {money(p.unitCostMinor)} each</span>
               ) : null}
             </span>
-            {showCosts ? <span className="tabular-nums">{cost(p.lineCost)}</span> : null}
+            {showCosts ? <span className="tabular-nums">{cost(p.lineCostMinor)}</span> : null}
           </li>
         ))}
       </LineGroup>
@@ -37,14 +39,14 @@ export function CostLines({ record }: { record: ServiceRecord }) {
                 {formatQuantity(f.volume)} {f.unit}
               </span>{' '}
               {f.kind}
-              {showCosts && f.unitCost !== null ? (
+              {showCosts && f.unitCostMinor !== null ? (
                 <span className="text-field-600">
                   {' '}
-                  · {formatMoney(f.unitCost)} per {f.unit}
+                  · {money(f.unitCostMinor)} per {f.unit}
                 </span>
               ) : null}
             </span>
-            {showCosts ? <span className="tabular-nums">{cost(f.lineCost)}</span> : null}
+            {showCosts ? <span className="tabular-nums">{cost(f.lineCostMinor)}</span> : null}
           </li>
         ))}
       </LineGroup>
@@ -54,7 +56,7 @@ export function CostLines({ record }: { record: ServiceRecord }) {
             {otherCosts.map((c, i) => (
               <li key={i} className={line}>
                 <span>{c.description}</span>
-                <span className="tabular-nums">{formatMoney(c.amount)}</span>
+                <span className="tabular-nums">{money(c.amountMinor)}</span>
               </li>
             ))}
           </LineGroup>
@@ -64,10 +66,10 @@ export function CostLines({ record }: { record: ServiceRecord }) {
           >
             {(
               [
-                ['Parts', costs.parts],
-                ['Fluids', costs.fluids],
-                ['Other', costs.other],
-                ['Total', costs.total],
+                ['Parts', costs.partsMinor],
+                ['Fluids', costs.fluidsMinor],
+                ['Other', costs.otherMinor],
+                ['Total', costs.totalMinor],
               ] as const
             ).map(([term, value]) => (
               <div key={term} className="flex flex-col">
@@ -75,7 +77,7 @@ export function CostLines({ record }: { record: ServiceRecord }) {
                 <dd
                   className={`tabular-nums ${term === 'Total' ? 'text-lg font-black' : 'font-bold'}`}
                 >
-                  {formatMoney(value)}
+                  {money(value)}
                 </dd>
               </div>
             ))}

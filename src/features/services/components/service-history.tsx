@@ -8,7 +8,7 @@ import { ListSkeleton } from '../../../components/ui/skeleton';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
 import { HISTORY_PAGE_SIZE, useServiceHistory } from '../api/get-service-history';
 import type { ServiceRecord } from '../api/types';
-import { formatMoney } from '../lib/record-format';
+import { formatMoney } from '../../../lib/format';
 import { useDebouncedValue } from '../lib/use-debounced-value';
 import { RecordStatusBadge } from './record-badges';
 
@@ -100,7 +100,7 @@ function HistoryRow({ record, href }: { record: ServiceRecord; href: string }) {
             <span>{formatMeter(record.meterValue, record.machine.meterUnit)}</span>
           ) : null}
           {record.status === 'completed' ? (
-            <span>Cost {formatMoney(record.costs.total)}</span>
+            <span>Cost {formatMoney(record.costs.totalMinor, record.currency)}</span>
           ) : null}
           <Icon name="back" className="hidden size-4 rotate-180 sm:block" />
         </span>

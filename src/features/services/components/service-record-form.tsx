@@ -29,9 +29,9 @@ import { TextareaField } from '../../../components/ui/textarea-field';
 
 const LIST_FIELDS = ['taskIds', 'technicianIds', 'closesDefectIds'] as const;
 const ROW_FIELDS = {
-  parts: ['partNumber', 'description', 'quantity', 'unitCost'],
-  fluids: ['kind', 'volume', 'unit', 'unitCost'],
-  otherCosts: ['description', 'amount'],
+  parts: ['partNumber', 'description', 'quantity', 'unitCostMinor'],
+  fluids: ['kind', 'volume', 'unit', 'unitCostMinor'],
+  otherCosts: ['description', 'amountMinor'],
   measurements: ['name', 'value', 'unit', 'specMin', 'specMax'],
   reassemblySettings: ['what', 'value', 'restored'],
 } as const;
@@ -89,6 +89,8 @@ export interface ServiceRecordFormProps {
   recordId?: string;
   today: string;
   timeZone: string;
+  /** the farm's currency (ISO 4217): costs are typed in it and sent as minor units */
+  currency: string;
   cancelHref: string;
   onSaved: (result: RecordWithResets) => void;
 }
@@ -202,9 +204,11 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
       </FormBlock>
 
       <FormBlock title={isPlan ? 'Parts and fluids to pull' : 'Parts, fluids and costs'}>
-        <PartsFields form={form} rows={parts} showCosts={!isPlan} />
-        <FluidsFields form={form} rows={fluids} showCosts={!isPlan} />
-        {!isPlan ? <OtherCostsFields form={form} rows={otherCosts} /> : null}
+        <PartsFields form={form} rows={parts} showCosts={!isPlan} currency={props.currency} />
+        <FluidsFields form={form} rows={fluids} showCosts={!isPlan} currency={props.currency} />
+        {!isPlan ? (
+          <OtherCostsFields form={form} rows={otherCosts} currency={props.currency} />
+        ) : null}
       </FormBlock>
 
       {!isPlan ? (

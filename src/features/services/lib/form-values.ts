@@ -1,6 +1,5 @@
 import type { UseFormReturn } from 'react-hook-form';
 import type { z } from 'zod';
-import type { FluidUnit } from './fluid-units';
 import {
   serviceRecordCreateSchema,
   type ServiceRecordCompleteInput,
@@ -24,9 +23,9 @@ const partKey = (p: { partNumber: string }) => p.partNumber.trim().toUpperCase()
 const fluidKey = (f: { kind: string; unit: string }) => `${f.kind.trim().toLowerCase()}|${f.unit}`;
 
 export const partsOf = (prefill: Pick<Prefill, 'parts'>): PartRow[] =>
-  prefill.parts.map((p) => ({ ...p, unitCost: p.unitCost ?? null }));
+  prefill.parts.map((p) => ({ ...p, unitCostMinor: p.unitCostMinor ?? null }));
 export const fluidsOf = (prefill: Pick<Prefill, 'fluids'>): FluidRow[] =>
-  prefill.fluids.map((f) => ({ ...f, unit: f.unit as FluidUnit, unitCost: f.unitCost ?? null }));
+  prefill.fluids.map((f) => ({ ...f, unitCostMinor: f.unitCostMinor ?? null }));
 
 /**
  * The part and fluid rows after the task choice changed: the lines the new tasks call for
@@ -49,7 +48,11 @@ export function mergePrefill(
       ...partsOf(next).map((p) => {
         const typed = partRows.get(partKey(p));
         return typed
-          ? { ...p, description: typed.description || p.description, unitCost: typed.unitCost }
+          ? {
+              ...p,
+              description: typed.description || p.description,
+              unitCostMinor: typed.unitCostMinor,
+            }
           : p;
       }),
       ...current.parts.filter((p) => !oldParts.has(partKey(p)) && !newParts.has(partKey(p))),
@@ -57,7 +60,7 @@ export function mergePrefill(
     fluids: [
       ...fluidsOf(next).map((f) => {
         const typed = fluidRows.get(fluidKey(f));
-        return typed ? { ...f, unitCost: typed.unitCost } : f;
+        return typed ? { ...f, unitCostMinor: typed.unitCostMinor } : f;
       }),
       ...current.fluids.filter((f) => !oldFluids.has(fluidKey(f)) && !newFluids.has(fluidKey(f))),
     ],
@@ -109,8 +112,8 @@ export function completeDefaults(
     taskIds: record.tasks.filter((t) => t.onSchedule).map((t) => t.taskId),
     technicianIds: record.technicians.map((t) => t.id),
     labourHours: record.labourHours,
-    parts: record.parts.map(({ lineCost: _, ...p }) => p),
-    fluids: record.fluids.map(({ lineCost: _, ...f }) => ({ ...f, unit: f.unit as FluidUnit })),
+    parts: record.parts.map(({ lineCostMinor: _, ...p }) => p),
+    fluids: record.fluids.map(({ lineCostMinor: _, ...f }) => f),
     otherCosts: record.otherCosts.map((c) => ({ ...c })),
     notes: record.notes,
     measurements: record.measurements.map(({ name, value, unit, specMin, specMax }) => ({

@@ -1,16 +1,11 @@
 import type { SpecStatus } from '../api/types';
 
-// How a record's figures read. Costs, line costs and spec status are the server's; this only words them.
+// How a record's figures read. Costs, line costs and spec status are the server's; this only words
+// them (money: formatMoney of src/lib/format.ts, in the record's currency).
 
-const money = new Intl.NumberFormat(undefined, {
-  minimumFractionDigits: 2,
-  maximumFractionDigits: 2,
-});
 const quantity = new Intl.NumberFormat(undefined, { maximumFractionDigits: 3 });
 const hours = new Intl.NumberFormat(undefined, { maximumFractionDigits: 2 });
 
-/** A cost in the farm's currency, two decimals ("1,204.50"). */
-export const formatMoney = (amount: number) => money.format(amount);
 export const formatQuantity = (n: number) => quantity.format(n);
 /** Labour: "1.75 h" */
 export const formatHours = (n: number) => `${hours.format(n)} h`;
