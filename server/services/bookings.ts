@@ -1,7 +1,7 @@
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { env } from '../env';
-import { AppError, invalid, notFound } from '../errors';
+import { AppError, invalid, notFound, forbidden } from '../errors';
 import {
   Machine,
   Membership,
@@ -95,6 +95,11 @@ async function managerEmails(farmId: string) {
 export async function proposeBooking(access: OrgAccess, input: BookingCreateInput) {
   const link = await requireCustomer(access.organization.id, input.customerId);
   const farm = link.farm!;
+  // a view link reads the farm's due list and writes nothing to it, proposals included
+  if (link.access !== 'service')
+    throw forbidden(
+      `${farm.name} gave your dealership view access only: ask them for service access to propose a service date`,
+    );
   const today = todayIso(farm.timeZone);
   if (input.proposedFor < today)
     throw invalid({ proposedFor: `The date may not be before today (${today} at ${farm.name})` });

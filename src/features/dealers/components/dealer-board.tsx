@@ -88,6 +88,10 @@ export function DealerBoard({
   const chosen = [...selected.values()];
   const customers = [...new Map(chosen.map((r) => [r.customer.id, r.customer])).values()];
   const oneCustomer = customers.length === 1 ? customers[0] : null;
+  // a view link lets the dealer remind, never propose a service date (the server refuses it too)
+  const canPropose =
+    oneCustomer !== null &&
+    meta.customers.some((c) => c.id === oneCustomer.id && c.access === 'service');
   const filtered = Boolean(
     filters.customerId || filters.category || filters.status || filters.task,
   );
@@ -112,7 +116,7 @@ export function DealerBoard({
         <Button
           variant="secondary"
           icon="clock"
-          disabled={!oneCustomer}
+          disabled={!canPropose}
           onClick={() => setDialog('booking')}
         >
           Propose booking
@@ -121,7 +125,7 @@ export function DealerBoard({
           {chosen.length === 0
             ? 'Tick services of one customer to send a reminder or propose a booking.'
             : oneCustomer
-              ? `${chosen.length} selected at ${oneCustomer.name}.`
+              ? `${chosen.length} selected at ${oneCustomer.name}.${canPropose ? '' : ' Their link is view only: you can send a reminder, not propose a date.'}`
               : 'The selection spans customers: keep services of one customer.'}
         </p>
       </div>
