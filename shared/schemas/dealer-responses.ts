@@ -27,10 +27,12 @@ export const farmDealerLinkSchema = z
   .meta({ id: 'FarmDealerLink' });
 export type FarmDealerLink = z.infer<typeof farmDealerLinkSchema>;
 export const farmDealerLinkResponseSchema = z.object({ data: farmDealerLinkSchema });
+export type FarmDealerLinkResponse = z.infer<typeof farmDealerLinkResponseSchema>;
 export const farmDealerLinksResponseSchema = z.object({
   data: z.array(farmDealerLinkSchema),
   abilities: z.object({ invite: z.boolean() }),
 });
+export type FarmDealerLinks = z.infer<typeof farmDealerLinksResponseSchema>;
 
 /** A link as the dealer sees it: a customer (active) or a request waiting for the farm. */
 export const customerSchema = z
@@ -48,10 +50,12 @@ export const customerSchema = z
   .meta({ id: 'DealerCustomer' });
 export type Customer = z.infer<typeof customerSchema>;
 export const customerResponseSchema = z.object({ data: customerSchema });
+export type CustomerResponse = z.infer<typeof customerResponseSchema>;
 export const customersResponseSchema = z.object({
   data: z.array(customerSchema),
   abilities: z.object({ invite: z.boolean() }),
 });
+export type Customers = z.infer<typeof customersResponseSchema>;
 
 /** A dealer's request for access, for the farm manager who opened the e-mailed link. */
 export const dealerInvitationOutSchema = z.object({
@@ -157,10 +161,12 @@ export const bookingSchema = z
   .meta({ id: 'ServiceBooking' });
 export type Booking = z.infer<typeof bookingSchema>;
 export const bookingResponseSchema = z.object({ data: bookingSchema });
+export type BookingResponse = z.infer<typeof bookingResponseSchema>;
 export const bookingsResponseSchema = z.object({
   data: z.array(bookingSchema),
   abilities: z.object({ propose: z.boolean() }),
 });
+export type Bookings = z.infer<typeof bookingsResponseSchema>;
 
 export const auditEventSchema = z
   .object({

@@ -192,6 +192,7 @@ export const measurementSeriesResponseSchema = z.object({
 });
 
 export const attachmentResponseSchema = z.object({ data: attachmentSchema });
+export type AttachmentResponse = z.infer<typeof attachmentResponseSchema>;
 
 const pullPart = z.object({
   partNumber: z.string(),

@@ -145,6 +145,7 @@ export const checklistTemplateListResponseSchema = z.object({
 });
 export type ChecklistTemplateList = z.infer<typeof checklistTemplateListResponseSchema>;
 export const checklistTemplateResponseSchema = z.object({ data: checklistTemplateSchema });
+export type ChecklistTemplateResponse = z.infer<typeof checklistTemplateResponseSchema>;
 export const checklistTemplateWithAbilitiesSchema = checklistTemplateResponseSchema.extend({
   abilities: editAbilities,
 });
@@ -236,3 +237,4 @@ export const walkaroundPhotoSchema = z.object({
 });
 export type UploadedPhoto = z.infer<typeof walkaroundPhotoSchema>;
 export const walkaroundPhotoResponseSchema = z.object({ data: walkaroundPhotoSchema });
+export type WalkaroundPhotoResponse = z.infer<typeof walkaroundPhotoResponseSchema>;

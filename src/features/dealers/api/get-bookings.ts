@@ -1,13 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { dealerKeys } from './keys';
-import type { Booking } from './types';
+import type { Bookings } from '../../../../shared/schemas/dealer-responses';
 
 export const getBookings = (orgId: string, signal?: AbortSignal) =>
-  apiClient.get<{ data: Booking[]; abilities: { propose: boolean } }>(
-    `/organizations/${segment(orgId)}/bookings`,
-    { signal },
-  );
+  apiClient.get<Bookings>(`/organizations/${segment(orgId)}/bookings`, { signal });
 
 export const bookingsQueryOptions = (orgId: string) =>
   queryOptions({

@@ -1,13 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { dealerKeys } from './keys';
-import type { Customer } from './types';
+import type { Customers } from '../../../../shared/schemas/dealer-responses';
 
 export const getCustomers = (orgId: string, signal?: AbortSignal) =>
-  apiClient.get<{ data: Customer[]; abilities: { invite: boolean } }>(
-    `/organizations/${segment(orgId)}/customers`,
-    { signal },
-  );
+  apiClient.get<Customers>(`/organizations/${segment(orgId)}/customers`, { signal });
 
 export const customersQueryOptions = (orgId: string) =>
   queryOptions({

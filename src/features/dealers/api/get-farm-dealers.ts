@@ -1,13 +1,10 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { dealerKeys } from './keys';
-import type { FarmDealerLink } from './types';
+import type { FarmDealerLinks } from '../../../../shared/schemas/dealer-responses';
 
 export const getFarmDealers = (orgId: string, signal?: AbortSignal) =>
-  apiClient.get<{ data: FarmDealerLink[]; abilities: { invite: boolean } }>(
-    `/organizations/${segment(orgId)}/dealers`,
-    { signal },
-  );
+  apiClient.get<FarmDealerLinks>(`/organizations/${segment(orgId)}/dealers`, { signal });
 
 export const farmDealersQueryOptions = (orgId: string) =>
   queryOptions({

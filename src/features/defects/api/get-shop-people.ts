@@ -1,18 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Role } from '../../../../shared/constants';
+import type { MemberList } from '../../../../shared/schemas/members';
 import { apiClient, segment } from '../../../lib/api-client';
 import { defectKeys } from './keys';
 import type { PersonRef } from './types';
 
-interface MemberRow {
-  role: Role;
-  user: { id: string; name: string };
-}
-
 /** Who a defect can be assigned to: the farm's technicians and managers (from the members). */
 export const getShopPeople = (orgId: string, signal?: AbortSignal) =>
   apiClient
-    .get<{ data: MemberRow[] }>(`/organizations/${segment(orgId)}/members`, { signal })
+    .get<MemberList>(`/organizations/${segment(orgId)}/members`, { signal })
     .then((body) =>
       body.data
         .filter((m) => m.role === 'technician' || m.role === 'manager')

@@ -2,11 +2,11 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DefectUpdateInput } from '../../../../shared/schemas/defects';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterDefectChange } from './invalidate';
-import type { Defect, DefectAbilities } from './types';
+import type { DefectResponse } from '../../../../shared/schemas/defects';
 
 /** PATCH …/defects/:defectId: assign, start or stop the repair, re-grade (technician, manager). */
 export const updateDefect = (orgId: string, defectId: string, input: DefectUpdateInput) =>
-  apiClient.patch<{ data: Defect; abilities: DefectAbilities }>(
+  apiClient.patch<DefectResponse>(
     `/organizations/${segment(orgId)}/defects/${segment(defectId)}`,
     input,
   );

@@ -1,12 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { serviceKeys } from './keys';
+import type { DefectList } from '../../../../shared/schemas/defects';
 import type { ActiveDefect } from './types';
 
 /** The machine's open and in-repair defects, which a visit may close. */
 export const getActiveDefects = (orgId: string, machineId: string, signal?: AbortSignal) =>
   apiClient
-    .get<{ data: ActiveDefect[] }>(
+    .get<DefectList>(
       `/organizations/${segment(orgId)}/machines/${segment(machineId)}/defects?status=active&pageSize=100`,
       { signal },
     )

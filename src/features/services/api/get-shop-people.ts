@@ -1,17 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
+import type { MemberList } from '../../../../shared/schemas/members';
 import { apiClient, segment } from '../../../lib/api-client';
 import { serviceKeys } from './keys';
 import type { ShopPerson } from './types';
 
-interface MemberRow {
-  role: string;
-  user: { id: string; name: string };
-}
-
 /** The farm's technicians and managers (from the member list): who can be named on a record. */
 export const getShopPeople = (orgId: string, signal?: AbortSignal) =>
   apiClient
-    .get<{ data: MemberRow[] }>(`/organizations/${segment(orgId)}/members`, { signal })
+    .get<MemberList>(`/organizations/${segment(orgId)}/members`, { signal })
     .then((body) =>
       body.data.flatMap((m): ShopPerson[] =>
         m.role === 'technician' || m.role === 'manager'

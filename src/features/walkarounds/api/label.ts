@@ -1,6 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { API_BASE, apiClient, segment } from '../../../lib/api-client';
 import { walkaroundKeys } from './keys';
+import type { MachineDetail } from '../../../../shared/schemas/machines';
 import type { MachineRef } from './types';
 
 /** The printable label (SVG, 60 × 76 mm); the cookie session goes along with an <img>. */
@@ -10,10 +11,10 @@ export const labelSvgUrl = (orgId: string, machineId: string, download = false) 
 /** The machine a label is for: its fleet number and name (GET machines/:id, trimmed). */
 export const getLabelMachine = (orgId: string, machineId: string, signal?: AbortSignal) =>
   apiClient
-    .get<{ data: MachineRef }>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}`, {
+    .get<MachineDetail>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}`, {
       signal,
     })
-    .then(({ data: { id, fleetNumber, name, category, status, meterUnit } }) => ({
+    .then(({ data: { id, fleetNumber, name, category, status, meterUnit } }): MachineRef => ({
       id,
       fleetNumber,
       name,
