@@ -131,7 +131,8 @@ export const DEMO_MACHINES: DemoMachine[] = [
     aboutNow: 18400,
     perYear: 2350,
     season: { months: [6, 7, 8, 9], peakMonths: [6, 8], useShare: 0.45 },
-    operators: ['sam@larkspur.example'],
+    // two balers' operators through the hay season
+    operators: ['sam@larkspur.example', 'lena@larkspur.example'],
   },
   {
     organization: 'larkspur',

@@ -153,7 +153,8 @@ describe('fleet and forecast — the manager in the browser', () => {
         .click();
       await phone.getByRole('heading', { name: 'Log hours' }).waitFor();
       const inputs = phone.getByRole('textbox', { name: / reading$/ });
-      expect(await inputs.count()).toBeGreaterThan(0);
+      // the list arrives after the heading: wait for its first row instead of counting at once
+      await inputs.first().waitFor();
       const box = await inputs.first().boundingBox();
       expect(box!.height).toBeGreaterThanOrEqual(40); // big touch target
       expect(box!.x + box!.width).toBeLessThanOrEqual(PHONE_VIEWPORT.width);

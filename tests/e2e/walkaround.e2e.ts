@@ -130,7 +130,8 @@ describe('daily walkaround on a phone (browser)', () => {
       .click();
     await page.getByRole('heading', { name: `Walkaround · ${fleet}` }).waitFor();
 
-    await page.getByLabel('Hour meter', { exact: true }).fill(nextMeter(checklist));
+    const meterLabel = machine.meterUnit === 'h' ? 'Hour meter' : `Meter (${machine.meterUnit})`;
+    await page.getByLabel(meterLabel, { exact: true }).fill(nextMeter(checklist));
     // hazard items carry their caution, deferring to the manual; critical items say so
     const cautions = checklist.items.filter((i) => i.caution).length;
     expect(cautions).toBeGreaterThan(0);
