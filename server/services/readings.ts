@@ -2,7 +2,7 @@ import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { format } from 'date-fns';
 import { TZDate } from '@date-fns/tz';
 import { sequelize } from '../db';
-import { AppError, invalid } from '../errors';
+import { AppError, invalid, notFound } from '../errors';
 import { Machine, MeterReading, MeterReplacement } from '../models';
 import { checkReading, toLifetimeValue, type MeterReplacementPoint } from '../../shared/domain';
 import type { ReadingSource } from '../../shared/constants';
@@ -153,11 +153,7 @@ export async function planReadings(
   const toInsert: { item: NewReading; index: number; lifetime: number }[] = [];
   for (const group of byMachine.values()) {
     const machine = group[0].item.machine;
-    // Serialise writers per machine so two people logging at once cannot interleave neighbours.
-    await sequelize.query('SELECT id FROM machines WHERE id = :id FOR UPDATE', {
-      replacements: { id: machine.id },
-      transaction,
-    });
+    await lockMachineReadings(machine.id, transaction);
     const replacements = await replacementsOf(machine, transaction);
     const times = group.map((g) => g.item.takenAt.getTime());
     const existing = await readingsAround(
@@ -241,6 +237,17 @@ export async function writeAccompanyingReading(
   }
 }
 
+/**
+ * Serialises every writer of one machine's readings (new, corrected, deleted) on the machine's row,
+ * so two people editing at once cannot each pass the neighbour checks against a stale neighbour.
+ */
+async function lockMachineReadings(machineId: string, transaction: Transaction) {
+  await sequelize.query('SELECT id FROM machines WHERE id = :id FOR UPDATE', {
+    replacements: { id: machineId },
+    transaction,
+  });
+}
+
 /** Corrects a reading's value or time (rules re-checked against its neighbours); audited. */
 export async function correctReading(
   access: OrgAccess,
@@ -249,6 +256,11 @@ export async function correctReading(
   changes: { value?: number; takenAt?: Date },
 ) {
   return sequelize.transaction(async (transaction) => {
+    await lockMachineReadings(machine.id, transaction);
+    // re-read under the lock: another edit may have changed or removed it meanwhile
+    const stillThere = await MeterReading.count({ where: { id: reading.id }, transaction });
+    if (!stillThere) throw notFound('Reading');
+    await reading.reload({ transaction });
     const before = { value: reading.value, takenAt: reading.takenAt.toISOString() };
     const value = changes.value ?? reading.value;
     const takenAt = changes.takenAt ?? reading.takenAt;
@@ -297,6 +309,7 @@ export async function correctReading(
 /** Deletes a reading; audited with its values so the log shows what was removed. */
 export async function deleteReading(access: OrgAccess, machine: Machine, reading: MeterReading) {
   await sequelize.transaction(async (transaction) => {
+    await lockMachineReadings(machine.id, transaction);
     await reading.destroy({ transaction });
     await recordAudit(
       {
