@@ -107,12 +107,14 @@ const COLUMNS: [keyof Counts, string][] = [
   ['safetyNet', 'safety net'],
   ['wroteOnRefusal', 'wrote on 4xx'],
 ];
-const row = (name: string, c: Counts) =>
-  `${name.padEnd(72)}${COLUMNS.map(([k, h]) => String(c[k]).padStart(h.length + 2)).join('')}`;
 const total = Object.fromEntries(
   COLUMNS.map(([k]) => [k, tallies.reduce((n, t) => n + t[k], 0)]),
 ) as unknown as Counts;
-console.log(`\n${'route'.padEnd(72)}${COLUMNS.map(([, h]) => h.padStart(h.length + 2)).join('')}`);
+// each column as wide as its header or the total (the largest figure), plus two spaces
+const width = (k: keyof Counts, h: string) => Math.max(h.length, String(total[k]).length) + 2;
+const row = (name: string, c: Counts) =>
+  `${name.padEnd(72)}${COLUMNS.map(([k, h]) => String(c[k]).padStart(width(k, h))).join('')}`;
+console.log(`\n${'route'.padEnd(72)}${COLUMNS.map(([k, h]) => h.padStart(width(k, h))).join('')}`);
 for (const t of tallies) console.log(row(t.name, t));
 console.log(row('total', total));
 for (const t of tallies) for (const e of t.examples) console.log(`  ${t.name}: ${e}`);
