@@ -17,10 +17,10 @@ import { devRouter } from './routes/dev/dev.router';
 import { machinesRouter } from './routes/machines/machines.router';
 import { machinePhotoRouter } from './routes/machines/photo.router';
 import { fleetImportRouter } from './routes/machines/fleet-import.router';
+import { machineStatusRouter } from './routes/machines/status.router';
 import { tasksRouter } from './routes/tasks/tasks.router';
 import { taskHistoryRouter } from './routes/tasks/history.router';
 import { firstRunRouter } from './routes/onboarding/first-run.router';
-import { machineStatusRouter } from './routes/machines/status.router';
 import { readingsRouter } from './routes/readings/readings.router';
 import { dueRouter } from './routes/due/due.router';
 import { servicesRouter } from './routes/services/services.router';
@@ -82,6 +82,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(machinesRouter());
   api.use(machinePhotoRouter());
   api.use(fleetImportRouter());
+  api.use(machineStatusRouter());
   api.use(tasksRouter());
   api.use(taskHistoryRouter());
   api.use(firstRunRouter());
@@ -89,7 +90,6 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(dueRouter());
   api.use(servicesRouter());
   api.use(walkaroundsRouter());
-  api.use(machineStatusRouter());
   api.use(defectsRouter());
   api.use(notificationsRouter());
   api.use(calendarRouter());

@@ -2,9 +2,6 @@ import { Op } from 'sequelize';
 import { User } from '../models';
 import type { PersonRef } from '../../shared/schemas/refs';
 
-// The schema moved to shared/schemas/refs.ts; re-exported while presenters of other resources
-// still import it from here.
-export { personRefSchema as personSchema } from '../../shared/schemas/refs';
 export type { PersonRef };
 
 /** Names of the given users in one query, for presenters. */

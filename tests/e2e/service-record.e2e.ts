@@ -113,6 +113,13 @@ describe('service records — the technician in the browser', () => {
     const setting = page.getByRole('group', { name: 'Setting 1' });
     await setting.getByLabel('What was counted, removed or set').fill('Charge pump relief shims');
     await setting.getByLabel('Value').fill('1.2 mm pack, under the cap');
+    // amounts are typed as decimals of the farm's currency and added exactly (0.10 + 0.20)
+    for (const [i, amount] of ['0.10', '0.20'].entries()) {
+      await page.getByRole('button', { name: 'Add cost' }).click();
+      const cost = page.getByRole('group', { name: `Cost ${i + 1}` });
+      await cost.getByLabel('Cost description').fill(`Shop rags ${i + 1}`);
+      await cost.getByLabel('Amount').fill(amount);
+    }
     await page.getByRole('button', { name: 'Complete service' }).click();
 
     // the server refuses and says so beside that setting; nothing was recorded
@@ -129,6 +136,9 @@ describe('service records — the technician in the browser', () => {
     const resets = page.getByRole('list', { name: 'Tasks reset' });
     await resets.waitFor();
     expect(await resets.innerText()).toContain(`${task.name}: reset`);
+    const costs = await page.getByLabel('Costs', { exact: true }).innerText();
+    expect(costs).toMatch(/Other\s*\$0\.30/);
+    expect(costs).toMatch(/Total\s*\$0\.30/);
     const restored = page.getByRole('list', { name: 'Reassembly settings' });
     expect(await restored.innerText()).toMatch(/Charge pump relief shims[\s\S]*Restored/);
     const recordPath = new URL(page.url()).pathname;
