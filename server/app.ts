@@ -23,7 +23,7 @@ import { taskHistoryRouter } from './routes/tasks/history.router';
 import { firstRunRouter } from './routes/onboarding/first-run.router';
 import { readingsRouter } from './routes/readings/readings.router';
 import { dueRouter } from './routes/due/due.router';
-import { servicesRouter } from './routes/services/services.router';
+import { serviceRecordsRouter } from './routes/service-records/shop.router';
 import { walkaroundsRouter } from './routes/walkarounds/walkarounds.router';
 import { defectsRouter } from './routes/defects/defects.router';
 import { notificationsRouter } from './routes/notifications/notifications.router';
@@ -88,7 +88,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(firstRunRouter());
   api.use(readingsRouter());
   api.use(dueRouter());
-  api.use(servicesRouter());
+  api.use(serviceRecordsRouter());
   api.use(walkaroundsRouter());
   api.use(defectsRouter());
   api.use(notificationsRouter());

@@ -1,7 +1,7 @@
 import type { RequestHandler } from 'express';
 import type { Membership, User } from '../models';
 import { unauthenticated } from '../errors';
-import { loadSession, SESSION_COOKIE } from '../services/session';
+import { loadSession, SESSION_COOKIE } from '../infra/session';
 
 export interface AuthContext {
   user: User;

@@ -13,7 +13,7 @@ import type {
   ServiceFluid,
   ServicePart,
   ServiceStatus,
-} from '../../shared/schemas/services';
+} from '../../shared/schemas/service-records';
 
 /** A task a record covers, with its name as it was (tasks may be renamed or removed later). */
 export interface RecordTask {

@@ -11,7 +11,7 @@ import {
   type Attachment,
   type Measurement,
   type ServiceRecord as PresentedRecord,
-} from '../../shared/schemas/service-responses';
+} from '../../shared/schemas/service-record-responses';
 import { recordCosts } from '../../shared/domain/record-costs';
 import { presentMachineRef } from './defect';
 import { peopleById } from './people';

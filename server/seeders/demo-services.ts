@@ -7,7 +7,7 @@ import type { CreationAttributes, Transaction } from 'sequelize';
 import { ServiceMeasurement, ServiceRecord } from '../models';
 import type { MachineCategory, UnitSystem } from '../../shared/constants';
 import type { TaskFluid, TaskPart } from '../../shared/schemas/schedule';
-import type { ReassemblySetting } from '../../shared/schemas/services';
+import type { ReassemblySetting } from '../../shared/schemas/service-records';
 import { addDaysIso, isoFromDayNumber, localDayNumber, todayIso } from '../../shared/domain';
 import { prefillLines } from '../services/service-records';
 import { TZDate } from '@date-fns/tz';

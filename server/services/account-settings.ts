@@ -8,7 +8,7 @@ import { AppError, invalid } from '../errors';
 import { User } from '../models';
 import type { Account, AccountUpdateInput } from '../../shared/schemas/account';
 import { emailChangeConfirmMail, emailChangeTakenMail, emailChangedMail } from './account-mail';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 import {
   VERIFY_HOURS,
   emailIs,
@@ -17,9 +17,9 @@ import {
   useVerification,
   voidVerifications,
 } from './email-verifications';
-import { queueMessage } from './mailer';
+import { queueMessage } from '../infra/mailer';
 import { lastManagedOrganizations } from './organizations';
-import { checkPassword } from './password-hash';
+import { checkPassword } from '../infra/password-hash';
 import { forgetFailures, reserveAttempt, throttleKey, waitInWords } from './sign-in-throttle';
 
 /** The account as its settings page shows it. */

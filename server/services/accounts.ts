@@ -8,11 +8,11 @@ import type { InvitationCreateInput } from '../../shared/schemas/auth';
 import { ROLE_LABELS } from '../../shared/constants';
 import type { OrgAccess } from '../policies/access';
 import { rolesFor } from '../policies/membership';
-import { queueMessage } from './mailer';
-import { hashToken, newToken } from './tokens';
-import { recordAudit } from './audit';
-import { hashPassword } from './password-hash';
-import { endOtherSessions } from './session';
+import { queueMessage } from '../infra/mailer';
+import { hashToken, newToken } from '../infra/tokens';
+import { recordAudit } from '../infra/audit';
+import { hashPassword } from '../infra/password-hash';
+import { endOtherSessions } from '../infra/session';
 import { forgetFailures, throttleKey } from './sign-in-throttle';
 
 export const INVITATION_DAYS = 7;

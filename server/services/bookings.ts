@@ -15,9 +15,9 @@ import type { BookingItem } from '../models/service-booking';
 import type { OrgAccess } from '../policies/access';
 import { todayIso } from '../../shared/domain';
 import type { BookingCreateInput, BookingStatus } from '../../shared/schemas/dealers';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 import { requireCustomer } from './dealer-links';
-import { queueMessage } from './mailer';
+import { queueMessage } from '../infra/mailer';
 import { prefillLines } from './service-records';
 
 const appUrl = () => env.APP_URL.replace(/\/+$/, '');

@@ -16,7 +16,7 @@ import type { CalendarFeedScope } from '../../shared/schemas/notifications';
 import { dueList, type DueRow } from './due-list';
 import { taskFacts } from './digest';
 import { appLinks, cautionLine, effectivePreference } from './reminders';
-import { hashToken } from './tokens';
+import { hashToken } from '../infra/tokens';
 
 const NO_USER = '00000000-0000-0000-0000-000000000000';
 

@@ -3,9 +3,9 @@
 import { sequelize } from '../db';
 import { AppError, invalid } from '../errors';
 import { User } from '../models';
-import { recordAudit } from './audit';
-import { checkPassword, hashPassword, needsRehash } from './password-hash';
-import { endOtherSessions } from './session';
+import { recordAudit } from '../infra/audit';
+import { checkPassword, hashPassword, needsRehash } from '../infra/password-hash';
+import { endOtherSessions } from '../infra/session';
 import { forgetFailures, reserveAttempt, throttleKey, waitInWords } from './sign-in-throttle';
 
 /** The account of an e-mail, compared case-insensitively. */

@@ -13,9 +13,9 @@ import {
   type DealerInvitationAcceptInput,
   type DealerInvitationInput,
 } from '../../shared/schemas/dealers';
-import { recordAudit } from './audit';
-import { queueMessage } from './mailer';
-import { hashToken, newToken } from './tokens';
+import { recordAudit } from '../infra/audit';
+import { queueMessage } from '../infra/mailer';
+import { hashToken, newToken } from '../infra/tokens';
 
 export const DEALER_INVITATION_DAYS = 14;
 

@@ -5,10 +5,10 @@ import { Membership, User } from '../models';
 import type { OrgAccess } from '../policies/access';
 import type { ReminderInput } from '../../shared/schemas/dealers';
 import { DUE_STATUS_LABELS } from '../../shared/constants';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 import { dealerAccessFor, recordDealerRead, requireCustomer } from './dealer-links';
 import { dueList, type DueRow } from './due-list';
-import { queueMessage } from './mailer';
+import { queueMessage } from '../infra/mailer';
 
 const day = (iso: string) => format(parseISO(iso), 'd MMM yyyy');
 const meter = (n: number, unit: string) =>

@@ -10,7 +10,7 @@ import type {
 } from '../../shared/schemas/defects';
 import type { OrgAccess } from '../policies/access';
 import { loadMachine } from './machines';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 import { openCriticalDefects, tagOut } from './machine-status';
 
 const SEVERITY_RANK: Record<DefectSeverity, number> = { critical: 0, major: 1, minor: 2 };

@@ -6,7 +6,7 @@ import type { OrgAccess } from '../policies/access';
 import { addDaysIso } from '../../shared/domain';
 import { DIGEST_HORIZON_DAYS } from '../../shared/schemas/notifications';
 import { dueList, type DueRow } from './due-list';
-import { queueMessage } from './mailer';
+import { queueMessage } from '../infra/mailer';
 import {
   appLinks,
   cautionLine,

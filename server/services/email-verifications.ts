@@ -5,7 +5,7 @@ import { sequelize } from '../db';
 import { invalid } from '../errors';
 import { EmailVerification } from '../models';
 import type { EmailVerificationPurpose } from '../models/email-verification';
-import { hashToken, newToken } from './tokens';
+import { hashToken, newToken } from '../infra/tokens';
 
 export const VERIFY_HOURS = 24;
 // Links are kept this long past their expiry (who tried to sign up when), then dropped.

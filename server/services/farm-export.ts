@@ -4,7 +4,7 @@ import { stringify } from 'csv-stringify/sync';
 import { QueryTypes, Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import type { Organization } from '../models';
-import { getObject, isMissingObject } from './storage';
+import { getObject, isMissingObject } from '../infra/storage';
 import { EXPORT_TABLES, FILE_PATHS, type ExportTable } from './farm-export-tables';
 
 // A farm's own data as one zip: a CSV per kind of record, organization.json, the stored files and

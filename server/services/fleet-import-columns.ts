@@ -9,7 +9,7 @@ import {
   type MeterUnit,
 } from '../../shared/constants';
 import { invalid } from '../errors';
-import { normaliseHeader } from './csv-sheet';
+import { normaliseHeader } from '../infra/csv-sheet';
 
 export const FLEET_COLUMNS = {
   fleetNumber: ['fleet number', 'fleet_number', 'fleetnumber', 'fleet no', 'fleet no.', 'fleet'],

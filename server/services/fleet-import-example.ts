@@ -5,7 +5,7 @@ import { stringify } from 'csv-stringify/sync';
 import { ScheduleTemplate } from '../models';
 import { addDaysIso, todayIso } from '../../shared/domain';
 import type { OrgAccess } from '../policies/access';
-import { localDateOrder } from './csv-sheet';
+import { localDateOrder } from '../infra/csv-sheet';
 
 const MACHINES = [
   [

@@ -11,7 +11,7 @@ import {
 import { readingCreateSchema } from '../../shared/schemas/readings';
 import { lastDoneSchema, type LastDoneInput } from '../../shared/schemas/schedule';
 import type { Machine, ScheduleTemplate } from '../models';
-import { parseCsvNumber, parseLocalDate, parseTakenAt } from './csv-sheet';
+import { parseCsvNumber, parseLocalDate, parseTakenAt } from '../infra/csv-sheet';
 import {
   CATEGORY_CHOICES,
   METER_UNIT_CHOICES,

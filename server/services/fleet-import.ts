@@ -12,7 +12,7 @@ import type {
   FleetImportRow,
 } from '../../shared/schemas/fleet-import';
 import type { OrgAccess } from '../policies/access';
-import { localDateOrder, readCsvSheet, usesDecimalComma } from './csv-sheet';
+import { localDateOrder, readCsvSheet, usesDecimalComma } from '../infra/csv-sheet';
 import { mapFleetColumns } from './fleet-import-columns';
 import { planRow, type PlanContext, type RowPlan } from './fleet-import-plan';
 import { recomputeDuePoints } from './forecast';

@@ -10,7 +10,7 @@ import type {
 import type { OrgAccess } from '../policies/access';
 import { hasRole } from '../policies/access';
 import { canViewMachine } from '../policies/machine';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 import { refreshMachineForecast } from './forecast';
 import { applyStatusEdit } from './machine-status';
 

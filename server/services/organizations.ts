@@ -16,9 +16,9 @@ import type { OrgAccess } from '../policies/access';
 import { managingRole } from '../policies/organization';
 import { inviteMember } from './accounts';
 import { organizationDeletedMail } from './account-mail';
-import { recordAudit } from './audit';
-import { queueMessage } from './mailer';
-import { deleteObject, listObjectKeys } from './storage';
+import { recordAudit } from '../infra/audit';
+import { queueMessage } from '../infra/mailer';
+import { deleteObject, listObjectKeys } from '../infra/storage';
 
 /** Creates the organization and makes its creator the manager (a dealer's: its advisor). */
 export async function createOrganization(

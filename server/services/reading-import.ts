@@ -9,7 +9,7 @@ import {
   parseTakenAt,
   readCsvSheet,
   usesDecimalComma,
-} from './csv-sheet';
+} from '../infra/csv-sheet';
 import { planReadings, writeReadings, type NewReading } from './readings';
 
 export interface ImportRow {

@@ -8,7 +8,7 @@ import { checkReading, toLifetimeValue, type MeterReplacementPoint } from '../..
 import type { ReadingSource } from '../../shared/constants';
 import type { OrgAccess } from '../policies/access';
 import { refreshMachineForecast } from './forecast';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 
 export interface NewReading {
   machine: Machine;

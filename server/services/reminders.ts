@@ -9,7 +9,7 @@ import { env } from '../env';
 import { invalid, notFound } from '../errors';
 import { Machine, Membership, NotificationPreference, Organization } from '../models';
 import type { OrgAccess } from '../policies/access';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 import type { Role } from '../../shared/constants';
 import { dayNumberFromIso, todayIso } from '../../shared/domain';
 import type {

@@ -5,7 +5,7 @@ import { Machine, MachineForecast, ScheduleTemplate, ServiceTask } from '../mode
 import type { LastDoneInput, TaskInput } from '../../shared/schemas/schedule';
 import { todayIso } from '../../shared/domain';
 import type { OrgAccess } from '../policies/access';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 import { recomputeDuePoints } from './forecast';
 
 export async function loadTask(access: OrgAccess, taskId: string, transaction?: Transaction) {

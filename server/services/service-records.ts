@@ -19,7 +19,7 @@ import type {
   ServiceRecordCreateInput,
   ServiceRecordUpdateInput,
   ServiceHistoryQuery,
-} from '../../shared/schemas/services';
+} from '../../shared/schemas/service-records';
 import { localDayNumber, isoFromDayNumber, todayIso } from '../../shared/domain';
 import type { OrgAccess } from '../policies/access';
 import { canHandleDefects } from '../policies/defect';
@@ -27,7 +27,7 @@ import { loadMachine } from './machines';
 import { writeAccompanyingReading } from './readings';
 import { recomputeDuePoints } from './forecast';
 import { closeDefects, DEALER_DEFECTS_REFUSAL } from './defects';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 
 /** The record if it is in the caller's organization on a machine they may see; else 404. */
 export async function loadRecord(access: OrgAccess, recordId: string, transaction?: Transaction) {

@@ -1,6 +1,6 @@
 import { Op } from 'sequelize';
 import { Machine, ServiceRecord, ServiceTask } from '../models';
-import type { ServiceFluid, ServicePart } from '../../shared/schemas/services';
+import type { ServiceFluid, ServicePart } from '../../shared/schemas/service-records';
 import { addDaysIso, dayNumberFromIso, todayIso } from '../../shared/domain';
 import type { OrgAccess } from '../policies/access';
 import { dueList, type DueRow } from './due-list';

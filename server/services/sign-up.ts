@@ -9,7 +9,7 @@ import { AppError, invalid } from '../errors';
 import { User } from '../models';
 import type { SignUpInput } from '../../shared/schemas/account';
 import { signUpConfirmMail, signUpExistingMail } from './account-mail';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 import {
   VERIFY_HOURS,
   dropExpiredVerifications,
@@ -18,8 +18,8 @@ import {
   useVerification,
   voidVerifications,
 } from './email-verifications';
-import { queueMessage } from './mailer';
-import { hashPassword } from './password-hash';
+import { queueMessage } from '../infra/mailer';
+import { hashPassword } from '../infra/password-hash';
 
 // A sign-up answers no sooner than this after it arrived, known address or not: the new one
 // writes a link, the known one only a message, and the time must not tell them apart.

@@ -3,7 +3,7 @@
 // does; the period key is the tag-out's audit event, so one event is never mailed twice.
 import type { Transaction } from 'sequelize';
 import { Membership, User, type Machine, type Organization } from '../models';
-import { queueMessage } from './mailer';
+import { queueMessage } from '../infra/mailer';
 import { appLinks, emailFrame, escapeHtml, SAFETY_LINE } from './reminders';
 
 export const TAG_OUT_MAIL_KIND = 'tag_out';

@@ -4,7 +4,7 @@ import { invalid } from '../errors';
 import { MachineForecast, ServiceTask, TaskDuePoint, type Machine } from '../models';
 import { todayIso } from '../../shared/domain';
 import type { OrgAccess } from '../policies/access';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 import { recomputeDuePoints } from './forecast';
 
 /** The machine's tasks whose last service nobody has given yet (status history_unknown). */

@@ -19,7 +19,7 @@ import { canDoWalkaround, canInspect } from '../policies/walkaround';
 import { loadMachine } from './machines';
 import { writeAccompanyingReading } from './readings';
 import { raiseDefect, taggedOutMessage } from './defects';
-import { recordAudit } from './audit';
+import { recordAudit } from '../infra/audit';
 import { cautionFor, defaultChecklist } from './checklist-defaults';
 
 export interface Checklist {

@@ -20,7 +20,7 @@ import {
   updateAccount,
 } from '../../services/account-settings';
 import { loadMemberships } from '../../services/accounts';
-import { endSession, startSession } from '../../services/session';
+import { endSession, startSession } from '../../infra/session';
 import { confirmSignUp, requestSignUp, signUpIsOpen } from '../../services/sign-up';
 import {
   refuseWhenSignUpClosed,

@@ -12,7 +12,7 @@ import {
   signInSchema,
 } from '../../../shared/schemas/auth';
 import { presentMe } from '../../presenters/me';
-import { endSession, startSession } from '../../services/session';
+import { endSession, startSession } from '../../infra/session';
 import {
   acceptInvitation,
   confirmPasswordReset,

@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { rawResponse, route } from '../route';
 import { authorize } from '../../policies/access';
 import { canExportFarmData } from '../../policies/farm-export';
-import { recordAudit } from '../../services/audit';
+import { recordAudit } from '../../infra/audit';
 import { writeFarmExport } from '../../services/farm-export';
 import { todayIso } from '../../../shared/domain';
 

@@ -6,11 +6,11 @@ import { machinePhotoResponseSchema } from '../../../shared/schemas/machines';
 import { authorize } from '../../policies/access';
 import { canUpdateMachine } from '../../policies/machine';
 import { loadMachine } from '../../services/machines';
-import { deleteObject, getObject, putObject } from '../../services/storage';
-import { IMAGE_MAX_BYTES, prepareImage } from '../../services/images';
+import { deleteObject, getObject, putObject } from '../../infra/storage';
+import { IMAGE_MAX_BYTES, prepareImage } from '../../infra/images';
 import { fileUpload } from '../../middlewares/upload';
 import { notFound } from '../../errors';
-import { recordAudit } from '../../services/audit';
+import { recordAudit } from '../../infra/audit';
 
 const params = z.object({ orgId: z.uuid(), machineId: z.uuid() });
 

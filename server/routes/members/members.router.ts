@@ -20,7 +20,7 @@ import {
   memberResponseSchema,
 } from '../../../shared/schemas/members';
 import { inviteMember } from '../../services/accounts';
-import { recordAudit } from '../../services/audit';
+import { recordAudit } from '../../infra/audit';
 import { revokePersonalFeeds } from '../../services/calendar';
 import { sequelize } from '../../db';
 import type { OrgAccess } from '../../policies/access';

@@ -29,7 +29,7 @@ import {
 import { ScheduleTemplate, ServiceTask, TaskDuePoint } from '../../models';
 import { ensureDuePointsCurrent } from '../../services/forecast';
 import { sequelize } from '../../db';
-import { recordAudit } from '../../services/audit';
+import { recordAudit } from '../../infra/audit';
 import { invalid } from '../../errors';
 
 const orgParams = z.object({ orgId: z.uuid() });

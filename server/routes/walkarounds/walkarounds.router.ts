@@ -24,15 +24,15 @@ import {
   submitWalkaround,
 } from '../../services/walkarounds';
 import { taggedOutMessage } from '../../services/defects';
-import { getObject, putObject } from '../../services/storage';
-import { prepareImage } from '../../services/images';
+import { getObject, putObject } from '../../infra/storage';
+import { prepareImage } from '../../infra/images';
 import { fileUpload } from '../../middlewares/upload';
 import { AppError, notFound } from '../../errors';
 import { Defect, Machine, MachineForecast, Walkaround, WalkaroundPhoto } from '../../models';
 import { presentChecklistItem, presentWalkaround } from '../../presenters/walkaround';
 import { presentDefect, presentMachineRef, walkaroundPhotoUrls } from '../../presenters/defect';
 import { peopleById } from '../../presenters/people';
-import { sendObject } from '../services/attachments.router';
+import { sendObject } from '../service-records/attachments.router';
 import { registerChecklistTemplateRoutes } from './checklists.router';
 import { registerLabelRoutes } from './label.router';
 import { Op } from 'sequelize';

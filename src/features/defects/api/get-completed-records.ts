@@ -1,7 +1,7 @@
 import { useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
 import { defectKeys } from './keys';
-import type { ServiceHistory } from '../../../../shared/schemas/service-responses';
+import type { ServiceHistory } from '../../../../shared/schemas/service-record-responses';
 import type { CompletedRecord } from './types';
 
 /** The machine's latest completed service records, one of which may have fixed the defect. */

@@ -1,6 +1,6 @@
 import type { DefectSeverity, DefectStatus } from '../../../../shared/schemas/defects';
 import type { Machine } from '../../../../shared/schemas/machines';
-import type { ServiceRecord } from '../../../../shared/schemas/service-responses';
+import type { ServiceRecord } from '../../../../shared/schemas/service-record-responses';
 
 // The defect API's answers are the shared schemas' types (shared/schemas/defects.ts); what
 // follows them here are the client's filters and its views of other features' answers.

@@ -2,7 +2,7 @@ import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type {
   ServiceRecordCompleteInput,
   ServiceRecordCreateInput,
-} from '../../../../shared/schemas/services';
+} from '../../../../shared/schemas/service-records';
 import { apiClient, segment } from '../../../lib/api-client';
 import { invalidateAfterService } from './invalidate-after-service';
 import { serviceKeys } from './keys';

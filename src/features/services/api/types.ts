@@ -2,7 +2,7 @@ import type { DueStatus } from '../../../../shared/domain/types';
 import type { Defect } from '../../../../shared/schemas/defects';
 import type { Hazard } from '../../../../shared/schemas/schedule';
 
-// The service-record API's answers are the shared schemas' types (shared/schemas/service-responses.ts);
+// The service-record API's answers are the shared schemas' types (shared/schemas/service-record-responses.ts);
 // what follows them here are the client's own views of other features' answers.
 export type {
   Attachment,
@@ -23,7 +23,7 @@ export type {
   ShopWeek,
   SpecStatus,
   TaskReset,
-} from '../../../../shared/schemas/service-responses';
+} from '../../../../shared/schemas/service-record-responses';
 export type { MachineRef, PersonRef as Person } from '../../../../shared/schemas/refs';
 
 /** A member who may be named on a record: the farm's technicians and managers. */

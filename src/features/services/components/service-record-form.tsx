@@ -3,7 +3,7 @@ import { Link } from 'react-router-dom';
 import { useFieldArray, useForm, useWatch, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQueryClient } from '@tanstack/react-query';
-import { serviceRecordCreateSchema } from '../../../../shared/schemas/services';
+import { serviceRecordCreateSchema } from '../../../../shared/schemas/service-records';
 import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { ApiError, isApiError } from '../../../lib/api-client';

@@ -4,7 +4,7 @@ import {
   serviceRecordCreateSchema,
   type ServiceRecordCompleteInput,
   type ServiceRecordCreateInput,
-} from '../../../../shared/schemas/services';
+} from '../../../../shared/schemas/service-records';
 import type { Prefill, ServiceRecord } from '../api/types';
 
 // The service form's values: the same shape the server validates (serviceRecordCreateSchema), so

@@ -1,11 +1,11 @@
 import { z } from 'zod';
 import { FLUID_UNITS } from './schedule';
-import { SERVICE_STATUSES } from './services';
+import { SERVICE_STATUSES } from './service-records';
 import { currencyCodeSchema } from './money';
 import { machineRefSchema, pageMetaSchema, personRefSchema } from './refs';
 import { dueRowSchema } from './due';
 
-// What the service-record endpoints answer (server/routes/services): the presenters return these
+// What the service-record endpoints answer (server/routes/service-records): the presenters return these
 // types and the client reads them. Money is integer minor units of `currency`.
 
 export const SPEC_STATUSES = ['in', 'low', 'high'] as const;

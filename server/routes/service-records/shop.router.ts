@@ -3,7 +3,7 @@ import { route } from '../route';
 import {
   measurementSeriesQuerySchema,
   shopWeekQuerySchema,
-} from '../../../shared/schemas/services';
+} from '../../../shared/schemas/service-records';
 import { authorize } from '../../policies/access';
 import { canViewShopWeek } from '../../policies/service-record';
 import { loadMachine } from '../../services/machines';
@@ -13,13 +13,13 @@ import {
   measurementNamesResponseSchema,
   measurementSeriesResponseSchema,
   shopWeekResponseSchema,
-} from '../../../shared/schemas/service-responses';
+} from '../../../shared/schemas/service-record-responses';
 import { specStatus } from '../../presenters/service-record';
 import { registerServiceRecordRoutes, machineParams, orgParams } from './service-records.router';
 import { registerAttachmentRoutes } from './attachments.router';
 
 /** Service records, their attachments, measurement series and the shop's week. */
-export function servicesRouter(): Router {
+export function serviceRecordsRouter(): Router {
   const router = Router();
   registerServiceRecordRoutes(router);
   registerAttachmentRoutes(router);

@@ -6,7 +6,7 @@ import {
   serviceRecordCompleteSchema,
   serviceRecordCreateSchema,
   serviceRecordUpdateSchema,
-} from '../../../shared/schemas/services';
+} from '../../../shared/schemas/service-records';
 import { uuid } from '../../../shared/schemas/common';
 import { authorize } from '../../policies/access';
 import { canRecordService, isShop, serviceRecordAbilities } from '../../policies/service-record';
@@ -15,7 +15,7 @@ import {
   serviceHistoryResponseSchema,
   serviceRecordResponseSchema,
   serviceRecordWithResetsSchema,
-} from '../../../shared/schemas/service-responses';
+} from '../../../shared/schemas/service-record-responses';
 import { presentRecord, presentRecords } from '../../presenters/service-record';
 import { loadMachine } from '../../services/machines';
 import {
