@@ -1,4 +1,4 @@
-import { deliverQueued, type DeliveryOptions } from '../server/services/mailer';
+import { deliverQueued, type DeliveryOptions } from '../server/infra/mailer';
 
 /**
  * Sends queued e-mail whose time has come (retries with backoff are decided by the mailer). Rows

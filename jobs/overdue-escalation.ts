@@ -1,7 +1,7 @@
 import { Membership, Organization, User } from '../server/models';
 import type { OrgAccess } from '../server/policies/access';
 import { dueList, type DueRow } from '../server/services/due-list';
-import { queueMessage } from '../server/services/mailer';
+import { queueMessage } from '../server/infra/mailer';
 import { taskFacts } from '../server/services/digest';
 import {
   appLinks,

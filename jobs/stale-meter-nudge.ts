@@ -1,6 +1,6 @@
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../server/db';
-import { queueMessage } from '../server/services/mailer';
+import { queueMessage } from '../server/infra/mailer';
 import {
   appLinks,
   emailFrame,

@@ -6,9 +6,9 @@
 import { ApiSession, percentile, sleep } from './http';
 
 const { createMailTransport, claimNextMessage, transmit, messageIdOf } =
-  await import('../../server/services/mailer');
+  await import('../../server/infra/mailer');
 const deliverMail = await import('../../jobs/deliver-mail');
-const { queueMessage } = await import('../../server/services/mailer');
+const { queueMessage } = await import('../../server/infra/mailer');
 const { sequelize } = await import('../../server/db');
 
 export interface MailFigures {

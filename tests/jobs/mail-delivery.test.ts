@@ -13,7 +13,7 @@ import {
   createMailTransport,
   queueMessage,
   transmit,
-} from '../../server/services/mailer';
+} from '../../server/infra/mailer';
 
 // The delivery policy, pinned here rather than imported: 6 attempts in all, waiting 2, 4, 8, 16
 // and 32 minutes after the 1st to 5th failures (2^n minutes, capped at 60).

@@ -11,7 +11,7 @@ import {
   type WakeReason,
 } from '../../jobs/outbox-wakeup';
 import { sequelize } from '../../server/db';
-import { queueMessage, type OutgoingMessage } from '../../server/services/mailer';
+import { queueMessage, type OutgoingMessage } from '../../server/infra/mailer';
 
 const message = (periodKey: string): OutgoingMessage => ({
   organizationId: null,

@@ -5,7 +5,7 @@ import { loadJobSchedule } from '../../jobs/schedule';
 import * as deliverMail from '../../jobs/deliver-mail';
 import * as refreshForecasts from '../../jobs/refresh-forecasts';
 import { Notification } from '../../server/models';
-import { queueMessage } from '../../server/services/mailer';
+import { queueMessage } from '../../server/infra/mailer';
 import { withJobLock } from '../../jobs/lock';
 
 describe('worker — schedules', () => {

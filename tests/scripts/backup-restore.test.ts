@@ -11,7 +11,7 @@ import {
   createOrganization,
   createTask,
 } from '../support/factories';
-import { putObject } from '../../server/services/storage';
+import { putObject } from '../../server/infra/storage';
 import { makeBackup } from '../../scripts/backup';
 import { RestoreRefused, restoreBackup } from '../../scripts/restore';
 import { fingerprint, s3Client, storeFromEnv } from '../../scripts/backup-common';

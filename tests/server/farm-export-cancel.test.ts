@@ -12,7 +12,7 @@ import {
   createOrganization,
 } from '../support/factories';
 import { ServiceAttachment, ServiceRecord } from '../../server/models';
-import { putObject } from '../../server/services/storage';
+import { putObject } from '../../server/infra/storage';
 
 const app = createApp();
 

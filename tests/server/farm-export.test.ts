@@ -23,7 +23,7 @@ import {
   WalkaroundPhoto,
   type Organization,
 } from '../../server/models';
-import { putObject } from '../../server/services/storage';
+import { putObject } from '../../server/infra/storage';
 import { EXPORT_TABLES } from '../../server/services/farm-export-tables';
 import { EXPORT_PAGE_ROWS } from '../../server/services/farm-export';
 import { linkDealer } from './dealer-fixture';

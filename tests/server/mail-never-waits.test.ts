@@ -19,7 +19,7 @@ const { createMember, createOrganization } = await import('../support/factories'
 const { caughtMail, clearMail } = await import('../support/mail');
 const deliverMail = await import('../../jobs/deliver-mail');
 const { Notification } = await import('../../server/models');
-const { createMailTransport } = await import('../../server/services/mailer');
+const { createMailTransport } = await import('../../server/infra/mailer');
 
 const app = createApp();
 const APP_HOST = new URL(process.env.APP_URL ?? 'http://127.0.0.1:4310').hostname;

@@ -9,7 +9,7 @@ import {
   signedInAgent,
 } from '../support/factories';
 import { MachineOperator, Notification, NotificationPreference } from '../../server/models';
-import { queueMessage } from '../../server/services/mailer';
+import { queueMessage } from '../../server/infra/mailer';
 import { digestHourOf, unsubscribeToken } from '../../server/services/reminders';
 
 const app = createApp();

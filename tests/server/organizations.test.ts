@@ -3,7 +3,7 @@ import request from 'supertest';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../server/db';
 import { Organization } from '../../server/models';
-import { listObjectKeys, putObject } from '../../server/services/storage';
+import { listObjectKeys, putObject } from '../../server/infra/storage';
 import { countRows, resetDatabase } from '../support/db';
 import { createMember, createOrganization, createUser, signedInAgent } from '../support/factories';
 import { clearMail, deliveredMail } from '../support/mail';

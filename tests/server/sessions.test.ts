@@ -3,7 +3,7 @@ import request from 'supertest';
 import { createApp } from '../../server/app';
 import { sequelize } from '../../server/db';
 import { Notification, Session } from '../../server/models';
-import { SESSION_COOKIE } from '../../server/services/session';
+import { SESSION_COOKIE } from '../../server/infra/session';
 import { resetDatabase } from '../support/db';
 import { createMember, createOrganization, TEST_PASSWORD } from '../support/factories';
 

@@ -1,5 +1,5 @@
 // Reads the local mail catcher that `npm test` starts (MAIL_CATCHER_URL).
-import { deliverQueued } from '../../server/services/mailer';
+import { deliverQueued } from '../../server/infra/mailer';
 
 export interface CaughtMail {
   id: string;

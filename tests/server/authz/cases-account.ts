@@ -2,7 +2,7 @@
 import { sequelize } from '../../../server/db';
 import { Membership } from '../../../server/models';
 import { issueVerification } from '../../../server/services/email-verifications';
-import { hashPassword } from '../../../server/services/password-hash';
+import { hashPassword } from '../../../server/infra/password-hash';
 import {
   TEST_PASSWORD,
   createMember,

@@ -10,7 +10,7 @@ import {
   type Organization,
   type ServiceTask,
 } from '../../../server/models';
-import { newToken } from '../../../server/services/tokens';
+import { newToken } from '../../../server/infra/tokens';
 import { createMember, createOrganization, createUser, createTask } from '../../support/factories';
 import { linkDealer } from '../dealer-fixture';
 import { send } from './harness';

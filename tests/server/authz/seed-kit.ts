@@ -10,7 +10,7 @@ import {
   type ServiceTask,
   type User,
 } from '../../../server/models';
-import { newToken } from '../../../server/services/tokens';
+import { newToken } from '../../../server/infra/tokens';
 import { addDaysIso, todayIso } from '../../../shared/domain';
 import { addReadings, createMachine } from '../../support/factories';
 import { send, type Sent } from './harness';

@@ -18,7 +18,7 @@ import {
   serviceRecordAbilities,
 } from '../../../server/policies/service-record';
 import type { MachineStatus } from '../../../shared/constants';
-import type { ServiceStatus } from '../../../shared/schemas/services';
+import type { ServiceStatus } from '../../../shared/schemas/service-records';
 import { FARM, N, Y, accessOn, CALLERS, cells, may, type Row } from './callers';
 
 const machine = (status: MachineStatus) => ({ id: 'machine-1', status }) as Machine;
