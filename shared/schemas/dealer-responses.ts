@@ -132,9 +132,14 @@ export const reminderDraftSchema = z.object({
 });
 export type ReminderDraft = z.infer<typeof reminderDraftSchema>;
 export const reminderDraftResponseSchema = z.object({ data: reminderDraftSchema });
-export const reminderSentResponseSchema = z.object({
-  data: z.object({ recipients: z.number(), queued: z.number(), duplicate: z.boolean() }),
+/** `duplicate`: the same requestId was sent before; nothing new was queued. */
+export const reminderSentSchema = z.object({
+  recipients: z.number(),
+  queued: z.number(),
+  duplicate: z.boolean(),
 });
+export type ReminderSent = z.infer<typeof reminderSentSchema>;
+export const reminderSentResponseSchema = z.object({ data: reminderSentSchema });
 
 export const bookingSchema = z
   .object({

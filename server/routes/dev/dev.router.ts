@@ -1,18 +1,8 @@
 import { Router } from 'express';
-import { z } from 'zod';
+import { caughtMailListResponseSchema } from '../../../shared/schemas/dev-mail';
 import { route } from '../route';
 import { env } from '../../env';
 import { AppError } from '../../errors';
-
-const caughtMail = z.object({
-  id: z.string(),
-  from: z.string(),
-  to: z.array(z.string()),
-  subject: z.string(),
-  date: z.string(),
-  text: z.string(),
-  html: z.string().nullable(),
-});
 
 /** Development only: the local mail catcher's inbox, so invitation and reset links can be opened. */
 export function devRouter(): Router {
@@ -23,7 +13,7 @@ export function devRouter(): Router {
     summary: 'Mail caught by the local mail catcher (development and test only)',
     tags: ['dev'],
     access: 'public',
-    response: z.object({ data: z.array(caughtMail) }),
+    response: caughtMailListResponseSchema,
     handler: async () => {
       if (env.NODE_ENV === 'production' || !env.MAIL_CATCHER_URL)
         throw new AppError(404, 'not_found', 'No such route');

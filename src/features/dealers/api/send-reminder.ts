@@ -1,12 +1,9 @@
 import { useMutation } from '@tanstack/react-query';
 import type { ReminderInput } from '../../../../shared/schemas/dealers';
+import type { ReminderSent } from '../../../../shared/schemas/dealer-responses';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
 
-export interface ReminderResult {
-  recipients: number;
-  queued: number;
-  duplicate: boolean;
-}
+export type ReminderResult = ReminderSent;
 
 export const sendReminder = (orgId: string, customerId: string, input: ReminderInput) =>
   apiClient

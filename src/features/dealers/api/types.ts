@@ -1,8 +1,8 @@
-import type { MachineCategory } from '../../../../shared/constants';
-import type { DueStatus } from '../../../../shared/domain/types';
+import type { BoardQuery } from '../../../../shared/schemas/dealers';
+import type { ListFilters } from '../../../lib/list-filters';
 
 // The dealer API's answers are the shared schemas' types (shared/schemas/dealer-responses.ts);
-// the board's filters are the client's own.
+// the board's filters are its query (boardQuerySchema), "any" held as null.
 export type {
   AuditEvent,
   AuditLog,
@@ -21,12 +21,4 @@ export type {
 export type { DueCounts } from '../../../../shared/schemas/due';
 export type { OrgRef } from '../../../../shared/schemas/refs';
 
-export interface BoardFilters {
-  horizon: number;
-  customerId: string | null;
-  category: MachineCategory | null;
-  task: string;
-  status: DueStatus | null;
-  page: number;
-  pageSize: number;
-}
+export type BoardFilters = ListFilters<BoardQuery, 'customerId' | 'category' | 'status'>;

@@ -1,4 +1,4 @@
-import type { DefectSeverity, DefectStatus } from '../../../../shared/schemas/defects';
+import type { DefectListQuery } from '../../../../shared/schemas/defects';
 import type { Machine } from '../../../../shared/schemas/machines';
 import type { ServiceRecord } from '../../../../shared/schemas/service-record-responses';
 
@@ -13,16 +13,9 @@ export type {
 } from '../../../../shared/schemas/defects';
 export type { MachineRef, PersonRef } from '../../../../shared/schemas/refs';
 
-export type DefectStatusFilter = 'active' | 'all' | DefectStatus;
-
-export interface DefectFilters {
-  status: DefectStatusFilter;
-  severity?: DefectSeverity;
-  machineId?: string;
-  /** a user id, "me" or "none" */
-  assignedTo?: string;
-  page: number;
-}
+/** The list's filters: its query (defectListQuerySchema); the page size is the server's. */
+export type DefectFilters = Omit<DefectListQuery, 'pageSize'>;
+export type DefectStatusFilter = DefectFilters['status'];
 
 /** A machine to choose in the filters and the report form (from a row of GET machines). */
 export type MachineOption = Pick<Machine, 'id' | 'fleetNumber' | 'name' | 'status'>;

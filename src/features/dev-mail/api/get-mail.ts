@@ -1,20 +1,13 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import { apiClient, type DataEnvelope } from '../../../lib/api-client';
+import type { CaughtMailList } from '../../../../shared/schemas/dev-mail';
+import { apiClient } from '../../../lib/api-client';
 import { devMailKeys } from './keys';
 
 /** One message caught by the local mail catcher (development and test only). */
-export interface CaughtMail {
-  id: string;
-  from: string;
-  to: string[];
-  subject: string;
-  date: string;
-  text: string;
-  html: string | null;
-}
+export type { CaughtMail } from '../../../../shared/schemas/dev-mail';
 
 export const getMail = (signal?: AbortSignal) =>
-  apiClient.get<DataEnvelope<CaughtMail[]>>('/dev/mail', { signal }).then((body) =>
+  apiClient.get<CaughtMailList>('/dev/mail', { signal }).then((body) =>
     // newest first: the link someone is waiting for is the one just sent
     [...body.data].sort((a, b) => Date.parse(b.date) - Date.parse(a.date)),
   );
