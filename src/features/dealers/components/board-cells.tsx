@@ -1,6 +1,7 @@
 import { Icon } from '../../../components/ui/icons';
+import { dueDateText, dueRangeText } from '../../../lib/due-format';
 import type { BoardRow } from '../api/types';
-import { dateText, isStaleReading, meterText, rangeText, readingAgeText } from './dealer-format';
+import { isStaleReading, meterText, readingAgeText } from './dealer-format';
 
 /** The due meter value (as the meter fitted now reads) and the calendar limit, if any. */
 export function DueAt({ row }: { row: BoardRow }) {
@@ -12,7 +13,7 @@ export function DueAt({ row }: { row: BoardRow }) {
       ) : null}
       {row.due.dueDate ? (
         <span className="text-sm text-field-600">
-          {meter !== null ? 'or by' : 'by'} {dateText(row.due.dueDate)}
+          {meter !== null ? 'or by' : 'by'} {dueDateText(row.due.dueDate)}
         </span>
       ) : null}
       {meter === null && !row.due.dueDate ? <span className="text-field-600">—</span> : null}
@@ -22,11 +23,11 @@ export function DueAt({ row }: { row: BoardRow }) {
 
 /** The date it falls due and the projected range (slower and faster use). */
 export function Projected({ row }: { row: BoardRow }) {
-  const range = rangeText(row.due.projectedLow, row.due.projectedHigh);
+  const range = dueRangeText(row.due.projectedLow, row.due.projectedHigh);
   if (!row.due.effectiveDate && !range) return <span className="text-field-600">No forecast</span>;
   return (
     <span className="flex flex-col">
-      {row.due.effectiveDate ? <span>{dateText(row.due.effectiveDate)}</span> : null}
+      {row.due.effectiveDate ? <span>{dueDateText(row.due.effectiveDate)}</span> : null}
       {range ? <span className="text-sm text-field-600">range {range}</span> : null}
     </span>
   );

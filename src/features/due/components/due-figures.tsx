@@ -1,11 +1,12 @@
-import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
-import type { DueRow } from '../api/types';
 import {
-  GOVERNS_TEXT,
-  projectedRangeText,
+  dueDateText,
+  dueRangeText,
   remainingDaysText,
   remainingMeterText,
-} from './due-format';
+} from '../../../lib/due-format';
+import { formatMeter } from '../../../lib/fleet-format';
+import type { DueRow } from '../api/types';
+import { GOVERNS_TEXT } from './due-format';
 
 // The figures of one due row, used by both the table (desk) and the cards (phone).
 
@@ -31,7 +32,7 @@ export function DueAtFigure({ row }: { row: DueRow }) {
       ) : null}
       {dueDate !== null ? (
         <span className={governs === 'calendar' ? 'font-bold' : undefined}>
-          {formatLocalDate(dueDate)}
+          {dueDateText(dueDate)}
         </span>
       ) : null}
       {governs && dueMeter !== null && dueDate !== null ? (
@@ -52,10 +53,10 @@ export function ProjectedFigure({ row }: { row: DueRow }) {
         {dueMeter === null ? 'Calendar only' : status === 'overdue' ? 'Already reached' : '—'}
       </span>
     );
-  const range = projectedRangeText(projectedLow, projectedHigh);
+  const range = dueRangeText(projectedLow, projectedHigh);
   return (
     <div className="flex flex-col">
-      <span>{formatLocalDate(projectedDate)}</span>
+      <span>{dueDateText(projectedDate)}</span>
       {range ? <span className={muted}>range {range}</span> : null}
     </div>
   );
