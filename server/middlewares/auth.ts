@@ -1,19 +1,12 @@
 import type { RequestHandler } from 'express';
-import type { Membership, User } from '../models';
 import { unauthenticated } from '../errors';
 import { loadSession, SESSION_COOKIE } from '../infra/session';
-
-export interface AuthContext {
-  user: User;
-  memberships: Membership[];
-  /** the `sessions` row of this request's cookie */
-  sessionId: string;
-}
+import type { AuthContext, OrgAccess } from '../policies/context';
 
 declare module 'express-serve-static-core' {
   interface Request {
     auth?: AuthContext;
-    access?: import('../policies/access').OrgAccess;
+    access?: OrgAccess;
   }
 }
 

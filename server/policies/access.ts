@@ -1,32 +1,9 @@
 import type { Role } from '../../shared/constants';
 import type { DealerAccess } from '../../shared/schemas/dealers';
-import type { Organization } from '../models';
-import type { AuthContext } from '../middlewares/auth';
+import type { AuthContext, OrgAccess } from './context';
 import { forbidden } from '../errors';
 
-/** How the caller reaches an organization: as a member with a role. */
-export interface MemberAccess {
-  organization: Organization;
-  userId: string;
-  role: Role;
-  via: 'member';
-}
-
-/**
- * A dealer's service advisor reaching a farm through an active DealerLink: the organization is
- * the farm, the role is 'advisor', and what they may do follows the link's access.
- */
-export interface DealerAccessContext {
-  organization: Organization;
-  userId: string;
-  role: 'advisor';
-  via: 'dealer';
-  dealerAccess: DealerAccess;
-  dealerOrganizationId: string;
-  dealerLinkId: string;
-}
-
-export type OrgAccess = MemberAccess | DealerAccessContext;
+export type { DealerAccessContext, MemberAccess, OrgAccess } from './context';
 
 export const isMember = (auth: AuthContext, organizationId: string) =>
   auth.memberships.find((m) => m.organizationId === organizationId) ?? null;

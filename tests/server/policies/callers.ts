@@ -4,7 +4,7 @@
 // `isMember`; else an active dealer link of a dealer the caller advises; else nothing, which the
 // middleware answers with 404 before any policy runs).
 import type { Membership, Organization } from '../../../server/models';
-import type { AuthContext } from '../../../server/middlewares/auth';
+import type { AuthContext } from '../../../server/policies/context';
 import { isMember, type OrgAccess } from '../../../server/policies/access';
 import type { Role } from '../../../shared/constants';
 import type { DealerAccess } from '../../../shared/schemas/dealers';
