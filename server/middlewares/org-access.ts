@@ -3,7 +3,7 @@ import { z } from 'zod';
 import { notFound } from '../errors';
 import { isMember } from '../policies/access';
 import { dealerMayReach } from '../policies/dealer-link';
-import { findDealerAccess, recordDealerRead } from '../services/dealer-links';
+import { findDealerAccess, recordDealerRead } from '../services/dealer-access';
 
 const uuid = z.uuid();
 

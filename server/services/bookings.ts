@@ -16,7 +16,7 @@ import type { OrgAccess } from '../policies/access';
 import { todayIso } from '../../shared/domain';
 import type { BookingCreateInput, BookingStatus } from '../../shared/schemas/dealers';
 import { recordAudit } from '../infra/audit';
-import { requireCustomer } from './dealer-links';
+import { requireCustomer } from './dealer-access';
 import { queueMessage } from '../infra/mailer';
 import { prefillLines } from './service-records';
 

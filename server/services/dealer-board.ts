@@ -3,7 +3,7 @@ import type { DueStatus } from '../../shared/domain/types';
 import type { BoardQuery } from '../../shared/schemas/dealers';
 import type { OrgAccess } from '../policies/access';
 import { dueList, type DueRow } from './due-list';
-import { activeLinks, dealerAccessFor, recordDealerRead } from './dealer-links';
+import { activeLinks, dealerAccessFor, recordDealerRead } from './dealer-access';
 
 const DAY_MS = 86_400_000;
 const STATUS_RANK: Record<DueStatus, number> = {

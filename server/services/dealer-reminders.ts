@@ -6,7 +6,7 @@ import type { OrgAccess } from '../policies/access';
 import type { ReminderInput } from '../../shared/schemas/dealers';
 import { DUE_STATUS_LABELS } from '../../shared/constants';
 import { recordAudit } from '../infra/audit';
-import { dealerAccessFor, recordDealerRead, requireCustomer } from './dealer-links';
+import { dealerAccessFor, recordDealerRead, requireCustomer } from './dealer-access';
 import { dueList, type DueRow } from './due-list';
 import { queueMessage } from '../infra/mailer';
 

@@ -25,19 +25,19 @@ import {
   farmDealerLinksResponseSchema,
 } from '../../../shared/schemas/dealer-responses';
 import {
-  acceptDealerInvitation,
   changeLinkAccess,
-  findOpenDealerInvitation,
   grantDealer,
-  inviteCustomer,
   listCustomers,
   listFarmDealers,
-  managedFarms,
   revokeLink,
-  withdrawCustomerInvitation,
 } from '../../services/dealer-links';
+import {
+  acceptDealerInvitation,
+  describeDealerInvitation,
+  inviteCustomer,
+  withdrawCustomerInvitation,
+} from '../../services/dealer-invitations';
 import { farmAuditEvents } from '../../services/dealer-activity';
-import { DealerLink } from '../../models';
 import { orgParams, requireDealerOrg, requireFarmOrg } from './sides';
 
 const linkParams = orgParams.extend({ linkId: z.uuid() });
@@ -193,26 +193,17 @@ export function registerLinkRoutes(router: Router): void {
     params: tokenParams,
     response: dealerInvitationResponseSchema,
     handler: async ({ req, params }) => {
-      const link = await findOpenDealerInvitation(params.token);
-      const farms = managedFarms(req.auth!);
-      const live = farms.length
-        ? await DealerLink.findAll({
-            where: {
-              dealerOrganizationId: link.dealerOrganizationId,
-              status: 'active',
-              farmOrganizationId: farms.map((f) => f.id),
-            },
-            attributes: ['farmOrganizationId'],
-          })
-        : [];
-      const linked = new Set(live.map((l) => l.farmOrganizationId));
+      const { link, farms, linkedFarmIds } = await describeDealerInvitation(
+        req.auth!,
+        params.token,
+      );
       return {
         data: {
           dealer: { id: link.dealerOrganizationId, name: link.dealer?.name ?? '' },
           invitedEmail: link.invitedEmail,
           message: link.message,
           expiresAt: link.expiresAt?.toISOString() ?? null,
-          farms: farms.map((f) => ({ id: f.id, name: f.name, linked: linked.has(f.id) })),
+          farms: farms.map((f) => ({ id: f.id, name: f.name, linked: linkedFarmIds.has(f.id) })),
         },
       };
     },
