@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
 import { rateLimit } from 'express-rate-limit';
-import { signUpClosed, signUpIsOpen } from '../services/sign-up';
+import { signUpClosed, signUpIsOpen } from '../services/sign-up-gate';
 import { throttleKey } from '../services/sign-in-throttle';
 import { PostgresStore } from './rate-limit';
 

@@ -5,7 +5,7 @@ import { randomUUID } from 'node:crypto';
 import { UniqueConstraintError } from 'sequelize';
 import { sequelize } from '../db';
 import { env } from '../env';
-import { AppError, invalid } from '../errors';
+import { invalid } from '../errors';
 import { User } from '../models';
 import type { SignUpInput } from '../../shared/schemas/account';
 import { signUpConfirmMail, signUpExistingMail } from './account-mail';
@@ -20,19 +20,11 @@ import {
 } from './email-verifications';
 import { queueMessage } from '../infra/mailer';
 import { hashPassword } from '../infra/password-hash';
+import { signUpClosed, signUpIsOpen } from './sign-up-gate';
 
 // A sign-up answers no sooner than this after it arrived, known address or not: the new one
 // writes a link, the known one only a message, and the time must not tell them apart.
 export const SIGN_UP_ANSWER_MS = 400;
-
-export const signUpIsOpen = () => env.SIGNUP === 'open';
-
-export const signUpClosed = () =>
-  new AppError(
-    403,
-    'sign_up_closed',
-    'Sign-up is closed on this server. Ask a manager of your farm or dealer for an invitation.',
-  );
 
 const waitUntil = (at: number) =>
   new Promise<void>((resolve) => setTimeout(resolve, Math.max(0, at - Date.now())));

@@ -21,7 +21,8 @@ import {
 } from '../../services/account-settings';
 import { loadMemberships } from '../../services/accounts';
 import { endSession, startSession } from '../../infra/session';
-import { confirmSignUp, requestSignUp, signUpIsOpen } from '../../services/sign-up';
+import { confirmSignUp, requestSignUp } from '../../services/sign-up';
+import { signUpIsOpen } from '../../services/sign-up-gate';
 import {
   refuseWhenSignUpClosed,
   signUpPerAddress,
