@@ -96,7 +96,7 @@ function DueCards({ rows, machineHref }: DueListProps) {
               <DueStatusBadge status={row.due.status} />
             </div>
             <DueMachine row={row} href={machineHref(row.machine.id)} />
-            <DueTask row={row} cautionText />
+            <DueTask row={row} />
             <dl className="grid grid-cols-2 gap-x-4 gap-y-2 border-t border-field-100 pt-2">
               <div>
                 <dt className="text-sm font-bold text-field-600">Due at</dt>

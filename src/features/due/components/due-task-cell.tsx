@@ -1,8 +1,9 @@
 import { Link } from 'react-router-dom';
+import { Caution } from '../../../components/ui/caution';
 import { MachineStatusBadge } from '../../../components/ui/status-badges';
+import { hazardSentence } from '../../../lib/caution-text';
 import type { DueRow } from '../api/types';
 import { BASIS_TEXT } from './due-format';
-import { HazardCaution } from './hazard-caution';
 
 /** Fleet number and name, linking to the machine page; tagged-out machines say so. */
 export function DueMachine({ row, href }: { row: DueRow; href: string }) {
@@ -21,22 +22,19 @@ export function DueMachine({ row, href }: { row: DueRow; href: string }) {
   );
 }
 
-/** The task's name, its caution sign when it involves a hazard, and how its due point is based. */
-export function DueTask({ row, cautionText = false }: { row: DueRow; cautionText?: boolean }) {
+/**
+ * The task's name, how its due point is based, and its caution in words when it involves a hazard
+ * ("Caution: hot fluids and battery. Follow the operator's manual, …"), in the table and on phones.
+ */
+export function DueTask({ row }: { row: DueRow }) {
   const basis = BASIS_TEXT[row.due.basis];
   return (
     <div className="flex flex-col gap-1">
-      <span>
-        {row.taskName}
-        {cautionText ? null : (
-          <>
-            {' '}
-            <HazardCaution hazards={row.hazards} />
-          </>
-        )}
-      </span>
+      <span>{row.taskName}</span>
       {basis ? <span className="text-sm text-field-600">{basis}</span> : null}
-      {cautionText ? <HazardCaution hazards={row.hazards} withText /> : null}
+      {row.hazards.length ? (
+        <Caution variant="line" heading={`Caution: ${hazardSentence(row.hazards)}.`} defer />
+      ) : null}
     </div>
   );
 }

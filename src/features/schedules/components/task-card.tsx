@@ -1,10 +1,12 @@
 import { useState } from 'react';
 import { Link } from 'react-router-dom';
 import { Button, buttonClasses } from '../../../components/ui/button';
+import { Caution } from '../../../components/ui/caution';
 import { Icon } from '../../../components/ui/icons';
 import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { DueStatusBadge } from '../../../components/ui/status-badges';
 import { isApiError } from '../../../lib/api-client';
+import { hazardNames } from '../../../lib/caution-text';
 import { changedFields } from '../../../lib/changed-fields';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
 import { useDeleteTask } from '../api/delete-task';
@@ -13,7 +15,6 @@ import type { Task } from '../api/types';
 import { describeInterval, describeRemaining, describeWarning } from '../lib/task-text';
 import type { DuePoint } from '../../../../shared/domain/types';
 import { DuePointDetails } from './due-point-details';
-import { HazardCaution, HazardCautionLine } from './hazard-caution';
 import { HistoryUnknownPanel } from './history-unknown-panel';
 import { LastDoneForm } from './last-done-form';
 import { TaskForm, taskToInput } from './task-form';
@@ -111,7 +112,9 @@ export function TaskCard({
           ) : null}
         </div>
       ) : null}
-      {hasHazard ? <HazardCautionLine hazards={task.hazards} /> : null}
+      {hasHazard ? (
+        <Caution variant="line" heading={`Caution: ${hazardNames(task.hazards)}.`} defer />
+      ) : null}
       {task.due?.status === 'history_unknown' ? (
         <HistoryUnknownPanel
           orgId={orgId}
@@ -155,7 +158,9 @@ export function TaskCard({
           </p>
 
           {hasHazard ? (
-            <HazardCaution hazards={task.hazards} safetyNotes={task.safetyNotes} />
+            <Caution heading={`Caution: ${hazardNames(task.hazards)}`} defer>
+              {task.safetyNotes ? <p>{task.safetyNotes}</p> : null}
+            </Caution>
           ) : null}
 
           <TaskContents task={task} showSafetyNotes={!hasHazard} />

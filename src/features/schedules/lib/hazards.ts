@@ -1,1 +1,1 @@
-export { HAZARD_LABELS, SAFETY_DEFERRAL } from '../../../../shared/constants';
+export { HAZARD_LABELS } from '../../../../shared/constants';

@@ -1,12 +1,13 @@
 import { useId } from 'react';
 import type { UseFieldArrayReturn } from 'react-hook-form';
+import { Caution } from '../../../components/ui/caution';
 import { TextField } from '../../../components/ui/field';
 import { Icon } from '../../../components/ui/icons';
 import { TextareaField } from '../../../components/ui/textarea-field';
 import type { TaskChoice } from '../api/types';
 import type { ServiceForm, ServiceFormInput } from '../lib/form-values';
+import { hazardNames } from '../../../lib/caution-text';
 import { LineList, LineRow } from './line-rows';
-import { ReassemblyCaution } from './safety-cautions';
 
 /**
  * What was counted, removed or set on the way apart and must go back the same, each with its
@@ -131,5 +132,19 @@ function SettingRow({
         Restored
       </label>
     </LineRow>
+  );
+}
+
+/** The short caution of the reassembly section: stored energy, and the chosen tasks' hazards. */
+function ReassemblyCaution({ tasks }: { tasks: readonly TaskChoice[] }) {
+  const hazards = [...new Set(tasks.flatMap((t) => t.hazards))];
+  return (
+    <Caution
+      variant="line"
+      boxed
+      heading={`Caution${hazards.length ? `: ${hazardNames(hazards)}` : ''}.`}
+      text="Parts held by springs or snap rings store energy: release them with the proper tool."
+      defer
+    />
   );
 }

@@ -1,9 +1,10 @@
 import { Link } from 'react-router-dom';
 import { Badge } from '../../../components/ui/badge';
+import { Caution } from '../../../components/ui/caution';
 import { DueStatusBadge } from '../../../components/ui/status-badges';
+import { hazardNames } from '../../../lib/caution-text';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
 import type { PullFluid, PullPart, ShopDueRow, ShopPlanned } from '../api/types';
-import { hazardLabel, SAFETY_DEFERRAL } from '../lib/hazards';
 import { formatHours, formatQuantity } from '../lib/record-format';
 
 export interface ShopLinks {
@@ -80,10 +81,7 @@ export function DueItem({
         {row.labourHours !== null ? ` · about ${formatHours(row.labourHours)}` : ''}
       </p>
       {row.hazards.length ? (
-        <p className="text-sm text-straw-900">
-          <span className="font-bold">Caution: {row.hazards.map(hazardLabel).join(', ')}.</span>{' '}
-          {SAFETY_DEFERRAL}
-        </p>
+        <Caution variant="line" heading={`Caution: ${hazardNames(row.hazards)}.`} defer />
       ) : null}
       <div className="flex flex-wrap items-center gap-2">
         {row.booked ? (

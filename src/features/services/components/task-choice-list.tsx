@@ -1,10 +1,10 @@
+import { Caution } from '../../../components/ui/caution';
 import { DueStatusBadge } from '../../../components/ui/status-badges';
+import { hazardNames } from '../../../lib/caution-text';
 import type { TaskChoice } from '../api/types';
 import type { ServiceFormMode } from '../lib/form-values';
-import { hazardLabel } from '../lib/hazards';
 import { formatHours } from '../lib/record-format';
 import { ChoiceList } from './choice-list';
-import { SafetyCautions } from './safety-cautions';
 
 const HINT: Record<ServiceFormMode, string> = {
   record:
@@ -48,9 +48,12 @@ export function TaskChoiceList({
               {t.dueStatus ? <DueStatusBadge status={t.dueStatus} /> : null}
               {t.labourHours !== null ? <span>About {formatHours(t.labourHours)}</span> : null}
               {t.hazards.length ? (
-                <span className="font-bold text-straw-900">
-                  Caution: {t.hazards.map(hazardLabel).join(', ')}
-                </span>
+                <Caution
+                  variant="line"
+                  inline
+                  heading={`Caution: ${hazardNames(t.hazards)}.`}
+                  defer
+                />
               ) : null}
             </span>
           ),
@@ -65,5 +68,27 @@ export function TaskChoiceList({
       </p>
       <SafetyCautions tasks={chosen} />
     </div>
+  );
+}
+
+/**
+ * The cautions of the chosen tasks: each task's hazards and safety notes, ending with the deferral
+ * to the manual, regulations and qualified practice. Nothing when no chosen task has a hazard.
+ */
+function SafetyCautions({ tasks }: { tasks: readonly TaskChoice[] }) {
+  const risky = tasks.filter((t) => t.hazards.length > 0 || t.safetyNotes.trim());
+  if (risky.length === 0) return null;
+  return (
+    <Caution label="Safety cautions" heading="Caution" defer>
+      <ul className="flex flex-col gap-1.5">
+        {risky.map((t) => (
+          <li key={t.id}>
+            <span className="font-bold">{t.name}</span>
+            {t.hazards.length ? `: ${hazardNames(t.hazards)}.` : ':'}
+            {t.safetyNotes ? <span className="block">{t.safetyNotes}</span> : null}
+          </li>
+        ))}
+      </ul>
+    </Caution>
   );
 }

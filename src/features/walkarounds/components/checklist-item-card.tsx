@@ -1,9 +1,9 @@
 import { useId } from 'react';
 import { Badge } from '../../../components/ui/badge';
+import { Caution } from '../../../components/ui/caution';
 import { Icon } from '../../../components/ui/icons';
 import type { ChecklistItem } from '../api/types';
 import { emptyAnswer, type DraftAnswer } from '../lib/draft';
-import { ItemCaution } from './item-caution';
 import { PhotoButton, PhotoStatus, type PhotoState } from './item-photo';
 import { ResultChoice } from './result-choice';
 
@@ -64,7 +64,16 @@ export function ChecklistItemCard({
           </div>
           {item.guidance ? <p className="text-field-700">{item.guidance}</p> : null}
         </div>
-        {item.caution ? <ItemCaution text={item.caution} /> : null}
+        {/* The server's caution ends by deferring to the manual and local rules; a farm's own
+            wording without that line gets it added. */}
+        {item.caution ? (
+          <Caution
+            compact
+            heading="Caution."
+            text={item.caution}
+            defer={!/operator's manual/i.test(item.caution)}
+          />
+        ) : null}
         <ResultChoice
           name={item.id}
           labelledBy={labelId}

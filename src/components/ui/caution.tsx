@@ -1,0 +1,86 @@
+import type { ReactNode } from 'react';
+import { SAFETY_DEFERRAL } from '../../../shared/constants';
+import { cx } from './cx';
+import { Icon } from './icons';
+
+interface CautionProps {
+  /** the bold lead: "Caution: PTO shaft, Battery" */
+  heading: string;
+  /** words that run on after the heading, in the same paragraph */
+  text?: string;
+  /** end with the deferral to the operator's manual, local regulations and qualified practice */
+  defer?: boolean;
+  /**
+   * `panel`: the full caution of a task or item, a named aside (a landmark a screen reader can
+   * jump to); `line`: one sentence beside a task in a list, the same words always on screen.
+   */
+  variant?: 'panel' | 'line';
+  /** accessible name of a panel */
+  label?: string;
+  /** smaller type, for a panel inside a dense card */
+  compact?: boolean;
+  /** a line drawn in its own box, where it stands apart from the fields around it */
+  boxed?: boolean;
+  /** a line inside phrasing content (a label's description): rendered as a span */
+  inline?: boolean;
+  /** further blocks of a panel under the heading: the task's notes, a list */
+  children?: ReactNode;
+}
+
+/**
+ * The one caution of Hourstone, beside whatever can hurt someone (PTO, hydraulic pressure, raised
+ * loads, stored energy…). Its words are always visible, never only a hover title; the icon is
+ * decoration, the text carries the meaning.
+ */
+export function Caution({
+  heading,
+  text,
+  defer = false,
+  variant = 'panel',
+  label = 'Caution',
+  compact = false,
+  boxed = false,
+  inline = false,
+  children,
+}: CautionProps) {
+  if (variant === 'line') {
+    const Line = inline ? 'span' : 'p';
+    return (
+      <Line
+        className={cx(
+          'flex items-start text-sm text-straw-900',
+          boxed ? 'gap-2 rounded-lg border border-straw-400 bg-straw-50 p-3' : 'gap-1.5',
+        )}
+      >
+        <Icon name="alert" className="mt-0.5 size-4 shrink-0 text-straw-700" />
+        <span>
+          <span className="font-bold">{heading}</span>
+          {text ? ` ${text}` : null}
+          {defer ? ` ${SAFETY_DEFERRAL}` : null}
+        </span>
+      </Line>
+    );
+  }
+  return (
+    <aside
+      aria-label={label}
+      className={cx(
+        'flex rounded-lg border-2 border-l-8 border-straw-500 bg-straw-50 p-3 text-straw-900',
+        compact ? 'gap-2.5 text-sm' : 'gap-3',
+      )}
+    >
+      <Icon
+        name="alert"
+        className={cx('mt-0.5 shrink-0 text-straw-700', compact ? 'size-5' : 'size-6')}
+      />
+      <div className="flex min-w-0 flex-col gap-1">
+        <p>
+          <span className="font-black">{heading}</span>
+          {text ? ` ${text}` : null}
+        </p>
+        {children}
+        {defer ? <p className="font-bold">{SAFETY_DEFERRAL}</p> : null}
+      </div>
+    </aside>
+  );
+}

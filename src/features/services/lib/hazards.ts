@@ -1,1 +1,0 @@
-export { HAZARD_LABELS, SAFETY_DEFERRAL, hazardLabel } from '../../../../shared/constants';
