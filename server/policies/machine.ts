@@ -10,8 +10,15 @@ export const canCreateMachine = (access: OrgAccess) => hasRole(access, 'manager'
 export const canUpdateMachine = (access: OrgAccess) => hasRole(access, 'manager');
 export const canEditSchedule = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
 export const canSetLastDone = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
+/** A sold machine is retired: it takes no more readings, whoever asks. */
+export const takesReadings = (machine: Machine) => machine.status !== 'sold';
 export const canLogReading = (access: OrgAccess, machine: Machine) =>
-  hasRole(access, 'manager', 'technician', 'operator') && machine.status !== 'sold';
+  hasRole(access, 'manager', 'technician', 'operator') && takesReadings(machine);
+/** What a refused reading says when the machine is sold (`name`: how the message names it). */
+export const readingsClosedMessage = (name: string) => `${name} is sold; readings are closed`;
+/** The 403 message of a refused reading: the sold machine's, else authorize()'s default. */
+export const logReadingRefusal = (machine: Machine) =>
+  takesReadings(machine) ? undefined : readingsClosedMessage('This machine');
 export const canCorrectReading = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
 export const canReplaceMeter = (access: OrgAccess) => hasRole(access, 'manager', 'technician');
 export const canImportReadings = (access: OrgAccess) => hasRole(access, 'manager', 'technician');

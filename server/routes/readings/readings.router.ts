@@ -21,21 +21,24 @@ import {
   canImportReadings,
   canLogReading,
   canReplaceMeter,
+  logReadingRefusal,
 } from '../../policies/machine';
 import { presentLastReading } from '../../presenters/machine';
 import { presentReading, presentReplacement } from '../../presenters/reading';
-import { listMachines, loadMachine, loadVisibleMachines } from '../../services/machines';
+import { loadMachine } from '../../services/machines';
 import {
   correctReading,
   deleteReading,
+  loadReading,
   replaceMeter,
-  writeReadings,
-  type NewReading,
-} from '../../services/readings';
+} from '../../services/reading-corrections';
+import {
+  logBulkReadings,
+  logReading,
+  machinesTakingReadings,
+  readingHistory,
+} from '../../services/reading-log';
 import { commitImport, previewImport } from '../../services/reading-import';
-import { MeterReading, MeterReplacement } from '../../models';
-import { sequelize } from '../../db';
-import { invalid, notFound } from '../../errors';
 import { csvUpload } from '../../middlewares/upload';
 
 const orgParams = z.object({ orgId: z.uuid() });
@@ -45,12 +48,6 @@ const readingParams = orgParams.extend({ readingId: z.uuid() });
 const csvBody = z.object({
   file: z.string().openapi({ format: 'binary', description: 'CSV: fleet number, taken at, value' }),
 });
-
-async function loadReading(orgId: string, readingId: string) {
-  const reading = await MeterReading.findOne({ where: { id: readingId, organizationId: orgId } });
-  if (!reading) throw notFound('Reading');
-  return reading;
-}
 
 export function readingsRouter(): Router {
   const router = Router();
@@ -66,20 +63,7 @@ export function readingsRouter(): Router {
     handler: async ({ req, params, query }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
-      const [readings, replacements] = await Promise.all([
-        MeterReading.findAll({
-          where: { organizationId: access.organization.id, machineId: machine.id },
-          order: [
-            ['takenAt', 'DESC'],
-            ['lifetimeValue', 'DESC'],
-          ],
-          limit: query.limit,
-        }),
-        MeterReplacement.findAll({
-          where: { organizationId: access.organization.id, machineId: machine.id },
-          order: [['replacedAt', 'DESC']],
-        }),
-      ]);
+      const { readings, replacements } = await readingHistory(access, machine, query.limit);
       return {
         data: readings.map(presentReading),
         replacements: replacements.map(presentReplacement),
@@ -100,24 +84,8 @@ export function readingsRouter(): Router {
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
-      authorize(
-        canLogReading(access, machine),
-        machine.status === 'sold' ? 'This machine is sold; readings are closed' : undefined,
-      );
-      const [outcome] = await sequelize.transaction((transaction) =>
-        writeReadings(
-          access,
-          [
-            {
-              machine,
-              value: body.value,
-              takenAt: body.takenAt ? new Date(body.takenAt) : new Date(),
-              source: 'manual',
-            },
-          ],
-          transaction,
-        ),
-      );
+      authorize(canLogReading(access, machine), logReadingRefusal(machine));
+      const outcome = await logReading(access, machine, body);
       return {
         data: outcome.reading ? presentReading(outcome.reading) : null,
         status: outcome.status,
@@ -135,26 +103,19 @@ export function readingsRouter(): Router {
     response: latestReadingsResponseSchema,
     handler: async ({ req }) => {
       const access = req.access!;
-      const { items } = await listMachines(access, {
-        sort: 'fleetNumber',
-        order: 'asc',
-        page: 1,
-        pageSize: 10_000,
-      });
+      const items = await machinesTakingReadings(access);
       return {
-        data: items
-          .filter((i) => i.machine.status !== 'sold')
-          .map((i) => ({
-            machine: {
-              id: i.machine.id,
-              fleetNumber: i.machine.fleetNumber,
-              name: i.machine.name,
-              meterUnit: i.machine.meterUnit,
-              status: i.machine.status,
-              category: i.machine.category,
-            },
-            lastReading: presentLastReading(i.forecast),
-          })),
+        data: items.map((i) => ({
+          machine: {
+            id: i.machine.id,
+            fleetNumber: i.machine.fleetNumber,
+            name: i.machine.name,
+            meterUnit: i.machine.meterUnit,
+            status: i.machine.status,
+            category: i.machine.category,
+          },
+          lastReading: presentLastReading(i.forecast),
+        })),
       };
     },
   });
@@ -170,35 +131,7 @@ export function readingsRouter(): Router {
     response: bulkReadingsResponseSchema,
     handler: async ({ req, body }) => {
       const access = req.access!;
-      const items: NewReading[] = [];
-      const missing: Record<string, string> = {};
-      const machines = await loadVisibleMachines(
-        access,
-        body.readings.map((r) => r.machineId),
-      );
-      for (const [i, r] of body.readings.entries()) {
-        const machine = machines.get(r.machineId);
-        if (!machine) {
-          missing[`readings.${i}.machineId`] = 'No such machine in this farm';
-          continue;
-        }
-        if (!canLogReading(access, machine))
-          missing[`readings.${i}.machineId`] =
-            `${machine.fleetNumber} is sold; readings are closed`;
-        items.push({
-          machine,
-          value: r.value,
-          takenAt: r.takenAt ? new Date(r.takenAt) : new Date(),
-          source: 'manual' as const,
-        });
-      }
-      if (Object.keys(missing).length) throw invalid(missing);
-      const outcomes = await sequelize.transaction((transaction) =>
-        writeReadings(access, items, transaction, { fieldPrefix: (i) => `readings.${i}.` }),
-      );
-      return {
-        data: outcomes.map((o) => ({ machineId: items[o.index].machine.id, status: o.status })),
-      };
+      return { data: await logBulkReadings(access, body.readings) };
     },
   });
 
@@ -212,7 +145,7 @@ export function readingsRouter(): Router {
     response: readingResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
-      const reading = await loadReading(access.organization.id, params.readingId);
+      const reading = await loadReading(access, params.readingId);
       const { machine } = await loadMachine(access, reading.machineId);
       authorize(canCorrectReading(access), 'Only a manager or technician may correct readings');
       await correctReading(access, machine, reading, {
@@ -232,7 +165,7 @@ export function readingsRouter(): Router {
     status: 204,
     handler: async ({ req, params }) => {
       const access = req.access!;
-      const reading = await loadReading(access.organization.id, params.readingId);
+      const reading = await loadReading(access, params.readingId);
       const { machine } = await loadMachine(access, reading.machineId);
       authorize(canCorrectReading(access), 'Only a manager or technician may delete readings');
       await deleteReading(access, machine, reading);

@@ -1,0 +1,181 @@
+// Changes to a machine's recorded readings after the fact: correcting or deleting one reading,
+// recording a meter replacement. Each is audited and refreshes the machine's forecast.
+import { Op } from 'sequelize';
+import { sequelize } from '../db';
+import { AppError, invalid, notFound } from '../errors';
+import { MeterReading, MeterReplacement, type Machine } from '../models';
+import { checkReading, toLifetimeValue } from '../../shared/domain';
+import type { OrgAccess } from '../policies/context';
+import { recordAudit } from '../infra/audit';
+import { refreshMachineForecast } from './forecast';
+import {
+  lockMachineReadings,
+  readingsAround,
+  replacementsOf,
+  timeFormatter,
+} from './reading-neighbours';
+import { writeReadings } from './readings';
+
+/** A reading of the caller's organization, or 404. */
+export async function loadReading(access: OrgAccess, readingId: string) {
+  const reading = await MeterReading.findOne({
+    where: { id: readingId, organizationId: access.organization.id },
+  });
+  if (!reading) throw notFound('Reading');
+  return reading;
+}
+
+/** Corrects a reading's value or time (rules re-checked against its neighbours); audited. */
+export async function correctReading(
+  access: OrgAccess,
+  machine: Machine,
+  reading: MeterReading,
+  changes: { value?: number; takenAt?: Date },
+) {
+  return sequelize.transaction(async (transaction) => {
+    await lockMachineReadings(machine.id, transaction);
+    // re-read under the lock: another edit may have changed or removed it meanwhile
+    const stillThere = await MeterReading.count({ where: { id: reading.id }, transaction });
+    if (!stillThere) throw notFound('Reading');
+    await reading.reload({ transaction });
+    const before = { value: reading.value, takenAt: reading.takenAt.toISOString() };
+    const value = changes.value ?? reading.value;
+    const takenAt = changes.takenAt ?? reading.takenAt;
+    const replacements = await replacementsOf(machine, transaction);
+    // Validate as a new reading that ignores the one being corrected, then update in place.
+    const existing = (
+      await readingsAround(machine, takenAt.getTime(), takenAt.getTime(), transaction)
+    ).filter((r) => r.id !== reading.id);
+    const lifetime = toLifetimeValue(value, takenAt.getTime(), replacements);
+    const previous = [...existing].reverse().find((r) => r.takenAtMs <= takenAt.getTime());
+    const next = existing.find((r) => r.takenAtMs > takenAt.getTime());
+    const violation = checkReading(
+      { value: lifetime, takenAtMs: takenAt.getTime() },
+      {
+        previous: previous && { value: previous.lifetimeValue, takenAtMs: previous.takenAtMs },
+        next: next && { value: next.lifetimeValue, takenAtMs: next.takenAtMs },
+      },
+      {
+        nowMs: Date.now(),
+        meterUnit: machine.meterUnit,
+        formatTime: timeFormatter(access.organization.timeZone),
+      },
+    );
+    if (violation) throw invalid({ [violation.field]: violation.message });
+    await reading.update({ value, takenAt, lifetimeValue: lifetime }, { transaction });
+    await recordAudit(
+      {
+        organizationId: access.organization.id,
+        actorUserId: access.userId,
+        action: 'reading.correct',
+        entityType: 'meter_reading',
+        entityId: reading.id,
+        changes: {
+          machineId: machine.id,
+          before,
+          after: { value, takenAt: takenAt.toISOString() },
+        },
+      },
+      transaction,
+    );
+    await refreshMachineForecast(machine.id, access.organization.id, transaction);
+    return reading;
+  });
+}
+
+/** Deletes a reading; audited with its values so the log shows what was removed. */
+export async function deleteReading(access: OrgAccess, machine: Machine, reading: MeterReading) {
+  await sequelize.transaction(async (transaction) => {
+    await lockMachineReadings(machine.id, transaction);
+    await reading.destroy({ transaction });
+    await recordAudit(
+      {
+        organizationId: access.organization.id,
+        actorUserId: access.userId,
+        action: 'reading.delete',
+        entityType: 'meter_reading',
+        entityId: reading.id,
+        changes: {
+          machineId: machine.id,
+          value: reading.value,
+          takenAt: reading.takenAt.toISOString(),
+          source: reading.source,
+        },
+      },
+      transaction,
+    );
+    await refreshMachineForecast(machine.id, access.organization.id, transaction);
+  });
+}
+
+/**
+ * Records a meter replacement: the old meter's final reading just before, the new meter's start at
+ * the replacement time; lifetime values stay continuous.
+ */
+export async function replaceMeter(
+  access: OrgAccess,
+  machine: Machine,
+  input: { oldFinalValue: number; newStartValue: number; replacedAt: Date; note: string },
+) {
+  return sequelize.transaction(async (transaction) => {
+    const later = await MeterReading.count({
+      where: {
+        organizationId: machine.organizationId,
+        machineId: machine.id,
+        takenAt: { [Op.gte]: input.replacedAt },
+      },
+      transaction,
+    });
+    if (later > 0) {
+      throw invalid({
+        replacedAt:
+          'There are readings after this time; a replacement must come after the last reading',
+      });
+    }
+    const replacement = await MeterReplacement.create(
+      {
+        organizationId: machine.organizationId,
+        machineId: machine.id,
+        replacedAt: input.replacedAt,
+        oldFinalValue: input.oldFinalValue,
+        newStartValue: input.newStartValue,
+        note: input.note,
+        enteredBy: access.userId,
+      },
+      { transaction },
+    );
+    try {
+      await writeReadings(
+        access,
+        [
+          {
+            machine,
+            value: input.oldFinalValue,
+            takenAt: new Date(input.replacedAt.getTime() - 1000),
+            source: 'manual',
+          },
+          { machine, value: input.newStartValue, takenAt: input.replacedAt, source: 'manual' },
+        ],
+        transaction,
+      );
+    } catch (err) {
+      if (err instanceof AppError && err.fields) {
+        const message = Object.values(err.fields)[0];
+        throw invalid({ oldFinalValue: message });
+      }
+      throw err;
+    }
+    await recordAudit(
+      {
+        organizationId: access.organization.id,
+        actorUserId: access.userId,
+        action: 'meter.replace',
+        entityType: 'meter_replacement',
+        entityId: replacement.id,
+        changes: { machineId: machine.id, ...input, replacedAt: input.replacedAt.toISOString() },
+      },
+      transaction,
+    );
+    return replacement;
+  });
+}

@@ -1,0 +1,92 @@
+// What the log-hours screens call: a machine's reading history, one reading, many at once, and
+// the machines that still take readings. Every write goes through writeReadings (readings.ts).
+import { sequelize } from '../db';
+import { invalid } from '../errors';
+import { MeterReading, MeterReplacement, type Machine } from '../models';
+import type { OrgAccess } from '../policies/context';
+import type { BulkReadingsInput, ReadingCreateInput } from '../../shared/schemas/readings';
+import { canLogReading, readingsClosedMessage, takesReadings } from '../policies/machine';
+import { listMachines, loadVisibleMachines } from './machines';
+import { writeReadings, type NewReading } from './readings';
+
+/** A machine's readings (newest first, at most `limit`) and all its meter replacements. */
+export async function readingHistory(access: OrgAccess, machine: Machine, limit: number) {
+  const [readings, replacements] = await Promise.all([
+    MeterReading.findAll({
+      where: { organizationId: access.organization.id, machineId: machine.id },
+      order: [
+        ['takenAt', 'DESC'],
+        ['lifetimeValue', 'DESC'],
+      ],
+      limit,
+    }),
+    MeterReplacement.findAll({
+      where: { organizationId: access.organization.id, machineId: machine.id },
+      order: [['replacedAt', 'DESC']],
+    }),
+  ]);
+  return { readings, replacements };
+}
+
+/** Logs one manual reading (now unless `takenAt` is given); an identical repeat is ignored. */
+export async function logReading(access: OrgAccess, machine: Machine, input: ReadingCreateInput) {
+  const [outcome] = await sequelize.transaction((transaction) =>
+    writeReadings(
+      access,
+      [
+        {
+          machine,
+          value: input.value,
+          takenAt: input.takenAt ? new Date(input.takenAt) : new Date(),
+          source: 'manual',
+        },
+      ],
+      transaction,
+    ),
+  );
+  return outcome;
+}
+
+/**
+ * Logs manual readings for many machines in one transaction, all or nothing: a machine the caller
+ * cannot see, or one that takes no readings, is a 422 naming its row (`readings.i.machineId`).
+ */
+export async function logBulkReadings(access: OrgAccess, readings: BulkReadingsInput['readings']) {
+  const items: NewReading[] = [];
+  const missing: Record<string, string> = {};
+  const machines = await loadVisibleMachines(
+    access,
+    readings.map((r) => r.machineId),
+  );
+  for (const [i, r] of readings.entries()) {
+    const machine = machines.get(r.machineId);
+    if (!machine) {
+      missing[`readings.${i}.machineId`] = 'No such machine in this farm';
+      continue;
+    }
+    if (!canLogReading(access, machine))
+      missing[`readings.${i}.machineId`] = readingsClosedMessage(machine.fleetNumber);
+    items.push({
+      machine,
+      value: r.value,
+      takenAt: r.takenAt ? new Date(r.takenAt) : new Date(),
+      source: 'manual' as const,
+    });
+  }
+  if (Object.keys(missing).length) throw invalid(missing);
+  const outcomes = await sequelize.transaction((transaction) =>
+    writeReadings(access, items, transaction, { fieldPrefix: (i) => `readings.${i}.` }),
+  );
+  return outcomes.map((o) => ({ machineId: items[o.index].machine.id, status: o.status }));
+}
+
+/** Every machine the caller sees that still takes readings, by fleet number, with its forecast. */
+export async function machinesTakingReadings(access: OrgAccess) {
+  const { items } = await listMachines(access, {
+    sort: 'fleetNumber',
+    order: 'asc',
+    page: 1,
+    pageSize: 10_000,
+  });
+  return items.filter((i) => takesReadings(i.machine));
+}
