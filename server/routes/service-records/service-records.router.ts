@@ -18,16 +18,11 @@ import {
 } from '../../../shared/schemas/service-record-responses';
 import { presentRecord, presentRecords } from '../../presenters/service-record';
 import { loadMachine } from '../../services/machines';
-import {
-  cancelRecord,
-  completeRecord,
-  createRecord,
-  loadRecord,
-  machineHistory,
-  prefillLines,
-  resolveTasks,
-  updateRecord,
-} from '../../services/service-records';
+import { createRecord, loadRecord, prefillLines } from '../../services/service-records';
+import { resolveTasks } from '../../services/service-record-checks';
+import { completeRecord } from '../../services/service-record-completion';
+import { cancelRecord, updateRecord } from '../../services/service-record-edits';
+import { machineHistory } from '../../services/service-history';
 import { invalid } from '../../errors';
 import type { OrgAccess } from '../../policies/access';
 import type { ServiceRecord } from '../../models';
