@@ -1,34 +1,22 @@
-import { randomUUID } from 'node:crypto';
 import type { Response, Router } from 'express';
+import type { Readable } from 'node:stream';
 import { z } from 'zod';
 import { route } from '../route';
 import { authorize } from '../../policies/access';
 import { isShop } from '../../policies/service-record';
 import { loadRecord } from '../../services/service-records';
-import { deleteObject, getObject, putObject } from '../../infra/storage';
-import { prepareAttachment } from '../../infra/images';
+import {
+  attachmentFile,
+  attachToRecord,
+  removeAttachment,
+} from '../../services/service-attachments';
 import { fileUpload } from '../../middlewares/upload';
-import { AppError, invalid, notFound } from '../../errors';
-import { recordAudit } from '../../infra/audit';
-import { ServiceAttachment } from '../../models';
 import { presentRecord } from '../../presenters/service-record';
 import { attachmentResponseSchema } from '../../../shared/schemas/service-record-responses';
-import { ATTACHMENT_MAX_BYTES, ATTACHMENTS_PER_RECORD } from '../../../shared/schemas/service-records';
-import type { Readable } from 'node:stream';
+import { ATTACHMENT_MAX_BYTES } from '../../../shared/schemas/service-records';
 
 const recordParams = z.object({ orgId: z.uuid(), recordId: z.uuid() });
 const attachmentParams = recordParams.extend({ attachmentId: z.uuid() });
-
-/** A file name safe to store and to send back in a header. */
-const cleanName = (name: string) =>
-  [...name]
-    .map((c) => (c.charCodeAt(0) < 32 || '\\/"'.includes(c) ? '_' : c))
-    .join('')
-    .trim()
-    .slice(0, 200) || 'attachment';
-
-const keyOf = (a: ServiceAttachment, thumb: boolean) =>
-  a.kind === 'pdf' ? `${a.objectKey}.pdf` : `${a.objectKey}${thumb ? '-thumb' : ''}.webp`;
 
 /** Streams an object to the response with its type; files are only ever served through the API. */
 export async function sendObject(
@@ -68,59 +56,12 @@ export function registerAttachmentRoutes(router: Router): void {
       const access = req.access!;
       const { record } = await loadRecord(access, params.recordId);
       authorize(isShop(access), 'Only a technician or manager attaches files to a record');
-      if (record.status === 'cancelled')
-        throw new AppError(409, 'cancelled', 'This record is cancelled; it takes no attachments');
-      const count = await ServiceAttachment.count({
-        where: { organizationId: access.organization.id, serviceRecordId: record.id },
+      const attachment = await attachToRecord(access, record, req.file!);
+      const presented = await presentRecord(record, {
+        withDefects: false,
+        currency: access.organization.currency,
       });
-      if (count >= ATTACHMENTS_PER_RECORD)
-        throw invalid({ file: `A record holds at most ${ATTACHMENTS_PER_RECORD} attachments` });
-      const prepared = await prepareAttachment(req.file!.buffer, 'file');
-      const objectKey = `org/${access.organization.id}/service-records/${record.id}/${randomUUID()}`;
-      const stored: string[] = [];
-      if (prepared.kind === 'pdf') {
-        await putObject(`${objectKey}.pdf`, prepared.body, prepared.contentType);
-        stored.push(`${objectKey}.pdf`);
-      } else {
-        await putObject(`${objectKey}.webp`, prepared.full, prepared.contentType);
-        await putObject(`${objectKey}-thumb.webp`, prepared.thumb, prepared.contentType);
-        stored.push(`${objectKey}.webp`, `${objectKey}-thumb.webp`);
-      }
-      const original = cleanName(req.file!.originalname);
-      try {
-        const attachment = await ServiceAttachment.create({
-          organizationId: access.organization.id,
-          machineId: record.machineId,
-          serviceRecordId: record.id,
-          kind: prepared.kind,
-          contentType: prepared.contentType,
-          fileName:
-            prepared.kind === 'image' ? original.replace(/\.[^.]*$/, '') + '.webp' : original,
-          sizeBytes: prepared.kind === 'pdf' ? prepared.body.length : prepared.full.length,
-          objectKey,
-          uploadedBy: access.userId,
-        });
-        await recordAudit({
-          organizationId: access.organization.id,
-          actorUserId: access.userId,
-          action: 'service.attach',
-          entityType: 'service_record',
-          entityId: record.id,
-          changes: {
-            attachmentId: attachment.id,
-            kind: attachment.kind,
-            fileName: attachment.fileName,
-          },
-        });
-        const presented = await presentRecord(record, {
-          withDefects: false,
-          currency: access.organization.currency,
-        });
-        return { data: presented.attachments.find((a) => a.id === attachment.id)! };
-      } catch (err) {
-        await Promise.allSettled(stored.map(deleteObject));
-        throw err;
-      }
+      return { data: presented.attachments.find((a) => a.id === attachment.id)! };
     },
   });
 
@@ -136,16 +77,13 @@ export function registerAttachmentRoutes(router: Router): void {
     handler: async ({ req, res, params, query }) => {
       const access = req.access!;
       const { record } = await loadRecord(access, params.recordId);
-      const a = await ServiceAttachment.findOne({
-        where: {
-          id: params.attachmentId,
-          organizationId: access.organization.id,
-          serviceRecordId: record.id,
-        },
-      });
-      if (!a) throw notFound('Attachment');
-      if (query.size === 'thumb' && a.kind === 'pdf') throw notFound('Thumbnail');
-      await sendObject(res, await getObject(keyOf(a, query.size === 'thumb')), a.fileName);
+      const { object, fileName } = await attachmentFile(
+        access,
+        record,
+        params.attachmentId,
+        query.size === 'thumb',
+      );
+      await sendObject(res, object, fileName);
     },
   });
 
@@ -160,27 +98,7 @@ export function registerAttachmentRoutes(router: Router): void {
       const access = req.access!;
       const { record } = await loadRecord(access, params.recordId);
       authorize(isShop(access), 'Only a technician or manager removes attachments');
-      const a = await ServiceAttachment.findOne({
-        where: {
-          id: params.attachmentId,
-          organizationId: access.organization.id,
-          serviceRecordId: record.id,
-        },
-      });
-      if (!a) throw notFound('Attachment');
-      await a.destroy();
-      await recordAudit({
-        organizationId: access.organization.id,
-        actorUserId: access.userId,
-        action: 'service.detach',
-        entityType: 'service_record',
-        entityId: record.id,
-        changes: { attachmentId: a.id, fileName: a.fileName },
-      });
-      await Promise.allSettled([
-        deleteObject(keyOf(a, false)),
-        ...(a.kind === 'image' ? [deleteObject(keyOf(a, true))] : []),
-      ]);
+      await removeAttachment(access, record, params.attachmentId);
     },
   });
 }
