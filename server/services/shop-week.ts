@@ -4,8 +4,6 @@ import type { ServiceFluid, ServicePart } from '../../shared/schemas/service-rec
 import { addDaysIso, dayNumberFromIso, todayIso } from '../../shared/domain';
 import type { OrgAccess } from '../policies/access';
 import { dueList, type DueRow } from './due-list';
-import { presentMachineRef } from '../presenters/defect';
-import { peopleById } from '../presenters/people';
 
 const WEEKDAYS = ['Sun', 'Mon', 'Tue', 'Wed', 'Thu', 'Fri', 'Sat'] as const;
 const round = (n: number) => Math.round(n * 100) / 100;
@@ -60,6 +58,7 @@ export function sumLines(records: { parts: ServicePart[]; fluids: ServiceFluid[]
  * The shop's week from a start date: per day the planned records (estimated labour from their
  * tasks, parts to pull summed by part number) and the tasks falling due that day from the stored
  * due points (the due list; nothing is recomputed here), plus what is overdue before the week.
+ * Plans carry their machine and technician ids; the presenter names them.
  */
 export async function shopWeek(access: OrgAccess, startIso?: string) {
   const org = access.organization;
@@ -84,7 +83,7 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
     }),
     dueList(access, {}),
   ]);
-  const [machines, tasks, people] = await Promise.all([
+  const [machines, tasks] = await Promise.all([
     Machine.findAll({
       where: {
         organizationId: org.id,
@@ -98,7 +97,6 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
       },
       attributes: ['id', 'labourHours'],
     }),
-    peopleById(planned.flatMap((r) => r.technicianIds)),
   ]);
   const machineOf = new Map(machines.map((m) => [m.id, m]));
   const labourOf = new Map(tasks.map((t) => [t.id, t.labourHours]));
@@ -122,9 +120,9 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
     return {
       id: r.id,
       plannedFor: r.plannedFor!,
-      machine: presentMachineRef(machineOf.get(r.machineId)!),
+      machine: machineOf.get(r.machineId)!,
       tasks: taskRows,
-      technicians: r.technicianIds.map((id) => people(id) ?? { id, name: 'Former member' }),
+      technicianIds: r.technicianIds,
       notes: r.notes,
       defectIds: r.defectIds,
       estimatedLabourHours: round(taskRows.reduce((s, t) => s + (t.labourHours ?? 0), 0)),
@@ -177,3 +175,5 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
     },
   };
 }
+
+export type ShopWeekData = Awaited<ReturnType<typeof shopWeek>>;

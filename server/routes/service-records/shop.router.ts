@@ -7,7 +7,7 @@ import {
 import { authorize } from '../../policies/access';
 import { canViewShopWeek } from '../../policies/service-record';
 import { loadMachine } from '../../services/machines';
-import { measurementNames, measurementSeries } from '../../services/service-records';
+import { measurementNames, measurementSeries } from '../../services/service-history';
 import { shopWeek } from '../../services/shop-week';
 import {
   measurementNamesResponseSchema,
@@ -15,6 +15,8 @@ import {
   shopWeekResponseSchema,
 } from '../../../shared/schemas/service-record-responses';
 import { specStatus } from '../../presenters/service-record';
+import { presentShopWeek, shopWeekPeopleIds } from '../../presenters/shop-week';
+import { peopleById } from '../../presenters/people';
 import { registerServiceRecordRoutes, machineParams, orgParams } from './service-records.router';
 import { registerAttachmentRoutes } from './attachments.router';
 
@@ -70,7 +72,8 @@ export function serviceRecordsRouter(): Router {
     handler: async ({ req, query }) => {
       const access = req.access!;
       authorize(canViewShopWeek(access), 'The shop week is for technicians and managers');
-      return { data: await shopWeek(access, query.start) };
+      const week = await shopWeek(access, query.start);
+      return { data: presentShopWeek(week, await peopleById(shopWeekPeopleIds(week))) };
     },
   });
 
