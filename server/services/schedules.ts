@@ -1,7 +1,7 @@
 import type { Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { invalid, notFound } from '../errors';
-import { Machine, MachineForecast, ScheduleTemplate, ServiceTask } from '../models';
+import { Machine, MachineForecast, ServiceTask, TaskDuePoint } from '../models';
 import type { LastDoneInput, TaskInput } from '../../shared/schemas/schedule';
 import { todayIso } from '../../shared/domain';
 import type { OrgAccess } from '../policies/access';
@@ -148,19 +148,31 @@ export async function setLastDone(access: OrgAccess, task: ServiceTask, input: L
   });
 }
 
-export async function loadTemplate(access: OrgAccess, id: string) {
-  const t = await ScheduleTemplate.findOne({
-    where: { id, organizationId: access.organization.id },
-  });
-  if (!t) throw notFound('Schedule template');
-  return t;
+/** A task's stored due point, or null before the first computation. */
+export async function dueOfTask(task: ServiceTask) {
+  const due = await TaskDuePoint.findByPk(task.id);
+  return due?.due ?? null;
 }
 
-/** Applies a template: creates all its tasks on the machine in one transaction. */
-export async function applyTemplate(
-  access: OrgAccess,
-  machine: Machine,
-  template: ScheduleTemplate,
-) {
-  return addTasks(access, machine, template.tasks, 'task.create_from_template');
+/** The stored due points of these tasks of one organization, by task id. */
+export async function dueOfTasks(organizationId: string, taskIds: string[]) {
+  const due = await TaskDuePoint.findAll({ where: { organizationId, taskId: taskIds } });
+  return new Map(due.map((d) => [d.taskId, d.due]));
+}
+
+/** A machine's tasks in schedule order (position, then name), each with its stored due point. */
+export async function machineTasksWithDue(access: OrgAccess, machineId: string) {
+  const organizationId = access.organization.id;
+  const [tasks, due] = await Promise.all([
+    ServiceTask.findAll({
+      where: { organizationId, machineId },
+      order: [
+        ['position', 'ASC'],
+        ['name', 'ASC'],
+      ],
+    }),
+    TaskDuePoint.findAll({ where: { organizationId, machineId } }),
+  ]);
+  const dueOf = new Map(due.map((d) => [d.taskId, d.due]));
+  return tasks.map((task) => ({ task, due: dueOf.get(task.id) ?? null }));
 }

@@ -60,3 +60,20 @@ export async function countFromNow(access: OrgAccess, machine: Machine, tasks: S
   });
   return tasks;
 }
+
+/** Counts one task from now; refused (422) when its last service is recorded already. */
+export async function countTaskFromNow(access: OrgAccess, machine: Machine, task: ServiceTask) {
+  if (task.lastDoneMeter !== null || task.lastDoneOn !== null)
+    throw invalid({
+      task: `${task.name} has a recorded last service; counting starts from it`,
+    });
+  return countFromNow(access, machine, [task]);
+}
+
+/** Counts every task of the machine whose history is unknown from now; 422 when there is none. */
+export async function countMachineFromNow(access: OrgAccess, machine: Machine) {
+  const tasks = await unknownHistoryTasks(access, machine.id);
+  if (!tasks.length)
+    throw invalid({ task: `No task of ${machine.fleetNumber} is waiting for its history` });
+  return countFromNow(access, machine, tasks);
+}

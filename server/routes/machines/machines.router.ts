@@ -13,7 +13,7 @@ import { authorize } from '../../policies/access';
 import { canCreateMachine, canUpdateMachine, machineAbilities } from '../../policies/machine';
 import { presentMachine, presentUsage } from '../../presenters/machine';
 import { createMachine, listMachines, loadMachine, updateMachine } from '../../services/machines';
-import { MachineForecast, TaskDuePoint } from '../../models';
+import { forecastOf, machineDueSummary } from '../../services/machine-detail';
 import { ensureDuePointsCurrent } from '../../services/forecast';
 import { tagOutState } from '../../services/machine-status';
 
@@ -74,24 +74,14 @@ export function machinesRouter(): Router {
       const access = req.access!;
       await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
       const { machine, operatorIds } = await loadMachine(access, params.machineId);
-      const forecast = await MachineForecast.findByPk(machine.id);
-      const due = await TaskDuePoint.findAll({
-        where: { organizationId: access.organization.id, machineId: machine.id },
-      });
-      const rank = { overdue: 0, due_soon: 1, history_unknown: 2, no_forecast: 3, ok: 4 } as const;
-      const worst = [...due].sort((a, b) => rank[a.status] - rank[b.status])[0];
-      const next =
-        due
-          .map((d) => d.sortDate)
-          .filter((d): d is string => !!d)
-          .sort()[0] ?? null;
+      const { forecast, dueStatus, nextDueDate } = await machineDueSummary(access, machine);
       return {
         data: {
           ...presentMachine(machine, {
             operatorIds,
             forecast,
-            dueStatus: worst?.status ?? null,
-            nextDueDate: next,
+            dueStatus,
+            nextDueDate,
           }),
           usage: presentUsage(forecast?.usage ?? null),
           tagOut: await tagOutState(access, machine),
@@ -115,7 +105,7 @@ export function machinesRouter(): Router {
       authorize(canUpdateMachine(access), 'Only a manager may edit machines');
       await updateMachine(access, machine, body);
       const { operatorIds } = await loadMachine(access, params.machineId);
-      const forecast = await MachineForecast.findByPk(machine.id);
+      const forecast = await forecastOf(machine);
       return {
         data: presentMachine(machine, { operatorIds, forecast }),
         abilities: machineAbilities(access, machine),

@@ -1,4 +1,3 @@
-import { randomUUID } from 'node:crypto';
 import { Router } from 'express';
 import { z } from 'zod';
 import { rawResponse, route } from '../route';
@@ -6,11 +5,13 @@ import { machinePhotoResponseSchema } from '../../../shared/schemas/machines';
 import { authorize } from '../../policies/access';
 import { canUpdateMachine } from '../../policies/machine';
 import { loadMachine } from '../../services/machines';
-import { deleteObject, getObject, putObject } from '../../infra/storage';
-import { IMAGE_MAX_BYTES, prepareImage } from '../../infra/images';
+import {
+  openMachinePhoto,
+  removeMachinePhoto,
+  setMachinePhoto,
+} from '../../services/machine-photos';
+import { IMAGE_MAX_BYTES } from '../../infra/images';
 import { fileUpload } from '../../middlewares/upload';
-import { notFound } from '../../errors';
-import { recordAudit } from '../../infra/audit';
 
 const params = z.object({ orgId: z.uuid(), machineId: z.uuid() });
 
@@ -32,24 +33,7 @@ export function machinePhotoRouter(): Router {
       const access = req.access!;
       const { machine } = await loadMachine(access, p.machineId);
       authorize(canUpdateMachine(access), 'Only a manager may change the photo');
-      const { full, thumb, contentType } = await prepareImage(req.file!.buffer, 'photo');
-      const key = `org/${access.organization.id}/machines/${machine.id}/${randomUUID()}`;
-      await putObject(`${key}.webp`, full, contentType);
-      await putObject(`${key}-thumb.webp`, thumb, contentType);
-      const previous = machine.photoKey;
-      await machine.update({ photoKey: key });
-      await recordAudit({
-        organizationId: access.organization.id,
-        actorUserId: access.userId,
-        action: 'machine.photo',
-        entityType: 'machine',
-        entityId: machine.id,
-      });
-      if (previous)
-        await Promise.allSettled([
-          deleteObject(`${previous}.webp`),
-          deleteObject(`${previous}-thumb.webp`),
-        ]);
+      await setMachinePhoto(access, machine, req.file!.buffer);
       const base = `/api/v1/organizations/${access.organization.id}/machines/${machine.id}/photo`;
       return { data: { photoUrl: base, thumbnailUrl: `${base}?size=thumb` } };
     },
@@ -65,10 +49,7 @@ export function machinePhotoRouter(): Router {
     response: rawResponse('image/webp', 'the photo or its thumbnail'),
     handler: async ({ req, res, params: p, query }) => {
       const { machine } = await loadMachine(req.access!, p.machineId);
-      if (!machine.photoKey) throw notFound('Photo');
-      const object = await getObject(
-        `${machine.photoKey}${query.size === 'thumb' ? '-thumb' : ''}.webp`,
-      );
+      const object = await openMachinePhoto(machine, query.size);
       res.setHeader('Content-Type', object.contentType);
       res.setHeader('Cache-Control', 'private, max-age=3600');
       if (object.length) res.setHeader('Content-Length', String(object.length));
@@ -89,10 +70,7 @@ export function machinePhotoRouter(): Router {
       const access = req.access!;
       const { machine } = await loadMachine(access, p.machineId);
       authorize(canUpdateMachine(access), 'Only a manager may change the photo');
-      if (!machine.photoKey) throw notFound('Photo');
-      const key = machine.photoKey;
-      await machine.update({ photoKey: null });
-      await Promise.allSettled([deleteObject(`${key}.webp`), deleteObject(`${key}-thumb.webp`)]);
+      await removeMachinePhoto(machine);
     },
   });
 

@@ -5,20 +5,18 @@ import { authorize } from '../../policies/access';
 import { canSetLastDone } from '../../policies/machine';
 import { presentTask } from '../../presenters/schedule';
 import { taskResponseSchema, tasksResponseSchema } from '../../../shared/schemas/schedule';
-import { TaskDuePoint } from '../../models';
-import { invalid } from '../../errors';
 import { loadMachine } from '../../services/machines';
-import { loadTask } from '../../services/schedules';
-import { countFromNow, unknownHistoryTasks } from '../../services/task-history';
+import { dueOfTasks, loadTask } from '../../services/schedules';
+import { countMachineFromNow, countTaskFromNow } from '../../services/task-history';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const NOT_ALLOWED = 'Only a manager or technician may answer when a task was last done';
 
 async function presented(organizationId: string, tasks: Awaited<ReturnType<typeof loadTask>>[]) {
-  const due = await TaskDuePoint.findAll({
-    where: { organizationId, taskId: tasks.map((t) => t.id) },
-  });
-  const dueOf = new Map(due.map((d) => [d.taskId, d.due]));
+  const dueOf = await dueOfTasks(
+    organizationId,
+    tasks.map((t) => t.id),
+  );
   return tasks.map((t) => presentTask(t, dueOf.get(t.id) ?? null));
 }
 
@@ -39,11 +37,7 @@ export function taskHistoryRouter(): Router {
       const task = await loadTask(access, params.taskId);
       const { machine } = await loadMachine(access, task.machineId);
       authorize(canSetLastDone(access), NOT_ALLOWED);
-      if (task.lastDoneMeter !== null || task.lastDoneOn !== null)
-        throw invalid({
-          task: `${task.name} has a recorded last service; counting starts from it`,
-        });
-      await countFromNow(access, machine, [task]);
+      await countTaskFromNow(access, machine, task);
       const [data] = await presented(access.organization.id, [task]);
       return { data };
     },
@@ -61,10 +55,7 @@ export function taskHistoryRouter(): Router {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
       authorize(canSetLastDone(access), NOT_ALLOWED);
-      const tasks = await unknownHistoryTasks(access, machine.id);
-      if (!tasks.length)
-        throw invalid({ task: `No task of ${machine.fleetNumber} is waiting for its history` });
-      await countFromNow(access, machine, tasks);
+      const tasks = await countMachineFromNow(access, machine);
       return { data: await presented(access.organization.id, tasks) };
     },
   });

@@ -19,36 +19,30 @@ import { presentTask, presentTemplate } from '../../presenters/schedule';
 import { loadMachine } from '../../services/machines';
 import {
   addTasks,
-  applyTemplate,
   deleteTask,
+  dueOfTask,
   loadTask,
-  loadTemplate,
+  machineTasksWithDue,
   setLastDone,
   updateTask,
 } from '../../services/schedules';
-import { ScheduleTemplate, ServiceTask, TaskDuePoint } from '../../models';
+import {
+  applyTemplate,
+  createTemplate,
+  listTemplates,
+  loadTemplate,
+} from '../../services/schedule-templates';
 import { ensureDuePointsCurrent } from '../../services/forecast';
-import { sequelize } from '../../db';
-import { recordAudit } from '../../infra/audit';
+import type { OrgAccess } from '../../policies/access';
 import { invalid } from '../../errors';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const machineParams = orgParams.extend({ machineId: z.uuid() });
 const taskParams = orgParams.extend({ taskId: z.uuid() });
 
-async function tasksWithDue(organizationId: string, machineId: string) {
-  const [tasks, due] = await Promise.all([
-    ServiceTask.findAll({
-      where: { organizationId, machineId },
-      order: [
-        ['position', 'ASC'],
-        ['name', 'ASC'],
-      ],
-    }),
-    TaskDuePoint.findAll({ where: { organizationId, machineId } }),
-  ]);
-  const dueOf = new Map(due.map((d) => [d.taskId, d.due]));
-  return tasks.map((t) => presentTask(t, dueOf.get(t.id) ?? null));
+async function presentMachineTasks(access: OrgAccess, machineId: string) {
+  const rows = await machineTasksWithDue(access, machineId);
+  return rows.map(({ task, due }) => presentTask(task, due));
 }
 
 export function tasksRouter(): Router {
@@ -66,7 +60,7 @@ export function tasksRouter(): Router {
       await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
       const { machine } = await loadMachine(access, params.machineId);
       return {
-        data: await tasksWithDue(access.organization.id, machine.id),
+        data: await presentMachineTasks(access, machine.id),
         abilities: { edit: canEditSchedule(access), setLastDone: canSetLastDone(access) },
       };
     },
@@ -86,8 +80,7 @@ export function tasksRouter(): Router {
       const { machine } = await loadMachine(access, params.machineId);
       authorize(canEditSchedule(access), 'Only a manager or technician may edit the schedule');
       const [task] = await addTasks(access, machine, [body]);
-      const due = await TaskDuePoint.findByPk(task.id);
-      return { data: presentTask(task, due?.due ?? null) };
+      return { data: presentTask(task, await dueOfTask(task)) };
     },
   });
 
@@ -105,8 +98,7 @@ export function tasksRouter(): Router {
       await loadMachine(access, task.machineId);
       authorize(canEditSchedule(access), 'Only a manager or technician may edit the schedule');
       await updateTask(access, task, body);
-      const due = await TaskDuePoint.findByPk(task.id);
-      return { data: presentTask(task, due?.due ?? null) };
+      return { data: presentTask(task, await dueOfTask(task)) };
     },
   });
 
@@ -144,8 +136,7 @@ export function tasksRouter(): Router {
         'Only a manager or technician may set when a task was last done',
       );
       await setLastDone(access, task, body);
-      const due = await TaskDuePoint.findByPk(task.id);
-      return { data: presentTask(task, due?.due ?? null) };
+      return { data: presentTask(task, await dueOfTask(task)) };
     },
   });
 
@@ -159,16 +150,7 @@ export function tasksRouter(): Router {
     response: scheduleTemplateListResponseSchema,
     handler: async ({ req, query }) => {
       const access = req.access!;
-      const rows = await ScheduleTemplate.findAll({
-        where: {
-          organizationId: access.organization.id,
-          ...(query.category && { category: query.category }),
-        },
-        order: [
-          ['category', 'ASC'],
-          ['name', 'ASC'],
-        ],
-      });
+      const rows = await listTemplates(access, query.category);
       return {
         data: rows.map(presentTemplate),
         abilities: { edit: hasRole(access, 'manager') },
@@ -188,23 +170,7 @@ export function tasksRouter(): Router {
     handler: async ({ req, body }) => {
       const access = req.access!;
       authorize(hasRole(access, 'manager'), 'Only a manager may edit schedule templates');
-      const t = await sequelize.transaction(async (transaction) => {
-        const row = await ScheduleTemplate.create(
-          { ...body, organizationId: access.organization.id },
-          { transaction },
-        );
-        await recordAudit(
-          {
-            organizationId: access.organization.id,
-            actorUserId: access.userId,
-            action: 'template.create',
-            entityType: 'schedule_template',
-            entityId: row.id,
-          },
-          transaction,
-        );
-        return row;
-      });
+      const t = await createTemplate(access, body);
       return { data: presentTemplate(t) };
     },
   });
@@ -226,7 +192,7 @@ export function tasksRouter(): Router {
         throw invalid({ templateId: 'No such schedule template in this farm' });
       });
       await applyTemplate(access, machine, template);
-      return { data: await tasksWithDue(access.organization.id, machine.id) };
+      return { data: await presentMachineTasks(access, machine.id) };
     },
   });
 

@@ -1,0 +1,25 @@
+// What one machine's page shows beside its record: the stored forecast and the worst and next
+// due of its tasks.
+import { MachineForecast, TaskDuePoint, type Machine } from '../models';
+import type { OrgAccess } from '../policies/context';
+
+// Worst first: the status a machine shows is the worst of its tasks'.
+const STATUS_RANK = { overdue: 0, due_soon: 1, history_unknown: 2, no_forecast: 3, ok: 4 } as const;
+
+/** The machine's stored forecast summary, or null before its first reading. */
+export const forecastOf = (machine: Machine) => MachineForecast.findByPk(machine.id);
+
+/** The forecast, the worst due status of the machine's tasks and their earliest due date. */
+export async function machineDueSummary(access: OrgAccess, machine: Machine) {
+  const forecast = await forecastOf(machine);
+  const due = await TaskDuePoint.findAll({
+    where: { organizationId: access.organization.id, machineId: machine.id },
+  });
+  const worst = [...due].sort((a, b) => STATUS_RANK[a.status] - STATUS_RANK[b.status])[0];
+  const nextDueDate =
+    due
+      .map((d) => d.sortDate)
+      .filter((d): d is string => !!d)
+      .sort()[0] ?? null;
+  return { forecast, dueStatus: worst?.status ?? null, nextDueDate };
+}
