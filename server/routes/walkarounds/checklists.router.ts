@@ -12,14 +12,14 @@ import {
 } from '../../../shared/schemas/walkarounds';
 import { authorize } from '../../policies/access';
 import { canEditChecklists } from '../../policies/walkaround';
-import { ChecklistTemplate } from '../../models';
 import { presentChecklistItem, presentChecklistTemplate } from '../../presenters/walkaround';
 import {
   createChecklistTemplate,
   deleteChecklistTemplate,
+  listChecklistTemplates,
   loadChecklistTemplate,
   updateChecklistTemplate,
-} from '../../services/walkarounds';
+} from '../../services/checklist-templates';
 import { defaultChecklist } from '../../services/checklist-defaults';
 
 const orgParams = z.object({ orgId: z.uuid() });
@@ -38,13 +38,7 @@ export function registerChecklistTemplateRoutes(router: Router): void {
     response: checklistTemplateListResponseSchema,
     handler: async ({ req, query }) => {
       const access = req.access!;
-      const rows = await ChecklistTemplate.findAll({
-        where: {
-          organizationId: access.organization.id,
-          ...(query.category && { category: query.category }),
-        },
-        order: [['category', 'ASC']],
-      });
+      const rows = await listChecklistTemplates(access, query.category);
       return {
         data: rows.map(presentChecklistTemplate),
         abilities: { edit: canEditChecklists(access) },

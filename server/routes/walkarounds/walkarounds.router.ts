@@ -1,4 +1,3 @@
-import { randomUUID } from 'node:crypto';
 import { Router } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
@@ -16,26 +15,17 @@ import {
 import { authorize } from '../../policies/access';
 import { canDoWalkaround, canEditChecklists, canInspect } from '../../policies/walkaround';
 import { loadMachine } from '../../services/machines';
-import {
-  assertMayStart,
-  checklistFor,
-  listWalkarounds,
-  storeWalkaroundPhoto,
-  submitWalkaround,
-} from '../../services/walkarounds';
+import { assertMayStart, submitWalkaround, walkaroundStart } from '../../services/walkarounds';
+import { listWalkarounds, loadWalkaround } from '../../services/walkaround-history';
+import { storeWalkaroundPhoto, walkaroundPhotoFile } from '../../services/walkaround-photos';
 import { taggedOutMessage } from '../../services/defects';
-import { getObject, putObject } from '../../infra/storage';
-import { prepareImage } from '../../infra/images';
 import { fileUpload } from '../../middlewares/upload';
-import { AppError, notFound } from '../../errors';
-import { Defect, Machine, MachineForecast, Walkaround, WalkaroundPhoto } from '../../models';
 import { presentChecklistItem, presentWalkaround } from '../../presenters/walkaround';
 import { presentDefect, presentMachineRef, walkaroundPhotoUrls } from '../../presenters/defect';
 import { peopleById } from '../../presenters/people';
 import { sendObject } from '../service-records/attachments.router';
 import { registerChecklistTemplateRoutes } from './checklists.router';
 import { registerLabelRoutes } from './label.router';
-import { Op } from 'sequelize';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const machineParams = orgParams.extend({ machineId: z.uuid() });
@@ -64,18 +54,15 @@ export function walkaroundsRouter(): Router {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
       assertMayStart(access, machine, query.purpose);
-      const [checklist, forecast] = await Promise.all([
-        checklistFor(access, machine.category),
-        MachineForecast.findByPk(machine.id),
-      ]);
+      const { checklist, lastReading } = await walkaroundStart(access, machine);
       return {
         data: {
           machine: {
             ...presentMachineRef(machine),
-            lastReading:
-              forecast?.lastValue != null && forecast.lastTakenAt
-                ? { value: forecast.lastValue, takenAt: forecast.lastTakenAt.toISOString() }
-                : null,
+            lastReading: lastReading && {
+              value: lastReading.value,
+              takenAt: lastReading.takenAt.toISOString(),
+            },
           },
           purpose: query.purpose,
           template: checklist.template,
@@ -100,11 +87,7 @@ export function walkaroundsRouter(): Router {
     handler: async ({ req, res, body }) => {
       const access = req.access!;
       const outcome = await submitWalkaround(access, body);
-      const machine = (await Machine.findByPk(outcome.machine.id))!;
-      const defects = await Defect.findAll({
-        where: { organizationId: access.organization.id, id: { [Op.in]: outcome.defectIds } },
-        order: [['createdAt', 'ASC']],
-      });
+      const { machine, defects } = outcome;
       const people = await peopleById([
         outcome.walkaround.operatorId,
         ...defects.flatMap((d) => [d.reportedBy, d.assignedTo, d.fixedBy]),
@@ -134,14 +117,7 @@ export function walkaroundsRouter(): Router {
     handler: async ({ req, query }) => {
       const access = req.access!;
       if (query.machineId) await loadMachine(access, query.machineId);
-      const { total, walkarounds } = await listWalkarounds(access, query);
-      const machines = await Machine.findAll({
-        where: {
-          organizationId: access.organization.id,
-          id: { [Op.in]: [...new Set(walkarounds.map((w) => w.machineId))] },
-        },
-      });
-      const machineOf = new Map(machines.map((m) => [m.id, m]));
+      const { total, walkarounds, machineOf } = await listWalkarounds(access, query);
       const people = await peopleById(walkarounds.map((w) => w.operatorId));
       return {
         data: walkarounds.map((w) => presentWalkaround(w, machineOf.get(w.machineId)!, people)),
@@ -159,17 +135,7 @@ export function walkaroundsRouter(): Router {
     response: walkaroundResponseSchema,
     handler: async ({ req, params }) => {
       const access = req.access!;
-      const w = await Walkaround.findOne({
-        where: { id: params.walkaroundId, organizationId: access.organization.id },
-      });
-      if (!w) throw notFound('Walkaround');
-      const { machine } = await loadMachine(access, w.machineId).catch(() => {
-        throw notFound('Walkaround');
-      });
-      const defects = await Defect.findAll({
-        where: { organizationId: access.organization.id, walkaroundId: w.id },
-        order: [['createdAt', 'ASC']],
-      });
+      const { walkaround: w, machine, defects } = await loadWalkaround(access, params.walkaroundId);
       const people = await peopleById([
         w.operatorId,
         ...defects.flatMap((d) => [d.reportedBy, d.assignedTo, d.fixedBy]),
@@ -196,13 +162,7 @@ export function walkaroundsRouter(): Router {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
       authorize(canDoWalkaround(access, machine), 'Your role does not do walkarounds');
-      if (machine.status === 'sold')
-        throw new AppError(409, 'machine_sold', `${machine.fleetNumber} is sold`);
-      const { full, thumb, contentType } = await prepareImage(req.file!.buffer, 'photo');
-      const key = `org/${access.organization.id}/walkarounds/${machine.id}/${randomUUID()}`;
-      await putObject(`${key}.webp`, full, contentType);
-      await putObject(`${key}-thumb.webp`, thumb, contentType);
-      const photo = await storeWalkaroundPhoto(access, machine, key);
+      const photo = await storeWalkaroundPhoto(access, machine, req.file!.buffer);
       const urls = walkaroundPhotoUrls(access.organization.id, photo.id);
       return { data: { id: photo.id, photoUrl: urls.photoUrl!, thumbnailUrl: urls.thumbnailUrl! } };
     },
@@ -218,16 +178,9 @@ export function walkaroundsRouter(): Router {
     response: z.string().openapi({ format: 'binary' }),
     handler: async ({ req, res, params, query }) => {
       const access = req.access!;
-      const photo = await WalkaroundPhoto.findOne({
-        where: { id: params.photoId, organizationId: access.organization.id },
-      });
-      if (!photo) throw notFound('Photo');
-      await loadMachine(access, photo.machineId).catch(() => {
-        throw notFound('Photo');
-      });
       await sendObject(
         res,
-        await getObject(`${photo.objectKey}${query.size === 'thumb' ? '-thumb' : ''}.webp`),
+        await walkaroundPhotoFile(access, params.photoId, query.size === 'thumb'),
       );
     },
   });
