@@ -4,16 +4,17 @@ import { FullPageMessage } from '../components/errors/full-page-message';
 import { ErrorBoundary } from '../components/errors/error-boundary';
 import { ReconnectingBanner } from '../components/errors/reconnecting-banner';
 import { Button } from '../components/ui/button';
-import { clearSession, sessionKeys, type Me } from '../lib/auth';
+import { clearSession, type Me } from '../lib/auth';
 import { createQueryClient } from '../lib/query-client';
 import { paths } from './paths';
 import { createAppRouter } from './router';
+import { queryKeys } from '../lib/query-keys';
 
 // One query client and one router for the life of the page.
 const queryClient = createQueryClient({
   onUnauthorized: () => {
     // Only a session that ended while in use needs handling; signed-out pages expect 401s.
-    if (!queryClient.getQueryData<Me | null>(sessionKeys.me())) return;
+    if (!queryClient.getQueryData<Me | null>(queryKeys.session.me())) return;
     // Leave the cache's error notification before clearing the cache under it.
     setTimeout(() => {
       clearSession(queryClient);

@@ -8,6 +8,7 @@ import {
 } from '@tanstack/react-query';
 import type { Me } from '../../shared/schemas/auth';
 import { apiClient, isApiError, type DataEnvelope } from './api-client';
+import { queryKeys } from './query-keys';
 
 // The signed-in person and their memberships. This lives in lib (not in a feature) because the
 // router guards, the app shell and every feature need to know who is signed in and where.
@@ -15,11 +16,6 @@ import { apiClient, isApiError, type DataEnvelope } from './api-client';
 export type { Me };
 export type Membership = Me['memberships'][number];
 export type Organization = Membership['organization'];
-
-export const sessionKeys = {
-  all: ['session'] as const,
-  me: () => [...sessionKeys.all, 'me'] as const,
-};
 
 /** GET /me; a 401 is an answer here ("nobody is signed in"), not an error. */
 export async function fetchMe(signal?: AbortSignal): Promise<Me | null> {
@@ -34,7 +30,7 @@ export async function fetchMe(signal?: AbortSignal): Promise<Me | null> {
 
 export const meQueryOptions = () =>
   queryOptions({
-    queryKey: sessionKeys.me(),
+    queryKey: queryKeys.session.me(),
     queryFn: ({ signal }) => fetchMe(signal),
     staleTime: 5 * 60_000,
     meta: { allowUnauthorized: true },
@@ -47,13 +43,15 @@ export const useMe = () => useQuery(meQueryOptions());
  * before belonged to whoever was signed in before, so it goes first.
  */
 export function storeSession(queryClient: QueryClient, me: Me): void {
-  queryClient.removeQueries({ predicate: (query) => query.queryKey[0] !== sessionKeys.all[0] });
-  queryClient.setQueryData(sessionKeys.me(), me);
+  queryClient.removeQueries({
+    predicate: (query) => query.queryKey[0] !== queryKeys.session.all[0],
+  });
+  queryClient.setQueryData(queryKeys.session.me(), me);
 }
 
 export function clearSession(queryClient: QueryClient): void {
   queryClient.clear();
-  queryClient.setQueryData(sessionKeys.me(), null);
+  queryClient.setQueryData(queryKeys.session.me(), null);
 }
 
 export function useSignOut() {

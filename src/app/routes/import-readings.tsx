@@ -3,7 +3,6 @@ import { ForbiddenState } from '../../components/errors/forbidden-state';
 import { Card, Section } from '../../components/ui/card';
 import { Icon } from '../../components/ui/icons';
 import { PageHeader } from '../../components/ui/page-header';
-import { dueKeys } from '../../features/due/api/keys';
 import { ImportFormatHelp } from '../../features/readings/components/import-format-help';
 import { ImportReadingsForm } from '../../features/readings/components/import-readings-form';
 import { useCurrentMembership } from '../../lib/auth';
@@ -49,11 +48,7 @@ export function ImportReadingsPage() {
           description="Checking reads every row and writes nothing. Import when every row is fine."
         >
           <Card>
-            <ImportReadingsForm
-              orgId={organization.id}
-              timeZone={organization.timeZone}
-              alsoInvalidate={[dueKeys.organization(organization.id)]}
-            />
+            <ImportReadingsForm orgId={organization.id} timeZone={organization.timeZone} />
           </Card>
         </Section>
       </div>

@@ -6,7 +6,6 @@ import { EmptyState } from '../../components/ui/empty-state';
 import { ErrorState } from '../../components/ui/error-state';
 import { PageHeader } from '../../components/ui/page-header';
 import { ListSkeleton } from '../../components/ui/skeleton';
-import { dueKeys } from '../../features/due/api/keys';
 import {
   latestReadingsQueryOptions,
   useLatestReadings,
@@ -84,7 +83,6 @@ export function LogHoursPage() {
           units={organization.units}
           items={latest.data}
           initialFind={search.get('find') ?? ''}
-          alsoInvalidate={[dueKeys.organization(organization.id)]}
         />
       )}
     </>

@@ -4,7 +4,7 @@ import { ForbiddenState } from '../../components/errors/forbidden-state';
 import { PageHeader } from '../../components/ui/page-header';
 import { messagesQueryOptions, useMessages } from '../../features/notifications/api/get-messages';
 import { messageQueryOptions } from '../../features/notifications/api/get-message';
-import type { MessageFilters } from '../../features/notifications/api/keys';
+import type { MessageFilters } from '../../features/notifications/api/types';
 import { MessageList } from '../../features/notifications/components/message-list';
 import { MessageViewer } from '../../features/notifications/components/message-viewer';
 import { isApiError } from '../../lib/api-client';

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { EmailChangedResponse, EmailTokenInput } from '../../../../shared/schemas/account';
 import { apiClient } from '../../../lib/api-client';
-import { sessionKeys } from '../../../lib/auth';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** Opens an address change's link: the account uses the new address from now on. */
 export const confirmEmailChange = (input: EmailTokenInput) =>
@@ -13,6 +13,6 @@ export function useConfirmEmailChange() {
     mutationFn: confirmEmailChange,
     meta: { allowUnauthorized: true },
     // whoever is signed in here may be the one whose address changed
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: sessionKeys.me() }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.session.me() }),
   });
 }

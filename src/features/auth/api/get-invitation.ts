@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { InvitationLookup, InvitationLookupResponse } from '../../../../shared/schemas/auth';
 import { apiClient, segment } from '../../../lib/api-client';
-import { authKeys } from './keys';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** What an invitation link shows before it is accepted. */
 export type InvitationPreview = InvitationLookup;
@@ -13,7 +13,7 @@ export const getInvitation = (token: string, signal?: AbortSignal) =>
 
 export const invitationQueryOptions = (token: string) =>
   queryOptions({
-    queryKey: authKeys.invitation(token),
+    queryKey: queryKeys.auth.invitation(token),
     queryFn: ({ signal }) => getInvitation(token, signal),
     meta: { allowUnauthorized: true },
   });

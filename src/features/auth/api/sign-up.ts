@@ -2,7 +2,7 @@ import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { SignUpInput, SignUpStatusResponse } from '../../../../shared/schemas/account';
 import type { MailSentResponse } from '../../../../shared/schemas/auth';
 import { apiClient } from '../../../lib/api-client';
-import { authKeys } from './keys';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** Whether this server takes sign-ups (SIGNUP=open) or only invitations. */
 export const getSignUpStatus = (signal?: AbortSignal) =>
@@ -10,7 +10,7 @@ export const getSignUpStatus = (signal?: AbortSignal) =>
 
 export const signUpStatusQueryOptions = () =>
   queryOptions({
-    queryKey: authKeys.signUpStatus(),
+    queryKey: queryKeys.auth.signUpStatus(),
     queryFn: ({ signal }) => getSignUpStatus(signal),
     staleTime: 10 * 60_000,
   });

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { checklistKeys, walkaroundChecklistsKey } from './keys';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 /** DELETE a farm checklist: its category goes back to the built-in list. */
 export const deleteTemplate = (orgId: string, templateId: string) =>
@@ -10,11 +10,6 @@ export function useDeleteTemplate(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (templateId: string) => deleteTemplate(orgId, templateId),
-    onSuccess: () =>
-      Promise.all(
-        [checklistKeys.list(orgId), walkaroundChecklistsKey].map((queryKey) =>
-          queryClient.invalidateQueries({ queryKey }),
-        ),
-      ),
+    onSuccess: () => invalidate(queryClient, changedBy.checklistTemplates(orgId)),
   });
 }

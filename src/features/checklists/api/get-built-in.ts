@@ -1,8 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import type { MachineCategory } from '../../../../shared/constants';
 import { apiClient, segment } from '../../../lib/api-client';
-import { checklistKeys } from './keys';
 import type { BuiltInChecklist } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getBuiltIn = (orgId: string, category: MachineCategory, signal?: AbortSignal) =>
   apiClient
@@ -15,7 +15,7 @@ export const getBuiltIn = (orgId: string, category: MachineCategory, signal?: Ab
 /** Hourstone's own list of a category; it does not change while the app runs. */
 export const useBuiltIn = (orgId: string, category: MachineCategory, enabled: boolean) =>
   useQuery({
-    queryKey: checklistKeys.builtIn(orgId, category),
+    queryKey: queryKeys.checklistTemplates.builtIn(orgId, category),
     queryFn: ({ signal }) => getBuiltIn(orgId, category, signal),
     staleTime: Infinity,
     enabled,

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { checklistKeys } from './keys';
 import type { ChecklistTemplateList } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** The farm's checklists, one per category at most. */
 export const getTemplates = (orgId: string, signal?: AbortSignal) =>
@@ -11,7 +11,7 @@ export const getTemplates = (orgId: string, signal?: AbortSignal) =>
 
 export const templatesQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: checklistKeys.list(orgId),
+    queryKey: queryKeys.checklistTemplates.list(orgId),
     queryFn: ({ signal }) => getTemplates(orgId, signal),
   });
 

@@ -5,8 +5,8 @@ import type {
   checklistTemplateUpdateSchema,
 } from '../../../../shared/schemas/walkarounds';
 import { apiClient, segment } from '../../../lib/api-client';
-import { checklistKeys, walkaroundChecklistsKey } from './keys';
 import type { ChecklistTemplate } from './types';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 /** A category's first farm checklist (every field), or the fields changed on the existing one. */
 export type SaveTemplateInput =
@@ -30,11 +30,6 @@ export function useSaveTemplate(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (save: SaveTemplateInput) => saveTemplate(orgId, save),
-    onSuccess: () =>
-      Promise.all(
-        [checklistKeys.list(orgId), walkaroundChecklistsKey].map((queryKey) =>
-          queryClient.invalidateQueries({ queryKey }),
-        ),
-      ),
+    onSuccess: () => invalidate(queryClient, changedBy.checklistTemplates(orgId)),
   });
 }

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DealerInvitationAcceptInput } from '../../../../shared/schemas/dealers';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { FarmDealerLink } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const acceptDealerInvitation = (token: string, input: DealerInvitationAcceptInput) =>
   apiClient
@@ -14,6 +14,8 @@ export function useAcceptDealerInvitation(token: string) {
   return useMutation({
     mutationFn: (input: DealerInvitationAcceptInput) => acceptDealerInvitation(token, input),
     onSuccess: (_link, input) =>
-      queryClient.invalidateQueries({ queryKey: dealerKeys.farmLinks(input.organizationId) }),
+      queryClient.invalidateQueries({
+        queryKey: queryKeys.dealers.farmLinks(input.organizationId),
+      }),
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { Booking } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export type BookingAction = 'accept' | 'decline' | 'cancel';
 
@@ -20,6 +20,6 @@ export function useDecideBooking(orgId: string) {
     mutationFn: (v: { bookingId: string; action: BookingAction; note?: string }) =>
       decideBooking(orgId, v.bookingId, v.action, v.note),
     // an accepted booking adds planned records: the shop's views refresh on their next visit
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: dealerKeys.bookings(orgId) }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.dealers.bookings(orgId) }),
   });
 }

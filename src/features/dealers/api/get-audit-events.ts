@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { AuditLog } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getAuditEvents = (orgId: string, dealerId: string | null, signal?: AbortSignal) => {
   const query = new URLSearchParams({ pageSize: '50' });
@@ -14,7 +14,7 @@ export const getAuditEvents = (orgId: string, dealerId: string | null, signal?: 
 
 export const auditEventsQueryOptions = (orgId: string, dealerId: string | null) =>
   queryOptions({
-    queryKey: dealerKeys.activity(orgId, dealerId),
+    queryKey: queryKeys.dealers.activity(orgId, dealerId),
     queryFn: ({ signal }) => getAuditEvents(orgId, dealerId, signal),
   });
 

@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { API_BASE, apiClient, segment } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { Board, BoardFilters } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 function boardSearch(filters: Omit<BoardFilters, 'page' | 'pageSize'>) {
   const query = new URLSearchParams({ horizon: String(filters.horizon) });
@@ -25,7 +25,7 @@ export const boardCsvHref = (orgId: string, filters: BoardFilters) =>
 
 export const boardQueryOptions = (orgId: string, filters: BoardFilters) =>
   queryOptions({
-    queryKey: dealerKeys.boardPage(orgId, filters),
+    queryKey: queryKeys.dealers.boardPage(orgId, filters),
     queryFn: ({ signal }) => getBoard(orgId, filters, signal),
   });
 

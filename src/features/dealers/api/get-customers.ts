@@ -1,14 +1,14 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { Customers } from '../../../../shared/schemas/dealer-responses';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getCustomers = (orgId: string, signal?: AbortSignal) =>
   apiClient.get<Customers>(`/organizations/${segment(orgId)}/customers`, { signal });
 
 export const customersQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: dealerKeys.customers(orgId),
+    queryKey: queryKeys.dealers.customers(orgId),
     queryFn: ({ signal }) => getCustomers(orgId, signal),
   });
 

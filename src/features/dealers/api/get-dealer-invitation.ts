@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { DealerInvitation } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getDealerInvitation = (token: string, signal?: AbortSignal) =>
   apiClient
@@ -10,7 +10,7 @@ export const getDealerInvitation = (token: string, signal?: AbortSignal) =>
 
 export const dealerInvitationQueryOptions = (token: string) =>
   queryOptions({
-    queryKey: dealerKeys.invitation(token),
+    queryKey: queryKeys.dealerInvitations.detail(token),
     queryFn: ({ signal }) => getDealerInvitation(token, signal),
     retry: false,
   });

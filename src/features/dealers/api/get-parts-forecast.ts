@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { API_BASE, apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { PartsForecast } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 const search = (horizon: number, customerId: string | null) => {
   const query = new URLSearchParams({ horizon: String(horizon) });
@@ -31,7 +31,7 @@ export const partsForecastQueryOptions = (
   customerId: string | null,
 ) =>
   queryOptions({
-    queryKey: dealerKeys.parts(orgId, horizon, customerId),
+    queryKey: queryKeys.dealers.parts(orgId, horizon, customerId),
     queryFn: ({ signal }) => getPartsForecast(orgId, horizon, customerId, signal),
   });
 

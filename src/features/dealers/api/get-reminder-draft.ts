@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { ReminderDraft } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getReminderDraft = (
   orgId: string,
@@ -18,7 +18,7 @@ export const getReminderDraft = (
 
 export const reminderDraftQueryOptions = (orgId: string, customerId: string, taskIds: string[]) =>
   queryOptions({
-    queryKey: dealerKeys.reminderDraft(orgId, customerId, taskIds),
+    queryKey: queryKeys.dealers.reminderDraft(orgId, customerId, taskIds),
     queryFn: ({ signal }) => getReminderDraft(orgId, customerId, taskIds, signal),
     staleTime: Infinity,
   });

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DealerInvitationInput } from '../../../../shared/schemas/dealers';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { FarmDealerLink } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const grantDealer = (orgId: string, input: DealerInvitationInput) =>
   apiClient
@@ -13,6 +13,7 @@ export function useGrantDealer(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: DealerInvitationInput) => grantDealer(orgId, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: dealerKeys.farmLinks(orgId) }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: queryKeys.dealers.farmLinks(orgId) }),
   });
 }

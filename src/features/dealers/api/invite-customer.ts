@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CustomerInvitationInput } from '../../../../shared/schemas/dealers';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { Customer } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const inviteCustomer = (orgId: string, input: CustomerInvitationInput) =>
   apiClient
@@ -13,6 +13,7 @@ export function useInviteCustomer(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: CustomerInvitationInput) => inviteCustomer(orgId, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: dealerKeys.customers(orgId) }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: queryKeys.dealers.customers(orgId) }),
   });
 }

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { BookingCreateInput } from '../../../../shared/schemas/dealers';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { Booking } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const proposeBooking = (orgId: string, input: BookingCreateInput) =>
   apiClient
@@ -13,6 +13,6 @@ export function useProposeBooking(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: BookingCreateInput) => proposeBooking(orgId, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: dealerKeys.bookings(orgId) }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.dealers.bookings(orgId) }),
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { FarmDealerLink } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const revokeDealerLink = (orgId: string, linkId: string) =>
   apiClient
@@ -14,6 +14,7 @@ export function useRevokeDealerLink(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (linkId: string) => revokeDealerLink(orgId, linkId),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: dealerKeys.farmLinks(orgId) }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: queryKeys.dealers.farmLinks(orgId) }),
   });
 }

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DealerAccess } from '../../../../shared/schemas/dealers';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
 import type { FarmDealerLink } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const updateDealerLink = (orgId: string, linkId: string, access: DealerAccess) =>
   apiClient
@@ -17,6 +17,7 @@ export function useUpdateDealerLink(orgId: string) {
   return useMutation({
     mutationFn: ({ linkId, access }: { linkId: string; access: DealerAccess }) =>
       updateDealerLink(orgId, linkId, access),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: dealerKeys.farmLinks(orgId) }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: queryKeys.dealers.farmLinks(orgId) }),
   });
 }

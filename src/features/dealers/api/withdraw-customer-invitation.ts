@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { dealerKeys } from './keys';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const withdrawCustomerInvitation = (orgId: string, linkId: string) =>
   apiClient.delete(`/organizations/${segment(orgId)}/customer-invitations/${segment(linkId)}`);
@@ -9,6 +9,7 @@ export function useWithdrawCustomerInvitation(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (linkId: string) => withdrawCustomerInvitation(orgId, linkId),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: dealerKeys.customers(orgId) }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: queryKeys.dealers.customers(orgId) }),
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DefectCloseInput } from '../../../../shared/schemas/defects';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterDefectChange } from './invalidate';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { ClosedDefect } from './types';
 
 /**
@@ -19,6 +19,6 @@ export function useCloseDefect(orgId: string) {
   return useMutation({
     mutationFn: ({ defectId, input }: { defectId: string; input: DefectCloseInput }) =>
       closeDefect(orgId, defectId, input),
-    onSuccess: () => invalidateAfterDefectChange(queryClient),
+    onSuccess: () => invalidate(queryClient, changedBy.defects(orgId)),
   });
 }

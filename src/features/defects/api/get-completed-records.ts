@@ -1,8 +1,8 @@
 import { useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { defectKeys } from './keys';
 import type { ServiceHistory } from '../../../../shared/schemas/service-record-responses';
 import type { CompletedRecord } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** The machine's latest completed service records, one of which may have fixed the defect. */
 export const getCompletedRecords = (orgId: string, machineId: string, signal?: AbortSignal) =>
@@ -23,6 +23,6 @@ export const getCompletedRecords = (orgId: string, machineId: string, signal?: A
 
 export const useCompletedRecords = (orgId: string, machineId: string) =>
   useQuery({
-    queryKey: defectKeys.completedRecords(orgId, machineId),
+    queryKey: queryKeys.defects.completedRecords(orgId, machineId),
     queryFn: ({ signal }) => getCompletedRecords(orgId, machineId, signal),
   });

@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { defectKeys } from './keys';
 import type { DefectFilters, DefectList } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const DEFECTS_PAGE_SIZE = 50;
 
@@ -25,7 +25,7 @@ export const getDefects = (orgId: string, filters: DefectFilters, signal?: Abort
 
 export const defectsQueryOptions = (orgId: string, filters: DefectFilters) =>
   queryOptions({
-    queryKey: defectKeys.list(orgId, filters),
+    queryKey: queryKeys.defects.list(orgId, filters),
     queryFn: ({ signal }) => getDefects(orgId, filters, signal),
   });
 

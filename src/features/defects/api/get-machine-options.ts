@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { defectKeys } from './keys';
 import type { Machine } from '../../../../shared/schemas/machines';
 import type { MachineOption } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** The machines the caller may see, in fleet-number order (200 is the server's page limit). */
 export const getMachineOptions = (orgId: string, signal?: AbortSignal) =>
@@ -22,7 +22,7 @@ export const getMachineOptions = (orgId: string, signal?: AbortSignal) =>
 
 export const machineOptionsQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: defectKeys.machineOptions(orgId),
+    queryKey: queryKeys.defects.machineOptions(orgId),
     queryFn: ({ signal }) => getMachineOptions(orgId, signal),
   });
 

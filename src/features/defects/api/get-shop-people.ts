@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { MemberList } from '../../../../shared/schemas/members';
 import { apiClient, segment } from '../../../lib/api-client';
-import { defectKeys } from './keys';
 import type { PersonRef } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** Who a defect can be assigned to: the farm's technicians and managers (from the members). */
 export const getShopPeople = (orgId: string, signal?: AbortSignal) =>
@@ -17,7 +17,7 @@ export const getShopPeople = (orgId: string, signal?: AbortSignal) =>
 export const useShopPeople = (orgId: string, options: { enabled: boolean }) =>
   useQuery({
     ...queryOptions({
-      queryKey: defectKeys.shopPeople(orgId),
+      queryKey: queryKeys.defects.shopPeople(orgId),
       queryFn: ({ signal }) => getShopPeople(orgId, signal),
       staleTime: 5 * 60_000,
     }),

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DefectCreateInput } from '../../../../shared/schemas/defects';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterDefectChange } from './invalidate';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { ReportedDefect } from './types';
 
 export type { ReportedDefect };
@@ -18,6 +18,6 @@ export function useReportDefect(orgId: string) {
   return useMutation({
     mutationFn: ({ machineId, input }: { machineId: string; input: DefectCreateInput }) =>
       reportDefect(orgId, machineId, input),
-    onSuccess: () => invalidateAfterDefectChange(queryClient),
+    onSuccess: () => invalidate(queryClient, changedBy.defects(orgId)),
   });
 }

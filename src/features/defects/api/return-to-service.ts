@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterDefectChange } from './invalidate';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { MachineRefResponse } from '../../../../shared/schemas/machines';
 
 /**
@@ -18,6 +18,6 @@ export function useReturnToService(orgId: string) {
   return useMutation({
     mutationFn: ({ machineId, note }: { machineId: string; note: string }) =>
       returnToService(orgId, machineId, note),
-    onSuccess: () => invalidateAfterDefectChange(queryClient),
+    onSuccess: () => invalidate(queryClient, changedBy.defects(orgId)),
   });
 }

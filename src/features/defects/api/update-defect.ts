@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { DefectUpdateInput } from '../../../../shared/schemas/defects';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterDefectChange } from './invalidate';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { DefectResponse } from '../../../../shared/schemas/defects';
 
 /** PATCH …/defects/:defectId: assign, start or stop the repair, re-grade (technician, manager). */
@@ -16,6 +16,6 @@ export function useUpdateDefect(orgId: string) {
   return useMutation({
     mutationFn: ({ defectId, input }: { defectId: string; input: DefectUpdateInput }) =>
       updateDefect(orgId, defectId, input),
-    onSuccess: () => invalidateAfterDefectChange(queryClient),
+    onSuccess: () => invalidate(queryClient, changedBy.defects(orgId)),
   });
 }

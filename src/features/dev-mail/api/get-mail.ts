@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { CaughtMailList } from '../../../../shared/schemas/dev-mail';
 import { apiClient } from '../../../lib/api-client';
-import { devMailKeys } from './keys';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** One message caught by the local mail catcher (development and test only). */
 export type { CaughtMail } from '../../../../shared/schemas/dev-mail';
@@ -14,7 +14,7 @@ export const getMail = (signal?: AbortSignal) =>
 
 export const mailQueryOptions = () =>
   queryOptions({
-    queryKey: devMailKeys.lists(),
+    queryKey: queryKeys.devMail.list(),
     queryFn: ({ signal }) => getMail(signal),
     staleTime: 0,
     // new mail arrives while the page is open (an invitation just sent from another tab)

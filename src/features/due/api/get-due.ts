@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { dueKeys } from './keys';
 import type { DueFilters, DueList } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getDue = (orgId: string, filters: DueFilters, signal?: AbortSignal) => {
   const query = new URLSearchParams({
@@ -16,7 +16,7 @@ export const getDue = (orgId: string, filters: DueFilters, signal?: AbortSignal)
 
 export const dueQueryOptions = (orgId: string, filters: DueFilters) =>
   queryOptions({
-    queryKey: dueKeys.list(orgId, filters),
+    queryKey: queryKeys.due.list(orgId, filters),
     queryFn: ({ signal }) => getDue(orgId, filters, signal),
   });
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ReadingCreateInput } from '../../../../shared/schemas/readings';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterReadingChange } from './invalidate-readings';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { ReadingResponse } from './types';
 
 export const correctReading = (
@@ -21,6 +21,6 @@ export function useCorrectReading(orgId: string, machineId: string) {
   return useMutation({
     mutationFn: ({ readingId, ...input }: Partial<ReadingCreateInput> & { readingId: string }) =>
       correctReading(orgId, readingId, input),
-    onSuccess: () => invalidateAfterReadingChange(queryClient, orgId, machineId),
+    onSuccess: () => invalidate(queryClient, changedBy.machineReadings(orgId, machineId)),
   });
 }

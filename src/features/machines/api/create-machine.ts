@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MachineCreateInput } from '../../../../shared/schemas/machines';
 import { apiClient, segment } from '../../../lib/api-client';
-import { machineKeys } from './keys';
 import type { MachineResponse } from './types';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 export const createMachine = (orgId: string, input: MachineCreateInput) =>
   apiClient
@@ -13,6 +13,6 @@ export function useCreateMachine(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: MachineCreateInput) => createMachine(orgId, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: [...machineKeys.lists(), orgId] }),
+    onSuccess: () => invalidate(queryClient, changedBy.machineCreated(orgId)),
   });
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterReadingChange } from './invalidate-readings';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 export const deleteReading = (orgId: string, readingId: string) =>
   apiClient.delete(`/organizations/${segment(orgId)}/readings/${segment(readingId)}`);
@@ -9,6 +9,6 @@ export function useDeleteReading(orgId: string, machineId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (readingId: string) => deleteReading(orgId, readingId),
-    onSuccess: () => invalidateAfterReadingChange(queryClient, orgId, machineId),
+    onSuccess: () => invalidate(queryClient, changedBy.machineReadings(orgId, machineId)),
   });
 }

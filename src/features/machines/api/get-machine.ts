@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { machineKeys } from './keys';
 import type { MachineDetail } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getMachine = (orgId: string, machineId: string, signal?: AbortSignal) =>
   apiClient.get<MachineDetail>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}`, {
@@ -10,7 +10,7 @@ export const getMachine = (orgId: string, machineId: string, signal?: AbortSigna
 
 export const machineQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({
-    queryKey: machineKeys.detail(orgId, machineId),
+    queryKey: queryKeys.machines.detail(orgId, machineId),
     queryFn: ({ signal }) => getMachine(orgId, machineId, signal),
   });
 

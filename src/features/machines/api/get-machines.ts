@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { machineKeys } from './keys';
 import type { MachineFilters, MachineList } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 function toSearch(filters: MachineFilters): string {
   const search = new URLSearchParams();
@@ -19,7 +19,7 @@ export const getMachines = (orgId: string, filters: MachineFilters, signal?: Abo
 
 export const machinesQueryOptions = (orgId: string, filters: MachineFilters) =>
   queryOptions({
-    queryKey: machineKeys.list(orgId, filters),
+    queryKey: queryKeys.machines.list(orgId, filters),
     queryFn: ({ signal }) => getMachines(orgId, filters, signal),
   });
 

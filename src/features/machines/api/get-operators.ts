@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { machineKeys } from './keys';
 import type { MemberList } from '../../../../shared/schemas/members';
 import type { Operator } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** The farm's operators (from the member list), for assigning machines and naming who is assigned. */
 export const getOperators = (orgId: string, signal?: AbortSignal) =>
@@ -16,7 +16,7 @@ export const getOperators = (orgId: string, signal?: AbortSignal) =>
 
 export const operatorsQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: machineKeys.operators(orgId),
+    queryKey: queryKeys.members.operators(orgId),
     queryFn: ({ signal }) => getOperators(orgId, signal),
     staleTime: 5 * 60_000,
   });

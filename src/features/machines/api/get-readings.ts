@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { machineReadingKeys } from './keys';
 import type { ReadingHistory } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** Enough for two years of daily readings: the chart and the history share this one call. */
 export const READING_HISTORY_LIMIT = 2000;
@@ -14,7 +14,7 @@ export const getReadings = (orgId: string, machineId: string, signal?: AbortSign
 
 export const readingsQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({
-    queryKey: machineReadingKeys.list(orgId, machineId),
+    queryKey: queryKeys.readings.machine(orgId, machineId),
     queryFn: ({ signal }) => getReadings(orgId, machineId, signal),
   });
 

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ReadingCreateInput } from '../../../../shared/schemas/readings';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterReadingChange } from './invalidate-readings';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { ReadingLogged } from './types';
 
 /** `status` 'duplicate': the same value at the same time was already there; nothing was added. */
@@ -17,6 +17,6 @@ export function useLogReading(orgId: string, machineId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: ReadingCreateInput) => logReading(orgId, machineId, input),
-    onSuccess: () => invalidateAfterReadingChange(queryClient, orgId, machineId),
+    onSuccess: () => invalidate(queryClient, changedBy.machineReadings(orgId, machineId)),
   });
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { machineKeys } from './keys';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 const photoPath = (orgId: string, machineId: string) =>
   `/organizations/${segment(orgId)}/machines/${segment(machineId)}/photo`;
@@ -10,7 +10,7 @@ export function useUploadMachinePhoto(orgId: string, machineId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (file: File) => apiClient.upload(photoPath(orgId, machineId), 'photo', file, 'PUT'),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: machineKeys.all }),
+    onSuccess: () => invalidate(queryClient, changedBy.machinePhoto(orgId, machineId)),
   });
 }
 
@@ -18,6 +18,6 @@ export function useRemoveMachinePhoto(orgId: string, machineId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: () => apiClient.delete(photoPath(orgId, machineId)),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: machineKeys.all }),
+    onSuccess: () => invalidate(queryClient, changedBy.machinePhoto(orgId, machineId)),
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MeterReplacementInput } from '../../../../shared/schemas/readings';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterReadingChange } from './invalidate-readings';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { MeterReplacementResponse } from './types';
 
 export const recordMeterReplacement = (
@@ -21,6 +21,6 @@ export function useRecordMeterReplacement(orgId: string, machineId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: MeterReplacementInput) => recordMeterReplacement(orgId, machineId, input),
-    onSuccess: () => invalidateAfterReadingChange(queryClient, orgId, machineId),
+    onSuccess: () => invalidate(queryClient, changedBy.machineReadings(orgId, machineId)),
   });
 }

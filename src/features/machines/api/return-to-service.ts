@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { foreignKeys, machineKeys } from './keys';
 import type { MachineRefResponse } from './types';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 /**
  * POST …/machines/:machineId/return-to-service with the note of what was checked; 409 while a
@@ -17,12 +17,6 @@ export function useReturnToService(orgId: string, machineId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (note: string) => returnToService(orgId, machineId, note),
-    // the status shows on the machine, the fleet, the due list, the defects and the walkaround picker
-    onSuccess: () =>
-      Promise.all(
-        [machineKeys.all, foreignKeys.due, foreignKeys.defects, foreignKeys.walkaroundMachines].map(
-          (queryKey) => queryClient.invalidateQueries({ queryKey }),
-        ),
-      ),
+    onSuccess: () => invalidate(queryClient, changedBy.machineStatus(orgId)),
   });
 }

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MachineUpdateInput } from '../../../../shared/schemas/machines';
 import { apiClient, segment } from '../../../lib/api-client';
-import { foreignKeys, machineKeys } from './keys';
 import type { MachineResponse } from './types';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 export const updateMachine = (orgId: string, machineId: string, input: MachineUpdateInput) =>
   apiClient
@@ -17,12 +17,7 @@ export function useUpdateMachine(orgId: string, machineId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: MachineUpdateInput) => updateMachine(orgId, machineId, input),
-    onSuccess: () =>
-      Promise.all([
-        queryClient.invalidateQueries({ queryKey: machineKeys.detail(orgId, machineId) }),
-        queryClient.invalidateQueries({ queryKey: [...machineKeys.lists(), orgId] }),
-        // name, fleet number and status show on the due list
-        queryClient.invalidateQueries({ queryKey: foreignKeys.due }),
-      ]),
+    // name, fleet number and status show on the fleet, the due list, Log hours and the pickers
+    onSuccess: () => invalidate(queryClient, changedBy.machineUpdated(orgId, machineId)),
   });
 }

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { CalendarFeedScope } from '../../../../shared/schemas/notifications';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { reminderKeys } from './keys';
 import type { CalendarFeed } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const createCalendarFeed = (orgId: string, scope: CalendarFeedScope) =>
   apiClient
@@ -13,6 +13,6 @@ export function useCreateCalendarFeed(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (scope: CalendarFeedScope) => createCalendarFeed(orgId, scope),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: reminderKeys.feeds(orgId) }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.reminders.feeds(orgId) }),
   });
 }

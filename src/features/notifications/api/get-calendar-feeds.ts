@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { reminderKeys } from './keys';
 import type { CalendarFeeds } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getCalendarFeeds = (orgId: string, signal?: AbortSignal) =>
   apiClient
@@ -10,7 +10,7 @@ export const getCalendarFeeds = (orgId: string, signal?: AbortSignal) =>
 
 export const calendarFeedsQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: reminderKeys.feeds(orgId),
+    queryKey: queryKeys.reminders.feeds(orgId),
     queryFn: ({ signal }) => getCalendarFeeds(orgId, signal),
   });
 

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { messageKeys } from './keys';
 import type { SentMessageDetail } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getMessage = (orgId: string, id: string, signal?: AbortSignal) =>
   apiClient
@@ -13,7 +13,7 @@ export const getMessage = (orgId: string, id: string, signal?: AbortSignal) =>
 
 export const messageQueryOptions = (orgId: string, id: string) =>
   queryOptions({
-    queryKey: messageKeys.detail(orgId, id),
+    queryKey: queryKeys.messages.detail(orgId, id),
     queryFn: ({ signal }) => getMessage(orgId, id, signal),
   });
 

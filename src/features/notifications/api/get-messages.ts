@@ -1,7 +1,8 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { messageKeys, type MessageFilters } from './keys';
+import type { MessageFilters } from './types';
 import type { SentMessageList } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const MESSAGES_PAGE_SIZE = 50;
 
@@ -19,7 +20,7 @@ export const getMessages = (orgId: string, filters: MessageFilters, signal?: Abo
 
 export const messagesQueryOptions = (orgId: string, filters: MessageFilters) =>
   queryOptions({
-    queryKey: messageKeys.list(orgId, filters),
+    queryKey: queryKeys.messages.list(orgId, filters),
     queryFn: ({ signal }) => getMessages(orgId, filters, signal),
     placeholderData: keepPreviousData,
   });

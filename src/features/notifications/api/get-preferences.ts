@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { reminderKeys } from './keys';
 import type { ReminderPreferences } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getPreferences = (orgId: string, signal?: AbortSignal) =>
   apiClient.get<ReminderPreferences>(`/organizations/${segment(orgId)}/notification-preferences`, {
@@ -10,7 +10,7 @@ export const getPreferences = (orgId: string, signal?: AbortSignal) =>
 
 export const preferencesQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: reminderKeys.preferences(orgId),
+    queryKey: queryKeys.reminders.preferences(orgId),
     queryFn: ({ signal }) => getPreferences(orgId, signal),
   });
 

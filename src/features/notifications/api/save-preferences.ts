@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { NotificationPreferenceInput } from '../../../../shared/schemas/notifications';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { reminderKeys } from './keys';
 import type { DigestPreference } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const savePreferences = (orgId: string, input: NotificationPreferenceInput) =>
   apiClient
@@ -16,6 +16,7 @@ export function useSavePreferences(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: NotificationPreferenceInput) => savePreferences(orgId, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: reminderKeys.preferences(orgId) }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: queryKeys.reminders.preferences(orgId) }),
   });
 }

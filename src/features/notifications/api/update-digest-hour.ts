@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { ReminderSettingsInput } from '../../../../shared/schemas/notifications';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { reminderKeys } from './keys';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const updateDigestHour = (orgId: string, input: ReminderSettingsInput) =>
   apiClient
@@ -15,6 +15,7 @@ export function useUpdateDigestHour(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: ReminderSettingsInput) => updateDigestHour(orgId, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: reminderKeys.preferences(orgId) }),
+    onSuccess: () =>
+      queryClient.invalidateQueries({ queryKey: queryKeys.reminders.preferences(orgId) }),
   });
 }

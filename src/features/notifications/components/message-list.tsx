@@ -12,7 +12,7 @@ import {
   type NotificationStatusName,
 } from '../../../../shared/schemas/notifications';
 import { MESSAGES_PAGE_SIZE, useMessages } from '../api/get-messages';
-import type { MessageFilters } from '../api/keys';
+import type { MessageFilters } from '../api/types';
 import type { SentMessage } from '../api/types';
 import { MessageStatusBadge, messageStatusLabel } from './message-status-badge';
 

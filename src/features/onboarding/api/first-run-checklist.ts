@@ -1,13 +1,13 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { FirstRunChecklist } from '../../../../shared/schemas/onboarding';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { onboardingKeys } from './keys';
+import { queryKeys } from '../../../lib/query-keys';
 
 const path = (orgId: string) => `/organizations/${segment(orgId)}/first-run-checklist`;
 
 export const firstRunChecklistQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: onboardingKeys.checklist(orgId),
+    queryKey: queryKeys.onboarding.checklist(orgId),
     queryFn: () =>
       apiClient.get<DataEnvelope<FirstRunChecklist>>(path(orgId)).then((body) => body.data),
   });
@@ -24,6 +24,6 @@ export function useDismissFirstRunChecklist(orgId: string) {
       apiClient
         .put<DataEnvelope<FirstRunChecklist>>(`${path(orgId)}/dismissal`, { dismissed: true })
         .then((body) => body.data),
-    onSuccess: (data) => queryClient.setQueryData(onboardingKeys.checklist(orgId), data),
+    onSuccess: (data) => queryClient.setQueryData(queryKeys.onboarding.checklist(orgId), data),
   });
 }

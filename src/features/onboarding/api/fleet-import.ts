@@ -4,7 +4,7 @@ import type {
   FleetImportResult,
 } from '../../../../shared/schemas/fleet-import';
 import { API_BASE, apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { foreignKeys, onboardingKeys } from './keys';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 const base = (orgId: string) => `/organizations/${segment(orgId)}/fleet-import`;
 
@@ -26,19 +26,11 @@ export const fleetExampleHref = (orgId: string) => `${API_BASE}${base(orgId)}/ex
 export const usePreviewFleetImport = (orgId: string) =>
   useMutation({ mutationFn: (file: File) => previewFleetImport(orgId, file) });
 
-/** After an import: the fleet, the due lists, the last readings and the first-run checklist. */
+/** After an import: the fleet, its readings and due points, and the first-run checklist. */
 export function useCommitFleetImport(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (file: File) => commitFleetImport(orgId, file),
-    onSuccess: () =>
-      Promise.all(
-        [
-          foreignKeys.machines,
-          foreignKeys.due,
-          foreignKeys.latestReadings,
-          onboardingKeys.checklist(orgId),
-        ].map((queryKey) => queryClient.invalidateQueries({ queryKey })),
-      ),
+    onSuccess: () => invalidate(queryClient, changedBy.fleetImport(orgId)),
   });
 }

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { readingKeys } from './keys';
 import type { LatestReadings } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getLatestReadings = (orgId: string, signal?: AbortSignal) =>
   apiClient
@@ -12,7 +12,7 @@ export const getLatestReadings = (orgId: string, signal?: AbortSignal) =>
 
 export const latestReadingsQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: readingKeys.latest(orgId),
+    queryKey: queryKeys.readings.latest(orgId),
     queryFn: ({ signal }) => getLatestReadings(orgId, signal),
   });
 

@@ -1,8 +1,8 @@
-import { useMutation, useQueryClient, type QueryKey } from '@tanstack/react-query';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { segment } from '../../../lib/api-client';
-import { readingKeys } from './keys';
 import { postCsvFile } from './post-csv-file';
 import type { ImportPreviewResponse, ImportResultResponse } from './types';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 /** Checks every row of the file; the server writes nothing. */
 export const previewImport = (orgId: string, file: File) =>
@@ -21,16 +21,11 @@ export const commitImport = (orgId: string, file: File) =>
 export const usePreviewImport = (orgId: string) =>
   useMutation({ mutationFn: (file: File) => previewImport(orgId, file) });
 
-/** `alsoInvalidate`: other features' keys the imported readings change (the due list). */
-export function useCommitImport(orgId: string, options: { alsoInvalidate?: QueryKey[] } = {}) {
+/** New readings move every machine's figures: the fleet, the due points, Log hours. */
+export function useCommitImport(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (file: File) => commitImport(orgId, file),
-    onSuccess: () =>
-      Promise.all(
-        [readingKeys.latest(orgId), ...(options.alsoInvalidate ?? [])].map((queryKey) =>
-          queryClient.invalidateQueries({ queryKey }),
-        ),
-      ),
+    onSuccess: () => invalidate(queryClient, changedBy.readings(orgId)),
   });
 }

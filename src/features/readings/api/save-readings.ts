@@ -1,8 +1,8 @@
-import { useMutation, useQueryClient, type QueryKey } from '@tanstack/react-query';
+import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { BulkReadingsInput } from '../../../../shared/schemas/readings';
 import { apiClient, segment } from '../../../lib/api-client';
-import { readingKeys } from './keys';
 import type { BulkReadingsResponse } from './types';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 /** POST readings/bulk: every reading is written, or none (422 with `readings.<i>.<field>`). */
 export const saveReadings = (orgId: string, input: BulkReadingsInput) =>
@@ -10,16 +10,11 @@ export const saveReadings = (orgId: string, input: BulkReadingsInput) =>
     .post<BulkReadingsResponse>(`/organizations/${segment(orgId)}/readings/bulk`, input)
     .then((body) => body.data);
 
-/** `alsoInvalidate`: other features' keys the new readings change (the due list). */
-export function useSaveReadings(orgId: string, options: { alsoInvalidate?: QueryKey[] } = {}) {
+/** New readings move every machine's figures: the fleet, the due points, Log hours. */
+export function useSaveReadings(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: BulkReadingsInput) => saveReadings(orgId, input),
-    onSuccess: () =>
-      Promise.all(
-        [readingKeys.latest(orgId), ...(options.alsoInvalidate ?? [])].map((queryKey) =>
-          queryClient.invalidateQueries({ queryKey }),
-        ),
-      ),
+    onSuccess: () => invalidate(queryClient, changedBy.readings(orgId)),
   });
 }

@@ -1,5 +1,4 @@
 import { useState, type FormEvent } from 'react';
-import type { QueryKey } from '@tanstack/react-query';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
@@ -33,17 +32,9 @@ function problemOf(error: unknown): Problem {
  * Check a CSV of readings (every row, nothing written), then import it in one go. Importing is
  * offered only when no row has an error; the server checks the whole file again on commit.
  */
-export function ImportReadingsForm({
-  orgId,
-  timeZone,
-  alsoInvalidate,
-}: {
-  orgId: string;
-  timeZone: string;
-  alsoInvalidate?: QueryKey[];
-}) {
+export function ImportReadingsForm({ orgId, timeZone }: { orgId: string; timeZone: string }) {
   const previewCall = usePreviewImport(orgId);
-  const commitCall = useCommitImport(orgId, { alsoInvalidate });
+  const commitCall = useCommitImport(orgId);
   const [file, setFile] = useState<File | null>(null);
   const [inputKey, setInputKey] = useState(0);
   const [preview, setPreview] = useState<ImportPreview | null>(null);

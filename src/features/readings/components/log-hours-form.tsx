@@ -1,6 +1,5 @@
 import { useMemo, useState, type KeyboardEvent } from 'react';
 import { useForm, useWatch, type Path } from 'react-hook-form';
-import type { QueryKey } from '@tanstack/react-query';
 import type { UnitSystem } from '../../../../shared/constants';
 import { bulkReadingsSchema } from '../../../../shared/schemas/readings';
 import { Alert } from '../../../components/ui/alert';
@@ -27,8 +26,6 @@ interface LogHoursFormProps {
   units: UnitSystem;
   items: LatestReading[];
   initialFind?: string;
-  /** the due list and anything else new readings change */
-  alsoInvalidate?: QueryKey[];
 }
 
 const blankEntries = (items: LatestReading[]) =>
@@ -70,9 +67,8 @@ export function LogHoursForm({
   units,
   items,
   initialFind = '',
-  alsoInvalidate,
 }: LogHoursFormProps) {
-  const save = useSaveReadings(orgId, { alsoInvalidate });
+  const save = useSaveReadings(orgId);
   const [find, setFind] = useState(initialFind);
   const [outcome, setOutcome] = useState<{ tone: 'success' | 'error'; text: string } | null>(null);
   const defaultValues = useMemo(() => ({ entries: blankEntries(items) }), [items]);

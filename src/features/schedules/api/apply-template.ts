@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterScheduleChange } from './invalidate-schedule';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { TasksResponse } from './types';
 
 export const applyTemplate = (orgId: string, machineId: string, templateId: string) =>
@@ -18,6 +18,6 @@ export function useApplyTemplate(orgId: string, machineId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (templateId: string) => applyTemplate(orgId, machineId, templateId),
-    onSuccess: () => invalidateAfterScheduleChange(queryClient, orgId, machineId),
+    onSuccess: () => invalidate(queryClient, changedBy.schedule(orgId, machineId)),
   });
 }

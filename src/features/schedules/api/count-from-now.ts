@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterScheduleChange } from './invalidate-schedule';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { TaskResponse, TasksResponse } from './types';
 
 /** "Start counting from now" for one task whose last service is not known. */
@@ -25,6 +25,6 @@ export function useCountFromNow(orgId: string, machineId: string) {
       taskId
         ? countTaskFromNow(orgId, taskId).then((t) => [t])
         : countMachineFromNow(orgId, machineId),
-    onSuccess: () => invalidateAfterScheduleChange(queryClient, orgId, machineId),
+    onSuccess: () => invalidate(queryClient, changedBy.schedule(orgId, machineId)),
   });
 }

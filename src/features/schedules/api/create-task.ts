@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { TaskInput } from '../../../../shared/schemas/schedule';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterScheduleChange } from './invalidate-schedule';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { TaskResponse } from './types';
 
 export const createTask = (orgId: string, machineId: string, input: TaskInput) =>
@@ -16,6 +16,6 @@ export function useCreateTask(orgId: string, machineId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: TaskInput) => createTask(orgId, machineId, input),
-    onSuccess: () => invalidateAfterScheduleChange(queryClient, orgId, machineId),
+    onSuccess: () => invalidate(queryClient, changedBy.schedule(orgId, machineId)),
   });
 }

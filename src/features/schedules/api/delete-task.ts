@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterScheduleChange } from './invalidate-schedule';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 export const deleteTask = (orgId: string, taskId: string) =>
   apiClient.delete(`/organizations/${segment(orgId)}/tasks/${segment(taskId)}`);
@@ -9,6 +9,6 @@ export function useDeleteTask(orgId: string, machineId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (taskId: string) => deleteTask(orgId, taskId),
-    onSuccess: () => invalidateAfterScheduleChange(queryClient, orgId, machineId),
+    onSuccess: () => invalidate(queryClient, changedBy.schedule(orgId, machineId)),
   });
 }

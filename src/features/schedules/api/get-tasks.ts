@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { taskKeys } from './keys';
 import type { TaskList } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getTasks = (orgId: string, machineId: string, signal?: AbortSignal) =>
   apiClient.get<TaskList>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}/tasks`, {
@@ -10,7 +10,7 @@ export const getTasks = (orgId: string, machineId: string, signal?: AbortSignal)
 
 export const tasksQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({
-    queryKey: taskKeys.list(orgId, machineId),
+    queryKey: queryKeys.tasks.machine(orgId, machineId),
     queryFn: ({ signal }) => getTasks(orgId, machineId, signal),
   });
 

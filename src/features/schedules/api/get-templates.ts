@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { MachineCategory } from '../../../../shared/constants';
 import { apiClient, segment } from '../../../lib/api-client';
-import { templateKeys } from './keys';
 import type { ScheduleTemplateList } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getTemplates = (orgId: string, category: MachineCategory, signal?: AbortSignal) =>
   apiClient.get<ScheduleTemplateList>(
@@ -12,7 +12,7 @@ export const getTemplates = (orgId: string, category: MachineCategory, signal?: 
 
 export const templatesQueryOptions = (orgId: string, category: MachineCategory) =>
   queryOptions({
-    queryKey: templateKeys.list(orgId, category),
+    queryKey: queryKeys.scheduleTemplates.list(orgId, category),
     queryFn: ({ signal }) => getTemplates(orgId, category, signal),
     staleTime: 5 * 60_000,
   });

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { LastDoneInput } from '../../../../shared/schemas/schedule';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterScheduleChange } from './invalidate-schedule';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { TaskResponse } from './types';
 
 export const setLastDone = (orgId: string, taskId: string, input: LastDoneInput) =>
@@ -14,6 +14,6 @@ export function useSetLastDone(orgId: string, machineId: string) {
   return useMutation({
     mutationFn: ({ taskId, ...input }: LastDoneInput & { taskId: string }) =>
       setLastDone(orgId, taskId, input),
-    onSuccess: () => invalidateAfterScheduleChange(queryClient, orgId, machineId),
+    onSuccess: () => invalidate(queryClient, changedBy.schedule(orgId, machineId)),
   });
 }

@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { TaskInput } from '../../../../shared/schemas/schedule';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterScheduleChange } from './invalidate-schedule';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 import type { TaskResponse } from './types';
 
 export const updateTask = (orgId: string, taskId: string, input: Partial<TaskInput>) =>
@@ -14,6 +14,6 @@ export function useUpdateTask(orgId: string, machineId: string) {
   return useMutation({
     mutationFn: ({ taskId, ...input }: Partial<TaskInput> & { taskId: string }) =>
       updateTask(orgId, taskId, input),
-    onSuccess: () => invalidateAfterScheduleChange(queryClient, orgId, machineId),
+    onSuccess: () => invalidate(queryClient, changedBy.schedule(orgId, machineId)),
   });
 }

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterService } from './invalidate-after-service';
-import { serviceKeys } from './keys';
 import type { RecordResponse } from './types';
+import { queryKeys } from '../../../lib/query-keys';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 export const cancelServiceRecord = (orgId: string, recordId: string) =>
   apiClient.post<RecordResponse>(
@@ -14,8 +14,11 @@ export function useCancelServiceRecord(orgId: string, machineId: string, recordI
   return useMutation({
     mutationFn: () => cancelServiceRecord(orgId, recordId),
     onSuccess: async (result) => {
-      queryClient.setQueryData(serviceKeys.detail(orgId, recordId), result);
-      await invalidateAfterService(queryClient, orgId, machineId, { completed: false });
+      queryClient.setQueryData(queryKeys.serviceRecords.detail(orgId, recordId), result);
+      await invalidate(
+        queryClient,
+        changedBy.serviceRecord(orgId, machineId, { completed: false }),
+      );
     },
   });
 }

@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { serviceKeys } from './keys';
 import type { DefectList } from '../../../../shared/schemas/defects';
 import type { ActiveDefect } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** The machine's open and in-repair defects, which a visit may close. */
 export const getActiveDefects = (orgId: string, machineId: string, signal?: AbortSignal) =>
@@ -22,7 +22,7 @@ export const getActiveDefects = (orgId: string, machineId: string, signal?: Abor
 
 export const activeDefectsQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({
-    queryKey: serviceKeys.activeDefects(orgId, machineId),
+    queryKey: queryKeys.serviceRecords.activeDefects(orgId, machineId),
     queryFn: ({ signal }) => getActiveDefects(orgId, machineId, signal),
   });
 

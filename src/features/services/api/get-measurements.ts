@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { measurementKeys } from './keys';
 import type { MeasurementName, MeasurementPoint } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 const machinePath = (orgId: string, machineId: string) =>
   `/organizations/${segment(orgId)}/machines/${segment(machineId)}`;
@@ -9,7 +9,7 @@ const machinePath = (orgId: string, machineId: string) =>
 /** The measurements the machine's completed visits carry, for the chart's picker. */
 export const measurementNamesQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({
-    queryKey: measurementKeys.names(orgId, machineId),
+    queryKey: queryKeys.measurements.machine(orgId, machineId),
     queryFn: ({ signal }) =>
       apiClient
         .get<DataEnvelope<MeasurementName[]>>(`${machinePath(orgId, machineId)}/measurements`, {
@@ -24,7 +24,7 @@ export const useMeasurementNames = (orgId: string, machineId: string) =>
 /** One measurement over the visits, oldest first, with its spec limits. */
 export const measurementSeriesQueryOptions = (orgId: string, machineId: string, name: string) =>
   queryOptions({
-    queryKey: measurementKeys.series(orgId, machineId, name),
+    queryKey: queryKeys.measurements.series(orgId, machineId, name),
     queryFn: ({ signal }) =>
       apiClient
         .get<DataEnvelope<MeasurementPoint[]>>(

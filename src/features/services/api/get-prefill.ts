@@ -1,7 +1,7 @@
 import { queryOptions } from '@tanstack/react-query';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { serviceKeys } from './keys';
 import type { Prefill } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** The parts, fluids and estimated labour the given tasks call for (summed by the server). */
 export const getPrefill = (
@@ -19,7 +19,7 @@ export const getPrefill = (
 
 export const prefillQueryOptions = (orgId: string, machineId: string, taskIds: readonly string[]) =>
   queryOptions({
-    queryKey: serviceKeys.prefill(orgId, machineId, [...taskIds].sort()),
+    queryKey: queryKeys.serviceRecords.prefill(orgId, machineId, [...taskIds].sort()),
     queryFn: ({ signal }) => getPrefill(orgId, machineId, taskIds, signal),
     staleTime: 5 * 60_000,
   });

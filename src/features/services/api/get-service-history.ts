@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { serviceKeys } from './keys';
 import type { ServiceHistory } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const HISTORY_PAGE_SIZE = 10;
 
@@ -28,7 +28,7 @@ export const serviceHistoryQueryOptions = (
   filters: { q: string; page: number } = { q: '', page: 1 },
 ) =>
   queryOptions({
-    queryKey: serviceKeys.list(orgId, machineId, filters),
+    queryKey: queryKeys.serviceRecords.list(orgId, machineId, filters),
     queryFn: ({ signal }) => getServiceHistory(orgId, machineId, filters, signal),
     // keep the rows on screen while a search is typed, instead of flashing a skeleton
     placeholderData: keepPreviousData,
@@ -46,7 +46,7 @@ export const useServiceHistory = (
  */
 export const serviceEventsQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({
-    queryKey: [...serviceKeys.machine(orgId, machineId), 'events'] as const,
+    queryKey: queryKeys.serviceRecords.events(orgId, machineId),
     queryFn: ({ signal }) =>
       apiClient
         .get<ServiceHistory>(

@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { serviceKeys } from './keys';
 import type { RecordResponse } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getServiceRecord = (orgId: string, recordId: string, signal?: AbortSignal) =>
   apiClient.get<RecordResponse>(
@@ -11,7 +11,7 @@ export const getServiceRecord = (orgId: string, recordId: string, signal?: Abort
 
 export const serviceRecordQueryOptions = (orgId: string, recordId: string) =>
   queryOptions({
-    queryKey: serviceKeys.detail(orgId, recordId),
+    queryKey: queryKeys.serviceRecords.detail(orgId, recordId),
     queryFn: ({ signal }) => getServiceRecord(orgId, recordId, signal),
   });
 

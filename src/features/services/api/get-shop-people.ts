@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { MemberList } from '../../../../shared/schemas/members';
 import { apiClient, segment } from '../../../lib/api-client';
-import { serviceKeys } from './keys';
 import type { ShopPerson } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** The farm's technicians and managers (from the member list): who can be named on a record. */
 export const getShopPeople = (orgId: string, signal?: AbortSignal) =>
@@ -18,7 +18,7 @@ export const getShopPeople = (orgId: string, signal?: AbortSignal) =>
 
 export const shopPeopleQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: serviceKeys.shopPeople(orgId),
+    queryKey: queryKeys.serviceRecords.shopPeople(orgId),
     queryFn: ({ signal }) => getShopPeople(orgId, signal),
     staleTime: 5 * 60_000,
   });

@@ -1,7 +1,7 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment, type DataEnvelope } from '../../../lib/api-client';
-import { shopWeekKeys } from './keys';
 import type { ShopWeek } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** The shop's week from `start` (a Monday, yyyy-mm-dd), or the server's current week. */
 export const getShopWeek = (orgId: string, start: string | null, signal?: AbortSignal) =>
@@ -14,7 +14,7 @@ export const getShopWeek = (orgId: string, start: string | null, signal?: AbortS
 
 export const shopWeekQueryOptions = (orgId: string, start: string | null) =>
   queryOptions({
-    queryKey: shopWeekKeys.week(orgId, start),
+    queryKey: queryKeys.shopWeek.week(orgId, start),
     queryFn: ({ signal }) => getShopWeek(orgId, start, signal),
     placeholderData: keepPreviousData,
   });

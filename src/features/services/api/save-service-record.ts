@@ -4,9 +4,9 @@ import type {
   ServiceRecordCreateInput,
 } from '../../../../shared/schemas/service-records';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invalidateAfterService } from './invalidate-after-service';
-import { serviceKeys } from './keys';
 import type { RecordWithResets } from './types';
+import { queryKeys } from '../../../lib/query-keys';
+import { changedBy, invalidate } from '../../../lib/invalidation';
 
 export const createServiceRecord = (
   orgId: string,
@@ -42,13 +42,16 @@ export function useSaveServiceRecord(orgId: string, machineId: string) {
         : completeServiceRecord(orgId, input.recordId, input.body),
     onSuccess: async (result) => {
       // the record page opens from the cache at once (the resets travel in the navigation state)
-      queryClient.setQueryData(serviceKeys.detail(orgId, result.data.id), {
+      queryClient.setQueryData(queryKeys.serviceRecords.detail(orgId, result.data.id), {
         data: result.data,
         abilities: result.abilities,
       });
-      await invalidateAfterService(queryClient, orgId, machineId, {
-        completed: result.data.status === 'completed',
-      });
+      await invalidate(
+        queryClient,
+        changedBy.serviceRecord(orgId, machineId, {
+          completed: result.data.status === 'completed',
+        }),
+      );
     },
   });
 }

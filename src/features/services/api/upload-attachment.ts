@@ -1,7 +1,7 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { serviceKeys } from './keys';
 import type { Attachment } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** Uploads a photo or PDF (multipart field `file`): 422 wrong type, 413 too large, both on `file`. */
 export async function uploadAttachment(
@@ -23,7 +23,7 @@ export function useUploadAttachment(orgId: string, recordId: string) {
   return useMutation({
     mutationFn: (file: File) => uploadAttachment(orgId, recordId, file),
     onSuccess: () =>
-      queryClient.invalidateQueries({ queryKey: serviceKeys.detail(orgId, recordId) }),
+      queryClient.invalidateQueries({ queryKey: queryKeys.serviceRecords.detail(orgId, recordId) }),
   });
 }
 
@@ -32,6 +32,6 @@ export function useDeleteAttachment(orgId: string, recordId: string) {
   return useMutation({
     mutationFn: (attachmentId: string) => deleteAttachment(orgId, recordId, attachmentId),
     onSuccess: () =>
-      queryClient.invalidateQueries({ queryKey: serviceKeys.detail(orgId, recordId) }),
+      queryClient.invalidateQueries({ queryKey: queryKeys.serviceRecords.detail(orgId, recordId) }),
   });
 }

@@ -5,14 +5,17 @@ import type {
   EmailChangeInput,
 } from '../../../../shared/schemas/account';
 import { apiClient } from '../../../lib/api-client';
-import { clearSession, sessionKeys } from '../../../lib/auth';
-import { accountKeys } from './keys';
+import { clearSession } from '../../../lib/auth';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getAccount = (signal?: AbortSignal) =>
   apiClient.get<AccountResponse>('/account', { signal }).then((b) => b.data);
 
 export const accountQueryOptions = () =>
-  queryOptions({ queryKey: accountKeys.detail(), queryFn: ({ signal }) => getAccount(signal) });
+  queryOptions({
+    queryKey: queryKeys.account.detail(),
+    queryFn: ({ signal }) => getAccount(signal),
+  });
 
 export const useAccount = () => useQuery(accountQueryOptions());
 
@@ -22,8 +25,8 @@ export function useUpdateAccount() {
     mutationFn: (input: AccountUpdateInput) =>
       apiClient.patch<AccountResponse>('/account', input).then((b) => b.data),
     onSuccess: async (account) => {
-      queryClient.setQueryData(accountKeys.detail(), account);
-      await queryClient.invalidateQueries({ queryKey: sessionKeys.me() });
+      queryClient.setQueryData(queryKeys.account.detail(), account);
+      await queryClient.invalidateQueries({ queryKey: queryKeys.session.me() });
     },
   });
 }
@@ -34,7 +37,7 @@ export function useRequestEmailChange() {
   return useMutation({
     mutationFn: (input: EmailChangeInput) =>
       apiClient.post<AccountResponse>('/account/email', input).then((b) => b.data),
-    onSuccess: (account) => queryClient.setQueryData(accountKeys.detail(), account),
+    onSuccess: (account) => queryClient.setQueryData(queryKeys.account.detail(), account),
   });
 }
 

@@ -1,8 +1,8 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { InvitationCreateInput } from '../../../../shared/schemas/auth';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invitationKeys } from './keys';
 import type { InvitationResponse } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const createInvitation = (orgId: string, input: InvitationCreateInput) =>
   apiClient
@@ -13,6 +13,6 @@ export function useCreateInvitation(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (input: InvitationCreateInput) => createInvitation(orgId, input),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: invitationKeys.list(orgId) }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.invitations.list(orgId) }),
   });
 }

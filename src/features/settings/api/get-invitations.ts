@@ -1,7 +1,7 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invitationKeys } from './keys';
 import type { InvitationListResponse } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const getInvitations = (orgId: string, signal?: AbortSignal) =>
   apiClient
@@ -12,7 +12,7 @@ export const getInvitations = (orgId: string, signal?: AbortSignal) =>
 
 export const invitationsQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: invitationKeys.list(orgId),
+    queryKey: queryKeys.invitations.list(orgId),
     queryFn: ({ signal }) => getInvitations(orgId, signal),
   });
 

@@ -11,8 +11,8 @@ import type {
   OrganizationUpdateInput,
 } from '../../../../shared/schemas/organizations';
 import { apiClient, segment } from '../../../lib/api-client';
-import { meQueryOptions, sessionKeys, type Me } from '../../../lib/auth';
-import { organizationKeys } from './keys';
+import { meQueryOptions, type Me } from '../../../lib/auth';
+import { queryKeys } from '../../../lib/query-keys';
 
 const orgPath = (orgId: string) => `/organizations/${segment(orgId)}`;
 
@@ -25,7 +25,7 @@ export const getOrganization = (orgId: string, signal?: AbortSignal) =>
 
 export const organizationQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: organizationKeys.detail(orgId),
+    queryKey: queryKeys.organizations.detail(orgId),
     queryFn: ({ signal }) => getOrganization(orgId, signal),
   });
 
@@ -38,7 +38,7 @@ export function useCreateOrganization() {
     mutationFn: (input: OrganizationCreateInput) =>
       apiClient.post<OrganizationResponse>('/organizations', input),
     onSuccess: async (created) => {
-      queryClient.setQueryData(organizationKeys.detail(created.data.id), created);
+      queryClient.setQueryData(queryKeys.organizations.detail(created.data.id), created);
       await reloadMe(queryClient);
     },
   });
@@ -51,7 +51,7 @@ export function useUpdateOrganization(orgId: string) {
     mutationFn: (input: OrganizationUpdateInput) =>
       apiClient.patch<OrganizationResponse>(orgPath(orgId), input),
     onSuccess: async (updated) => {
-      queryClient.setQueryData(organizationKeys.detail(orgId), updated);
+      queryClient.setQueryData(queryKeys.organizations.detail(orgId), updated);
       await reloadMe(queryClient);
     },
   });
@@ -64,11 +64,11 @@ export function useDeleteOrganization(orgId: string) {
       apiClient.delete(orgPath(orgId), { body: { confirmName } }),
     onSuccess: () => {
       // Gone from the session at once (no page may open it again), then confirmed by the server.
-      queryClient.setQueryData<Me | null>(sessionKeys.me(), (me) =>
+      queryClient.setQueryData<Me | null>(queryKeys.session.me(), (me) =>
         me ? { ...me, memberships: me.memberships.filter((m) => m.organization.id !== orgId) } : me,
       );
-      queryClient.removeQueries({ queryKey: organizationKeys.detail(orgId) });
-      void queryClient.invalidateQueries({ queryKey: sessionKeys.me() });
+      queryClient.removeQueries({ queryKey: queryKeys.organizations.detail(orgId) });
+      void queryClient.invalidateQueries({ queryKey: queryKeys.session.me() });
     },
   });
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { memberKeys } from './keys';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const removeMembership = (orgId: string, memberId: string) =>
   apiClient.delete(`/organizations/${segment(orgId)}/members/${segment(memberId)}`);
@@ -9,6 +9,6 @@ export function useRemoveMembership(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (memberId: string) => removeMembership(orgId, memberId),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: memberKeys.list(orgId) }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.members.all(orgId) }),
   });
 }

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { invitationKeys } from './keys';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const revokeInvitation = (orgId: string, invitationId: string) =>
   apiClient.delete(`/organizations/${segment(orgId)}/invitations/${segment(invitationId)}`);
@@ -9,6 +9,6 @@ export function useRevokeInvitation(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: (invitationId: string) => revokeInvitation(orgId, invitationId),
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: invitationKeys.list(orgId) }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: queryKeys.invitations.list(orgId) }),
   });
 }

@@ -1,9 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
 import type { MembershipUpdateInput } from '../../../../shared/schemas/auth';
 import { apiClient, segment } from '../../../lib/api-client';
-import { sessionKeys } from '../../../lib/auth';
-import { memberKeys } from './keys';
+
 import type { MemberResponse } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 export const updateMembership = (orgId: string, memberId: string, input: MembershipUpdateInput) =>
   apiClient
@@ -17,9 +17,9 @@ export function useUpdateMembership(orgId: string) {
       updateMembership(orgId, memberId, input),
     onSuccess: () =>
       Promise.all([
-        queryClient.invalidateQueries({ queryKey: memberKeys.list(orgId) }),
+        queryClient.invalidateQueries({ queryKey: queryKeys.members.all(orgId) }),
         // a manager may have changed their own role, which changes their navigation
-        queryClient.invalidateQueries({ queryKey: sessionKeys.me() }),
+        queryClient.invalidateQueries({ queryKey: queryKeys.session.me() }),
       ]),
   });
 }

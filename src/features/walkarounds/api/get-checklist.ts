@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { WalkaroundPurpose } from '../../../../shared/schemas/walkarounds';
 import { apiClient, segment } from '../../../lib/api-client';
-import { walkaroundKeys } from './keys';
 import type { ChecklistResponse } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** The machine's checklist; purpose=use answers 409 tagged_out on a tagged-out machine. */
 export const getChecklist = (
@@ -22,7 +22,7 @@ export const checklistQueryOptions = (
   purpose: WalkaroundPurpose,
 ) =>
   queryOptions({
-    queryKey: walkaroundKeys.checklist(orgId, machineId, purpose),
+    queryKey: queryKeys.walkarounds.checklist(orgId, machineId, purpose),
     queryFn: ({ signal }) => getChecklist(orgId, machineId, purpose, signal),
     // fetched afresh on every visit (someone may have tagged the machine out meanwhile), but
     // not when the phone comes back to the page: the form stays as the operator left it

@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import { walkaroundKeys } from './keys';
 import type { MachineList } from '../../../../shared/schemas/machines';
 import type { PickableMachine } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 // The server answers only the machines the caller may see (an operator: the ones assigned to
 // them, where assignments exist). 200 is the page limit; a yard's walkaround list is far shorter.
@@ -28,7 +28,7 @@ export const getPickableMachines = (orgId: string, signal?: AbortSignal) =>
 
 export const pickableMachinesQueryOptions = (orgId: string) =>
   queryOptions({
-    queryKey: walkaroundKeys.machines(orgId),
+    queryKey: queryKeys.walkarounds.machines(orgId),
     queryFn: ({ signal }) => getPickableMachines(orgId, signal),
   });
 

@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { API_BASE, apiClient, segment } from '../../../lib/api-client';
-import { walkaroundKeys } from './keys';
 import type { MachineDetail } from '../../../../shared/schemas/machines';
 import type { MachineRef } from './types';
+import { queryKeys } from '../../../lib/query-keys';
 
 /** The printable label (SVG, 60 × 76 mm); the cookie session goes along with an <img>. */
 export const labelSvgUrl = (orgId: string, machineId: string, download = false) =>
@@ -25,7 +25,7 @@ export const getLabelMachine = (orgId: string, machineId: string, signal?: Abort
 
 export const labelMachineQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({
-    queryKey: [...walkaroundKeys.all, 'label-machine', orgId, machineId] as const,
+    queryKey: queryKeys.walkarounds.labelMachine(orgId, machineId),
     queryFn: ({ signal }) => getLabelMachine(orgId, machineId, signal),
   });
 

@@ -2,10 +2,11 @@ import { useCallback } from 'react';
 import { useQueryClient } from '@tanstack/react-query';
 import type { WalkaroundCreateInput } from '../../../../shared/schemas/walkarounds';
 import { isApiError } from '../../../lib/api-client';
-import { changedByWalkaround, walkaroundKeys } from '../api/keys';
 import { submitWalkaround } from '../api/submit-walkaround';
 import type { MachineRef, WalkaroundOutcome } from '../api/types';
 import { enqueueWalkaround } from './outbox';
+import { changedBy, invalidate } from '../../../lib/invalidation';
+import { queryKeys } from '../../../lib/query-keys';
 
 export type SendResult =
   | { kind: 'sent'; outcome: WalkaroundOutcome }
@@ -48,12 +49,8 @@ export function useSendWalkaround({
         const outcome = await submitWalkaround(orgId, input);
         onDone();
         // the machine may be tagged out now: its checklist is fetched again on the next visit
-        queryClient.removeQueries({ queryKey: walkaroundKeys.checklists() });
-        void Promise.all(
-          [walkaroundKeys.allMachines(), ...changedByWalkaround].map((queryKey) =>
-            queryClient.invalidateQueries({ queryKey }),
-          ),
-        );
+        queryClient.removeQueries({ queryKey: queryKeys.walkarounds.checklists(orgId) });
+        void invalidate(queryClient, changedBy.walkaround(orgId));
         return { kind: 'sent', outcome };
       } catch (error) {
         if (isApiError(error) && error.code === 'unreachable') return queue();

@@ -1,4 +1,0 @@
-export const devMailKeys = {
-  all: ['dev-mail'] as const,
-  lists: () => [...devMailKeys.all, 'list'] as const,
-};
