@@ -1,7 +1,7 @@
 // The shop's defect list and its counters, filtered on the server; operators see their machines'.
 import { Op, QueryTypes } from 'sequelize';
 import { sequelize } from '../db';
-import { Defect } from '../models';
+import { Defect, Machine } from '../models';
 import type { DefectListQuery, DefectSeverity } from '../../shared/schemas/defects';
 import { hasRole, type OrgAccess } from '../policies/access';
 
@@ -85,4 +85,16 @@ export async function activeDefectCounts(access: OrgAccess, machineId?: string) 
   const counts = { critical: 0, major: 0, minor: 0 };
   for (const r of rows) counts[r.severity] = r.n;
   return counts;
+}
+
+/** The machines of these defects (all of one organization), by id. */
+export async function machinesOfDefects(defects: Defect[]) {
+  if (!defects.length) return new Map<string, Machine>();
+  const machines = await Machine.findAll({
+    where: {
+      organizationId: defects[0].organizationId,
+      id: { [Op.in]: [...new Set(defects.map((d) => d.machineId))] },
+    },
+  });
+  return new Map(machines.map((m) => [m.id, m]));
 }

@@ -149,6 +149,10 @@ async function checkAssignee(access: OrgAccess, userId: string, transaction: Tra
     throw invalid({ assignedTo: 'Assign a technician or manager of this farm' });
 }
 
+/** A defect reported from the machine's page, in its own transaction (see raiseDefect). */
+export const reportDefect = (access: OrgAccess, machine: Machine, input: DefectCreateInput) =>
+  sequelize.transaction((transaction) => raiseDefect(access, machine, input, {}, transaction));
+
 /**
  * Assigns, re-titles, re-grades or moves a defect between open and in repair. Raising it to
  * critical tags the machine out; lowering it never returns the machine to service.

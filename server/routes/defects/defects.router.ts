@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import { Op } from 'sequelize';
 import { z } from 'zod';
 import { route } from '../route';
 import {
@@ -15,16 +14,15 @@ import {
 import { authorize } from '../../policies/access';
 import { canHandleDefects, canReportDefect, defectAbilities } from '../../policies/defect';
 import { loadMachine } from '../../services/machines';
-import { activeDefectCounts, listDefects } from '../../services/defect-list';
+import { activeDefectCounts, listDefects, machinesOfDefects } from '../../services/defect-list';
 import {
   closeDefect,
   loadDefect,
-  raiseDefect,
+  reportDefect,
   taggedOutMessage,
   updateDefect,
 } from '../../services/defects';
-import { sequelize } from '../../db';
-import { Defect, Machine } from '../../models';
+import type { Defect } from '../../models';
 import { presentDefect, presentMachineRef } from '../../presenters/defect';
 import { peopleById } from '../../presenters/people';
 import type { OrgAccess } from '../../policies/access';
@@ -39,13 +37,7 @@ const oneResponse = defectResponseSchema;
 
 async function present(defects: Defect[]) {
   if (!defects.length) return [];
-  const machines = await Machine.findAll({
-    where: {
-      organizationId: defects[0].organizationId,
-      id: { [Op.in]: [...new Set(defects.map((d) => d.machineId))] },
-    },
-  });
-  const machineOf = new Map(machines.map((m) => [m.id, m]));
+  const machineOf = await machinesOfDefects(defects);
   const people = await peopleById(defects.flatMap((d) => [d.reportedBy, d.assignedTo, d.fixedBy]));
   return defects.map((d) => presentDefect(d, machineOf.get(d.machineId)!, people));
 }
@@ -123,9 +115,7 @@ export function defectsRouter(): Router {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
       authorize(canReportDefect(access, machine), `${machine.fleetNumber} is sold`);
-      const { defect } = await sequelize.transaction((transaction) =>
-        raiseDefect(access, machine, body, {}, transaction),
-      );
+      const { defect } = await reportDefect(access, machine, body);
       const taggedOut = machine.status === 'tagged_out';
       return {
         ...(await presentOne(access, defect)),

@@ -2,15 +2,13 @@ import { Router } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
 import { invitationCreateSchema, membershipUpdateSchema } from '../../../shared/schemas/auth';
-import { Invitation, Membership, User } from '../../models';
-import { notFound, invalid } from '../../errors';
+import type { Membership } from '../../models';
 import { authorize } from '../../policies/access';
 import {
   canInviteMembers,
   canListMembers,
   canRemoveMember,
   canUpdateMember,
-  rolesFor,
 } from '../../policies/membership';
 import { presentInvitation, presentMember } from '../../presenters/membership';
 import {
@@ -20,22 +18,18 @@ import {
   memberResponseSchema,
 } from '../../../shared/schemas/members';
 import { inviteMember } from '../../services/accounts';
-import { recordAudit } from '../../infra/audit';
-import { revokePersonalFeeds } from '../../services/calendar';
-import { sequelize } from '../../db';
+import {
+  changeMemberRole,
+  listMembers,
+  loadMember,
+  pendingInvitations,
+  removeMember,
+  withdrawInvitation,
+} from '../../services/members';
 import type { OrgAccess } from '../../policies/access';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const memberParams = orgParams.extend({ id: z.uuid() });
-
-async function findMember(access: OrgAccess, id: string) {
-  const member = await Membership.findOne({
-    where: { id, organizationId: access.organization.id },
-    include: [{ model: User, as: 'user' }],
-  });
-  if (!member) throw notFound('Member');
-  return member;
-}
 
 const abilitiesOf = (access: OrgAccess, m: Membership) => ({
   update: canUpdateMember(access, m),
@@ -55,11 +49,7 @@ export function membersRouter(): Router {
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canListMembers(access));
-      const members = await Membership.findAll({
-        where: { organizationId: access.organization.id },
-        include: [{ model: User, as: 'user' }],
-        order: [[{ model: User, as: 'user' }, 'name', 'ASC']],
-      });
+      const members = await listMembers(access);
       return {
         data: members.map((m) => presentMember(m, abilitiesOf(access, m))),
         abilities: { invite: canInviteMembers(access) },
@@ -77,31 +67,12 @@ export function membersRouter(): Router {
     response: memberResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
-      const member = await findMember(access, params.id);
+      const member = await loadMember(access, params.id);
       authorize(
         canUpdateMember(access, member),
         'Only a manager may change roles, and not their own',
       );
-      if (!rolesFor(access).includes(body.role)) {
-        throw invalid({
-          role: `Role must be one of: ${rolesFor(access).join(', ')} in this organization`,
-        });
-      }
-      await sequelize.transaction(async (transaction) => {
-        const before = member.role;
-        await member.update({ role: body.role }, { transaction });
-        await recordAudit(
-          {
-            organizationId: access.organization.id,
-            actorUserId: access.userId,
-            action: 'membership.update',
-            entityType: 'membership',
-            entityId: member.id,
-            changes: { role: [before, body.role] },
-          },
-          transaction,
-        );
-      });
+      await changeMemberRole(access, member, body.role);
       return { data: presentMember(member, abilitiesOf(access, member)) };
     },
   });
@@ -115,26 +86,12 @@ export function membersRouter(): Router {
     status: 204,
     handler: async ({ req, params }) => {
       const access = req.access!;
-      const member = await findMember(access, params.id);
+      const member = await loadMember(access, params.id);
       authorize(
         canRemoveMember(access, member),
         'Only a manager may remove members, and not themselves',
       );
-      await sequelize.transaction(async (transaction) => {
-        await member.destroy({ transaction });
-        await revokePersonalFeeds(access.organization.id, member.userId, transaction);
-        await recordAudit(
-          {
-            organizationId: access.organization.id,
-            actorUserId: access.userId,
-            action: 'membership.remove',
-            entityType: 'membership',
-            entityId: member.id,
-            changes: { userId: member.userId, role: member.role },
-          },
-          transaction,
-        );
-      });
+      await removeMember(access, member);
     },
   });
 
@@ -148,11 +105,7 @@ export function membersRouter(): Router {
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canInviteMembers(access));
-      const rows = await Invitation.findAll({
-        where: { organizationId: access.organization.id, acceptedAt: null },
-        order: [['createdAt', 'DESC']],
-      });
-      return { data: rows.filter((r) => r.expiresAt > new Date()).map(presentInvitation) };
+      return { data: (await pendingInvitations(access)).map(presentInvitation) };
     },
   });
 
@@ -182,10 +135,7 @@ export function membersRouter(): Router {
     handler: async ({ req, params }) => {
       const access = req.access!;
       authorize(canInviteMembers(access), 'Only a manager may withdraw invitations');
-      const count = await Invitation.destroy({
-        where: { id: params.id, organizationId: access.organization.id, acceptedAt: null },
-      });
-      if (!count) throw notFound('Invitation');
+      await withdrawInvitation(access, params.id);
     },
   });
 

@@ -1,19 +1,15 @@
 import { Router } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
-import { Notification } from '../../models';
-import { notFound } from '../../errors';
 import { authorize } from '../../policies/access';
 import { canViewSentMessages } from '../../policies/reminders';
 import { presentNotification, presentNotificationSummary } from '../../presenters/notification';
 import {
-  NOTIFICATION_STATUSES,
   notificationListQuerySchema,
   sentMessageListResponseSchema,
   sentMessageResponseSchema,
-  type NotificationStatusName,
 } from '../../../shared/schemas/notifications';
-import { sequelize } from '../../db';
+import { listSentMessages, loadSentMessage } from '../../services/sent-messages';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const FORBIDDEN = 'Only a manager may read the messages sent from this organization';
@@ -33,34 +29,7 @@ export function messagesRouter(): Router {
     handler: async ({ req, query }) => {
       const access = req.access!;
       authorize(canViewSentMessages(access), FORBIDDEN);
-      const organizationId = access.organization.id;
-      const where = { organizationId, ...(query.status && { status: query.status }) };
-      const [rows, grouped] = await Promise.all([
-        Notification.findAll({
-          where,
-          attributes: { exclude: ['textBody', 'htmlBody'] },
-          order: [
-            ['createdAt', 'DESC'],
-            ['id', 'ASC'],
-          ],
-          limit: query.pageSize,
-          offset: (query.page - 1) * query.pageSize,
-        }),
-        Notification.findAll({
-          where: { organizationId },
-          attributes: ['status', [sequelize.fn('count', sequelize.col('id')), 'n']],
-          group: ['status'],
-          raw: true,
-        }) as unknown as Promise<{ status: NotificationStatusName; n: string }[]>,
-      ]);
-      const counts = Object.fromEntries(NOTIFICATION_STATUSES.map((s) => [s, 0])) as Record<
-        NotificationStatusName,
-        number
-      >;
-      for (const g of grouped) counts[g.status] = Number(g.n);
-      const total = query.status
-        ? counts[query.status]
-        : Object.values(counts).reduce((a, b) => a + b, 0);
+      const { rows, counts, total } = await listSentMessages(access, query);
       return {
         data: rows.map(presentNotificationSummary),
         meta: { total, page: query.page, pageSize: query.pageSize, counts },
@@ -78,10 +47,7 @@ export function messagesRouter(): Router {
     handler: async ({ req, params }) => {
       const access = req.access!;
       authorize(canViewSentMessages(access), FORBIDDEN);
-      const row = await Notification.findOne({
-        where: { id: params.id, organizationId: access.organization.id },
-      });
-      if (!row) throw notFound('Message');
+      const row = await loadSentMessage(access, params.id);
       return { data: presentNotification(row) };
     },
   });

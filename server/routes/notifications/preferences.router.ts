@@ -1,13 +1,10 @@
 import { Router } from 'express';
-import { Op } from 'sequelize';
 import { z } from 'zod';
 import { route } from '../route';
-import { Machine } from '../../models';
-import { authorize, type OrgAccess } from '../../policies/access';
-import { canViewMachine } from '../../policies/machine';
+import { authorize } from '../../policies/access';
 import { canChooseDigest, canManageFarmFeed, canSetDigestHour } from '../../policies/reminders';
 import { presentPreference } from '../../presenters/notification';
-import { operatorIdsOf } from '../../services/machines';
+import { digestMachineChoices } from '../../services/digest-choices';
 import {
   digestHourOf,
   ownPreference,
@@ -24,22 +21,6 @@ import {
 
 const orgParams = z.object({ orgId: z.uuid() });
 const FARM_ONLY = 'Reminders are for the people of a farm';
-
-/** The machines a person may pick for their digest: those they see, sold ones aside. */
-async function machineChoices(access: OrgAccess) {
-  const machines = await Machine.findAll({
-    where: { organizationId: access.organization.id, status: { [Op.ne]: 'sold' } },
-    attributes: ['id', 'fleetNumber', 'name', 'category', 'organizationId', 'status'],
-    order: [['fleetNumber', 'ASC']],
-  });
-  const operators = await operatorIdsOf(
-    machines.map((m) => m.id),
-    access.organization.id,
-  );
-  return machines
-    .filter((m) => canViewMachine(access, m, operators.get(m.id) ?? []))
-    .map((m) => ({ id: m.id, fleetNumber: m.fleetNumber, name: m.name, category: m.category }));
-}
 
 /** Each person's own digest choices; a manager also sets the farm's digest hour. */
 export function preferencesRouter(): Router {
@@ -59,7 +40,7 @@ export function preferencesRouter(): Router {
       const [preference, digestHour, machines] = await Promise.all([
         ownPreference(access),
         digestHourOf(access.organization.id),
-        machineChoices(access),
+        digestMachineChoices(access),
       ]);
       return {
         data: presentPreference(preference),

@@ -2,8 +2,8 @@ import { Router, type Request, type Response } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
 import { AppError } from '../../errors';
-import { escapeHtml, unsubscribe, verifyUnsubscribeToken } from '../../services/reminders';
-import { Membership, Organization } from '../../models';
+import { escapeHtml, unsubscribe } from '../../services/reminders';
+import { unsubscribeLinkOrganization } from '../../services/unsubscribe-link';
 
 const tokenParams = z.object({
   token: z
@@ -41,14 +41,9 @@ export function unsubscribeRouter(): Router {
     params: tokenParams,
     response: z.object({ data: z.object({ organization: z.string() }) }),
     handler: async ({ req, res, params }) => {
-      const membershipId = verifyUnsubscribeToken(params.token);
-      const membership = membershipId
-        ? await Membership.findByPk(membershipId, {
-            include: [{ model: Organization, as: 'organization' }],
-          })
-        : null;
-      if (!membership?.organization) throw gone();
-      const organization = membership.organization.name;
+      const found = await unsubscribeLinkOrganization(params.token);
+      if (!found) throw gone();
+      const organization = found.name;
       if (!wantsHtml(req)) return { data: { organization } };
       page(
         res,
