@@ -11,7 +11,8 @@ import type {
 } from '../../shared/schemas/walkarounds';
 import type { OrgAccess } from '../policies/access';
 import { recordAudit } from '../infra/audit';
-import { cautionFor, defaultChecklist } from './checklist-defaults';
+import { defaultChecklist } from './checklist-defaults';
+import { cautionFor } from './checklist-items';
 
 // The walkaround checklists: the farm's template of a machine category (one each), else the built-in list.
 

@@ -1,0 +1,143 @@
+// The built-in walkarounds of self-propelled machines: the tractor's follows published daily
+// inspection items (CHECKS.md §5); the others are common practice on the same pattern.
+import type { MachineCategory } from '../../shared/constants';
+import { COMMON_PRACTICE, I, item, type ChecklistDefinition } from './checklist-items';
+
+const TRACTOR: ChecklistDefinition = {
+  name: 'Tractor — daily walkaround',
+  description:
+    'Daily pre-operation walkaround for tractors. The items follow Michigan State University EHS, ' +
+    '"Tractor Daily Inspection Checklist" (fluid levels and leaks, tyres and wheel nuts, battery, ' +
+    'cracked parts, hoses, shields, loose bolts, slow-moving-vehicle emblem, steps, seatbelt, oil ' +
+    'pressure after start, lights and flashers), with OSHA 29 CFR 1928.57 (guards in place, PTO ' +
+    'master shield; stop the engine and wait for all motion to stop before servicing) and 29 CFR ' +
+    '1928.51 (rollover protective structures and seatbelts). Do the checks before starting with ' +
+    "the engine stopped and the key removed. Your operator's manual and local rules come first.",
+  items: [
+    I.engineOil,
+    I.coolant,
+    I.fuel,
+    I.hydraulicOil,
+    I.leaks,
+    I.tyrePressure,
+    I.tyreDamage,
+    I.wheelNuts,
+    I.battery,
+    I.cracked,
+    I.hoses,
+    I.shields,
+    I.ptoShield,
+    I.bolts,
+    I.hitch,
+    I.belts,
+    I.smv,
+    I.steps,
+    I.rops,
+    I.oilPressure,
+    I.lights,
+  ],
+};
+
+const selfPropelledBase = [
+  I.engineOil,
+  I.coolant,
+  I.fuel,
+  I.hydraulicOil,
+  I.leaks,
+  I.tyrePressure,
+  I.wheelNuts,
+  I.battery,
+  I.hoses,
+  I.shields,
+  I.belts,
+  I.steps,
+  I.rops,
+  I.oilPressure,
+  I.lights,
+];
+
+const headerLock = item(
+  'header-lock',
+  'Header lift-cylinder safety lock',
+  'The lock engages; never go under a raised header without it.',
+  { critical: true, hazards: ['raised_load'] },
+);
+
+/** The lists of the self-propelled categories. */
+export const SELF_PROPELLED_CHECKLISTS: Record<
+  Extract<MachineCategory, 'tractor' | 'combine' | 'sprayer' | 'loader' | 'mower' | 'other'>,
+  ChecklistDefinition
+> = {
+  tractor: TRACTOR,
+  combine: {
+    name: 'Combine — daily walkaround',
+    description: `Daily pre-operation walkaround for combines. ${COMMON_PRACTICE}`,
+    items: [
+      ...selfPropelledBase,
+      headerLock,
+      item(
+        'chaff',
+        'Chaff and straw cleared',
+        'Engine compartment, exhaust, bearings and batteries blown clean (fire risk).',
+      ),
+      item('chains', 'Drive chains and feeder house', 'Tension and wear; no broken slats.', {
+        hazards: ['stored_energy'],
+      }),
+      I.extinguisher,
+    ],
+  },
+  sprayer: {
+    name: 'Sprayer — daily walkaround',
+    description: `Daily pre-operation walkaround for self-propelled sprayers. ${COMMON_PRACTICE}`,
+    items: [
+      ...selfPropelledBase,
+      item(
+        'boom-locks',
+        'Boom transport locks and breakaways',
+        'Locks hold in transport; breakaways return.',
+        { critical: true, hazards: ['raised_load', 'hydraulic_pressure'] },
+      ),
+      item('spray-lines', 'Tank, lines and nozzles', 'No leaks or drips of product; lids closed.'),
+      item(
+        'clean-water',
+        'Clean-water tank and protective gear',
+        'Wash-water tank full; gloves and eye protection on board.',
+      ),
+    ],
+  },
+  loader: {
+    name: 'Loader / telehandler — daily walkaround',
+    description: `Daily pre-operation walkaround for loaders and telehandlers. ${COMMON_PRACTICE}`,
+    items: [
+      ...selfPropelledBase,
+      item(
+        'boom-pins',
+        'Boom, attachment and quick-hitch pins',
+        'Every pin and lock in place; the attachment is locked on.',
+        { critical: true, hazards: ['raised_load'] },
+      ),
+      item('load-chart', 'Load chart readable', 'In the cab and legible.'),
+      item('alarm', 'Horn and reverse alarm', 'Both sound.'),
+      I.brakes,
+    ],
+  },
+  mower: {
+    name: 'Mower-conditioner — daily walkaround',
+    description: `Daily pre-operation walkaround for self-propelled mower-conditioners. ${COMMON_PRACTICE}`,
+    items: [
+      ...selfPropelledBase,
+      headerLock,
+      item(
+        'cutterbar',
+        'Cutterbar knives, discs and guards',
+        'None missing, cracked or loose; curtains and guards fitted (thrown objects).',
+        { critical: true, hazards: ['stored_energy'] },
+      ),
+    ],
+  },
+  other: {
+    name: 'Machine — daily walkaround',
+    description: `Daily pre-operation walkaround for self-propelled machines. ${COMMON_PRACTICE}`,
+    items: [...selfPropelledBase, I.extinguisher],
+  },
+};
