@@ -1,6 +1,5 @@
 import type { Router } from 'express';
 import { z } from 'zod';
-import { Op } from 'sequelize';
 import { route } from '../route';
 import {
   bookingCreateSchema,
@@ -8,7 +7,7 @@ import {
   bookingListQuerySchema,
 } from '../../../shared/schemas/dealers';
 import { notFound } from '../../errors';
-import { Organization, type ServiceBooking } from '../../models';
+import type { ServiceBooking } from '../../models';
 import { authorize, type OrgAccess } from '../../policies/access';
 import { canDecideBookings, canListBookings, canProposeBookings } from '../../policies/dealer-link';
 import { presentBookings } from '../../presenters/dealer';
@@ -16,13 +15,9 @@ import {
   bookingResponseSchema,
   bookingsResponseSchema,
 } from '../../../shared/schemas/dealer-responses';
-import {
-  acceptBooking,
-  cancelBooking,
-  declineBooking,
-  listBookings,
-  proposeBooking,
-} from '../../services/bookings';
+import { bookingOrganizationNames, listBookings } from '../../services/bookings';
+import { proposeBooking } from '../../services/booking-proposals';
+import { acceptBooking, cancelBooking, declineBooking } from '../../services/booking-decisions';
 import { orgParams } from './sides';
 
 const bookingParams = orgParams.extend({ bookingId: z.uuid() });
@@ -45,11 +40,8 @@ const abilitiesFor = (access: OrgAccess) => (b: ServiceBooking) => {
 };
 
 async function present(access: OrgAccess, bookings: ServiceBooking[]) {
-  const ids = [...new Set(bookings.flatMap((b) => [b.organizationId, b.dealerOrganizationId]))];
-  const orgs = ids.length
-    ? await Organization.findAll({ where: { id: { [Op.in]: ids } }, attributes: ['id', 'name'] })
-    : [];
-  return presentBookings(bookings, new Map(orgs.map((o) => [o.id, o.name])), abilitiesFor(access));
+  const names = await bookingOrganizationNames(bookings);
+  return presentBookings(bookings, names, abilitiesFor(access));
 }
 
 /** Service bookings: the dealer proposes, the farm manager accepts (planned records) or declines. */
