@@ -12,10 +12,11 @@ import { ListSkeleton } from '../../../components/ui/skeleton';
 import { useCreateTask } from '../api/create-task';
 import { useTasks } from '../api/get-tasks';
 import type { Task } from '../api/types';
+import { emptyTask } from '../lib/task-form-values';
 import { ApplyTemplatePanel } from './apply-template-panel';
 import { HistoryUnknownSummary } from './history-unknown-panel';
 import { TaskCard } from './task-card';
-import { emptyTask, TaskForm } from './task-form';
+import { TaskForm } from './task-form';
 
 interface DueSectionProps {
   orgId: string;

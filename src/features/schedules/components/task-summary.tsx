@@ -1,0 +1,47 @@
+import type { DuePoint } from '../../../../shared/domain/types';
+import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
+import type { Task } from '../api/types';
+import { describeRemaining } from '../lib/task-text';
+
+// The lines of a task card that sum up where the task stands: its due point and its last service.
+
+/** One line of the due point: where and when it falls due, and what is left (the server's figures). */
+export function DueSummary({ due, unit }: { due: DuePoint; unit: string }) {
+  const at = [
+    due.dueMeter !== null ? formatMeter(due.dueMeter, unit) : null,
+    due.effectiveDate ? formatLocalDate(due.effectiveDate) : null,
+  ].filter(Boolean);
+  const remaining = describeRemaining(due.remainingMeter, due.remainingDays, unit);
+  if (!at.length && !remaining) return null;
+  return (
+    <p className="font-bold text-field-900 tabular-nums">
+      {at.length ? `Due ${at.join(' · ')}` : ''}
+      {at.length && remaining ? ' — ' : ''}
+      {remaining ?? ''}
+    </p>
+  );
+}
+
+/** When the task was last done, or what its count starts from when that is not known. */
+export function LastDoneText({ task, unit }: { task: Task; unit: string }) {
+  return (
+    <p className="text-sm text-field-600">
+      Last done:{' '}
+      {task.lastDoneOn || task.lastDoneMeter !== null
+        ? [
+            task.lastDoneMeter !== null ? formatMeter(task.lastDoneMeter, unit) : null,
+            task.lastDoneOn ? formatLocalDate(task.lastDoneOn) : null,
+          ]
+            .filter(Boolean)
+            .join(' on ')
+        : task.countFromOn
+          ? `not known; counting from ${[
+              task.countFromMeter !== null ? formatMeter(task.countFromMeter, unit) : null,
+              formatLocalDate(task.countFromOn),
+            ]
+              .filter(Boolean)
+              .join(' on ')}`
+          : 'not recorded'}
+    </p>
+  );
+}
