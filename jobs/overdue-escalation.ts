@@ -3,14 +3,14 @@ import type { OrgAccess } from '../server/policies/access';
 import { dueList, type DueRow } from '../server/services/due-list';
 import { queueMessage } from '../server/infra/mailer';
 import { taskFacts } from '../server/services/digest';
+import { farmsForReminders } from '../server/services/reminders';
 import {
   appLinks,
   cautionLine,
   emailFrame,
   escapeHtml,
-  farmsForReminders,
   SAFETY_LINE,
-} from '../server/services/reminders';
+} from '../server/services/reminder-mail';
 import { withJobLock } from './lock';
 
 /** The outbox period of an overdue alert: the due point itself, so it is sent once per due point. */

@@ -1,16 +1,14 @@
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../server/db';
 import { queueMessage } from '../server/infra/mailer';
+import { farmsForReminders, localClock, type ReminderFarm } from '../server/services/reminders';
 import {
   appLinks,
   emailFrame,
   escapeHtml,
-  farmsForReminders,
   formatIsoDate,
   formatNumber,
-  localClock,
-  type ReminderFarm,
-} from '../server/services/reminders';
+} from '../server/services/reminder-mail';
 import { todayIso } from '../shared/domain';
 import { localDaysSince, staleCutoff } from '../server/services/stale-meters';
 import { loadJobSchedule } from './schedule';

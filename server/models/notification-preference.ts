@@ -8,7 +8,7 @@ import {
 import { sequelize } from '../db';
 import type { DigestFrequency } from '../../shared/schemas/notifications';
 
-/** One member's due-digest choices; no row means the role's default (see services/reminders). */
+/** One member's due-digest choices; no row means the role's default (see services/digest-preferences). */
 export class NotificationPreference extends Model<
   InferAttributes<NotificationPreference>,
   InferCreationAttributes<NotificationPreference>

@@ -6,7 +6,7 @@ import type {
   SentMessage,
   SentMessageDetail,
 } from '../../shared/schemas/notifications';
-import type { EffectivePreference } from '../services/reminders';
+import type { EffectivePreference } from '../services/digest-preferences';
 import { feedUrl } from '../services/calendar';
 
 export function presentNotificationSummary(n: Notification): SentMessage {

@@ -15,7 +15,8 @@ import { addDaysIso } from '../../shared/domain';
 import type { CalendarFeedScope } from '../../shared/schemas/notifications';
 import { dueList, type DueRow } from './due-list';
 import { taskFacts } from './digest';
-import { appLinks, cautionLine, effectivePreference } from './reminders';
+import { effectivePreference } from './digest-preferences';
+import { appLinks, cautionLine } from './reminder-mail';
 import { hashToken } from '../infra/tokens';
 
 const NO_USER = '00000000-0000-0000-0000-000000000000';

@@ -7,23 +7,19 @@ import { addDaysIso } from '../../shared/domain';
 import { DIGEST_HORIZON_DAYS } from '../../shared/schemas/notifications';
 import { dueList, type DueRow } from './due-list';
 import { queueMessage } from '../infra/mailer';
+import { farmsForReminders, localClock, type ReminderFarm } from './reminders';
+import { digestPeriod, effectivePreference, type EffectivePreference } from './digest-preferences';
+import { unsubscribeToken } from './unsubscribe-tokens';
 import {
   appLinks,
   cautionLine,
-  digestPeriod,
-  effectivePreference,
   emailFrame,
   escapeHtml,
-  farmsForReminders,
   formatIsoDate,
   formatNumber,
-  localClock,
   SAFETY_LINE,
   unsubscribeHeaders,
-  unsubscribeToken,
-  type EffectivePreference,
-  type ReminderFarm,
-} from './reminders';
+} from './reminder-mail';
 
 export type DigestSection = 'overdue' | 'due_soon' | 'coming_up';
 

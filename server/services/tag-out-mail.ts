@@ -4,7 +4,7 @@
 import type { Transaction } from 'sequelize';
 import { Membership, User, type Machine, type Organization } from '../models';
 import { queueMessage } from '../infra/mailer';
-import { appLinks, emailFrame, escapeHtml, SAFETY_LINE } from './reminders';
+import { appLinks, emailFrame, escapeHtml, SAFETY_LINE } from './reminder-mail';
 
 export const TAG_OUT_MAIL_KIND = 'tag_out';
 const SHOP_ROLES = ['manager', 'technician'] as const;

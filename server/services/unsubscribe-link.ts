@@ -1,5 +1,5 @@
 import { Membership, Organization } from '../models';
-import { verifyUnsubscribeToken } from './reminders';
+import { verifyUnsubscribeToken } from './unsubscribe-tokens';
 
 /** The organization an unsubscribe link's membership belongs to, or null (bad link, ended). */
 export async function unsubscribeLinkOrganization(token: string) {

@@ -10,7 +10,8 @@ import {
 } from '../support/factories';
 import { MachineOperator, Notification, NotificationPreference } from '../../server/models';
 import { queueMessage } from '../../server/infra/mailer';
-import { digestHourOf, unsubscribeToken } from '../../server/services/reminders';
+import { digestHourOf } from '../../server/services/reminders';
+import { unsubscribeToken } from '../../server/services/unsubscribe-tokens';
 
 const app = createApp();
 

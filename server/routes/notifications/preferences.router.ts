@@ -5,12 +5,8 @@ import { authorize } from '../../policies/access';
 import { canChooseDigest, canManageFarmFeed, canSetDigestHour } from '../../policies/reminders';
 import { presentPreference } from '../../presenters/notification';
 import { digestMachineChoices } from '../../services/digest-choices';
-import {
-  digestHourOf,
-  ownPreference,
-  saveOwnPreference,
-  setDigestHour,
-} from '../../services/reminders';
+import { digestHourOf, setDigestHour } from '../../services/reminders';
+import { ownPreference, saveOwnPreference } from '../../services/digest-preferences';
 import {
   notificationPreferenceSchema,
   preferenceResponseSchema,

@@ -2,7 +2,8 @@ import { Router, type Request, type Response } from 'express';
 import { z } from 'zod';
 import { route } from '../route';
 import { AppError } from '../../errors';
-import { escapeHtml, unsubscribe } from '../../services/reminders';
+import { unsubscribe } from '../../services/unsubscribe-tokens';
+import { escapeHtml } from '../../services/reminder-mail';
 import { unsubscribeLinkOrganization } from '../../services/unsubscribe-link';
 
 const tokenParams = z.object({

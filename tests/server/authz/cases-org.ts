@@ -1,7 +1,7 @@
 // How the matrix calls the routes around the farm's work: accounts and sign-in, the team,
 // messages and reminders, calendar feeds.
 import { feedToken } from '../../../server/services/calendar';
-import { unsubscribeToken } from '../../../server/services/reminders';
+import { unsubscribeToken } from '../../../server/services/unsubscribe-tokens';
 import { TEST_PASSWORD } from '../../support/factories';
 import { onFarm, type Case, type Ctx } from './cases-fleet';
 import { freshFeed, freshInvitation, freshMember, freshResetToken } from './fresh';
