@@ -1,119 +1,229 @@
-import { useId } from 'react';
-import type { UseFormRegisterReturn } from 'react-hook-form';
-import { TZDate } from '@date-fns/tz';
-import { format } from 'date-fns';
-import { cx } from '../../../components/ui/cx';
+import { useState } from 'react';
+import type { UnitSystem } from '../../../../shared/constants';
+import { useForm } from 'react-hook-form';
+import { zodResolver } from '@hookform/resolvers/zod';
+import { Alert } from '../../../components/ui/alert';
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { TextField } from '../../../components/ui/field';
 import { Icon } from '../../../components/ui/icons';
-import { MachineStatusBadge } from '../../../components/ui/status-badges';
-import { fromDateTimeLocalValue, meterUnitLabel } from '../../../lib/fleet-format';
-import type { LatestReading } from '../api/types';
-import { LastReading } from './last-reading';
+import { isApiError } from '../../../lib/api-client';
+import { formatDateTime } from '../../../lib/format';
+import {
+  formatMeter,
+  fromDateTimeLocalValue,
+  toDateTimeLocalValue,
+} from '../../../lib/fleet-format';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { meterValueAs } from '../../../lib/meter-input';
+import { useCorrectReading } from '../api/correct-reading';
+import { useDeleteReading } from '../api/delete-reading';
+import type { MeterReplacement, Reading } from '../api/types';
+import { readingFormSchema } from '../lib/reading-form-schema';
+
+const SOURCE_LABELS: Record<Reading['source'], string> = {
+  manual: 'Entered',
+  walkaround: 'Walkaround',
+  import: 'Imported',
+  service: 'Service',
+  telematics: 'Telematics',
+};
 
 interface ReadingRowProps {
-  item: LatestReading;
+  orgId: string;
+  machineId: string;
+  reading: Reading;
+  /** a meter replacement between this reading and the previous one */
+  replacementBefore: MeterReplacement | null;
+  unit: string;
+  units: UnitSystem;
   timeZone: string;
-  valueField: UseFormRegisterReturn;
-  timeField: UseFormRegisterReturn;
-  /** the typed time, for the collapsed summary */
-  timeValue: string;
-  maxTime: string;
-  valueError?: string;
-  timeError?: string;
-  hidden: boolean;
+  canCorrect: boolean;
 }
 
-/** One machine on the log-hours screen: what it read last, and the new reading to enter. */
 export function ReadingRow({
-  item,
+  orgId,
+  machineId,
+  reading,
+  replacementBefore,
+  unit,
+  units,
   timeZone,
-  valueField,
-  timeField,
-  timeValue,
-  maxTime,
-  valueError,
-  timeError,
-  hidden,
+  canCorrect,
 }: ReadingRowProps) {
-  const id = useId();
-  const { machine } = item;
-  const unitLabel = meterUnitLabel(machine.meterUnit);
-  const instant = timeValue ? fromDateTimeLocalValue(timeValue, timeZone) : null;
-  const timeSummary = instant
-    ? format(new TZDate(new Date(instant).getTime(), timeZone), 'd MMM, HH:mm')
-    : 'now';
+  const [editing, setEditing] = useState(false);
+  const [confirmingDelete, setConfirmingDelete] = useState(false);
+  const remove = useDeleteReading(orgId, machineId);
+  const when = formatDateTime(reading.takenAt, timeZone);
+  const shown = formatMeter(reading.value, unit);
+  const lifetimeDiffers = Math.abs(reading.lifetimeValue - reading.value) > 1e-9;
 
   return (
-    <li
-      hidden={hidden}
-      className={cx(
-        'grid gap-3 p-4 sm:grid-cols-[minmax(0,1fr)_15rem] sm:items-start lg:grid-cols-[minmax(0,1fr)_20rem]',
-        machine.status === 'tagged_out' && 'bg-poppy-50/50',
-      )}
-    >
-      <div className="flex min-w-0 flex-col gap-1">
-        <p className="flex flex-wrap items-center gap-2">
-          <span className="font-black text-field-950">{machine.fleetNumber}</span>
-          <span className="text-field-800">{machine.name}</span>
-          {machine.status === 'tagged_out' ? <MachineStatusBadge status="tagged_out" /> : null}
-        </p>
-        <p className="text-field-700">
-          <span className="text-field-600">Last: </span>
-          <LastReading reading={item.lastReading} unit={machine.meterUnit} timeZone={timeZone} />
-        </p>
-        <details className="group mt-1" open={Boolean(timeError) || undefined}>
-          <summary className="inline-flex min-h-touch cursor-pointer items-center gap-1.5 rounded-lg text-field-700 hover:text-field-950">
-            <Icon name="clock" className="size-4" />
-            <span>
-              Time taken: <span className="font-bold">{timeSummary}</span>
+    <>
+      <li className="flex flex-col gap-2 p-3 sm:flex-row sm:items-center">
+        <div className="flex min-w-0 flex-1 flex-col">
+          <span className="text-lg font-black text-field-950 tabular-nums">{shown}</span>
+          {lifetimeDiffers ? (
+            <span className="text-sm text-field-700">
+              Lifetime {formatMeter(reading.lifetimeValue, unit)}
             </span>
-          </summary>
-          <div className="mt-2 max-w-xs">
-            <TextField
-              label={`${machine.fleetNumber} time taken`}
-              type="datetime-local"
-              max={maxTime}
-              hint={`Farm time (${timeZone}). Leave empty for now.`}
-              error={timeError}
-              {...timeField}
-            />
-          </div>
-        </details>
-      </div>
-      <div className="flex flex-col gap-1.5">
-        <label htmlFor={`${id}-value`} className="font-bold text-field-900">
-          {machine.fleetNumber} reading
-        </label>
-        <div className="flex max-w-64 items-center gap-2">
-          <input
-            id={`${id}-value`}
-            type="text"
-            inputMode="decimal"
-            autoComplete="off"
-            enterKeyHint="next"
-            data-reading-input=""
-            aria-invalid={valueError ? true : undefined}
-            aria-describedby={cx(`${id}-unit`, valueError ? `${id}-error` : null)}
-            className={cx(
-              'min-h-touch w-full rounded-lg border bg-white px-3 py-2 text-lg text-field-950 tabular-nums',
-              valueError ? 'border-2 border-poppy-600' : 'border-field-300 hover:border-field-500',
-            )}
-            {...valueField}
-          />
-          <span id={`${id}-unit`} className="min-w-12 text-field-700">
-            {unitLabel}
+          ) : null}
+          <span className="flex flex-wrap items-center gap-2 text-sm text-field-600">
+            <time dateTime={reading.takenAt}>{when}</time>
+            <Badge>{SOURCE_LABELS[reading.source] ?? reading.source}</Badge>
           </span>
         </div>
-        {valueError ? (
-          <p
-            id={`${id}-error`}
-            className="flex items-start gap-1.5 text-sm font-bold text-poppy-700"
-          >
-            <Icon name="error" className="mt-0.5 size-4" />
-            <span>{valueError}</span>
-          </p>
+        {canCorrect && !editing ? (
+          <div className="flex gap-2">
+            <Button
+              variant="secondary"
+              aria-label={`Correct ${shown} of ${when}`}
+              onClick={() => setEditing(true)}
+            >
+              Correct
+            </Button>
+            <Button
+              variant="ghost"
+              icon="trash"
+              aria-label={`Delete ${shown} of ${when}`}
+              onClick={() => setConfirmingDelete(true)}
+            >
+              Delete
+            </Button>
+          </div>
         ) : null}
+      </li>
+      {editing ? (
+        <li className="bg-oat-50 p-3">
+          <CorrectReadingForm
+            orgId={orgId}
+            machineId={machineId}
+            reading={reading}
+            unit={unit}
+            units={units}
+            timeZone={timeZone}
+            onDone={() => setEditing(false)}
+          />
+        </li>
+      ) : null}
+      {replacementBefore ? (
+        <li className="flex items-start gap-2 bg-sky-50 p-3 text-sky-900">
+          <Icon name="refresh" className="mt-0.5 size-5" />
+          <span>
+            <span className="font-bold">Meter replaced</span>{' '}
+            {formatDateTime(replacementBefore.replacedAt, timeZone)}: old meter ended at{' '}
+            {formatMeter(replacementBefore.oldFinalValue, unit)}, new meter started at{' '}
+            {formatMeter(replacementBefore.newStartValue, unit)}.
+            {replacementBefore.note ? ` ${replacementBefore.note}` : ''}
+          </span>
+        </li>
+      ) : null}
+      <ConfirmDialog
+        open={confirmingDelete}
+        title="Delete this reading?"
+        confirmLabel="Delete reading"
+        pending={remove.isPending}
+        error={
+          remove.error
+            ? isApiError(remove.error)
+              ? remove.error.message
+              : 'Could not delete the reading. Try again.'
+            : null
+        }
+        onCancel={() => {
+          setConfirmingDelete(false);
+          remove.reset();
+        }}
+        onConfirm={() => remove.mutate(reading.id, { onSuccess: () => setConfirmingDelete(false) })}
+      >
+        {shown} of {when} leaves the history, and the usage estimate and due dates are worked out
+        again without it. The deletion is recorded in the audit log.
+      </ConfirmDialog>
+    </>
+  );
+}
+
+function CorrectReadingForm({
+  orgId,
+  machineId,
+  reading,
+  unit,
+  units,
+  timeZone,
+  onDone,
+}: {
+  orgId: string;
+  machineId: string;
+  reading: Reading;
+  unit: string;
+  units: UnitSystem;
+  timeZone: string;
+  onDone: () => void;
+}) {
+  const correct = useCorrectReading(orgId, machineId);
+  const [formError, setFormError] = useState<string | null>(null);
+  const initial = {
+    value: reading.value,
+    takenAt: toDateTimeLocalValue(reading.takenAt, timeZone),
+  };
+  const {
+    register,
+    handleSubmit,
+    setError,
+    formState: { errors, isSubmitting },
+  } = useForm({ resolver: zodResolver(readingFormSchema), defaultValues: initial });
+
+  const submit = handleSubmit(async (values) => {
+    setFormError(null);
+    const takenAt = fromDateTimeLocalValue(values.takenAt, timeZone);
+    if (!takenAt) {
+      setError('takenAt', { message: 'Enter a date and time' });
+      return;
+    }
+    try {
+      // only what changed: an untouched time keeps its seconds (the field shows minutes)
+      await correct.mutateAsync({
+        readingId: reading.id,
+        ...(values.value !== initial.value && { value: values.value }),
+        ...(values.takenAt !== initial.takenAt && { takenAt }),
+      });
+      onDone();
+    } catch (error) {
+      setFormError(applyServerErrors(error, setError, ['value', 'takenAt']));
+    }
+  });
+
+  return (
+    <form onSubmit={submit} noValidate aria-label="Correct reading" className="flex flex-col gap-3">
+      {formError ? <Alert>{formError}</Alert> : null}
+      <div className="grid gap-3 sm:grid-cols-2">
+        <TextField
+          label="Corrected meter reading"
+          hint={`As the meter showed it (${unit})`}
+          type="text"
+          inputMode="decimal"
+          autoComplete="off"
+          autoFocus
+          error={errors.value?.message}
+          {...register('value', meterValueAs(units))}
+        />
+        <TextField
+          label="Corrected time taken"
+          hint={`Farm time (${timeZone})`}
+          type="datetime-local"
+          error={errors.takenAt?.message}
+          {...register('takenAt')}
+        />
       </div>
-    </li>
+      <div className="flex flex-col gap-2 sm:flex-row">
+        <Button type="submit" pending={isSubmitting}>
+          Save correction
+        </Button>
+        <Button variant="secondary" onClick={onDone}>
+          Cancel
+        </Button>
+      </div>
+    </form>
   );
 }
