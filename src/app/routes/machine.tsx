@@ -9,11 +9,14 @@ import { Icon } from '../../components/ui/icons';
 import { PageHeader } from '../../components/ui/page-header';
 import { PageSkeleton } from '../../components/ui/skeleton';
 import { machineQueryOptions, useMachine } from '../../features/machines/api/get-machine';
-import { readingsQueryOptions } from '../../features/machines/api/get-readings';
 import { MachineDetails } from '../../features/machines/components/machine-details';
 import { MachineStatusPanel } from '../../features/machines/components/machine-status-panel';
 import { MeterSection } from '../../features/machines/components/meter-section';
-import { ReadingsSection } from '../../features/machines/components/readings-section';
+import {
+  machineReadingsQueryOptions,
+  useMachineReadings,
+} from '../../features/readings/api/get-machine-readings';
+import { ReadingsSection } from '../../features/readings/components/readings-section';
 import { tasksQueryOptions, useTasks } from '../../features/schedules/api/get-tasks';
 import { DueSection } from '../../features/schedules/components/due-section';
 import {
@@ -36,7 +39,7 @@ export const machineLoader =
     // start them all at once; the page shows each part as it arrives
     void queryClient.prefetchQuery(machineQueryOptions(orgId, machineId));
     void queryClient.prefetchQuery(tasksQueryOptions(orgId, machineId));
-    void queryClient.prefetchQuery(readingsQueryOptions(orgId, machineId));
+    void queryClient.prefetchQuery(machineReadingsQueryOptions(orgId, machineId));
     void queryClient.prefetchQuery(serviceHistoryQueryOptions(orgId, machineId));
     void queryClient.prefetchQuery(serviceEventsQueryOptions(orgId, machineId));
     return null;
@@ -59,6 +62,7 @@ export function MachinePage() {
   const timeZone = organization.timeZone;
   const machine = useMachine(orgId, machineId);
   const tasks = useTasks(orgId, machineId);
+  const readings = useMachineReadings(orgId, machineId);
   const dues = useMemo(
     () =>
       (tasks.data?.data ?? []).flatMap((task) =>
@@ -200,7 +204,7 @@ export function MachinePage() {
         <div id="meter" className="scroll-mt-20">
           <Section title="Meter" description="Lifetime meter over time and the trend ahead.">
             <MeterSection
-              orgId={orgId}
+              readings={readings}
               machine={detail}
               dues={dues}
               services={serviceEvents.data}
@@ -224,6 +228,7 @@ export function MachinePage() {
               orgId={orgId}
               machine={detail}
               abilities={abilities}
+              units={organization.units}
               timeZone={timeZone}
             />
           </Section>

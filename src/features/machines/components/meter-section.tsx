@@ -3,8 +3,8 @@ import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
 import { Skeleton } from '../../../components/ui/skeleton';
 import { Card } from '../../../components/ui/card';
-import { useReadings } from '../api/get-readings';
-import type { MachineDetail } from '../api/types';
+import type { UseQueryResult } from '@tanstack/react-query';
+import type { MachineDetail, ReadingHistory } from '../api/types';
 
 // recharts is most of the bundle's weight: it loads only when a machine page shows a chart, so the
 // fleet list and the log-hours screen stay light on a phone.
@@ -21,13 +21,14 @@ function ChartSkeleton({ label }: { label: string }) {
 
 /** The "Meter" section: the chart of the machine's readings, or why there is none. */
 export function MeterSection({
-  orgId,
+  readings,
   machine,
   dues,
   services,
   timeZone,
 }: {
-  orgId: string;
+  /** the machine's readings (the page fetches them: they belong to the readings feature) */
+  readings: UseQueryResult<ReadingHistory>;
   machine: MachineDetail['data'];
   /** the next due meter of each task (from the schedule), for the reference lines */
   dues: { taskName: string; dueMeter: number }[];
@@ -35,7 +36,6 @@ export function MeterSection({
   services?: { performedOn: string; meter: number; label: string }[];
   timeZone: string;
 }) {
-  const readings = useReadings(orgId, machine.id);
   if (readings.isPending) {
     return <ChartSkeleton label="Loading the meter chart" />;
   }

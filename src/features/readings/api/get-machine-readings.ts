@@ -12,11 +12,11 @@ export const getReadings = (orgId: string, machineId: string, signal?: AbortSign
     { signal },
   );
 
-export const readingsQueryOptions = (orgId: string, machineId: string) =>
+export const machineReadingsQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({
     queryKey: queryKeys.readings.machine(orgId, machineId),
     queryFn: ({ signal }) => getReadings(orgId, machineId, signal),
   });
 
-export const useReadings = (orgId: string, machineId: string) =>
-  useQuery(readingsQueryOptions(orgId, machineId));
+export const useMachineReadings = (orgId: string, machineId: string) =>
+  useQuery(machineReadingsQueryOptions(orgId, machineId));

@@ -1,4 +1,4 @@
-// The JSON of the log-hours and import endpoints, typed by the zod schemas the server checks
+// The JSON of the reading endpoints (a machine's history, Log hours, import), typed by the zod schemas the server checks
 // its answers against (shared/schemas/readings.ts).
 export type {
   BulkReadingOutcome,
@@ -10,4 +10,10 @@ export type {
   ImportResultResponse,
   LatestReading,
   LatestReadings,
+  MeterReplacement,
+  MeterReplacementResponse,
+  Reading,
+  ReadingHistory,
+  ReadingLogged,
+  ReadingResponse,
 } from '../../../../shared/schemas/readings';

@@ -10,7 +10,7 @@ import { fromDateTimeLocalValue, toDateTimeLocalValue } from '../../../lib/fleet
 import { useSaveReadings } from '../api/save-readings';
 import type { LatestReading } from '../api/types';
 import { parseMeterInput } from '../../../lib/meter-input';
-import { ReadingRow } from './reading-row';
+import { LogHoursRow } from './log-hours-row';
 
 interface Entry {
   value: string;
@@ -185,7 +185,7 @@ export function LogHoursForm({
         {items.map((item) => {
           const id = item.machine.id;
           return (
-            <ReadingRow
+            <LogHoursRow
               key={id}
               item={item}
               timeZone={timeZone}

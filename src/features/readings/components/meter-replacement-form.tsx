@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import type { UnitSystem } from '../../../../shared/constants';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { z } from 'zod';
@@ -8,13 +9,13 @@ import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { TextareaField } from '../../../components/ui/textarea-field';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { meterValueAs } from '../../../lib/meter-input';
 import {
   formatMeter,
   fromDateTimeLocalValue,
   toDateTimeLocalValue,
 } from '../../../lib/fleet-format';
 import { useRecordMeterReplacement } from '../api/record-meter-replacement';
-import { meterNumber } from '../lib/reading-form-schema';
 
 // As the server's schema, with the time as the farm's wall-clock text until submit.
 const formSchema = meterReplacementSchema.extend({
@@ -26,12 +27,14 @@ export function MeterReplacementForm({
   orgId,
   machineId,
   unit,
+  units,
   timeZone,
   onDone,
 }: {
   orgId: string;
   machineId: string;
   unit: string;
+  units: UnitSystem;
   timeZone: string;
   onDone: (message: string) => void;
 }) {
@@ -93,22 +96,20 @@ export function MeterReplacementForm({
         <TextField
           label="Old meter final value"
           hint={`The last figure the old meter showed (${unit})`}
-          type="number"
+          type="text"
           inputMode="decimal"
-          step="any"
-          min={0}
+          autoComplete="off"
           error={errors.oldFinalValue?.message}
-          {...register('oldFinalValue', meterNumber)}
+          {...register('oldFinalValue', meterValueAs(units))}
         />
         <TextField
           label="New meter start value"
           hint={`What the new meter showed when fitted (${unit})`}
-          type="number"
+          type="text"
           inputMode="decimal"
-          step="any"
-          min={0}
+          autoComplete="off"
           error={errors.newStartValue?.message}
-          {...register('newStartValue', meterNumber)}
+          {...register('newStartValue', meterValueAs(units))}
         />
         <TextField
           label="Replaced at"

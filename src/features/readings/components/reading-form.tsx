@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import type { UnitSystem } from '../../../../shared/constants';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Alert } from '../../../components/ui/alert';
@@ -11,21 +12,24 @@ import {
   toDateTimeLocalValue,
 } from '../../../lib/fleet-format';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { meterValueAs } from '../../../lib/meter-input';
 import { useLogReading } from '../api/log-reading';
 import type { Reading } from '../api/types';
-import { meterNumber, readingFormSchema } from '../lib/reading-form-schema';
+import { readingFormSchema } from '../lib/reading-form-schema';
 
 interface ReadingFormProps {
   orgId: string;
   machineId: string;
   unit: string;
+  /** the farm's units: how a typed comma is read */
+  units: UnitSystem;
   timeZone: string;
   /** the newest reading, as the meter showed it, for the hint */
   latest: Reading | null;
 }
 
 /** "Log a reading": the meter as it shows now, optionally when it was read. */
-export function ReadingForm({ orgId, machineId, unit, timeZone, latest }: ReadingFormProps) {
+export function ReadingForm({ orgId, machineId, unit, units, timeZone, latest }: ReadingFormProps) {
   const log = useLogReading(orgId, machineId);
   const [formError, setFormError] = useState<string | null>(null);
   const [notice, setNotice] = useState<{ tone: 'success' | 'info'; text: string } | null>(null);
@@ -77,13 +81,12 @@ export function ReadingForm({ orgId, machineId, unit, timeZone, latest }: Readin
               ? `As the meter shows it (${unit}). Last: ${formatMeter(latest.value, unit)} on ${formatDateTime(latest.takenAt, timeZone)}.`
               : `As the meter shows it (${unit}).`
           }
-          type="number"
+          type="text"
           inputMode="decimal"
-          step="any"
-          min={0}
+          autoComplete="off"
           className="text-lg font-bold"
           error={errors.value?.message}
-          {...register('value', meterNumber)}
+          {...register('value', meterValueAs(units))}
         />
         <TextField
           label="Time taken"

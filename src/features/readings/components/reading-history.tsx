@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import type { UnitSystem } from '../../../../shared/constants';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import type { MeterReplacement, Reading } from '../api/types';
@@ -13,6 +14,7 @@ export function ReadingHistory({
   readings,
   replacements,
   unit,
+  units,
   timeZone,
   canCorrect,
 }: {
@@ -21,6 +23,7 @@ export function ReadingHistory({
   readings: Reading[];
   replacements: MeterReplacement[];
   unit: string;
+  units: UnitSystem;
   timeZone: string;
   canCorrect: boolean;
 }) {
@@ -47,6 +50,7 @@ export function ReadingHistory({
             reading={reading}
             replacementBefore={replacementBetween(replacements, reading, readings[index + 1])}
             unit={unit}
+            units={units}
             timeZone={timeZone}
             canCorrect={canCorrect}
           />

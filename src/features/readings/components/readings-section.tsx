@@ -4,8 +4,9 @@ import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { ErrorState } from '../../../components/ui/error-state';
 import { ListSkeleton } from '../../../components/ui/skeleton';
-import { useReadings } from '../api/get-readings';
-import type { MachineAbilities, MachineDetail } from '../api/types';
+import type { UnitSystem } from '../../../../shared/constants';
+import type { MachineAbilities, MachineDetail } from '../../../../shared/schemas/machines';
+import { useMachineReadings } from '../api/get-machine-readings';
 import { MeterReplacementForm } from './meter-replacement-form';
 import { ReadingForm } from './reading-form';
 import { ReadingHistory } from './reading-history';
@@ -15,14 +16,17 @@ export function ReadingsSection({
   orgId,
   machine,
   abilities,
+  units,
   timeZone,
 }: {
   orgId: string;
   machine: MachineDetail['data'];
   abilities: MachineAbilities;
+  /** the farm's units: how a typed comma is read */
+  units: UnitSystem;
   timeZone: string;
 }) {
-  const readings = useReadings(orgId, machine.id);
+  const readings = useMachineReadings(orgId, machine.id);
   const [replacing, setReplacing] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
   const latest = readings.data?.data[0] ?? null;
@@ -41,6 +45,7 @@ export function ReadingsSection({
             orgId={orgId}
             machineId={machine.id}
             unit={machine.meterUnit}
+            units={units}
             timeZone={timeZone}
             latest={latest}
           />
@@ -56,6 +61,7 @@ export function ReadingsSection({
             orgId={orgId}
             machineId={machine.id}
             unit={machine.meterUnit}
+            units={units}
             timeZone={timeZone}
             onDone={(message) => {
               setReplacing(false);
@@ -95,6 +101,7 @@ export function ReadingsSection({
           readings={readings.data.data}
           replacements={readings.data.replacements}
           unit={machine.meterUnit}
+          units={units}
           timeZone={timeZone}
           canCorrect={abilities.correctReading}
         />

@@ -10,7 +10,3 @@ export const readingFormSchema = z.object({
   takenAt: z.string(),
 });
 export type ReadingFormValues = z.infer<typeof readingFormSchema>;
-
-export const meterNumber = {
-  setValueAs: (v: unknown) => (v === '' || v == null ? undefined : Number(v)),
-};
