@@ -3,7 +3,7 @@
 // lifetime value runs on.
 import type { ReadingSource } from '../../shared/constants';
 import { generateReadings } from './readings-generator';
-import type { DemoMachine } from './demo-fleet';
+import type { DemoMachine } from './demo-machine';
 import { createRandom, seedFromString } from './random';
 
 /** Days of history before the demo's "today": a little over two years, so a season repeats twice. */

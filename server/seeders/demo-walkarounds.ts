@@ -10,7 +10,7 @@ import type { WalkaroundResult } from '../../shared/schemas/walkarounds';
 import type { DefectSeverity } from '../../shared/schemas/defects';
 import { addDaysIso, todayIso } from '../../shared/domain';
 import { defaultChecklist } from '../services/checklist-defaults';
-import { localDate, type DemoMachineWorld } from './demo-services';
+import { localDate, type DemoMachineWorld } from './demo-service-visits';
 
 const DAY = 86_400_000;
 
