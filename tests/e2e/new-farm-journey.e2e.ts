@@ -1,3 +1,4 @@
+import { readFile } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { launchBrowser, screenshot, type TestBrowser } from './support/browser';
@@ -153,6 +154,20 @@ describe.skipIf(!canStartProductionServer)(
         .getByRole('link', { name: 'Import fleet' })
         .click();
       await page.getByRole('heading', { name: 'Import fleet' }).waitFor();
+      // the example file is written the way this metric farm's spreadsheet would write it
+      const [download] = await Promise.all([
+        page.waitForEvent('download'),
+        page.getByRole('link', { name: 'Download an example file' }).click(),
+      ]);
+      expect(download.suggestedFilename()).toBe('hourstone-fleet-example.csv');
+      const example = (await readFile((await download.path())!, 'utf8')).split('\r\n');
+      expect(example[0]).toMatch(
+        /^\uFEFFfleet number;name;category;make;model;serial;year;meter unit;meter reading;reading date/,
+      );
+      expect(example[1]).toMatch(
+        /^T-11;Brindle 4WD tractor;tractor;.*;h;4210,5;\d{2}\/\d{2}\/\d{4}/,
+      );
+      expect(example.filter((line) => line !== '').length).toBe(5);
       const input = page.getByLabel('Fleet file (CSV)');
       await input.setInputFiles(fleetFile('yard loader'));
       await page.getByRole('button', { name: 'Check file' }).click();
@@ -195,6 +210,8 @@ describe.skipIf(!canStartProductionServer)(
       await page.getByText('Engine oil and filter is on the schedule.').waitFor();
       const tasks = page.getByRole('list', { name: 'Service tasks' });
       const oil = tasks.getByRole('listitem').filter({ hasText: 'Engine oil and filter' });
+      // imported at 4,210 h with no known last service: not guessed, but asked for
+      expect(await oil.getByText('History unknown — set last done').count()).toBe(1);
       await oil.getByRole('button', { name: 'Set last done for Engine oil and filter' }).click();
       const lastDone = page.getByRole('form', { name: 'Set last done for Engine oil and filter' });
       await lastDone.getByLabel('Meter when last done').fill('3900');
