@@ -23,7 +23,7 @@ const MANAGER_PASSWORD = 'quillbrook-manager-pass';
 const TECHNICIAN_PASSWORD = 'quillbrook-technician-pass';
 const FARM = 'Quillbrook Farm';
 
-/** An ISO date some days back (days apart from any time zone's today). */
+/** The ISO date n days before today in UTC: for n ≥ 2 a past day in every time zone. */
 const daysAgo = (n: number) => new Date(Date.now() - n * 86_400_000).toISOString().slice(0, 10);
 
 /** The farm's spreadsheet; `loaderCategory` is the cell on line 3. */
