@@ -1,0 +1,86 @@
+import { COMMON_COLUMNS, FILE_PATHS, type ExportTable } from './farm-export-columns';
+
+// The export's tables of walkarounds, their photos and checklists, and the defects found.
+
+const { id, machineId, createdAt, updatedAt, person } = COMMON_COLUMNS;
+
+export const WALKAROUND_TABLES: readonly ExportTable[] = [
+  {
+    file: 'walkarounds.csv',
+    about: 'Daily walkaround checks.',
+    from: 'walkarounds t',
+    orderBy: 't.machine_id, t.performed_at, t.id',
+    columns: [
+      id,
+      machineId,
+      person('operator_id', 'did the walkaround'),
+      ['purpose', 'use (before work) or inspection'],
+      ['performed_at', 'when (ISO 8601, UTC)'],
+      ['meter_value', 'meter value entered with it'],
+      ['reading_id', 'id of the reading it logged (readings.csv)'],
+      ['template_id', 'id of the checklist used'],
+      ['template_name', 'name of the checklist used'],
+      ['items', 'each item checked, as JSON [{itemId, label, critical, result, note, photoId}]'],
+      ['result', 'overall result: ok, attention or fail'],
+      ['tagged_out', 'true when it tagged the machine out'],
+      ['notes', 'notes'],
+      createdAt,
+    ],
+  },
+  {
+    file: 'walkaround-photos.csv',
+    about: 'Photos taken during walkarounds; the files are under files/.',
+    from: 'walkaround_photos t',
+    orderBy: 't.machine_id, t.created_at, t.id',
+    columns: [
+      id,
+      machineId,
+      ['walkaround_id', 'id of the walkaround (walkarounds.csv)'],
+      ['archive_path', 'path of the photo in this archive', FILE_PATHS.walkaroundPhoto.path],
+      person('uploaded_by', 'took it'),
+      createdAt,
+    ],
+  },
+  {
+    file: 'checklist-templates.csv',
+    about: 'Walkaround checklists.',
+    from: 'checklist_templates t',
+    orderBy: 't.category, t.name, t.id',
+    columns: [
+      id,
+      ['category', 'machine category it is for'],
+      ['name', 'name'],
+      ['description', 'description'],
+      ['items', 'its items, as JSON'],
+      createdAt,
+      updatedAt,
+    ],
+  },
+  {
+    file: 'defects.csv',
+    about: 'Defects reported on machines and how they were fixed.',
+    from: 'defects t',
+    orderBy: 't.machine_id, t.created_at, t.id',
+    columns: [
+      id,
+      machineId,
+      ['title', 'title'],
+      ['description', 'description'],
+      ['severity', 'critical, major or minor (critical ones tag the machine out)'],
+      ['status', 'open, in_repair or fixed'],
+      ['walkaround_id', 'walkaround that found it (walkarounds.csv)'],
+      ['item_id', 'checklist item that found it'],
+      ['photo_id', 'photo of it (walkaround-photos.csv)'],
+      ['report_count', 'how many times it was reported'],
+      ['last_reported_at', 'when it was last reported (ISO 8601, UTC)'],
+      person('reported_by', 'reported it'),
+      person('assigned_to', 'is to fix it'),
+      ['fixed_at', 'when it was fixed (ISO 8601, UTC)'],
+      person('fixed_by', 'fixed it'),
+      ['fixed_by_record_id', 'service record that fixed it (service-records.csv)'],
+      ['fix_note', 'what was done'],
+      createdAt,
+      updatedAt,
+    ],
+  },
+];
