@@ -5,6 +5,9 @@ import { QueryTypes, Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import type { Organization } from '../models';
 import { getObject, isMissingObject } from '../infra/storage';
+import { recordAudit } from '../infra/audit';
+import type { OrgAccess } from '../policies/access';
+import { todayIso } from '../../shared/domain';
 import { EXPORT_TABLES, FILE_PATHS, type ExportTable } from './farm-export-tables';
 
 // A farm's own data as one zip: a CSV per kind of record, organization.json, the stored files and
@@ -96,6 +99,25 @@ function storedFile(key: string, path: string, missing: string[]): Readable {
     for await (const chunk of body) yield chunk as Buffer;
   }
   return Readable.from(chunks(), { objectMode: false });
+}
+
+/**
+ * A manager's download of the farm's data: recorded in the audit log first, then `write` streams
+ * the archive to the response. The caller names the file by `localDate` (the farm's date today).
+ */
+export async function startFarmExport(access: OrgAccess, now: Date) {
+  const { organization } = access;
+  await recordAudit({
+    organizationId: organization.id,
+    actorUserId: access.userId,
+    action: 'organization.export',
+    entityType: 'organization',
+    entityId: organization.id,
+  });
+  return {
+    localDate: todayIso(organization.timeZone, now),
+    write: (out: Writable) => writeFarmExport(organization, out, now),
+  };
 }
 
 /** Writes the organization's export to `out` (a response, a file) and resolves when it is done. */

@@ -3,9 +3,7 @@ import { z } from 'zod';
 import { rawResponse, route } from '../route';
 import { authorize } from '../../policies/access';
 import { canExportFarmData } from '../../policies/farm-export';
-import { recordAudit } from '../../infra/audit';
-import { writeFarmExport } from '../../services/farm-export';
-import { todayIso } from '../../../shared/domain';
+import { startFarmExport } from '../../services/farm-export';
 
 const params = z.object({ orgId: z.uuid() });
 
@@ -32,23 +30,15 @@ export function exportRouter(): Router {
     handler: async ({ req, res }) => {
       const access = req.access!;
       authorize(canExportFarmData(access), "Only the farm's manager may download its data");
-      const { organization } = access;
-      const now = new Date();
-      await recordAudit({
-        organizationId: organization.id,
-        actorUserId: access.userId,
-        action: 'organization.export',
-        entityType: 'organization',
-        entityId: organization.id,
-      });
+      const download = await startFarmExport(access, new Date());
       res.setHeader('Content-Type', 'application/zip');
       res.setHeader(
         'Content-Disposition',
-        `attachment; filename="${fileName(organization.name, todayIso(organization.timeZone, now))}"`,
+        `attachment; filename="${fileName(access.organization.name, download.localDate)}"`,
       );
       res.setHeader('Cache-Control', 'no-store');
       res.status(200);
-      await writeFarmExport(organization, res, now);
+      await download.write(res);
     },
   });
 
