@@ -80,6 +80,14 @@ export async function listFarmDealers(access: OrgAccess) {
   });
 }
 
+/** The dealers a farm has linked, once each (for the audit log's dealer filter). */
+export async function farmDealerChoices(access: OrgAccess) {
+  const links = await listFarmDealers(access);
+  return [
+    ...new Map(links.map((l) => [l.dealerOrganizationId, l.dealer?.name ?? ''])).entries(),
+  ].map(([id, name]) => ({ id, name }));
+}
+
 /** 409 while this dealer has an active link to the farm already. */
 export async function assertNotLinked(farmId: string, dealerId: string, transaction?: Transaction) {
   const live = await DealerLink.findOne({

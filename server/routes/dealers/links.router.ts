@@ -26,6 +26,7 @@ import {
 } from '../../../shared/schemas/dealer-responses';
 import {
   changeLinkAccess,
+  farmDealerChoices,
   grantDealer,
   listCustomers,
   listFarmDealers,
@@ -175,10 +176,7 @@ export function registerLinkRoutes(router: Router): void {
       const access = requireFarmOrg(req.access);
       authorize(canViewAuditLog(access), 'Only a farm manager may read the audit log');
       const { total, events } = await farmAuditEvents(access, query);
-      const links = await listFarmDealers(access);
-      const dealers = [
-        ...new Map(links.map((l) => [l.dealerOrganizationId, l.dealer?.name ?? ''])).entries(),
-      ].map(([id, name]) => ({ id, name }));
+      const dealers = await farmDealerChoices(access);
       return { data: events, meta: { total, page: query.page, pageSize: query.pageSize }, dealers };
     },
   });

@@ -1,8 +1,8 @@
 import { Router } from 'express';
 import { caughtMailListResponseSchema } from '../../../shared/schemas/dev-mail';
 import { route } from '../route';
-import { env } from '../../env';
 import { AppError } from '../../errors';
+import { caughtMessages, mailCatcherAvailable } from '../../infra/mail-catcher';
 
 /** Development only: the local mail catcher's inbox, so invitation and reset links can be opened. */
 export function devRouter(): Router {
@@ -15,12 +15,8 @@ export function devRouter(): Router {
     access: 'public',
     response: caughtMailListResponseSchema,
     handler: async () => {
-      if (env.NODE_ENV === 'production' || !env.MAIL_CATCHER_URL)
-        throw new AppError(404, 'not_found', 'No such route');
-      const response = await fetch(`${env.MAIL_CATCHER_URL}/messages`);
-      if (!response.ok)
-        throw new AppError(502, 'mail_catcher', 'The local mail catcher did not answer');
-      const messages = (await response.json()) as Array<Record<string, unknown>>;
+      if (!mailCatcherAvailable()) throw new AppError(404, 'not_found', 'No such route');
+      const messages = await caughtMessages();
       return {
         data: messages.map((m) => ({
           id: String(m.id),
