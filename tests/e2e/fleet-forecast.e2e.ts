@@ -7,7 +7,7 @@ import {
   signIn,
   type TestBrowser,
 } from './support/browser';
-import { LOG_HOURS_FLEET } from './support/demo-fleet';
+import { LOG_HOURS_FLEET, MACHINE_PAGE_READING_FLEET } from './support/demo-fleet';
 
 // The farm manager's main job (issue "Fleet, hour-meter readings and the due forecast"), in the browser.
 const DESKTOP = { width: 1280, height: 800 };
@@ -139,6 +139,42 @@ describe('fleet and forecast — the manager in the browser', () => {
     expect(await page.locator('.recharts-surface path.recharts-curve').count()).toBeGreaterThan(0);
     expect(await page.locator('main').innerText()).toMatch(/Meter from [\d,.]+ h to [\d,.]+ h/);
     await screenshot(page, 'forecast-machine-t02');
+  });
+
+  it('machine page — a reading logged there shows on the Log hours list without a reload', async () => {
+    const org = await orgId(page);
+    const fleetNumber = MACHINE_PAGE_READING_FLEET;
+    const created = await page.request.post(`/api/v1/organizations/${org}/machines`, {
+      data: { fleetNumber, name: 'Brindle yard loader', category: 'tractor', meterUnit: 'h' },
+    });
+    expect(created.status()).toBe(201);
+    // one page load from here on: Log hours first, so its list is in the client's cache
+    await page.goto('/');
+    const nav = page.getByRole('navigation', { name: 'Main' });
+    await nav.getByRole('link', { name: 'Log hours' }).click();
+    await page.getByRole('heading', { name: 'Log hours' }).waitFor();
+    const logHoursRow = () => page.getByRole('listitem').filter({ hasText: fleetNumber });
+    await logHoursRow().getByText('No reading yet').waitFor();
+    await page.evaluate(() => Object.assign(window, { e2eSameLoad: true }));
+
+    await nav.getByRole('link', { name: 'Fleet' }).click();
+    await page.getByRole('heading', { name: 'Fleet' }).waitFor();
+    await page
+      .getByRole('link', { name: new RegExp(fleetNumber) })
+      .first()
+      .click();
+    await page.getByRole('heading', { name: new RegExp(`^${fleetNumber} · `) }).waitFor();
+    const form = page.getByRole('form', { name: 'Log a reading' });
+    await form.getByLabel('Meter reading').fill('1234.5');
+    await form.getByRole('button', { name: 'Save reading' }).click();
+    await form.getByText(/Reading saved: 1,?234\.5 h/).waitFor();
+
+    await nav.getByRole('link', { name: 'Log hours' }).click();
+    await page.getByRole('heading', { name: 'Log hours' }).waitFor();
+    await logHoursRow()
+      .getByText(/1,?234\.5 h/)
+      .waitFor({ timeout: 10_000 });
+    expect(await page.evaluate(() => 'e2eSameLoad' in window)).toBe(true);
   });
 
   it('phone — the operator logs hours on a 360 px screen', async () => {
