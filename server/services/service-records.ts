@@ -77,6 +77,14 @@ export function prefillLines(tasks: Pick<ServiceTask, 'parts' | 'fluids'>[]): {
   return { parts: [...parts.values()], fluids: [...fluids.values()] };
 }
 
+/** What a new record's form starts from: the tasks, their labour summed (hours), their lines. */
+export async function prefillRecord(access: OrgAccess, machine: Machine, taskIds: string[]) {
+  const tasks = await resolveTasks(access, machine, taskIds);
+  const estimatedLabourHours =
+    Math.round(tasks.reduce((s, t) => s + (t.labourHours ?? 0), 0) * 100) / 100;
+  return { tasks, estimatedLabourHours, ...prefillLines(tasks) };
+}
+
 /**
  * Records a visit: a plan (date + tasks), or a completed service in one transaction — the meter
  * reading, the task resets, parts, measurements and the defects it closes; all or nothing.

@@ -18,8 +18,7 @@ import {
 } from '../../../shared/schemas/service-record-responses';
 import { presentRecord, presentRecords } from '../../presenters/service-record';
 import { loadMachine } from '../../services/machines';
-import { createRecord, loadRecord, prefillLines } from '../../services/service-records';
-import { resolveTasks } from '../../services/service-record-checks';
+import { createRecord, loadRecord, prefillRecord } from '../../services/service-records';
 import { completeRecord } from '../../services/service-record-completion';
 import { cancelRecord, updateRecord } from '../../services/service-record-edits';
 import { machineHistory } from '../../services/service-history';
@@ -96,14 +95,17 @@ export function registerServiceRecordRoutes(router: Router): void {
         .filter(Boolean);
       const bad = ids.findIndex((id) => !uuid.safeParse(id).success);
       if (bad >= 0) throw invalid({ [`taskIds.${bad}`]: 'Must be an id (uuid)' });
-      const tasks = await resolveTasks(access, machine, ids);
-      const lines = prefillLines(tasks);
+      const { tasks, estimatedLabourHours, parts, fluids } = await prefillRecord(
+        access,
+        machine,
+        ids,
+      );
       return {
         data: {
           tasks: tasks.map((t) => ({ taskId: t.id, name: t.name, labourHours: t.labourHours })),
-          estimatedLabourHours:
-            Math.round(tasks.reduce((s, t) => s + (t.labourHours ?? 0), 0) * 100) / 100,
-          ...lines,
+          estimatedLabourHours,
+          parts,
+          fluids,
         },
       };
     },
