@@ -153,6 +153,7 @@ export function engineTasks(units: UnitSystem, s: EngineSpec): TaskInput[] {
       intervalMeter: 250,
       warnMeter: 25,
       warnDays: 14,
+      parts: [part(pn('AF', 26), 'Air filter outer element')],
       labourHours: 0.3,
       instructions: `Check the restriction indicator and the outer element; replace it (${pn('AF', 26)}) when restricted or damaged. Never clean the inner safety element.`,
     }),

@@ -130,6 +130,7 @@ function truck(units: UnitSystem): TaskInput[] {
       intervalMeter: 15000,
       warnMeter: 1500,
       warnDays: 14,
+      parts: [part('HS-AF-1926', 'Air filter element')],
       labourHours: 0.3,
       instructions:
         'Check the restriction indicator and the element (HS-AF-1926); replace when restricted.',
