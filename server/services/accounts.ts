@@ -55,6 +55,13 @@ export async function inviteMember(access: Inviter, input: InvitationCreateInput
   });
   if (existing) throw invalid({ email: 'This person is a member already' });
   const { token, hash } = newToken();
+  // The mail says who asks: a member by name and e-mail, or the server's operator (org:create).
+  const inviter = access.userId
+    ? await User.findByPk(access.userId, { attributes: ['name', 'email'] })
+    : null;
+  const org = access.organization;
+  const role = ROLE_LABELS[input.role].toLowerCase();
+  const who = inviter ? `${inviter.name} (${inviter.email})` : "Hourstone's operator";
   const invitation = await sequelize.transaction(async (transaction) => {
     const row = await Invitation.create(
       {
@@ -87,17 +94,18 @@ export async function inviteMember(access: Inviter, input: InvitationCreateInput
         recipient: input.email,
         kind: 'invitation',
         periodKey: row.id,
-        subject: `You are invited to ${access.organization.name} on Hourstone`,
+        subject: `You are invited to ${org.name} on Hourstone`,
         text: [
           `Hello ${input.name},`,
           '',
-          `You have been invited to join ${access.organization.name} on Hourstone as ${ROLE_LABELS[input.role].toLowerCase()}.`,
+          `${who} invited you to join ${org.name} on Hourstone with the role of ${role}.`,
           `Open this link to set your password and join (it works once and expires in ${INVITATION_DAYS} days):`,
           link,
           '',
           'If you did not expect this, ignore this message.',
         ].join('\n'),
-        html: `<p>Hello ${escapeHtml(input.name)},</p><p>You have been invited to join <strong>${escapeHtml(access.organization.name)}</strong> on Hourstone as ${ROLE_LABELS[input.role].toLowerCase()}.</p><p><a href="${link}">Set your password and join</a> (works once, expires in ${INVITATION_DAYS} days).</p><p>If you did not expect this, ignore this message.</p>`,
+        html: `<p>Hello ${escapeHtml(input.name)},</p><p>${escapeHtml(who)} invited you to join <strong>${escapeHtml(org.name)}</strong> on Hourstone with the role of <strong>${role}</strong>.</p><p><a href="${link}">Set your password and join</a> (works once, expires in ${INVITATION_DAYS} days).</p><p>If you did not expect this, ignore this message.</p>`,
+        ...(inviter && { headers: { 'Reply-To': inviter.email } }),
       },
       transaction,
     );

@@ -12,6 +12,7 @@ import {
   type CustomerInvitationInput,
   type DealerInvitationAcceptInput,
 } from '../../shared/schemas/dealers';
+import { ROLE_LABELS } from '../../shared/constants';
 import { queueMessage } from '../infra/mailer';
 import { hashToken, newToken } from '../infra/tokens';
 import { assertNotLinked, auditLink } from './dealer-links';
@@ -65,7 +66,7 @@ export async function inviteCustomer(access: OrgAccess, input: CustomerInvitatio
         text: [
           'Hello,',
           '',
-          `${advisor?.name ?? 'A service advisor'} at ${dealer.name} asks for access to your farm's machines on Hourstone, to see what is coming due and propose service dates.`,
+          `${advisor ? `${advisor.name} (${advisor.email}), ${ROLE_LABELS.advisor.toLowerCase()} at ${dealer.name},` : `A ${ROLE_LABELS.advisor.toLowerCase()} at ${dealer.name}`} asks for access to your farm's machines on Hourstone, to see what is coming due and propose service dates.`,
           ...(input.message ? ['', input.message] : []),
           '',
           'As the farm manager you choose the access, and you can change or revoke it at any time:',

@@ -120,6 +120,7 @@ export async function grantDealer(access: OrgAccess, input: DealerInvitationInpu
   if (!advisor || !membership?.organization)
     throw invalid({ email: 'No dealer service advisor on Hourstone has this e-mail' });
   const dealer = membership.organization;
+  const manager = await User.findByPk(access.userId, { attributes: ['name', 'email'] });
   const link = await sequelize.transaction(async (transaction) => {
     await assertNotLinked(farm.id, dealer.id, transaction);
     const row = await DealerLink.create(
@@ -158,7 +159,7 @@ export async function grantDealer(access: OrgAccess, input: DealerInvitationInpu
         text: [
           `Hello ${advisor.name},`,
           '',
-          `${farm.name} has given ${dealer.name} ${DEALER_ACCESS_LABELS[input.access].toLowerCase()} access to its machines on Hourstone.`,
+          `${manager ? `${manager.name} (${manager.email}), manager of ${farm.name},` : farm.name} has given ${dealer.name} ${DEALER_ACCESS_LABELS[input.access].toLowerCase()} access to ${farm.name}'s machines on Hourstone.`,
           DEALER_ACCESS_DESCRIPTIONS[input.access],
           '',
           `Their machines now show on your board: ${env.APP_URL.replace(/\/+$/, '')}/o/${dealer.id}/board`,
