@@ -19,7 +19,8 @@ const keyOf = (a: ServiceAttachment, thumb: boolean) =>
   a.kind === 'pdf' ? `${a.objectKey}.pdf` : `${a.objectKey}${thumb ? '-thumb' : ''}.webp`;
 
 /**
- * Stores an uploaded photo (as WebP with a thumbnail) or PDF on a record, type checked by content.
+ * Stores an uploaded photo (as WebP with a thumbnail) or PDF on a record, type checked by content;
+ * the attachment keeps the uploaded file's name.
  * When the row cannot be written the stored objects are removed again.
  */
 export async function attachToRecord(
@@ -53,7 +54,8 @@ export async function attachToRecord(
       serviceRecordId: record.id,
       kind: prepared.kind,
       contentType: prepared.contentType,
-      fileName: prepared.kind === 'image' ? original.replace(/\.[^.]*$/, '') + '.webp' : original,
+      // the name the person gave it (photo.png), though a photo is stored as WebP
+      fileName: original,
       sizeBytes: prepared.kind === 'pdf' ? prepared.body.length : prepared.full.length,
       objectKey,
       uploadedBy: access.userId,
@@ -98,7 +100,9 @@ export async function attachmentFile(
 ) {
   const a = await loadAttachment(access, record, attachmentId);
   if (thumb && a.kind === 'pdf') throw notFound('Thumbnail');
-  return { object: await getObject(keyOf(a, thumb)), fileName: a.fileName };
+  // a download of a photo is named for what it holds: photo.png served as WebP saves as photo.webp
+  const fileName = a.kind === 'image' ? `${a.fileName.replace(/\.[^.]*$/, '')}.webp` : a.fileName;
+  return { object: await getObject(keyOf(a, thumb)), fileName };
 }
 
 /** Removes an attachment; its stored objects go after the row (a leftover object is harmless). */

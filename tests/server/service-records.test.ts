@@ -668,8 +668,10 @@ describe('service records — attachments', () => {
     expect(photo.body.data).toMatchObject({
       kind: 'image',
       contentType: 'image/webp',
-      fileName: 'gauge.webp',
+      fileName: 'gauge.png',
     });
+    const full = await s.agent.get(photo.body.data.url).buffer(true).parse(binary);
+    expect(full.headers['content-disposition']).toContain('filename="gauge.webp"');
     const thumb = await s.agent.get(photo.body.data.thumbnailUrl).buffer(true).parse(binary);
     expect(thumb.status).toBe(200);
     expect((await sharp(thumb.body as Buffer).metadata()).width).toBe(320);
