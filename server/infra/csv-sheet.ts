@@ -3,6 +3,7 @@
 // decimal comma on metric farms (or in any semicolon file).
 import { parse } from 'csv-parse/sync';
 import { TZDate } from '@date-fns/tz';
+import { parseMeterNumber, type MeterNumber } from '../../shared/domain/meter-number';
 import { invalid } from '../errors';
 import type { OrgAccess } from '../policies/access';
 
@@ -68,20 +69,12 @@ export function readCsvSheet(buffer: Buffer, what: string, maxRows: number): Csv
 }
 
 /**
- * A number cell: digits with an optional decimal point (or comma, when decimalComma), thousands
- * grouped by the other mark, spaces ignored. NaN when it is not a number; null when blank.
+ * A number cell by the file's decimal mark (a comma on metric farms and in semicolon files), read
+ * by the one meter-number rule of the client's fields (shared/domain/meter-number.ts): the number,
+ * or the reason it is not one ("is not a number in this file: use a point for decimals (3118.5)").
  */
-export function parseCsvNumber(cell: string, decimalComma: boolean): number | null {
-  let raw = cell.replace(/\s/g, '');
-  if (!raw) return null;
-  if (decimalComma) {
-    if (/^\d{1,3}(\.\d{3})+(,\d+)?$/.test(raw)) raw = raw.replace(/\./g, '');
-    if (/^\d+,\d+$/.test(raw)) raw = raw.replace(',', '.');
-  } else if (/^\d{1,3}(,\d{3})+(\.\d+)?$/.test(raw)) {
-    raw = raw.replace(/,/g, '');
-  }
-  return /^\d+(\.\d+)?$/.test(raw) ? Number(raw) : NaN;
-}
+export const parseCsvNumber = (cell: string, decimalComma: boolean): MeterNumber =>
+  parseMeterNumber(cell, decimalComma ? 'metric' : 'imperial', { where: 'in this file' });
 
 /** The example of the farm's local date format, for messages and help. */
 export const localDateExample = (order: 'mdy' | 'dmy') =>

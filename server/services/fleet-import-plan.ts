@@ -10,6 +10,7 @@ import {
 } from '../../shared/schemas/machines';
 import { readingCreateSchema } from '../../shared/schemas/readings';
 import { lastDoneSchema, type LastDoneInput } from '../../shared/schemas/schedule';
+import { meterNumberMessage } from '../../shared/domain/meter-number';
 import type { Machine, ScheduleTemplate } from '../models';
 import { parseCsvNumber, parseLocalDate, parseTakenAt } from '../infra/csv-sheet';
 import {
@@ -154,10 +155,10 @@ export function planRow(
   const meter = cell('meterValue');
   const date = cell('readingDate');
   if (meter !== undefined || date !== undefined) {
-    const value = meter === undefined ? null : parseCsvNumber(meter, ctx.decimalComma);
+    const number = meter === undefined ? null : parseCsvNumber(meter, ctx.decimalComma);
+    const value = number?.ok ? number.value : null;
     if (meter === undefined) fail('is empty but a reading date is given', 'meter reading');
-    else if (value === null || Number.isNaN(value))
-      fail(`"${meter}" must be a number like 1234.5`, 'meter reading');
+    else if (number && !number.ok) fail(meterNumberMessage(meter, number), 'meter reading');
     else {
       const bounds = readingCreateSchema.shape.value.safeParse(value);
       if (!bounds.success) fail(bounds.error.issues[0].message, 'meter reading');
@@ -166,7 +167,7 @@ export function planRow(
     if (date === undefined)
       fail(`is empty; give the date the meter showed ${meter}`, 'reading date');
     else if (typeof takenAt === 'string') fail(`"${date}" ${takenAt}`, 'reading date');
-    if (value !== null && !Number.isNaN(value) && takenAt instanceof Date && !plan.errors.length) {
+    if (value !== null && takenAt instanceof Date && !plan.errors.length) {
       if (plan.existing?.status === 'sold')
         fail(`${plan.existing.fleetNumber} is sold; readings are closed`, 'meter reading');
       else plan.reading = { value, takenAt, text: `${meter} on ${date}` };
@@ -207,11 +208,9 @@ export function planRow(
     const lastDoneOn = parseLocalDate(on, ctx.order);
     const lastDoneMeter = parseCsvNumber(at, ctx.decimalComma);
     if (typeof lastDoneOn !== 'string') fail(`"${on}" ${lastDoneOn.error}`, field);
-    if (lastDoneMeter === null || Number.isNaN(lastDoneMeter))
-      fail(`"${at}" must be a number like 1234.5`, `${task.name} last meter`);
-    if (typeof lastDoneOn !== 'string' || lastDoneMeter === null || Number.isNaN(lastDoneMeter))
-      continue;
-    const parsed = lastDoneSchema.safeParse({ lastDoneOn, lastDoneMeter });
+    if (!lastDoneMeter.ok) fail(meterNumberMessage(at, lastDoneMeter), `${task.name} last meter`);
+    if (typeof lastDoneOn !== 'string' || !lastDoneMeter.ok) continue;
+    const parsed = lastDoneSchema.safeParse({ lastDoneOn, lastDoneMeter: lastDoneMeter.value });
     if (parsed.success) plan.lastDone.push({ taskName: task.name, input: parsed.data });
     else plan.errors.push(...issuesOf(parsed.error, line, () => field));
   }

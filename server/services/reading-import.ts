@@ -1,4 +1,5 @@
 import { Op } from 'sequelize';
+import { meterNumberMessage } from '../../shared/domain/meter-number';
 import { sequelize } from '../db';
 import { invalid } from '../errors';
 import { Machine } from '../models';
@@ -104,11 +105,12 @@ export async function analyseImport(access: OrgAccess, buffer: Buffer) {
       continue;
     }
     row.takenAt = takenAt.toISOString();
-    const value = parseCsvNumber(record[col.value] ?? '', decimalComma);
-    if (value === null || !Number.isFinite(value)) {
-      fail(`value "${record[col.value] ?? ''}" must be a number like 1234.5`);
+    const number = parseCsvNumber(record[col.value] ?? '', decimalComma);
+    if (!number.ok) {
+      fail(`value ${meterNumberMessage(record[col.value] ?? '', number)}`);
       continue;
     }
+    const value = number.value;
     row.value = value;
     candidates.push({ row, reading: { machine, value, takenAt, source: 'import' } });
   }
