@@ -41,22 +41,22 @@ const ITEMS: Record<ItemId, NavItem> = {
   shopWeek: {
     label: 'Shop week',
     to: (orgId: string) => org.shopWeek.href(orgId),
-    icon: 'refresh',
+    icon: 'wrench',
   },
   team: { label: 'Team', to: org.team.href, icon: 'team' },
   reminders: { label: 'Reminders', to: org.reminders.href, icon: 'mail' },
-  messages: { label: 'Messages', to: org.messages.href, icon: 'external' },
+  messages: { label: 'Messages', to: org.messages.href, icon: 'send' },
   checklists: {
     label: 'Checklists',
     to: (orgId: string) => org.checklists.href(orgId),
-    icon: 'info',
+    icon: 'list',
   },
   // dealer links: the farm manager's Dealers page; the advisor's parts, bookings and customers
-  dealers: { label: 'Dealers', to: org.farmDealers.href, icon: 'lock' },
-  parts: { label: 'Parts forecast', to: org.partsForecast.href, icon: 'plus' },
-  bookings: { label: 'Bookings', to: org.bookings.href, icon: 'clock' },
+  dealers: { label: 'Dealers', to: org.farmDealers.href, icon: 'store' },
+  parts: { label: 'Parts forecast', to: org.partsForecast.href, icon: 'box' },
+  bookings: { label: 'Bookings', to: org.bookings.href, icon: 'calendar' },
   customers: { label: 'Customers', to: org.customers.href, icon: 'team' },
-  settings: { label: 'Settings', to: org.settings.href, icon: 'info' },
+  settings: { label: 'Settings', to: org.settings.href, icon: 'sliders' },
   account: { label: 'Account', to: org.account.href, icon: 'person' },
 };
 

@@ -147,7 +147,7 @@ export function MachinePage() {
               to={org.machineLabel.href(orgId, detail.id)}
               className={buttonClasses('secondary')}
             >
-              <Icon name="external" />
+              <Icon name="printer" />
               Print label
             </Link>
           </li>

@@ -124,6 +124,74 @@ const PATHS = {
       <path d="M19 4.5V8h-3.5" />
     </>
   ),
+  wrench: (
+    <>
+      <path d="M14.5 4.2a4.5 4.5 0 0 0-5.3 6L4.6 14.8a2 2 0 0 0 2.8 2.8l4.6-4.6a4.5 4.5 0 0 0 6-5.3l-2.7 2.7-2.5-.6-.6-2.5 2.3-3.1z" />
+    </>
+  ),
+  store: (
+    <>
+      <path d="M4 9.5l1.5-5h13l1.5 5" />
+      <path d="M4 9.5c0 1.4 1.1 2.5 2.7 2.5s2.6-1.1 2.6-2.5c0 1.4 1.1 2.5 2.7 2.5s2.7-1.1 2.7-2.5c0 1.4 1 2.5 2.6 2.5S20 10.9 20 9.5" />
+      <path d="M5.5 12v7.5h13V12" />
+      <path d="M10 19.5v-4.5h4v4.5" />
+    </>
+  ),
+  send: (
+    <>
+      <path d="M20 4L3.5 10.5l7 3 3 7L20 4z" />
+      <path d="M20 4l-9.5 9.5" />
+    </>
+  ),
+  download: (
+    <>
+      <path d="M12 4v11" />
+      <path d="M7.5 10.5L12 15l4.5-4.5" />
+      <path d="M5 19.5h14" />
+    </>
+  ),
+  box: (
+    <>
+      <path d="M12 3.5l8 4v9l-8 4-8-4v-9l8-4z" />
+      <path d="M4 7.5l8 4 8-4" />
+      <path d="M12 11.5v9" />
+    </>
+  ),
+  list: (
+    <>
+      <path d="M9.5 7h10" />
+      <path d="M9.5 12h10" />
+      <path d="M9.5 17h10" />
+      <path d="M4.5 7l1 1 1.8-2" />
+      <path d="M4.5 12l1 1 1.8-2" />
+      <path d="M4.5 17l1 1 1.8-2" />
+    </>
+  ),
+  sliders: (
+    <>
+      <path d="M4 7h9" />
+      <path d="M17 7h3" />
+      <circle cx="15" cy="7" r="2" />
+      <path d="M4 17h3" />
+      <path d="M11 17h9" />
+      <circle cx="9" cy="17" r="2" />
+    </>
+  ),
+  calendar: (
+    <>
+      <rect x="4" y="5.5" width="16" height="14.5" rx="2" />
+      <path d="M4 10h16" />
+      <path d="M8.5 3.5v4" />
+      <path d="M15.5 3.5v4" />
+    </>
+  ),
+  printer: (
+    <>
+      <path d="M7 9V4h10v5" />
+      <rect x="4" y="9" width="16" height="7.5" rx="1.5" />
+      <path d="M7 14h10v6H7z" />
+    </>
+  ),
 } as const;
 
 export type IconName = keyof typeof PATHS;

@@ -107,7 +107,7 @@ export function DealerBoard({
       <BoardFiltersBar filters={filters} customers={meta.customers} onChange={change} />
       <div className="flex flex-wrap items-center gap-2">
         <a className={buttonClasses('secondary')} href={boardCsvHref(orgId, filters)} download>
-          <Icon name="external" />
+          <Icon name="download" />
           Download CSV
         </a>
         <Button icon="mail" disabled={!oneCustomer} onClick={() => setDialog('reminder')}>

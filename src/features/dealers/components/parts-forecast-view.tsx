@@ -70,7 +70,7 @@ export function PartsForecastView({
           href={partsCsvHref(orgId, horizon, customerId)}
           download
         >
-          <Icon name="external" />
+          <Icon name="download" />
           Download CSV
         </a>
       </div>

@@ -1,6 +1,7 @@
 import type { UnitSystem } from '../../../../shared/constants';
 import { CATEGORY_LABELS, MACHINE_CATEGORIES, METER_UNITS } from '../../../../shared/constants';
 import { Icon } from '../../../components/ui/icons';
+import { formatTimeZoneName } from '../../../lib/format';
 
 const LOCAL_DATE: Record<UnitSystem, string> = { imperial: 'MM/DD/YYYY', metric: 'DD/MM/YYYY' };
 
@@ -45,7 +46,7 @@ export function FleetFormatHelp({
         </li>
         <li>
           Dates are ISO (2026-05-01) or this farm&apos;s <strong>{LOCAL_DATE[units]}</strong>, in
-          farm time ({timeZone}).{' '}
+          farm time ({formatTimeZoneName(timeZone)}).{' '}
           {units === 'metric'
             ? 'Numbers may use a decimal comma (1210,5).'
             : 'Numbers use a decimal point (1210.5).'}
@@ -63,7 +64,7 @@ export function FleetFormatHelp({
           download
           className="inline-flex min-h-touch items-center gap-1 font-bold text-field-800 underline underline-offset-2"
         >
-          <Icon name="external" className="size-4" />
+          <Icon name="download" className="size-4" />
           Download an example file
         </a>
       </p>

@@ -53,7 +53,7 @@ export function DeleteOrganizationCard({
           <p className="font-bold">Keep a copy first: download everything the farm holds here.</p>
           <div>
             <a className={buttonClasses('secondary')} href={farmExportHref(orgId)} download>
-              <Icon name="external" />
+              <Icon name="download" />
               Download the farm’s data
             </a>
           </div>

@@ -14,7 +14,7 @@ export function FarmExportCard({ orgId }: { orgId: string }) {
       </p>
       <div>
         <a className={buttonClasses('secondary')} href={farmExportHref(orgId)} download>
-          <Icon name="external" />
+          <Icon name="download" />
           Download the farm’s data
         </a>
       </div>

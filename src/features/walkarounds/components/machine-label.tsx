@@ -42,7 +42,7 @@ export function MachineLabel({ orgId, machineId }: { orgId: string; machineId: s
                 download={`${fleetNumber}-label.svg`}
                 className={buttonClasses('secondary', 'min-h-12')}
               >
-                <Icon name="external" />
+                <Icon name="download" />
                 Download SVG
               </a>
             </>
