@@ -3,7 +3,14 @@
 // The rows come from dueList(), the one due list; this file only selects, groups and writes.
 import { Membership, Notification, NotificationPreference, Organization, User } from '../models';
 import type { OrgAccess } from '../policies/access';
-import { addDaysIso } from '../../shared/domain';
+import {
+  addDaysIso,
+  dueRangeText,
+  fittedMeterText,
+  overText,
+  remainingDaysText,
+  remainingMeterText,
+} from '../../shared/domain';
 import { DIGEST_HORIZON_DAYS } from '../../shared/schemas/notifications';
 import { dueList, type DueRow } from './due-list';
 import { queueMessage } from '../infra/mailer';
@@ -16,7 +23,6 @@ import {
   emailFrame,
   escapeHtml,
   formatIsoDate,
-  formatNumber,
   SAFETY_LINE,
   unsubscribeHeaders,
 } from './reminder-mail';
@@ -67,28 +73,33 @@ export function groupByMachine(rows: (DueRow & { section: DigestSection })[]): D
   return [...groups.values()];
 }
 
-/** The facts of one task, in words: due meter, calendar date, projection and range. */
+/**
+ * The facts of one task, in the words of every screen (shared/domain/due-words.ts): due meter as
+ * the meter fitted now reads it (lifetime in brackets after a replacement), calendar limit, how
+ * far left or over, projection and range, and when it falls due (or how far overdue it is).
+ */
 export function taskFacts(row: DueRow): string[] {
   const { due } = row;
   const unit = row.machine.meterUnit;
   const facts: string[] = [];
   if (due.dueMeter !== null) {
-    let meter = `Due at ${formatNumber(due.dueMeter)} ${unit}`;
-    if (due.remainingMeter !== null)
-      meter +=
-        due.remainingMeter < 0
-          ? ` (${formatNumber(-due.remainingMeter)} ${unit} over)`
-          : ` (${formatNumber(due.remainingMeter)} ${unit} to go)`;
+    let meter = `Due at ${fittedMeterText(row.dueOnMeter ?? due.dueMeter, due.dueMeter, unit)}`;
+    if (due.remainingMeter !== null) meter += ` — ${remainingMeterText(due.remainingMeter, unit)}`;
     facts.push(meter);
   }
-  if (due.dueDate !== null) facts.push(`Calendar limit ${formatIsoDate(due.dueDate)}`);
-  if (due.projectedDate !== null) {
+  if (due.dueDate !== null) {
+    let calendar = `Calendar limit ${formatIsoDate(due.dueDate)}`;
+    if (due.remainingDays !== null) calendar += ` (${remainingDaysText(due.remainingDays)})`;
+    facts.push(calendar);
+  }
+  if (due.projectedDate !== null && due.status !== 'overdue') {
     let projected = `Projected ${formatIsoDate(due.projectedDate)}`;
-    if (due.projectedLow && due.projectedHigh && due.projectedLow !== due.projectedHigh)
-      projected += ` (range ${formatIsoDate(due.projectedLow)} – ${formatIsoDate(due.projectedHigh)})`;
+    const range = dueRangeText(due.projectedLow, due.projectedHigh, formatIsoDate);
+    if (range && due.projectedLow !== due.projectedHigh) projected += ` (range ${range})`;
     facts.push(projected);
   }
-  if (due.effectiveDate !== null) facts.push(`Falls due ${formatIsoDate(due.effectiveDate)}`);
+  if (due.status === 'overdue') facts.push(`Overdue: ${overText(due, unit) ?? 'now'}`);
+  else if (due.effectiveDate !== null) facts.push(`Falls due ${formatIsoDate(due.effectiveDate)}`);
   return facts;
 }
 
@@ -234,7 +245,8 @@ export async function queueFarmDigests(farm: ReminderFarm, now: Date): Promise<n
     const viewKey = r.role === 'operator' ? r.userId : 'farm';
     if (!lists.has(viewKey)) {
       const access: OrgAccess = { organization, userId: r.userId, role: r.role, via: 'member' };
-      lists.set(viewKey, await dueList(access, { horizon: DIGEST_HORIZON_DAYS }, now));
+      // the whole list: selectDigestRows keeps overdue and due soon whatever their date
+      lists.set(viewKey, await dueList(access, {}, now));
     }
     const list = lists.get(viewKey)!;
     const machines = groupByMachine(selectDigestRows(list.rows, list.asOf, r.preference));

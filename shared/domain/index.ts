@@ -10,3 +10,4 @@ export * from './reading-rules';
 export * from './cost';
 export * from './money';
 export * from './record-costs';
+export * from './due-words';

@@ -1,37 +1,51 @@
+import {
+  dueRangeText as rangeWords,
+  fallsDueText as fallsDueWords,
+  fittedMeterText as fittedMeterWords,
+  overText as overWords,
+  remainingDaysText,
+  remainingMeterText as meterWords,
+  remainingText as remainingWords,
+  type DuePoint,
+} from '../../shared/domain';
 import { formatLocalDate, formatMeter } from './fleet-format';
 
-// How the server's due figures read, on the farm's due list and the dealer's board alike. Nothing
-// here computes a forecast: each value is one the server sent, only worded. (The e-mails word
-// them their own way, in server/services/digest.ts: "to go", dates with the weekday.)
-
-const days = (n: number) => `${n} ${Math.abs(n) === 1 ? 'day' : 'days'}`;
+// How the server's due figures read on every screen (due list, dealer board, shop week, machine
+// page). The words live in shared/domain/due-words.ts, which the e-mails use too; here they get
+// the browser's number format and the farm's date format. Nothing here computes a forecast.
 
 /** "37.1 h left", "35 h over", "due now": remaining meter units (negative when past due). */
-export function remainingMeterText(remaining: number, unit: string): string {
-  if (remaining > 0) return `${formatMeter(remaining, unit)} left`;
-  if (remaining < 0) return `${formatMeter(-remaining, unit)} over`;
-  return 'due now';
-}
+export const remainingMeterText = (remaining: number, unit: string): string =>
+  meterWords(remaining, unit, formatMeter);
 
 /** "39 days left", "12 days over", "due today": remaining days (negative when past due). */
-export function remainingDaysText(remaining: number): string {
-  if (remaining > 0) return `${days(remaining)} left`;
-  if (remaining < 0) return `${days(-remaining)} over`;
-  return 'due today';
-}
+export { remainingDaysText };
+
+/** "38 h over · 12 days over": both remaining figures, or null with neither. */
+export const remainingText = (
+  due: Pick<DuePoint, 'remainingMeter' | 'remainingDays'>,
+  unit: string,
+): string | null => remainingWords(due, unit, formatMeter);
+
+/** "38 h over": only the figures past due (every figure when none is). */
+export const overText = (
+  due: Pick<DuePoint, 'remainingMeter' | 'remainingDays'>,
+  unit: string,
+): string | null => overWords(due, unit, formatMeter);
 
 /** "29 Dec 2026": a due or projected date (ISO local date of the farm). */
 export const dueDateText = formatLocalDate;
 
-/**
- * "22 Dec – 29 Dec 2026", "29 Dec 2026 – 14 Jan 2027": the projected range (ISO local dates), one
- * date when both ends agree, null when the server gave no range.
- */
-export function dueRangeText(low: string | null, high: string | null): string | null {
-  if (!low || !high) return null;
-  if (low === high) return dueDateText(low);
-  // within one year the year is said once
-  const start = dueDateText(low);
-  const sameYear = low.slice(0, 4) === high.slice(0, 4);
-  return `${sameYear ? start.replace(/\s+\d{4}$/, '') : start} – ${dueDateText(high)}`;
-}
+/** "22 Dec – 29 Dec 2026": the projected range (ISO local dates), null without one. */
+export const dueRangeText = (low: string | null, high: string | null): string | null =>
+  rangeWords(low, high, formatLocalDate);
+
+/** "234 h (1,956.3 h lifetime)": a value on the meter fitted now, lifetime in brackets. */
+export const fittedMeterText = (onMeter: number, lifetime: number, unit: string): string =>
+  fittedMeterWords(onMeter, lifetime, unit, formatMeter);
+
+/** "overdue — 38 h over" for an overdue task, else the date it falls due; null without one. */
+export const fallsDueText = (
+  due: Pick<DuePoint, 'status' | 'effectiveDate' | 'remainingMeter' | 'remainingDays'>,
+  unit: string,
+): string | null => fallsDueWords(due, unit, { meter: formatMeter, date: formatLocalDate });

@@ -1,5 +1,5 @@
-// The wording of the server's due figures (src/lib/due-format.ts), used by the farm's due list and
-// the dealer's board. The numbers follow the browser's language; the test fixes it to British
+// The wording of the server's due figures (src/lib/due-format.ts: shared/domain/due-words.ts with
+// the browser's number format), used by the due list, dealer board, shop week and machine page. The numbers follow the browser's language; the test fixes it to British
 // English (en-GB) by giving Intl.NumberFormat that default, so the expected strings are that
 // locale's forms (thousands with a comma, a point before the one decimal), written by hand.
 // Dates read 'd MMM yyyy' (date-fns, English month names) whatever the locale.
@@ -10,12 +10,15 @@ let due: DueFormat;
 
 beforeAll(async () => {
   const { NumberFormat } = Intl;
-  vi.stubGlobal('Intl', {
-    ...Intl,
-    NumberFormat: function (locale: string | undefined, options?: Intl.NumberFormatOptions) {
-      return new NumberFormat(locale ?? 'en-GB', options);
-    },
-  });
+  // Intl's members are not enumerable: inherit them all, replacing only NumberFormat.
+  vi.stubGlobal(
+    'Intl',
+    Object.assign(Object.create(Intl) as typeof Intl, {
+      NumberFormat: function (locale: string | undefined, options?: Intl.NumberFormatOptions) {
+        return new NumberFormat(locale ?? 'en-GB', options);
+      },
+    }),
+  );
   vi.resetModules();
   due = await import('../../src/lib/due-format');
 });
@@ -66,6 +69,19 @@ describe('dueDateText', () => {
   });
   it('dueDateText — 2027-04-01 — no leading zero: "1 Apr 2027"', () => {
     expect(due.dueDateText('2027-04-01')).toBe('1 Apr 2027');
+  });
+});
+
+describe('remainingText (the machine page schedule says the same as the due list)', () => {
+  it('remainingText — 12 days past the due date — "12 days over", never "late"', () => {
+    expect(due.remainingText({ remainingMeter: null, remainingDays: -12 }, 'h')).toBe(
+      '12 days over',
+    );
+  });
+  it('remainingText — exactly at the due meter and 20 days to the date — "due now · 20 days left"', () => {
+    expect(due.remainingText({ remainingMeter: 0, remainingDays: 20 }, 'h')).toBe(
+      'due now · 20 days left',
+    );
   });
 });
 

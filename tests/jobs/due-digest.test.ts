@@ -58,12 +58,13 @@ describe('due digest — content (hand-worked due list, see reminders-fixture.ts
     expect(text).toContain(`${APP_URL}/o/${org.id}/machines/${tractor.id}`);
     expect(text).toContain(`${APP_URL}/o/${org.id}/machines/${baler.id}`);
     expect(text).toContain('Overdue: Engine oil and filter');
-    expect(text).toContain('Due at 1,250 h (50 h over)');
+    expect(text).toContain('Due at 1,250 h — 50 h over');
+    expect(text).toContain('Overdue: 50 h over');
     expect(text).toContain('Caution: hot fluids');
     expect(text).toContain('Due soon: Air filter');
-    expect(text).toContain('Due at 1,350 h (50 h to go)');
+    expect(text).toContain('Due at 1,350 h — 50 h left');
     expect(text).toContain('Coming up: Fuel filters');
-    expect(text).toContain('Due at 1,400 h (100 h to go)');
+    expect(text).toContain('Due at 1,400 h — 100 h left');
     // 100 h at 10 h/day from a reading taken now (08:00) → 10.33 days on: Friday 17 April
     expect(text).toContain('Projected Fri, Apr 17, 2026');
     expect(text).toContain('Due soon: Knotter grease');
@@ -85,7 +86,7 @@ describe('due digest — content (hand-worked due list, see reminders-fixture.ts
     expect(text).toContain(`${APP_URL}/o/${org.id}/machines/${loader.id}`);
     expect(text).toContain('Coming up: Grease pins');
     expect(text).toContain(
-      'Projected Sun, Apr 12, 2026 (range Sat, Apr 11, 2026 – Mon, Apr 13, 2026)',
+      'Projected Sun, Apr 12, 2026 (range Sat, Apr 11 – Mon, Apr 13, 2026)',
     );
 
     expect(mail.html).toContain('name="viewport"');

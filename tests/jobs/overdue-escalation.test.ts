@@ -55,7 +55,7 @@ describe('overdue escalation — one message to managers the day a task becomes 
     expect(mail.map((x) => x.to[0]).sort()).toEqual([a.user.email, b.user.email].sort());
     expect(mail.some((x) => x.to[0] === tech.user.email)).toBe(false);
     expect(mail[0].subject).toBe('Overdue: T-01 · Engine oil and filter');
-    expect(mail[0].text).toContain('Due at 1,250 h (2 h over)');
+    expect(mail[0].text).toContain('Due at 1,250 h — 2 h over');
     expect(mail[0].text).toContain(`${APP_URL}/o/${org.id}/machines/${m.id}`);
     const row = (await Notification.findOne({ where: { kind: 'overdue' } }))!;
     expect(row.periodKey).toBe(`${task.id}:1250:`);

@@ -156,7 +156,7 @@ describe('calendar feed — the .ics (RFC 5545, parsed with ical.js)', () => {
     // 200 h at 10 h/day → 20 days on (±1 for the time of day the readings were taken)
     expect([19, 20, 21].map((n) => addDaysIso(today, n))).toContain(oilEvent.start);
     expect(oilEvent.end).toBe(addDaysIso(oilEvent.start, 1));
-    expect(oilEvent.description).toContain('Due at 1,500 h (200 h to go)');
+    expect(oilEvent.description).toContain('Due at 1,500 h — 200 h left');
     expect(oilEvent.description).toContain('Projected');
     expect(oilEvent.description).toContain(`${APP_URL}/o/${org.id}/machines/${tractor.id}`);
     const greaseEvent = events.find((e) => e.uid === `${grease.id}@hourstone`)!;

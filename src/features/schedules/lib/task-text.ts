@@ -1,3 +1,4 @@
+import { remainingText } from '../../../lib/due-format';
 import { formatMeter } from '../../../lib/fleet-format';
 
 const count = new Intl.NumberFormat();
@@ -28,22 +29,16 @@ export function describeWarning(
   return parts.length ? `${parts.join(' or ')} before` : null;
 }
 
-/** The remaining meter and days as a phrase; negative figures read as "over". */
+/**
+ * The remaining meter and days as a phrase ("38 h over · 12 days over", "due now"), in the words
+ * of the due list (src/lib/due-format.ts).
+ */
 export function describeRemaining(
   remainingMeter: number | null,
   remainingDays: number | null,
   unit: string,
 ): string | null {
-  const parts: string[] = [];
-  if (remainingMeter !== null)
-    parts.push(
-      remainingMeter < 0
-        ? `${formatMeter(-remainingMeter, unit)} over`
-        : `${formatMeter(remainingMeter, unit)} left`,
-    );
-  if (remainingDays !== null)
-    parts.push(remainingDays < 0 ? `${days(-remainingDays)} late` : `${days(remainingDays)} left`);
-  return parts.length ? parts.join(' · ') : null;
+  return remainingText({ remainingMeter, remainingDays }, unit);
 }
 
 export { days as formatDays };

@@ -1,0 +1,131 @@
+// How a due point's figures read, wherever they appear: the due list, the dealer board, the shop
+// week, the machine page's schedule, the digest and calendar e-mails. Nothing here computes a
+// forecast; each value is one computeDuePoint gave, only worded. The number and date formats are
+// parameters so the browser can use its language and the e-mails their own; the words are one.
+import type { DuePoint } from './types';
+
+/** How a meter value reads with its unit ("1,943.6 h"); value in meter units. */
+export type MeterFormat = (value: number, unit: string) => string;
+/** How an ISO local date (yyyy-mm-dd) reads ("29 Dec 2026"). */
+export type DateFormat = (iso: string) => string;
+
+// Built on first use, so a module that only borrows the words never needs a date formatter.
+let numberFormat: Intl.NumberFormat | undefined;
+let dateFormat: Intl.DateTimeFormat | undefined;
+const englishNumber = {
+  format: (n: number) =>
+    (numberFormat ??= new Intl.NumberFormat('en', { maximumFractionDigits: 1 })).format(n),
+};
+const englishDate = {
+  format: (d: Date) =>
+    (dateFormat ??= new Intl.DateTimeFormat('en-GB', {
+      day: 'numeric',
+      month: 'short',
+      year: 'numeric',
+      timeZone: 'UTC',
+    })).format(d),
+};
+
+/** "1,943.6 h": meter units with at most one decimal, English grouping. */
+export const englishMeter: MeterFormat = (value, unit) => `${englishNumber.format(value)} ${unit}`;
+/** "29 Dec 2026" for an ISO local date, read as written (never shifted by a time zone). */
+export const englishDateText: DateFormat = (iso) =>
+  englishDate.format(new Date(`${iso}T00:00:00Z`));
+
+const dayCount = (n: number) => `${englishNumber.format(n)} ${Math.abs(n) === 1 ? 'day' : 'days'}`;
+
+/** "37.1 h left", "38 h over", "due now": remaining meter units (negative when past due). */
+export function remainingMeterText(
+  remaining: number,
+  unit: string,
+  meter: MeterFormat = englishMeter,
+): string {
+  if (remaining > 0) return `${meter(remaining, unit)} left`;
+  if (remaining < 0) return `${meter(-remaining, unit)} over`;
+  return 'due now';
+}
+
+/** "39 days left", "12 days over", "due today": remaining calendar days (negative when past due). */
+export function remainingDaysText(remaining: number): string {
+  if (remaining > 0) return `${dayCount(remaining)} left`;
+  if (remaining < 0) return `${dayCount(-remaining)} over`;
+  return 'due today';
+}
+
+/** "38 h over · 12 days over": both remaining figures a due point has, or null with neither. */
+export function remainingText(
+  due: Pick<DuePoint, 'remainingMeter' | 'remainingDays'>,
+  unit: string,
+  meter: MeterFormat = englishMeter,
+): string | null {
+  const parts = [
+    due.remainingMeter !== null ? remainingMeterText(due.remainingMeter, unit, meter) : null,
+    due.remainingDays !== null ? remainingDaysText(due.remainingDays) : null,
+  ].filter((part): part is string => part !== null);
+  return parts.length ? parts.join(' · ') : null;
+}
+
+/**
+ * "38 h over · 12 days over": only the figures that are past due, for an overdue task's "how far
+ * over" (falls back to every figure when none is negative, e.g. exactly at the due meter).
+ */
+export function overText(
+  due: Pick<DuePoint, 'remainingMeter' | 'remainingDays'>,
+  unit: string,
+  meter: MeterFormat = englishMeter,
+): string | null {
+  const past = {
+    remainingMeter:
+      due.remainingMeter !== null && due.remainingMeter < 0 ? due.remainingMeter : null,
+    remainingDays: due.remainingDays !== null && due.remainingDays < 0 ? due.remainingDays : null,
+  };
+  return remainingText(past, unit, meter) ?? remainingText(due, unit, meter);
+}
+
+/**
+ * "22 Dec – 29 Dec 2026", "29 Dec 2026 – 14 Jan 2027": a projected range (ISO local dates), one
+ * date when both ends agree, null without a range. Within one year the year is said once.
+ */
+export function dueRangeText(
+  low: string | null,
+  high: string | null,
+  date: DateFormat = englishDateText,
+): string | null {
+  if (!low || !high) return null;
+  if (low === high) return date(low);
+  const start = date(low);
+  const sameYear = low.slice(0, 4) === high.slice(0, 4);
+  return `${sameYear ? start.replace(/,?\s+\d{4}$/, '') : start} – ${date(high)}`;
+}
+
+/**
+ * "234 h (1,956.3 h lifetime)": a meter value as the meter fitted now reads it, with the lifetime
+ * value in brackets when a meter replacement makes them differ; both in meter units.
+ */
+export function fittedMeterText(
+  onMeter: number,
+  lifetime: number,
+  unit: string,
+  meter: MeterFormat = englishMeter,
+): string {
+  const shown = meter(onMeter, unit);
+  return Math.abs(onMeter - lifetime) < 1e-9
+    ? shown
+    : `${shown} (${meter(lifetime, unit)} lifetime)`;
+}
+
+/**
+ * When a task falls due, in words: "overdue — 38 h over" for an overdue task (whatever date the
+ * projection gave), else its date; null when it cannot be dated.
+ */
+export function fallsDueText(
+  due: Pick<DuePoint, 'status' | 'effectiveDate' | 'remainingMeter' | 'remainingDays'>,
+  unit: string,
+  formats: { meter?: MeterFormat; date?: DateFormat } = {},
+): string | null {
+  if (due.status === 'overdue') {
+    const over = overText(due, unit, formats.meter);
+    return over ? `overdue — ${over}` : 'overdue';
+  }
+  return due.effectiveDate ? (formats.date ?? englishDateText)(due.effectiveDate) : null;
+}

@@ -1,0 +1,60 @@
+// The digest's facts of one task (server/services/digest.ts taskFacts) in the words of every
+// screen; expected strings written by hand.
+import { describe, expect, it } from 'vitest';
+import { taskFacts } from '../../server/services/digest';
+import type { DueRow } from '../../shared/schemas/due';
+
+const row = (due: Partial<DueRow['due']>, dueOnMeter: number | null): DueRow => ({
+  taskId: 't',
+  taskName: 'Engine oil and filter',
+  hazards: [],
+  labourHours: null,
+  machine: {
+    id: 'm',
+    fleetNumber: 'OD-01',
+    name: 'Tractor',
+    category: 'tractor',
+    status: 'in_service',
+    meterUnit: 'h',
+  },
+  due: {
+    status: 'ok',
+    governs: 'meter',
+    dueMeter: null,
+    dueDate: null,
+    projectedDate: null,
+    projectedLow: null,
+    projectedHigh: null,
+    effectiveDate: null,
+    remainingMeter: null,
+    remainingDays: null,
+    basis: 'recorded',
+    ...due,
+  },
+  lastReading: null,
+  dueOnMeter,
+  usage: null,
+});
+
+describe('digest task facts', () => {
+  it('replaced meter — due at the value of the meter fitted now, lifetime in brackets; overdue says how far', () => {
+    // lifetime due 1,956.3 h; the new meter reads 38 h past its 250 h mark (offset 1,706.3 h)
+    const facts = taskFacts(
+      row(
+        { status: 'overdue', dueMeter: 1956.3, remainingMeter: -38, effectiveDate: '2026-04-07' },
+        250,
+      ),
+    );
+    expect(facts).toEqual(['Due at 250 h (1,956.3 h lifetime) — 38 h over', 'Overdue: 38 h over']);
+  });
+
+  it('calendar task — the limit with the days left, then when it falls due', () => {
+    const facts = taskFacts(
+      row({ dueDate: '2026-04-12', remainingDays: 5, effectiveDate: '2026-04-12' }, null),
+    );
+    expect(facts).toEqual([
+      'Calendar limit Sun, Apr 12, 2026 (5 days left)',
+      'Falls due Sun, Apr 12, 2026',
+    ]);
+  });
+});
