@@ -27,7 +27,8 @@ const sortDate = (r: DueRow) =>
 /**
  * Every due row of the dealer's active customers inside the horizon, as each farm's own due list
  * gives it (the due points are never recomputed here), with the customer and the last reading's
- * age. Overdue first, then by the date each task falls due. Each farm read is audited.
+ * age. Overdue first, then by the date each task falls due (whatever the status), as on the farm's
+ * due list. Each farm read is audited.
  */
 export async function boardRows(
   access: OrgAccess,
@@ -40,9 +41,15 @@ export async function boardRows(
   const rows: BoardRow[] = [];
   for (const link of links) {
     const farmAccess = dealerAccessFor(link, link.farm!, access.userId);
+    // Undated tasks fall inside no horizon: the farm's list gives them when asked for by status.
+    const undated = query.status === 'history_unknown' || query.status === 'no_forecast';
     const { rows: due } = await dueList(
       farmAccess,
-      { horizon: query.horizon, category: query.category },
+      {
+        horizon: query.horizon,
+        category: query.category,
+        ...(undated && { status: query.status }),
+      },
       now,
     );
     await recordDealerRead(farmAccess, { entityType: 'due', path });
@@ -74,8 +81,9 @@ export async function boardRows(
   const listed = query.status ? matching.filter((r) => r.due.status === query.status) : matching;
   listed.sort(
     (a, b) =>
-      STATUS_RANK[a.due.status] - STATUS_RANK[b.due.status] ||
+      Number(b.due.status === 'overdue') - Number(a.due.status === 'overdue') ||
       sortDate(a).localeCompare(sortDate(b)) ||
+      STATUS_RANK[a.due.status] - STATUS_RANK[b.due.status] ||
       a.customer.name.localeCompare(b.customer.name) ||
       a.machine.fleetNumber.localeCompare(b.machine.fleetNumber) ||
       a.taskName.localeCompare(b.taskName),

@@ -16,24 +16,38 @@ export type { DueRow } from '../../shared/schemas/due';
 const visibleToOperator = `(NOT EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = m.organization_id AND o.machine_id = m.id)
   OR EXISTS (SELECT 1 FROM machine_operators o WHERE o.organization_id = m.organization_id AND o.machine_id = m.id AND o.user_id = :user))`;
 
-/** The SQL of the due list (also timed bare by the benchmark). */
-export function dueListSql(filters: {
+interface DueFilterFlags {
   category?: boolean;
   status?: boolean;
   machineId?: boolean;
   horizon?: boolean;
   operator?: boolean;
-  page?: boolean;
-}) {
+}
+
+/**
+ * The horizon's rule, one for the list, its total and every caller: a task past its meter or its
+ * date (overdue) is always in; any other task is in when the date it falls due is inside the
+ * horizon. Undated tasks (history unknown, no forecast) have no date to fall inside, so they come
+ * only when the status filter asks for them by name.
+ */
+const HORIZON_RULE = `(d.status = 'overdue' OR d.sort_date <= :until
+  OR (:status::text IN ('history_unknown','no_forecast') AND d.status = :status::text))`;
+
+function dueWhere(filters: DueFilterFlags) {
   const where = ['d.organization_id = :org', "m.status <> 'sold'"];
   if (filters.category) where.push('m.category = :category');
   if (filters.status) where.push('d.status = :status');
   if (filters.machineId) where.push('d.machine_id = :machineId');
-  if (filters.horizon)
-    where.push(
-      "(d.status IN ('overdue','due_soon','history_unknown','no_forecast') OR d.sort_date <= :until)",
-    );
+  if (filters.horizon) where.push(HORIZON_RULE);
   if (filters.operator) where.push(visibleToOperator);
+  return where.join(' AND ');
+}
+
+/**
+ * The SQL of the due list (also timed bare by the benchmark): overdue first, then by the date each
+ * task falls due, whatever its status, so the order matches the list's heading.
+ */
+export function dueListSql(filters: DueFilterFlags & { page?: boolean }) {
   return `SELECT d.task_id, d.due, t.name AS task_name, t.hazards, t.labour_hours,
       m.id AS machine_id, m.fleet_number, m.name AS machine_name, m.category, m.status AS machine_status, m.meter_unit,
       f.last_value, f.last_raw_value, f.last_taken_at, f.usage - 'profile' AS usage
@@ -41,10 +55,16 @@ export function dueListSql(filters: {
     JOIN service_tasks t ON t.id = d.task_id AND t.organization_id = d.organization_id
     JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
     LEFT JOIN machine_forecasts f ON f.machine_id = d.machine_id AND f.organization_id = d.organization_id
-    WHERE ${where.join(' AND ')}
-    ORDER BY d.status_rank, d.sort_date ASC NULLS LAST, d.task_id
+    WHERE ${dueWhere(filters)}
+    ORDER BY (d.status = 'overdue') DESC, d.sort_date ASC NULLS LAST, d.status_rank, d.task_id
     ${filters.page ? 'LIMIT :limit OFFSET :offset' : ''}`;
 }
+
+/** The SQL of the list's length with the same filters (for its pager). */
+export const dueTotalSql = (filters: DueFilterFlags) =>
+  `SELECT count(*)::int AS n FROM task_due_points d
+     JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
+     WHERE ${dueWhere(filters)}`;
 
 interface RawDueRow {
   task_id: string;
@@ -64,7 +84,10 @@ interface RawDueRow {
   usage: Pick<Usage, 'method' | 'rate' | 'low' | 'high'> | null;
 }
 
-/** The due list of an organization: overdue first, then by the date each task falls due. */
+/**
+ * The due list of an organization: overdue first, then by the date each task falls due; the
+ * counts by status describe the whole fleet (any horizon), total is the list's own length.
+ */
 export async function dueList(
   access: OrgAccess,
   query: DueQuery & { page?: number; pageSize?: number },
@@ -74,29 +97,29 @@ export async function dueList(
   await ensureDuePointsCurrent(organization.id, organization.timeZone, now);
   const asOf = todayIso(organization.timeZone, now);
   const operator = hasRole(access, 'operator');
-  const sql = dueListSql({
+  const flags = {
     category: !!query.category,
     status: !!query.status,
     machineId: !!query.machineId,
     horizon: !!query.horizon,
     operator,
-    page: query.pageSize !== undefined,
-  });
+  };
   const pageSize = query.pageSize ?? 0;
   const page = query.page ?? 1;
-  const raw = await sequelize.query<RawDueRow>(sql, {
-    replacements: {
-      org: organization.id,
-      user: access.userId,
-      category: query.category ?? null,
-      status: query.status ?? null,
-      machineId: query.machineId ?? null,
-      until: query.horizon ? addDaysIso(asOf, query.horizon) : null,
-      limit: pageSize,
-      offset: (page - 1) * pageSize,
-    },
-    type: QueryTypes.SELECT,
-  });
+  const replacements = {
+    org: organization.id,
+    user: access.userId,
+    category: query.category ?? null,
+    status: query.status ?? null,
+    machineId: query.machineId ?? null,
+    until: query.horizon ? addDaysIso(asOf, query.horizon) : null,
+    limit: pageSize,
+    offset: (page - 1) * pageSize,
+  };
+  const raw = await sequelize.query<RawDueRow>(
+    dueListSql({ ...flags, page: query.pageSize !== undefined }),
+    { replacements, type: QueryTypes.SELECT },
+  );
   const rows: DueRow[] = raw.map((r) => ({
     taskId: r.task_id,
     taskName: r.task_name,
@@ -131,39 +154,46 @@ export async function dueList(
       high: r.usage.high,
     },
   }));
-  const counts = await dueCounts(access, query, asOf);
-  const total = query.status
-    ? counts[query.status]
-    : Object.values(counts).reduce((a, b) => a + b, 0);
-  return { asOf, rows, counts, total, stale: await staleMachines(access, asOf, now) };
+  const counts = await dueCounts(access, query);
+  const total =
+    query.pageSize === undefined
+      ? rows.length
+      : (
+          await sequelize.query<{ n: number }>(dueTotalSql(flags), {
+            replacements,
+            type: QueryTypes.SELECT,
+          })
+        )[0].n;
+  const machines = await fleetSize(access);
+  return { asOf, rows, counts, machines, total, stale: await staleMachines(access, asOf, now) };
 }
 
-/** The SQL of the due counters: tasks per status, with the list's filters (status aside). */
-export function dueCountsSql(filters: {
-  category?: boolean;
-  machineId?: boolean;
-  horizon?: boolean;
-  operator?: boolean;
-}) {
-  const where = ['d.organization_id = :org', "m.status <> 'sold'"];
-  if (filters.category) where.push('m.category = :category');
-  if (filters.machineId) where.push('d.machine_id = :machineId');
-  if (filters.horizon)
-    where.push(
-      "(d.status IN ('overdue','due_soon','history_unknown','no_forecast') OR d.sort_date <= :until)",
-    );
-  if (filters.operator) where.push(visibleToOperator);
+/** Machines of the fleet (not sold) the caller sees: 0 tells an empty farm from a quiet one. */
+async function fleetSize(access: OrgAccess) {
+  const operator = hasRole(access, 'operator');
+  const [row] = await sequelize.query<{ n: number }>(
+    `SELECT count(*)::int AS n FROM machines m
+      WHERE m.organization_id = :org AND m.status <> 'sold' ${operator ? `AND ${visibleToOperator}` : ''}`,
+    { replacements: { org: access.organization.id, user: access.userId }, type: QueryTypes.SELECT },
+  );
+  return row.n;
+}
+
+/**
+ * The SQL of the due counters: tasks per status across the whole fleet (the category and machine
+ * filters apply; the horizon and status do not), so "OK" counts every task that is fine.
+ */
+export function dueCountsSql(filters: Pick<DueFilterFlags, 'category' | 'machineId' | 'operator'>) {
   return `SELECT d.status, count(*)::int AS n FROM task_due_points d
      JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
-     WHERE ${where.join(' AND ')} GROUP BY d.status`;
+     WHERE ${dueWhere(filters)} GROUP BY d.status`;
 }
 
-/** Tasks per status with the same filters as the list (status aside), for the counters. */
-async function dueCounts(access: OrgAccess, query: DueQuery, asOf: string) {
+/** Tasks per status of the fleet (category and machine filters only), for the count cards. */
+async function dueCounts(access: OrgAccess, query: DueQuery) {
   const sql = dueCountsSql({
     category: !!query.category,
     machineId: !!query.machineId,
-    horizon: !!query.horizon,
     operator: hasRole(access, 'operator'),
   });
   const rows = await sequelize.query<{ status: DuePoint['status']; n: number }>(sql, {
@@ -172,7 +202,6 @@ async function dueCounts(access: OrgAccess, query: DueQuery, asOf: string) {
       user: access.userId,
       category: query.category ?? null,
       machineId: query.machineId ?? null,
-      until: query.horizon ? addDaysIso(asOf, query.horizon) : null,
     },
     type: QueryTypes.SELECT,
   });

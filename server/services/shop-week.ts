@@ -57,7 +57,8 @@ export function sumLines(records: { parts: ServicePart[]; fluids: ServiceFluid[]
 /**
  * The shop's week from a start date: per day the planned records (estimated labour from their
  * tasks, parts to pull summed by part number) and the tasks falling due that day from the stored
- * due points (the due list; nothing is recomputed here), plus what is overdue before the week.
+ * due points (the due list; nothing is recomputed here), plus everything overdue (past its meter
+ * or its date), which no day lists.
  * Plans carry their machine and technician ids; the presenter names them.
  */
 export async function shopWeek(access: OrgAccess, startIso?: string) {
@@ -134,7 +135,10 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
   const days = Array.from({ length: 7 }, (_, i) => {
     const date = addDaysIso(start, i);
     const records = planned.filter((r) => r.plannedFor === date);
-    const dueRows = due.rows.filter((row) => row.due.effectiveDate === date).map(withBooking);
+    // An overdue task is filed under Overdue, never under a day (its date may say today).
+    const dueRows = due.rows
+      .filter((row) => row.due.status !== 'overdue' && row.due.effectiveDate === date)
+      .map(withBooking);
     const lines = sumLines(records);
     const items = records.map(plannedItem);
     return {
@@ -151,12 +155,8 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
       fluidsToPull: lines.fluids,
     };
   });
-  const overdue = due.rows
-    .filter(
-      (row) =>
-        row.due.status === 'overdue' && (!row.due.effectiveDate || row.due.effectiveDate < start),
-    )
-    .map(withBooking);
+  // Past its meter or its date is overdue, whichever week is shown.
+  const overdue = due.rows.filter((row) => row.due.status === 'overdue').map(withBooking);
   const week = sumLines(planned);
   return {
     start,

@@ -75,7 +75,10 @@ export const dueListResponseSchema = z.object({
     total: z.number(),
     page: z.number(),
     pageSize: z.number(),
+    /** tasks per status across the whole fleet (category and machine filters only, any horizon) */
     counts: dueCountsSchema,
+    /** machines in the fleet (not sold) the caller sees: 0 on a farm that has none yet */
+    machines: z.number(),
     stale: z.array(staleMeterSchema),
   }),
 });

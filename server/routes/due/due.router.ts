@@ -15,16 +15,16 @@ export function dueRouter(): Router {
     method: 'get',
     path: '/organizations/:orgId/due',
     summary:
-      'The due list across the farm: overdue first, then by projected date; counts and stale meters',
+      'The due list across the farm: overdue first, then by the date each task falls due; counts by status of the whole fleet, its size, and stale meters',
     tags: ['due'],
     params: orgParams,
     query: dueListQuerySchema,
     response: dueListResponseSchema,
     handler: async ({ req, query }) => {
-      const { asOf, rows, counts, stale, total } = await dueList(req.access!, query);
+      const { asOf, rows, counts, machines, stale, total } = await dueList(req.access!, query);
       return {
         data: rows,
-        meta: { asOf, counts, stale, total, page: query.page, pageSize: query.pageSize },
+        meta: { asOf, counts, machines, stale, total, page: query.page, pageSize: query.pageSize },
       };
     },
   });
@@ -42,7 +42,10 @@ export function dueRouter(): Router {
         machineId: params.machineId,
       });
       const own = stale.filter((s) => s.machine.id === params.machineId);
-      return { data: rows, meta: { asOf, counts, stale: own, total, page: 1, pageSize: total } };
+      return {
+        data: rows,
+        meta: { asOf, counts, machines: 1, stale: own, total, page: 1, pageSize: total },
+      };
     },
   });
 

@@ -89,6 +89,14 @@ export function DashboardPage() {
           filters={filters}
           onFiltersChange={changeFilters}
           machineHref={(machineId) => paths.organization.machine.href(organization.id, machineId)}
+          emptyFleetLinks={
+            membership.role === 'manager'
+              ? {
+                  addMachine: paths.organization.machineNew.href(organization.id),
+                  importFleet: paths.organization.importFleet.href(organization.id),
+                }
+              : undefined
+          }
           logHoursHref={
             LOGS_HOURS.has(membership.role)
               ? (fleetNumber) => paths.organization.logHours.href(organization.id, fleetNumber)

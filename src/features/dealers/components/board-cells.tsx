@@ -1,5 +1,5 @@
 import { Icon } from '../../../components/ui/icons';
-import { dueDateText, dueRangeText } from '../../../lib/due-format';
+import { dueDateText, dueRangeText, overText } from '../../../lib/due-format';
 import type { BoardRow } from '../api/types';
 import { isStaleReading, meterText, readingAgeText } from './dealer-format';
 
@@ -23,6 +23,14 @@ export function DueAt({ row }: { row: BoardRow }) {
 
 /** The date it falls due and the projected range (slower and faster use). */
 export function Projected({ row }: { row: BoardRow }) {
+  // past its meter or its date: overdue, with how far, never "falls due today"
+  if (row.due.status === 'overdue')
+    return (
+      <span className="flex flex-col font-bold text-poppy-800">
+        <span>Overdue</span>
+        <span className="text-sm">{overText(row.due, row.machine.meterUnit)}</span>
+      </span>
+    );
   const range = dueRangeText(row.due.projectedLow, row.due.projectedHigh);
   if (!row.due.effectiveDate && !range) return <span className="text-field-600">No forecast</span>;
   return (

@@ -1,6 +1,9 @@
 import { useRef } from 'react';
+import { Link } from 'react-router-dom';
+import { CATEGORY_LABELS, DUE_STATUS_LABELS } from '../../../../shared/constants';
+import type { DueStatus } from '../../../../shared/domain/types';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
+import { Button, buttonClasses } from '../../../components/ui/button';
 import { Section } from '../../../components/ui/card';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
@@ -23,6 +26,13 @@ interface DueBoardProps {
   onFiltersChange: (change: FilterChange) => void;
   machineHref: (machineId: string) => string;
   logHoursHref?: (fleetNumber: string) => string;
+  /** where to add or import machines; given to those who may (an empty farm points there) */
+  emptyFleetLinks?: EmptyFleetLinks;
+}
+
+interface EmptyFleetLinks {
+  addMachine: string;
+  importFleet: string;
 }
 
 /** A farm's due board: counts by status, filters, the due list and the stale meters. */
@@ -32,6 +42,7 @@ export function DueBoard({
   onFiltersChange,
   machineHref,
   logHoursHref,
+  emptyFleetLinks,
 }: DueBoardProps) {
   const due = useDue(orgId, filters);
   const listTop = useRef<HTMLDivElement>(null);
@@ -50,17 +61,28 @@ export function DueBoard({
 
   const { data: rows, meta } = due.data;
   const filtered = filters.category !== null || filters.status !== null;
+  if (meta.machines === 0 && !filtered) return <EmptyFleet links={emptyFleetLinks} />;
+  const category = filters.category ? CATEGORY_LABELS[filters.category].toLowerCase() : null;
 
   return (
     <div className="flex flex-col gap-8">
-      <StatusCounts
-        counts={meta.counts}
-        active={filters.status}
-        onSelect={(status) => onFiltersChange({ status })}
-      />
+      <section aria-labelledby="due-counts-heading" className="flex flex-col gap-2">
+        <h2 id="due-counts-heading" className="text-lg font-bold text-field-900">
+          {category ? `Every ${category} task by status` : 'Every task of the fleet by status'}
+        </h2>
+        <p className="text-sm text-field-700">
+          Counted at any horizon, whatever the list below shows. Choose one to list only those.
+        </p>
+        <StatusCounts
+          label="Task counts across the fleet"
+          counts={meta.counts}
+          active={filters.status}
+          onSelect={(status) => onFiltersChange({ status })}
+        />
+      </section>
       <Section
         title="Due list"
-        description={`Overdue first, then by date, within the next ${filters.horizon} days. As of ${formatLocalDate(meta.asOf)}.`}
+        description={`${dueListScope(filters.status, filters.horizon)} As of ${formatLocalDate(meta.asOf)}.`}
       >
         <DueFiltersBar filters={filters} onChange={onFiltersChange} />
         {due.isError ? <Alert>Couldn't refresh the due list: {due.error.message}</Alert> : null}
@@ -120,6 +142,43 @@ export function DueBoard({
       </Section>
       <StaleMeters stale={meta.stale} machineHref={machineHref} logHoursHref={logHoursHref} />
     </div>
+  );
+}
+
+/**
+ * What the list holds, in the order it holds it: the horizon's rule (overdue, then what falls due
+ * inside it) and, for undated statuses, that no horizon applies.
+ */
+export function dueListScope(status: DueStatus | null, horizon: number): string {
+  const within = `within the next ${horizon} days, by date.`;
+  if (status === null) return `Everything overdue, then what falls due ${within}`;
+  if (status === 'overdue') return 'Every overdue task, by date.';
+  if (status === 'history_unknown')
+    return 'Tasks whose last service is not known yet: no date until last done is set.';
+  if (status === 'no_forecast') return 'Tasks without enough readings to date them.';
+  return `${DUE_STATUS_LABELS[status]} tasks that fall due ${within}`;
+}
+
+/** An empty farm: nothing can be due until there are machines, so say how to add them. */
+function EmptyFleet({ links }: { links?: EmptyFleetLinks }) {
+  return (
+    <EmptyState icon="info" title="No machines yet">
+      <p>
+        {links
+          ? 'The due list fills in once the fleet is here: add machines one by one, or import them from a spreadsheet, then log their hour meters.'
+          : 'The due list fills in once the farm manager adds or imports the machines.'}
+      </p>
+      {links ? (
+        <div className="mt-3 flex flex-wrap gap-3">
+          <Link to={links.addMachine} className={buttonClasses('primary')}>
+            Add a machine
+          </Link>
+          <Link to={links.importFleet} className={buttonClasses('secondary')}>
+            Import machines
+          </Link>
+        </div>
+      ) : null}
+    </EmptyState>
   );
 }
 

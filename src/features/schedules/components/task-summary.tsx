@@ -9,7 +9,14 @@ import { describeRemaining } from '../lib/task-text';
 export function DueSummary({ due, unit }: { due: DuePoint; unit: string }) {
   const at = [
     due.dueMeter !== null ? formatMeter(due.dueMeter, unit) : null,
-    due.effectiveDate ? formatLocalDate(due.effectiveDate) : null,
+    // overdue: the limit that passed, not the date the projection was clamped to (today)
+    due.status === 'overdue'
+      ? due.dueDate && (due.remainingDays ?? 0) < 0
+        ? formatLocalDate(due.dueDate)
+        : null
+      : due.effectiveDate
+        ? formatLocalDate(due.effectiveDate)
+        : null,
   ].filter(Boolean);
   const remaining = describeRemaining(due.remainingMeter, due.remainingDays, unit);
   if (!at.length && !remaining) return null;

@@ -3,7 +3,8 @@ import { Badge } from '../../../components/ui/badge';
 import { Caution } from '../../../components/ui/caution';
 import { DueStatusBadge } from '../../../components/ui/status-badges';
 import { hazardNames } from '../../../lib/caution-text';
-import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
+import { fittedMeterText, overText } from '../../../lib/due-format';
+import { formatLocalDate } from '../../../lib/fleet-format';
 import type { PullFluid, PullPart, ShopDueRow, ShopPlanned } from '../api/types';
 import { formatHours, formatQuantity } from '../lib/record-format';
 
@@ -15,7 +16,7 @@ export interface ShopLinks {
 }
 
 const link =
-  'font-bold text-field-800 underline decoration-field-300 underline-offset-2 hover:text-field-950';
+  'inline-flex min-h-touch items-center font-bold text-field-800 underline decoration-field-300 underline-offset-2 hover:text-field-950';
 
 /** A booked visit: machine, tasks, who, the estimated labour, and a link to the plan. */
 export function PlannedItem({ item, links }: { item: ShopPlanned; links: ShopLinks }) {
@@ -63,8 +64,15 @@ export function DueItem({
   const unit = row.machine.meterUnit;
   const due = row.due;
   const when = [
-    due.dueMeter !== null ? `at ${formatMeter(due.dueMeter, unit)}` : null,
-    due.effectiveDate ? `on ${formatLocalDate(due.effectiveDate)}` : null,
+    due.dueMeter !== null
+      ? `at ${fittedMeterText(row.dueOnMeter ?? due.dueMeter, due.dueMeter, unit)}`
+      : null,
+    // an overdue task says how far over, not the date its projection was clamped to
+    due.status === 'overdue'
+      ? `— ${overText(due, unit)}`
+      : due.effectiveDate
+        ? `on ${formatLocalDate(due.effectiveDate)}`
+        : null,
   ]
     .filter(Boolean)
     .join(' ');
