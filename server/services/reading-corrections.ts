@@ -50,10 +50,14 @@ export async function correctReading(
     const previous = [...existing].reverse().find((r) => r.takenAtMs <= takenAt.getTime());
     const next = existing.find((r) => r.takenAtMs > takenAt.getTime());
     const violation = checkReading(
-      { value: lifetime, takenAtMs: takenAt.getTime() },
+      { value: lifetime, takenAtMs: takenAt.getTime(), raw: value },
       {
-        previous: previous && { value: previous.lifetimeValue, takenAtMs: previous.takenAtMs },
-        next: next && { value: next.lifetimeValue, takenAtMs: next.takenAtMs },
+        previous: previous && {
+          value: previous.lifetimeValue,
+          takenAtMs: previous.takenAtMs,
+          raw: previous.value,
+        },
+        next: next && { value: next.lifetimeValue, takenAtMs: next.takenAtMs, raw: next.value },
       },
       {
         nowMs: Date.now(),

@@ -115,10 +115,15 @@ export async function planReadings(
       const previous = [...merged].reverse().find((r) => r.takenAtMs <= takenAtMs);
       const next = merged.find((r) => r.takenAtMs > takenAtMs);
       const violation = checkReading(
-        { value: lifetime, takenAtMs },
+        // each with the value its meter showed, so a refusal speaks in the meter fitted now
+        { value: lifetime, takenAtMs, raw: item.value },
         {
-          previous: previous && { value: previous.lifetime, takenAtMs: previous.takenAtMs },
-          next: next && { value: next.lifetime, takenAtMs: next.takenAtMs },
+          previous: previous && {
+            value: previous.lifetime,
+            takenAtMs: previous.takenAtMs,
+            raw: previous.raw,
+          },
+          next: next && { value: next.lifetime, takenAtMs: next.takenAtMs, raw: next.raw },
         },
         { nowMs, meterUnit: machine.meterUnit, formatTime: fmt },
       );

@@ -7,6 +7,11 @@
 export interface ReadingAt {
   value: number;
   takenAtMs: number;
+  /**
+   * the value the meter fitted at the time showed (meter units), when a meter replacement makes it
+   * differ from the lifetime value: messages then speak in it, lifetime in brackets
+   */
+  raw?: number;
 }
 
 /** Names of the reading rules. */
@@ -73,8 +78,13 @@ export function checkReading(
   const known = DEFAULT_MAX_PER_DAY as Record<string, number>;
   const maxPerDay = opts.maxPerDay ?? known[unit] ?? Number.POSITIVE_INFINITY;
   const shown = (value: number) => `${formatValue(value)} ${unit}`;
+  // "300 h (2,009.4 h lifetime)": as the person read it off the meter, lifetime in brackets
+  const reading = (r: ReadingAt) =>
+    r.raw === undefined || Math.abs(r.raw - r.value) < 1e-9
+      ? shown(r.value)
+      : `${shown(r.raw)} (${shown(r.value)} lifetime)`;
   const describe = (label: string, r: ReadingAt) =>
-    `the ${label} reading of ${shown(r.value)} taken ${time(r.takenAtMs)}`;
+    `the ${label} reading of ${reading(r)} taken ${time(r.takenAtMs)}`;
   const { previous, next } = neighbours;
 
   if (candidate.takenAtMs > opts.nowMs + skewMs) {
@@ -89,14 +99,14 @@ export function checkReading(
     return {
       field: 'value',
       rule: 'backwards',
-      message: `Reading ${shown(candidate.value)} is lower than ${describe('previous', previous)} — readings may not go backwards.`,
+      message: `Reading ${reading(candidate)} is lower than ${describe('previous', previous)} — readings may not go backwards.`,
     };
   }
   if (next && candidate.value > next.value) {
     return {
       field: 'value',
       rule: 'above_next',
-      message: `Reading ${shown(candidate.value)} is higher than ${describe('next', next)} — a reading may not be above a later one.`,
+      message: `Reading ${reading(candidate)} is higher than ${describe('next', next)} — a reading may not be above a later one.`,
     };
   }
 
@@ -120,7 +130,7 @@ export function checkReading(
     return {
       field: 'value',
       rule: 'too_fast',
-      message: `Reading ${shown(candidate.value)} implies ${pace(sincePrevious.increase, sincePrevious.elapsedMs)} since ${describe('previous', previous)} — ${limit}`,
+      message: `Reading ${reading(candidate)} implies ${pace(sincePrevious.increase, sincePrevious.elapsedMs)} since ${describe('previous', previous)} — ${limit}`,
     };
   }
   const untilNext = next ? tooFast(candidate, next) : null;
@@ -128,7 +138,7 @@ export function checkReading(
     return {
       field: 'value',
       rule: 'too_fast',
-      message: `Reading ${shown(candidate.value)} leaves ${pace(untilNext.increase, untilNext.elapsedMs)} until ${describe('next', next)} — ${limit}`,
+      message: `Reading ${reading(candidate)} leaves ${pace(untilNext.increase, untilNext.elapsedMs)} until ${describe('next', next)} — ${limit}`,
     };
   }
   return null;

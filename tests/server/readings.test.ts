@@ -258,6 +258,16 @@ describe('readings API — corrections and meter replacement', () => {
     // a raw value of 20 on the new meter would be lifetime 4,120: below 4,130 → backwards
     const back = await agent.post(url).send({ value: 20, takenAt: iso(30_000) });
     expect(back.status).toBe(422);
-    expect(back.body.error.fields.value).toMatch(/4,130 h/);
+    // the refusal speaks in the meter fitted now, the lifetime value in brackets
+    expect(back.body.error.fields.value).toMatch(
+      /^Reading 20 h \(4,120 h lifetime\) is lower than the previous reading of 30 h \(4,130 h lifetime\) taken /,
+    );
+    // 300 h on the new meter, a minute after 30 h: too fast, in the same words
+    const fast = await agent.post(url).send({ value: 300 });
+    expect(fast.status).toBe(422);
+    expect(fast.body.error.fields.value).toMatch(/^Reading 300 h \(4,400 h lifetime\) implies /);
+    expect(fast.body.error.fields.value).toContain(
+      'since the previous reading of 30 h (4,130 h lifetime) taken',
+    );
   });
 });
