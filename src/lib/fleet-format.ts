@@ -1,5 +1,5 @@
 import { TZDate } from '@date-fns/tz';
-import { format, parseISO } from 'date-fns';
+import { format } from 'date-fns';
 import { METER_UNIT_LABELS, type MeterUnit } from '../../shared/constants';
 
 // Formatting of meter values and the farm's local dates, shared by the fleet, schedule and due
@@ -23,13 +23,8 @@ const smallRateNumber = new Intl.NumberFormat(undefined, { maximumSignificantDig
 export const formatRate = (rate: number): string =>
   Math.abs(rate) < 1 && rate !== 0 ? smallRateNumber.format(rate) : rateNumber.format(rate);
 
-/**
- * An ISO local date of the farm (yyyy-mm-dd) for display. Parsed as a local calendar date, never
- * as an instant: `new Date('2027-04-29')` is UTC midnight and shows the day before in the Americas.
- */
-export function formatLocalDate(isoDate: string): string {
-  return format(parseISO(isoDate), 'd MMM yyyy');
-}
+/** Farm calendar dates read as every other date on screen (src/lib/format.ts). */
+export { formatLocalDate } from './format';
 
 /** The value of a datetime-local input ("2026-05-01T07:30") for an instant, in the farm's zone. */
 export function toDateTimeLocalValue(instant: Date | string, timeZone: string): string {

@@ -42,6 +42,61 @@ describe('format — dates in the organization’s time zone', () => {
   });
 });
 
+describe('format — one date and time style per language (issue 10)', () => {
+  // 19:43 UTC on 1 December 2026 is 13:43 in Chicago (CST, UTC−6). Expected strings are CLDR's
+  // medium date and short time of each locale, written by hand.
+  const instant = '2026-12-01T19:43:00Z';
+
+  it('formatDateTime — en-US — "Dec 1, 2026, 1:43 PM"; en-GB — "1 Dec 2026, 13:43"', () => {
+    expect(format.formatDateTime(instant, 'America/Chicago', 'en-US')).toBe('Dec 1, 2026, 1:43 PM');
+    expect(format.formatDateTime(instant, 'America/Chicago')).toBe('1 Dec 2026, 13:43');
+  });
+
+  it('formatLocalDate — a farm calendar date reads as formatDate does, in each locale', () => {
+    expect(format.formatLocalDate('2026-12-01', 'en-US')).toBe('Dec 1, 2026');
+    expect(format.formatLocalDate('2026-12-01')).toBe('1 Dec 2026');
+    expect(format.formatLocalDate('2026-12-01', 'en-US')).toBe(
+      format.formatDate(instant, 'America/Chicago', 'en-US'),
+    );
+  });
+
+  it('formatLocalDate — a calendar date is that day in any zone (never UTC midnight the day before)', () => {
+    expect(format.formatLocalDate('2027-04-29')).toBe('29 Apr 2027');
+    expect(format.formatLocalDate('2027-01-01', 'en-US')).toBe('Jan 1, 2027');
+  });
+
+  it('formatDayTime — without the year — en-US "Dec 1, 1:43 PM"; en-GB "1 Dec, 13:43"', () => {
+    expect(format.formatDayTime(instant, 'America/Chicago', 'en-US')).toBe('Dec 1, 1:43 PM');
+    expect(format.formatDayTime(instant, 'America/Chicago')).toBe('1 Dec, 13:43');
+  });
+
+  it('formatDateTime — the farm’s zone, not the reader’s: Dublin 19:43, Chicago 13:43', () => {
+    expect(format.formatDateTime(instant, 'Europe/Dublin')).toBe('1 Dec 2026, 19:43');
+  });
+});
+
+describe('format — formatTimeZoneName', () => {
+  it('America/Chicago — "Central Time (Chicago)" (CLDR long generic name and the city)', () => {
+    expect(format.formatTimeZoneName('America/Chicago', 'en-US')).toBe('Central Time (Chicago)');
+  });
+
+  it('America/Argentina/Buenos_Aires — the city with spaces', () => {
+    expect(format.formatTimeZoneName('America/Argentina/Buenos_Aires', 'en-US')).toBe(
+      'Argentina Standard Time (Buenos Aires)',
+    );
+  });
+
+  it('UTC — no generic name, so the zone as it is written: "UTC"', () => {
+    expect(format.formatTimeZoneName('UTC', 'en-US')).toBe('UTC');
+  });
+
+  it('never the database name with its slash', () => {
+    for (const zone of ['Europe/Dublin', 'Pacific/Auckland', 'America/Winnipeg']) {
+      expect(format.formatTimeZoneName(zone, 'en-GB')).not.toContain('/');
+    }
+  });
+});
+
 describe('format — formatRelative', () => {
   const now = new Date('2026-04-07T12:00:00Z');
   const later = (seconds: number) => new Date(now.getTime() + seconds * 1000).toISOString();

@@ -1,6 +1,6 @@
 import { NavLink } from 'react-router-dom';
 import { cx } from '../../../components/ui/cx';
-import { formatDateTime } from '../../../lib/format';
+import { formatDateTime, readerTimeZone } from '../../../lib/format';
 import type { CaughtMail } from '../api/get-mail';
 
 interface MailListProps {
@@ -28,7 +28,7 @@ export function MailList({ messages, hrefFor }: MailListProps) {
             <span className="font-bold text-field-950">{message.subject || '(no subject)'}</span>
             <span className="truncate text-sm text-field-700">To {message.to.join(', ')}</span>
             <span className="text-xs text-field-600">
-              {message.date ? formatDateTime(message.date) : 'no date'}
+              {message.date ? formatDateTime(message.date, readerTimeZone()) : 'no date'}
             </span>
           </NavLink>
         </li>

@@ -1,4 +1,4 @@
-import { formatDateTime } from '../../../lib/format';
+import { formatDateTime, readerTimeZone } from '../../../lib/format';
 import { MessageBody } from '../../../components/ui/message-body';
 import type { CaughtMail } from '../api/get-mail';
 
@@ -18,7 +18,7 @@ export function MailViewer({ message }: { message: CaughtMail }) {
           <dt>To</dt>
           <dd className="break-all">{message.to.join(', ')}</dd>
           <dt>Date</dt>
-          <dd>{message.date ? formatDateTime(message.date) : '—'}</dd>
+          <dd>{message.date ? formatDateTime(message.date, readerTimeZone()) : '—'}</dd>
         </dl>
       </header>
 

@@ -7,6 +7,7 @@ import { Button } from '../../../components/ui/button';
 import { SelectField } from '../../../components/ui/field';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useUpdateDigestHour } from '../api/update-digest-hour';
+import { formatTimeZoneName } from '../../../lib/format';
 
 /** "06:00": an hour of the farm's day. */
 export const hourLabel = (hour: number) => `${String(hour).padStart(2, '0')}:00`;
@@ -56,7 +57,7 @@ export function DigestHourForm({
       {saved ? <Alert tone="success">Saved. Reminders go out from then on.</Alert> : null}
       <SelectField
         label="Digest hour"
-        hint={`Local time of the farm (${timeZone}). Due lists and log-hours reminders are sent from this hour on, once a day.`}
+        hint={`Local time of the farm (${formatTimeZoneName(timeZone)}). Due lists and log-hours reminders are sent from this hour on, once a day.`}
         options={HOUR_OPTIONS}
         error={errors.digestHour?.message}
         {...register('digestHour', { valueAsNumber: true })}

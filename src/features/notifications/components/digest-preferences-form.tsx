@@ -18,6 +18,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { useSavePreferences } from '../api/save-preferences';
 import type { ReminderPreferences } from '../api/types';
 import { hourLabel } from './digest-hour-form';
+import { formatTimeZoneName } from '../../../lib/format';
 
 interface DigestPreferencesFormProps {
   orgId: string;
@@ -87,8 +88,8 @@ export function DigestPreferencesForm({ orgId, preferences }: DigestPreferencesF
         <legend className="mb-1.5 font-bold text-field-900">How often</legend>
         <p className="-mt-1 text-sm text-field-600">
           Overdue, due soon and what the forecast brings due in the next {DIGEST_HORIZON_DAYS} days,
-          per machine. It goes out after {hourLabel(meta.digestHour)} ({meta.timeZone}) and only
-          when something is due.
+          per machine. It goes out after {hourLabel(meta.digestHour)} (
+          {formatTimeZoneName(meta.timeZone)}) and only when something is due.
         </p>
         <div className="grid gap-2 sm:grid-cols-3">
           {DIGEST_FREQUENCIES.map((value) => (

@@ -1,4 +1,5 @@
 import type { UnitSystem } from '../../../../shared/constants';
+import { formatTimeZoneName } from '../../../lib/format';
 
 const LOCAL_FORMAT: Record<UnitSystem, { pattern: string; example: string }> = {
   imperial: { pattern: 'MM/DD/YYYY', example: '05/01/2026 07:30' },
@@ -25,7 +26,8 @@ export function ImportFormatHelp({ units, timeZone }: { units: UnitSystem; timeZ
         <li>
           <strong>Taken at</strong> is an ISO date (2026-05-01 or 2026-05-01T07:30) or this
           farm&apos;s local format, <strong>{local.pattern}</strong> with an optional time. Times
-          without a zone are farm time ({timeZone}); a date alone counts as midday.
+          without a zone are farm time ({formatTimeZoneName(timeZone)}); a date alone counts as
+          midday.
         </li>
         <li>
           Nothing is imported while any row has an error. Rows already recorded are skipped, so

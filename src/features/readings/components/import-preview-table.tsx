@@ -1,7 +1,6 @@
-import { TZDate } from '@date-fns/tz';
-import { format } from 'date-fns';
 import { cx } from '../../../components/ui/cx';
 import { formatMeter } from '../../../lib/fleet-format';
+import { formatDateTime } from '../../../lib/format';
 import { useMediaQuery } from '../../../lib/use-media-query';
 import type { ImportPreviewRow } from '../api/types';
 import { ImportStatus } from './import-status';
@@ -18,9 +17,7 @@ export const errorsFirst = (rows: ImportPreviewRow[]) =>
   );
 
 const takenAtText = (row: ImportPreviewRow, timeZone: string) =>
-  row.takenAt
-    ? format(new TZDate(new Date(row.takenAt).getTime(), timeZone), 'd MMM yyyy, HH:mm')
-    : '—';
+  row.takenAt ? formatDateTime(row.takenAt, timeZone) : '—';
 
 const valueText = (row: ImportPreviewRow) =>
   row.value === null

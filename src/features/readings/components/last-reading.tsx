@@ -1,6 +1,6 @@
-import { TZDate } from '@date-fns/tz';
-import { format, formatDistanceToNowStrict } from 'date-fns';
+import { formatDistanceToNowStrict } from 'date-fns';
 import { formatMeter } from '../../../lib/fleet-format';
+import { formatDateTime } from '../../../lib/format';
 
 /** "3,118 h · 2 days ago", with the exact farm-local time on hover and for machines. */
 export function LastReading({
@@ -14,7 +14,7 @@ export function LastReading({
 }) {
   if (!reading) return <span className="text-field-600">No reading yet</span>;
   const takenAt = new Date(reading.takenAt);
-  const exact = format(new TZDate(takenAt.getTime(), timeZone), 'd MMM yyyy, HH:mm');
+  const exact = formatDateTime(reading.takenAt, timeZone);
   const ago =
     Math.abs(Date.now() - takenAt.getTime()) < 60_000
       ? 'just now'

@@ -1,12 +1,11 @@
 import { useId } from 'react';
 import type { UseFormRegisterReturn } from 'react-hook-form';
-import { TZDate } from '@date-fns/tz';
-import { format } from 'date-fns';
 import { cx } from '../../../components/ui/cx';
 import { TextField } from '../../../components/ui/field';
 import { Icon } from '../../../components/ui/icons';
 import { MachineStatusBadge } from '../../../components/ui/status-badges';
 import { fromDateTimeLocalValue, meterUnitLabel } from '../../../lib/fleet-format';
+import { formatDayTime, formatTimeZoneName } from '../../../lib/format';
 import type { LatestReading } from '../api/types';
 import { LastReading } from './last-reading';
 
@@ -39,9 +38,7 @@ export function LogHoursRow({
   const { machine } = item;
   const unitLabel = meterUnitLabel(machine.meterUnit);
   const instant = timeValue ? fromDateTimeLocalValue(timeValue, timeZone) : null;
-  const timeSummary = instant
-    ? format(new TZDate(new Date(instant).getTime(), timeZone), 'd MMM, HH:mm')
-    : 'now';
+  const timeSummary = instant ? formatDayTime(instant, timeZone) : 'now';
 
   return (
     <li
@@ -73,7 +70,7 @@ export function LogHoursRow({
               label={`${machine.fleetNumber} time taken`}
               type="datetime-local"
               max={maxTime}
-              hint={`Farm time (${timeZone}). Leave empty for now.`}
+              hint={`Farm time (${formatTimeZoneName(timeZone)}). Leave empty for now.`}
               error={timeError}
               {...timeField}
             />

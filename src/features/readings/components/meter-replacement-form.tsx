@@ -16,6 +16,7 @@ import {
   toDateTimeLocalValue,
 } from '../../../lib/fleet-format';
 import { useRecordMeterReplacement } from '../api/record-meter-replacement';
+import { formatTimeZoneName } from '../../../lib/format';
 
 // As the server's schema, with the time as the farm's wall-clock text until submit.
 const formSchema = meterReplacementSchema.extend({
@@ -113,7 +114,7 @@ export function MeterReplacementForm({
         />
         <TextField
           label="Replaced at"
-          hint={`Farm time (${timeZone})`}
+          hint={`Farm time (${formatTimeZoneName(timeZone)})`}
           type="datetime-local"
           error={errors.replacedAt?.message}
           {...register('replacedAt')}

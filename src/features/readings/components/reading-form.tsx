@@ -5,7 +5,7 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
-import { formatDateTime } from '../../../lib/format';
+import { formatDateTime, formatTimeZoneName } from '../../../lib/format';
 import {
   formatMeter,
   fromDateTimeLocalValue,
@@ -90,7 +90,7 @@ export function ReadingForm({ orgId, machineId, unit, units, timeZone, latest }:
         />
         <TextField
           label="Time taken"
-          hint={`Optional; empty means now. Farm time (${timeZone}).`}
+          hint={`Optional; empty means now. Farm time (${formatTimeZoneName(timeZone)}).`}
           type="datetime-local"
           max={toDateTimeLocalValue(new Date(), timeZone)}
           error={errors.takenAt?.message}

@@ -9,7 +9,7 @@ import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { TextField } from '../../../components/ui/field';
 import { Icon } from '../../../components/ui/icons';
 import { isApiError } from '../../../lib/api-client';
-import { formatDateTime } from '../../../lib/format';
+import { formatDateTime, formatTimeZoneName } from '../../../lib/format';
 import {
   formatMeter,
   fromDateTimeLocalValue,
@@ -210,7 +210,7 @@ function CorrectReadingForm({
         />
         <TextField
           label="Corrected time taken"
-          hint={`Farm time (${timeZone})`}
+          hint={`Farm time (${formatTimeZoneName(timeZone)})`}
           type="datetime-local"
           error={errors.takenAt?.message}
           {...register('takenAt')}

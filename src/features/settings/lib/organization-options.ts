@@ -2,6 +2,7 @@
 // currencies it knows (the server checks the same names), month names in its language, and the
 // labour rate typed in the currency's major units but stored in minor units.
 import { minorDigits, minorToMajor, parseMajorToMinor } from '../../../../shared/domain/money';
+import { formatTimeZoneName } from '../../../lib/format';
 
 type SupportedValues = (key: 'timeZone' | 'currency') => string[];
 const supported = (Intl as { supportedValuesOf?: SupportedValues }).supportedValuesOf;
@@ -9,12 +10,15 @@ const supported = (Intl as { supportedValuesOf?: SupportedValues }).supportedVal
 /** The browser's own time zone: the preset of a new organization. */
 export const browserTimeZone = () => Intl.DateTimeFormat().resolvedOptions().timeZone || 'UTC';
 
-/** Every time zone the browser knows, with `current` (and UTC) among them. */
+/** Every time zone the browser knows, named as people say them, with `current` (and UTC) among them. */
 export function timeZoneOptions(current: string) {
   const zones = new Set(supported ? supported('timeZone') : []);
   zones.add(current);
   zones.add('UTC');
-  return [...zones].sort().map((zone) => ({ value: zone, label: zone.replace(/_/g, ' ') }));
+  // as people say them ("Central Time (Chicago)"), in that order, so a region's zones sit together
+  return [...zones]
+    .map((zone) => ({ value: zone, label: formatTimeZoneName(zone) }))
+    .sort((x, y) => x.label.localeCompare(y.label));
 }
 
 const currencyName = (() => {
