@@ -20,6 +20,12 @@ export const SAFETY_STATES_FLEET = 'TR-01';
  */
 export const MACHINE_PAGE_READING_FLEET = 'RD-01';
 
+/**
+ * role-flows.e2e.ts adds these (no schedule, no readings): RF-01 and the tagged-out RF-03 assigned
+ * to lena, RF-02 to sam; it starts a walkaround on RF-01 and tags RF-03 out.
+ */
+export const ROLE_FLOWS_FLEET = ['RF-01', 'RF-02', 'RF-03'] as const;
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -27,4 +33,5 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...READ_AS_LOADED_FLEET,
   SAFETY_STATES_FLEET,
   MACHINE_PAGE_READING_FLEET,
+  ...ROLE_FLOWS_FLEET,
 ]);
