@@ -1,5 +1,6 @@
 import type { DealerLink, ServiceBooking } from '../models';
 import type { Booking, Customer, FarmDealerLink } from '../../shared/schemas/dealer-responses';
+import type { PlannedVisit } from '../../shared/schemas/service-record-responses';
 import { peopleById } from './people';
 
 /** A link as the farm sees it: which dealer, what access, since when. */
@@ -39,6 +40,7 @@ export async function presentBookings(
   bookings: ServiceBooking[],
   names: Map<string, string>,
   abilities: (b: ServiceBooking) => { accept: boolean; decline: boolean; cancel: boolean },
+  plannedVisits: (bookingId: string, machineId: string) => PlannedVisit[] = () => [],
 ): Promise<Booking[]> {
   const person = await peopleById(bookings.flatMap((b) => [b.proposedBy, b.decidedBy]));
   return bookings.map((b) => ({
@@ -57,6 +59,7 @@ export async function presentBookings(
       machine: { id: i.machineId, fleetNumber: i.fleetNumber, name: i.machineName },
       tasks: i.tasks.map((t) => ({ taskId: t.taskId, name: t.name })),
       serviceRecordId: i.serviceRecordId,
+      plannedVisits: plannedVisits(b.id, i.machineId),
     })),
     abilities: abilities(b),
   }));

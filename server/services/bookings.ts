@@ -4,7 +4,9 @@ import { notFound } from '../errors';
 import { Organization, ServiceBooking } from '../models';
 import type { OrgAccess } from '../policies/access';
 import type { BookingStatus } from '../../shared/schemas/dealers';
+import type { PlannedVisit } from '../../shared/schemas/service-record-responses';
 import { recordAudit } from '../infra/audit';
+import { openPlansOf, plansOverlapping } from './planned-visits';
 
 // Service bookings read from either side, and what proposing (booking-proposals.ts) and deciding
 // (booking-decisions.ts) share: the audit entry and the link to the bookings page.
@@ -77,4 +79,30 @@ export async function bookingOrganizationNames(bookings: ServiceBooking[]) {
     ? await Organization.findAll({ where: { id: { [Op.in]: ids } }, attributes: ['id', 'name'] })
     : [];
   return new Map(orgs.map((o) => [o.id, o.name]));
+}
+
+/**
+ * For the farm, per proposal still waiting and per machine of it: the farm's open plans on the
+ * proposed date or covering one of the proposed tasks — accepting would plan that work twice.
+ * The dealer sees none (the farm's plans are the farm's own).
+ */
+export async function bookingOverlaps(access: OrgAccess, bookings: ServiceBooking[]) {
+  const waiting =
+    access.organization.kind === 'farm' ? bookings.filter((b) => b.status === 'proposed') : [];
+  const plans = await openPlansOf(
+    access.organization.id,
+    waiting.flatMap((b) => b.items.map((i) => i.machineId)),
+  );
+  const overlaps = new Map<string, PlannedVisit[]>();
+  for (const b of waiting)
+    for (const i of b.items)
+      overlaps.set(
+        `${b.id}|${i.machineId}`,
+        plansOverlapping(
+          plans.get(i.machineId) ?? [],
+          i.tasks.map((t) => t.taskId),
+          b.proposedFor,
+        ),
+      );
+  return (bookingId: string, machineId: string) => overlaps.get(`${bookingId}|${machineId}`) ?? [];
 }

@@ -10,6 +10,7 @@ import type {
 import type { OrgAccess } from '../policies/access';
 import { loadMachine } from './machines';
 import { closeDefects } from './defects';
+import { plannedVisitsCovering } from './planned-visits';
 import {
   checkDefectsActive,
   checkPerformedOn,
@@ -77,12 +78,20 @@ export function prefillLines(tasks: Pick<ServiceTask, 'parts' | 'fluids'>[]): {
   return { parts: [...parts.values()], fluids: [...fluids.values()] };
 }
 
-/** What a new record's form starts from: the tasks, their labour summed (hours), their lines. */
+/**
+ * What a new record's form starts from: the tasks, their labour summed (hours), their lines, and
+ * the machine's open plans that already cover one of them (so the form can offer to complete one).
+ */
 export async function prefillRecord(access: OrgAccess, machine: Machine, taskIds: string[]) {
   const tasks = await resolveTasks(access, machine, taskIds);
   const estimatedLabourHours =
     Math.round(tasks.reduce((s, t) => s + (t.labourHours ?? 0), 0) * 100) / 100;
-  return { tasks, estimatedLabourHours, ...prefillLines(tasks) };
+  const plannedVisits = await plannedVisitsCovering(
+    access.organization.id,
+    machine.id,
+    tasks.map((t) => t.id),
+  );
+  return { tasks, estimatedLabourHours, ...prefillLines(tasks), plannedVisits };
 }
 
 /**

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { BOOKING_STATUSES, DEALER_ACCESS, DEALER_LINK_STATUSES } from './dealers';
 import { dueCountsSchema, dueRowSchema } from './due';
 import { orgRefSchema, pageMetaSchema, personRefSchema } from './refs';
+import { plannedVisitSchema } from './service-record-responses';
 
 // What the dealer endpoints answer (server/routes/dealers): links from either side, the board,
 // the parts forecast, reminders, bookings and the farm's audit log.
@@ -159,6 +160,11 @@ export const bookingSchema = z
         machine: z.object({ id: z.string(), fleetNumber: z.string(), name: z.string() }),
         tasks: z.array(z.object({ taskId: z.string(), name: z.string() })),
         serviceRecordId: z.string().nullable(),
+        /**
+         * the farm's open plans of this machine on the same date or covering one of these tasks,
+         * while the proposal waits for the farm's answer (the dealer's view: always empty)
+         */
+        plannedVisits: z.array(plannedVisitSchema),
       }),
     ),
     abilities: z.object({ accept: z.boolean(), decline: z.boolean(), cancel: z.boolean() }),

@@ -153,6 +153,16 @@ export const serviceHistoryResponseSchema = z.object({
 });
 export type ServiceHistory = z.infer<typeof serviceHistoryResponseSchema>;
 
+/** An open plan (a visit booked in the shop week) of the machine, with the tasks it covers. */
+export const plannedVisitSchema = z
+  .object({
+    id: z.string(),
+    plannedFor: z.string(),
+    tasks: z.array(z.object({ taskId: z.string(), name: z.string() })),
+  })
+  .meta({ id: 'PlannedVisit' });
+export type PlannedVisit = z.infer<typeof plannedVisitSchema>;
+
 /** The lines and labour the chosen tasks call for, to prefill the form. */
 export const prefillSchema = z.object({
   tasks: z.array(
@@ -161,6 +171,8 @@ export const prefillSchema = z.object({
   estimatedLabourHours: z.number(),
   parts: z.array(partLine.omit({ lineCostMinor: true })),
   fluids: z.array(fluidLine.omit({ lineCostMinor: true })),
+  /** open plans of the machine that cover one of the chosen tasks, soonest first */
+  plannedVisits: z.array(plannedVisitSchema),
 });
 export type Prefill = z.infer<typeof prefillSchema>;
 export const prefillResponseSchema = z.object({ data: prefillSchema });

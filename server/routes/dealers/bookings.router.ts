@@ -15,7 +15,7 @@ import {
   bookingResponseSchema,
   bookingsResponseSchema,
 } from '../../../shared/schemas/dealer-responses';
-import { bookingOrganizationNames, listBookings } from '../../services/bookings';
+import { bookingOrganizationNames, bookingOverlaps, listBookings } from '../../services/bookings';
 import { proposeBooking } from '../../services/booking-proposals';
 import { acceptBooking, cancelBooking, declineBooking } from '../../services/booking-decisions';
 import { orgParams } from './sides';
@@ -40,8 +40,11 @@ const abilitiesFor = (access: OrgAccess) => (b: ServiceBooking) => {
 };
 
 async function present(access: OrgAccess, bookings: ServiceBooking[]) {
-  const names = await bookingOrganizationNames(bookings);
-  return presentBookings(bookings, names, abilitiesFor(access));
+  const [names, overlaps] = await Promise.all([
+    bookingOrganizationNames(bookings),
+    bookingOverlaps(access, bookings),
+  ]);
+  return presentBookings(bookings, names, abilitiesFor(access), overlaps);
 }
 
 /** Service bookings: the dealer proposes, the farm manager accepts (planned records) or declines. */

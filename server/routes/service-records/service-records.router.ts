@@ -75,7 +75,7 @@ export function registerServiceRecordRoutes(router: Router): void {
     method: 'get',
     path: '/organizations/:orgId/machines/:machineId/service-records/prefill',
     summary:
-      'Parts and fluid lines the given tasks call for (summed by part number) and their estimated labour, to prefill the form',
+      'Parts and fluid lines the given tasks call for (summed by part number), their estimated labour, and the open plans of the machine that cover one of them, to prefill the form',
     tags: ['services'],
     params: machineParams,
     query: z.object({
@@ -95,7 +95,7 @@ export function registerServiceRecordRoutes(router: Router): void {
         .filter(Boolean);
       const bad = ids.findIndex((id) => !uuid.safeParse(id).success);
       if (bad >= 0) throw invalid({ [`taskIds.${bad}`]: 'Must be an id (uuid)' });
-      const { tasks, estimatedLabourHours, parts, fluids } = await prefillRecord(
+      const { tasks, estimatedLabourHours, parts, fluids, plannedVisits } = await prefillRecord(
         access,
         machine,
         ids,
@@ -106,6 +106,7 @@ export function registerServiceRecordRoutes(router: Router): void {
           estimatedLabourHours,
           parts,
           fluids,
+          plannedVisits,
         },
       };
     },

@@ -42,7 +42,13 @@ import { useCurrentMembership } from '../../lib/auth';
 import { formatLocalDate, todayInZone } from '../../lib/fleet-format';
 import { paths } from '../paths';
 
-const EMPTY_PREFILL: Prefill = { tasks: [], estimatedLabourHours: 0, parts: [], fluids: [] };
+const EMPTY_PREFILL: Prefill = {
+  tasks: [],
+  estimatedLabourHours: 0,
+  parts: [],
+  fluids: [],
+  plannedVisits: [],
+};
 
 function readSearch(search: URLSearchParams) {
   const complete = search.get('complete');
@@ -174,6 +180,7 @@ export function ServiceRecordNewPage() {
         parts: record.data.data.parts,
         fluids: record.data.data.fluids,
         estimatedLabourHours: record.data.data.estimatedLabourHours,
+        plannedVisits: [],
       }
     : (prefill.data ?? EMPTY_PREFILL);
   const defaultValues = record.data

@@ -65,6 +65,7 @@ function BookingCard({
   const [note, setNote] = useState('');
   const act = (action: BookingAction) => decide.mutate({ bookingId: b.id, action, note });
   const other = side === 'farm' ? b.dealer.name : b.customer.name;
+  const overlaps = b.items.filter((i) => i.plannedVisits.length);
   return (
     <li className="flex flex-col gap-3 rounded-xl border border-field-200 bg-white p-4 shadow-card">
       <div className="flex flex-wrap items-center gap-2">
@@ -98,6 +99,22 @@ function BookingCard({
         </p>
       ) : null}
       {decide.isError ? <Alert>{decide.error.message}</Alert> : null}
+      {b.abilities.accept && overlaps.length ? (
+        <Alert tone="warning" title="Overlaps a planned visit">
+          <p>Accepting plans this work a second time in your shop week:</p>
+          <ul className="mt-1 list-disc pl-5">
+            {overlaps.flatMap((i) =>
+              i.plannedVisits.map((v) => (
+                <li key={`${i.machine.id}|${v.id}`}>
+                  {i.machine.fleetNumber} is planned for {dateText(v.plannedFor)}
+                  {v.tasks.length ? `: ${v.tasks.map((t) => t.name).join(', ')}` : ''}
+                </li>
+              )),
+            )}
+          </ul>
+          <p className="mt-1">Decline and tell {b.dealer.name} why, or cancel that plan first.</p>
+        </Alert>
+      ) : null}
       {b.abilities.accept || b.abilities.decline ? (
         <div className="flex flex-col gap-3">
           <TextareaField
@@ -114,7 +131,7 @@ function BookingCard({
               pending={decide.isPending && decide.variables?.action === 'accept'}
               onClick={() => act('accept')}
             >
-              Accept booking
+              {overlaps.length ? 'Accept anyway' : 'Accept booking'}
             </Button>
             <Button
               variant="secondary"

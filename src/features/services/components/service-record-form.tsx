@@ -25,6 +25,7 @@ import { FormBlock } from './form-block';
 import { TaskChoiceList } from './task-choice-list';
 import { VisitFields } from './visit-fields';
 import { DefectChoiceList } from './defect-choice-list';
+import { PlannedVisitOffer } from './planned-visit-offer';
 import { TextareaField } from '../../../components/ui/textarea-field';
 
 const LIST_FIELDS = ['taskIds', 'technicianIds', 'closesDefectIds'] as const;
@@ -68,7 +69,13 @@ function foldListErrors(error: unknown): unknown {
   return new ApiError({ status: error.status, code: error.code, message: error.message, fields });
 }
 
-const EMPTY_PREFILL: Prefill = { tasks: [], estimatedLabourHours: 0, parts: [], fluids: [] };
+const EMPTY_PREFILL: Prefill = {
+  tasks: [],
+  estimatedLabourHours: 0,
+  parts: [],
+  fluids: [],
+  plannedVisits: [],
+};
 
 export interface ServiceRecordFormProps {
   orgId: string;
@@ -84,7 +91,7 @@ export interface ServiceRecordFormProps {
   defects: readonly ActiveDefect[];
   defaultValues: ServiceFormInput;
   /** the lines the preselected tasks call for (what the rows were filled in from) */
-  initialPrefill: Pick<Prefill, 'parts' | 'fluids' | 'estimatedLabourHours'>;
+  initialPrefill: Pick<Prefill, 'parts' | 'fluids' | 'estimatedLabourHours' | 'plannedVisits'>;
   /** the plan being completed (complete mode) */
   recordId?: string;
   today: string;
@@ -118,6 +125,11 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
   const [prefillState, setPrefillState] = useState<'idle' | 'loading' | 'error'>('idle');
   const lastPrefill = useRef<Pick<Prefill, 'parts' | 'fluids'>>(props.initialPrefill);
   const prefillRequest = useRef(0);
+  // open plans covering the chosen tasks, and the one this visit completes (record mode)
+  const [plannedVisits, setPlannedVisits] = useState(props.initialPrefill.plannedVisits);
+  const [chosenPlan, setChosenPlan] = useState<string | null>(null);
+  const completesPlan =
+    mode === 'record' && plannedVisits.some((v) => v.id === chosenPlan) ? chosenPlan : null;
   const taskIds = useWatch({ control, name: 'taskIds' }) ?? [];
   const chosenTasks = tasks.filter((t) => taskIds.includes(t.id));
   const isPlan = mode === 'plan';
@@ -140,6 +152,7 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
       fluids.replace(merged.fluids);
       lastPrefill.current = prefill;
       setEstimate(prefill.estimatedLabourHours);
+      setPlannedVisits(prefill.plannedVisits);
       setPrefillState('idle');
     } catch {
       if (request === prefillRequest.current) setPrefillState('error');
@@ -151,8 +164,8 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
     setPlacedErrors(false);
     try {
       const result = await save.mutateAsync(
-        mode === 'complete'
-          ? { kind: 'complete', recordId: recordId!, body: completeBody(values) }
+        mode === 'complete' || completesPlan
+          ? { kind: 'complete', recordId: completesPlan ?? recordId!, body: completeBody(values) }
           : { kind: 'create', body: createBody(values) },
       );
       onSaved(result);
@@ -189,6 +202,14 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
           prefillState={prefillState}
           mode={mode}
         />
+        {mode !== 'complete' ? (
+          <PlannedVisitOffer
+            mode={mode}
+            visits={plannedVisits}
+            value={completesPlan}
+            onChange={setChosenPlan}
+          />
+        ) : null}
       </FormBlock>
 
       <FormBlock title={isPlan ? 'Booking' : 'The visit'}>
