@@ -9,7 +9,7 @@ import { isApiError } from '../../../lib/api-client';
 import { fromDateTimeLocalValue, toDateTimeLocalValue } from '../../../lib/fleet-format';
 import { useSaveReadings } from '../api/save-readings';
 import type { LatestReading } from '../api/types';
-import { parseMeterInput } from '../../../lib/meter-input';
+import { meterInputError, parseMeterInput } from '../../../lib/meter-input';
 import { LogHoursRow } from './log-hours-row';
 
 interface Entry {
@@ -120,14 +120,24 @@ export function LogHoursForm({
         };
       }),
     };
-    // The same schema the server validates with, so a typo is named before the round trip.
+    // The same schema the server validates with, so a typo is named before the round trip; a
+    // value the farm's number rule refuses says why (use a point for decimals…).
     const checked = bulkReadingsSchema.safeParse(input);
-    if (!checked.success) {
-      showErrors(
-        checked.error.issues
-          .filter((issue) => typeof issue.path[1] === 'number')
-          .map((issue) => [issue.path[1] as number, String(issue.path[2]), issue.message]),
-      );
+    const refused = sent.flatMap((item, index): [number, string, string][] => {
+      const message = meterInputError(values.entries[item.machine.id].value, units);
+      return message ? [[index, 'value', message]] : [];
+    });
+    if (refused.length || !checked.success) {
+      const refusedRows = new Set(refused.map(([index]) => index));
+      const issues = (checked.success ? [] : checked.error.issues)
+        .filter((issue) => typeof issue.path[1] === 'number')
+        .map((issue): [number, string, string] => [
+          issue.path[1] as number,
+          String(issue.path[2]),
+          issue.message,
+        ])
+        .filter(([index, field]) => !(field === 'value' && refusedRows.has(index)));
+      showErrors([...refused, ...issues].sort(([a], [b]) => a - b));
       return;
     }
 

@@ -9,7 +9,7 @@ import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
 import { TextareaField } from '../../../components/ui/textarea-field';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { meterValueAs } from '../../../lib/meter-input';
+import { meterValueAs, withMeterReasons } from '../../../lib/meter-input';
 import {
   formatMeter,
   fromDateTimeLocalValue,
@@ -47,7 +47,7 @@ export function MeterReplacementForm({
     setError,
     formState: { errors, isSubmitting },
   } = useForm({
-    resolver: zodResolver(formSchema),
+    resolver: withMeterReasons(zodResolver(formSchema)),
     defaultValues: {
       oldFinalValue: undefined as unknown as number,
       newStartValue: 0,

@@ -12,7 +12,7 @@ import {
   toDateTimeLocalValue,
 } from '../../../lib/fleet-format';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { meterValueAs } from '../../../lib/meter-input';
+import { meterValueAs, withMeterReasons } from '../../../lib/meter-input';
 import { useLogReading } from '../api/log-reading';
 import type { Reading } from '../api/types';
 import { readingFormSchema } from '../lib/reading-form-schema';
@@ -40,7 +40,7 @@ export function ReadingForm({ orgId, machineId, unit, units, timeZone, latest }:
     reset,
     formState: { errors, isSubmitting },
   } = useForm({
-    resolver: zodResolver(readingFormSchema),
+    resolver: withMeterReasons(zodResolver(readingFormSchema)),
     defaultValues: { value: undefined as unknown as number, takenAt: '' },
   });
 

@@ -16,7 +16,7 @@ import {
   toDateTimeLocalValue,
 } from '../../../lib/fleet-format';
 import { applyServerErrors } from '../../../lib/form-errors';
-import { meterValueAs } from '../../../lib/meter-input';
+import { meterValueAs, withMeterReasons } from '../../../lib/meter-input';
 import { useCorrectReading } from '../api/correct-reading';
 import { useDeleteReading } from '../api/delete-reading';
 import type { MeterReplacement, Reading } from '../api/types';
@@ -172,7 +172,10 @@ function CorrectReadingForm({
     handleSubmit,
     setError,
     formState: { errors, isSubmitting },
-  } = useForm({ resolver: zodResolver(readingFormSchema), defaultValues: initial });
+  } = useForm({
+    resolver: withMeterReasons(zodResolver(readingFormSchema)),
+    defaultValues: initial,
+  });
 
   const submit = handleSubmit(async (values) => {
     setFormError(null);

@@ -1,5 +1,5 @@
 import type { UnitSystem } from '../../../../shared/constants';
-import { parseMeterInput } from '../../../lib/meter-input';
+import { meterInputError, parseMeterInput } from '../../../lib/meter-input';
 import {
   walkaroundCreateSchema,
   type WalkaroundCreateInput,
@@ -42,7 +42,7 @@ export function buildSubmission(
   const meterText = draft.meterValue.trim();
   const meterValue = parseMeterInput(meterText, context.units);
   if (!meterText) errors.meterValue = 'Enter the meter as it reads now';
-  else if (Number.isNaN(meterValue)) errors.meterValue = 'Enter the meter as a number, like 1452.5';
+  else errors.meterValue = meterInputError(meterText, context.units) ?? undefined;
 
   const parsed = walkaroundCreateSchema.safeParse({
     machineId: context.machineId,
