@@ -5,6 +5,7 @@ import { PageHeader } from '../../components/ui/page-header';
 import { dueQueryOptions } from '../../features/due/api/get-due';
 import type { DueFilters } from '../../features/due/api/types';
 import { DueBoard } from '../../features/due/components/due-board';
+import { WaitingProposals } from '../../features/dealers/components/waiting-proposals';
 import { FirstRunChecklistPanel } from '../../features/onboarding/components/first-run-checklist';
 import { readDueFilters, writeDueFilters } from '../../features/due/filters';
 import { findMembership, meQueryOptions, useCurrentMembership } from '../../lib/auth';
@@ -29,6 +30,8 @@ export const dashboardLoader =
   };
 
 const LOGS_HOURS = new Set(['manager', 'technician', 'operator']);
+// who on a farm sees the dealers' proposals (the bookings page's roles)
+const SEES_BOOKINGS = new Set(['manager', 'technician']);
 
 export function DashboardPage() {
   const { membership } = useCurrentMembership();
@@ -55,6 +58,12 @@ export function DashboardPage() {
           </>
         }
       />
+      {organization.kind === 'farm' && SEES_BOOKINGS.has(membership.role) ? (
+        <WaitingProposals
+          orgId={organization.id}
+          href={paths.organization.bookings.href(organization.id)}
+        />
+      ) : null}
       <FirstRunChecklistPanel
         orgId={organization.id}
         enabled={organization.kind === 'farm' && membership.role === 'manager'}
