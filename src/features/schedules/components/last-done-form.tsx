@@ -5,12 +5,12 @@ import { lastDoneSchema } from '../../../../shared/schemas/schedule';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
+import { useCurrentMembership } from '../../../lib/auth';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { meterUnitLabel, todayInZone } from '../../../lib/fleet-format';
+import { meterValueAs, withMeterReasons } from '../../../lib/meter-input';
 import { useSetLastDone } from '../api/set-last-done';
 import type { Task } from '../api/types';
-
-const meterNumber = { setValueAs: (v: unknown) => (v === '' || v == null ? undefined : Number(v)) };
 
 /** When a task was last done (before the machine came into Hourstone, or a missed record). */
 export function LastDoneForm({
@@ -29,13 +29,14 @@ export function LastDoneForm({
   const setLastDone = useSetLastDone(orgId, task.machineId);
   const [formError, setFormError] = useState<string | null>(null);
   const today = todayInZone(timeZone);
+  const { units } = useCurrentMembership().membership.organization;
   const {
     register,
     handleSubmit,
     setError,
     formState: { errors, isSubmitting },
   } = useForm({
-    resolver: zodResolver(lastDoneSchema),
+    resolver: withMeterReasons(zodResolver(lastDoneSchema)),
     defaultValues: {
       lastDoneMeter: task.lastDoneMeter ?? (undefined as unknown as number),
       lastDoneOn: task.lastDoneOn ?? today,
@@ -64,13 +65,12 @@ export function LastDoneForm({
         <TextField
           label="Meter when last done"
           hint={`Lifetime ${meterUnitLabel(unit)} (counting any replaced meter)`}
-          type="number"
+          type="text"
           inputMode="decimal"
-          step="any"
-          min={0}
+          autoComplete="off"
           autoFocus
           error={errors.lastDoneMeter?.message}
-          {...register('lastDoneMeter', meterNumber)}
+          {...register('lastDoneMeter', meterValueAs(units))}
         />
         <TextField
           label="Date last done"

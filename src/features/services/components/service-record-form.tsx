@@ -8,6 +8,7 @@ import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClasses } from '../../../components/ui/button';
 import { ApiError, isApiError } from '../../../lib/api-client';
 import { applyServerErrors } from '../../../lib/form-errors';
+import { withMeterReasons } from '../../../lib/meter-input';
 import { prefillQueryOptions } from '../api/get-prefill';
 import { useSaveServiceRecord } from '../api/save-service-record';
 import type { ActiveDefect, Prefill, RecordWithResets, ShopPerson, TaskChoice } from '../api/types';
@@ -111,7 +112,10 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
   const { orgId, mode, machine, tasks, defaultValues, recordId, onSaved } = props;
   const queryClient = useQueryClient();
   const save = useSaveServiceRecord(orgId, machine.id);
-  const form = useForm({ resolver: zodResolver(serviceRecordCreateSchema), defaultValues });
+  const form = useForm({
+    resolver: withMeterReasons(zodResolver(serviceRecordCreateSchema)),
+    defaultValues,
+  });
   const { control, register, handleSubmit, setError, getValues, setValue, formState } = form;
   const parts = useFieldArray({ control, name: 'parts' });
   const fluids = useFieldArray({ control, name: 'fluids' });

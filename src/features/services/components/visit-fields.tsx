@@ -2,14 +2,11 @@ import { Controller } from 'react-hook-form';
 import { CheckboxGroup } from '../../../components/ui/checkbox-group';
 import { TextField } from '../../../components/ui/field';
 import { formatDateTime, roleLabel } from '../../../lib/format';
+import { useCurrentMembership } from '../../../lib/auth';
 import { formatMeter, meterUnitLabel } from '../../../lib/fleet-format';
+import { meterValueAs } from '../../../lib/meter-input';
 import type { ShopPerson } from '../api/types';
-import {
-  optionalNumber,
-  requiredNumber,
-  type ServiceForm,
-  type ServiceFormMode,
-} from '../lib/form-values';
+import { optionalNumber, type ServiceForm, type ServiceFormMode } from '../lib/form-values';
 import { formatHours } from '../lib/record-format';
 
 /** When (done or booked), the meter at service, labour and who did it. */
@@ -37,6 +34,7 @@ export function VisitFields({
     formState: { errors },
   } = form;
   const unit = machine.meterUnit;
+  const { units } = useCurrentMembership().membership.organization;
   const last = machine.lastReading;
   const estimateText =
     estimate > 0 ? `The chosen tasks take about ${formatHours(estimate)}.` : undefined;
@@ -72,12 +70,11 @@ export function VisitFields({
                 ? `In ${meterUnitLabel(unit)}, as the meter reads. Last reading ${formatMeter(last.value, unit)}, ${formatDateTime(last.takenAt, timeZone)}.`
                 : `In ${meterUnitLabel(unit)}, as the meter reads.`
             }
-            type="number"
+            type="text"
             inputMode="decimal"
-            step="any"
-            min={0}
+            autoComplete="off"
             error={errors.meterValue?.message}
-            {...register('meterValue', requiredNumber)}
+            {...register('meterValue', meterValueAs(units))}
           />
           <TextField
             label="Labour hours"
