@@ -4,7 +4,7 @@ import { AppError } from '../errors';
 import { Defect, Machine, MachineForecast, Walkaround, WalkaroundPhoto } from '../models';
 import type { WalkaroundCreateInput, WalkaroundPurpose } from '../../shared/schemas/walkarounds';
 import type { OrgAccess } from '../policies/access';
-import { authorize } from '../policies/access';
+import { authorize, hasRole } from '../policies/access';
 import { canDoWalkaround, canInspect } from '../policies/walkaround';
 import { loadMachine } from './machines';
 import { writeAccompanyingReading } from './readings';
@@ -30,6 +30,30 @@ export function walkaroundRefusal(machine: Machine, purpose: WalkaroundPurpose):
   if (purpose === 'use' && machine.status === 'tagged_out')
     return new AppError(409, 'tagged_out', taggedOutMessage(machine));
   return null;
+}
+
+/**
+ * The machine a walkaround is for, as loadMachine finds it (404 when the caller may not see it).
+ * An operator who scanned the label of their own farm's machine that is assigned to others is
+ * told so (still a 404, code not_assigned): only its fleet number, which is on the label.
+ */
+export async function loadMachineToWalk(access: OrgAccess, machineId: string) {
+  try {
+    return await loadMachine(access, machineId);
+  } catch (error) {
+    if (!(error instanceof AppError) || error.status !== 404 || !hasRole(access, 'operator'))
+      throw error;
+    const machine = await Machine.findOne({
+      where: { id: machineId, organizationId: access.organization.id },
+      attributes: ['id', 'fleetNumber', 'status'],
+    });
+    if (!machine || machine.status === 'sold') throw error;
+    throw new AppError(
+      404,
+      'not_assigned',
+      `${machine.fleetNumber} is not assigned to you: it is assigned to other operators`,
+    );
+  }
 }
 
 /** Checks who may start which walkaround on the machine; throws 403 or 409. */

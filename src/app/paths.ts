@@ -151,6 +151,13 @@ export function safeNextPath(next: string | null | undefined): string | null {
   return next;
 }
 
-/** Where a signed-in person starts: an organization's dashboard, or the start page without one. */
-export const homeHref = (orgId: string | null) =>
-  orgId ? paths.organization.dashboard.href(orgId) : paths.home.href();
+/**
+ * Where a signed-in person starts: an operator at the daily walkaround (their job in the yard),
+ * everyone else at the organization's dashboard; the start page without an organization.
+ */
+export const homeHref = (orgId: string | null, role?: string) =>
+  !orgId
+    ? paths.home.href()
+    : role === 'operator'
+      ? paths.organization.walkaroundPick.href(orgId)
+      : paths.organization.dashboard.href(orgId);

@@ -94,6 +94,12 @@ export function homeOrganizationId(me: Me): string | null {
   return me.memberships[0]?.organization.id ?? null;
 }
 
+/** Where to open after sign-in: the organization (homeOrganizationId) and the role held there. */
+export function homeStart(me: Me): [orgId: string | null, role: string | undefined] {
+  const orgId = homeOrganizationId(me);
+  return [orgId, orgId ? findMembership(me, orgId)?.role : undefined];
+}
+
 // --- The organization the current page belongs to ------------------------------------------
 
 interface CurrentMembership {

@@ -147,6 +147,8 @@ const members = {
   list: (orgId: string) => [...members.all(orgId), 'list'] as const,
   /** the operators among the members, for assigning machines */
   operators: (orgId: string) => [...members.all(orgId), 'operators'] as const,
+  /** the managers and technicians by name: whom an operator asks about a machine */
+  contacts: (orgId: string) => [...members.all(orgId), 'contacts'] as const,
 };
 
 const invitations = {

@@ -15,7 +15,12 @@ import {
 import { authorize } from '../../policies/access';
 import { canDoWalkaround, canEditChecklists, canInspect } from '../../policies/walkaround';
 import { loadMachine } from '../../services/machines';
-import { assertMayStart, submitWalkaround, walkaroundStart } from '../../services/walkarounds';
+import {
+  assertMayStart,
+  loadMachineToWalk,
+  submitWalkaround,
+  walkaroundStart,
+} from '../../services/walkarounds';
 import { listWalkarounds, loadWalkaround } from '../../services/walkaround-history';
 import { storeWalkaroundPhoto, walkaroundPhotoFile } from '../../services/walkaround-photos';
 import { taggedOutMessage } from '../../services/defects';
@@ -45,14 +50,14 @@ export function walkaroundsRouter(): Router {
     method: 'get',
     path: '/organizations/:orgId/machines/:machineId/checklist',
     summary:
-      "Start a walkaround: the machine's checklist (its category's template, else the built-in list). purpose=use is refused (409 tagged_out) on a tagged-out machine",
+      "Start a walkaround: the machine's checklist (its category's template, else the built-in list). purpose=use is refused (409 tagged_out) on a tagged-out machine; an operator's request for a machine assigned to others answers 404 not_assigned",
     tags: ['walkarounds'],
     params: machineParams,
     query: checklistQuerySchema,
     response: checklistResponseSchema,
     handler: async ({ req, params, query }) => {
       const access = req.access!;
-      const { machine } = await loadMachine(access, params.machineId);
+      const { machine } = await loadMachineToWalk(access, params.machineId);
       assertMayStart(access, machine, query.purpose);
       const { checklist, lastReading } = await walkaroundStart(access, machine);
       return {

@@ -2,7 +2,7 @@ import type { QueryClient } from '@tanstack/react-query';
 import { Link, redirect, useNavigate, type LoaderFunctionArgs } from 'react-router-dom';
 import { FullPageMessage } from '../../components/errors/full-page-message';
 import { Button, buttonClasses } from '../../components/ui/button';
-import { homeOrganizationId, useMe, useSignOut } from '../../lib/auth';
+import { homeStart, useMe, useSignOut } from '../../lib/auth';
 import { requireMe } from '../guards';
 import { homeHref, paths } from '../paths';
 
@@ -11,8 +11,8 @@ export const homeLoader =
   (queryClient: QueryClient) =>
   async ({ request }: LoaderFunctionArgs) => {
     const me = await requireMe(queryClient, request);
-    const orgId = homeOrganizationId(me);
-    if (orgId) throw redirect(homeHref(orgId));
+    const [orgId, role] = homeStart(me);
+    if (orgId) throw redirect(homeHref(orgId, role));
     return null;
   };
 

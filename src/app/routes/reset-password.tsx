@@ -3,7 +3,7 @@ import { AuthLayout } from '../../components/layouts/auth-layout';
 import { Alert } from '../../components/ui/alert';
 import { buttonClasses } from '../../components/ui/button';
 import { ResetPasswordForm } from '../../features/auth/components/reset-password-form';
-import { homeOrganizationId } from '../../lib/auth';
+import { homeStart } from '../../lib/auth';
 import { homeHref, paths } from '../paths';
 
 export function ResetPasswordPage() {
@@ -27,7 +27,7 @@ export function ResetPasswordPage() {
         <ResetPasswordForm
           token={token}
           forgotPasswordHref={paths.forgotPassword.href()}
-          onReset={(me) => navigate(homeHref(homeOrganizationId(me)), { replace: true })}
+          onReset={(me) => navigate(homeHref(...homeStart(me)), { replace: true })}
         />
       ) : (
         <div className="flex flex-col gap-4">

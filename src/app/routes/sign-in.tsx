@@ -3,12 +3,12 @@ import { redirect, useNavigate, useSearchParams, type LoaderFunctionArgs } from 
 import { AuthLayout } from '../../components/layouts/auth-layout';
 import { SignInForm } from '../../features/auth/components/sign-in-form';
 import { SignUpLink } from '../../features/auth/components/sign-up-link';
-import { homeOrganizationId, type Me } from '../../lib/auth';
+import { homeStart, type Me } from '../../lib/auth';
 import { optionalMe } from '../guards';
 import { homeHref, paths, safeNextPath } from '../paths';
 
 const destinationFor = (me: Me, next: string | null) =>
-  safeNextPath(next) ?? homeHref(homeOrganizationId(me));
+  safeNextPath(next) ?? homeHref(...homeStart(me));
 
 /** Someone already signed in goes on to where they were headed. */
 export const signInLoader =

@@ -5,7 +5,7 @@ import { Alert } from '../../components/ui/alert';
 import { PageSkeleton } from '../../components/ui/skeleton';
 import { useSignUpStatus } from '../../features/auth/api/sign-up';
 import { SignUpForm } from '../../features/auth/components/sign-up-form';
-import { homeOrganizationId } from '../../lib/auth';
+import { homeStart } from '../../lib/auth';
 import { optionalMe } from '../guards';
 import { homeHref, paths } from '../paths';
 
@@ -14,7 +14,7 @@ const linkClasses = 'inline-flex min-h-touch items-center font-bold underline un
 /** Someone signed in already has an account: they go where they work. */
 export const signUpLoader = (queryClient: QueryClient) => async () => {
   const me = await optionalMe(queryClient);
-  if (me) throw redirect(homeHref(homeOrganizationId(me)));
+  if (me) throw redirect(homeHref(...homeStart(me)));
   return null;
 };
 

@@ -4,7 +4,7 @@ import { Alert } from '../../components/ui/alert';
 import { buttonClasses } from '../../components/ui/button';
 import { useVerifyEmail } from '../../features/auth/api/verify-email';
 import { ConfirmLinkButton } from '../../features/auth/components/confirm-link-button';
-import { homeOrganizationId } from '../../lib/auth';
+import { homeStart } from '../../lib/auth';
 import { homeHref, paths } from '../paths';
 
 /** The sign-up's e-mailed link: confirming makes the account and signs in. */
@@ -19,8 +19,8 @@ export function VerifyEmailPage() {
       { token: token ?? '' },
       {
         onSuccess: (me) => {
-          const orgId = homeOrganizationId(me);
-          navigate(orgId ? homeHref(orgId) : paths.organizationNew.href(), { replace: true });
+          const [orgId, role] = homeStart(me);
+          navigate(orgId ? homeHref(orgId, role) : paths.organizationNew.href(), { replace: true });
         },
       },
     );

@@ -36,7 +36,7 @@ export function WalkaroundPickPage() {
     <>
       <PageHeader
         title="Daily walkaround"
-        description="Pick the machine you are about to use, or scan the QR label on it. Check it before you start it."
+        description={`${organization.name}: pick the machine you are about to use, or scan the QR label on it. Check it before you start it.`}
       />
       <WalkaroundPicker
         orgId={organization.id}

@@ -23,6 +23,7 @@ export const getPickableMachines = (orgId: string, signal?: AbortSignal) =>
           status: m.status,
           meterUnit: m.meterUnit,
           lastReading: m.lastReading,
+          operatorIds: m.operatorIds,
         })),
     );
 

@@ -16,7 +16,14 @@ export type { MachineRef } from '../../../../shared/schemas/refs';
 /** A machine in the walkaround picker (a row of GET machines). */
 export type PickableMachine = Pick<
   Machine,
-  'id' | 'fleetNumber' | 'name' | 'category' | 'status' | 'meterUnit' | 'lastReading'
+  | 'id'
+  | 'fleetNumber'
+  | 'name'
+  | 'category'
+  | 'status'
+  | 'meterUnit'
+  | 'lastReading'
+  | 'operatorIds'
 >;
 
 /** What the outcome screen shows of a defect the walkaround raised. */

@@ -41,6 +41,7 @@ export function ChecklistItemCard({
 
   return (
     <li
+      data-item-id={item.id}
       className={
         error
           ? 'rounded-xl border-2 border-poppy-500 bg-white p-4'
@@ -53,9 +54,9 @@ export function ChecklistItemCard({
             {position} of {total}
           </p>
           <div className="flex flex-wrap items-start justify-between gap-2">
-            <h2 id={labelId} className="text-lg leading-snug font-black text-field-950">
+            <h3 id={labelId} className="text-lg leading-snug font-black text-field-950">
               {item.label}
-            </h2>
+            </h3>
             {item.critical ? (
               <Badge tone="overdue" icon="lock">
                 Critical

@@ -1,14 +1,21 @@
 import { Link } from 'react-router-dom';
 import { buttonClasses } from '../../../components/ui/button';
 import { Icon } from '../../../components/ui/icons';
+import { TagOutExplanation } from './tag-out-explanation';
 
 /** The walkaround for use was refused: the machine is tagged out. Said plainly, with the way on. */
 export function TaggedOutNotice({
+  orgId,
+  machineId,
+  timeZone,
   message,
   pickHref,
   defectsHref,
   inspectHref,
 }: {
+  orgId: string;
+  machineId: string;
+  timeZone: string;
   message: string;
   pickHref: string;
   defectsHref: string;
@@ -27,6 +34,7 @@ export function TaggedOutNotice({
           <p className="text-lg font-bold">{message}.</p>
         </div>
       </div>
+      <TagOutExplanation orgId={orgId} machineId={machineId} timeZone={timeZone} />
       <div className="flex flex-col gap-2 sm:flex-row">
         <Link to={pickHref} className={buttonClasses('primary', 'min-h-12')}>
           Pick another machine

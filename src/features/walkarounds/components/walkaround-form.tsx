@@ -1,4 +1,4 @@
-import { useRef, useState, type FormEvent } from 'react';
+import { useCallback, useMemo, useRef, useState, type FormEvent } from 'react';
 import type { UnitSystem } from '../../../../shared/constants';
 import type {
   WalkaroundCreateInput,
@@ -17,7 +17,9 @@ import { buildSubmission, type SubmissionErrors } from '../lib/build-submission'
 import { useItemPhotos } from '../lib/use-item-photos';
 import type { SendResult } from '../lib/use-send-walkaround';
 import type { useWalkaroundDraft } from '../lib/use-walkaround-draft';
+import { checklistSections, sectionProgress } from '../lib/sections';
 import { ChecklistItemCard } from './checklist-item-card';
+import { ChecklistSectionView } from './checklist-section';
 
 type DraftApi = ReturnType<typeof useWalkaroundDraft>;
 
@@ -54,6 +56,13 @@ export function WalkaroundForm({
   const answered = items.filter((item) => draft.answers[item.id]?.result).length;
   const meterLabel = machine.meterUnit === 'h' ? 'Hour meter' : `Meter (${machine.meterUnit})`;
   const missing = items.filter((item) => errors.items[item.id]);
+  const sections = useMemo(() => checklistSections(items), [items]);
+  // the items that have been on screen in this visit (not kept: a resumed draft looks again)
+  const [seen, setSeen] = useState<ReadonlySet<string>>(new Set());
+  const markSeen = useCallback(
+    (itemId: string) => setSeen((prev) => (prev.has(itemId) ? prev : new Set(prev).add(itemId))),
+    [],
+  );
 
   const focusFirstError = (next: SubmissionErrors) => {
     const form = formRef.current;
@@ -134,27 +143,47 @@ export function WalkaroundForm({
         <span>{checklist.criticalNote}</span>
       </p>
 
-      <div className="sticky top-16 z-10 -mx-4 bg-oat-50/95 px-4 py-2 text-sm font-bold text-field-700 backdrop-blur sm:-mx-8 sm:px-8">
+      <div
+        role="status"
+        className="sticky top-16 z-10 -mx-4 bg-oat-50/95 px-4 py-2 text-sm font-bold text-field-700 backdrop-blur sm:-mx-8 sm:px-8"
+      >
         {answered} of {items.length} answered
       </div>
 
-      <ol aria-label="Checklist" className="flex flex-col gap-4">
-        {items.map((item, index) => (
-          <ChecklistItemCard
-            key={item.id}
-            item={item}
-            position={index + 1}
-            total={items.length}
-            fleetNumber={machine.fleetNumber}
-            answer={draft.answers[item.id]}
-            error={errors.items[item.id]}
-            photoState={photos.states[item.id]}
-            onAnswer={(change) => updateAnswer(item.id, change)}
-            onPickPhoto={(file) => photos.pick(item.id, file)}
-            onRemovePhoto={() => photos.remove(item.id)}
-          />
-        ))}
-      </ol>
+      <div aria-label="Checklist" role="group" className="flex flex-col gap-5">
+        {sections.map((section) => {
+          const progress = sectionProgress(section, draft.answers);
+          return (
+            <ChecklistSectionView
+              key={section.key}
+              section={section}
+              progress={progress}
+              hasErrors={section.items.some(({ item }) => errors.items[item.id])}
+              seen={seen}
+              onSeen={markSeen}
+              onRestOk={() => {
+                for (const item of progress.unanswered) updateAnswer(item.id, { result: 'ok' });
+              }}
+            >
+              {section.items.map(({ item, position }) => (
+                <ChecklistItemCard
+                  key={item.id}
+                  item={item}
+                  position={position}
+                  total={items.length}
+                  fleetNumber={machine.fleetNumber}
+                  answer={draft.answers[item.id]}
+                  error={errors.items[item.id]}
+                  photoState={photos.states[item.id]}
+                  onAnswer={(change) => updateAnswer(item.id, change)}
+                  onPickPhoto={(file) => photos.pick(item.id, file)}
+                  onRemovePhoto={() => photos.remove(item.id)}
+                />
+              ))}
+            </ChecklistSectionView>
+          );
+        })}
+      </div>
 
       <TextareaField
         label="Anything else for the shop (optional)"

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useId, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { CATEGORY_LABELS } from '../../../../shared/constants';
 import { Badge } from '../../../components/ui/badge';
@@ -12,13 +12,15 @@ import { usePickableMachines } from '../api/get-pickable-machines';
 import type { PickableMachine } from '../api/types';
 import { loadDraft } from '../lib/draft';
 import { OutboxList } from './outbox-list';
+import { TagOutExplanation } from './tag-out-explanation';
 
 /** Past this many machines the list gets a search box. */
 const SEARCH_FROM = 8;
 
 /**
- * The machines this person may walk round, in fleet-number order. Tagged-out ones are listed
- * (so nobody thinks they are missing) but are not links: they must not be used.
+ * The machines this person may walk round: the ones assigned to them first, then the rest, each
+ * in fleet-number order. Tagged-out ones are listed (so nobody thinks they are missing) but are
+ * not links: they must not be used; a tap says why, since when and whom to ask.
  */
 export function WalkaroundPicker({
   orgId,
@@ -51,6 +53,16 @@ export function WalkaroundPicker({
   const shown = needle
     ? machines.data.filter((m) => `${m.fleetNumber} ${m.name}`.toLowerCase().includes(needle))
     : machines.data;
+  const mine = shown.filter((m) => m.operatorIds.includes(userId));
+  const others = shown.filter((m) => !m.operatorIds.includes(userId));
+  // one list without headings when nothing is assigned to this person
+  const groups =
+    mine.length === 0
+      ? [{ title: null, machines: shown }]
+      : [
+          { title: 'Assigned to you', machines: mine },
+          ...(others.length ? [{ title: 'Other machines', machines: others }] : []),
+        ];
 
   return (
     <div className="flex flex-col gap-4">
@@ -70,17 +82,26 @@ export function WalkaroundPicker({
               placeholder="Fleet number or name"
             />
           ) : null}
-          <ul aria-label="Machines" className="flex flex-col gap-3">
-            {shown.map((machine) => (
-              <li key={machine.id}>
-                <MachineChoice
-                  machine={machine}
-                  href={walkaroundHref(machine.id)}
-                  inProgress={inProgress(orgId, machine.id)}
-                />
-              </li>
-            ))}
-          </ul>
+          {groups.map((group) => (
+            <section key={group.title ?? 'all'} className="flex flex-col gap-3">
+              {group.title ? (
+                <h2 className="text-base font-black text-field-800">{group.title}</h2>
+              ) : null}
+              <ul aria-label={group.title ?? 'Machines'} className="flex flex-col gap-3">
+                {group.machines.map((machine) => (
+                  <li key={machine.id}>
+                    <MachineChoice
+                      orgId={orgId}
+                      timeZone={timeZone}
+                      machine={machine}
+                      href={walkaroundHref(machine.id)}
+                      inProgress={inProgress(orgId, machine.id)}
+                    />
+                  </li>
+                ))}
+              </ul>
+            </section>
+          ))}
           {shown.length === 0 ? (
             <p className="text-field-700">No machine matches “{find.trim()}”.</p>
           ) : null}
@@ -96,14 +117,20 @@ const inProgress = (orgId: string, machineId: string) => {
 };
 
 function MachineChoice({
+  orgId,
+  timeZone,
   machine,
   href,
   inProgress,
 }: {
+  orgId: string;
+  timeZone: string;
   machine: PickableMachine;
   href: string;
   inProgress: boolean;
 }) {
+  const [explained, setExplained] = useState(false);
+  const explanationId = useId();
   const details = (
     <span className="flex min-w-0 flex-1 flex-col">
       <span className="text-xl font-black text-field-950">{machine.fleetNumber}</span>
@@ -118,15 +145,31 @@ function MachineChoice({
   );
 
   if (machine.status === 'tagged_out') {
+    // not a link to the walkaround: a button that explains, and the card stays unusable
     return (
-      <div
-        aria-disabled="true"
-        className="flex min-h-16 flex-col items-start gap-2 rounded-xl border-2 border-dashed border-poppy-400 bg-poppy-50/60 p-4"
-      >
-        {details}
-        <Badge tone="overdue" icon="lock">
-          Tagged out — do not use
-        </Badge>
+      <div className="flex flex-col rounded-xl border-2 border-dashed border-poppy-400 bg-poppy-50/60">
+        <button
+          type="button"
+          aria-expanded={explained}
+          aria-controls={explanationId}
+          onClick={() => setExplained((open) => !open)}
+          className="flex min-h-16 flex-col items-start gap-2 p-4 text-left"
+        >
+          {details}
+          <span className="flex flex-wrap items-center gap-2">
+            <Badge tone="overdue" icon="lock">
+              Tagged out — do not use
+            </Badge>
+            <span className="text-sm font-bold text-poppy-800 underline underline-offset-2">
+              {explained ? 'Hide why' : 'Why?'}
+            </span>
+          </span>
+        </button>
+        <div id={explanationId} hidden={!explained} className="px-4 pb-4">
+          {explained ? (
+            <TagOutExplanation orgId={orgId} machineId={machine.id} timeZone={timeZone} />
+          ) : null}
+        </div>
       </div>
     );
   }

@@ -13,6 +13,7 @@ import { useOutbox } from '../lib/use-outbox';
 import { useSendWalkaround, type SendResult } from '../lib/use-send-walkaround';
 import { useWalkaroundDraft } from '../lib/use-walkaround-draft';
 import { QueuedWalkaround } from './queued-walkaround';
+import { NotYoursNotice } from './not-yours-notice';
 import { TaggedOutNotice } from './tagged-out-notice';
 import { WalkaroundForm } from './walkaround-form';
 import { WalkaroundOutcomeView } from './walkaround-outcome';
@@ -65,6 +66,11 @@ export function WalkaroundScreen(props: WalkaroundScreenProps) {
   const checklist = loaded ?? offlineChecklist;
   const taggedOut =
     isApiError(query.error) && query.error.code === 'tagged_out' ? query.error.message : null;
+  // a label this person may not use: assigned to other operators, or not this farm's machine
+  const notYours =
+    isApiError(query.error) && query.error.status === 404
+      ? { message: query.error.code === 'not_assigned' ? query.error.message : null }
+      : null;
   const machines = usePickableMachines(orgId);
   const fleetNumber =
     checklist?.machine.fleetNumber ??
@@ -107,12 +113,17 @@ export function WalkaroundScreen(props: WalkaroundScreenProps) {
   } else if (taggedOut) {
     body = (
       <TaggedOutNotice
+        orgId={orgId}
+        machineId={machineId}
+        timeZone={props.timeZone}
         message={taggedOut}
         pickHref={hrefs.pick}
         defectsHref={hrefs.defects}
         inspectHref={hrefs.inspect}
       />
     );
+  } else if (notYours) {
+    body = <NotYoursNotice orgId={orgId} message={notYours.message} pickHref={hrefs.pick} />;
   } else if (query.isError) {
     body = (
       <ErrorState
