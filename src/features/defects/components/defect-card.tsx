@@ -59,7 +59,7 @@ export function DefectCard({
           </h2>
           <Link
             to={machineHref(machine.id)}
-            className="self-start font-bold text-field-800 underline decoration-field-300 underline-offset-2 hover:decoration-field-800"
+            className="inline-flex min-h-touch items-center self-start font-bold text-field-800 underline decoration-field-300 underline-offset-2 hover:decoration-field-800"
           >
             {machine.fleetNumber} · {machine.name}
           </Link>

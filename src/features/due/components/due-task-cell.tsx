@@ -12,7 +12,7 @@ export function DueMachine({ row, href }: { row: DueRow; href: string }) {
     <div className="flex flex-col items-start gap-1">
       <Link
         to={href}
-        className="font-bold text-field-900 underline decoration-field-300 underline-offset-2 hover:decoration-field-700"
+        className="inline-flex min-h-touch flex-wrap items-center gap-x-1 font-bold text-field-900 underline decoration-field-300 underline-offset-2 hover:decoration-field-700"
       >
         <span className="whitespace-nowrap">{machine.fleetNumber}</span>{' '}
         <span className="font-normal">{machine.name}</span>

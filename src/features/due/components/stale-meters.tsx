@@ -37,7 +37,7 @@ export function StaleMeters({ stale, machineHref, logHoursHref }: StaleMetersPro
               <div className="min-w-0">
                 <Link
                   to={machineHref(item.machine.id)}
-                  className="font-bold text-field-900 underline decoration-field-300 underline-offset-2"
+                  className="inline-flex min-h-touch flex-wrap items-center gap-x-1 font-bold text-field-900 underline decoration-field-300 underline-offset-2"
                 >
                   {item.machine.fleetNumber}{' '}
                   <span className="font-normal">{item.machine.name}</span>

@@ -31,7 +31,7 @@ export function fleetColumns({ machineHref, timeZone }: ColumnContext) {
       cell: (info) => (
         <Link
           to={machineHref(info.row.original.id)}
-          className="font-black text-field-950 underline decoration-field-300 underline-offset-4 hover:decoration-field-800"
+          className="inline-flex min-h-touch items-center font-black text-field-950 underline decoration-field-300 underline-offset-4 hover:decoration-field-800"
         >
           {info.getValue()}
         </Link>
