@@ -26,6 +26,12 @@ export const MACHINE_PAGE_READING_FLEET = 'RD-01';
  */
 export const ROLE_FLOWS_FLEET = ['RF-01', 'RF-02', 'RF-03'] as const;
 
+/**
+ * planned-once.e2e.ts adds this machine (one task, two readings), plans a visit on it, completes
+ * that plan from Record service and attaches a photo to the record (issue 10).
+ */
+export const PLANNED_ONCE_FLEET = 'PL-01';
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -34,4 +40,5 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   SAFETY_STATES_FLEET,
   MACHINE_PAGE_READING_FLEET,
   ...ROLE_FLOWS_FLEET,
+  PLANNED_ONCE_FLEET,
 ]);
