@@ -21,10 +21,14 @@ export const SAFETY_STATES_FLEET = 'TR-01';
 export const MACHINE_PAGE_READING_FLEET = 'RD-01';
 
 /**
- * role-flows.e2e.ts adds these (no schedule, no readings): RF-01 and the tagged-out RF-03 assigned
- * to lena, RF-02 to sam; it starts a walkaround on RF-01 and tags RF-03 out.
+ * role-flows.e2e.ts adds these (no readings): RF-01 and the tagged-out RF-03 assigned to lena,
+ * RF-02 to sam; it starts a walkaround on RF-01 and tags RF-03 out. RF-04 gets one task with a
+ * hazard and a visit planned for next Monday (the shop week of that date shows it).
  */
-export const ROLE_FLOWS_FLEET = ['RF-01', 'RF-02', 'RF-03'] as const;
+export const ROLE_FLOWS_FLEET = ['RF-01', 'RF-02', 'RF-03', 'RF-04'] as const;
+
+/** due-truth.e2e.ts adds this machine with a task 38 h past its meter (issue 10, due truth). */
+export const DUE_TRUTH_FLEET = 'OD-01';
 
 /**
  * planned-once.e2e.ts adds this machine (one task, two readings), plans a visit on it, completes
@@ -40,5 +44,6 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   SAFETY_STATES_FLEET,
   MACHINE_PAGE_READING_FLEET,
   ...ROLE_FLOWS_FLEET,
+  DUE_TRUTH_FLEET,
   PLANNED_ONCE_FLEET,
 ]);
