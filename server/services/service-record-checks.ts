@@ -90,11 +90,11 @@ export function checkReassembly(settings: ReassemblySetting[], reason: string) {
   const fields: Record<string, string> = {};
   for (const { s, i } of unticked)
     fields[`reassemblySettings.${i}.restored`] =
-      `"${s.what}: ${s.value}" is not ticked as restored: restore it, or say why in unrestoredReason`;
+      `"${s.what}: ${s.value}" is not ticked as restored: restore it, or say why it stays as it is under "Reason a setting is not restored"`;
   const names = unticked.map(({ s }) => `"${s.what}: ${s.value}"`).join(', ');
   throw invalid(
     fields,
-    `Not completed: reassembly setting ${names} ${unticked.length === 1 ? 'is' : 'are'} not ticked as restored. Tick ${unticked.length === 1 ? 'it' : 'them'} once restored, or give the reason (unrestoredReason).`,
+    `Not completed: reassembly setting ${names} ${unticked.length === 1 ? 'is' : 'are'} not ticked as restored. Tick ${unticked.length === 1 ? 'it' : 'them'} once restored, or say why under "Reason a setting is not restored".`,
   );
 }
 

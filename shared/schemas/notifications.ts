@@ -83,6 +83,20 @@ export const NOTIFICATION_KIND_LABELS: Record<string, string> = {
   overdue: 'Overdue alert',
   invitation: 'Invitation',
   password_reset: 'Password reset',
+  tag_out: 'Tag-out notice',
+  dealer_reminder: 'Dealer reminder',
+  dealer_link_request: 'Dealer access request',
+  dealer_link_granted: 'Dealer access granted',
+  booking_proposed: 'Booking proposal',
+  booking_accepted: 'Booking accepted',
+  booking_declined: 'Booking declined',
+  booking_cancelled: 'Booking withdrawn',
+  sign_up_confirm: 'Sign-up link',
+  sign_up_existing: 'Sign-up attempt',
+  email_change_confirm: 'E-mail change link',
+  email_change_taken: 'E-mail change attempt',
+  email_changed: 'E-mail changed',
+  organization_deleted: 'Organization deleted',
 };
 
 // --- Responses ---------------------------------------------------------------------------------

@@ -5,41 +5,7 @@ import { SelectField } from '../../../components/ui/field';
 import { ListSkeleton } from '../../../components/ui/skeleton';
 import { formatDateTime } from '../../../lib/format';
 import { useAuditEvents } from '../api/get-audit-events';
-import type { AuditEvent } from '../api/types';
-
-// What each audited action reads as; unknown actions show as recorded.
-const ACTIONS: Record<string, string> = {
-  'dealer.read': 'looked at',
-  'dealer.reminder': 'sent a reminder about',
-  'booking.propose': 'proposed a booking',
-  'booking.cancel': 'withdrew a booking',
-  'service.plan': 'planned a service',
-  'service.complete': 'recorded a service',
-  'service.update': 'edited a service record',
-  'service.cancel': 'cancelled a planned service',
-};
-
-const WHAT: Record<string, string> = {
-  machines: 'the fleet',
-  'machines/readings': "a machine's readings",
-  'machines/due': "a machine's due services",
-  'machines/tasks': "a machine's schedule",
-  'machines/photo': "a machine's photo",
-  'machines/service-records': "a machine's service history",
-  'machines/measurements': "a machine's measurements",
-  'machines/measurements/series': "a machine's measurements",
-  'service-records': 'a service record',
-  'service-records/attachments': 'a service attachment',
-  'readings/latest': 'the latest readings',
-  due: 'the due list',
-};
-
-function describe(e: AuditEvent) {
-  const verb = ACTIONS[e.action] ?? e.action;
-  if (e.action === 'dealer.read' || e.action === 'dealer.reminder')
-    return `${verb} ${WHAT[e.entityType] ?? e.entityType}`;
-  return verb;
-}
+import { describeAuditEvent } from './audit-wording';
 
 /** The farm's audit log of dealer activity: every read, reminder, proposal and service. */
 export function DealerActivity({ orgId, timeZone }: { orgId: string; timeZone: string }) {
@@ -85,7 +51,7 @@ export function DealerActivity({ orgId, timeZone }: { orgId: string; timeZone: s
               <li key={e.id} className="flex flex-col gap-0.5 p-3">
                 <p>
                   <span className="font-bold">{e.actor?.name ?? 'Someone'}</span>
-                  {e.dealer ? ` (${e.dealer.name})` : ''} {describe(e)}
+                  {e.dealer ? ` (${e.dealer.name})` : ''} {describeAuditEvent(e)}
                 </p>
                 <p className="text-sm text-field-600">{formatDateTime(e.createdAt, timeZone)}</p>
               </li>

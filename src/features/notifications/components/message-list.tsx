@@ -16,8 +16,9 @@ import type { MessageFilters } from '../api/types';
 import type { SentMessage } from '../api/types';
 import { MessageStatusBadge, messageStatusLabel } from './message-status-badge';
 
+/** A kind the labels do not know yet still reads as words: "frost_alert" → "Frost alert". */
 export const kindLabel = (kind: string) =>
-  NOTIFICATION_KIND_LABELS[kind] ?? kind.replace(/_/g, ' ');
+  NOTIFICATION_KIND_LABELS[kind] ?? kind.charAt(0).toUpperCase() + kind.slice(1).replace(/_/g, ' ');
 
 interface MessageListProps {
   orgId: string;
