@@ -6,6 +6,7 @@ import {
   niceTicks,
   PROJECTION_DAYS,
 } from '../../src/features/machines/lib/meter-chart-data';
+import { DUE_LINE_COLOURS } from '../../src/features/machines/lib/meter-chart-colours';
 
 type Reading = Parameters<typeof buildMeterChartData>[0][number];
 type Replacement = Parameters<typeof buildMeterChartData>[1][number];
@@ -87,7 +88,14 @@ describe('meter chart data — three readings, 5 h/day (4…6), whole history', 
     expect(data.yTicks).toEqual([0, 200, 400, 600, 800]);
     expect(data.yDomain).toEqual([0, 800]);
     expect(data.dueLines).toEqual([
-      { value: 250, label: 'Engine oil, Air filter', labelled: true, alsoHere: 0 },
+      {
+        value: 250,
+        label: 'Engine oil, Air filter',
+        labelled: true,
+        side: 'left',
+        colour: DUE_LINE_COLOURS[0],
+        alsoHere: 0,
+      },
     ]);
     expect(data.dueBeyond).toEqual([{ value: 5000, label: 'Coolant' }]);
   });
@@ -123,15 +131,73 @@ describe('meter chart data — the last 183 days of a long history, no estimate'
     expect(data.replacements).toEqual([{ t: at(300), label: 'Meter replaced' }]);
   });
 
-  it('buildMeterChartData — due lines 10 h apart — the lower one is labelled for both', () => {
+  it('buildMeterChartData — due lines 10 h apart — each its own colour, labels at opposite ends', () => {
     // Values 434 … 830, pad 19.8 → ticks over 414.2 … 849.8: step 200 (435.6 / 4 = 108.9).
-    // A label needs 18/220 of 600 = 49 h: 830 is too close to 820 to print its own.
+    // A label needs 18/220 of 600 = 49 h: 830 is too close to 820 for the same end, so it takes
+    // the right end of its line.
     expect(data.yTicks).toEqual([400, 600, 800, 1000]);
     expect(data.dueLines).toEqual([
-      { value: 820, label: 'Grease', labelled: true, alsoHere: 1 },
-      { value: 830, label: 'Belts', labelled: false },
+      {
+        value: 820,
+        label: 'Grease',
+        labelled: true,
+        side: 'left',
+        colour: DUE_LINE_COLOURS[0],
+        alsoHere: 0,
+      },
+      {
+        value: 830,
+        label: 'Belts',
+        labelled: true,
+        side: 'right',
+        colour: DUE_LINE_COLOURS[1],
+        alsoHere: 0,
+      },
     ]);
     expect(data.dueBeyond).toEqual([]);
+  });
+});
+
+describe('meter chart data — three due lines within one label height', () => {
+  // 0 … 800 h over 400 days, no estimate; due at 820, 825 and 830 h: both ends are taken by the
+  // first two, so the third is unlabelled and the nearest label below (825, right) says "+1".
+  const data = buildMeterChartData(
+    [reading(400, 800), reading(0, 0)],
+    [],
+    { ...usage(0, 0, 0), method: 'none' },
+    [
+      { taskName: 'Grease', dueMeter: 820 },
+      { taskName: 'Belts', dueMeter: 825 },
+      { taskName: 'Chains', dueMeter: 830 },
+    ],
+  )!;
+
+  it('buildMeterChartData — the third line has its own colour and no label; "+1" on the one below', () => {
+    expect(data.dueLines.map((l) => [l.value, l.labelled, l.side, l.alsoHere])).toEqual([
+      [820, true, 'left', 0],
+      [825, true, 'right', 1],
+      [830, false, undefined, undefined],
+    ]);
+    expect(new Set(data.dueLines.map((l) => l.colour)).size).toBe(3);
+  });
+});
+
+describe('meter chart data — a single reading (issue 10)', () => {
+  // One reading of 4,210 h on day 0, no estimate yet.
+  const data = buildMeterChartData(
+    [reading(0, 4210)],
+    [],
+    { ...usage(0, 0, 0), method: 'none' },
+    [],
+  )!;
+
+  it('buildMeterChartData — one reading — the week around it on the time axis', () => {
+    expect(data.xDomain).toEqual([at(-3), at(3)]);
+  });
+
+  it('buildMeterChartData — one reading — value ticks of distinct whole values around 4,210 h', () => {
+    // A flat line gets 2 % of its value (84.2 h) each side: 4,125.8 … 4,294.2, step 50.
+    expect(data.yTicks).toEqual([4100, 4150, 4200, 4250, 4300]);
   });
 });
 

@@ -45,6 +45,24 @@ describe('timeTicks', () => {
     // CDT from 9 March 2025: 1 April starts at 05:00 UTC
     expect(ticks[2]).toBe(utc('2025-04-01T05:00:00Z'));
   });
+  it('timeTicks — six days, at most 8 (under a day apart) — one tick at each midday, no date twice', () => {
+    const week: [number, number] = [utc('2025-01-01T10:00:00Z'), utc('2025-01-07T10:00:00Z')];
+    const { ticks, format } = timeTicks(week, 8, 'UTC');
+    // the middays inside 1 January 10:00 … 7 January 10:00: 1 … 6 January
+    expect(ticks).toEqual(
+      ['01', '02', '03', '04', '05', '06'].map((d) => utc(`2025-01-${d}T12:00:00Z`)),
+    );
+    expect(new Set(ticks.map(format)).size).toBe(ticks.length);
+  });
+  it('timeTicks — three days in Chicago — midday of the farm day (18:00 UTC in winter)', () => {
+    // 1 Jan 00:00 UTC is 31 Dec 18:00 CST: 31 December's midday is before the start
+    const days: [number, number] = [utc('2025-01-01T00:00:00Z'), utc('2025-01-04T00:00:00Z')];
+    expect(timeTicks(days, 6, 'America/Chicago').ticks).toEqual([
+      utc('2025-01-01T18:00:00Z'),
+      utc('2025-01-02T18:00:00Z'),
+      utc('2025-01-03T18:00:00Z'),
+    ]);
+  });
   it('timeTicks — 1 … 21 January (no two month starts), at most 3 — evenly spaced: days 0, 10, 20', () => {
     const span: [number, number] = [utc('2025-01-01T00:00:00Z'), utc('2025-01-21T00:00:00Z')];
     expect(timeTicks(span, 3, 'UTC').ticks).toEqual([

@@ -1,5 +1,6 @@
 import { formatDate } from '../../../lib/format';
 import { formatMeter } from '../../../lib/fleet-format';
+import { DUE } from '../lib/meter-chart-colours';
 import { PROJECTION_DAYS, type DueLine, type MeterChartData } from '../lib/meter-chart-data';
 
 // The meter chart's figures in words: the due meters under the drawing, and the table a screen
@@ -26,9 +27,25 @@ export function DueMeterList({
   return (
     <ul className="flex flex-col gap-1 text-sm text-field-800">
       {dueLines.map((line) => (
-        <li key={line.value}>
-          <span className="font-bold text-poppy-700">Due at {formatMeter(line.value, unit)}</span>:{' '}
-          {line.label}
+        <li key={line.value} className="flex items-baseline gap-2">
+          {/* the line's colour on the chart, beside its name */}
+          <svg width="20" height="8" aria-hidden="true" className="shrink-0">
+            <line
+              x1="0"
+              y1="4"
+              x2="20"
+              y2="4"
+              stroke={line.colour ?? DUE}
+              strokeWidth="3"
+              strokeDasharray="2 3"
+            />
+          </svg>
+          <span>
+            <span className="font-bold" style={{ color: line.colour ?? DUE }}>
+              Due at {formatMeter(line.value, unit)}
+            </span>
+            : {line.label}
+          </span>
         </li>
       ))}
       {dueBeyond.length > 0 ? (
@@ -66,51 +83,57 @@ export function ChartSummaryTable({
 }) {
   const date = (t: number) => formatDate(new Date(t).toISOString(), timeZone);
   return (
-    <table className="sr-only">
-      <caption>Meter chart figures</caption>
-      <thead>
-        <tr>
-          <th scope="col">Point</th>
-          <th scope="col">Date</th>
-          <th scope="col">Meter</th>
-        </tr>
-      </thead>
-      <tbody>
-        <tr>
-          <th scope="row">First reading</th>
-          <td>{date(data.first.t)}</td>
-          <td>{formatMeter(data.first.value, unit)}</td>
-        </tr>
-        <tr>
-          <th scope="row">Last reading</th>
-          <td>{date(data.last.t)}</td>
-          <td>{formatMeter(data.last.value, unit)}</td>
-        </tr>
-        {data.projection ? (
+    // the wrapper is what hides it: a table ignores sr-only's 1 px width and overflow, and a
+    // hidden table as wide as its figures widened the whole page on a phone
+    <div className="sr-only">
+      <table>
+        <caption>Meter chart figures</caption>
+        <thead>
           <tr>
-            <th scope="row">Trend in {PROJECTION_DAYS} days</th>
-            <td>{date(data.projection.t)}</td>
-            <td>
-              {formatMeter(data.projection.value, unit)} (range{' '}
-              {formatMeter(data.projection.low, unit)}–{formatMeter(data.projection.high, unit)})
-            </td>
+            <th scope="col">Point</th>
+            <th scope="col">Date</th>
+            <th scope="col">Meter</th>
           </tr>
-        ) : null}
-        {marks.map((m, i) => (
-          <tr key={`service-${i}`}>
-            <th scope="row">Service: {m.label}</th>
-            <td>{date(m.t)}</td>
-            <td>{formatMeter(m.meter, unit)}</td>
+        </thead>
+        <tbody>
+          {data.last.t > data.first.t ? (
+            <tr>
+              <th scope="row">First reading</th>
+              <td>{date(data.first.t)}</td>
+              <td>{formatMeter(data.first.value, unit)}</td>
+            </tr>
+          ) : null}
+          <tr>
+            <th scope="row">{data.last.t > data.first.t ? 'Last reading' : 'Reading'}</th>
+            <td>{date(data.last.t)}</td>
+            <td>{formatMeter(data.last.value, unit)}</td>
           </tr>
-        ))}
-        {data.replacements.map((r) => (
-          <tr key={r.t}>
-            <th scope="row">Meter replaced</th>
-            <td>{date(r.t)}</td>
-            <td>—</td>
-          </tr>
-        ))}
-      </tbody>
-    </table>
+          {data.projection ? (
+            <tr>
+              <th scope="row">Trend in {PROJECTION_DAYS} days</th>
+              <td>{date(data.projection.t)}</td>
+              <td>
+                {formatMeter(data.projection.value, unit)} (range{' '}
+                {formatMeter(data.projection.low, unit)}–{formatMeter(data.projection.high, unit)})
+              </td>
+            </tr>
+          ) : null}
+          {marks.map((m, i) => (
+            <tr key={`service-${i}`}>
+              <th scope="row">{m.label ? `Service: ${m.label}` : 'Service'}</th>
+              <td>{date(m.t)}</td>
+              <td>{formatMeter(m.meter, unit)}</td>
+            </tr>
+          ))}
+          {data.replacements.map((r) => (
+            <tr key={r.t}>
+              <th scope="row">Meter replaced</th>
+              <td>{date(r.t)}</td>
+              <td>—</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
   );
 }

@@ -12,7 +12,8 @@ import {
   XAxis,
   YAxis,
 } from 'recharts';
-import { formatMeter } from '../../../lib/fleet-format';
+import { formatMeter, meterUnitLabel } from '../../../lib/fleet-format';
+import { formatDate } from '../../../lib/format';
 import type { MeterReplacement, Reading, Usage } from '../api/types';
 import { BAND, DUE, INK, REPLACED, TREND } from '../lib/meter-chart-colours';
 import { buildMeterChartData, PROJECTION_DAYS, type ChartWindow } from '../lib/meter-chart-data';
@@ -64,10 +65,16 @@ export function MeterChart({
   const historyDays = (data.last.t - data.firstReading.t) / 86_400_000;
 
   const xTicks = timeTicks(data.xDomain, narrow ? 3 : 6, timeZone);
-  const caption = `Meter from ${formatMeter(data.firstReading.value, unit)} to ${formatMeter(
-    data.last.value,
-    unit,
-  )} over ${formatDistanceStrict(data.firstReading.t, data.last.t)}`;
+  const caption =
+    data.last.t > data.firstReading.t
+      ? `Meter from ${formatMeter(data.firstReading.value, unit)} to ${formatMeter(
+          data.last.value,
+          unit,
+        )} over ${formatDistanceStrict(data.firstReading.t, data.last.t)}`
+      : `One reading so far: ${formatMeter(data.last.value, unit)} on ${formatDate(
+          new Date(data.last.t).toISOString(),
+          timeZone,
+        )}`;
 
   return (
     <figure className="flex flex-col gap-3">
@@ -88,8 +95,10 @@ export function MeterChart({
       {historyDays > 183 ? (
         <WindowPicker value={period} onChange={setPeriod} showYear={historyDays > 365} />
       ) : null}
-      <div aria-hidden="true" className="h-72 w-full sm:h-80">
-        <ResponsiveContainer width="100%" height="100%">
+      <div aria-hidden="true" className="flex h-72 w-full flex-col sm:h-80">
+        {/* the value axis's unit, over it */}
+        <p className="text-sm font-bold text-field-700">{meterUnitLabel(unit)}</p>
+        <ResponsiveContainer width="100%" className="min-h-0 flex-1">
           <ComposedChart
             data={data.points}
             margin={{ top: 12, right: narrow ? 8 : 24, bottom: 4, left: narrow ? -8 : 8 }}
@@ -148,16 +157,16 @@ export function MeterChart({
               <ReferenceLine
                 key={line.value}
                 y={line.value}
-                stroke={DUE}
+                stroke={line.colour ?? DUE}
                 strokeDasharray="2 3"
                 strokeWidth={1.5}
                 label={{
                   value: line.labelled
-                    ? shortLabel(line.label, narrow ? 24 : 60) +
+                    ? shortLabel(line.label, narrow ? 18 : 48) +
                       (line.alsoHere ? ` +${line.alsoHere}` : '')
                     : '',
-                  position: 'insideTopLeft',
-                  fill: DUE,
+                  position: line.side === 'right' ? 'insideTopRight' : 'insideTopLeft',
+                  fill: line.colour ?? DUE,
                   fontSize: 12,
                   fontWeight: 700,
                 }}
@@ -200,5 +209,5 @@ export function MeterChart({
   );
 }
 
-const compactNumber = new Intl.NumberFormat(undefined, { maximumFractionDigits: 0 });
+const compactNumber = new Intl.NumberFormat(undefined, { maximumFractionDigits: 1 });
 const NO_SERVICES: ServiceMark[] = [];

@@ -1,4 +1,5 @@
 import type { MeterReplacement, Reading, Usage } from '../api/types';
+import { DUE_LINE_COLOURS } from './meter-chart-colours';
 
 // The meter chart's series. Every figure comes from the server: the readings' lifetime values,
 // and the usage estimate (rate, low, high per day). The line ahead only extends the last reading
@@ -22,8 +23,12 @@ export interface ChartPoint {
 export interface DueLine {
   value: number;
   label: string;
-  /** whether the chart prints this line's label (false where it would overlap the one below) */
+  /** whether the chart prints this line's label (false where it would overlap another) */
   labelled?: boolean;
+  /** which end of the line its label sits at: two lines close together label both ends */
+  side?: 'left' | 'right';
+  /** the line's own colour, the same beside its name in the list under the chart */
+  colour?: string;
   /** how many unlabelled lines just above share this line's label spot */
   alsoHere?: number;
 }
@@ -60,23 +65,30 @@ function groupDueMeters(dues: { taskName: string; dueMeter: number }[]): DueLine
 }
 
 /**
- * Labels of lines closer together than `minGap` (meter units) would print over each other: the
- * lower line keeps its label and says how many more share its spot; the list below the chart
- * names them all.
+ * Labels of lines closer together than `minGap` (meter units) would print over each other. Each
+ * line gets its own colour; a label goes at the left end of its line, or at the right end when
+ * the left is taken by a line just below; a line with both ends taken stays unlabelled, and the
+ * nearest label below says how many more share its spot (the list under the chart names them).
  */
 function placeLabels(lines: DueLine[], minGap: number): DueLine[] {
   const placed: DueLine[] = [];
-  let anchor: { index: number; value: number } | null = null;
-  for (const line of lines) {
-    if (anchor && line.value - anchor.value < minGap) {
-      placed.push({ ...line, labelled: false });
-      const base = placed[anchor.index];
-      placed[anchor.index] = { ...base, alsoHere: (base.alsoHere ?? 0) + 1 };
-    } else {
-      anchor = { index: placed.length, value: line.value };
-      placed.push({ ...line, labelled: true, alsoHere: 0 });
+  const lastOn: Record<'left' | 'right', number | null> = { left: null, right: null };
+  lines.forEach((line, i) => {
+    const colour = DUE_LINE_COLOURS[i % DUE_LINE_COLOURS.length];
+    const free = (side: 'left' | 'right') => {
+      const last = lastOn[side];
+      return last === null || line.value - placed[last].value >= minGap;
+    };
+    const side = free('left') ? 'left' : free('right') ? 'right' : null;
+    if (side) {
+      lastOn[side] = placed.length;
+      placed.push({ ...line, labelled: true, side, colour, alsoHere: 0 });
+      return;
     }
-  }
+    const anchor = Math.max(lastOn.left ?? -1, lastOn.right ?? -1);
+    placed[anchor] = { ...placed[anchor], alsoHere: (placed[anchor].alsoHere ?? 0) + 1 };
+    placed.push({ ...line, labelled: false, colour });
+  });
   return placed;
 }
 
@@ -140,7 +152,8 @@ export function buildMeterChartData(
   const values = [first.value, top, ...inRange.map((d) => d.value)];
   const min = Math.min(...values);
   const max = Math.max(...values);
-  const pad = Math.max((max - min) * 0.05, 1);
+  // a flat line (one reading) gets room around it, so the axis ticks are not one value repeated
+  const pad = max > min ? Math.max((max - min) * 0.05, 1) : Math.max(Math.abs(max) * 0.02, 10);
   const yTicks = niceTicks(Math.max(0, min - pad), max + pad, 5);
   const dueLines = placeLabels(inRange, (yTicks[yTicks.length - 1] - yTicks[0]) * LABEL_SHARE);
 
@@ -155,7 +168,12 @@ export function buildMeterChartData(
     replacements: replacements
       .map((r) => ({ t: new Date(r.replacedAt).getTime(), label: 'Meter replaced' }))
       .filter((r) => r.t >= first.t && r.t <= last.t),
-    xDomain: [first.t, projection ? projection.t : Math.max(last.t, first.t + DAY_MS)],
+    // a single reading and no estimate: the week around it, so the axis shows days, not hours
+    xDomain: projection
+      ? [first.t, projection.t]
+      : last.t - first.t >= DAY_MS
+        ? [first.t, last.t]
+        : [last.t - 3 * DAY_MS, last.t + 3 * DAY_MS],
     yDomain: [yTicks[0], yTicks[yTicks.length - 1]],
     yTicks,
   };

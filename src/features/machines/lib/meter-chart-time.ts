@@ -1,5 +1,7 @@
 import { TZDate } from '@date-fns/tz';
-import { addMonths, startOfMonth } from 'date-fns';
+import { addDays, addMonths, startOfDay, startOfMonth } from 'date-fns';
+
+const DAY_MS = 86_400_000;
 
 // The meter chart's time axis, in the farm's time zone: where a day sits, and where the ticks go.
 
@@ -36,8 +38,26 @@ export function timeTicks(
   }
   const label = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', timeZone });
   const stepMs = (to - from) / (max - 1);
-  return {
-    ticks: Array.from({ length: max }, (_, i) => Math.round(from + i * stepMs)),
-    format: (t) => label.format(t),
-  };
+  if (stepMs >= DAY_MS)
+    return {
+      ticks: Array.from({ length: max }, (_, i) => Math.round(from + i * stepMs)),
+      format: (t) => label.format(t),
+    };
+  // fewer days than ticks: one tick at midday of each farm day, so no date repeats
+  const days: number[] = [];
+  for (
+    let day = startOfDay(new TZDate(from, timeZone));
+    day.getTime() <= to;
+    day = addDays(day, 1)
+  ) {
+    const midday = new TZDate(
+      day.getFullYear(),
+      day.getMonth(),
+      day.getDate(),
+      12,
+      timeZone,
+    ).getTime();
+    if (midday >= from && midday <= to) days.push(midday);
+  }
+  return { ticks: days, format: (t) => label.format(t) };
 }

@@ -61,7 +61,8 @@ export const serviceEventsQueryOptions = (orgId: string, machineId: string) =>
                     recordId: r.id,
                     performedOn: r.performedOn,
                     meter: r.meterLifetime,
-                    label: r.tasks.map((t) => t.name).join(', ') || 'Service',
+                    // the tasks done; none named leaves it empty (the chart says "Service" alone)
+                    label: r.tasks.map((t) => t.name).join(', '),
                   },
                 ]
               : [],

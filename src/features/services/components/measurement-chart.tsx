@@ -173,27 +173,30 @@ export function MeasurementChart({
           </li>
         ) : null}
       </ul>
-      <table className="sr-only">
-        <caption>{name} at each visit</caption>
-        <thead>
-          <tr>
-            <th scope="col">Date</th>
-            <th scope="col">Meter</th>
-            <th scope="col">Value</th>
-            <th scope="col">Spec</th>
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map((r) => (
-            <tr key={`${r.recordId}-${r.t}`}>
-              <th scope="row">{formatLocalDate(r.performedOn)}</th>
-              <td>{r.meterValue !== null ? formatMeter(r.meterValue, meterUnit) : '—'}</td>
-              <td>{value(r.value)}</td>
-              <td>{r.inSpec === null ? 'No spec' : r.inSpec ? 'In spec' : 'Outside the spec'}</td>
+      {/* hidden by the wrapper: a table ignores sr-only's 1 px width and would widen the page */}
+      <div className="sr-only">
+        <table>
+          <caption>{name} at each visit</caption>
+          <thead>
+            <tr>
+              <th scope="col">Date</th>
+              <th scope="col">Meter</th>
+              <th scope="col">Value</th>
+              <th scope="col">Spec</th>
             </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {rows.map((r) => (
+              <tr key={`${r.recordId}-${r.t}`}>
+                <th scope="row">{formatLocalDate(r.performedOn)}</th>
+                <td>{r.meterValue !== null ? formatMeter(r.meterValue, meterUnit) : '—'}</td>
+                <td>{value(r.value)}</td>
+                <td>{r.inSpec === null ? 'No spec' : r.inSpec ? 'In spec' : 'Outside the spec'}</td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
     </figure>
   );
 }
