@@ -1,3 +1,4 @@
+import type { Hazard } from '../../shared/schemas/schedule';
 import type { ShopWeek } from '../../shared/schemas/service-record-responses';
 import type { ShopWeekData } from '../services/shop-week';
 import { presentMachineRef } from './defect';
@@ -13,7 +14,7 @@ const presentPlan = (p: Plan, people: PeopleLookup) => ({
   id: p.id,
   plannedFor: p.plannedFor,
   machine: presentMachineRef(p.machine),
-  tasks: p.tasks,
+  tasks: p.tasks.map((t) => ({ ...t, hazards: t.hazards as Hazard[] })),
   technicians: p.technicianIds.map((id) => people(id) ?? { id, name: 'Former member' }),
   notes: p.notes,
   defectIds: p.defectIds,

@@ -96,11 +96,11 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
         organizationId: org.id,
         id: { [Op.in]: [...new Set(planned.flatMap((r) => r.tasks.map((t) => t.taskId)))] },
       },
-      attributes: ['id', 'labourHours'],
+      attributes: ['id', 'labourHours', 'hazards', 'safetyNotes'],
     }),
   ]);
   const machineOf = new Map(machines.map((m) => [m.id, m]));
-  const labourOf = new Map(tasks.map((t) => [t.id, t.labourHours]));
+  const taskOf = new Map(tasks.map((t) => [t.id, t]));
   // A task already booked on a plan (any date) is shown as such beside its due date.
   const bookedOn = new Map<string, { recordId: string; plannedFor: string }>();
   for (const r of [...allPlanned].sort((a, b) =>
@@ -112,11 +112,17 @@ export async function shopWeek(access: OrgAccess, startIso?: string) {
   const withBooking = (row: DueRow) => ({ ...row, booked: bookedOn.get(row.taskId) ?? null });
 
   const plannedItem = (r: ServiceRecord) => {
-    const taskRows = r.tasks.map((t) => ({
-      taskId: t.taskId,
-      name: t.name,
-      labourHours: labourOf.get(t.taskId) ?? null,
-    }));
+    const taskRows = r.tasks.map((t) => {
+      const task = taskOf.get(t.taskId);
+      return {
+        taskId: t.taskId,
+        name: t.name,
+        labourHours: task?.labourHours ?? null,
+        // a task removed from the schedule since keeps its name, without a caution to show
+        hazards: task?.hazards ?? [],
+        safetyNotes: task?.safetyNotes ?? '',
+      };
+    });
     const lines = sumLines([r]);
     return {
       id: r.id,

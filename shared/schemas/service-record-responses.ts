@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { FLUID_UNITS } from './schedule';
+import { FLUID_UNITS, HAZARDS } from './schedule';
 import { SERVICE_STATUSES } from './service-records';
 import { currencyCodeSchema } from './money';
 import { machineRefSchema, pageMetaSchema, personRefSchema } from './refs';
@@ -226,7 +226,14 @@ export const shopPlannedSchema = z.object({
   plannedFor: z.string(),
   machine: machineRefSchema,
   tasks: z.array(
-    z.object({ taskId: z.string(), name: z.string(), labourHours: z.number().nullable() }),
+    z.object({
+      taskId: z.string(),
+      name: z.string(),
+      labourHours: z.number().nullable(),
+      /** the task's hazards and safety notes, for the card's caution (empty: none) */
+      hazards: z.array(z.enum(HAZARDS)),
+      safetyNotes: z.string(),
+    }),
   ),
   technicians: z.array(personRefSchema),
   notes: z.string(),

@@ -11,7 +11,9 @@ const PASSWORD = 'hourstone-demo';
 /** The phone the issue names. */
 const PHONE = { width: 390, height: 844 } as const;
 const DESKTOP = { width: 1280, height: 800 } as const;
-const [MINE, SAMS, TAGGED] = ROLE_FLOWS_FLEET;
+const [MINE, SAMS, TAGGED, PLANNED] = ROLE_FLOWS_FLEET;
+const SAFETY_NOTES =
+  'Stop the engine, take the key and wait for the PTO shaft to stop before touching the guard.';
 /** The smallest touch target (WCAG 2.5.5, platform guidelines): 44 CSS px. */
 const TOUCH = 44;
 
@@ -39,6 +41,8 @@ describe('role flows — what new users tripped on (browser)', () => {
   let browser: TestBrowser;
   let orgId: string;
   const ids: Record<string, string> = {};
+  let currency: string;
+  let plan: { id: string; plannedFor: string };
 
   beforeAll(async () => {
     browser = await launchBrowser();
@@ -49,10 +53,14 @@ describe('role flows — what new users tripped on (browser)', () => {
     const idOf = (email: string) => members.find((m) => m.user.email === email)!.user.id;
     const lena = idOf('lena@larkspur.example');
     const sam = idOf('sam@larkspur.example');
+    currency = (await apiGet(page, '/me')).data.memberships.find(
+      (m: { organization: { id: string } }) => m.organization.id === orgId,
+    ).organization.currency;
     for (const [fleetNumber, operator] of [
       [MINE, lena],
       [SAMS, sam],
       [TAGGED, lena],
+      [PLANNED, lena],
     ]) {
       const created = await page.request.post(`/api/v1/organizations/${orgId}/machines`, {
         data: {
@@ -71,6 +79,29 @@ describe('role flows — what new users tripped on (browser)', () => {
       { data: { status: 'tagged_out' } },
     );
     expect(tagged.status()).toBe(200);
+
+    // RF-04: a task with a hazard and its notes, planned for next Monday
+    const task = await page.request.post(
+      `/api/v1/organizations/${orgId}/machines/${ids[PLANNED]}/tasks`,
+      {
+        data: {
+          name: 'PTO clutch check',
+          intervalMeter: 250,
+          hazards: ['pto'],
+          safetyNotes: SAFETY_NOTES,
+        },
+      },
+    );
+    expect(task.status()).toBe(201);
+    const monday = new Date();
+    monday.setUTCDate(monday.getUTCDate() + ((8 - monday.getUTCDay()) % 7 || 7));
+    const plannedFor = monday.toISOString().slice(0, 10);
+    const planned = await page.request.post(
+      `/api/v1/organizations/${orgId}/machines/${ids[PLANNED]}/service-records`,
+      { data: { status: 'planned', plannedFor, taskIds: [(await task.json()).data.id] } },
+    );
+    expect(planned.status()).toBe(201);
+    plan = { id: (await planned.json()).data.id, plannedFor };
     await page.close();
   });
 
@@ -104,7 +135,8 @@ describe('role flows — what new users tripped on (browser)', () => {
     it("a scanned label of sam's machine — says it is not hers and names the managers to ask", async () => {
       await page.goto(`/o/${orgId}/walkaround/${ids[SAMS]}`);
       const alert = page.getByRole('alert').filter({ hasText: 'Not assigned to you' });
-      await alert.waitFor();
+      // the managers' names arrive with the member list, a moment after the refusal
+      await alert.getByText(/Marta Quist/).waitFor();
       const text = (await alert.innerText()).replace(/\s+/g, ' ');
       expect(text).toContain(`${SAMS} is not assigned to you`);
       expect(text).toContain('Marta Quist');
@@ -205,6 +237,41 @@ describe('role flows — what new users tripped on (browser)', () => {
       await secondToggle.click();
       await second.getByRole('radiogroup', { name: items[6].label, exact: true }).waitFor();
     });
+  });
+
+  it('technician — the shop week records a planned visit, shows its caution in full, and costs say their currency', async () => {
+    const page = await browser.newPage(DESKTOP);
+    await signIn(page, 'dev@larkspur.example', PASSWORD);
+    await page.goto(`/o/${orgId}/shop?start=${plan.plannedFor}`);
+    // the innermost list items: a day's list holds its visits' and due rows' items
+    const cards = page.locator('main li:not(:has(li))');
+    // the visit's card: the innermost item holding its "Record service" (its caution is a list too)
+    const card = page
+      .locator('main li')
+      .filter({ has: page.getByRole('link', { name: new RegExp(`^Record service: ${PLANNED},`) }) })
+      .last();
+    await card.waitFor();
+    const caution = card.getByRole('complementary', { name: 'Safety cautions' });
+    const words = (await caution.innerText()).replace(/\s+/g, ' ');
+    expect(words).toContain('PTO clutch check');
+    expect(words).toContain(SAFETY_NOTES);
+    expect(words).toMatch(/operator's manual/);
+    // every due row not booked yet offers both: plan it, or record it now
+    const unbooked = cards.filter({ hasText: 'Not booked' });
+    for (let i = 0; i < (await unbooked.count()); i++)
+      expect(
+        await unbooked
+          .nth(i)
+          .getByRole('link', { name: /^Record service: / })
+          .count(),
+      ).toBe(1);
+    await screenshot(page, 'role-flows-technician-shop-week');
+    await card.getByRole('link', { name: /^Record service: / }).click();
+    await page.waitForURL((url) => url.pathname.endsWith(`/machines/${ids[PLANNED]}/services/new`));
+    expect(new URL(page.url()).searchParams.get('complete')).toBe(plan.id);
+    await page.getByRole('button', { name: 'Add part' }).click();
+    await page.getByLabel(`Unit cost (${currency})`, { exact: true }).first().waitFor();
+    await page.close();
   });
 
   it('machine links in lists — touch targets of at least 44 px on a phone and a desktop', async () => {

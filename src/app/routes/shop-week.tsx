@@ -57,6 +57,12 @@ export function ShopWeekPage() {
         plan: true,
         on: date,
       }),
+    recordServiceHref: (machineId, { planId, taskId }) =>
+      paths.organization.serviceRecordNew.href(
+        orgId,
+        machineId,
+        planId ? { complete: planId } : { taskIds: taskId ? [taskId] : [] },
+      ),
   };
   const shown = week.data;
   const nav = 'inline-flex items-center gap-1';

@@ -44,7 +44,8 @@ export function MoneyField<T extends FieldValues>({
       : moneyInputText(field.value as number | null | undefined, currency);
   return (
     <TextField
-      label={label}
+      // the currency is part of the label: "18.40" alone does not say dollars or euros
+      label={`${label} (${currency})`}
       hint={hint}
       error={error}
       inputMode="decimal"

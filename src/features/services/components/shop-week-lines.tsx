@@ -13,6 +13,32 @@ export interface ShopLinks {
   recordHref: (recordId: string) => string;
   /** the plan form with this task chosen, booked for `date` */
   planHref: (machineId: string, taskId: string, date: string | null) => string;
+  /** the record form: completing a plan (`planId`), else a visit for this task */
+  recordServiceHref: (machineId: string, options: { planId?: string; taskId?: string }) => string;
+}
+
+const actionLink =
+  'inline-flex min-h-touch items-center rounded-lg border border-field-300 bg-white px-3 font-bold text-field-900 hover:bg-field-50';
+
+/** The cautions of a plan's tasks in full: hazards and safety notes, ending with the deferral. */
+function PlanCautions({ tasks }: { tasks: ShopPlanned['tasks'] }) {
+  const risky = tasks.filter((t) => t.hazards.length > 0 || t.safetyNotes.trim());
+  if (risky.length === 0) return null;
+  return (
+    <Caution compact label={`Safety cautions`} heading="Caution" defer>
+      <ul className="flex flex-col gap-1.5">
+        {risky.map((t) => (
+          <li key={t.taskId}>
+            <span className="font-bold">{t.name}</span>
+            {t.hazards.length ? `: ${hazardNames(t.hazards)}.` : ':'}
+            {t.safetyNotes ? (
+              <span className="block whitespace-pre-line">{t.safetyNotes}</span>
+            ) : null}
+          </li>
+        ))}
+      </ul>
+    </Caution>
+  );
 }
 
 const link =
@@ -47,6 +73,16 @@ export function PlannedItem({ item, links }: { item: ShopPlanned; links: ShopLin
           Tagged out: not to be used until released.
         </p>
       ) : null}
+      <PlanCautions tasks={item.tasks} />
+      <div className="flex flex-wrap items-center gap-2">
+        <Link
+          to={links.recordServiceHref(item.machine.id, { planId: item.id })}
+          className={actionLink}
+          aria-label={`Record service: ${item.machine.fleetNumber}, planned ${formatLocalDate(item.plannedFor)}`}
+        >
+          Record service
+        </Link>
+      </div>
     </li>
   );
 }
@@ -93,9 +129,18 @@ export function DueItem({
       ) : null}
       <div className="flex flex-wrap items-center gap-2">
         {row.booked ? (
-          <Link to={links.recordHref(row.booked.recordId)} className={link}>
-            Booked for {formatLocalDate(row.booked.plannedFor)}
-          </Link>
+          <>
+            <Link to={links.recordHref(row.booked.recordId)} className={link}>
+              Booked for {formatLocalDate(row.booked.plannedFor)}
+            </Link>
+            <Link
+              to={links.recordServiceHref(row.machine.id, { planId: row.booked.recordId })}
+              className={actionLink}
+              aria-label={`Record service: ${row.taskName} on ${row.machine.fleetNumber}`}
+            >
+              Record service
+            </Link>
+          </>
         ) : (
           <>
             <Badge tone="due-soon">Not booked</Badge>
@@ -105,6 +150,13 @@ export function DueItem({
               aria-label={`Plan ${row.taskName} on ${row.machine.fleetNumber}`}
             >
               Plan
+            </Link>
+            <Link
+              to={links.recordServiceHref(row.machine.id, { taskId: row.taskId })}
+              className={actionLink}
+              aria-label={`Record service: ${row.taskName} on ${row.machine.fleetNumber}`}
+            >
+              Record service
             </Link>
           </>
         )}
