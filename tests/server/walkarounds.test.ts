@@ -123,7 +123,7 @@ describe('walkarounds — checklist', () => {
     expect(res.body.data.criticalNote).toMatch(/tags the machine out/);
   });
 
-  it('checklist — an operator cannot see a machine they are not assigned to (404) nor edit schedules (403)', async () => {
+  it('checklist — an operator cannot see a machine they are not assigned to (404, not_assigned with its fleet number) nor edit schedules (403)', async () => {
     const y = await yard();
     const other = await createMachine(y.org, { fleetNumber: 'T-02' });
     const { user: someone } = await createMember(y.org, 'operator');
@@ -133,7 +133,19 @@ describe('walkarounds — checklist', () => {
       userId: someone.id,
     });
     const task = await createTask(y.machine);
-    expect((await y.opAgent.get(`${y.base}/machines/${other.id}/checklist`)).status).toBe(404);
+    const refused = await y.opAgent.get(`${y.base}/machines/${other.id}/checklist`);
+    expect(refused.status).toBe(404);
+    // the scanned label's machine is the farm's own: the operator is told it is someone else's
+    expect(refused.body.error).toEqual({
+      code: 'not_assigned',
+      message: 'T-02 is not assigned to you: it is assigned to other operators',
+    });
+    // an id of no machine of this farm stays a plain 404
+    const unknown = await y.opAgent.get(
+      `${y.base}/machines/00000000-0000-4000-8000-000000000000/checklist`,
+    );
+    expect(unknown.status).toBe(404);
+    expect(unknown.body.error.code).toBe('not_found');
     expect((await y.opAgent.post(`${y.base}/walkarounds`).send(submission(other.id))).status).toBe(
       404,
     );
