@@ -85,9 +85,7 @@ describe('due digest — content (hand-worked due list, see reminders-fixture.ts
     // = 5.20 → asOf + 5 (Sun 12 Apr); latest 0.333 + 50/8 = 6.58 → asOf + 6 (Mon 13 Apr).
     expect(text).toContain(`${APP_URL}/o/${org.id}/machines/${loader.id}`);
     expect(text).toContain('Coming up: Grease pins');
-    expect(text).toContain(
-      'Projected Sun, Apr 12, 2026 (range Sat, Apr 11 – Mon, Apr 13, 2026)',
-    );
+    expect(text).toContain('Projected Sun, Apr 12, 2026 (range Sat, Apr 11 – Mon, Apr 13, 2026)');
 
     expect(mail.html).toContain('name="viewport"');
     expect(mail.html).toContain(`href="${APP_URL}/o/${org.id}/machines/${tractor.id}"`);

@@ -69,13 +69,11 @@ describe('planned visits — recording a service offers the open plan', () => {
     expect((await prefill([])).body.data.plannedVisits).toEqual([]);
 
     // a completed or cancelled plan is no longer open
-    const done = await agent
-      .post(api(farm.org.id, `/service-records/${sooner}/complete`))
-      .send({
-        performedOn: todayIso(TZ),
-        meterValue: 1310,
-        taskIds: [farm.oil.id, farm.hydraulic.id],
-      });
+    const done = await agent.post(api(farm.org.id, `/service-records/${sooner}/complete`)).send({
+      performedOn: todayIso(TZ),
+      meterValue: 1310,
+      taskIds: [farm.oil.id, farm.hydraulic.id],
+    });
     expect(done.status).toBe(200);
     expect((await prefill([farm.hydraulic.id])).body.data.plannedVisits).toEqual([]);
     expect(

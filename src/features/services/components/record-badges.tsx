@@ -1,4 +1,7 @@
-import { SERVICE_STATUS_LABELS, type ServiceStatus } from '../../../../shared/schemas/service-records';
+import {
+  SERVICE_STATUS_LABELS,
+  type ServiceStatus,
+} from '../../../../shared/schemas/service-records';
 import { Badge, type BadgeTone } from '../../../components/ui/badge';
 import type { IconName } from '../../../components/ui/icons';
 import type { SpecStatus } from '../api/types';
