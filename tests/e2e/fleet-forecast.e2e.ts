@@ -46,10 +46,10 @@ describe('fleet and forecast — the manager in the browser', () => {
   it('dashboard — shows what is overdue and due soon across the Larkspur fleet', async () => {
     await page.goto('/');
     await page.getByRole('heading', { name: 'Dashboard' }).waitFor();
-    const overdue = page.getByRole('button', { name: /^Overdue: \d+/ });
+    const overdue = page.getByRole('button', { name: /^Overdue:? \d+/ });
     await overdue.waitFor();
     expect(Number((await overdue.innerText()).match(/\d+/)![0])).toBeGreaterThan(0);
-    const soon = page.getByRole('button', { name: /^Due soon: \d+/ });
+    const soon = page.getByRole('button', { name: /^Due soon:? \d+/ });
     expect(Number((await soon.innerText()).match(/\d+/)![0])).toBeGreaterThan(0);
     const table = page.getByRole('table', { name: 'Due services' });
     await table.waitFor();

@@ -215,6 +215,7 @@ export function Icon({ name, title, className = 'size-5', ...rest }: IconProps) 
       aria-hidden={title ? undefined : true}
       role={title ? 'img' : undefined}
       focusable="false"
+      data-icon={name}
       {...rest}
     >
       {title ? <title>{title}</title> : null}

@@ -1,4 +1,4 @@
-import { DUE_STATUSES, DUE_STATUS_LABELS } from '../../../shared/constants';
+import { DUE_STATUSES } from '../../../shared/constants';
 import type { DueStatus } from '../../../shared/domain/types';
 import { cx } from './cx';
 import { DueStatusBadge } from './status-badges';
@@ -16,6 +16,7 @@ const RING: Record<DueStatus, string> = {
 /**
  * How many tasks of each status fall inside the horizon. Each count is a toggle button that
  * filters the list to that status (aria-pressed says which one is on); pressing it again clears.
+ * Its name is what it shows ("Overdue 4"), so a voice command of the visible words works.
  */
 export function StatusCounts({
   counts,
@@ -38,7 +39,6 @@ export function StatusCounts({
             <button
               type="button"
               aria-pressed={pressed}
-              aria-label={`${DUE_STATUS_LABELS[status]}: ${counts[status]}`}
               onClick={() => onSelect(pressed ? null : status)}
               className={cx(
                 'flex min-h-touch w-full flex-col items-start gap-1 rounded-xl border-2 bg-white p-3 text-left shadow-card transition-colors hover:bg-oat-50',

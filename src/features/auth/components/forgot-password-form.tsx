@@ -41,8 +41,8 @@ export function ForgotPasswordForm({ afterSent }: ForgotPasswordFormProps) {
     return (
       <div className="flex flex-col gap-4">
         <Alert tone="success" title="Check your e-mail">
-          If {sentTo} has a Hourstone account, a link to set a new password is on its way. The link
-          works once and expires after a while.
+          If <strong className="break-all">{sentTo}</strong> has a Hourstone account, a link to set
+          a new password is on its way. The link works once and expires after a while.
         </Alert>
         {afterSent}
         <Button variant="secondary" onClick={() => setSentTo(null)}>

@@ -44,8 +44,9 @@ export function SignUpForm({ afterSent }: SignUpFormProps) {
     return (
       <div className="flex flex-col gap-4">
         <Alert tone="success" title="Check your e-mail">
-          We sent a link to {sentTo}. Open it to confirm the address and finish creating your
-          account; it works once, within a day. Nothing is made until you do.
+          We sent a link to <strong className="break-all">{sentTo}</strong>. Open it to confirm the
+          address and finish creating your account; it works once, within a day. Nothing is made
+          until you do.
         </Alert>
         {afterSent}
         <Button variant="secondary" onClick={() => setSentTo(null)}>

@@ -12,9 +12,13 @@ interface BoardListProps {
 const selectLabel = (r: BoardRow) =>
   `Select ${r.machine.fleetNumber} ${r.taskName} at ${r.customer.name}`;
 
+// The table's columns need the content column of a 1280 px window (about 960 px beside the side
+// bar); narrower windows get the cards, so no column is cut off.
+const TABLE_FITS = '(min-width: 1280px)';
+
 /** The board's rows in the server's order: a table where there is room, cards on phones. */
 export function BoardList(props: BoardListProps) {
-  const wide = useMediaQuery('(min-width: 1024px)');
+  const wide = useMediaQuery(TABLE_FITS);
   return wide ? <BoardTable {...props} /> : <BoardCards {...props} />;
 }
 

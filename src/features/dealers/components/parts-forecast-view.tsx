@@ -6,6 +6,7 @@ import { ErrorState } from '../../../components/ui/error-state';
 import { SelectField } from '../../../components/ui/field';
 import { Icon } from '../../../components/ui/icons';
 import { LoadingRegion, Skeleton } from '../../../components/ui/skeleton';
+import { TableScroll } from '../../../components/ui/table-scroll';
 import { partsCsvHref, usePartsForecast } from '../api/get-parts-forecast';
 import type { FluidLine, PartLine } from '../api/types';
 import { dateText } from './dealer-format';
@@ -103,8 +104,9 @@ export function PartsForecastView({
   );
 }
 
-const th = 'px-2.5 py-2 text-left text-sm font-bold text-field-700';
-const td = 'px-2.5 py-2.5 align-top';
+// narrower cells on a phone, so the four columns fit without scrolling
+const th = 'px-1.5 py-2 text-left text-sm font-bold text-field-700 sm:px-2.5';
+const td = 'px-1.5 py-2.5 align-top break-words sm:px-2.5';
 
 function Lines({
   parts,
@@ -134,7 +136,7 @@ function Lines({
     })),
   ];
   return (
-    <div className="overflow-x-auto rounded-xl border border-field-200 bg-white shadow-card">
+    <TableScroll label={`Parts and fluids: ${label}`}>
       <table className="w-full border-collapse">
         <caption className="sr-only">Parts and fluids: {label}</caption>
         <thead className="border-b border-field-200 bg-oat-100">
@@ -162,11 +164,11 @@ function Lines({
               </td>
               <td className={`${td} text-right tabular-nums`}>{l.amount}</td>
               <td className={`${td} text-right tabular-nums`}>{l.machines}</td>
-              <td className={`${td} whitespace-nowrap`}>{dateText(l.first)}</td>
+              <td className={td}>{dateText(l.first)}</td>
             </tr>
           ))}
         </tbody>
       </table>
-    </div>
+    </TableScroll>
   );
 }

@@ -9,12 +9,16 @@ interface DueListProps {
   machineHref: (machineId: string) => string;
 }
 
+// The table's columns need the content column of a 1280 px window (about 960 px beside the side
+// bar); narrower windows get the cards, so no column is cut off.
+const TABLE_FITS = '(min-width: 1280px)';
+
 /**
  * The due rows in the server's order (overdue first, then by date). A table where there is room
  * for its six columns; stacked cards on phones and narrow windows.
  */
 export function DueList({ rows, machineHref }: DueListProps) {
-  const wide = useMediaQuery('(min-width: 1024px)');
+  const wide = useMediaQuery(TABLE_FITS);
   return wide ? (
     <DueTable rows={rows} machineHref={machineHref} />
   ) : (
