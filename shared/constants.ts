@@ -90,6 +90,10 @@ export const HAZARD_LABELS = {
   stored_energy: 'Springs and other stored energy',
   hot_fluid: 'Hot fluids',
   battery: 'Battery',
+  chemicals: 'Chemicals',
+  tyres_rims: 'Tyres and rims',
+  power_lines: 'Overhead power lines',
+  hitching_crush: 'Hitching crush points',
 } as const;
 
 /** A hazard's words, also for a value this client does not know yet. */

@@ -42,6 +42,11 @@ export const HAZARDS = [
   'stored_energy',
   'hot_fluid',
   'battery',
+  // added with issue 11; the column is text[] with no CHECK, so no migration
+  'chemicals',
+  'tyres_rims',
+  'power_lines',
+  'hitching_crush',
 ] as const;
 export type Hazard = (typeof HAZARDS)[number];
 
