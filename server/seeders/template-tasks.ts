@@ -4,36 +4,11 @@
 import type { UnitSystem } from '../../shared/constants';
 import type { Hazard, TaskFluid, TaskInput, TaskPart } from '../../shared/schemas/schedule';
 
-/** Short cautions shown beside a task; each defers to the operator's manual and local rules. */
-export const SAFETY_NOTES: Record<Hazard, string> = {
-  pto:
-    'Stop the engine, remove the key and wait for all motion to stop before working near the PTO. ' +
-    'A 540 rpm shaft turns 9 times a second (Clemson University Cooperative Extension). ' +
-    "Follow the operator's manual and local rules.",
-  stored_energy:
-    'Springs, belts, chains and accumulators keep their energy after the engine stops: release ' +
-    "tension only as the operator's manual describes.",
-  hydraulic_pressure:
-    'Lower everything to the ground and relieve hydraulic pressure before opening a line or ' +
-    'filter. Oil under pressure can pierce skin: never feel for a leak with your hand. Follow the ' +
-    "operator's manual and qualified service practice.",
-  raised_load:
-    'Never work under a raised loader, header, boom or body unless it rests on its mechanical ' +
-    "lock or on stands. Follow the operator's manual and local rules.",
-  hot_fluid:
-    'Let the machine cool before draining: hot oil and coolant burn. Never open a hot radiator ' +
-    "or coolant cap. Follow the operator's manual.",
-  battery:
-    'Wear eye protection, keep sparks and flames away, disconnect the negative terminal first ' +
-    "and reconnect it last. Follow the operator's manual.",
-};
-
-/** Text of the safety notes of a task's hazards, in the order given. */
-export function safetyNotesFor(hazards: Hazard[]): string {
-  return hazards.map((h) => SAFETY_NOTES[h]).join(' ');
-}
-
-/** A full TaskInput from the fields that matter; safety notes follow from the hazards. */
+/**
+ * A full TaskInput from the fields that matter. The caution of its hazards comes from the one
+ * table (shared/domain/hazards.ts) wherever the task is shown, so its own safety notes stay empty
+ * unless the task needs words of its own.
+ */
 export function task(fields: Partial<TaskInput> & Pick<TaskInput, 'name'>): TaskInput {
   const hazards = fields.hazards ?? [];
   return {
@@ -48,7 +23,7 @@ export function task(fields: Partial<TaskInput> & Pick<TaskInput, 'name'>): Task
     instructions: '',
     hazards,
     ...fields,
-    safetyNotes: fields.safetyNotes ?? safetyNotesFor(hazards),
+    safetyNotes: fields.safetyNotes ?? '',
   };
 }
 

@@ -64,8 +64,7 @@ export function sprayer(units: UnitSystem): TaskInput[] {
       labourHours: 0.75,
       instructions:
         'Rinse the system first. Clean strainers and filters, check nozzle flow and pattern, replace worn tips.',
-      safetyNotes:
-        "Wear the protective equipment the product label requires and rinse the system before opening it. Follow the label, the operator's manual and local rules.",
+      hazards: ['chemicals'],
     }),
     task({
       name: 'Boom fold and breakaway check',

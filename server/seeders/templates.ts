@@ -168,7 +168,7 @@ function truck(units: UnitSystem): TaskInput[] {
       labourHours: 1.5,
       instructions: 'Check lining wear, slack adjusters, air leaks and drain the air tanks.',
       safetyNotes:
-        'Chock the wheels. Spring brake chambers hold a strong spring: never take one apart. Follow the manual, local road rules and qualified service practice.',
+        'Chock the wheels. Spring brake chambers hold a strong spring: never take one apart.',
       hazards: ['stored_energy'],
     }),
     greaseTask(

@@ -1,39 +1,15 @@
-// The pieces of the built-in walkaround checklists: the hazard cautions (CHECKS.md §6), the item
+// The pieces of the built-in walkaround checklists: the hazard cautions (shared/domain/hazards.ts), the item
 // builder and the items several categories share. The lists themselves are in
 // checklist-self-propelled.ts and checklist-towed-road.ts; checklist-defaults.ts picks one.
+import { hazardCautionText } from '../../shared/domain/hazards';
 import type { Hazard } from '../../shared/schemas/schedule';
 import type { ChecklistItem } from '../models/walkaround';
 
-const DEFER = "Follow the operator's manual and local rules.";
-
-/** The caution shown beside an item per hazard; each ends by deferring to the manual and local rules. */
-export const HAZARD_CAUTIONS: Record<Hazard, string> = {
-  pto:
-    'PTO: a 540 rpm shaft turns 9 times a second and a 1,000 rpm shaft about 16.6 times — no one ' +
-    'can react in time. Never step over a turning shaft; disengage the PTO and stop the engine ' +
-    `before you dismount (Clemson University Cooperative Extension). ${DEFER}`,
-  hydraulic_pressure:
-    'Hydraulic pressure: a pinhole leak can inject oil through the skin. Search for leaks with a ' +
-    'piece of cardboard, never your fingers, and get medical help at once if oil enters the skin ' +
-    `(Colorado State University Extension, fact sheet 5.017). ${DEFER}`,
-  raised_load:
-    'Raised implements: lower them to the ground or block them securely before going near or ' +
-    'under; set the brakes and chock the wheels (Ohio State University Extension, "Safe Use of ' +
-    `Jacks"). ${DEFER}`,
-  stored_energy:
-    'Stored energy: springs held by snap rings, belts and chains under tension and accumulators ' +
-    'keep their force after the engine stops; release or compress them only with a press or the ' +
-    `proper tool (common practice). ${DEFER}`,
-  hot_fluid:
-    'Hot fluids: check levels with the engine stopped and cooled; never open a hot radiator or ' +
-    `coolant cap. ${DEFER}`,
-  battery:
-    'Battery: keep sparks and flames away and protect your eyes; batteries give off explosive ' +
-    `gas. ${DEFER}`,
-};
-
-/** The caution text of a set of hazards, in the order given. */
-export const cautionFor = (hazards: Hazard[]) => hazards.map((h) => HAZARD_CAUTIONS[h]).join(' ');
+/**
+ * The caution of an item's hazards: shared/domain/hazards.ts, the one table the task cautions and
+ * e-mails use too (each hazard's line, then the deferral once).
+ */
+export const cautionFor = (hazards: Hazard[]) => hazardCautionText(hazards);
 
 export const item = (
   id: string,
@@ -74,6 +50,7 @@ export const I = {
     'tyre-inflation',
     "Tyre inflation as the operator's manual says",
     'No tyre visibly low; check the pressure with a gauge when in doubt.',
+    { hazards: ['tyres_rims'] },
   ),
   tyreDamage: item(
     'tyre-damage',
@@ -140,7 +117,7 @@ export const I = {
     'hitch',
     'Hitch, drawbar and linkage pins',
     'Pins and clips in place; three-point linkage and drawbar secure; implements lowered.',
-    { hazards: ['raised_load'] },
+    { hazards: ['raised_load', 'hitching_crush'] },
   ),
   belts: item(
     'belts',

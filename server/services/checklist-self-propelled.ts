@@ -95,9 +95,11 @@ export const SELF_PROPELLED_CHECKLISTS: Record<
         'boom-locks',
         'Boom transport locks and breakaways',
         'Locks hold in transport; breakaways return.',
-        { critical: true, hazards: ['raised_load', 'hydraulic_pressure'] },
+        { critical: true, hazards: ['raised_load', 'hydraulic_pressure', 'power_lines'] },
       ),
-      item('spray-lines', 'Tank, lines and nozzles', 'No leaks or drips of product; lids closed.'),
+      item('spray-lines', 'Tank, lines and nozzles', 'No leaks or drips of product; lids closed.', {
+        hazards: ['chemicals'],
+      }),
       item(
         'clean-water',
         'Clean-water tank and protective gear',

@@ -11,3 +11,4 @@ export * from './cost';
 export * from './money';
 export * from './record-costs';
 export * from './due-words';
+export * from './hazards';

@@ -4,6 +4,7 @@ import { describe, expect, it } from 'vitest';
 import { TZDate } from '@date-fns/tz';
 import { MACHINE_CATEGORIES } from '../../shared/constants';
 import { isoFromDayNumber, localDayNumber } from '../../shared/domain';
+import { hazardCautionText } from '../../shared/domain/hazards';
 import { taskInputSchema } from '../../shared/schemas/schedule';
 import {
   generateReadings,
@@ -192,7 +193,10 @@ describe('demo seed — schedule templates', () => {
           expect(parsed.success, `${t.category}: ${task.name} ${parsed.error?.message ?? ''}`).toBe(
             true,
           );
-          if (task.hazards.length) expect(task.safetyNotes, task.name).toMatch(/manual/);
+          // a hazard's caution comes from the one table; a task's own words never contradict it
+          expect(`${task.instructions} ${task.safetyNotes}`, task.name).not.toMatch(
+            /let (it|the machine) cool|drain(ed)? (it )?hot/i,
+          );
           if (task.warnMeter !== null && task.intervalMeter !== null) {
             expect(task.warnMeter / task.intervalMeter, task.name).toBeLessThanOrEqual(0.1);
           }
@@ -209,7 +213,8 @@ describe('demo seed — schedule templates', () => {
     // Demo intervals are common practice (CHECKS.md §7: no published source gives universal hours).
     expect(pto.intervalMeter).toBe(1000);
     expect(pto.hazards).toEqual(['pto', 'stored_energy']);
-    expect(pto.safetyNotes).toMatch(/540 rpm shaft turns 9 times a second/);
+    expect(pto.safetyNotes).toBe('');
+    expect(hazardCautionText(pto.hazards)).toMatch(/540 rpm shaft turns 9 times a second/);
     const oil = tractor.tasks.find((t) => t.name === 'Engine oil and filter')!;
     expect([oil.intervalMeter, oil.intervalDays]).toEqual([500, 365]);
     expect(oil.fluids[0].unit).toBe('gal');

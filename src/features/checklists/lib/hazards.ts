@@ -1,12 +1,5 @@
-import { HAZARDS, type Hazard } from '../../../../shared/schemas/schedule';
+import { HAZARD_TABLE } from '../../../../shared/domain/hazards';
+import { HAZARDS } from '../../../../shared/schemas/schedule';
 
-export const HAZARD_LABELS: Record<Hazard, string> = {
-  pto: 'PTO shaft',
-  hydraulic_pressure: 'Hydraulic pressure',
-  raised_load: 'Raised implement or load',
-  stored_energy: 'Springs, stored energy',
-  hot_fluid: 'Hot fluids',
-  battery: 'Battery',
-};
-
-export const HAZARD_OPTIONS = HAZARDS.map((value) => ({ value, label: HAZARD_LABELS[value] }));
+// The checklist editor's hazard choices, in the words of the one table (shared/domain/hazards.ts).
+export const HAZARD_OPTIONS = HAZARDS.map((value) => ({ value, label: HAZARD_TABLE[value].label }));
