@@ -79,12 +79,22 @@ export const HAZARD_TABLE: Record<Hazard, HazardEntry> = Object.fromEntries(
 export const hazardAdvice = (hazard: string): string =>
   (HAZARD_TABLE as Record<string, HazardEntry | undefined>)[hazard]?.advice ?? '';
 
+/** Each hazard's label and advice, in the order given; an unknown value keeps its words, no advice. */
+export function hazardCautionEntries(
+  hazards: readonly string[],
+): { hazard: string; label: string; advice: string }[] {
+  return hazards.map((hazard) => ({
+    hazard,
+    label: hazardLabel(hazard),
+    advice: hazardAdvice(hazard),
+  }));
+}
+
 /** One line per hazard, in the order given: "PTO shaft: Stop the engine, …". */
 export function hazardCautionLines(hazards: readonly string[]): string[] {
-  return hazards.map((hazard) => {
-    const advice = hazardAdvice(hazard);
-    return advice ? `${hazardLabel(hazard)}: ${advice}` : `${hazardLabel(hazard)}.`;
-  });
+  return hazardCautionEntries(hazards).map(({ label, advice }) =>
+    advice ? `${label}: ${advice}` : `${label}.`,
+  );
 }
 
 /**

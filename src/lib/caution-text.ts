@@ -1,5 +1,7 @@
 import { hazardLabel } from '../../shared/constants';
 
+export { hazardCautionEntries, hazardCautionText } from '../../shared/domain/hazards';
+
 // The words of a caution's hazards, for the one caution component (src/components/ui/caution.tsx).
 
 /** "PTO shaft, Battery": the hazards' labels as a list. */

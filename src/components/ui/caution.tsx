@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { SAFETY_DEFERRAL } from '../../../shared/constants';
+import { hazardCautionEntries } from '../../lib/caution-text';
 import { cx } from './cx';
 import { Icon } from './icons';
 
@@ -8,6 +9,11 @@ interface CautionProps {
   heading: string;
   /** words that run on after the heading, in the same paragraph */
   text?: string;
+  /**
+   * the hazards whose cautions to show in full, each "Label: what to do", in the words of the one
+   * table (shared/domain/hazards.ts)
+   */
+  hazards?: readonly string[];
   /** end with the deferral to the operator's manual, local regulations and qualified practice */
   defer?: boolean;
   /**
@@ -35,6 +41,7 @@ interface CautionProps {
 export function Caution({
   heading,
   text,
+  hazards = [],
   defer = false,
   variant = 'panel',
   label = 'Caution',
@@ -43,6 +50,7 @@ export function Caution({
   inline = false,
   children,
 }: CautionProps) {
+  const entries = hazardCautionEntries(hazards);
   if (variant === 'line') {
     const Line = inline ? 'span' : 'p';
     return (
@@ -56,6 +64,13 @@ export function Caution({
         <span>
           <span className="font-bold">{heading}</span>
           {text ? ` ${text}` : null}
+          {entries.map(({ hazard, label, advice }) => (
+            <span key={hazard}>
+              {' '}
+              <span className="font-bold">{advice ? `${label}:` : `${label}.`}</span>
+              {advice ? ` ${advice}` : null}
+            </span>
+          ))}
           {defer ? ` ${SAFETY_DEFERRAL}` : null}
         </span>
       </Line>
@@ -78,6 +93,16 @@ export function Caution({
           <span className="font-black">{heading}</span>
           {text ? ` ${text}` : null}
         </p>
+        {entries.length ? (
+          <ul className="flex flex-col gap-1">
+            {entries.map(({ hazard, label, advice }) => (
+              <li key={hazard}>
+                <span className="font-bold">{advice ? `${label}:` : `${label}.`}</span>
+                {advice ? ` ${advice}` : null}
+              </li>
+            ))}
+          </ul>
+        ) : null}
         {children}
         {defer ? <p className="font-bold">{SAFETY_DEFERRAL}</p> : null}
       </div>

@@ -1,7 +1,6 @@
 import { Link } from 'react-router-dom';
 import { Caution } from '../../../components/ui/caution';
 import { MachineStatusBadge } from '../../../components/ui/status-badges';
-import { hazardSentence } from '../../../lib/caution-text';
 import type { DueRow } from '../api/types';
 import { BASIS_TEXT } from './due-format';
 
@@ -23,8 +22,8 @@ export function DueMachine({ row, href }: { row: DueRow; href: string }) {
 }
 
 /**
- * The task's name, how its due point is based, and its caution in words when it involves a hazard
- * ("Caution: hot fluids and battery. Follow the operator's manual, …"), in the table and on phones.
+ * The task's name, how its due point is based, and the full caution of its hazards ("Caution. Hot
+ * fluids: Drain oil warm, not hot… Follow the operator's manual, …"), in the table and on phones.
  */
 export function DueTask({ row }: { row: DueRow }) {
   const basis = BASIS_TEXT[row.due.basis];
@@ -33,7 +32,7 @@ export function DueTask({ row }: { row: DueRow }) {
       <span>{row.taskName}</span>
       {basis ? <span className="text-sm text-field-600">{basis}</span> : null}
       {row.hazards.length ? (
-        <Caution variant="line" heading={`Caution: ${hazardSentence(row.hazards)}.`} defer />
+        <Caution variant="line" heading="Caution." hazards={row.hazards} defer />
       ) : null}
     </div>
   );

@@ -4,7 +4,6 @@ import { Button, buttonClasses } from '../../../components/ui/button';
 import { Caution } from '../../../components/ui/caution';
 import { Icon } from '../../../components/ui/icons';
 import { DueStatusBadge } from '../../../components/ui/status-badges';
-import { hazardNames } from '../../../lib/caution-text';
 import { formatMeter } from '../../../lib/fleet-format';
 import type { Task } from '../api/types';
 import { describeInterval, describeWarning } from '../lib/task-text';
@@ -88,8 +87,12 @@ export function TaskCard({
           ) : null}
         </div>
       ) : null}
+      {/* the caution in full, outside the fold: what to do about each hazard, the task's own
+          notes, the deferral */}
       {hasHazard ? (
-        <Caution variant="line" heading={`Caution: ${hazardNames(task.hazards)}.`} defer />
+        <Caution compact heading="Caution" hazards={task.hazards} defer>
+          {task.safetyNotes ? <p className="whitespace-pre-line">{task.safetyNotes}</p> : null}
+        </Caution>
       ) : null}
       {task.due?.status === 'history_unknown' ? (
         <HistoryUnknownPanel
@@ -101,7 +104,7 @@ export function TaskCard({
         />
       ) : null}
 
-      {/* The full due point, last done, caution, contents and editing fold away: a machine has
+      {/* The full due point, last done, contents and editing fold away: a machine has
           many tasks, and the summary above is what a glance at the page needs. */}
       <details className="group">
         <summary className="flex min-h-touch cursor-pointer items-center gap-1 font-bold text-field-800">
@@ -115,12 +118,6 @@ export function TaskCard({
           )}
 
           <LastDoneText task={task} unit={unit} />
-
-          {hasHazard ? (
-            <Caution heading={`Caution: ${hazardNames(task.hazards)}`} defer>
-              {task.safetyNotes ? <p>{task.safetyNotes}</p> : null}
-            </Caution>
-          ) : null}
 
           <TaskContents task={task} showSafetyNotes={!hasHazard} />
 

@@ -20,12 +20,16 @@ export interface ShopLinks {
 const actionLink =
   'inline-flex min-h-touch items-center rounded-lg border border-field-300 bg-white px-3 font-bold text-field-900 hover:bg-field-50';
 
-/** The cautions of a plan's tasks in full: hazards and safety notes, ending with the deferral. */
+/**
+ * The cautions of a plan's tasks in full: what to do about each hazard they involve (once each),
+ * which task involves which and its own safety notes, ending with the deferral.
+ */
 function PlanCautions({ tasks }: { tasks: ShopPlanned['tasks'] }) {
   const risky = tasks.filter((t) => t.hazards.length > 0 || t.safetyNotes.trim());
   if (risky.length === 0) return null;
+  const hazards = [...new Set(risky.flatMap((t) => t.hazards))];
   return (
-    <Caution compact label={`Safety cautions`} heading="Caution" defer>
+    <Caution compact label="Safety cautions" heading="Caution" hazards={hazards} defer>
       <ul className="flex flex-col gap-1.5">
         {risky.map((t) => (
           <li key={t.taskId}>
@@ -125,7 +129,7 @@ export function DueItem({
         {row.labourHours !== null ? ` · about ${formatHours(row.labourHours)}` : ''}
       </p>
       {row.hazards.length ? (
-        <Caution variant="line" heading={`Caution: ${hazardNames(row.hazards)}.`} defer />
+        <Caution variant="line" heading="Caution." hazards={row.hazards} defer />
       ) : null}
       <div className="flex flex-wrap items-center gap-2">
         {row.booked ? (

@@ -72,14 +72,16 @@ export function TaskChoiceList({
 }
 
 /**
- * The cautions of the chosen tasks: each task's hazards and safety notes, ending with the deferral
- * to the manual, regulations and qualified practice. Nothing when no chosen task has a hazard.
+ * The cautions of the chosen tasks in full: what to do about each hazard they involve (once each),
+ * each task's hazards and safety notes, ending with the deferral to the manual, regulations and
+ * qualified practice. Nothing when no chosen task has a hazard.
  */
 function SafetyCautions({ tasks }: { tasks: readonly TaskChoice[] }) {
   const risky = tasks.filter((t) => t.hazards.length > 0 || t.safetyNotes.trim());
   if (risky.length === 0) return null;
+  const hazards = [...new Set(risky.flatMap((t) => t.hazards))];
   return (
-    <Caution label="Safety cautions" heading="Caution" defer>
+    <Caution label="Safety cautions" heading="Caution" hazards={hazards} defer>
       <ul className="flex flex-col gap-1.5">
         {risky.map((t) => (
           <li key={t.id}>
