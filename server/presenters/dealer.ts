@@ -28,6 +28,10 @@ export function presentCustomer(link: DealerLink, machineCount: number): Custome
     status: link.status,
     customer: active && link.farm ? { id: link.farm.id, name: link.farm.name } : null,
     access: active ? link.access : null,
+    farmSettings:
+      active && link.farm
+        ? { timeZone: link.farm.timeZone, currency: link.farm.currency, units: link.farm.units }
+        : null,
     invitedEmail: link.invitedEmail,
     machineCount: active ? machineCount : 0,
     acceptedAt: link.acceptedAt?.toISOString() ?? null,

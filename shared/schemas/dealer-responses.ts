@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { UNIT_SYSTEMS } from '../constants';
 import { BOOKING_STATUSES, DEALER_ACCESS, DEALER_LINK_STATUSES } from './dealers';
 import { dueCountsSchema, dueRowSchema } from './due';
 import { orgRefSchema, pageMetaSchema, personRefSchema } from './refs';
@@ -42,6 +43,10 @@ export const customerSchema = z
     status: z.enum(DEALER_LINK_STATUSES),
     customer: orgRefSchema.nullable(),
     access: accessEnum.nullable(),
+    /** the farm's clock, money and number rule, for the advisor's pages of its machines (active) */
+    farmSettings: z
+      .object({ timeZone: z.string(), currency: z.string(), units: z.enum(UNIT_SYSTEMS) })
+      .nullable(),
     invitedEmail: z.string(),
     machineCount: z.number(),
     acceptedAt: z.string().nullable(),

@@ -3,6 +3,27 @@
 
 const q = encodeURIComponent;
 
+/**
+ * The service form's options: `taskIds` to preselect; `plan`: book a plan instead of recording a
+ * visit (`on`: the date to book, yyyy-mm-dd); `complete`: the id of a plan to complete
+ */
+export interface ServiceFormOptions {
+  taskIds?: readonly string[];
+  plan?: boolean;
+  on?: string | null;
+  complete?: string;
+}
+
+function serviceFormSearch(options: ServiceFormOptions): string {
+  const search = new URLSearchParams();
+  if (options.taskIds?.length) search.set('taskIds', options.taskIds.join(','));
+  if (options.plan) search.set('plan', '1');
+  if (options.plan && options.on) search.set('on', options.on);
+  if (options.complete) search.set('complete', options.complete);
+  const query = search.toString();
+  return query ? `?${query}` : '';
+}
+
 export const paths = {
   home: { path: '/', href: () => '/' },
   signIn: {
@@ -66,24 +87,8 @@ export const paths = {
        * `taskIds`: tasks to preselect; `plan`: book a plan instead of recording a visit (`on`: the
        * date to book, yyyy-mm-dd); `complete`: the id of a plan to complete
        */
-      href: (
-        orgId: string,
-        machineId: string,
-        options: {
-          taskIds?: readonly string[];
-          plan?: boolean;
-          on?: string | null;
-          complete?: string;
-        } = {},
-      ) => {
-        const search = new URLSearchParams();
-        if (options.taskIds?.length) search.set('taskIds', options.taskIds.join(','));
-        if (options.plan) search.set('plan', '1');
-        if (options.plan && options.on) search.set('on', options.on);
-        if (options.complete) search.set('complete', options.complete);
-        const query = search.toString();
-        return `/o/${q(orgId)}/machines/${q(machineId)}/services/new${query ? `?${query}` : ''}`;
-      },
+      href: (orgId: string, machineId: string, options: ServiceFormOptions = {}) =>
+        `/o/${q(orgId)}/machines/${q(machineId)}/services/new${serviceFormSearch(options)}`,
     },
     serviceRecord: {
       path: '/o/:orgId/service-records/:recordId',
@@ -127,6 +132,23 @@ export const paths = {
       /** `customerId`: open the board filtered to one customer */
       href: (orgId: string, customerId?: string) =>
         `/o/${q(orgId)}/board${customerId ? `?customer=${q(customerId)}` : ''}`,
+    },
+    // an advisor's pages of a linked customer's machine (`orgId`: the dealer, `farmId`: the farm)
+    customerMachine: {
+      path: '/o/:orgId/customers/:farmId/machines/:machineId',
+      href: (orgId: string, farmId: string, machineId: string) =>
+        `/o/${q(orgId)}/customers/${q(farmId)}/machines/${q(machineId)}`,
+    },
+    customerServiceRecordNew: {
+      path: '/o/:orgId/customers/:farmId/machines/:machineId/services/new',
+      /** the options of `serviceRecordNew` */
+      href: (orgId: string, farmId: string, machineId: string, options: ServiceFormOptions = {}) =>
+        `/o/${q(orgId)}/customers/${q(farmId)}/machines/${q(machineId)}/services/new${serviceFormSearch(options)}`,
+    },
+    customerServiceRecord: {
+      path: '/o/:orgId/customers/:farmId/service-records/:recordId',
+      href: (orgId: string, farmId: string, recordId: string) =>
+        `/o/${q(orgId)}/customers/${q(farmId)}/service-records/${q(recordId)}`,
     },
     partsForecast: { path: '/o/:orgId/parts', href: (orgId: string) => `/o/${q(orgId)}/parts` },
     customers: { path: '/o/:orgId/customers', href: (orgId: string) => `/o/${q(orgId)}/customers` },

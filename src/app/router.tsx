@@ -45,6 +45,7 @@ import { PartsForecastPage } from './routes/parts-forecast';
 import { CustomersPage, customersLoader } from './routes/customers';
 import { BookingsPage, bookingsLoader } from './routes/bookings';
 import { FarmDealersPage, farmDealersLoader } from './routes/farm-dealers';
+import { CustomerMachinePage, customerMachineLoader } from './routes/customer-machine';
 import { DealerInvitationPage, dealerInvitationLoader } from './routes/dealer-invitation';
 import { WalkaroundOutboxSender } from '../features/walkarounds/components/outbox-sender';
 
@@ -164,6 +165,21 @@ export function createAppRouter(queryClient: QueryClient) {
                   path: paths.organization.customers.path,
                   loader: customersLoader(queryClient),
                   element: <CustomersPage />,
+                },
+                {
+                  path: paths.organization.customerMachine.path,
+                  loader: customerMachineLoader(queryClient),
+                  element: <CustomerMachinePage />,
+                },
+                {
+                  path: paths.organization.customerServiceRecordNew.path,
+                  loader: serviceRecordNewLoader(queryClient),
+                  element: <ServiceRecordNewPage />,
+                },
+                {
+                  path: paths.organization.customerServiceRecord.path,
+                  loader: serviceRecordLoader(queryClient),
+                  element: <ServiceRecordPage />,
                 },
                 {
                   path: paths.organization.bookings.path,

@@ -43,6 +43,9 @@ export function DealerBoardSection() {
       filters={filters}
       onFiltersChange={onChange}
       customersHref={paths.organization.customers.href(organization.id)}
+      machineHref={(row) =>
+        paths.organization.customerMachine.href(organization.id, row.customer.id, row.machine.id)
+      }
     />
   );
 }

@@ -40,7 +40,7 @@ import {
 import { isApiError } from '../../lib/api-client';
 import { useCurrentMembership } from '../../lib/auth';
 import { formatLocalDate, todayInZone } from '../../lib/fleet-format';
-import { paths } from '../paths';
+import { loaderFarmId, WithFarmScope, type FarmScope } from '../farm-scope';
 
 const EMPTY_PREFILL: Prefill = {
   tasks: [],
@@ -68,14 +68,17 @@ function readSearch(search: URLSearchParams) {
 export const serviceRecordNewLoader =
   (queryClient: QueryClient) =>
   ({ params, request }: LoaderFunctionArgs) => {
-    const orgId = params.orgId ?? '';
+    const orgId = loaderFarmId(params);
     const machineId = params.machineId ?? '';
     const { complete, taskIds } = readSearch(new URL(request.url).searchParams);
     // everything at once; the page waits for the lot because the form starts from all of it
     void queryClient.prefetchQuery(machineQueryOptions(orgId, machineId));
     void queryClient.prefetchQuery(tasksQueryOptions(orgId, machineId));
-    void queryClient.prefetchQuery(shopPeopleQueryOptions(orgId));
-    void queryClient.prefetchQuery(activeDefectsQueryOptions(orgId, machineId));
+    if (!params.farmId) {
+      // the farm's team and defects are its own: a dealer's advisor is sent neither
+      void queryClient.prefetchQuery(shopPeopleQueryOptions(orgId));
+      void queryClient.prefetchQuery(activeDefectsQueryOptions(orgId, machineId));
+    }
     void queryClient.prefetchQuery(serviceHistoryQueryOptions(orgId, machineId));
     if (complete) void queryClient.prefetchQuery(serviceRecordQueryOptions(orgId, complete));
     else if (taskIds.length)
@@ -89,19 +92,26 @@ const TITLES: Record<ServiceFormMode, string> = {
   complete: 'Complete service',
 };
 
+/** The service form for a farm's members, or for a dealer's advisor on a customer's machine. */
 export function ServiceRecordNewPage() {
+  return <WithFarmScope>{(scope) => <ServiceRecordNewScreen scope={scope} />}</WithFarmScope>;
+}
+
+function ServiceRecordNewScreen({ scope }: { scope: FarmScope }) {
   const { machineId = '' } = useParams();
   const [search] = useSearchParams();
   const navigate = useNavigate();
-  const { me, membership } = useCurrentMembership();
-  const orgId = membership.organization.id;
-  const timeZone = membership.organization.timeZone;
+  const { me } = useCurrentMembership();
+  const orgId = scope.farm.id;
+  const timeZone = scope.farm.timeZone;
+  const member = scope.dealerAccess === null;
   const { mode, complete, taskIds: wanted, on } = readSearch(search);
 
   const machine = useMachine(orgId, machineId);
   const tasks = useTasks(orgId, machineId);
-  const people = useShopPeople(orgId);
-  const defects = useActiveDefects(orgId, machineId);
+  // an advisor names no technicians (the farm's team is its own) and never closes defects
+  const people = useShopPeople(orgId, member);
+  const defects = useActiveDefects(orgId, machineId, member);
   const history = useServiceHistory(orgId, machineId, { q: '', page: 1 });
   const record = useServiceRecord(orgId, complete ?? '');
   const known = useMemo(() => {
@@ -113,12 +123,18 @@ export function ServiceRecordNewPage() {
     enabled: mode !== 'complete' && known.length > 0 && tasks.isSuccess,
   });
 
-  const machineHref = paths.organization.machine.href(orgId, machineId);
-  const queries = [machine, tasks, people, defects, history, ...(complete ? [record] : [])];
+  const machineHref = scope.machineHref(machineId);
+  const queries = [
+    machine,
+    tasks,
+    ...(member ? [people, defects] : []),
+    history,
+    ...(complete ? [record] : []),
+  ];
   const failed = queries.find((query) => query.isError);
   if (failed?.error) {
     if (isApiError(failed.error) && failed.error.status === 404)
-      return <NotFound homeHref={paths.organization.machines.href(orgId)} inShell />;
+      return <NotFound homeHref={scope.homeHref} inShell />;
     return (
       <ErrorState
         title="The service form didn't load"
@@ -130,8 +146,7 @@ export function ServiceRecordNewPage() {
   if (
     !machine.data ||
     !tasks.data ||
-    !people.data ||
-    !defects.data ||
+    (member && (!people.data || !defects.data)) ||
     !history.data ||
     (complete && !record.data) ||
     (known.length > 0 && mode !== 'complete' && !prefill.data && !prefill.isError)
@@ -147,19 +162,16 @@ export function ServiceRecordNewPage() {
       </Alert>
     ) : (
       <ForbiddenState
-        role={membership.role}
+        role={scope.role}
         pageName="Recording a service"
-        allowedRoles="technicians and managers"
+        allowedRoles="technicians and managers, and dealers with service access"
       />
     );
   if (mode === 'complete' && record.data && !record.data.abilities.complete)
     return (
       <Alert tone="info" title="This record is not a plan any more">
         It is {record.data.data.status}.{' '}
-        <Link
-          className="font-bold underline"
-          to={paths.organization.serviceRecord.href(orgId, record.data.data.id)}
-        >
+        <Link className="font-bold underline" to={scope.serviceRecordHref(record.data.data.id)}>
           Open the record
         </Link>
       </Alert>
@@ -174,7 +186,7 @@ export function ServiceRecordNewPage() {
     labourHours: t.labourHours,
     dueStatus: t.due?.status ?? null,
   }));
-  const self = people.data.find((p) => p.userId === me.user.id);
+  const self = people.data?.find((p) => p.userId === me.user.id);
   const initialPrefill = record.data
     ? {
         parts: record.data.data.parts,
@@ -186,7 +198,7 @@ export function ServiceRecordNewPage() {
   const defaultValues = record.data
     ? completeDefaults(record.data.data, {
         today,
-        activeDefectIds: defects.data.map((d) => d.id),
+        activeDefectIds: (defects.data ?? []).map((d) => d.id),
       })
     : newRecordDefaults(mode === 'plan' ? 'plan' : 'record', {
         today,
@@ -238,17 +250,18 @@ export function ServiceRecordNewPage() {
           lastReading: detail.lastReading,
         }}
         tasks={taskChoices}
-        people={people.data}
-        defects={defects.data}
+        people={member ? (people.data ?? []) : []}
+        defects={member ? (defects.data ?? []) : null}
         defaultValues={defaultValues}
         initialPrefill={initialPrefill}
         recordId={complete ?? undefined}
         today={today}
         timeZone={timeZone}
-        currency={membership.organization.currency}
-        cancelHref={complete ? paths.organization.serviceRecord.href(orgId, complete) : machineHref}
+        currency={scope.farm.currency}
+        units={scope.farm.units}
+        cancelHref={complete ? scope.serviceRecordHref(complete) : machineHref}
         onSaved={(result) =>
-          navigate(paths.organization.serviceRecord.href(orgId, result.data.id), {
+          navigate(scope.serviceRecordHref(result.data.id), {
             state: result.data.status === 'completed' ? { resets: result.resets } : null,
           })
         }

@@ -14,15 +14,14 @@ import {
 import type { TaskReset } from '../../features/services/api/types';
 import { ServiceRecordView } from '../../features/services/components/service-record-view';
 import { isApiError } from '../../lib/api-client';
-import { useCurrentMembership } from '../../lib/auth';
 import { formatLocalDate } from '../../lib/fleet-format';
-import { paths } from '../paths';
+import { loaderFarmId, WithFarmScope, type FarmScope } from '../farm-scope';
 
 export const serviceRecordLoader =
   (queryClient: QueryClient) =>
   ({ params }: LoaderFunctionArgs) => {
     void queryClient.prefetchQuery(
-      serviceRecordQueryOptions(params.orgId ?? '', params.recordId ?? ''),
+      serviceRecordQueryOptions(loaderFarmId(params), params.recordId ?? ''),
     );
     return null;
   };
@@ -33,11 +32,16 @@ function resetsFrom(state: unknown): TaskReset[] | null {
   return Array.isArray(resets) ? (resets as TaskReset[]) : null;
 }
 
+/** A service record, for a farm's members or a dealer's advisor on a customer's machine. */
 export function ServiceRecordPage() {
+  return <WithFarmScope>{(scope) => <ServiceRecordScreen scope={scope} />}</WithFarmScope>;
+}
+
+function ServiceRecordScreen({ scope }: { scope: FarmScope }) {
   const { recordId = '' } = useParams();
   const location = useLocation();
-  const { membership } = useCurrentMembership();
-  const orgId = membership.organization.id;
+  const orgId = scope.farm.id;
+  const timeZone = scope.farm.timeZone;
   const record = useServiceRecord(orgId, recordId);
   // the machine's tag-out shows here too: closing its defects did not release it
   const machineId = record.data?.data.machine.id ?? '';
@@ -46,7 +50,7 @@ export function ServiceRecordPage() {
   if (record.isPending) return <PageSkeleton label="Loading the service record" />;
   if (record.isError) {
     if (isApiError(record.error) && record.error.status === 404)
-      return <NotFound homeHref={paths.organization.machines.href(orgId)} inShell />;
+      return <NotFound homeHref={scope.homeHref} inShell />;
     return (
       <ErrorState
         title="This service record didn't load"
@@ -63,7 +67,7 @@ export function ServiceRecordPage() {
   return (
     <>
       <Link
-        to={paths.organization.machine.href(orgId, data.machine.id)}
+        to={scope.machineHref(data.machine.id)}
         className="mb-3 inline-flex min-h-touch items-center gap-1 font-bold text-field-700 hover:text-field-950"
       >
         <Icon name="back" />
@@ -79,12 +83,8 @@ export function ServiceRecordPage() {
             orgId={orgId}
             machine={machine.data.data}
             abilities={machine.data.abilities}
-            timeZone={membership.organization.timeZone}
-            defectsHref={
-              membership.organization.kind === 'farm'
-                ? paths.organization.defects.href(orgId, data.machine.id)
-                : undefined
-            }
+            timeZone={timeZone}
+            defectsHref={scope.defectsHref?.(data.machine.id)}
           />
         </div>
       ) : null}
@@ -93,11 +93,9 @@ export function ServiceRecordPage() {
         record={data}
         abilities={abilities}
         resets={data.status === 'completed' ? resetsFrom(location.state) : null}
-        timeZone={membership.organization.timeZone}
-        completeHref={paths.organization.serviceRecordNew.href(orgId, data.machine.id, {
-          complete: data.id,
-        })}
-        defectsHref={paths.organization.defects.href(orgId, data.machine.id)}
+        timeZone={timeZone}
+        completeHref={scope.serviceRecordNewHref(data.machine.id, { complete: data.id })}
+        defectsHref={scope.defectsHref?.(data.machine.id) ?? null}
       />
     </>
   );

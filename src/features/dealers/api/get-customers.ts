@@ -13,3 +13,26 @@ export const customersQueryOptions = (orgId: string) =>
   });
 
 export const useCustomers = (orgId: string) => useQuery(customersQueryOptions(orgId));
+
+/** A linked customer farm as the advisor's pages of its machines need it: access, clock, money. */
+export interface CustomerFarm {
+  id: string;
+  name: string;
+  access: NonNullable<Customers['data'][number]['access']>;
+  timeZone: string;
+  currency: string;
+  units: NonNullable<Customers['data'][number]['farmSettings']>['units'];
+}
+
+/** The active link to this farm among the dealer's customers: null once revoked or never linked. */
+export function useCustomerFarm(dealerId: string, farmId: string, enabled = true) {
+  return useQuery({
+    ...customersQueryOptions(dealerId),
+    enabled,
+    select: (body): CustomerFarm | null => {
+      const link = body.data.find((c) => c.status === 'active' && c.customer?.id === farmId);
+      if (!link?.customer || !link.access || !link.farmSettings) return null;
+      return { ...link.customer, access: link.access, ...link.farmSettings };
+    },
+  });
+}

@@ -1,3 +1,4 @@
+import { Link } from 'react-router-dom';
 import { DueStatusBadge } from '../../../components/ui/status-badges';
 import { useMediaQuery } from '../../../lib/use-media-query';
 import type { BoardRow } from '../api/types';
@@ -7,6 +8,8 @@ interface BoardListProps {
   rows: BoardRow[];
   selected: ReadonlySet<string>;
   onToggle: (row: BoardRow, checked: boolean) => void;
+  /** the advisor's page of the row's machine (its due tasks, readings and, with service, history) */
+  machineHref: (row: BoardRow) => string;
 }
 
 const selectLabel = (r: BoardRow) =>
@@ -25,7 +28,26 @@ export function BoardList(props: BoardListProps) {
 const th = 'px-2.5 py-2 text-left text-sm font-bold text-field-700';
 const td = 'px-2.5 py-3 align-top';
 
-function Check({ row, selected, onToggle }: { row: BoardRow } & Omit<BoardListProps, 'rows'>) {
+/** The row's machine, opening its page: a touch target of at least 44 px. */
+function MachineLink({ row, href }: { row: BoardRow; href: string }) {
+  return (
+    <Link
+      to={href}
+      className="inline-flex min-h-touch items-center gap-1 underline decoration-field-300 underline-offset-4 hover:text-field-950 hover:decoration-field-700"
+    >
+      <span>
+        <span className="font-bold">{row.machine.fleetNumber}</span>{' '}
+        <span className="text-field-700">{row.machine.name}</span>
+      </span>
+    </Link>
+  );
+}
+
+function Check({
+  row,
+  selected,
+  onToggle,
+}: { row: BoardRow } & Pick<BoardListProps, 'selected' | 'onToggle'>) {
   return (
     <input
       type="checkbox"
@@ -37,7 +59,7 @@ function Check({ row, selected, onToggle }: { row: BoardRow } & Omit<BoardListPr
   );
 }
 
-function BoardTable({ rows, selected, onToggle }: BoardListProps) {
+function BoardTable({ rows, selected, onToggle, machineHref }: BoardListProps) {
   return (
     <div className="overflow-x-auto rounded-xl border border-field-200 bg-white shadow-card">
       <table className="w-full border-collapse">
@@ -67,8 +89,7 @@ function BoardTable({ rows, selected, onToggle }: BoardListProps) {
               </td>
               <td className={`${td} min-w-44`}>
                 <span className="block text-sm font-bold text-loam-800">{row.customer.name}</span>
-                <span className="font-bold">{row.machine.fleetNumber}</span>{' '}
-                <span className="text-field-700">{row.machine.name}</span>
+                <MachineLink row={row} href={machineHref(row)} />
               </td>
               <td className={td}>{row.taskName}</td>
               <td className={`${td} whitespace-nowrap`}>
@@ -88,7 +109,7 @@ function BoardTable({ rows, selected, onToggle }: BoardListProps) {
   );
 }
 
-function BoardCards({ rows, selected, onToggle }: BoardListProps) {
+function BoardCards({ rows, selected, onToggle, machineHref }: BoardListProps) {
   return (
     <ul aria-label="Services coming due across customers" className="flex flex-col gap-3">
       {rows.map((row) => (
@@ -105,11 +126,10 @@ function BoardCards({ rows, selected, onToggle }: BoardListProps) {
                 <DueStatusBadge status={row.due.status} />
                 <span className="font-bold">{row.customer.name}</span>
               </div>
-              <p>
-                <span className="font-bold">{row.machine.fleetNumber}</span> {row.machine.name}
-                <br />
-                {row.taskName}
-              </p>
+              <div>
+                <MachineLink row={row} href={machineHref(row)} />
+                <p>{row.taskName}</p>
+              </div>
               <dl className="grid grid-cols-2 gap-x-4 gap-y-2 border-t border-field-100 pt-2">
                 <div>
                   <dt className="text-sm font-bold text-field-600">Due at</dt>

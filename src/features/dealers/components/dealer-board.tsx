@@ -22,6 +22,8 @@ interface DealerBoardProps {
   filters: BoardFilters;
   onFiltersChange: (change: BoardFilterChange & { page?: number }) => void;
   customersHref: string;
+  /** the advisor's page of a row's machine */
+  machineHref: (row: BoardRow) => string;
 }
 
 /**
@@ -34,6 +36,7 @@ export function DealerBoard({
   filters,
   onFiltersChange,
   customersHref,
+  machineHref,
 }: DealerBoardProps) {
   const board = useBoard(orgId, filters);
   const [selected, setSelected] = useState<Map<string, BoardRow>>(new Map());
@@ -160,7 +163,12 @@ export function DealerBoard({
             </p>
           </EmptyState>
         ) : (
-          <BoardList rows={rows} selected={new Set(selected.keys())} onToggle={toggle} />
+          <BoardList
+            rows={rows}
+            selected={new Set(selected.keys())}
+            onToggle={toggle}
+            machineHref={machineHref}
+          />
         )}
         {meta.total > 0 && rows.length > 0 ? (
           <Pager

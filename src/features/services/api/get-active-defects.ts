@@ -26,5 +26,6 @@ export const activeDefectsQueryOptions = (orgId: string, machineId: string) =>
     queryFn: ({ signal }) => getActiveDefects(orgId, machineId, signal),
   });
 
-export const useActiveDefects = (orgId: string, machineId: string) =>
-  useQuery(activeDefectsQueryOptions(orgId, machineId));
+/** `enabled` false: not asked at all (defects are the farm's own, never a dealer's). */
+export const useActiveDefects = (orgId: string, machineId: string, enabled = true) =>
+  useQuery({ ...activeDefectsQueryOptions(orgId, machineId), enabled });

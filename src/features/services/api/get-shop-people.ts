@@ -23,4 +23,6 @@ export const shopPeopleQueryOptions = (orgId: string) =>
     staleTime: 5 * 60_000,
   });
 
-export const useShopPeople = (orgId: string) => useQuery(shopPeopleQueryOptions(orgId));
+/** `enabled` false: not asked at all (a dealer's advisor is not shown the farm's team). */
+export const useShopPeople = (orgId: string, enabled = true) =>
+  useQuery({ ...shopPeopleQueryOptions(orgId), enabled });

@@ -3,6 +3,7 @@ import { Link } from 'react-router-dom';
 import { useFieldArray, useForm, useWatch, type Path } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useQueryClient } from '@tanstack/react-query';
+import type { UnitSystem } from '../../../../shared/constants';
 import { serviceRecordCreateSchema } from '../../../../shared/schemas/service-records';
 import { Alert } from '../../../components/ui/alert';
 import { Button, buttonClasses } from '../../../components/ui/button';
@@ -88,8 +89,10 @@ export interface ServiceRecordFormProps {
     lastReading: { value: number; takenAt: string } | null;
   };
   tasks: readonly TaskChoice[];
+  /** who may be named as technicians; none: the field is left out (a dealer's advisor) */
   people: readonly ShopPerson[];
-  defects: readonly ActiveDefect[];
+  /** the machine's open defects to close; null: not the caller's to see (a dealer's advisor) */
+  defects: readonly ActiveDefect[] | null;
   defaultValues: ServiceFormInput;
   /** the lines the preselected tasks call for (what the rows were filled in from) */
   initialPrefill: Pick<Prefill, 'parts' | 'fluids' | 'estimatedLabourHours' | 'plannedVisits'>;
@@ -99,6 +102,8 @@ export interface ServiceRecordFormProps {
   timeZone: string;
   /** the farm's currency (ISO 4217): costs are typed in it and sent as minor units */
   currency: string;
+  /** the farm's units: how a typed comma in the meter is read */
+  units: UnitSystem;
   cancelHref: string;
   onSaved: (result: RecordWithResets) => void;
 }
@@ -225,6 +230,7 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
           estimate={estimate}
           today={props.today}
           timeZone={props.timeZone}
+          units={props.units}
         />
       </FormBlock>
 
@@ -251,12 +257,14 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
       ) : null}
 
       <FormBlock title="Defects and notes">
-        <DefectChoiceList
-          form={form}
-          defects={props.defects}
-          fleetNumber={machine.fleetNumber}
-          isPlan={isPlan}
-        />
+        {props.defects ? (
+          <DefectChoiceList
+            form={form}
+            defects={props.defects}
+            fleetNumber={machine.fleetNumber}
+            isPlan={isPlan}
+          />
+        ) : null}
         <TextareaField
           label="Notes"
           rows={4}

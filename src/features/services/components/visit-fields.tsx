@@ -1,8 +1,8 @@
 import { Controller } from 'react-hook-form';
+import type { UnitSystem } from '../../../../shared/constants';
 import { CheckboxGroup } from '../../../components/ui/checkbox-group';
 import { TextField } from '../../../components/ui/field';
 import { formatDateTime, roleLabel } from '../../../lib/format';
-import { useCurrentMembership } from '../../../lib/auth';
 import { formatMeter, meterUnitLabel } from '../../../lib/fleet-format';
 import { meterValueAs } from '../../../lib/meter-input';
 import type { ShopPerson } from '../api/types';
@@ -18,6 +18,7 @@ export function VisitFields({
   estimate,
   today,
   timeZone,
+  units,
 }: {
   form: ServiceForm;
   mode: ServiceFormMode;
@@ -27,6 +28,8 @@ export function VisitFields({
   estimate: number;
   today: string;
   timeZone: string;
+  /** the farm's units: how a typed comma in the meter is read */
+  units: UnitSystem;
 }) {
   const {
     register,
@@ -34,7 +37,6 @@ export function VisitFields({
     formState: { errors },
   } = form;
   const unit = machine.meterUnit;
-  const { units } = useCurrentMembership().membership.organization;
   const last = machine.lastReading;
   const estimateText =
     estimate > 0 ? `The chosen tasks take about ${formatHours(estimate)}.` : undefined;
@@ -88,28 +90,31 @@ export function VisitFields({
           />
         </div>
       )}
-      <Controller
-        control={control}
-        name="technicianIds"
-        render={({ field, fieldState }) => (
-          <CheckboxGroup
-            legend="Technicians"
-            hint={
-              mode === 'plan'
-                ? 'Who is booked for the visit.'
-                : 'Who did the work. Nobody ticked: you are recorded.'
-            }
-            options={people.map((p) => ({
-              value: p.userId,
-              label: `${p.name} (${roleLabel(p.role)})`,
-            }))}
-            value={field.value ?? []}
-            onChange={field.onChange}
-            error={fieldState.error?.message}
-            columns={3}
-          />
-        )}
-      />
+      {/* no one to name (a dealer's advisor records as themselves) */}
+      {people.length === 0 ? null : (
+        <Controller
+          control={control}
+          name="technicianIds"
+          render={({ field, fieldState }) => (
+            <CheckboxGroup
+              legend="Technicians"
+              hint={
+                mode === 'plan'
+                  ? 'Who is booked for the visit.'
+                  : 'Who did the work. Nobody ticked: you are recorded.'
+              }
+              options={people.map((p) => ({
+                value: p.userId,
+                label: `${p.name} (${roleLabel(p.role)})`,
+              }))}
+              value={field.value ?? []}
+              onChange={field.onChange}
+              error={fieldState.error?.message}
+              columns={3}
+            />
+          )}
+        />
+      )}
     </div>
   );
 }
