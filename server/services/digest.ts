@@ -19,7 +19,8 @@ import { digestPeriod, effectivePreference, type EffectivePreference } from './d
 import { unsubscribeToken } from './unsubscribe-tokens';
 import {
   appLinks,
-  cautionLine,
+  cautionPointer,
+  cautionsSection,
   emailFrame,
   escapeHtml,
   formatIsoDate,
@@ -133,6 +134,8 @@ export function renderDigest(input: {
   const settingsUrl = appLinks.reminders(organization.id);
   const intro = `Hello ${input.recipientName}, here is what is due on ${formatIsoDate(input.asOf)}: ${summary} (coming up = falls due within ${DIGEST_HORIZON_DAYS} days by the forecast).`;
 
+  // each hazard of the listed tasks once, in full: the tasks point to it
+  const cautions = cautionsSection(tasks.flatMap((t) => t.hazards));
   const text = [
     title,
     '',
@@ -144,10 +147,11 @@ export function renderDigest(input: {
       ...group.tasks.flatMap((task) => [
         `  - ${SECTION_LABELS[task.section]}: ${task.taskName}`,
         ...taskFacts(task).map((f) => `      ${f}`),
-        ...(cautionLine(task.hazards) ? [`      ${cautionLine(task.hazards)}`] : []),
+        ...(cautionPointer(task.hazards) ? [`      ${cautionPointer(task.hazards)}`] : []),
       ]),
       '',
     ]),
+    ...(cautions.length ? [...cautions, ''] : []),
     SAFETY_LINE,
     '',
     `Choose what you get and when: ${settingsUrl}`,
@@ -169,7 +173,7 @@ export function renderDigest(input: {
 <p style="margin:0 0 8px;"><a href="${appLinks.machine(organization.id, group.machine.id)}" style="color:#1d4f91;font-weight:bold;">Open the machine</a></p>
 <ul style="margin:0;padding-left:20px;">${group.tasks
         .map((task) => {
-          const caution = cautionLine(task.hazards);
+          const caution = cautionPointer(task.hazards);
           return `<li style="margin:0 0 8px;"><strong style="color:${sectionColour[task.section]};">${SECTION_LABELS[task.section]}:</strong> ${escapeHtml(task.taskName)}<br>${taskFacts(
             task,
           )
@@ -180,6 +184,17 @@ export function renderDigest(input: {
         })
         .join('')}</ul></div>`,
     ),
+    ...(cautions.length
+      ? [
+          `<div style="margin:0 0 16px;padding:12px;background:#fdf6e3;border:2px solid #c99a2e;border-left-width:8px;border-radius:8px;color:#4a3500;">
+<h2 style="font-size:18px;margin:0 0 8px;">${escapeHtml(cautions[0])}</h2>
+${cautions
+  .slice(1, -1)
+  .map((line) => `<p style="margin:0 0 8px;">${escapeHtml(line)}</p>`)
+  .join('\n')}
+<p style="margin:0;font-weight:bold;">${escapeHtml(cautions[cautions.length - 1])}</p></div>`,
+        ]
+      : []),
     `<p style="margin:16px 0 0;font-size:14px;">${escapeHtml(SAFETY_LINE)}</p>`,
   ].join('\n');
   const footer = `<a href="${settingsUrl}" style="color:#1d4f91;">Choose what you get and when</a> · <a href="${input.unsubscribeUrl}" style="color:#1d4f91;">Stop these e-mails</a>`;

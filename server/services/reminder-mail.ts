@@ -1,6 +1,9 @@
 // What the reminder e-mails share: links into the app, the unsubscribe headers, the safety and
 // caution lines, the HTML frame and the number and date formats.
 import { env } from '../env';
+import { SAFETY_DEFERRAL } from '../../shared/constants';
+import { hazardCautionLines, hazardCautionText, hazardSentence } from '../../shared/domain/hazards';
+import { HAZARDS } from '../../shared/schemas/schedule';
 import { escapeHtml } from './accounts';
 
 export const appLinks = {
@@ -20,20 +23,34 @@ export const unsubscribeHeaders = (token: string) => ({
 export const SAFETY_LINE =
   "Before any service: stop the engine, disengage the PTO, lower or block raised implements and relieve hydraulic pressure. Follow the operator's manual, local regulations and qualified service practice.";
 
-const HAZARD_WORDS: Record<string, string> = {
-  pto: 'PTO shaft',
-  hydraulic_pressure: 'stored hydraulic pressure',
-  raised_load: 'raised implement or load',
-  stored_energy: 'stored energy (springs, snap rings)',
-  hot_fluid: 'hot fluids',
-  battery: 'battery',
-};
-
-/** "Caution: PTO shaft, hot fluids — see the operator's manual." or null without hazards. */
+/**
+ * A task's caution in full, in the one table's words (shared/domain/hazards.ts): "Caution. PTO
+ * shaft: Stop the engine, … Follow the operator's manual, …", or null without hazards.
+ */
 export function cautionLine(hazards: readonly string[]): string | null {
   if (!hazards.length) return null;
-  const names = hazards.map((h) => HAZARD_WORDS[h] ?? h.replace(/_/g, ' '));
-  return `Caution: ${names.join(', ')} — see the operator's manual.`;
+  return `Caution. ${hazardCautionText(hazards)}`;
+}
+
+/** "Caution: PTO shaft and hot fluids (see Cautions below)." — a task's line in a list mail. */
+export function cautionPointer(hazards: readonly string[]): string | null {
+  if (!hazards.length) return null;
+  return `Caution: ${hazardSentence(hazards)} (see Cautions below).`;
+}
+
+/**
+ * The cautions of a list mail's tasks, each hazard once and in full (in HAZARDS order), then the deferral: a
+ * heading and its lines, or none when no task has a hazard.
+ */
+export function cautionsSection(hazards: readonly string[]): string[] {
+  // in the table's order, so the section reads the same whatever order the tasks come in
+  const rank = (h: string) => {
+    const i = (HAZARDS as readonly string[]).indexOf(h);
+    return i === -1 ? HAZARDS.length : i;
+  };
+  const once = [...new Set(hazards)].sort((a, b) => rank(a) - rank(b));
+  if (!once.length) return [];
+  return ['Cautions', ...hazardCautionLines(once), SAFETY_DEFERRAL];
 }
 
 export { escapeHtml };

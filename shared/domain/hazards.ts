@@ -97,6 +97,17 @@ export function hazardCautionLines(hazards: readonly string[]): string[] {
   );
 }
 
+/** "PTO shaft, hot fluids and battery": the hazards' labels inside a sentence (abbreviations kept). */
+export function hazardSentence(hazards: readonly string[]): string {
+  // mid-sentence: lower-case the first letter, but keep abbreviations such as PTO
+  const names = hazards
+    .map(hazardLabel)
+    .map((n) => (/^[A-Z]{2}/.test(n) ? n : n[0].toLowerCase() + n.slice(1)));
+  return names.length > 1
+    ? `${names.slice(0, -1).join(', ')} and ${names[names.length - 1]}`
+    : (names[0] ?? '');
+}
+
 /**
  * The whole caution of a set of hazards as one paragraph: each hazard's line, then the deferral
  * once. '' when there are none.

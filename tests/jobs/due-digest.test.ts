@@ -60,7 +60,7 @@ describe('due digest — content (hand-worked due list, see reminders-fixture.ts
     expect(text).toContain('Overdue: Engine oil and filter');
     expect(text).toContain('Due at 1,250 h — 50 h over');
     expect(text).toContain('Overdue: 50 h over');
-    expect(text).toContain('Caution: hot fluids');
+    expect(text).toContain('Caution: hot fluids (see Cautions below).');
     expect(text).toContain('Due soon: Air filter');
     expect(text).toContain('Due at 1,350 h — 50 h left');
     expect(text).toContain('Coming up: Fuel filters');
@@ -95,6 +95,44 @@ describe('due digest — content (hand-worked due list, see reminders-fixture.ts
     expect(list.unsubscribe.url).toMatch(new RegExp(`^${APP_URL}/api/v1/unsubscribe/[^>]+$`));
     expect(list['unsubscribe-post'].name).toBe('List-Unsubscribe=One-Click');
     expect(text).toContain(`Stop these e-mails: ${list.unsubscribe.url}`);
+  });
+
+  // The cautions are the one hazard table's (shared/domain/hazards.ts), written out by hand here.
+  it('digest — tasks with hazards — each task names its hazards; a Cautions section gives each hazard once in full, then the deferral; text and HTML', async () => {
+    const org = await createOrganization({ name: 'Test Farm', timeZone: 'America/Chicago' });
+    const { user } = await createMember(org, 'manager', { name: 'Ann Manager' });
+    const { tractor } = await handWorkedFarm(org, NOW);
+    await createTask(tractor, {
+      name: 'PTO shaft grease',
+      intervalMeter: 250,
+      lastDoneMeter: 1000,
+      warnMeter: 25,
+      hazards: ['pto', 'hot_fluid'],
+    });
+    await runDigest(NOW);
+    await sendAll();
+    const [mail] = mailFor(await caughtMail(), user.email);
+    const hot =
+      'Hot fluids: Drain oil warm, not hot: stop the engine and let it stand until the oil is warm, not hot, so it still flows but cannot scald; wear gloves and eye protection and keep out of the stream. Open a radiator or coolant cap, or drain coolant, only once the system is cold.';
+    const pto =
+      'PTO shaft: Stop the engine, take the key and wait for the shaft to stop before you go near the PTO, couple or uncouple a shaft or clear a blockage: a 540 rpm shaft turns 9 times a second, faster than anyone can pull free. Never step over a turning shaft; keep its guards in place and loose clothing and hair away.';
+    const deferral =
+      "Follow the operator's manual, local regulations and qualified service practice.";
+
+    const text = mail.text;
+    expect(text).toContain('Overdue: Engine oil and filter');
+    expect(text).toContain('Caution: hot fluids (see Cautions below).');
+    expect(text).toContain('Caution: PTO shaft and hot fluids (see Cautions below).');
+    // each once, in the table's order (PTO before hot fluids), then the deferral
+    expect(text).toContain(`Cautions\n${pto}\n${hot}\n${deferral}`);
+    expect(text.split('Drain oil warm, not hot').length - 1).toBe(1);
+    expect(text).not.toMatch(/let it cool/i);
+
+    const html = mail.html;
+    expect(html).toContain('>Cautions</h2>');
+    expect(html).toContain(`>${hot}</p>`);
+    expect(html).toContain(`>${pto}</p>`);
+    expect(html).toContain(`>${deferral.replace("'", '&#39;')}</p>`);
   });
 
   it('digest — nothing due: no e-mail at all', async () => {
