@@ -1,12 +1,15 @@
 // The one caution component (src/components/ui/caution.tsx) and the words of its hazards
 // (src/lib/caution-text.ts). Rendered to static HTML in node: the checks are on the words a person
 // sees and the landmark a screen reader finds. The labels are shared/constants' HAZARD_LABELS
-// (pto "PTO shaft", hot_fluid "Hot fluids", battery "Battery"); the deferral is SAFETY_DEFERRAL.
+// (pto "PTO shaft", hot_fluid "Hot fluids", battery "Battery"); the deferral is SAFETY_DEFERRAL;
+// a task's hazards are shown in full in the words of the one table (shared/domain/hazards.ts).
 import { createElement } from 'react';
 import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import { Caution } from '../../src/components/ui/caution';
 import { hazardNames, hazardSentence } from '../../src/lib/caution-text';
+import { HAZARD_TABLE } from '../../shared/domain/hazards';
+import { HAZARDS } from '../../shared/schemas/schedule';
 
 const DEFERRAL =
   'Follow the operator&#x27;s manual, local regulations and qualified service practice.';
@@ -94,5 +97,78 @@ describe('Caution — line', () => {
       }),
     );
     expect(words(html)).toBe(`Caution. Release springs with the proper tool. ${DEFERRAL}`);
+  });
+});
+
+/** The same words with HTML's escapes, as renderToStaticMarkup writes them. */
+const escaped = (s: string) => s.replace(/'/g, '&#x27;').replace(/"/g, '&quot;');
+
+describe("Caution — hazards in the table's words", () => {
+  it.each(HAZARDS.map((h) => [h]))(
+    'Caution panel — %s — its label and its advice in full, then the deferral',
+    (hazard) => {
+      const { label, advice } = HAZARD_TABLE[hazard];
+      const html = renderToStaticMarkup(
+        createElement(Caution, { heading: 'Caution', hazards: [hazard], defer: true }),
+      );
+      expect(words(html)).toBe(`Caution${label}: ${escaped(advice)}${DEFERRAL}`);
+    },
+  );
+
+  it.each(HAZARDS.map((h) => [h]))(
+    'Caution line — %s — the whole caution in one paragraph, on screen without hovering',
+    (hazard) => {
+      const { label, advice } = HAZARD_TABLE[hazard];
+      const html = renderToStaticMarkup(
+        createElement(Caution, {
+          variant: 'line',
+          heading: 'Caution.',
+          hazards: [hazard],
+          defer: true,
+        }),
+      );
+      expect(html).not.toContain('title=');
+      expect(words(html)).toBe(`Caution. ${label}: ${escaped(advice)} ${DEFERRAL}`);
+    },
+  );
+
+  it('Caution panel — hot fluids and PTO, by hand — each hazard a list item, "drain warm", the deferral once', () => {
+    const html = renderToStaticMarkup(
+      createElement(
+        Caution,
+        { heading: 'Caution', hazards: ['hot_fluid', 'pto'], defer: true },
+        createElement('p', null, 'Gloves on.'),
+      ),
+    );
+    expect(html.match(/<li>/g)).toHaveLength(2);
+    expect(words(html)).toBe(
+      'Caution' +
+        'Hot fluids: Drain oil warm, not hot: stop the engine and let it stand until the oil is warm, not hot, so it still flows but cannot scald; wear gloves and eye protection and keep out of the stream. Open a radiator or coolant cap, or drain coolant, only once the system is cold.' +
+        'PTO shaft: Stop the engine, take the key and wait for the shaft to stop before you go near the PTO, couple or uncouple a shaft or clear a blockage: a 540 rpm shaft turns 9 times a second, faster than anyone can pull free. Never step over a turning shaft; keep its guards in place and loose clothing and hair away.' +
+        'Gloves on.' +
+        DEFERRAL,
+    );
+  });
+
+  it('Caution line — hydraulic pressure, by hand — "cardboard, never your hands"', () => {
+    const html = renderToStaticMarkup(
+      createElement(Caution, {
+        variant: 'line',
+        heading: 'Caution.',
+        hazards: ['hydraulic_pressure'],
+        defer: true,
+      }),
+    );
+    expect(words(html)).toBe(
+      'Caution. Stored hydraulic pressure: Lower everything to the ground, stop the engine and relieve the pressure before opening a line, fitting or filter. Search for leaks with a piece of cardboard, never your hands: oil under pressure can pierce the skin, and that needs a doctor at once. ' +
+        DEFERRAL,
+    );
+  });
+
+  it('Caution — a hazard this client does not know — its words, no advice', () => {
+    const html = renderToStaticMarkup(
+      createElement(Caution, { variant: 'line', heading: 'Caution.', hazards: ['sharp_blade'] }),
+    );
+    expect(words(html)).toBe('Caution. sharp blade.');
   });
 });
