@@ -7,7 +7,7 @@ import {
 } from 'sequelize';
 import { sequelize } from '../db';
 import { numericColumn } from './columns';
-import type { TaskFluid, TaskPart } from '../../shared/schemas/schedule';
+import type { StoredTaskPart, TaskFluid } from '../../shared/schemas/schedule';
 
 export class ServiceTask extends Model<
   InferAttributes<ServiceTask>,
@@ -22,7 +22,7 @@ export class ServiceTask extends Model<
   declare firstServiceMeter: number | null;
   declare warnMeter: number | null;
   declare warnDays: number | null;
-  declare parts: CreationOptional<TaskPart[]>;
+  declare parts: CreationOptional<StoredTaskPart[]>;
   declare fluids: CreationOptional<TaskFluid[]>;
   declare labourHours: number | null;
   declare instructions: CreationOptional<string>;

@@ -2,9 +2,19 @@ import type { ScheduleTemplate, ServiceTask } from '../models';
 import type { DuePoint } from '../../shared/domain';
 import type {
   Hazard,
+  StoredTaskPart,
   ScheduleTemplate as ScheduleTemplateJson,
   Task,
 } from '../../shared/schemas/schedule';
+
+/** A task's parts, each saying whether it is a wear part (older rows do not say: not one). */
+export const presentParts = (parts: StoredTaskPart[]): Task['parts'] =>
+  parts.map((p) => ({
+    partNumber: p.partNumber,
+    description: p.description,
+    quantity: p.quantity,
+    wearPart: p.wearPart === true,
+  }));
 
 export const presentTask = (t: ServiceTask, due: DuePoint | null): Task => ({
   id: t.id,
@@ -15,7 +25,7 @@ export const presentTask = (t: ServiceTask, due: DuePoint | null): Task => ({
   firstServiceMeter: t.firstServiceMeter,
   warnMeter: t.warnMeter,
   warnDays: t.warnDays,
-  parts: t.parts,
+  parts: presentParts(t.parts),
   fluids: t.fluids,
   labourHours: t.labourHours,
   instructions: t.instructions,
@@ -34,5 +44,5 @@ export const presentTemplate = (t: ScheduleTemplate): ScheduleTemplateJson => ({
   category: t.category,
   name: t.name,
   description: t.description,
-  tasks: t.tasks,
+  tasks: t.tasks.map((task) => ({ ...task, parts: presentParts(task.parts) })),
 });

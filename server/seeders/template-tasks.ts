@@ -48,6 +48,7 @@ export const part = (partNumber: string, description: string, quantity = 1): Tas
   partNumber,
   description,
   quantity,
+  wearPart: false,
 });
 
 /** What differs between categories in the shared engine items: part-number series and capacities. */

@@ -1,5 +1,6 @@
 // The parts forecast's arithmetic, kept pure (no database) so it is tested against a hand-worked
 // example: parts summed by part number and fluids by kind and unit, per customer and in total.
+// Wear parts are left out: a service inspects them and replaces one only when it is worn.
 
 /** One due service as the forecast needs it: who, which machine, when, and its lists. */
 export interface ForecastService {
@@ -7,7 +8,8 @@ export interface ForecastService {
   machineId: string;
   /** ISO local date the parts are first needed (today for an overdue service) */
   neededOn: string;
-  parts: { partNumber: string; description: string; quantity: number }[];
+  /** a wear part (belt, tine, knife) is replaced only when worn: never summed as needed */
+  parts: { partNumber: string; description: string; quantity: number; wearPart?: boolean }[];
   fluids: { kind: string; volume: number; unit: string }[];
 }
 
@@ -52,6 +54,7 @@ function summarise(services: ForecastService[]): PartsSummary {
   const fluids = new Map<string, Acc<FluidLine>>();
   for (const s of services) {
     for (const p of s.parts) {
+      if (p.wearPart) continue;
       const key = partKey(p.partNumber);
       const acc = parts.get(key) ?? {
         line: {

@@ -48,7 +48,7 @@ export async function loadRecord(access: OrgAccess, recordId: string, transactio
 
 const round = (n: number, places = 2) => Math.round(n * 10 ** places) / 10 ** places;
 
-/** Parts and fluids the tasks' lists call for, summed by part number (and by fluid kind + unit). */
+/** Parts (wear parts aside) and fluids the tasks' lists call for, summed by part number (and by fluid kind + unit). */
 export function prefillLines(tasks: Pick<ServiceTask, 'parts' | 'fluids'>[]): {
   parts: ServicePart[];
   fluids: ServiceFluid[];
@@ -57,6 +57,8 @@ export function prefillLines(tasks: Pick<ServiceTask, 'parts' | 'fluids'>[]): {
   const fluids = new Map<string, ServiceFluid>();
   for (const t of tasks) {
     for (const p of t.parts) {
+      // a wear part is inspected, not used up: the technician adds it if one was replaced
+      if (p.wearPart) continue;
       const key = p.partNumber.trim().toUpperCase();
       const line = parts.get(key);
       if (line) line.quantity = round(line.quantity + p.quantity, 3);

@@ -20,12 +20,25 @@ export const TASK_BOUNDS = {
   meter: { min: 0, max: 10_000_000 },
 } as const;
 
-export const taskPartSchema = z.object({
-  partNumber: plainText(60, { required: 'Enter the part number' }),
-  description: plainText(200).default(''),
-  quantity: boundedNumber('Quantity', TASK_BOUNDS.quantity),
-});
+/**
+ * A part a task calls for. A wear part (belt, tine, knife) is inspected at each service and
+ * replaced only when worn, so the parts forecast and a record's prefilled lines never count it as
+ * used; it may go without a part number until the farm enters its own.
+ */
+export const taskPartSchema = z
+  .object({
+    partNumber: plainText(60).default(''),
+    description: plainText(200).default(''),
+    quantity: boundedNumber('Quantity', TASK_BOUNDS.quantity),
+    wearPart: z.boolean({ error: 'Wear part must be true or false' }).default(false),
+  })
+  .refine((p) => p.wearPart || p.partNumber !== '', {
+    error: 'Enter the part number',
+    path: ['partNumber'],
+  });
 export type TaskPart = z.infer<typeof taskPartSchema>;
+/** A part as stored on a task: rows written before wear parts existed have no `wearPart`. */
+export type StoredTaskPart = Omit<TaskPart, 'wearPart'> & { wearPart?: boolean };
 
 export const FLUID_UNITS = ['L', 'gal', 'qt', 'kg', 'lb'] as const;
 export const taskFluidSchema = z.object({
@@ -133,7 +146,13 @@ const storedTaskFields = {
   warnMeter: z.number().nullable(),
   warnDays: z.number().nullable(),
   parts: z.array(
-    z.object({ partNumber: z.string(), description: z.string(), quantity: z.number() }),
+    z.object({
+      partNumber: z.string(),
+      description: z.string(),
+      quantity: z.number(),
+      /** inspected, replaced when worn: never counted as used at each service */
+      wearPart: z.boolean(),
+    }),
   ),
   fluids: z.array(z.object({ kind: z.string(), volume: z.number(), unit: z.enum(FLUID_UNITS) })),
   labourHours: z.number().nullable(),
