@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useId, useState } from 'react';
 import {
   CATEGORY_LABELS,
   DUE_HORIZONS,
@@ -8,8 +8,11 @@ import {
   type MachineCategory,
 } from '../../../../shared/constants';
 import type { DueStatus } from '../../../../shared/domain/types';
+import { Button } from '../../../components/ui/button';
 import { SelectField, TextField } from '../../../components/ui/field';
+import { useMediaQuery } from '../../../lib/use-media-query';
 import type { BoardFilters, CustomerRef } from '../api/types';
+import { DEFAULT_BOARD_HORIZON } from '../filters';
 
 export type BoardFilterChange = Partial<Omit<BoardFilters, 'pageSize' | 'page'>>;
 
@@ -22,6 +25,16 @@ const STATUSES = [
   { value: '', label: 'All statuses' },
   ...DUE_STATUSES.map((s) => ({ value: s, label: DUE_STATUS_LABELS[s] })),
 ];
+
+// Five fields stack into five rows on a phone and push the first service off the screen: below
+// this width they fold behind a "Filters" button that says how many are set.
+const FIELDS_FIT = '(min-width: 1024px)';
+
+/** How many of the board's filters differ from a fresh board (a longer horizon counts). */
+export const activeBoardFilters = (f: BoardFilters) =>
+  [f.horizon !== DEFAULT_BOARD_HORIZON, f.customerId, f.category, f.status, f.task.trim()].filter(
+    Boolean,
+  ).length;
 
 /** Horizon, customer, category, status and task name of the board; a change starts at page 1. */
 export function BoardFiltersBar({
@@ -41,9 +54,13 @@ export function BoardFiltersBar({
     const timer = setTimeout(() => onChange({ task }), 400);
     return () => clearTimeout(timer);
   }, [task, filters.task, onChange]);
+  const wide = useMediaQuery(FIELDS_FIT);
+  const [open, setOpen] = useState(false);
+  const panelId = useId();
+  const active = activeBoardFilters(filters);
 
-  return (
-    <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-5">
+  const fields = (
+    <div id={panelId} className="grid gap-3 sm:grid-cols-2 lg:grid-cols-5">
       <SelectField
         label="Horizon"
         options={HORIZONS}
@@ -82,6 +99,22 @@ export function BoardFiltersBar({
           if (e.key === 'Enter') onChange({ task });
         }}
       />
+    </div>
+  );
+  if (wide) return fields;
+  return (
+    <div className="flex flex-col gap-3">
+      <Button
+        variant="secondary"
+        icon="sliders"
+        aria-expanded={open}
+        aria-controls={panelId}
+        className="self-start"
+        onClick={() => setOpen((o) => !o)}
+      >
+        Filters{active ? ` (${active} on)` : ''}
+      </Button>
+      {open ? fields : null}
     </div>
   );
 }
