@@ -1,4 +1,5 @@
 import { Link } from 'react-router-dom';
+import { Caution } from '../../../components/ui/caution';
 import { DueStatusBadge } from '../../../components/ui/status-badges';
 import { useMediaQuery } from '../../../lib/use-media-query';
 import type { BoardRow } from '../api/types';
@@ -14,6 +15,13 @@ interface BoardListProps {
 
 const selectLabel = (r: BoardRow) =>
   `Select ${r.machine.fleetNumber} ${r.taskName} at ${r.customer.name}`;
+
+/** The task's caution in full, in the one table's words, whenever it involves a hazard. */
+function TaskCaution({ row }: { row: BoardRow }) {
+  return row.hazards.length ? (
+    <Caution variant="line" heading="Caution." hazards={row.hazards} defer />
+  ) : null;
+}
 
 // The table's columns need the content column of a 1280 px window (about 960 px beside the side
 // bar); narrower windows get the cards, so no column is cut off.
@@ -91,7 +99,12 @@ function BoardTable({ rows, selected, onToggle, machineHref }: BoardListProps) {
                 <span className="block text-sm font-bold text-loam-800">{row.customer.name}</span>
                 <MachineLink row={row} href={machineHref(row)} />
               </td>
-              <td className={td}>{row.taskName}</td>
+              <td className={td}>
+                <div className="flex max-w-sm flex-col gap-1">
+                  <span>{row.taskName}</span>
+                  <TaskCaution row={row} />
+                </div>
+              </td>
               <td className={`${td} whitespace-nowrap`}>
                 <DueAt row={row} />
               </td>
@@ -129,6 +142,7 @@ function BoardCards({ rows, selected, onToggle, machineHref }: BoardListProps) {
               <div>
                 <MachineLink row={row} href={machineHref(row)} />
                 <p>{row.taskName}</p>
+                <TaskCaution row={row} />
               </div>
               <dl className="grid grid-cols-2 gap-x-4 gap-y-2 border-t border-field-100 pt-2">
                 <div>
