@@ -107,8 +107,20 @@ async function fitProblems(page: Page, keyColumns: readonly string[]): Promise<s
   return page.evaluate((keys) => {
     const problems: string[] = [];
     const root = document.scrollingElement ?? document.documentElement;
-    if (root.scrollWidth > window.innerWidth)
-      problems.push(`scrolls sideways: ${root.scrollWidth} px wide in ${window.innerWidth} px`);
+    if (root.scrollWidth > window.innerWidth) {
+      // name the innermost element past the edge, to say what to fix
+      const past = [...document.querySelectorAll('body *')].filter(
+        (el) =>
+          el.getBoundingClientRect().right > window.innerWidth + 0.5 &&
+          ![...el.children].some((c) => c.getBoundingClientRect().right > window.innerWidth + 0.5),
+      );
+      const what = past[0]
+        ? `${past[0].tagName.toLowerCase()} "${past[0].textContent?.trim().slice(0, 40)}"`
+        : 'unknown';
+      problems.push(
+        `scrolls sideways: ${root.scrollWidth} px wide in ${window.innerWidth} px (${what})`,
+      );
+    }
 
     // fully inside the window and inside every box that clips it (an overflow scroll box)
     const shown = (el: Element) => {
@@ -198,7 +210,8 @@ async function wordProblems(page: Page): Promise<string[]> {
   ];
   return codes.flatMap(([what, pattern]) => {
     const found = pattern.exec(text);
-    return found ? [`shows ${what}: "${found[0]}"`] : [];
+    const around = found ? text.slice(Math.max(0, found.index - 40), found.index + 40) : '';
+    return found ? [`shows ${what}: "${found[0]}" in "${around.replace(/\s+/g, ' ')}"`] : [];
   });
 }
 
@@ -273,7 +286,11 @@ describe('every main page fits its screen and passes axe (browser)', () => {
           if (visit.path.startsWith('machine:')) {
             await page.goto(`${orgPath}/machines`);
             const fleetNumber = visit.path.slice('machine:'.length);
-            await page.getByRole('main').getByRole('link').first().waitFor();
+            await page.waitForFunction(() =>
+              [...document.querySelectorAll<HTMLAnchorElement>('main a[href]')].some((a) =>
+                /\/machines\/[0-9a-f-]{36}$/.test(a.pathname),
+              ),
+            );
             path = await page.evaluate((fleet) => {
               const links = [
                 ...document.querySelectorAll<HTMLAnchorElement>('main a[href]'),
@@ -294,11 +311,9 @@ describe('every main page fits its screen and passes axe (browser)', () => {
           problems.push(...found.map((p) => `${visit.name}: ${p}`));
           const chart = page.locator('main figure').filter({ hasText: /Meter from|One reading/ });
           if (await chart.count())
-            await chart
-              .first()
-              .screenshot({
-                path: `.screenshots/fit-${label.replace(' ', '-')}-${r.role}-chart.png`,
-              });
+            await chart.first().screenshot({
+              path: `.screenshots/fit-${label.replace(' ', '-')}-${r.role}-chart.png`,
+            });
           await screenshot(
             page,
             `fit-${label.replace(' ', '-')}-${r.role}-${visit.name.replace(/\W+/g, '-')}`,

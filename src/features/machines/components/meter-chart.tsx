@@ -65,6 +65,8 @@ export function MeterChart({
   const historyDays = (data.last.t - data.firstReading.t) / 86_400_000;
 
   const xTicks = timeTicks(data.xDomain, narrow ? 3 : 6, timeZone);
+  // wide enough for the longest value ("18,000"): about 8 px a character at 13 px, and the tick
+  const axisWidth = Math.max(...data.yTicks.map((v) => compactNumber.format(v).length)) * 8 + 12;
   const caption =
     data.last.t > data.firstReading.t
       ? `Meter from ${formatMeter(data.firstReading.value, unit)} to ${formatMeter(
@@ -101,7 +103,7 @@ export function MeterChart({
         <ResponsiveContainer width="100%" className="min-h-0 flex-1">
           <ComposedChart
             data={data.points}
-            margin={{ top: 12, right: narrow ? 8 : 24, bottom: 4, left: narrow ? -8 : 8 }}
+            margin={{ top: 12, right: narrow ? 8 : 24, bottom: 4, left: 0 }}
             accessibilityLayer={false}
           >
             <CartesianGrid stroke="#e3e8e2" vertical={false} />
@@ -123,7 +125,7 @@ export function MeterChart({
               tickFormatter={(v: number) => compactNumber.format(v)}
               tick={{ fill: '#4a5b4d', fontSize: 13 }}
               stroke="#a3b2a3"
-              width={narrow ? 48 : 60}
+              width={axisWidth}
             />
             <Tooltip
               content={(props) => <ChartTooltip {...props} unit={unit} timeZone={timeZone} />}
