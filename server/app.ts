@@ -18,6 +18,7 @@ import { machinesRouter } from './routes/machines/machines.router';
 import { machinePhotoRouter } from './routes/machines/photo.router';
 import { fleetImportRouter } from './routes/machines/fleet-import.router';
 import { machineStatusRouter } from './routes/machines/status.router';
+import { machineClassRouter } from './routes/machines/machine-class.router';
 import { tasksRouter } from './routes/tasks/tasks.router';
 import { taskHistoryRouter } from './routes/tasks/history.router';
 import { firstRunRouter } from './routes/onboarding/first-run.router';
@@ -83,6 +84,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   api.use(machinePhotoRouter());
   api.use(fleetImportRouter());
   api.use(machineStatusRouter());
+  api.use(machineClassRouter());
   api.use(tasksRouter());
   api.use(taskHistoryRouter());
   api.use(firstRunRouter());

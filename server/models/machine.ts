@@ -8,6 +8,7 @@ import {
 import { sequelize } from '../db';
 import { minorUnitsColumn } from './columns';
 import type { MachineCategory, MachineStatus, MeterUnit } from '../../shared/constants';
+import type { MachineClass } from '../../shared/domain/service-library';
 
 export class Machine extends Model<InferAttributes<Machine>, InferCreationAttributes<Machine>> {
   declare id: CreationOptional<string>;
@@ -15,6 +16,8 @@ export class Machine extends Model<InferAttributes<Machine>, InferCreationAttrib
   declare fleetNumber: string;
   declare name: string;
   declare category: MachineCategory;
+  /** the service library's class (shared/domain/service-library); null until one is picked */
+  declare machineClass: CreationOptional<MachineClass | null>;
   declare make: CreationOptional<string>;
   declare model: CreationOptional<string>;
   declare serialNumber: CreationOptional<string>;
@@ -40,6 +43,7 @@ Machine.init(
     fleetNumber: { type: DataTypes.TEXT, allowNull: false },
     name: { type: DataTypes.TEXT, allowNull: false },
     category: { type: DataTypes.TEXT, allowNull: false },
+    machineClass: { type: DataTypes.TEXT, allowNull: true },
     make: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     model: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     serialNumber: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },

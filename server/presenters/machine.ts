@@ -39,6 +39,7 @@ export function presentMachine(
     fleetNumber: m.fleetNumber,
     name: m.name,
     category: m.category,
+    machineClass: m.machineClass ?? null,
     make: m.make,
     model: m.model,
     serialNumber: m.serialNumber,

@@ -3,6 +3,7 @@ import { DUE_STATUSES, MACHINE_CATEGORIES, MACHINE_STATUSES, METER_UNITS } from 
 import { boundedNumber, pagingFields, plainText, uuid } from './common';
 import { machineRefSchema, pageMetaSchema } from './refs';
 import { MONEY_MAX_MINOR, minorAmount } from './money';
+import { MACHINE_CLASSES } from '../domain/service-library/classes';
 
 /** Ranges of a machine's numbers; prices are minor units (bigint), years integer. */
 export const MACHINE_BOUNDS = {
@@ -107,6 +108,8 @@ export const machineSchema = z
     fleetNumber: z.string(),
     name: z.string(),
     category: z.enum(MACHINE_CATEGORIES),
+    /** the service library's class the machine was given; null until one is applied */
+    machineClass: z.enum(MACHINE_CLASSES).nullable(),
     make: z.string(),
     model: z.string(),
     serialNumber: z.string(),

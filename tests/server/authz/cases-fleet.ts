@@ -189,6 +189,13 @@ export const FLEET_CASES: Record<string, Case> = {
       body: { templateId: c.rec.scheduleTemplateId },
     }),
   },
+  'POST /organizations/{orgId}/machines/{machineId}/apply-class': {
+    ids: 'path',
+    build: async (c) => ({
+      params: onMachine(c, c.succeeds ? await freshMachine(c.rec) : c.rec.machine),
+      body: { machineClass: 'implement' },
+    }),
+  },
   // readings
   'GET /organizations/{orgId}/machines/{machineId}/readings': {
     ids: 'path',

@@ -119,6 +119,7 @@ export const EXPECTED: Record<string, Row> = {
   'GET /organizations/{orgId}/schedule-templates': farmOnly,
   'POST /organizations/{orgId}/schedule-templates': managers,
   'POST /organizations/{orgId}/machines/{machineId}/apply-template': shop,
+  'POST /organizations/{orgId}/machines/{machineId}/apply-class': shop,
   // readings
   'GET /organizations/{orgId}/machines/{machineId}/readings': read,
   'POST /organizations/{orgId}/machines/{machineId}/readings': farmOnly,

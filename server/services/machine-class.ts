@@ -1,0 +1,82 @@
+// Applying the service library's set of a machine class to a machine, in one step. The machine
+// is given the class and the class's tasks it does not have yet (by name, case aside): applying
+// the same class twice adds nothing, and tasks already on the machine are kept as they are. The
+// tasks are added without a last service, so on a machine that came with hours each one is
+// "history unknown" until someone says when it was last done or counts it from now.
+import type { Transaction } from 'sequelize';
+import { sequelize } from '../db';
+import { invalid } from '../errors';
+import { Machine, ServiceTask } from '../models';
+import { METER_UNIT_LABELS, type MeterUnit } from '../../shared/constants';
+import {
+  MACHINE_CLASS_LABELS,
+  serviceLibraryClass,
+  type MachineClass,
+} from '../../shared/domain/service-library';
+import type { OrgAccess } from '../policies/access';
+import { recordAudit } from '../infra/audit';
+import { addTasks } from './schedules';
+
+/** Why a class cannot go on this machine (its meter counts in another unit), or null. */
+export function machineClassProblem(
+  machine: Pick<Machine, 'meterUnit'>,
+  machineClass: MachineClass,
+): string | null {
+  const { meterUnit } = serviceLibraryClass(machineClass);
+  const own: MeterUnit = machine.meterUnit;
+  if (own === meterUnit) return null;
+  return `The ${MACHINE_CLASS_LABELS[machineClass].toLowerCase()} schedule counts in ${METER_UNIT_LABELS[meterUnit]}, but this machine's meter counts in ${METER_UNIT_LABELS[own]}; pick a class that counts in ${METER_UNIT_LABELS[own]} or change the meter unit first`;
+}
+
+/** Gives the machine the class and adds the class's missing tasks, in the caller's transaction. */
+export async function applyMachineClassIn(
+  access: OrgAccess,
+  machine: Machine,
+  machineClass: MachineClass,
+  transaction: Transaction,
+): Promise<{ added: ServiceTask[]; kept: string[] }> {
+  // one apply at a time per machine, so two clicks cannot add the same tasks twice
+  await Machine.findOne({
+    where: { id: machine.id, organizationId: access.organization.id },
+    lock: transaction.LOCK.UPDATE,
+    transaction,
+  });
+  const existing = await ServiceTask.findAll({
+    where: { organizationId: access.organization.id, machineId: machine.id },
+    attributes: ['name'],
+    transaction,
+  });
+  const have = new Set(existing.map((t) => t.name.trim().toLowerCase()));
+  const { tasks } = serviceLibraryClass(machineClass);
+  const missing = tasks.filter((t) => !have.has(t.name.trim().toLowerCase()));
+  const kept = tasks.filter((t) => have.has(t.name.trim().toLowerCase())).map((t) => t.name);
+  const before = machine.machineClass ?? null;
+  if (before !== machineClass) await machine.update({ machineClass }, { transaction });
+  const added = missing.length
+    ? await addTasks(access, machine, missing, 'task.create_from_library', transaction)
+    : [];
+  if (before !== machineClass || added.length)
+    await recordAudit(
+      {
+        organizationId: access.organization.id,
+        actorUserId: access.userId,
+        action: 'machine.apply_class',
+        entityType: 'machine',
+        entityId: machine.id,
+        changes: { before, after: machineClass, added: added.length, kept: kept.length },
+      },
+      transaction,
+    );
+  return { added, kept };
+}
+
+/** Applies a class to a machine (422 naming machineClass when its meter unit does not fit). */
+export async function applyMachineClass(
+  access: OrgAccess,
+  machine: Machine,
+  machineClass: MachineClass,
+) {
+  const problem = machineClassProblem(machine, machineClass);
+  if (problem) throw invalid({ machineClass: problem });
+  return sequelize.transaction((t) => applyMachineClassIn(access, machine, machineClass, t));
+}
