@@ -59,7 +59,11 @@ describe('sign-up — from the sign-in page to an empty farm of one’s own', ()
 
     await page.waitForURL(/\/o\/[0-9a-f-]{36}$/);
     await page.getByRole('heading', { name: 'Dashboard' }).waitFor();
-    await page.getByText(/Nothing due in \d+ days/).waitFor();
+    // an empty farm's dashboard says how to bring the fleet in, not "choose a longer horizon"
+    await page.getByText('No machines yet').waitFor();
+    expect(await page.getByText(/Nothing due in \d+ days|choose a longer horizon/).count()).toBe(0);
+    await page.getByRole('link', { name: 'Add a machine' }).waitFor();
+    await page.getByRole('link', { name: 'Import machines' }).waitFor();
     const switcher = page.getByRole('combobox', { name: 'Organization' });
     expect(await switcher.locator('option:checked').textContent()).toContain(FARM);
     await screenshot(page, 'sign-up-empty-dashboard');
