@@ -30,6 +30,7 @@ export const FLEET_COLUMNS = {
   meterValue: ['meter reading', 'current meter', 'meter', 'reading', 'hours', 'hour meter'],
   readingDate: ['reading date', 'meter date', 'read on', 'date read', 'taken at', 'reading taken'],
   schedule: ['schedule', 'schedule template', 'template'],
+  machineClass: ['machine class', 'machine_class', 'class', 'service library class'],
   notes: ['notes'],
 } as const;
 export type FleetColumn = keyof typeof FLEET_COLUMNS;

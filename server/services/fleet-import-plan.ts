@@ -11,6 +11,15 @@ import {
 import { readingCreateSchema } from '../../shared/schemas/readings';
 import { lastDoneSchema, type LastDoneInput } from '../../shared/schemas/schedule';
 import { meterNumberMessage } from '../../shared/domain/meter-number';
+import type { MeterUnit } from '../../shared/constants';
+import {
+  MACHINE_CLASS_LABELS,
+  MACHINE_CLASSES,
+  parseMachineClass,
+  serviceLibraryClass,
+  type MachineClass,
+} from '../../shared/domain/service-library';
+import { machineClassProblem } from './machine-class';
 import type { Machine, ScheduleTemplate } from '../models';
 import { parseCsvNumber, parseLocalDate, parseTakenAt } from '../infra/csv-sheet';
 import {
@@ -33,6 +42,8 @@ export interface RowPlan {
   update: MachineUpdateInput;
   reading: { value: number; takenAt: Date; text: string } | null;
   template: ScheduleTemplate | null;
+  /** the service library's class to apply (its missing tasks are added) */
+  machineClass: MachineClass | null;
   lastDone: { taskName: string; input: LastDoneInput }[];
   errors: string[];
 }
@@ -59,6 +70,7 @@ const LABELS: Record<FleetColumn, string> = {
   meterValue: 'meter reading',
   readingDate: 'reading date',
   schedule: 'schedule',
+  machineClass: 'machine class',
   notes: 'notes',
 };
 
@@ -93,6 +105,7 @@ export function planRow(
     update: {},
     reading: null,
     template: null,
+    machineClass: null,
     lastDone: [],
     errors: [],
   };
@@ -187,10 +200,28 @@ export function planRow(
         'schedule',
       );
   }
+  const machineClass = cell('machineClass');
+  if (machineClass !== undefined) {
+    const parsed = parseMachineClass(machineClass);
+    const unit = (fields.meterUnit as MeterUnit | undefined) ?? plan.existing?.meterUnit ?? 'h';
+    const problem = parsed && machineClassProblem(unit, parsed);
+    if (!parsed)
+      fail(
+        `"${machineClass}" is not a machine class; use one of ${MACHINE_CLASSES.map((c) => MACHINE_CLASS_LABELS[c]).join(', ')}`,
+        'machine class',
+      );
+    else if (problem) fail(problem, 'machine class');
+    else plan.machineClass = parsed;
+  }
+  const libraryNames = plan.machineClass
+    ? serviceLibraryClass(plan.machineClass).tasks.map((t) => t.name)
+    : [];
   const taskNames = new Set(
-    [...(found?.taskNames ?? []), ...(plan.template?.tasks.map((t) => t.name) ?? [])].map((n) =>
-      n.toLowerCase(),
-    ),
+    [
+      ...(found?.taskNames ?? []),
+      ...(plan.template?.tasks.map((t) => t.name) ?? []),
+      ...libraryNames,
+    ].map((n) => n.toLowerCase()),
   );
   for (const task of ctx.columns.tasks) {
     const on = task.dateCol === null ? '' : (record[task.dateCol] ?? '').trim();

@@ -19,6 +19,8 @@ import { recomputeDuePoints } from './forecast';
 import { createMachine, updateMachine } from './machines';
 import { writeReadings } from './readings';
 import { addTasks, lastDoneProblems, recordLastDone } from './schedules';
+import { applyMachineClassIn } from './machine-class';
+import { MACHINE_CLASS_LABELS } from '../../shared/domain/service-library';
 
 export const FLEET_IMPORT_MAX_ROWS = 2000;
 
@@ -111,6 +113,16 @@ async function writeRow(access: OrgAccess, plan: RowPlan, transaction: Transacti
       ];
       changes.push(
         `schedule ${plan.template.name} (${missing.length} ${missing.length === 1 ? 'task' : 'tasks'})`,
+      );
+    }
+  }
+  if (plan.machineClass) {
+    const before = machine.machineClass ?? null;
+    const { added } = await applyMachineClassIn(access, machine, plan.machineClass, transaction);
+    if (before !== plan.machineClass || added.length) {
+      tasks = [...tasks, ...added];
+      changes.push(
+        `class ${MACHINE_CLASS_LABELS[plan.machineClass]} (${added.length} ${added.length === 1 ? 'task' : 'tasks'})`,
       );
     }
   }

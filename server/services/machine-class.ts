@@ -17,13 +17,9 @@ import type { OrgAccess } from '../policies/access';
 import { recordAudit } from '../infra/audit';
 import { addTasks } from './schedules';
 
-/** Why a class cannot go on this machine (its meter counts in another unit), or null. */
-export function machineClassProblem(
-  machine: Pick<Machine, 'meterUnit'>,
-  machineClass: MachineClass,
-): string | null {
+/** Why a class cannot go on a machine whose meter counts in `own` (another unit), or null. */
+export function machineClassProblem(own: MeterUnit, machineClass: MachineClass): string | null {
   const { meterUnit } = serviceLibraryClass(machineClass);
-  const own: MeterUnit = machine.meterUnit;
   if (own === meterUnit) return null;
   return `The ${MACHINE_CLASS_LABELS[machineClass].toLowerCase()} schedule counts in ${METER_UNIT_LABELS[meterUnit]}, but this machine's meter counts in ${METER_UNIT_LABELS[own]}; pick a class that counts in ${METER_UNIT_LABELS[own]} or change the meter unit first`;
 }
@@ -76,7 +72,7 @@ export async function applyMachineClass(
   machine: Machine,
   machineClass: MachineClass,
 ) {
-  const problem = machineClassProblem(machine, machineClass);
+  const problem = machineClassProblem(machine.meterUnit, machineClass);
   if (problem) throw invalid({ machineClass: problem });
   return sequelize.transaction((t) => applyMachineClassIn(access, machine, machineClass, t));
 }
