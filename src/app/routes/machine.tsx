@@ -181,7 +181,12 @@ export function MachinePage() {
           >
             <DueSection
               orgId={orgId}
-              machine={{ id: detail.id, category: detail.category, meterUnit: detail.meterUnit }}
+              machine={{
+                id: detail.id,
+                category: detail.category,
+                meterUnit: detail.meterUnit,
+                machineClass: detail.machineClass,
+              }}
               timeZone={timeZone}
               recordServiceHref={canRecordService ? (taskId) => recordHref([taskId]) : undefined}
             />

@@ -4,6 +4,7 @@ import {
   DUE_STATUS_LABELS,
   type MachineCategory,
 } from '../../../../shared/constants';
+import { MACHINE_CLASS_LABELS, type MachineClass } from '../../../../shared/domain/service-library';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
@@ -13,6 +14,7 @@ import { useCreateTask } from '../api/create-task';
 import { useTasks } from '../api/get-tasks';
 import type { Task } from '../api/types';
 import { emptyTask } from '../lib/task-form-values';
+import { ApplyClassPanel } from './apply-class-panel';
 import { ApplyTemplatePanel } from './apply-template-panel';
 import { HistoryUnknownSummary } from './history-unknown-panel';
 import { TaskCard } from './task-card';
@@ -20,7 +22,12 @@ import { TaskForm } from './task-form';
 
 interface DueSectionProps {
   orgId: string;
-  machine: { id: string; category: MachineCategory; meterUnit: string };
+  machine: {
+    id: string;
+    category: MachineCategory;
+    meterUnit: string;
+    machineClass?: MachineClass | null;
+  };
   timeZone: string;
   /** the service form with one task chosen; given to those who may record services */
   recordServiceHref?: (taskId: string) => string;
@@ -41,9 +48,9 @@ function byUrgency(a: Task, b: Task): number {
 export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueSectionProps) {
   const tasks = useTasks(orgId, machine.id);
   const create = useCreateTask(orgId, machine.id);
-  const [panel, setPanel] = useState<'none' | 'add' | 'template'>('none');
+  const [panel, setPanel] = useState<'none' | 'add' | 'template' | 'class'>('none');
   const [notice, setNotice] = useState<string | null>(null);
-  const open = (next: 'add' | 'template') => {
+  const open = (next: 'add' | 'template' | 'class') => {
     setNotice(null);
     setPanel(next);
   };
@@ -74,6 +81,13 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
           {counts.map((c) => `${c.n} ${DUE_STATUS_LABELS[c.status].toLowerCase()}`).join(' · ')}
         </p>
       ) : null}
+      {machine.machineClass ? (
+        <p className="text-field-800">
+          Machine class:{' '}
+          <span className="font-bold">{MACHINE_CLASS_LABELS[machine.machineClass]}</span> (service
+          library; intervals of common practice — the operator's manual wins)
+        </p>
+      ) : null}
       {notice ? <Alert tone="success">{notice}</Alert> : null}
       <HistoryUnknownSummary
         orgId={orgId}
@@ -85,6 +99,9 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
         <div className="flex flex-wrap gap-2">
           <Button icon="plus" onClick={() => open('add')}>
             Add task
+          </Button>
+          <Button variant="secondary" onClick={() => open('class')}>
+            Apply machine class
           </Button>
           <Button variant="secondary" onClick={() => open('template')}>
             Apply template
@@ -113,6 +130,22 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
         </section>
       ) : null}
 
+      {panel === 'class' ? (
+        <ApplyClassPanel
+          orgId={orgId}
+          machineId={machine.id}
+          category={machine.category}
+          machineClass={machine.machineClass ?? null}
+          onDone={(result) => {
+            setPanel('none');
+            if (result)
+              setNotice(
+                `${MACHINE_CLASS_LABELS[result.machineClass]}: ${result.added.length} ${result.added.length === 1 ? 'task' : 'tasks'} added${result.kept.length ? `, ${result.kept.length} already on the schedule kept` : ''}. Edit each to match the operator's manual.`,
+              );
+          }}
+        />
+      ) : null}
+
       {panel === 'template' ? (
         <ApplyTemplatePanel
           orgId={orgId}
@@ -128,7 +161,7 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
         <EmptyState icon="clock" title="No service schedule yet">
           <p>
             {canEdit
-              ? "Add the tasks of this machine's operator's manual, or start from a template and replace its typical intervals with the manual's."
+              ? "Apply a machine class of the service library, start from a template, or add the tasks of this machine's operator's manual — then make each interval match the manual."
               : 'A manager or technician sets up the service schedule.'}
           </p>
         </EmptyState>

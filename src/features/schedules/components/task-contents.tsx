@@ -21,8 +21,9 @@ export function TaskContents({ task, showSafetyNotes }: { task: Task; showSafety
             <ul className="list-disc pl-5">
               {task.parts.map((part, i) => (
                 <li key={i}>
-                  {part.quantity} × {part.partNumber}
-                  {part.description ? ` — ${part.description}` : ''}
+                  {part.quantity} × {part.partNumber || part.description}
+                  {part.partNumber && part.description ? ` — ${part.description}` : ''}
+                  {part.wearPart ? ' (wear part: inspect, replace when worn)' : ''}
                 </li>
               ))}
             </ul>

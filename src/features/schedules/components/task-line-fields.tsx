@@ -8,7 +8,7 @@ import { requiredNumber, type TaskFormApi } from '../lib/task-form-values';
 
 const UNIT_OPTIONS = FLUID_UNITS.map((value) => ({ value, label: value }));
 
-/** The parts a task takes: part number, description, quantity. */
+/** The parts a task takes: part number, description, quantity, whether it is a wear part. */
 export function TaskPartsFields({ form }: { form: TaskFormApi }) {
   const {
     register,
@@ -49,6 +49,13 @@ export function TaskPartsFields({ form }: { form: TaskFormApi }) {
             error={errors.parts?.[index]?.quantity?.message}
             {...register(`parts.${index}.quantity`, requiredNumber)}
           />
+          <label className="flex min-h-12 cursor-pointer items-center gap-3 rounded-lg border border-field-200 px-3 py-2 sm:col-span-3 has-[:checked]:border-field-600 has-[:checked]:bg-field-50">
+            <input type="checkbox" className="size-5" {...register(`parts.${index}.wearPart`)} />
+            <span>
+              <span className="font-bold">Wear part</span> — inspected at each service and replaced
+              only when worn, so never counted as used (no part number needed)
+            </span>
+          </label>
           <Button
             variant="ghost"
             icon="trash"
@@ -64,7 +71,9 @@ export function TaskPartsFields({ form }: { form: TaskFormApi }) {
         <Button
           variant="secondary"
           icon="plus"
-          onClick={() => parts.append({ partNumber: '', description: '', quantity: 1 })}
+          onClick={() =>
+            parts.append({ partNumber: '', description: '', quantity: 1, wearPart: false })
+          }
         >
           Add part
         </Button>

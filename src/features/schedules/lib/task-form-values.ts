@@ -37,7 +37,9 @@ const SCALAR_FIELDS = [
 export function taskFieldNames(values: Partial<TaskFormInput>): Path<TaskFormInput>[] {
   const rowFields = [
     ...(values.parts ?? []).flatMap((_, i) =>
-      (['partNumber', 'description', 'quantity'] as const).map((f) => `parts.${i}.${f}`),
+      (['partNumber', 'description', 'quantity', 'wearPart'] as const).map(
+        (f) => `parts.${i}.${f}`,
+      ),
     ),
     ...(values.fluids ?? []).flatMap((_, i) =>
       (['kind', 'volume', 'unit'] as const).map((f) => `fluids.${i}.${f}`),
