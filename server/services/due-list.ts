@@ -26,12 +26,13 @@ interface DueFilterFlags {
 
 /**
  * The horizon's rule, one for the list, its total and every caller: a task past its meter or its
- * date (overdue) is always in; any other task is in when the date it falls due is inside the
- * horizon. Undated tasks (history unknown, no forecast) have no date to fall inside, so they come
- * only when the status filter asks for them by name.
+ * date (overdue) is always in, and so is one whose last service is not known (history unknown: it
+ * cannot be dated until someone answers, and it may be the most overdue of all); any other task is
+ * in when the date it falls due is inside the horizon. No-forecast tasks have no date to fall
+ * inside, so they come only when the status filter asks for them by name.
  */
-const HORIZON_RULE = `(d.status = 'overdue' OR d.sort_date <= :until
-  OR (:status::text IN ('history_unknown','no_forecast') AND d.status = :status::text))`;
+const HORIZON_RULE = `(d.status IN ('overdue','history_unknown') OR d.sort_date <= :until
+  OR (:status::text = 'no_forecast' AND d.status = :status::text))`;
 
 function dueWhere(filters: DueFilterFlags) {
   const where = ['d.organization_id = :org', "m.status <> 'sold'"];
@@ -44,8 +45,8 @@ function dueWhere(filters: DueFilterFlags) {
 }
 
 /**
- * The SQL of the due list (also timed bare by the benchmark): overdue first, then by the date each
- * task falls due, whatever its status, so the order matches the list's heading.
+ * The SQL of the due list (also timed bare by the benchmark): overdue first, then history unknown,
+ * then by the date each task falls due, whatever its status, so the order matches the heading.
  */
 export function dueListSql(filters: DueFilterFlags & { page?: boolean }) {
   return `SELECT d.task_id, d.due, t.name AS task_name, t.hazards, t.labour_hours,
@@ -56,7 +57,7 @@ export function dueListSql(filters: DueFilterFlags & { page?: boolean }) {
     JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
     LEFT JOIN machine_forecasts f ON f.machine_id = d.machine_id AND f.organization_id = d.organization_id
     WHERE ${dueWhere(filters)}
-    ORDER BY (d.status = 'overdue') DESC, d.sort_date ASC NULLS LAST, d.status_rank, d.task_id
+    ORDER BY (d.status = 'overdue') DESC, (d.status = 'history_unknown') DESC, d.sort_date ASC NULLS LAST, d.status_rank, d.task_id
     ${filters.page ? 'LIMIT :limit OFFSET :offset' : ''}`;
 }
 

@@ -1,21 +1,25 @@
 // The wording of the server's due figures (src/lib/due-format.ts: shared/domain/due-words.ts with
-// the browser's number format), used by the due list, dealer board, shop week and machine page. The numbers follow the browser's language; the test fixes it to British
-// English (en-GB) by giving Intl.NumberFormat that default, so the expected strings are that
-// locale's forms (thousands with a comma, a point before the one decimal), written by hand.
-// Dates read 'd MMM yyyy' (date-fns, English month names) whatever the locale.
+// the browser's number and date formats), used by the due list, dealer board, shop week and machine
+// page. Numbers and dates follow the browser's language; the test fixes it to British English
+// (en-GB) by giving Intl.NumberFormat and Intl.DateTimeFormat that default, so the expected strings
+// are that locale's forms (thousands with a comma, a point before the one decimal, "29 Dec 2026"),
+// written by hand from CLDR's en-GB patterns.
 import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
 
 type DueFormat = typeof import('../../src/lib/due-format');
 let due: DueFormat;
 
 beforeAll(async () => {
-  const { NumberFormat } = Intl;
+  const { NumberFormat, DateTimeFormat } = Intl;
   // Intl's members are not enumerable: inherit them all, replacing only NumberFormat.
   vi.stubGlobal(
     'Intl',
     Object.assign(Object.create(Intl) as typeof Intl, {
       NumberFormat: function (locale: string | undefined, options?: Intl.NumberFormatOptions) {
         return new NumberFormat(locale ?? 'en-GB', options);
+      },
+      DateTimeFormat: function (locale: string | undefined, options?: Intl.DateTimeFormatOptions) {
+        return new DateTimeFormat(locale ?? 'en-GB', options);
       },
     }),
   );

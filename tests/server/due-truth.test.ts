@@ -89,7 +89,7 @@ describe('due truth', () => {
     expect(week.body.meta.machines).toBe(1);
   });
 
-  it('undated tasks — a history-unknown task is in no horizon, but listed when asked for by status', async () => {
+  it('undated tasks — a history-unknown task is in every horizon, right after the overdue ones (it needs an answer before it can be dated)', async () => {
     const { org, agent, url } = await handWorkedFarm();
     // a machine that came with hours: a task added without its last service has history unknown
     const used = await createMachine(org, { fleetNumber: 'OD-02' });
@@ -101,8 +101,14 @@ describe('due truth', () => {
     await agent
       .post(`/api/v1/organizations/${org.id}/machines/${used.id}/readings`)
       .send({ value: 2101 });
-    const month = await agent.get(`${url}?horizon=30`);
-    expect(names(month.body.data)).not.toContain('Unknown oil');
+    const week = await agent.get(`${url}?horizon=7`);
+    const rows = week.body.data as Row[];
+    const firstUnknown = rows.findIndex((r) => r.due.status === 'history_unknown');
+    expect(firstUnknown).toBeGreaterThan(0); // the hand-worked farm's Late oil is overdue
+    expect(rows[firstUnknown].taskName).toBe('Unknown oil');
+    // every overdue row comes before it, every dated one after
+    expect(rows.slice(0, firstUnknown).every((r) => r.due.status === 'overdue')).toBe(true);
+    expect(rows.slice(firstUnknown + 1).every((r) => r.due.status !== 'overdue')).toBe(true);
     const unknown = await agent.get(`${url}?horizon=30&status=history_unknown`);
     expect(names(unknown.body.data)).toEqual(['Unknown oil']);
   });

@@ -146,12 +146,13 @@ export function DueBoard({
 }
 
 /**
- * What the list holds, in the order it holds it: the horizon's rule (overdue, then what falls due
- * inside it) and, for undated statuses, that no horizon applies.
+ * What the list holds, in the order it holds it: the horizon's rule (overdue and history unknown,
+ * then what falls due inside it) and, for undated statuses, that no horizon applies.
  */
 export function dueListScope(status: DueStatus | null, horizon: number): string {
   const within = `within the next ${horizon} days, by date.`;
-  if (status === null) return `Everything overdue, then what falls due ${within}`;
+  if (status === null)
+    return `Everything overdue and every task whose last service is not known, then what falls due ${within}`;
   if (status === 'overdue') return 'Every overdue task, by date.';
   if (status === 'history_unknown')
     return 'Tasks whose last service is not known yet: no date until last done is set.';
