@@ -60,10 +60,13 @@ describe('sign-up — from the sign-in page to an empty farm of one’s own', ()
     await page.waitForURL(/\/o\/[0-9a-f-]{36}$/);
     await page.getByRole('heading', { name: 'Dashboard' }).waitFor();
     // an empty farm's dashboard says how to bring the fleet in, not "choose a longer horizon"
-    await page.getByText('No machines yet').waitFor();
+    const heading = page.getByRole('heading', { name: 'No machines yet' });
+    await heading.waitFor();
     expect(await page.getByText(/Nothing due in \d+ days|choose a longer horizon/).count()).toBe(0);
-    await page.getByRole('link', { name: 'Add a machine' }).waitFor();
-    await page.getByRole('link', { name: 'Import machines' }).waitFor();
+    // the innermost box around that heading (the due list's empty state) offers both ways in
+    const empty = page.locator('div', { has: heading }).last();
+    await empty.getByRole('link', { name: 'Add a machine' }).waitFor();
+    await empty.getByRole('link', { name: 'Import machines' }).waitFor();
     const switcher = page.getByRole('combobox', { name: 'Organization' });
     expect(await switcher.locator('option:checked').textContent()).toContain(FARM);
     await screenshot(page, 'sign-up-empty-dashboard');

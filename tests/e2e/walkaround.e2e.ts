@@ -125,7 +125,7 @@ describe('daily walkaround on a phone (browser)', () => {
       .click();
     await page.getByRole('heading', { name: 'Daily walkaround' }).waitFor();
     await page
-      .getByRole('list', { name: 'Machines' })
+      .getByRole('list', { name: 'Assigned to you' })
       .getByRole('link', { name: startsWith(fleet) })
       .click();
     await page.getByRole('heading', { name: `Walkaround · ${fleet}` }).waitFor();
@@ -190,7 +190,7 @@ describe('daily walkaround on a phone (browser)', () => {
     await page.getByRole('link', { name: 'Walk round another machine' }).click();
     await page.getByRole('heading', { name: 'Daily walkaround' }).waitFor();
     const row = page
-      .getByRole('list', { name: 'Machines' })
+      .getByRole('list', { name: 'Assigned to you' })
       .getByRole('listitem')
       .filter({ has: page.getByText(fleet, { exact: true }) });
     await row.waitFor();
