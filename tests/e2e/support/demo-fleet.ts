@@ -36,6 +36,9 @@ export const DUE_TRUTH_FLEET = 'OD-01';
  */
 export const PLANNED_ONCE_FLEET = 'PL-01';
 
+/** service-library.e2e.ts adds this used baler (one reading) and applies a machine class to it. */
+export const LIBRARY_FLEET = 'LB-01';
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -46,4 +49,5 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...ROLE_FLOWS_FLEET,
   DUE_TRUTH_FLEET,
   PLANNED_ONCE_FLEET,
+  LIBRARY_FLEET,
 ]);

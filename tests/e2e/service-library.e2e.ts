@@ -1,0 +1,67 @@
+// Issue 11, the service library in the browser: the manager adds a used round baler (LB-01, its
+// own), picks the class "Round baler" on the machine page and applies it in one step; every task
+// of the class is on the schedule, history unknown (it came with hours), with the label that the
+// intervals are common practice and the operator's manual wins. Writes only LB-01.
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Page } from 'playwright-core';
+import { launchBrowser, signIn, type TestBrowser } from './support/browser';
+import { LIBRARY_FLEET } from './support/demo-fleet';
+import { serviceLibraryClass } from '../../shared/domain/service-library';
+
+const DESKTOP = { width: 1280, height: 800 };
+
+async function larkspur(page: Page) {
+  const me = await (await page.request.get('/api/v1/me')).json();
+  return me.data.memberships.find(
+    (m: { organization: { name: string } }) => m.organization.name === 'Larkspur Flats Farm',
+  ).organization.id as string;
+}
+
+describe('service library — apply a machine class on the machine page', () => {
+  let browser: TestBrowser;
+  let page: Page;
+  let org: string;
+  let machineId: string;
+  beforeAll(async () => {
+    browser = await launchBrowser();
+    page = await browser.newPage(DESKTOP);
+    await signIn(page, 'marta@larkspur.example', 'hourstone-demo');
+    org = await larkspur(page);
+    const created = await page.request.post(`/api/v1/organizations/${org}/machines`, {
+      data: { fleetNumber: LIBRARY_FLEET, name: 'Second-hand round baler', category: 'baler' },
+    });
+    expect(created.status()).toBe(201);
+    machineId = (await created.json()).data.id;
+    const reading = await page.request.post(
+      `/api/v1/organizations/${org}/machines/${machineId}/readings`,
+      { data: { value: 850, takenAt: new Date(Date.now() - 60_000).toISOString() } },
+    );
+    expect(reading.status()).toBe(201);
+  });
+  afterAll(async () => {
+    await browser?.close();
+  });
+
+  it('the manager picks "Round baler", applies it, and every task of the class is on the schedule, history unknown', async () => {
+    const expected = serviceLibraryClass('round_baler').tasks.map((t) => t.name);
+    await page.goto(`/o/${org}/machines/${machineId}`);
+    await page.getByRole('heading', { name: new RegExp(`^${LIBRARY_FLEET} · `) }).waitFor();
+    await page.getByRole('button', { name: 'Apply machine class' }).click();
+    const panel = page.getByRole('region', { name: 'Apply a machine class' });
+    await panel.getByLabel('Machine class').selectOption({ label: 'Round baler' });
+    await panel.getByText("Common practice — the operator's manual wins").waitFor();
+    await panel.getByText('Pickup tines and guards').waitFor();
+    await panel.getByRole('button', { name: 'Apply class' }).click();
+    await page.getByText(`Round baler: ${expected.length} tasks added`).waitFor();
+    await page.getByText('Machine class:').waitFor();
+    const tasks = page.getByRole('list', { name: 'Service tasks' });
+    await tasks.getByText('Pickup tines and guards').waitFor();
+    for (const name of expected)
+      expect(await tasks.getByText(name, { exact: true }).count()).toBe(1);
+    // it came with 850 h and no history: nothing pretends to be OK
+    const api = await page.request.get(`/api/v1/organizations/${org}/machines/${machineId}/tasks`);
+    const statuses = (await api.json()).data.map((t: { due: { status: string } }) => t.due.status);
+    expect(new Set(statuses)).toEqual(new Set(['history_unknown']));
+    await page.screenshot({ path: '.screenshots/service-library-applied.png', fullPage: true });
+  });
+});
