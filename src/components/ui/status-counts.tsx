@@ -16,7 +16,9 @@ const RING: Record<DueStatus, string> = {
 /**
  * How many tasks of each status fall inside the horizon. Each count is a toggle button that
  * filters the list to that status (aria-pressed says which one is on); pressing it again clears.
- * Its name is what it shows ("Overdue 4"), so a voice command of the visible words works.
+ * Its name is what it shows ("Overdue 4"), so a voice command of the visible words works. On a
+ * phone each count is one line (the badge, then the number) so the list below starts on the
+ * first screen.
  */
 export function StatusCounts({
   counts,
@@ -31,7 +33,10 @@ export function StatusCounts({
   onSelect: (status: DueStatus | null) => void;
 }) {
   return (
-    <ul aria-label={label} className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-5">
+    <ul
+      aria-label={label}
+      className="flex flex-wrap gap-2 sm:grid sm:grid-cols-3 sm:gap-3 lg:grid-cols-5"
+    >
       {DUE_STATUSES.map((status) => {
         const pressed = active === status;
         return (
@@ -41,15 +46,16 @@ export function StatusCounts({
               aria-pressed={pressed}
               onClick={() => onSelect(pressed ? null : status)}
               className={cx(
-                'flex min-h-touch w-full flex-col items-start gap-1 rounded-xl border-2 bg-white p-3 text-left shadow-card transition-colors hover:bg-oat-50',
+                'flex min-h-touch flex-row items-center gap-2 rounded-xl border-2 bg-white px-2.5 py-1 text-left sm:w-full shadow-card transition-colors hover:bg-oat-50 sm:flex-col sm:items-start sm:justify-start sm:p-3',
                 pressed ? RING[status] : 'border-transparent',
               )}
             >
               <DueStatusBadge status={status} />
-              <span className="text-3xl font-black text-field-950 tabular-nums">
+              <span className="text-xl font-black text-field-950 tabular-nums sm:text-3xl">
                 {counts[status]}
               </span>
-              <span className="min-h-5 text-sm text-field-600">
+              {/* the ring and aria-pressed say it on a phone, where the line would cost a row */}
+              <span className="hidden min-h-5 text-sm text-field-600 sm:block">
                 {pressed ? 'Showing only these' : null}
               </span>
             </button>

@@ -1,4 +1,4 @@
-import { useEffect, useId, useState } from 'react';
+import { useEffect, useId, useState, type ReactNode } from 'react';
 import {
   CATEGORY_LABELS,
   DUE_HORIZONS,
@@ -28,7 +28,7 @@ const STATUSES = [
 
 // Five fields stack into five rows on a phone and push the first service off the screen: below
 // this width they fold behind a "Filters" button that says how many are set.
-const FIELDS_FIT = '(min-width: 1024px)';
+export const FIELDS_FIT = '(min-width: 1024px)';
 
 /** How many of the board's filters differ from a fresh board (a longer horizon counts). */
 export const activeBoardFilters = (f: BoardFilters) =>
@@ -41,10 +41,13 @@ export function BoardFiltersBar({
   filters,
   customers,
   onChange,
+  beside,
 }: {
   filters: BoardFilters;
   customers: CustomerRef[];
   onChange: (change: BoardFilterChange) => void;
+  /** shown beside the folded "Filters" button (the CSV link on a phone, saving a row) */
+  beside?: ReactNode;
 }) {
   // The task name is sent a moment after typing stops, not on every key.
   const [task, setTask] = useState(filters.task);
@@ -104,16 +107,18 @@ export function BoardFiltersBar({
   if (wide) return fields;
   return (
     <div className="flex flex-col gap-3">
-      <Button
-        variant="secondary"
-        icon="sliders"
-        aria-expanded={open}
-        aria-controls={panelId}
-        className="self-start"
-        onClick={() => setOpen((o) => !o)}
-      >
-        Filters{active ? ` (${active} on)` : ''}
-      </Button>
+      <div className="flex flex-wrap items-center gap-2">
+        <Button
+          variant="secondary"
+          icon="sliders"
+          aria-expanded={open}
+          aria-controls={panelId}
+          onClick={() => setOpen((o) => !o)}
+        >
+          Filters{active ? ` (${active} on)` : ''}
+        </Button>
+        {beside}
+      </div>
       {open ? fields : null}
     </div>
   );

@@ -7,9 +7,10 @@ import { ErrorState } from '../../../components/ui/error-state';
 import { Icon } from '../../../components/ui/icons';
 import { LoadingRegion, Skeleton } from '../../../components/ui/skeleton';
 import { StatusCounts } from '../../../components/ui/status-counts';
+import { useMediaQuery } from '../../../lib/use-media-query';
 import { boardCsvHref, useBoard } from '../api/get-board';
 import type { BoardFilters, BoardRow } from '../api/types';
-import { BoardFiltersBar, type BoardFilterChange } from './board-filters';
+import { BoardFiltersBar, FIELDS_FIT, type BoardFilterChange } from './board-filters';
 import { BoardList } from './board-list';
 import { Pager } from '../../../components/ui/pager';
 import { BookingDialog } from './booking-dialog';
@@ -42,6 +43,8 @@ export function DealerBoard({
   const [selected, setSelected] = useState<Map<string, BoardRow>>(new Map());
   const [dialog, setDialog] = useState<'reminder' | 'booking' | null>(null);
   const listTop = useRef<HTMLDivElement>(null);
+  // where the filters fold, the CSV link sits beside their button: one row less above the list
+  const folded = !useMediaQuery(FIELDS_FIT);
 
   const change = useCallback(
     (c: BoardFilterChange & { page?: number }) => {
@@ -95,24 +98,32 @@ export function DealerBoard({
   const canPropose =
     oneCustomer !== null &&
     meta.customers.some((c) => c.id === oneCustomer.id && c.access === 'service');
+  const csvLink = (
+    <a className={buttonClasses('secondary')} href={boardCsvHref(orgId, filters)} download>
+      <Icon name="download" />
+      Download CSV
+    </a>
+  );
   const filtered = Boolean(
     filters.customerId || filters.category || filters.status || filters.task,
   );
 
   return (
-    <div className="flex flex-col gap-6">
+    <div className="flex flex-col gap-4 sm:gap-6">
       <StatusCounts
         label="Service counts"
         counts={meta.counts}
         active={filters.status}
         onSelect={(status) => change({ status })}
       />
-      <BoardFiltersBar filters={filters} customers={meta.customers} onChange={change} />
+      <BoardFiltersBar
+        filters={filters}
+        customers={meta.customers}
+        onChange={change}
+        beside={folded ? csvLink : null}
+      />
       <div className="flex flex-wrap items-center gap-2">
-        <a className={buttonClasses('secondary')} href={boardCsvHref(orgId, filters)} download>
-          <Icon name="download" />
-          Download CSV
-        </a>
+        {folded ? null : csvLink}
         <Button icon="mail" disabled={!oneCustomer} onClick={() => setDialog('reminder')}>
           Send reminder
         </Button>
