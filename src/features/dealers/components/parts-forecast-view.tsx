@@ -104,9 +104,12 @@ export function PartsForecastView({
   );
 }
 
-// narrower cells on a phone, so the four columns fit without scrolling
+// narrower cells on a phone, so the columns fit without scrolling; below 640 px the machine count
+// moves under the part's name (a fourth column cut "First needed" off at 390 px)
 const th = 'px-1.5 py-2 text-left text-sm font-bold text-field-700 sm:px-2.5';
 const td = 'px-1.5 py-2.5 align-top break-words sm:px-2.5';
+const wideOnly = 'hidden sm:table-cell';
+const machinesText = (n: number) => (n === 1 ? '1 machine' : `${n} machines`);
 
 function Lines({
   parts,
@@ -147,7 +150,7 @@ function Lines({
             <th scope="col" className={`${th} text-right`}>
               Quantity
             </th>
-            <th scope="col" className={`${th} text-right`}>
+            <th scope="col" className={`${th} ${wideOnly} text-right`}>
               Machines
             </th>
             <th scope="col" className={th}>
@@ -161,10 +164,13 @@ function Lines({
               <td className={td}>
                 <span className="font-bold">{l.what}</span>
                 {l.detail ? <span className="block text-sm text-field-600">{l.detail}</span> : null}
+                <span className="block text-sm text-field-600 sm:hidden">
+                  {machinesText(l.machines)}
+                </span>
               </td>
               <td className={`${td} text-right tabular-nums`}>{l.amount}</td>
-              <td className={`${td} text-right tabular-nums`}>{l.machines}</td>
-              <td className={td}>{dateText(l.first)}</td>
+              <td className={`${td} ${wideOnly} text-right tabular-nums`}>{l.machines}</td>
+              <td className={`${td} whitespace-nowrap`}>{dateText(l.first)}</td>
             </tr>
           ))}
         </tbody>
