@@ -256,7 +256,7 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
         </>
       ) : null}
 
-      <FormBlock title="Defects and notes">
+      <FormBlock title={props.defects ? 'Defects and notes' : 'Notes'}>
         {props.defects ? (
           <DefectChoiceList
             form={form}
