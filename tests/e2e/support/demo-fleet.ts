@@ -36,6 +36,12 @@ export const DUE_TRUTH_FLEET = 'OD-01';
  */
 export const PLANNED_ONCE_FLEET = 'PL-01';
 
+/**
+ * advisor.e2e.ts adds this machine at Larkspur Flats (readings, a task 38 h past its meter, one
+ * 12 days past its date) and records a service on it as the demo's dealer advisor (issue 10).
+ */
+export const ADVISOR_FLEET = 'AD-01';
+
 /** service-library.e2e.ts adds this used baler (one reading) and applies a machine class to it. */
 export const LIBRARY_FLEET = 'LB-01';
 
@@ -50,4 +56,5 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   DUE_TRUTH_FLEET,
   PLANNED_ONCE_FLEET,
   LIBRARY_FLEET,
+  ADVISOR_FLEET,
 ]);
