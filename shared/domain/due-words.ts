@@ -100,7 +100,9 @@ export function dueRangeText(
 
 /**
  * "234 h (1,956.3 h lifetime)": a meter value as the meter fitted now reads it, with the lifetime
- * value in brackets when a meter replacement makes them differ; both in meter units.
+ * value in brackets when a meter replacement makes them differ; both in meter units. A value the
+ * fitted meter never showed (it fell before the meter was fitted) is said on the lifetime scale
+ * alone: "1,262 h lifetime (before the meter fitted now)".
  */
 export function fittedMeterText(
   onMeter: number,
@@ -108,6 +110,7 @@ export function fittedMeterText(
   unit: string,
   meter: MeterFormat = englishMeter,
 ): string {
+  if (onMeter < 0) return `${meter(lifetime, unit)} lifetime (before the meter fitted now)`;
   const shown = meter(onMeter, unit);
   return Math.abs(onMeter - lifetime) < 1e-9
     ? shown

@@ -78,7 +78,9 @@ describe('due truth — overdue means overdue, in the browser', () => {
   it('dashboard — "Next 7 days" lists it as overdue; the count cards count the whole fleet', async () => {
     await page.goto(`/o/${org}?horizon=7`);
     await page
-      .getByText('Everything overdue, then what falls due within the next 7 days')
+      .getByText(
+        'Everything overdue and every task whose last service is not known, then what falls due within the next 7 days',
+      )
       .waitFor();
     await page.getByRole('heading', { name: 'Every task of the fleet by status' }).waitFor();
     const ok = page
@@ -121,5 +123,10 @@ describe('due truth — overdue means overdue, in the browser', () => {
     await form.getByRole('button', { name: 'Save reading' }).click();
     await form.getByText(/Reading 300 h \(1,600 h lifetime\)/).waitFor();
     expect(await form.innerText()).toContain('previous reading of 0 h (1,300 h lifetime)');
+    // the task's details say its due meter against the meter fitted now: 1,262 h lifetime fell
+    // before the new meter (fitted at 1,300 h lifetime, reading 0), so only the lifetime is said
+    const card = page.getByRole('list', { name: 'Service tasks' }).getByRole('listitem').first();
+    await card.getByText(/^Details/).click();
+    expect(await card.innerText()).toContain('1,262 h lifetime (before the meter fitted now)');
   });
 });

@@ -54,6 +54,11 @@ describe('due words', () => {
     expect(fittedMeterText(1956.3, 1956.3, 'h')).toBe('1,956.3 h');
   });
 
+  it('fitted meter — a due value from before the new meter was fitted (−38 on it) is said on the lifetime scale', () => {
+    // meter fitted at 1,300 h lifetime reading 0: 1,262 h lifetime would be −38 on it
+    expect(fittedMeterText(-38, 1262, 'h')).toBe('1,262 h lifetime (before the meter fitted now)');
+  });
+
   it('range — the year said once within a year; across years both', () => {
     expect(dueRangeText('2026-12-22', '2026-12-29')).toBe('22 Dec – 29 Dec 2026');
     expect(dueRangeText('2026-12-29', '2027-01-14')).toBe('29 Dec 2026 – 14 Jan 2027');

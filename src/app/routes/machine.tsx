@@ -186,6 +186,7 @@ export function MachinePage() {
                 category: detail.category,
                 meterUnit: detail.meterUnit,
                 machineClass: detail.machineClass,
+                lastReading: detail.lastReading,
               }}
               timeZone={timeZone}
               recordServiceHref={canRecordService ? (taskId) => recordHref([taskId]) : undefined}

@@ -65,11 +65,11 @@ export async function launchBrowser(): Promise<TestBrowser> {
 
 /** Signs in through the sign-in form, as a person would, and waits to leave /sign-in. */
 export async function signIn(page: Page, email: string, password: string): Promise<void> {
-  // The profile is shared by every page of the run: start each sign-in signed out.
+  // The profile is shared by every page of the run: start each sign-in signed out, on a freshly
+  // loaded sign-in page (a page left on /sign-in by the previous test may still be settling its
+  // session query, or be redirected there by a late 401, and not show the form yet).
   await page.context().clearCookies();
-  if (!new URL(page.url(), baseUrl).pathname.startsWith('/sign-in')) {
-    await page.goto(`${baseUrl}/sign-in`);
-  }
+  await page.goto(`${baseUrl}/sign-in`);
   await page.getByLabel('Email', { exact: true }).fill(email);
   await page.getByLabel('Password', { exact: true }).fill(password);
   await page.getByRole('button', { name: 'Sign in' }).click();

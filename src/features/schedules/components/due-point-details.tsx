@@ -1,5 +1,6 @@
 import type { DuePoint } from '../../../../shared/domain/types';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
+import { fittedMeterText } from '../../../lib/due-format';
 import { describeRemaining } from '../lib/task-text';
 
 const GOVERNS: Record<'meter' | 'calendar', string> = {
@@ -15,12 +16,29 @@ const BASIS: Record<DuePoint['basis'], string | null> = {
   unknown: null,
 };
 
-/** The figures of one due point, all as the server computed them. */
-export function DuePointDetails({ due, unit }: { due: DuePoint; unit: string }) {
+/**
+ * The figures of one due point, all as the server computed them. `meterOffset` is the lifetime
+ * value minus what the meter fitted now shows (non-zero after a meter replacement): the due meter
+ * is then said on the fitted meter, with the lifetime value in brackets.
+ */
+export function DuePointDetails({
+  due,
+  unit,
+  meterOffset = 0,
+}: {
+  due: DuePoint;
+  unit: string;
+  meterOffset?: number;
+}) {
   const remaining = describeRemaining(due.remainingMeter, due.remainingDays, unit);
   const rows: { term: string; detail: string }[] = [];
   if (due.dueMeter !== null)
-    rows.push({ term: 'Due meter', detail: formatMeter(due.dueMeter, unit) });
+    rows.push({
+      term: 'Due meter',
+      detail: meterOffset
+        ? fittedMeterText(due.dueMeter - meterOffset, due.dueMeter, unit)
+        : formatMeter(due.dueMeter, unit),
+    });
   if (due.dueDate !== null) rows.push({ term: 'Due date', detail: formatLocalDate(due.dueDate) });
   if (due.projectedDate !== null) {
     const range =

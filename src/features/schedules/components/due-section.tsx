@@ -27,6 +27,8 @@ interface DueSectionProps {
     category: MachineCategory;
     meterUnit: string;
     machineClass?: MachineClass | null;
+    /** the last reading, to say due meters on the meter fitted now after a replacement */
+    lastReading?: { value: number; lifetimeValue: number } | null;
   };
   timeZone: string;
   /** the service form with one task chosen; given to those who may record services */
@@ -173,6 +175,11 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
               orgId={orgId}
               task={task}
               unit={machine.meterUnit}
+              meterOffset={
+                machine.lastReading
+                  ? machine.lastReading.lifetimeValue - machine.lastReading.value
+                  : 0
+              }
               timeZone={timeZone}
               canEdit={canEdit}
               canSetLastDone={canSetLastDone}

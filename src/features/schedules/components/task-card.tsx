@@ -19,6 +19,8 @@ interface TaskCardProps {
   orgId: string;
   task: Task;
   unit: string;
+  /** lifetime minus the fitted meter's value (non-zero after a meter replacement) */
+  meterOffset?: number;
   timeZone: string;
   canEdit: boolean;
   canSetLastDone: boolean;
@@ -39,6 +41,7 @@ export function TaskCard({
   orgId,
   task,
   unit,
+  meterOffset,
   timeZone,
   canEdit,
   canSetLastDone,
@@ -112,7 +115,7 @@ export function TaskCard({
         </summary>
         <div className="mt-2 flex flex-col gap-3">
           {task.due ? (
-            <DuePointDetails due={task.due} unit={unit} />
+            <DuePointDetails due={task.due} unit={unit} meterOffset={meterOffset} />
           ) : (
             <p className="text-field-600">No due point yet.</p>
           )}
