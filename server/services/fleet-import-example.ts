@@ -1,9 +1,15 @@
 // The downloadable example fleet file: invented machines written the way this farm's
 // spreadsheet would write them (its date order; semicolons and a decimal comma on metric farms),
-// with a schedule column and last-service columns when the farm has schedule templates.
+// with a machine class of the service library on each machine it fits, a schedule column when the
+// farm has schedule templates, and the last service of one task of the first machine.
 import { stringify } from 'csv-stringify/sync';
 import { ScheduleTemplate } from '../models';
 import { addDaysIso, todayIso } from '../../shared/domain';
+import {
+  MACHINE_CLASS_LABELS,
+  serviceLibraryClass,
+  type MachineClass,
+} from '../../shared/domain/service-library';
 import type { OrgAccess } from '../policies/access';
 import { localDateOrder } from '../infra/csv-sheet';
 
@@ -24,6 +30,14 @@ const MACHINES = [
   ['B-03', 'Round baler', 'baler', 'Tamsin', 'RB 160', 'TS-RB-4410', '2018', 'bales', 18400],
 ] as const;
 
+/** The service library's class of each example machine (the baler counts bales, so none). */
+const CLASSES: (MachineClass | null)[] = [
+  'articulated_tractor',
+  'utility_loader_tractor',
+  'grain_truck',
+  null,
+];
+
 /** The example file's text (with a byte-order mark, so spreadsheet programs read it as UTF-8). */
 export async function fleetExampleCsv(access: OrgAccess): Promise<string> {
   const metric = access.organization.units === 'metric';
@@ -39,7 +53,9 @@ export async function fleetExampleCsv(access: OrgAccess): Promise<string> {
     order: [['name', 'ASC']],
   });
   const template = templates.find((t) => t.category === 'tractor') ?? templates[0] ?? null;
-  const task = template?.tasks.find((t) => t.intervalMeter !== null) ?? template?.tasks[0] ?? null;
+  // the first machine's last service: of a task of its template, or else of its class
+  const tasks = template?.tasks ?? serviceLibraryClass(CLASSES[0]!).tasks;
+  const task = tasks.find((t) => t.intervalMeter !== null) ?? tasks[0] ?? null;
 
   const header = [
     'fleet number',
@@ -52,6 +68,7 @@ export async function fleetExampleCsv(access: OrgAccess): Promise<string> {
     'meter unit',
     'meter reading',
     'reading date',
+    'machine class',
     ...(template ? ['schedule'] : []),
     ...(task ? [`${task.name} last done`, `${task.name} last meter`] : []),
   ];
@@ -59,6 +76,8 @@ export async function fleetExampleCsv(access: OrgAccess): Promise<string> {
     ([fleet, name, category, make, model, serial, year, unit, meter], i) => {
       const row: string[] = [fleet, name, category, make, model, serial, year, unit, number(meter)];
       row.push(local(addDaysIso(today, -7)));
+      const machineClass = CLASSES[i];
+      row.push(machineClass ? MACHINE_CLASS_LABELS[machineClass] : '');
       // the first machine gets the schedule and the last service of one of its tasks
       const first = i === 0;
       if (template) row.push(first ? template.name : '');

@@ -21,6 +21,8 @@ async function newFarm() {
   const day = (n: number) => addDaysIso(todayIso(org.timeZone), -n);
   return {
     org,
+    agent,
+    base,
     day,
     preview: (c: string) => send('preview', c),
     commit: (c: string) => send('commit', c),
@@ -65,5 +67,30 @@ describe('fleet import — machine class', () => {
     );
     expect(km.errors[0]).toMatch(/^Line 3, machine class: .*counts in km.*counts in hours/);
     expect(await ServiceTask.count()).toBe(0);
+  });
+  it('fleet import — a new farm’s example file gives its machines classes of the library, and one task’s last service, and imports them', async () => {
+    const f = await newFarm();
+    const example = await f.agent.get(`${f.base}/example`);
+    expect(example.status).toBe(200);
+    const [header, first, , , baler] = example.text.replace('\uFEFF', '').split('\r\n');
+    expect(header.split(',').slice(10, 13)).toEqual([
+      'machine class',
+      'Engine oil and filter last done',
+      'Engine oil and filter last meter',
+    ]);
+    expect(first.split(',')[10]).toBe('4WD articulated tractor');
+    expect(baler.split(',')[10]).toBe(''); // it counts bales; the round-baler class counts hours
+    const res = await f.commit(example.text);
+    expect(res.status).toBe(201);
+    const classes = await Machine.findAll({
+      attributes: ['fleetNumber', 'machineClass'],
+      order: [['fleetNumber', 'ASC']],
+    });
+    expect(classes.map((m) => [m.fleetNumber, m.machineClass])).toEqual([
+      ['B-03', null],
+      ['L-02', 'utility_loader_tractor'],
+      ['T-11', 'articulated_tractor'],
+      ['TR-04', 'grain_truck'],
+    ]);
   });
 });
