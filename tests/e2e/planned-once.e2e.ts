@@ -1,7 +1,8 @@
 // Issue 10 "What new users tripped on", in the browser: Bookings is in the farm manager's menu and
 // the dashboard says a dealer proposal waits (the demo's S-01 proposal, read only); recording a
 // service on a machine with an open plan offers to complete that plan, and completing it takes the
-// plan out of the shop week; a photo attached as photo.png shows as photo.png. Writes only PL-01,
+// plan out of the shop week; a dealer's proposal of the planned work warns the farm before it
+// accepts; a photo attached as photo.png shows as photo.png. Writes only PL-01,
 // a machine it adds itself (support/demo-fleet.ts).
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
@@ -29,12 +30,14 @@ describe('planned once — the same work is not planned twice, in the browser', 
   let machineId: string;
   let taskId: string;
   let planId: string;
+  let timeZone: string;
   beforeAll(async () => {
     browser = await launchBrowser();
     page = await browser.newPage(DESKTOP);
     await signIn(page, 'marta@larkspur.example', 'hourstone-demo');
     const farm = await larkspur(page);
     org = farm.id;
+    timeZone = farm.timeZone;
     const api = `/api/v1/organizations/${org}`;
     const created = await page.request.post(`${api}/machines`, {
       data: { fleetNumber: PLANNED_ONCE_FLEET, name: 'Brindle yard loader', category: 'loader' },
@@ -84,6 +87,40 @@ describe('planned once — the same work is not planned twice, in the browser', 
       .getByRole('button', { name: /^Accept (booking|anyway)$/ })
       .first()
       .waitFor();
+  });
+
+  it('dealer booking — a proposal covering the planned work says so before the farm accepts it', async () => {
+    // the advisor proposes the same task on PL-01 for the plan's day (the dealer has a service link)
+    await signIn(page, 'ravi@quillon.example', 'hourstone-demo');
+    const me = await (await page.request.get('/api/v1/me')).json();
+    const dealer = me.data.memberships.find(
+      (m: { organization: { kind: string } }) => m.organization.kind === 'dealer',
+    ).organization.id as string;
+    const proposed = await page.request.post(`/api/v1/organizations/${dealer}/bookings`, {
+      data: {
+        customerId: org,
+        proposedFor: localToday(timeZone),
+        items: [{ machineId, taskIds: [taskId] }],
+      },
+    });
+    expect(proposed.status()).toBe(201);
+    const bookingId = (await proposed.json()).data.id as string;
+
+    await signIn(page, 'marta@larkspur.example', 'hourstone-demo');
+    await page.goto(`/o/${org}/bookings`);
+    await page.getByRole('heading', { name: 'Bookings', level: 1 }).waitFor();
+    const warning = page.getByRole('status').filter({ hasText: 'Overlaps a planned visit' });
+    await warning.filter({ hasText: PLANNED_ONCE_FLEET }).waitFor();
+    expect(await warning.filter({ hasText: PLANNED_ONCE_FLEET }).innerText()).toContain(
+      `${PLANNED_ONCE_FLEET} is planned for`,
+    );
+    expect(await page.getByRole('button', { name: 'Accept anyway' }).count()).toBeGreaterThan(0);
+    // declined, so no proposal of this file is left waiting for the other files
+    const declined = await page.request.post(
+      `/api/v1/organizations/${org}/bookings/${bookingId}/decline`,
+      { data: {} },
+    );
+    expect(declined.status()).toBe(200);
   });
 
   it('record service — offers the open plan; completing it takes the plan out of the shop week, and the photo keeps its name', async () => {
