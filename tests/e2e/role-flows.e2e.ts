@@ -2,6 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Locator, Page } from 'playwright-core';
 import { launchBrowser, screenshot, signIn, type TestBrowser } from './support/browser';
 import { ROLE_FLOWS_FLEET } from './support/demo-fleet';
+import { apiGet, farmId, type Member } from './support/role-flows-api';
 
 // What new users tripped on (issue 10), one role at a time, on the screens they use. The machines
 // written here are this file's own (support/demo-fleet.ts): RF-01 and the tagged-out RF-03 are
@@ -16,24 +17,6 @@ const SAFETY_NOTES =
   'Stop the engine, take the key and wait for the PTO shaft to stop before touching the guard.';
 /** The smallest touch target (WCAG 2.5.5, platform guidelines): 44 CSS px. */
 const TOUCH = 44;
-
-interface Member {
-  role: string;
-  user: { id: string; name: string; email: string };
-}
-
-const apiGet = (page: Page, path: string) =>
-  page.request.get(`/api/v1${path}`).then(async (response) => {
-    expect(response.status(), path).toBe(200);
-    return response.json();
-  });
-
-async function farmId(page: Page): Promise<string> {
-  const me = await apiGet(page, '/me');
-  return me.data.memberships.find(
-    (m: { organization: { name: string } }) => m.organization.name === 'Larkspur Flats Farm',
-  ).organization.id;
-}
 
 const height = async (locator: Locator) => (await locator.boundingBox())!.height;
 
