@@ -28,11 +28,11 @@ interface DueFilterFlags {
  * The horizon's rule, one for the list, its total and every caller: a task past its meter or its
  * date (overdue) is always in, and so is one whose last service is not known (history unknown: it
  * cannot be dated until someone answers, and it may be the most overdue of all); any other task is
- * in when the date it falls due is inside the horizon. No-forecast tasks have no date to fall
- * inside, so they come only when the status filter asks for them by name.
+ * in when the date it falls due is inside the horizon. A task with no forecast yet (too few
+ * readings) cannot be placed inside or outside any horizon, so it is listed last, under its status,
+ * rather than hidden: on a farm that has just brought its fleet in, that is every task.
  */
-const HORIZON_RULE = `(d.status IN ('overdue','history_unknown') OR d.sort_date <= :until
-  OR (:status::text = 'no_forecast' AND d.status = :status::text))`;
+const HORIZON_RULE = `(d.status IN ('overdue','history_unknown','no_forecast') OR d.sort_date <= :until)`;
 
 function dueWhere(filters: DueFilterFlags) {
   const where = ['d.organization_id = :org', "m.status <> 'sold'"];

@@ -79,7 +79,7 @@ describe('due truth — overdue means overdue, in the browser', () => {
     await page.goto(`/o/${org}?horizon=7`);
     await page
       .getByText(
-        'Everything overdue and every task whose last service is not known, then what falls due within the next 7 days',
+        'Everything overdue and every task whose last service is not known, then what falls due within the next 7 days, by date. Tasks without a forecast yet come last.',
       )
       .waitFor();
     await page.getByRole('heading', { name: 'Every task of the fleet by status' }).waitFor();

@@ -204,7 +204,7 @@ describe.skipIf(!canStartProductionServer)(
         `You are invited to ${FARM} on Hourstone`,
       );
       expect(invitation.text).toContain(`Hello ${TECHNICIAN.name},`);
-      expect(invitation.text).toContain(`join ${FARM} on Hourstone as technician.`);
+      expect(invitation.text).toContain(`join ${FARM} on Hourstone with the role of technician.`);
       expect(appLinkIn(invitation, app.baseUrl)).toMatch(/\/invitations\/[\w-]+$/);
     });
 

@@ -113,6 +113,20 @@ describe('due truth', () => {
     expect(names(unknown.body.data)).toEqual(['Unknown oil']);
   });
 
+  it('no forecast — a task on a machine with one reading cannot be dated, so it is listed last in every horizon, not hidden', async () => {
+    const { org, agent, url } = await handWorkedFarm();
+    const fresh = await createMachine(org, { fleetNumber: 'OD-03' });
+    await addReadings(fresh, [{ daysAgo: 0, value: 4210 }]);
+    await createTask(fresh, { name: 'Fresh oil', intervalMeter: 500, lastDoneMeter: 3900 });
+    const week = await agent.get(`${url}?horizon=7`);
+    const rows = week.body.data as Row[];
+    // the hand-worked farm's 7-day list (Late oil overdue, Filter in about 10 days is outside), then it
+    expect(rows.map((r) => [r.taskName, r.due.status])).toEqual([
+      ['Late oil', 'overdue'],
+      ['Fresh oil', 'no_forecast'],
+    ]);
+  });
+
   it('shop week — a task past its meter is under Overdue, never under a day (not "Today")', async () => {
     const { org, agent } = await handWorkedFarm();
     const res = await agent.get(`/api/v1/organizations/${org.id}/shop-week`);

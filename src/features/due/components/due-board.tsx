@@ -152,7 +152,7 @@ export function DueBoard({
 export function dueListScope(status: DueStatus | null, horizon: number): string {
   const within = `within the next ${horizon} days, by date.`;
   if (status === null)
-    return `Everything overdue and every task whose last service is not known, then what falls due ${within}`;
+    return `Everything overdue and every task whose last service is not known, then what falls due ${within} Tasks without a forecast yet come last.`;
   if (status === 'overdue') return 'Every overdue task, by date.';
   if (status === 'history_unknown')
     return 'Tasks whose last service is not known yet: no date until last done is set.';
