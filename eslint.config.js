@@ -8,7 +8,17 @@ import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescrip
 import { featureZones, layerZones, routerModelImports } from './eslint.layers.js';
 
 export default tseslint.config(
-  { ignores: ['dist', 'node_modules', '.data', 'tests/.reports*', '.screenshots', '.stryker-tmp'] },
+  {
+    ignores: [
+      'dist',
+      'dist-test-*',
+      'node_modules',
+      '.data',
+      'tests/.reports*',
+      '.screenshots',
+      '.stryker-tmp',
+    ],
+  },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -17,12 +17,16 @@ import { runTsScript, startApi, startFakeS3, startMailCatcher, tsx } from './lib
 import { addCounts, countVitestReport, exitCodeFor, summaryLine } from './lib/report.mjs';
 
 // HOURSTONE_TEST_SLOT=N (1-9) lets several test runs share one checkout: each slot has its own
-// ports, PostgreSQL cluster, object-store folder and reports. Slot 0 (unset) is what CI runs.
+// ports, PostgreSQL cluster, object-store folder, client build (dist-test-N) and reports. Slot 0
+// (unset) is what CI runs.
 const SLOT = Number(process.env.HOURSTONE_TEST_SLOT ?? 0);
 if (!Number.isInteger(SLOT) || SLOT < 0 || SLOT > 9) {
   throw new Error(`HOURSTONE_TEST_SLOT must be a whole number from 0 to 9 (got ${SLOT})`);
 }
 const slotSuffix = SLOT === 0 ? '' : `-${SLOT}`;
+// A slot builds the client into its own folder, so runs sharing a checkout never serve each
+// other's half-written build.
+const CLIENT_DIST = SLOT === 0 ? 'dist' : `dist-test${slotSuffix}`;
 const TEST_API_PORT = 4311 + SLOT * 10;
 const TEST_SMTP_PORT = 2527 + SLOT * 10;
 const TEST_CATCHER_PORT = 2528 + SLOT * 10;
@@ -44,7 +48,7 @@ const e2eFilters = filters.filter(isE2eFilter);
 const runUnit = filters.length === 0 || unitFilters.length > 0;
 const runE2e = !unitOnly && (filters.length === 0 || e2eFilters.length > 0);
 
-const baseEnv = { ...process.env, NO_COLOR: '1' };
+const baseEnv = { ...process.env, NO_COLOR: '1', CLIENT_DIST };
 delete baseEnv.FORCE_COLOR;
 
 const services = [];
@@ -61,10 +65,11 @@ function section(title) {
   log(`\n=== ${title} ===`);
 }
 
-async function runCheck(script) {
+async function runCheck(script, extraArgs = []) {
   section(`npm run ${script}`);
   const started = Date.now();
-  const code = await runCommand('npm', ['run', script], { env: baseEnv });
+  const args = extraArgs.length ? ['run', script, '--', ...extraArgs] : ['run', script];
+  const code = await runCommand('npm', args, { env: baseEnv });
   const seconds = ((Date.now() - started) / 1000).toFixed(1);
   log(`${script}: ${code === 0 ? 'passed' : `FAILED (exit ${code})`} in ${seconds} s`);
   record(
@@ -177,7 +182,9 @@ function printSummary() {
 async function main() {
   ensureDependencies();
   if (!unitOnly) {
-    for (const script of ['typecheck', 'lint', 'build']) await runCheck(script);
+    await runCheck('typecheck');
+    await runCheck('lint');
+    await runCheck('build', SLOT === 0 ? [] : ['--outDir', CLIENT_DIST, '--emptyOutDir']);
   }
   mkdirSync(REPORTS_DIR, { recursive: true });
   rmSync(UNIT_REPORT, { force: true });

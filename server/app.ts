@@ -102,7 +102,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   app.use('/api/v1', api);
 
   if (options.serveClient ?? env.SERVE_CLIENT === '1') {
-    const dist = path.join(root, 'dist');
+    const dist = path.join(root, env.CLIENT_DIST);
     app.use(express.static(dist, { index: false, maxAge: '1h' }));
     app.get('/{*splat}', (_req, res) => {
       res.sendFile(path.join(dist, 'index.html'));

@@ -27,6 +27,11 @@ const fields = z.object({
   CSP_UPGRADE_INSECURE: z.enum(['true', 'false']).default('false'),
   TRUST_PROXY: z.string().default('loopback'),
   SERVE_CLIENT: z.enum(['0', '1']).default('0'),
+  // the built client, relative to the project (test slots build their own: dist-test-N)
+  CLIENT_DIST: z
+    .string()
+    .regex(/^dist(-test-\d)?$/, { error: 'CLIENT_DIST must be dist or dist-test-<slot>' })
+    .default('dist'),
   // open: anyone may sign up and create a farm or dealer; closed: only invitations and
   // `npm run org:create` bring people in.
   SIGNUP: z.enum(['open', 'closed']).default('open'),

@@ -76,6 +76,8 @@ describe.skipIf(!canStartProductionServer)(
       expect((await api('/dev/mail')).status).toBe(404);
       await page.goto(url('/sign-in'));
       await page.getByRole('heading', { name: 'Sign in' }).waitFor();
+      // the link shows once the page knows sign-up is open (SIGNUP defaults to open)
+      await page.getByRole('link', { name: 'Create an account' }).waitFor();
       expect(await page.getByRole('link', { name: 'Create an account' }).count()).toBe(1);
     });
 
@@ -232,7 +234,7 @@ describe.skipIf(!canStartProductionServer)(
       await cards.waitFor();
       expect(await cards.getByRole('listitem').count()).toBe(1);
       expect(await cards.getByRole('listitem').innerText()).toMatch(
-        /No forecast\s+QB-01 Row-crop tractor\s+Engine oil and filter\s+Due at\s+4,400 h\s+Remaining\s+190 h left/,
+        /No forecast\s+QB-01\s+Row-crop tractor\s+Engine oil and filter\s+Due at\s+4,400 h\s+Remaining\s+190 h left/,
       );
       await shot(page, 'journey-dashboard-phone');
       await page.setViewportSize(DESKTOP);
