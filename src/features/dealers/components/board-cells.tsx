@@ -5,11 +5,14 @@ import { isStaleReading, meterText, readingAgeText } from './dealer-format';
 
 /** The due meter value (as the meter fitted now reads) and the calendar limit, if any. */
 export function DueAt({ row }: { row: BoardRow }) {
-  const meter = row.dueOnMeter ?? row.due.dueMeter;
+  // a due value from before the meter fitted now was fitted is said on the lifetime scale
+  const meter = row.dueOnMeter !== null && row.dueOnMeter >= 0 ? row.dueOnMeter : row.due.dueMeter;
   return (
     <span className="flex flex-col">
       {meter !== null ? (
-        <span className="tabular-nums">{meterText(meter, row.machine.meterUnit)}</span>
+        <span className="whitespace-nowrap tabular-nums">
+          {meterText(meter, row.machine.meterUnit)}
+        </span>
       ) : null}
       {row.due.dueDate ? (
         <span className="text-sm text-field-600">

@@ -100,12 +100,12 @@ function BoardTable({ rows, selected, onToggle, machineHref }: BoardListProps) {
                 <MachineLink row={row} href={machineHref(row)} />
               </td>
               <td className={td}>
-                <div className="flex max-w-sm flex-col gap-1">
+                <div className="flex max-w-xs flex-col gap-1">
                   <span>{row.taskName}</span>
                   <TaskCaution row={row} />
                 </div>
               </td>
-              <td className={`${td} whitespace-nowrap`}>
+              <td className={`${td} min-w-24`}>
                 <DueAt row={row} />
               </td>
               <td className={`${td} min-w-36`}>

@@ -22,10 +22,18 @@ export function DueAtFigure({ row }: { row: DueRow }) {
     <div className="flex flex-col">
       {dueMeter !== null ? (
         <span className={governs === 'meter' ? 'font-bold' : undefined}>
-          {formatMeter(row.dueOnMeter ?? dueMeter, row.machine.meterUnit)}
+          {/* a due value from before the meter fitted now was fitted is said on the lifetime scale */}
+          <span className="whitespace-nowrap">
+            {formatMeter(
+              row.dueOnMeter !== null && row.dueOnMeter >= 0 ? row.dueOnMeter : dueMeter,
+              row.machine.meterUnit,
+            )}
+          </span>
           {row.dueOnMeter !== null && row.dueOnMeter !== dueMeter ? (
             <span className="block text-xs font-normal text-field-600">
-              on the meter fitted now ({formatMeter(dueMeter, row.machine.meterUnit)} lifetime)
+              {row.dueOnMeter >= 0
+                ? `on the meter fitted now (${formatMeter(dueMeter, row.machine.meterUnit)} lifetime)`
+                : 'lifetime (before the meter fitted now)'}
             </span>
           ) : null}
         </span>

@@ -68,7 +68,7 @@ function DueTable({ rows, machineHref }: DueListProps) {
               <td className={td}>
                 <DueTask row={row} />
               </td>
-              <td className={`${td} whitespace-nowrap`}>
+              <td className={`${td} min-w-28`}>
                 <DueAtFigure row={row} />
               </td>
               <td className={`${td} min-w-32`}>
