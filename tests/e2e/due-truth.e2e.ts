@@ -5,17 +5,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { launchBrowser, signIn, type TestBrowser } from './support/browser';
-import { DUE_TRUTH_FLEET } from './support/demo-fleet';
+import { DUE_TRUTH_FLEET, larkspurFarm } from './support/demo-fleet';
 
 const DESKTOP = { width: 1280, height: 800 };
 const DAY = 86_400_000;
-
-async function larkspur(page: Page) {
-  const me = await (await page.request.get('/api/v1/me')).json();
-  return me.data.memberships.find(
-    (m: { organization: { name: string } }) => m.organization.name === 'Larkspur Flats Farm',
-  ).organization.id as string;
-}
 
 describe('due truth — overdue means overdue, in the browser', () => {
   let browser: TestBrowser;
@@ -26,7 +19,7 @@ describe('due truth — overdue means overdue, in the browser', () => {
     browser = await launchBrowser();
     page = await browser.newPage(DESKTOP);
     await signIn(page, 'marta@larkspur.example', 'hourstone-demo');
-    org = await larkspur(page);
+    org = (await larkspurFarm(page)).id;
     const created = await page.request.post(`/api/v1/organizations/${org}/machines`, {
       data: { fleetNumber: DUE_TRUTH_FLEET, name: 'Harl yard tractor', category: 'tractor' },
     });

@@ -8,17 +8,10 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import sharp from 'sharp';
 import { launchBrowser, signIn, type TestBrowser } from './support/browser';
-import { PLANNED_ONCE_FLEET } from './support/demo-fleet';
+import { PLANNED_ONCE_FLEET, larkspurFarm } from './support/demo-fleet';
 
 const DESKTOP = { width: 1280, height: 800 };
 const DAY = 86_400_000;
-
-async function larkspur(page: Page) {
-  const me = await (await page.request.get('/api/v1/me')).json();
-  return me.data.memberships.find(
-    (m: { organization: { name: string } }) => m.organization.name === 'Larkspur Flats Farm',
-  ).organization as { id: string; timeZone: string };
-}
 
 const localToday = (timeZone: string) =>
   new Intl.DateTimeFormat('en-CA', { timeZone }).format(new Date());
@@ -35,7 +28,7 @@ describe('planned once — the same work is not planned twice, in the browser', 
     browser = await launchBrowser();
     page = await browser.newPage(DESKTOP);
     await signIn(page, 'marta@larkspur.example', 'hourstone-demo');
-    const farm = await larkspur(page);
+    const farm = await larkspurFarm(page);
     org = farm.id;
     timeZone = farm.timeZone;
     const api = `/api/v1/organizations/${org}`;

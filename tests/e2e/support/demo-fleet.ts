@@ -1,3 +1,4 @@
+import type { Page } from 'playwright-core';
 // The browser tests share one seeded demo, and vitest orders their files itself (by size and past
 // duration), so a file must pass whichever ran before it. Each file therefore writes only to
 // machines of Larkspur Flats Farm that no other file touches, and takes them from here.
@@ -58,3 +59,11 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   LIBRARY_FLEET,
   ADVISOR_FLEET,
 ]);
+
+/** The signed-in person's Larkspur Flats Farm membership: its organization id and time zone. */
+export async function larkspurFarm(page: Page): Promise<{ id: string; timeZone: string }> {
+  const me = await (await page.request.get('/api/v1/me')).json();
+  return me.data.memberships.find(
+    (m: { organization: { name: string } }) => m.organization.name === 'Larkspur Flats Farm',
+  ).organization;
+}

@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
 import { apiClient, segment } from '../../../lib/api-client';
-import type { Customers } from '../../../../shared/schemas/dealer-responses';
+import type { Customer, Customers } from '../../../../shared/schemas/dealer-responses';
 import { queryKeys } from '../../../lib/query-keys';
 
 export const getCustomers = (orgId: string, signal?: AbortSignal) =>
@@ -15,14 +15,9 @@ export const customersQueryOptions = (orgId: string) =>
 export const useCustomers = (orgId: string) => useQuery(customersQueryOptions(orgId));
 
 /** A linked customer farm as the advisor's pages of its machines need it: access, clock, money. */
-export interface CustomerFarm {
-  id: string;
-  name: string;
-  access: NonNullable<Customers['data'][number]['access']>;
-  timeZone: string;
-  currency: string;
-  units: NonNullable<Customers['data'][number]['farmSettings']>['units'];
-}
+export type CustomerFarm = NonNullable<Customer['customer']> & {
+  access: NonNullable<Customer['access']>;
+} & NonNullable<Customer['farmSettings']>;
 
 /** The active link to this farm among the dealer's customers: null once revoked or never linked. */
 export function useCustomerFarm(dealerId: string, farmId: string, enabled = true) {

@@ -1,6 +1,6 @@
-import type { MachineCategory, MachineStatus } from '../../../../shared/constants';
-import type { DueStatus } from '../../../../shared/domain/types';
-import { MACHINE_SORTS } from '../../../../shared/schemas/machines';
+import { MACHINE_SORTS, type MachineListQuery } from '../../../../shared/schemas/machines';
+import type { Member } from '../../../../shared/schemas/members';
+import type { ListFilters } from '../../../lib/list-filters';
 
 // The JSON of the machine endpoints is typed by the zod schemas the server checks its answers
 // against (shared/schemas): no second description of it here.
@@ -27,19 +27,8 @@ export type {
 export const MACHINE_SORT_FIELDS = MACHINE_SORTS;
 export type MachineSortField = (typeof MACHINE_SORT_FIELDS)[number];
 
-export interface MachineFilters {
-  category?: MachineCategory;
-  status?: MachineStatus;
-  dueStatus?: DueStatus;
-  q?: string;
-  sort: MachineSortField;
-  order: 'asc' | 'desc';
-  page: number;
-  pageSize: number;
-}
+export type MachineFilters = Pick<MachineListQuery, 'category' | 'status' | 'dueStatus' | 'q'> &
+  Pick<ListFilters<MachineListQuery>, 'sort' | 'order' | 'page' | 'pageSize'>;
 
 /** An operator of the farm, for assigning machines (taken from the member list). */
-export interface Operator {
-  userId: string;
-  name: string;
-}
+export type Operator = { userId: Member['user']['id']; name: Member['user']['name'] };

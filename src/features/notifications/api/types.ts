@@ -1,4 +1,5 @@
-import type { NotificationStatusName } from '../../../../shared/schemas/notifications';
+import type { NotificationListQuery } from '../../../../shared/schemas/notifications';
+import type { ListFilters } from '../../../lib/list-filters';
 
 // The notification API's answers are the shared schemas' types (shared/schemas/notifications.ts).
 export type {
@@ -12,7 +13,5 @@ export type {
 } from '../../../../shared/schemas/notifications';
 
 /** The sent-messages list's filters (the page's URL). */
-export interface MessageFilters {
-  status?: NotificationStatusName;
-  page: number;
-}
+export type MessageFilters = Pick<ListFilters<NotificationListQuery>, 'page'> &
+  Partial<Pick<NotificationListQuery, 'status'>>;

@@ -3,12 +3,15 @@ import type { MemberList } from '../../../../shared/schemas/members';
 import { apiClient, segment } from '../../../lib/api-client';
 import { queryKeys } from '../../../lib/query-keys';
 
-export interface FarmContacts {
+type MemberName = MemberList['data'][number]['user']['name'];
+
+/** The farm's people by name, from the member list. */
+export type FarmContacts = {
   /** who assigns machines to operators */
-  managers: string[];
+  managers: MemberName[];
   /** who may clear a tag-out: the farm's technicians and managers */
-  shop: string[];
-}
+  shop: MemberName[];
+};
 
 /** The farm's managers and technicians by name, for "ask …" lines on an operator's screens. */
 export const getFarmContacts = (orgId: string, signal?: AbortSignal) =>
