@@ -18,7 +18,9 @@ const SAFETY_NOTES =
 /** The smallest touch target (WCAG 2.5.5, platform guidelines): 44 CSS px. */
 const TOUCH = 44;
 
-const height = async (locator: Locator) => (await locator.boundingBox())!.height;
+// measured in the page, so a list that re-renders between the wait and the measure is measured
+// again (a bounding box taken outside the page is null for a node just replaced)
+const height = (locator: Locator) => locator.evaluate((el) => el.getBoundingClientRect().height);
 
 describe('role flows — what new users tripped on (browser)', () => {
   let browser: TestBrowser;
@@ -277,9 +279,11 @@ describe('role flows — what new users tripped on (browser)', () => {
     await tableLink.waitFor();
     expect(await height(tableLink)).toBeGreaterThanOrEqual(TOUCH);
     await page.goto(`/o/${orgId}/machines`);
+    // the first fleet-number link on screen (a narrow variant of the list may sit hidden beside it)
     const fleetLink = page
       .getByRole('table')
-      .getByRole('link', { name: /^[A-Z]+-\d+$/ })
+      .locator('a:visible')
+      .filter({ hasText: /^[A-Z]+-\d+$/ })
       .first();
     await fleetLink.waitFor();
     expect(await height(fleetLink)).toBeGreaterThanOrEqual(TOUCH);
