@@ -7,6 +7,7 @@ export const LARKSPUR_MACHINES: DemoMachine[] = [
   {
     organization: 'larkspur',
     fleetNumber: 'T-01',
+    machineClass: 'articulated_tractor',
     name: 'Brindle 4WD tractor',
     category: 'tractor',
     make: 'Brindle',
@@ -24,6 +25,7 @@ export const LARKSPUR_MACHINES: DemoMachine[] = [
   {
     organization: 'larkspur',
     fleetNumber: 'T-02',
+    machineClass: 'row_crop_tractor',
     name: 'Tamsin MFWD row-crop tractor',
     category: 'tractor',
     make: 'Tamsin',
@@ -41,6 +43,7 @@ export const LARKSPUR_MACHINES: DemoMachine[] = [
   {
     organization: 'larkspur',
     fleetNumber: 'T-03',
+    machineClass: 'utility_loader_tractor',
     name: 'Corvid utility tractor with loader',
     category: 'tractor',
     make: 'Corvid',
@@ -59,10 +62,11 @@ export const LARKSPUR_MACHINES: DemoMachine[] = [
   {
     organization: 'larkspur',
     fleetNumber: 'C-01',
+    machineClass: 'combine',
     name: 'Harl combine',
     category: 'combine',
     make: 'Harl',
-    model: 'Axial 8',
+    model: 'Threshwell 8',
     serialNumber: 'HRL-AX8-17-0312',
     year: 2017,
     listPrice: 465000,
@@ -76,6 +80,7 @@ export const LARKSPUR_MACHINES: DemoMachine[] = [
   {
     organization: 'larkspur',
     fleetNumber: 'S-01',
+    machineClass: 'sp_sprayer',
     name: 'Tamsin self-propelled sprayer',
     category: 'sprayer',
     make: 'Tamsin',
@@ -93,6 +98,7 @@ export const LARKSPUR_MACHINES: DemoMachine[] = [
   {
     organization: 'larkspur',
     fleetNumber: 'B-01',
+    machineClass: 'round_baler',
     name: 'Corvid round baler',
     category: 'baler',
     make: 'Corvid',
@@ -111,10 +117,11 @@ export const LARKSPUR_MACHINES: DemoMachine[] = [
   {
     organization: 'larkspur',
     fleetNumber: 'M-01',
-    name: 'Brindle mower-conditioner',
+    machineClass: 'mower_conditioner',
+    name: 'Brindle trailed mower-conditioner',
     category: 'mower',
     make: 'Brindle',
-    model: 'W16 self-propelled',
+    model: 'MC 32 trailed (hour counter)',
     serialNumber: 'BRN-W16-15-0544',
     year: 2015,
     listPrice: 142000,
@@ -128,6 +135,7 @@ export const LARKSPUR_MACHINES: DemoMachine[] = [
   {
     organization: 'larkspur',
     fleetNumber: 'TR-01',
+    machineClass: 'grain_truck',
     name: 'Grain truck',
     category: 'truck',
     make: 'Harl',

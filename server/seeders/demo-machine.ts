@@ -1,5 +1,6 @@
 // The shape of a demo machine, shared by the two farms' fleets and the readings generator.
 import type { MachineCategory, MeterUnit } from '../../shared/constants';
+import type { MachineClass } from '../../shared/domain/service-library';
 import type { SeasonProfile } from './readings-generator';
 
 export interface DemoMachine {
@@ -7,6 +8,8 @@ export interface DemoMachine {
   fleetNumber: string;
   name: string;
   category: MachineCategory;
+  /** the service library's class the machine is set to */
+  machineClass: MachineClass;
   make: string;
   model: string;
   serialNumber: string;

@@ -48,6 +48,7 @@ export async function writeMachines(today: Date, transaction: Transaction) {
         fleetNumber: m.fleetNumber,
         name: m.name,
         category: m.category,
+        machineClass: m.machineClass,
         make: m.make,
         model: m.model,
         serialNumber: m.serialNumber,
