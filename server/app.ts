@@ -2,8 +2,10 @@ import path from 'node:path';
 import { fileURLToPath } from 'node:url';
 import express, { Router } from 'express';
 import helmet from 'helmet';
+import compression from 'compression';
 import cookieParser from 'cookie-parser';
 import { pinoHttp } from 'pino-http';
+import { serveClient } from './client-files';
 import { env } from './env';
 import { logger } from './logger';
 import { buildOpenApiDocument } from './openapi';
@@ -36,7 +38,7 @@ import './models';
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
 
 /** Builds the Express app (no listen): tests import this. */
-export function createApp(options: { serveClient?: boolean } = {}) {
+export function createApp(options: { serveClient?: boolean; clientDist?: string } = {}) {
   const app = express();
   app.set('trust proxy', env.TRUST_PROXY);
   app.disable('x-powered-by');
@@ -64,6 +66,8 @@ export function createApp(options: { serveClient?: boolean } = {}) {
       }),
     );
   }
+  // Text answers (JSON, HTML, scripts, CSV) go out compressed: brotli or gzip as the client asks.
+  app.use(compression());
   app.use(cookieParser());
   // Before any body is read: cross-site writes answer 403, bodies other than JSON 415.
   app.use('/api/v1', refuseCrossSiteWrites(env.APP_URL), jsonBodiesOnly);
@@ -102,11 +106,7 @@ export function createApp(options: { serveClient?: boolean } = {}) {
   app.use('/api/v1', api);
 
   if (options.serveClient ?? env.SERVE_CLIENT === '1') {
-    const dist = path.join(root, env.CLIENT_DIST);
-    app.use(express.static(dist, { index: false, maxAge: '1h' }));
-    app.get('/{*splat}', (_req, res) => {
-      res.sendFile(path.join(dist, 'index.html'));
-    });
+    serveClient(app, options.clientDist ?? path.join(root, env.CLIENT_DIST));
   }
   app.use(notFoundHandler);
   app.use(errorHandler);

@@ -93,10 +93,14 @@ const CLIENT_INPUTS = [
   'package-lock.json',
 ];
 
+/** Written beside a build made here, so a build from before (or one made in development mode) is redone. */
+const BUILD_MARK = path.join(projectRoot, 'dist', '.production-build');
+
 /** Why the client bundle in dist/ must be rebuilt, or undefined when it is current. */
 export function staleClientReason() {
   const builtIndex = path.join(projectRoot, 'dist', 'index.html');
   if (!existsSync(builtIndex)) return 'dist/ has no build yet';
+  if (!existsSync(BUILD_MARK)) return 'dist/ is not a production build';
   const built = statSync(builtIndex).mtimeMs;
   const changed = CLIENT_INPUTS.find((input) => newestMtime(path.join(projectRoot, input)) > built);
   return changed ? `${changed} changed since the last build` : undefined;
@@ -110,8 +114,13 @@ export async function buildClientIfStale(env) {
     return;
   }
   log(`client: building (${reason})`);
-  const code = await runCommand(bin('vite'), ['build'], { env });
+  // A production build whatever the app's NODE_ENV: React's development build is several times
+  // larger and slower, and is for `npm run dev` (served by vite) only.
+  const code = await runCommand(bin('vite'), ['build'], {
+    env: { ...env, NODE_ENV: 'production' },
+  });
   if (code !== 0) throw new Error(`vite build failed (exit ${code})`);
+  writeFileSync(BUILD_MARK, `${new Date().toISOString()}\n`);
 }
 
 /** Starts the API (server/index.ts), adds it to `services` and waits for its health check. */

@@ -58,9 +58,25 @@ export const errorHandler: ErrorRequestHandler = (err, req, res, next) => {
   } else if (err?.type === 'entity.too.large') {
     status = 413;
     body = { code: 'too_large', message: 'The request body is too large' };
+  } else if (isClientHttpError(err)) {
+    // Express's own refusals (a file that is not there, a malformed path): the status they carry.
+    status = err.status;
+    body = {
+      code: status === 404 ? 'not_found' : 'bad_request',
+      message: status === 404 ? 'No such file or route' : 'The request was refused',
+    };
   } else {
     logger.error({ err, url: req.originalUrl }, 'unhandled error');
   }
   if (body.fields === undefined) delete body.fields;
   res.status(status).json({ error: body });
 };
+
+/**
+ * An http-errors style 4xx that Express or its static middleware raised (a missing file comes
+ * wrapped around ENOENT, marked not to expose). Only the status is used, never their message.
+ */
+function isClientHttpError(err: unknown): err is { status: number } {
+  const e = err as { status?: unknown } | null;
+  return typeof e?.status === 'number' && e.status >= 400 && e.status < 500;
+}

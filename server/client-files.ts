@@ -1,0 +1,31 @@
+// Serving the built client: hashed files under /assets never change (a new build gives new
+// names), so browsers may keep them a year without asking; index.html and the other files at the
+// top level (icons, the manifest) are revalidated on every visit so a deploy is picked up at once.
+import path from 'node:path';
+import express, { type Express } from 'express';
+
+/** One year, the longest lifetime caches honour; `immutable` skips revalidation on reload. */
+const HASHED_ASSET_CACHE = 'public, max-age=31536000, immutable';
+const REVALIDATE = 'no-cache';
+
+export function serveClient(app: Express, dist: string) {
+  app.use(
+    '/assets',
+    express.static(path.join(dist, 'assets'), {
+      index: false,
+      fallthrough: false,
+      setHeaders: (res) => res.setHeader('Cache-Control', HASHED_ASSET_CACHE),
+    }),
+  );
+  app.use(
+    express.static(dist, {
+      index: false,
+      setHeaders: (res) => res.setHeader('Cache-Control', REVALIDATE),
+    }),
+  );
+  // Any other path is a route of the single-page app.
+  app.get('/{*splat}', (_req, res) => {
+    res.setHeader('Cache-Control', REVALIDATE);
+    res.sendFile(path.join(dist, 'index.html'));
+  });
+}
