@@ -1,13 +1,18 @@
 // Due point of one service task: the meter value and calendar date it falls due, the date the
 // meter is projected to reach its due value, and the status that follows. The task is due at
 // whichever comes first. Dates are local ISO dates (yyyy-mm-dd); meter values are lifetime values.
+// A season service takes its date from the machine's season months (season-dates.ts) in place of
+// a day interval, and may keep a meter interval: whichever comes first.
 import { addDaysIso, dayNumberFromIso, daysBetweenIso, isoFromDayNumber } from './calendar';
-import type { DuePoint, DueStatus, TaskSchedule, UsageEstimate } from './types';
+import { seasonServiceDue } from './season-dates';
+import type { DuePoint, DueSeason, DueStatus, TaskSchedule, UsageEstimate } from './types';
 
 /** Furthest a projection reaches, days after asOf (three years); later means "not in sight". */
 export const MAX_PROJECTION_DAYS = 3 * 365 + 1;
 /** Default warning window as a fraction of the interval (dimensionless), rounded to whole units. */
 export const DEFAULT_WARN_FRACTION = 0.1;
+/** Default warning window of a season service, days: two weeks to book the work (common practice). */
+export const DEFAULT_SEASON_WARN_DAYS = 14;
 
 /** Which projection: the point estimate, the earliest date (high rate) or the latest (low rate). */
 export type ProjectionVariant = 'point' | 'low' | 'high';
@@ -104,6 +109,31 @@ function calendarDue(task: TaskSchedule, machineStartIso: string | null): string
   return null;
 }
 
+/**
+ * The season date of a season service. Never done, it counts from the start set in place of an
+ * unknown history, else the machine's first reading, else today: the first season that starts
+ * (pre-season) or ends (storage) on or after that date is due, as calendarDue counts a day
+ * interval from the same start.
+ */
+function seasonDue(
+  task: TaskSchedule,
+  seasonMonths: readonly number[],
+  machineStartIso: string | null,
+  asOfIso: string,
+): { dueDate: string | null; season: DueSeason } | null {
+  const anchor = task.seasonAnchor ?? null;
+  const offsetDays = task.seasonOffsetDays ?? null;
+  if (anchor === null || offsetDays === null) return null;
+  const countFrom =
+    (task.lastDoneMeter === null ? task.countFromOn : null) ?? machineStartIso ?? asOfIso;
+  const due = seasonServiceDue(seasonMonths, anchor, offsetDays, {
+    lastDoneOn: task.lastDoneOn,
+    countFrom,
+  });
+  const seasonDate = due ? (anchor === 'before_start' ? due.season.start : due.season.end) : null;
+  return { dueDate: due?.dueDate ?? null, season: { anchor, offsetDays, seasonDate } };
+}
+
 function defaultWarn(explicit: number | null, interval: number | null): number | null {
   if (explicit !== null) return explicit;
   return interval !== null && interval > 0 ? Math.round(interval * DEFAULT_WARN_FRACTION) : null;
@@ -119,7 +149,8 @@ function basisOf(task: TaskSchedule, meter: MeterDue | null): DuePoint['basis'] 
   if (meter?.basis === 'first_service') return 'first_service';
   if (counted(task)) return 'counted';
   const meterRecorded = task.intervalMeter === null || task.lastDoneMeter !== null;
-  const calendarRecorded = task.intervalDays === null || task.lastDoneOn !== null;
+  const calendarRecorded =
+    (task.intervalDays === null && !task.seasonAnchor) || task.lastDoneOn !== null;
   const anyRecord = task.lastDoneMeter !== null || task.lastDoneOn !== null;
   return meterRecorded && calendarRecorded && anyRecord ? 'recorded' : 'assumed';
 }
@@ -152,13 +183,16 @@ export function computeDuePoint(
   asOfIso: string,
   currentValue: number | null,
   machineStartIso: string | null = null,
+  seasonMonths: readonly number[] = [],
 ): DuePoint {
   if (task.historyUnknown && neverRecorded(task) && !counted(task)) return HISTORY_UNKNOWN;
   const asOfDay = dayNumberFromIso(asOfIso);
   const current = currentValue ?? usage.lastValue;
   const meter = meterDue(task, current);
   const dueMeter = meter?.value ?? null;
-  const dueDate = calendarDue(task, machineStartIso);
+  const season = seasonDue(task, seasonMonths, machineStartIso, asOfIso);
+  // a season service's date comes from its season alone (the schema keeps a day interval off it)
+  const dueDate = season ? season.dueDate : calendarDue(task, machineStartIso);
   const remainingMeter = dueMeter !== null && current !== null ? dueMeter - current : null;
   const remainingDays = dueDate !== null ? daysBetweenIso(asOfIso, dueDate) : null;
   const meterReached = remainingMeter !== null && remainingMeter <= 0;
@@ -186,7 +220,9 @@ export function computeDuePoint(
   }
 
   const warnMeter = defaultWarn(task.warnMeter, task.intervalMeter);
-  const warnDays = defaultWarn(task.warnDays, task.intervalDays);
+  const warnDays = season
+    ? (task.warnDays ?? DEFAULT_SEASON_WARN_DAYS)
+    : defaultWarn(task.warnDays, task.intervalDays);
   const projectedInDays = projectedDate !== null ? daysBetweenIso(asOfIso, projectedDate) : null;
   let status: DueStatus;
   if (
@@ -222,5 +258,6 @@ export function computeDuePoint(
     remainingMeter,
     remainingDays,
     basis: basisOf(task, meter),
+    ...(season && { season: season.season }),
   };
 }

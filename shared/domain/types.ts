@@ -1,6 +1,7 @@
 // Types of the forecasting and due-point math. Day numbers are *local* calendar days of the
 // organization's time zone counted from 1970-01-01 (fractional part = local time of day / 24 h),
 // so that daylight-saving changes never move a date. Meter values are lifetime values.
+import type { SeasonAnchor } from './season-dates';
 
 /** One reading as the forecast sees it: local day number (fractional) and lifetime meter value. */
 export interface ReadingPoint {
@@ -58,6 +59,21 @@ export interface TaskSchedule {
    * last done: the due point is then not guessed (status 'history_unknown').
    */
   historyUnknown?: boolean;
+  /**
+   * A season service falls due seasonOffsetDays calendar days before the machine's season starts
+   * ('before_start') or after it ends ('after_end'), in place of a day interval; null otherwise.
+   */
+  seasonAnchor?: SeasonAnchor | null;
+  seasonOffsetDays?: number | null;
+}
+
+/** The season a season service's due date hangs on. */
+export interface DueSeason {
+  anchor: SeasonAnchor;
+  /** calendar days before the start or after the end */
+  offsetDays: number;
+  /** ISO date the season starts or ends; null when the machine has no season months (all year) */
+  seasonDate: string | null;
 }
 
 export type DueStatus = 'overdue' | 'due_soon' | 'ok' | 'no_forecast' | 'history_unknown';
@@ -83,4 +99,6 @@ export interface DuePoint {
    * 'assumed' otherwise
    */
   basis: 'recorded' | 'first_service' | 'assumed' | 'counted' | 'unknown';
+  /** season services only: the season start or end their date follows (dueDate is its date) */
+  season?: DueSeason;
 }

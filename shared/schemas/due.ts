@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { DUE_STATUSES } from '../constants';
+import { SEASON_ANCHORS } from '../domain/season-dates';
 import { lastReadingSchema, usageSchema } from './machines';
 import { machineRefSchema } from './refs';
 
@@ -28,6 +29,17 @@ export const duePointSchema = z
      * unanswered, 'assumed' otherwise
      */
     basis: z.enum(['recorded', 'first_service', 'assumed', 'counted', 'unknown']),
+    /**
+     * season services only: the season start ('before_start') or end ('after_end') the due date
+     * follows, offsetDays before or after it; seasonDate null when the machine has no season months
+     */
+    season: z
+      .object({
+        anchor: z.enum(SEASON_ANCHORS),
+        offsetDays: z.number(),
+        seasonDate: z.string().nullable(),
+      })
+      .optional(),
   })
   .meta({ id: 'DuePoint' });
 
