@@ -67,13 +67,41 @@ export function useSignOut() {
 // --- Which organization to open -------------------------------------------------------------
 
 const LAST_ORGANIZATION_KEY = 'hourstone.lastOrganizationId';
+/** id → 'farm' | 'dealer' of the organizations opened here (no names, no data: ids and kinds). */
+const ORGANIZATION_KINDS_KEY = 'hourstone.organizationKinds';
+const KINDS_KEPT = 20;
 
-export function rememberOrganization(orgId: string): void {
+type OrganizationKind = Organization['kind'];
+
+function readKinds(): Record<string, OrganizationKind> {
+  try {
+    const parsed: unknown = JSON.parse(localStorage.getItem(ORGANIZATION_KINDS_KEY) ?? '{}');
+    return parsed && typeof parsed === 'object' ? (parsed as Record<string, OrganizationKind>) : {};
+  } catch {
+    return {};
+  }
+}
+
+export function rememberOrganization(orgId: string, kind?: OrganizationKind): void {
   try {
     localStorage.setItem(LAST_ORGANIZATION_KEY, orgId);
+    if (kind) {
+      const kinds = Object.entries(readKinds()).filter(([id]) => id !== orgId);
+      const kept = [...kinds.slice(-(KINDS_KEPT - 1)), [orgId, kind]];
+      localStorage.setItem(ORGANIZATION_KINDS_KEY, JSON.stringify(Object.fromEntries(kept)));
+    }
   } catch {
     // private mode or storage full: we simply open the first organization next time
   }
+}
+
+/**
+ * The kind this organization had when it was last opened here: lets a page start its own
+ * request at once, beside the session's, instead of after it. Only a guess; the session decides.
+ */
+export function rememberedOrganizationKind(orgId: string): OrganizationKind | undefined {
+  const kind = readKinds()[orgId];
+  return kind === 'farm' || kind === 'dealer' ? kind : undefined;
 }
 
 function lastOrganizationId(): string | null {

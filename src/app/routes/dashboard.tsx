@@ -8,7 +8,12 @@ import { DueBoard } from '../../features/due/components/due-board';
 import { WaitingProposals } from '../../features/dealers/components/waiting-proposals';
 import { FirstRunChecklistPanel } from '../../features/onboarding/components/first-run-checklist';
 import { readDueFilters, writeDueFilters } from '../../features/due/filters';
-import { findMembership, meQueryOptions, useCurrentMembership } from '../../lib/auth';
+import {
+  findMembership,
+  rememberedOrganizationKind,
+  meQueryOptions,
+  useCurrentMembership,
+} from '../../lib/auth';
 import { paths } from '../paths';
 import { DealerBoardSection, dealerBoardLoader } from './dealer-board';
 
@@ -17,12 +22,18 @@ export const dashboardLoader =
   (queryClient: QueryClient) =>
   async ({ request, params }: LoaderFunctionArgs) => {
     const orgId = params.orgId ?? '';
+    const prefetchDue = () =>
+      void queryClient.prefetchQuery(
+        dueQueryOptions(orgId, readDueFilters(new URL(request.url).searchParams)),
+      );
+    // On a cold start the session is not known yet: a farm opened here before gets its due list
+    // asked for beside the session, not one round trip after it, and only once.
+    const sessionKnown = queryClient.getQueryData(meQueryOptions().queryKey) !== undefined;
+    const early = !sessionKnown && rememberedOrganizationKind(orgId) === 'farm';
+    if (early) prefetchDue();
     const me = await queryClient.ensureQueryData(meQueryOptions()).catch(() => null);
     const membership = me ? findMembership(me, orgId) : undefined;
-    if (membership?.organization.kind === 'farm') {
-      const filters = readDueFilters(new URL(request.url).searchParams);
-      void queryClient.prefetchQuery(dueQueryOptions(orgId, filters));
-    }
+    if (membership?.organization.kind === 'farm' && !early) prefetchDue();
     // a dealer's dashboard is its board across customers
     if (membership?.organization.kind === 'dealer')
       return dealerBoardLoader(queryClient)({ request, params } as LoaderFunctionArgs);

@@ -30,8 +30,9 @@ export const organizationLoader =
   async ({ request, params }: LoaderFunctionArgs) => {
     const me = await requireMe(queryClient, request);
     const orgId = params.orgId ?? '';
-    if (!findMembership(me, orgId)) throw data(null, { status: 404 });
-    rememberOrganization(orgId);
+    const membership = findMembership(me, orgId);
+    if (!membership) throw data(null, { status: 404 });
+    rememberOrganization(orgId, membership.organization.kind);
     return null;
   };
 
