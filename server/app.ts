@@ -21,6 +21,7 @@ import { machinePhotoRouter } from './routes/machines/photo.router';
 import { fleetImportRouter } from './routes/machines/fleet-import.router';
 import { machineStatusRouter } from './routes/machines/status.router';
 import { machineClassRouter } from './routes/machines/machine-class.router';
+import { specSheetRouter } from './routes/machines/spec-sheet.router';
 import { tasksRouter } from './routes/tasks/tasks.router';
 import { taskHistoryRouter } from './routes/tasks/history.router';
 import { firstRunRouter } from './routes/onboarding/first-run.router';
@@ -89,6 +90,7 @@ export function createApp(options: { serveClient?: boolean; clientDist?: string 
   api.use(fleetImportRouter());
   api.use(machineStatusRouter());
   api.use(machineClassRouter());
+  api.use(specSheetRouter());
   api.use(tasksRouter());
   api.use(taskHistoryRouter());
   api.use(firstRunRouter());

@@ -11,6 +11,7 @@ import { NotificationPreference } from './notification-preference';
 import { CalendarFeed } from './calendar-feed';
 import { AuditEvent } from './audit-event';
 import { Machine, MachineOperator } from './machine';
+import { MachineSpecSheet } from './machine-spec-sheet';
 import { MeterReading, MeterReplacement } from './meter-reading';
 import { ServiceTask } from './service-task';
 import { ScheduleTemplate } from './schedule-template';
@@ -48,6 +49,7 @@ export {
   AuditEvent,
   Machine,
   MachineOperator,
+  MachineSpecSheet,
   MeterReading,
   MeterReplacement,
   ServiceTask,

@@ -7,9 +7,9 @@ import { hasRole, type OrgAccess } from './access';
  * closed to dealers until it is listed here. The route's own policy still decides after this
  * (a listed write refused by role answers 403).
  *
- * - view: machines, readings, due points and the schedule's tasks, read only.
+ * - view: machines, readings, due points, the schedule's tasks and the spec sheet, read only.
  * - service: also the service history (records, attachments, measurements) and recording,
- *   planning, completing and cancelling services. Schedule edits, readings entry and import,
+ *   planning, completing and cancelling services. Schedule and spec sheet edits, readings entry and import,
  *   defects, walkarounds, the team, messages and settings stay the farm's own.
  */
 const DEALER_ROUTES: readonly { method: string; path: string; access: DealerAccess }[] = [
@@ -21,6 +21,7 @@ const DEALER_ROUTES: readonly { method: string; path: string; access: DealerAcce
   { method: 'GET', path: '/organizations/:orgId/due', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/machines/:machineId/due', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/machines/:machineId/tasks', access: 'view' },
+  { method: 'GET', path: '/organizations/:orgId/machines/:machineId/spec-sheet', access: 'view' },
   {
     method: 'GET',
     path: '/organizations/:orgId/machines/:machineId/service-records',
@@ -67,6 +68,14 @@ const DEALER_ROUTES: readonly { method: string; path: string; access: DealerAcce
     method: 'GET',
     path: '/organizations/:orgId/machines/:machineId/measurements/series',
     access: 'service',
+  },
+  // Reached only to be refused (403, canRestrict): a dealer who tries is told plainly that the
+  // farm's people set and lift a restriction, rather than that the machine is not there.
+  { method: 'POST', path: '/organizations/:orgId/machines/:machineId/restriction', access: 'view' },
+  {
+    method: 'POST',
+    path: '/organizations/:orgId/machines/:machineId/restriction/lift',
+    access: 'view',
   },
 ];
 

@@ -13,22 +13,14 @@ import {
   type ServiceRecord as PresentedRecord,
 } from '../../shared/schemas/service-record-responses';
 import { recordCosts } from '../../shared/domain/record-costs';
+import { specStatus } from '../../shared/domain/measurement-spec';
 import { presentMachineRef } from './defect';
 import { peopleById } from './people';
 
 export { SPEC_STATUSES };
 
-/** In or out of spec: below the minimum is low, above the maximum high; no spec given, null. */
-export function specStatus(
-  value: number,
-  specMin: number | null,
-  specMax: number | null,
-): (typeof SPEC_STATUSES)[number] | null {
-  if (specMin === null && specMax === null) return null;
-  if (specMin !== null && value < specMin) return 'low';
-  if (specMax !== null && value > specMax) return 'high';
-  return 'in';
-}
+// in or out of spec, the limits themselves in: one rule with the client's one-tap defect
+export { specStatus };
 
 export const presentMeasurement = (m: ServiceMeasurement): Measurement => {
   const status = specStatus(m.value, m.specMin, m.specMax);

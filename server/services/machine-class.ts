@@ -16,6 +16,7 @@ import {
 import type { OrgAccess } from '../policies/access';
 import { recordAudit } from '../infra/audit';
 import { addTasks } from './schedules';
+import { applySheetToTasks } from './spec-sheets';
 
 /** Why a class cannot go on a machine whose meter counts in `own` (another unit), or null. */
 export function machineClassProblem(own: MeterUnit, machineClass: MachineClass): string | null {
@@ -51,6 +52,11 @@ export async function applyMachineClassIn(
   const added = missing.length
     ? await addTasks(access, machine, missing, 'task.create_from_library', transaction)
     : [];
+  // the added tasks take their volumes and filter numbers from the machine's spec sheet
+  if (added.length) {
+    await applySheetToTasks(access.organization.id, machine.id, transaction);
+    await Promise.all(added.map((t) => t.reload({ transaction })));
+  }
   if (before !== machineClass || added.length)
     await recordAudit(
       {

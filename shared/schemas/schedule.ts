@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { MACHINE_CATEGORIES } from '../constants';
 import { boundedNumber, isoDate, PAST_DATES, plainText } from './common';
 import { duePointSchema } from './due';
+import { CAPACITY_KEYS, FILTER_ROLES } from './spec-keys';
 
 /**
  * Ranges of a task's numbers (meter units, days, hours). They fit the columns (intervals and
@@ -20,6 +21,14 @@ export const TASK_BOUNDS = {
   meter: { min: 0, max: 10_000_000 },
 } as const;
 
+/** A line the machine's spec sheet fills: a filter role (part number) or a capacity (volume). */
+const filterRole = z.enum(FILTER_ROLES, {
+  error: `Filter role must be one of: ${FILTER_ROLES.join(', ')}`,
+});
+const capacity = z.enum(CAPACITY_KEYS, {
+  error: `Capacity must be one of: ${CAPACITY_KEYS.join(', ')}`,
+});
+
 /**
  * A part a task calls for. A wear part (belt, tine, knife) is inspected at each service and
  * replaced only when worn, so the parts forecast and a record's prefilled lines never count it as
@@ -31,6 +40,8 @@ export const taskPartSchema = z
     description: plainText(200).default(''),
     quantity: boundedNumber('Quantity', TASK_BOUNDS.quantity),
     wearPart: z.boolean({ error: 'Wear part must be true or false' }).default(false),
+    /** the machine's spec sheet gives this line's part number (spec-sheet-lines.ts) */
+    filterRole: filterRole.optional(),
   })
   .refine((p) => p.wearPart || p.partNumber !== '', {
     error: 'Enter the part number',
@@ -45,6 +56,8 @@ export const taskFluidSchema = z.object({
   kind: plainText(80, { required: 'Enter the fluid kind' }),
   volume: boundedNumber('Volume', TASK_BOUNDS.quantity),
   unit: z.enum(FLUID_UNITS, { error: `Unit must be one of: ${FLUID_UNITS.join(', ')}` }),
+  /** the machine's spec sheet gives this line's volume, unit and fluid (spec-sheet-lines.ts) */
+  capacity: capacity.optional(),
 });
 export type TaskFluid = z.infer<typeof taskFluidSchema>;
 
@@ -152,9 +165,17 @@ const storedTaskFields = {
       quantity: z.number(),
       /** inspected, replaced when worn: never counted as used at each service */
       wearPart: z.boolean(),
+      filterRole: z.enum(FILTER_ROLES).optional(),
     }),
   ),
-  fluids: z.array(z.object({ kind: z.string(), volume: z.number(), unit: z.enum(FLUID_UNITS) })),
+  fluids: z.array(
+    z.object({
+      kind: z.string(),
+      volume: z.number(),
+      unit: z.enum(FLUID_UNITS),
+      capacity: z.enum(CAPACITY_KEYS).optional(),
+    }),
+  ),
   labourHours: z.number().nullable(),
   instructions: z.string(),
   safetyNotes: z.string(),
