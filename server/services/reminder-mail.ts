@@ -69,16 +69,19 @@ ${body}
 </div></body></html>`;
 }
 
+// Built once: a formatter costs far more to make than to use, and a digest run formats
+// hundreds of thousands of figures and dates.
+const numberFormat = new Intl.NumberFormat('en', { maximumFractionDigits: 1 });
+const isoDateFormat = new Intl.DateTimeFormat('en', {
+  weekday: 'short',
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  timeZone: 'UTC',
+});
+
 /** 1,250 — numbers in e-mails, at most one decimal. */
-export const formatNumber = (n: number) =>
-  new Intl.NumberFormat('en', { maximumFractionDigits: 1 }).format(n);
+export const formatNumber = (n: number) => numberFormat.format(n);
 
 /** "Mon, Apr 20, 2026" for a local ISO date (the date as written, whatever the server's zone). */
-export const formatIsoDate = (iso: string) =>
-  new Intl.DateTimeFormat('en', {
-    weekday: 'short',
-    day: 'numeric',
-    month: 'short',
-    year: 'numeric',
-    timeZone: 'UTC',
-  }).format(new Date(`${iso}T00:00:00Z`));
+export const formatIsoDate = (iso: string) => isoDateFormat.format(new Date(`${iso}T00:00:00Z`));

@@ -18,12 +18,20 @@ export interface TagOutEvent {
   actorUserId: string | null;
 }
 
-const localTime = (at: Date, timeZone: string) =>
-  new Intl.DateTimeFormat('en-GB', {
-    dateStyle: 'medium',
-    timeStyle: 'short',
-    timeZone,
-  }).format(at);
+/** One formatter per time zone, kept: building one costs more than the mail it formats. */
+const timeFormats = new Map<string, Intl.DateTimeFormat>();
+function localTime(at: Date, timeZone: string) {
+  let format = timeFormats.get(timeZone);
+  if (!format) {
+    format = new Intl.DateTimeFormat('en-GB', {
+      dateStyle: 'medium',
+      timeStyle: 'short',
+      timeZone,
+    });
+    timeFormats.set(timeZone, format);
+  }
+  return format.format(at);
+}
 
 /** The farm's managers and technicians (e-mail, name), never operators or dealers. */
 async function shopPeople(organizationId: string, transaction: Transaction) {
