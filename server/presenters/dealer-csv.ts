@@ -1,5 +1,6 @@
 import { stringify } from 'csv-stringify/sync';
 import { DUE_STATUS_LABELS } from '../../shared/constants';
+import { stockUnitLabel } from '../../shared/domain/stock-units';
 import type { BoardRow } from '../services/dealer-board';
 import type { partsForecast } from '../services/parts-forecast';
 
@@ -68,7 +69,7 @@ type Forecast = Awaited<ReturnType<typeof partsForecast>>;
 
 /** One line per customer and part or fluid, then the totals (customer "All customers"). */
 export function partsCsv(forecast: Forecast): string {
-  const lines = (customer: string, s: Pick<Forecast, 'parts' | 'fluids'>) => [
+  const lines = (customer: string, s: Pick<Forecast, 'parts' | 'fluids' | 'wearParts'>) => [
     ...s.parts.map((p) => [
       customer,
       'part',
@@ -79,17 +80,32 @@ export function partsCsv(forecast: Forecast): string {
       p.machines,
       p.services,
       p.firstNeededOn,
+      '',
     ]),
     ...s.fluids.map((f) => [
       customer,
-      'fluid',
+      f.converted ? 'fluid' : 'fluid (unit not converted)',
       '',
       f.kind,
       f.volume,
-      f.unit,
+      stockUnitLabel(f.unit),
       f.machines,
       f.services,
       f.firstNeededOn,
+      '',
+    ]),
+    // a wear part has no quantity: it is inspected on these machines and replaced when worn
+    ...s.wearParts.map((w) => [
+      customer,
+      'wear part (inspect, replace when worn)',
+      w.partNumber,
+      w.description,
+      '',
+      '',
+      w.machines.length,
+      w.services,
+      w.firstNeededOn,
+      w.machines.map((m) => m.fleetNumber).join('; '),
     ]),
   ];
   return stringify(
@@ -109,6 +125,7 @@ export function partsCsv(forecast: Forecast): string {
         'Machines',
         'Services',
         'First needed',
+        'Inspect on',
       ],
     },
   );

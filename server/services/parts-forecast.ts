@@ -21,8 +21,9 @@ function neededOn(row: BoardRow, horizon: number, now: Date): string | null {
 
 /**
  * The parts and fluids the dealer's customers' due services call for inside the horizon, summed
- * by part number per customer and in total. The services come from the board (the farms' own
- * due lists); the lists from each task's schedule line.
+ * by part number (fluids by kind, in the dealer's stock units) per customer and in total, and the
+ * wear parts those services inspect. The services come from the board (the farms' own due
+ * lists); the lists from each task's schedule line.
  */
 export async function partsForecast(
   access: OrgAccess,
@@ -53,15 +54,18 @@ export async function partsForecast(
   }
   const services: ForecastService[] = dated.map(({ row, on }) => ({
     customer: { id: row.customer.id, name: row.customer.name },
-    machineId: row.machine.id,
+    machine: { id: row.machine.id, fleetNumber: row.machine.fleetNumber, name: row.machine.name },
     neededOn: on,
     parts: tasks.get(row.taskId)?.parts ?? [],
     fluids: tasks.get(row.taskId)?.fluids ?? [],
   }));
-  const summary = sumPartsForecast(services);
+  // the dealer's own units decide the stock units: one counter, one way of counting
+  const units = access.organization.units;
+  const summary = sumPartsForecast(services, units);
   return {
     asOf: board.asOf,
     horizon: query.horizon,
+    units,
     services: services.length,
     /** due rows left out because they cannot be dated (no forecast) */
     undated: board.rows.filter(
@@ -70,6 +74,7 @@ export async function partsForecast(
     customers: board.customers,
     parts: summary.parts,
     fluids: summary.fluids,
+    wearParts: summary.wearParts,
     byCustomer: summary.customers,
   };
 }

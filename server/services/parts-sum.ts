@@ -1,22 +1,35 @@
-// The parts forecast's arithmetic, kept pure (no database) so it is tested against a hand-worked
-// example: parts summed by part number and fluids by kind and unit, per customer and in total.
-// Wear parts are left out: a service inspects them and replaces one only when it is worn.
+// The parts forecast's arithmetic, kept pure (no database) so it is tested against hand-worked
+// examples: consumable parts summed by part number, fluids by kind in one stock unit each
+// (fluid-sum.ts), per customer and in total. Wear parts (belts, tines, knives) are listed apart,
+// as parts to inspect on named machines: a service replaces one only when it is worn, so no
+// quantity of them is ever summed as needed.
+import type { UnitSystem } from '../../shared/constants';
+import { sumFluids, type FluidLine, type ForecastFluid } from './fluid-sum';
+
+export type { FluidLine } from './fluid-sum';
+
+/** A machine as the forecast names it. */
+export interface ForecastMachine {
+  id: string;
+  fleetNumber: string;
+  name: string;
+}
 
 /** One due service as the forecast needs it: who, which machine, when, and its lists. */
 export interface ForecastService {
   customer: { id: string; name: string };
-  machineId: string;
+  machine: ForecastMachine;
   /** ISO local date the parts are first needed (today for an overdue service) */
   neededOn: string;
   /** a wear part (belt, tine, knife) is replaced only when worn: never summed as needed */
   parts: { partNumber: string; description: string; quantity: number; wearPart?: boolean }[];
-  fluids: { kind: string; volume: number; unit: string }[];
+  fluids: ForecastFluid[];
 }
 
 export interface PartLine {
   partNumber: string;
   description: string;
-  /** summed over the services */
+  /** summed over the services (a count: parts carry no unit) */
   quantity: number;
   /** distinct machines that need it */
   machines: number;
@@ -25,38 +38,37 @@ export interface PartLine {
   firstNeededOn: string;
 }
 
-export interface FluidLine {
-  kind: string;
-  unit: string;
-  /** summed volume, in `unit` (units are never converted: L and gal stay two lines) */
-  volume: number;
-  machines: number;
+/** A wear part to inspect — replaced when worn — with the machines it sits on; no quantity. */
+export interface WearLine {
+  partNumber: string;
+  description: string;
+  machines: ForecastMachine[];
   services: number;
+  /** ISO local date of the first service that inspects it */
   firstNeededOn: string;
 }
 
 export interface PartsSummary {
   parts: PartLine[];
   fluids: FluidLine[];
+  wearParts: WearLine[];
 }
 
-const round = (n: number, places: number) => Math.round(n * 10 ** places) / 10 ** places;
+const round3 = (n: number) => Math.round(n * 1000) / 1000;
 const partKey = (partNumber: string) => partNumber.trim().toUpperCase();
-const fluidKey = (kind: string, unit: string) => `${kind.trim().toLowerCase()}|${unit}`;
+// a wear part may have no number yet (the library's have none): then its description names it
+const wearKey = (p: { partNumber: string; description: string }) =>
+  p.partNumber.trim()
+    ? `#${partKey(p.partNumber)}`
+    : `~${p.description.trim().toLowerCase().replace(/\s+/g, ' ')}`;
 
-interface Acc<T> {
-  line: T;
-  machines: Set<string>;
-}
-
-function summarise(services: ForecastService[]): PartsSummary {
-  const parts = new Map<string, Acc<PartLine>>();
-  const fluids = new Map<string, Acc<FluidLine>>();
-  for (const s of services) {
+function sumConsumables(services: ForecastService[]): PartLine[] {
+  const lines = new Map<string, { line: PartLine; machines: Set<string> }>();
+  for (const s of services)
     for (const p of s.parts) {
       if (p.wearPart) continue;
       const key = partKey(p.partNumber);
-      const acc = parts.get(key) ?? {
+      const acc = lines.get(key) ?? {
         line: {
           partNumber: p.partNumber.trim(),
           description: p.description,
@@ -67,59 +79,81 @@ function summarise(services: ForecastService[]): PartsSummary {
         },
         machines: new Set<string>(),
       };
-      acc.line.quantity = round(acc.line.quantity + p.quantity, 3);
+      acc.line.quantity = round3(acc.line.quantity + p.quantity);
       acc.line.services += 1;
       if (s.neededOn < acc.line.firstNeededOn) acc.line.firstNeededOn = s.neededOn;
       if (!acc.line.description && p.description) acc.line.description = p.description;
-      acc.machines.add(s.machineId);
-      parts.set(key, acc);
+      acc.machines.add(s.machine.id);
+      lines.set(key, acc);
     }
-    for (const f of s.fluids) {
-      const key = fluidKey(f.kind, f.unit);
-      const acc = fluids.get(key) ?? {
-        line: {
-          kind: f.kind.trim(),
-          unit: f.unit,
-          volume: 0,
-          machines: 0,
-          services: 0,
-          firstNeededOn: s.neededOn,
-        },
-        machines: new Set<string>(),
-      };
-      acc.line.volume = round(acc.line.volume + f.volume, 2);
-      acc.line.services += 1;
-      if (s.neededOn < acc.line.firstNeededOn) acc.line.firstNeededOn = s.neededOn;
-      acc.machines.add(s.machineId);
-      fluids.set(key, acc);
-    }
-  }
-  const done = <T extends { machines: number }>(m: Map<string, Acc<T>>) =>
-    [...m.values()].map((a) => ({ ...a.line, machines: a.machines.size }));
-  return {
-    parts: done(parts).sort(
+  return [...lines.values()]
+    .map((a) => ({ ...a.line, machines: a.machines.size }))
+    .sort(
       (a, b) =>
         a.firstNeededOn.localeCompare(b.firstNeededOn) ||
         partKey(a.partNumber).localeCompare(partKey(b.partNumber)),
-    ),
-    fluids: done(fluids).sort(
-      (a, b) => a.firstNeededOn.localeCompare(b.firstNeededOn) || a.kind.localeCompare(b.kind),
-    ),
+    );
+}
+
+function listWearParts(services: ForecastService[]): WearLine[] {
+  const lines = new Map<string, { line: WearLine; machines: Map<string, ForecastMachine> }>();
+  for (const s of services)
+    for (const p of s.parts) {
+      if (!p.wearPart) continue;
+      const key = wearKey(p);
+      const acc = lines.get(key) ?? {
+        line: {
+          partNumber: p.partNumber.trim(),
+          description: p.description.trim(),
+          machines: [],
+          services: 0,
+          firstNeededOn: s.neededOn,
+        },
+        machines: new Map<string, ForecastMachine>(),
+      };
+      acc.line.services += 1;
+      if (s.neededOn < acc.line.firstNeededOn) acc.line.firstNeededOn = s.neededOn;
+      if (!acc.line.description && p.description) acc.line.description = p.description.trim();
+      acc.machines.set(s.machine.id, s.machine);
+      lines.set(key, acc);
+    }
+  return [...lines.values()]
+    .map((a) => ({
+      ...a.line,
+      machines: [...a.machines.values()].sort((x, y) => x.fleetNumber.localeCompare(y.fleetNumber)),
+    }))
+    .sort(
+      (a, b) =>
+        a.firstNeededOn.localeCompare(b.firstNeededOn) ||
+        (a.partNumber || a.description).localeCompare(b.partNumber || b.description),
+    );
+}
+
+function summarise(services: ForecastService[], units: UnitSystem): PartsSummary {
+  const fluids = services.flatMap((s) =>
+    s.fluids.map((fluid) => ({ fluid, machineId: s.machine.id, neededOn: s.neededOn })),
+  );
+  return {
+    parts: sumConsumables(services),
+    fluids: sumFluids(fluids, units),
+    wearParts: listWearParts(services),
   };
 }
 
 /**
- * Sums the parts (by part number, case and spaces aside) and fluids (by kind and unit) of the
- * given services: in total, and per customer in the order customers first appear by name.
+ * Sums the consumable parts (by part number, case and spaces aside) and fluids (by kind, in the
+ * stock units of `units`) of the given services and lists their wear parts: in total, and per
+ * customer in the order of the customers' names.
  */
-export function sumPartsForecast(services: ForecastService[]): PartsSummary & {
-  customers: ({ customer: { id: string; name: string } } & PartsSummary)[];
-} {
+export function sumPartsForecast(
+  services: ForecastService[],
+  units: UnitSystem,
+): PartsSummary & { customers: ({ customer: { id: string; name: string } } & PartsSummary)[] } {
   const byCustomer = new Map<string, ForecastService[]>();
   for (const s of services)
     byCustomer.set(s.customer.id, [...(byCustomer.get(s.customer.id) ?? []), s]);
   const customers = [...byCustomer.values()]
-    .map((list) => ({ customer: list[0].customer, ...summarise(list) }))
+    .map((list) => ({ customer: list[0].customer, ...summarise(list, units) }))
     .sort((a, b) => a.customer.name.localeCompare(b.customer.name));
-  return { ...summarise(services), customers };
+  return { ...summarise(services, units), customers };
 }

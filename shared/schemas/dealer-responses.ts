@@ -102,28 +102,50 @@ const partLine = z.object({
   services: z.number(),
   firstNeededOn: z.string(),
 });
+/** A fluid summed in its stock unit (L / US gal, kg / lb), or apart in a unit not known. */
 const fluidLine = z.object({
   kind: z.string(),
   unit: z.string(),
   volume: z.number(),
+  /** false: a unit the converter does not know, summed only with itself */
+  converted: z.boolean(),
+  /** the units the services gave it in */
+  summedFrom: z.array(z.string()),
   machines: z.number(),
+  services: z.number(),
+  firstNeededOn: z.string(),
+});
+/** A wear part to inspect — replaced when worn — on the machines named; never a quantity. */
+const wearLine = z.object({
+  partNumber: z.string(),
+  description: z.string(),
+  machines: z.array(z.object({ id: z.string(), fleetNumber: z.string(), name: z.string() })),
   services: z.number(),
   firstNeededOn: z.string(),
 });
 export type PartLine = z.infer<typeof partLine>;
 export type FluidLine = z.infer<typeof fluidLine>;
+export type WearLine = z.infer<typeof wearLine>;
 
 export const partsForecastSchema = z
   .object({
     asOf: z.string(),
     horizon: z.number(),
+    /** the dealer's unit system, which picks the stock units (metric: L, kg; imperial: US gal, lb) */
+    units: z.enum(UNIT_SYSTEMS),
     services: z.number(),
     undated: z.number(),
     customers: z.array(customerRefSchema),
     parts: z.array(partLine),
     fluids: z.array(fluidLine),
+    wearParts: z.array(wearLine),
     byCustomer: z.array(
-      z.object({ customer: orgRefSchema, parts: z.array(partLine), fluids: z.array(fluidLine) }),
+      z.object({
+        customer: orgRefSchema,
+        parts: z.array(partLine),
+        fluids: z.array(fluidLine),
+        wearParts: z.array(wearLine),
+      }),
     ),
   })
   .meta({ id: 'PartsForecast' });

@@ -7,24 +7,25 @@ import { createTask, signedInAgent } from '../support/factories';
 import { addDaysIso, todayIso } from '../../shared/domain';
 import { api, app, dealerWorld, TZ } from './dealer-fixture';
 
-// Hand-worked example (derived: plain addition, no published source needed). Two customers,
-// three machines, four due services:
+// Hand-worked example (plain addition; the gallon is NIST Handbook 44, Appendix C:
+// 1 US gal = 3.785411784 L exactly). Two customers, three machines, four due services:
 //   North  M1  2027-03-02  OF-100 ×1, HF-200 ×2, engine oil 18 L
 //   North  M1  2027-03-20  of-100 ×1 (same part, other case), grease 0.5 kg
 //   North  M2  2027-03-10  OF-100 ×1, engine oil 12.5 L
 //   South  M3  2027-03-05  HF-200 ×1, engine oil 5 gal
-// Totals: OF-100 = 1 + 1 + 1 = 3 on 2 machines (M1, M2), 3 services, first 2027-03-02;
-//         HF-200 = 2 + 1 = 3 on 2 machines (M1, M3), first 2027-03-02;
-//         engine oil L = 18 + 12.5 = 30.5 L on 2 machines, first 2027-03-02; engine oil gal = 5 gal
-//         (never converted to litres); grease 0.5 kg on 1 machine, first 2027-03-20.
+// Totals (a metric dealer: litres): OF-100 = 1 + 1 + 1 = 3 on 2 machines (M1, M2), 3 services,
+//         first 2027-03-02; HF-200 = 2 + 1 = 3 on 2 machines (M1, M3), first 2027-03-02;
+//         engine oil = 18 + 12.5 + 5 × 3.785411784 = 30.5 + 18.92705892 = 49.42705892 → 49.427 L
+//         on 3 machines, 3 services, first 2027-03-02; grease 0.5 kg on 1 machine, 2027-03-20.
 // North alone: OF-100 3 on 2 machines, HF-200 2 on 1 machine, oil 30.5 L, grease 0.5 kg.
-// South alone: HF-200 1, oil 5 gal, first 2027-03-05.
+// South alone: HF-200 1, oil 5 gal = 18.92705892 → 18.927 L, first 2027-03-05.
 const north = { id: 'n', name: 'North Farm' };
 const south = { id: 's', name: 'South Farm' };
+const machine = (id: string) => ({ id, fleetNumber: id, name: `Machine ${id}` });
 const services: ForecastService[] = [
   {
     customer: north,
-    machineId: 'M1',
+    machine: machine('M1'),
     neededOn: '2027-03-02',
     parts: [
       { partNumber: 'OF-100', description: 'Oil filter', quantity: 1 },
@@ -34,21 +35,21 @@ const services: ForecastService[] = [
   },
   {
     customer: north,
-    machineId: 'M1',
+    machine: machine('M1'),
     neededOn: '2027-03-20',
     parts: [{ partNumber: ' of-100', description: '', quantity: 1 }],
     fluids: [{ kind: 'Grease', volume: 0.5, unit: 'kg' }],
   },
   {
     customer: south,
-    machineId: 'M3',
+    machine: machine('M3'),
     neededOn: '2027-03-05',
     parts: [{ partNumber: 'HF-200', description: 'Hydraulic filter', quantity: 1 }],
     fluids: [{ kind: 'Engine oil', volume: 5, unit: 'gal' }],
   },
   {
     customer: north,
-    machineId: 'M2',
+    machine: machine('M2'),
     neededOn: '2027-03-10',
     parts: [{ partNumber: 'OF-100', description: 'Oil filter', quantity: 1 }],
     fluids: [{ kind: 'engine oil ', volume: 12.5, unit: 'L' }],
@@ -56,8 +57,8 @@ const services: ForecastService[] = [
 ];
 
 describe('parts forecast — summing (pure function)', () => {
-  it('parts forecast — hand-worked example: summed by part number and by fluid kind + unit, per customer and in total', () => {
-    const result = sumPartsForecast(services);
+  it('parts forecast — hand-worked example: summed by part number and by fluid kind in litres, per customer and in total', () => {
+    const result = sumPartsForecast(services, 'metric');
     expect(result.parts).toEqual([
       {
         partNumber: 'HF-200',
@@ -80,28 +81,25 @@ describe('parts forecast — summing (pure function)', () => {
       {
         kind: 'Engine oil',
         unit: 'L',
-        volume: 30.5,
-        machines: 2,
-        services: 2,
+        volume: 49.427,
+        converted: true,
+        summedFrom: ['L', 'gal'],
+        machines: 3,
+        services: 3,
         firstNeededOn: '2027-03-02',
-      },
-      {
-        kind: 'Engine oil',
-        unit: 'gal',
-        volume: 5,
-        machines: 1,
-        services: 1,
-        firstNeededOn: '2027-03-05',
       },
       {
         kind: 'Grease',
         unit: 'kg',
         volume: 0.5,
+        converted: true,
+        summedFrom: ['kg'],
         machines: 1,
         services: 1,
         firstNeededOn: '2027-03-20',
       },
     ]);
+    expect(result.wearParts).toEqual([]);
     expect(result.customers.map((c) => c.customer.name)).toEqual(['North Farm', 'South Farm']);
     const [n, s] = result.customers;
     expect(n.parts.map((p) => [p.partNumber, p.quantity, p.machines])).toEqual([
@@ -122,19 +120,24 @@ describe('parts forecast — summing (pure function)', () => {
         firstNeededOn: '2027-03-05',
       },
     ]);
-    expect(s.fluids.map((f) => [f.unit, f.volume])).toEqual([['gal', 5]]);
+    expect(s.fluids.map((f) => [f.unit, f.volume])).toEqual([['L', 18.927]]);
   });
 
   it('parts forecast — no services, no lines; quantities keep three decimals', () => {
-    expect(sumPartsForecast([])).toEqual({ parts: [], fluids: [], customers: [] });
+    expect(sumPartsForecast([], 'metric')).toEqual({
+      parts: [],
+      fluids: [],
+      wearParts: [],
+      customers: [],
+    });
     const tenths = Array.from({ length: 3 }, (_, i) => ({
       customer: north,
-      machineId: `M${i}`,
+      machine: machine(`M${i}`),
       neededOn: '2027-01-01',
       parts: [{ partNumber: 'X', description: '', quantity: 0.1 }],
       fluids: [],
     }));
-    expect(sumPartsForecast(tenths).parts[0].quantity).toBe(0.3);
+    expect(sumPartsForecast(tenths, 'metric').parts[0].quantity).toBe(0.3);
   });
 });
 
@@ -194,6 +197,79 @@ describe('parts forecast — API', () => {
       ['fluid', 'Engine oil 15W-40', '36', 'L'],
     ]);
     expect(rows.filter((r) => r.Customer === 'Alder Farm')).toHaveLength(3);
+  });
+
+  // Hand-worked (NIST Handbook 44, Appendix C: 1 US gal = 3.785411784 L, 1 lb = 0.45359237 kg).
+  // An imperial dealer; both farms' oil changes are overdue (needed today). Alder's calls 18 L of
+  // oil and 1.1 kg of grease, Birch's 5 gal of oil and 0.9 lb of grease:
+  //   oil    18 / 3.785411784 = 4.755097 gal + 5 gal = 9.755097 → 9.755 gal, one line
+  //   grease 1.1 / 0.45359237 = 2.425085 lb + 0.9 lb = 3.325085 → 3.325 lb (= 1.508 kg), one line
+  // Each oil change also inspects a drive belt (a wear part): listed on A-01 and B-01, no quantity.
+  it('parts forecast — an imperial dealer: oil 18 L + 5 gal = 9.755 US gal, grease 1.1 kg + 0.9 lb = 3.325 lb; wear belts to inspect on A-01, B-01', async () => {
+    const w = await dealerWorld();
+    await w.dealer.update({ units: 'imperial' });
+    const belt = {
+      partNumber: '',
+      description: 'Drive belt, as worn',
+      quantity: 1,
+      wearPart: true,
+    };
+    const oilPart = { partNumber: 'OF-100', description: 'Oil filter', quantity: 1 };
+    await w.serviced.oil.update({
+      parts: [oilPart, belt],
+      fluids: [
+        { kind: 'Engine oil 15W-40', volume: 18, unit: 'L' },
+        { kind: 'Grease', volume: 1.1, unit: 'kg' },
+      ],
+    });
+    await w.viewed.oil.update({
+      parts: [oilPart, belt],
+      fluids: [
+        { kind: 'Engine oil 15W-40', volume: 5, unit: 'gal' },
+        { kind: 'grease', volume: 0.9, unit: 'lb' },
+      ],
+    });
+    const res = await w.advisorAgent.get(api(w.dealer.id, '/parts-forecast?horizon=7'));
+    expect(res.status).toBe(200);
+    const f = res.body.data;
+    expect(f.units).toBe('imperial');
+    expect(
+      f.fluids.map((l: { kind: string; unit: string; volume: number }) => [
+        l.kind,
+        l.unit,
+        l.volume,
+      ]),
+    ).toEqual([
+      ['Engine oil 15W-40', 'gal', 9.755],
+      ['Grease', 'lb', 3.325],
+    ]);
+    expect(
+      f.parts.map((p: { partNumber: string; quantity: number }) => [p.partNumber, p.quantity]),
+    ).toEqual([['OF-100', 2]]);
+    expect(f.wearParts).toEqual([
+      {
+        partNumber: '',
+        description: 'Drive belt, as worn',
+        machines: [
+          { id: w.serviced.machine.id, fleetNumber: 'A-01', name: 'Alder Farm tractor' },
+          { id: w.viewed.machine.id, fleetNumber: 'B-01', name: 'Birch Farm tractor' },
+        ],
+        services: 2,
+        firstNeededOn: todayIso(TZ),
+      },
+    ]);
+    const csv = await w.advisorAgent.get(api(w.dealer.id, '/parts-forecast.csv?horizon=7'));
+    const totals = (parse(csv.text, { columns: true }) as Record<string, string>[]).filter(
+      (r) => r.Customer === 'All customers',
+    );
+    expect(totals.map((r) => [r.Line, r.Description, r.Quantity, r.Unit, r['Inspect on']])).toEqual(
+      [
+        ['part', 'Oil filter', '2', '', ''],
+        ['fluid', 'Engine oil 15W-40', '9.755', 'US gal', ''],
+        ['fluid', 'Grease', '3.325', 'lb', ''],
+        ['wear part (inspect, replace when worn)', 'Drive belt, as worn', '', '', 'A-01; B-01'],
+      ],
+    );
   });
 
   it('parts forecast — 401, 400 on a bad horizon, 404 for a farm', async () => {
