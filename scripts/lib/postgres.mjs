@@ -34,8 +34,9 @@ import {
   SUPERUSER,
 } from './postgres-cluster.mjs';
 
-const DEFAULT_PORTS = { dev: 54310, test: 54311 };
-const DEFAULT_DATABASES = { dev: 'hourstone', test: 'hourstone_test' };
+// bench: its own cluster with the durable settings a real server keeps (npm run bench)
+const DEFAULT_PORTS = { dev: 54310, test: 54311, bench: 54312 };
+const DEFAULT_DATABASES = { dev: 'hourstone', test: 'hourstone_test', bench: 'hourstone_bench' };
 const APP_ROLE = 'hourstone';
 // Tests only: these trade crash safety for speed. Never for data a person keeps.
 const FAST_TEST_SETTINGS = { fsync: 'off', synchronous_commit: 'off', full_page_writes: 'off' };
