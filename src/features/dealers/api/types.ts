@@ -17,6 +17,7 @@ export type {
   PartLine,
   PartsForecast,
   ReminderDraft,
+  WearLine,
 } from '../../../../shared/schemas/dealer-responses';
 export type { DueCounts } from '../../../../shared/schemas/due';
 export type { OrgRef } from '../../../../shared/schemas/refs';

@@ -7,9 +7,11 @@ import { SelectField } from '../../../components/ui/field';
 import { Icon } from '../../../components/ui/icons';
 import { LoadingRegion, Skeleton } from '../../../components/ui/skeleton';
 import { TableScroll } from '../../../components/ui/table-scroll';
+import { stockUnitLabel } from '../../../../shared/domain/stock-units';
 import { partsCsvHref, usePartsForecast } from '../api/get-parts-forecast';
-import type { FluidLine, PartLine } from '../api/types';
+import type { FluidLine, PartLine, PartsForecast } from '../api/types';
 import { dateText } from './dealer-format';
+import { PartsWearTable } from './parts-wear-table';
 
 const number = new Intl.NumberFormat(undefined, { maximumFractionDigits: 3 });
 const HORIZONS = DUE_HORIZONS.map((d) => ({ value: String(d), label: `Next ${d} days` }));
@@ -84,7 +86,8 @@ export function PartsForecastView({
         Quantities come from each task&apos;s parts list; check them against the operator&apos;s
         manual.
       </p>
-      {f.parts.length === 0 && f.fluids.length === 0 ? (
+      <p className="text-field-700">{unitsText(f)}</p>
+      {f.parts.length === 0 && f.fluids.length === 0 && f.wearParts.length === 0 ? (
         <EmptyState icon="check" title={`No parts needed in ${f.horizon} days`}>
           <p>Choose a longer horizon, or add parts lists to the farms&apos; service tasks.</p>
         </EmptyState>
@@ -92,10 +95,12 @@ export function PartsForecastView({
         <>
           <Section title="All customers" description="Summed by part number, soonest first.">
             <Lines parts={f.parts} fluids={f.fluids} label="All customers" />
+            <PartsWearTable lines={f.wearParts} label="All customers" />
           </Section>
           {f.byCustomer.map((c) => (
             <Section key={c.customer.id} title={c.customer.name}>
               <Lines parts={c.parts} fluids={c.fluids} label={c.customer.name} />
+              <PartsWearTable lines={c.wearParts} label={c.customer.name} />
             </Section>
           ))}
         </>
@@ -111,6 +116,21 @@ const td = 'px-1.5 py-2.5 align-top break-words sm:px-2.5';
 const wideOnly = 'hidden sm:table-cell';
 const machinesText = (n: number) => (n === 1 ? '1 machine' : `${n} machines`);
 
+/** Which stock units the fluids are summed in, and what happens to a unit not known. */
+function unitsText(f: PartsForecast): string {
+  const stock = f.units === 'imperial' ? 'US gallons and pounds' : 'litres and kilograms';
+  return `Fluids in L, mL, US gal, US qt, kg, g or lb are converted and summed once each, in ${stock} (this organization's ${f.units} units); an amount in any other unit stays on its own line, marked "unit not converted", and is never added to the others.`;
+}
+
+/** "Fluid", "Fluid · from L and US gal", "Fluid · unit not converted". */
+function fluidDetail(x: FluidLine): string {
+  if (!x.converted) return 'Fluid · unit not converted';
+  const from = x.summedFrom.map(stockUnitLabel);
+  return from.length > 1 || from[0] !== stockUnitLabel(x.unit)
+    ? `Fluid · from ${from.join(' and ')}`
+    : 'Fluid';
+}
+
 function Lines({
   parts,
   fluids,
@@ -120,6 +140,7 @@ function Lines({
   fluids: FluidLine[];
   label: string;
 }) {
+  if (parts.length === 0 && fluids.length === 0) return null;
   const lines = [
     ...parts.map((p) => ({
       key: `p:${p.partNumber}`,
@@ -132,8 +153,8 @@ function Lines({
     ...fluids.map((x) => ({
       key: `f:${x.kind}|${x.unit}`,
       what: x.kind,
-      detail: 'Fluid',
-      amount: `${number.format(x.volume)} ${x.unit}`,
+      detail: fluidDetail(x),
+      amount: `${number.format(x.volume)} ${stockUnitLabel(x.unit)}`,
       machines: x.machines,
       first: x.firstNeededOn,
     })),
