@@ -32,6 +32,10 @@ export class Machine extends Model<InferAttributes<Machine>, InferCreationAttrib
   declare seasonMonths: CreationOptional<number[]>;
   declare photoKey: string | null;
   declare notes: CreationOptional<string>;
+  /** restricted use (migration 0021): why, since when and by whom; all null when unrestricted */
+  declare restrictionReason: CreationOptional<string | null>;
+  declare restrictedAt: CreationOptional<Date | null>;
+  declare restrictedBy: CreationOptional<string | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -55,6 +59,9 @@ Machine.init(
     seasonMonths: { type: DataTypes.ARRAY(DataTypes.INTEGER), allowNull: false, defaultValue: [] },
     photoKey: { type: DataTypes.TEXT, allowNull: true },
     notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    restrictionReason: { type: DataTypes.TEXT, allowNull: true },
+    restrictedAt: { type: DataTypes.DATE, allowNull: true },
+    restrictedBy: { type: DataTypes.UUID, allowNull: true },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,
   },

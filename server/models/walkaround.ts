@@ -9,7 +9,12 @@ import { sequelize } from '../db';
 import { numericColumn } from './columns';
 import type { MachineCategory } from '../../shared/constants';
 import type { Hazard } from '../../shared/schemas/schedule';
-import type { WalkaroundPurpose, WalkaroundResult } from '../../shared/schemas/walkarounds';
+import type {
+  ChecklistPhase,
+  WalkaroundPurpose,
+  WalkaroundResult,
+} from '../../shared/schemas/walkarounds';
+import type { MachineClass } from '../../shared/domain/service-library/classes';
 
 export interface ChecklistItem {
   id: string;
@@ -18,6 +23,10 @@ export interface ChecklistItem {
   critical: boolean;
   hazards: Hazard[];
   caution: string;
+  /** items stored before phases (JSONB, no migration) have none: read as before_start */
+  phase?: ChecklistPhase;
+  /** only on machines of these classes; none or empty: every machine of the category */
+  classes?: MachineClass[];
 }
 
 export class ChecklistTemplate extends Model<

@@ -26,6 +26,21 @@ export const canImportReadings = (access: OrgAccess) => hasRole(access, 'manager
 export const canReturnToService = (access: OrgAccess) =>
   access.via === 'member' && hasRole(access, 'manager', 'technician');
 
+/**
+ * Setting and lifting a restricted use ("field only, no road"): the farm's technicians and
+ * managers, who judge what the machine is fit for; never a dealer, and not an operator, whose
+ * finding goes to them as a defect (a critical fail tags the machine out by itself).
+ */
+export const canRestrict = (access: OrgAccess) =>
+  access.via === 'member' && hasRole(access, 'manager', 'technician');
+/** The 403 message of a refused restriction, in the words of the one who asked. */
+export const restrictRefusal = (access: OrgAccess) =>
+  access.via === 'dealer'
+    ? "A dealer's advisor never sets or lifts a farm's restriction; the farm's technician or manager does"
+    : 'Only a technician or manager of the farm sets or lifts a restriction; report what you found as a defect';
+/** A restriction is set on a machine that is still the farm's (a sold one has left the fleet). */
+export const takesRestriction = (machine: Machine) => machine.status !== 'sold';
+
 export const machineAbilities = (access: OrgAccess, machine: Machine) => ({
   update: canUpdateMachine(access),
   editSchedule: canEditSchedule(access),
@@ -34,4 +49,6 @@ export const machineAbilities = (access: OrgAccess, machine: Machine) => ({
   correctReading: canCorrectReading(access),
   replaceMeter: canReplaceMeter(access),
   returnToService: canReturnToService(access) && machine.status === 'tagged_out',
+  restrict: canRestrict(access) && takesRestriction(machine),
+  liftRestriction: canRestrict(access) && machine.restrictionReason != null,
 });

@@ -13,6 +13,7 @@ export const presentMachineRef = (m: Machine): MachineRef => ({
   name: m.name,
   category: m.category,
   status: m.status,
+  restricted: m.restrictionReason != null,
   meterUnit: m.meterUnit,
 });
 

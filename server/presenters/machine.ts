@@ -1,6 +1,23 @@
 import type { Machine, MachineForecast } from '../models';
 import type { DuePoint, UsageEstimate } from '../../shared/domain';
 import type { LastReading, Machine as MachineJson, Usage } from '../../shared/schemas/machines';
+import type { MachineRestriction } from '../../shared/schemas/machine-restrictions';
+import type { OrgAccess } from '../policies/context';
+
+/**
+ * A machine's restriction as the caller may read it; null when it has none. A dealer is told
+ * that it is restricted and since when, not why (the reason is the farm's own, as a tag-out's is).
+ */
+export function presentRestriction(
+  m: Pick<Machine, 'restrictionReason' | 'restrictedAt'>,
+  via: OrgAccess['via'],
+): MachineRestriction | null {
+  if (m.restrictionReason == null || !m.restrictedAt) return null;
+  return {
+    reason: via === 'member' ? m.restrictionReason : null,
+    since: m.restrictedAt.toISOString(),
+  };
+}
 
 /** The last reading of a forecast summary, in both scales. */
 export function presentLastReading(
@@ -27,6 +44,8 @@ const photoUrls = (m: Machine) => {
 export function presentMachine(
   m: Machine,
   extra: {
+    /** who asks: a dealer is not told a restriction's reason */
+    via: OrgAccess['via'];
     operatorIds: string[];
     forecast?: MachineForecast | null;
     /** the worst status of its tasks, as the fleet query reads it */
@@ -48,6 +67,7 @@ export function presentMachine(
     listPriceMinor: m.listPriceMinor,
     meterUnit: m.meterUnit,
     status: m.status,
+    restriction: presentRestriction(m, extra.via),
     seasonMonths: m.seasonMonths,
     notes: m.notes,
     operatorIds: extra.operatorIds,

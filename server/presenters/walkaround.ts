@@ -15,6 +15,9 @@ export const presentChecklistItem = (i: ChecklistItem): ChecklistItemJson => ({
   critical: i.critical,
   hazards: i.hazards,
   caution: i.caution,
+  // items stored before phases and classes (JSONB) are walked before start, on every machine
+  phase: i.phase ?? 'before_start',
+  classes: i.classes ?? [],
 });
 
 export const presentChecklistTemplate = (t: ChecklistTemplate): ChecklistTemplateJson => ({

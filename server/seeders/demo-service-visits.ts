@@ -2,6 +2,7 @@
 // visits one interval apart on the generated readings, merged per day.
 import { TZDate } from '@date-fns/tz';
 import type { MachineCategory, UnitSystem } from '../../shared/constants';
+import type { MachineClass } from '../../shared/domain/service-library/classes';
 import type { TaskFluid, TaskPart } from '../../shared/schemas/schedule';
 import { addDaysIso, isoFromDayNumber, localDayNumber } from '../../shared/domain';
 import type { DemoReading } from './demo-readings';
@@ -25,6 +26,8 @@ export interface DemoMachineWorld {
   id: string;
   fleetNumber: string;
   category: MachineCategory;
+  /** picks the class's own walkaround items */
+  machineClass: MachineClass | null;
   timeZone: string;
   units: UnitSystem;
   readings: DemoReading[];

@@ -9,7 +9,7 @@ import { MACHINE_CATEGORIES } from '../../shared/constants';
 import type { WalkaroundResult } from '../../shared/schemas/walkarounds';
 import type { DefectSeverity } from '../../shared/schemas/defects';
 import { addDaysIso, todayIso } from '../../shared/domain';
-import { defaultChecklist } from '../services/checklist-defaults';
+import { builtInChecklist, defaultChecklist } from '../services/checklist-defaults';
 import { localDate, type DemoMachineWorld } from './demo-service-visits';
 
 const DAY = 86_400_000;
@@ -21,7 +21,7 @@ export function demoChecklists(
   id: (name: string) => string,
 ) {
   return MACHINE_CATEGORIES.map((category) => {
-    const d = defaultChecklist(category);
+    const d = builtInChecklist(category);
     return {
       id: id(`checklist/${organizationKey}/${category}`),
       organizationId,
@@ -90,7 +90,7 @@ export async function writeWalkarounds(
   for (const m of machines) {
     const operator = m.operatorIds[0] ?? (m.organizationKey === 'osier' ? m.shopPersonId : null);
     if (!operator) continue;
-    const checklist = defaultChecklist(m.category);
+    const checklist = defaultChecklist(m.category, m.machineClass);
     const findings = FINDINGS.filter(([fleet]) => fleet === m.fleetNumber);
     // the operator's walkarounds at the machine's readings of the last week, plus scripted days
     const recent = m.readings.filter((r) => r.takenAt.getTime() >= today.getTime() - 7 * DAY);

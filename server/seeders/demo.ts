@@ -135,6 +135,7 @@ async function writeScenario(
       id,
       fleetNumber: m.fleetNumber,
       category: m.category,
+      machineClass: m.machineClass,
       timeZone: org.timeZone,
       units: org.units,
       readings: history.get(m.fleetNumber)!.readings,

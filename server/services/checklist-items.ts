@@ -1,8 +1,12 @@
 // The pieces of the built-in walkaround checklists: the hazard cautions (shared/domain/hazards.ts), the item
 // builder and the items several categories share. The lists themselves are in
-// checklist-self-propelled.ts and checklist-towed-road.ts; checklist-defaults.ts picks one.
+// checklist-self-propelled.ts and checklist-towed-road.ts, the items of one machine class in
+// checklist-class-items.ts; checklist-defaults.ts picks one. Each item has its phase: walked round
+// before start (engine off, key out) or checked from the seat with the engine running.
 import { hazardCautionText } from '../../shared/domain/hazards';
+import type { MachineClass } from '../../shared/domain/service-library/classes';
 import type { Hazard } from '../../shared/schemas/schedule';
+import type { ChecklistPhase } from '../../shared/schemas/walkarounds';
 import type { ChecklistItem } from '../models/walkaround';
 
 /**
@@ -15,7 +19,14 @@ export const item = (
   id: string,
   label: string,
   guidance: string,
-  opts: { critical?: boolean; hazards?: Hazard[] } = {},
+  opts: {
+    critical?: boolean;
+    hazards?: Hazard[];
+    /** default before_start */
+    phase?: ChecklistPhase;
+    /** only on machines of these classes (default: every machine of the list's category) */
+    classes?: MachineClass[];
+  } = {},
 ): ChecklistItem => ({
   id,
   label,
@@ -23,9 +34,14 @@ export const item = (
   critical: opts.critical ?? false,
   hazards: opts.hazards ?? [],
   caution: cautionFor(opts.hazards ?? []),
+  phase: opts.phase ?? 'before_start',
+  classes: opts.classes ?? [],
 });
 
-// Items several categories share (engine off, key out, on level ground unless the item says so).
+const running = 'running' as const;
+
+// Items several categories share. Before start: engine off, key out, on level ground, everything
+// lowered. Running: from the seat, the parking brake on, in a clear area.
 export const I = {
   engineOil: item('engine-oil', 'Engine oil level', 'Between the marks on the dipstick.', {
     hazards: ['hot_fluid'],
@@ -96,23 +112,6 @@ export const I = {
     'Clean, not faded, mounted point up at the rear.',
   ),
   steps: item('steps', 'Steps and platform clean', 'No mud, oil, ice or loose tools.'),
-  rops: item(
-    'rops-seatbelt',
-    'Rollover protective structure and seatbelt',
-    'ROPS up and locked or cab undamaged; seatbelt latches and is not frayed (OSHA 29 CFR 1928.51).',
-    { critical: true },
-  ),
-  oilPressure: item(
-    'oil-pressure',
-    'Oil pressure after start',
-    'After starting: the warning light goes out and the gauge reads in range within seconds. If not, stop the engine.',
-    { critical: true },
-  ),
-  lights: item(
-    'lights',
-    'Lights and flashers',
-    'Head, tail, brake and hazard lights and beacons work.',
-  ),
   hitch: item(
     'hitch',
     'Hitch, drawbar and linkage pins',
@@ -130,13 +129,90 @@ export const I = {
     'Fire extinguisher',
     'On board, gauge in the green, seal intact.',
   ),
+  // In the seat, engine running
+  rops: item(
+    'rops-seatbelt',
+    'Rollover protective structure and seatbelt',
+    'ROPS up and locked or cab undamaged; seatbelt latches and is not frayed (OSHA 29 CFR 1928.51).',
+    { critical: true, phase: running },
+  ),
+  oilPressure: item(
+    'oil-pressure',
+    'Oil pressure after start',
+    'After starting: the warning light goes out and the gauge reads in range within seconds. If not, stop the engine.',
+    { critical: true, phase: running },
+  ),
+  warningLights: item(
+    'warning-lights',
+    'Gauges and warning lights',
+    'Every warning light goes out once running; charge, temperature and fuel read normal. A light that stays on: stop and ask.',
+    { phase: running },
+  ),
+  steering: item(
+    'steering',
+    'Steering free play and response',
+    'Engine running: little free play at the wheel, it turns lock to lock without binding or knocking and the wheels follow at once.',
+    { critical: true, phase: running },
+  ),
   brakes: item(
     'brakes',
-    'Service and parking brakes',
-    'Pedals firm; parking brake holds (test at walking pace in a clear area).',
-    { critical: true },
+    'Service brakes',
+    'Pedals firm, not spongy; at walking pace in a clear area the machine stops straight.',
+    { critical: true, phase: running },
   ),
+  parkingBrake: item(
+    'parking-brake',
+    'Parking brake',
+    'Holds the machine against a gentle pull in gear at low idle; its warning light comes on when set.',
+    { critical: true, phase: running },
+  ),
+  pedalLatch: item(
+    'brake-pedal-latch',
+    'Brake pedal latch',
+    'Split left and right brake pedals latch together for the road and release for field turns; a single pedal returns freely.',
+    { critical: true, phase: running },
+  ),
+  lights: item(
+    'lights',
+    'Lights and flashers',
+    'Head, tail, brake and hazard lights and beacons work.',
+    { phase: running },
+  ),
+  horn: item('alarm', 'Horn and reverse alarm', 'Both sound.', { phase: running }),
 };
+
+/** The items every self-propelled list ends with: from the seat, engine running. */
+export const IN_SEAT = [
+  I.rops,
+  I.oilPressure,
+  I.warningLights,
+  I.steering,
+  I.brakes,
+  I.parkingBrake,
+  I.pedalLatch,
+  I.lights,
+  I.horn,
+];
+
+// The cooling and air intake of the harvesters, which plug with chaff in a day.
+export const COOLING: ChecklistItem[] = [
+  item(
+    'radiator',
+    'Radiator and coolers clean',
+    'Radiator, oil and charge-air coolers: fins clear of chaff and dust. Blow them out from the clean side with the engine stopped.',
+    { hazards: ['hot_fluid'] },
+  ),
+  item(
+    'rotary-screen',
+    'Rotary screen clean and free',
+    'Screen clear of chaff, seals in place, the drum turns freely by hand with the engine stopped; after start it turns and stays clean.',
+  ),
+  item(
+    'precleaner',
+    'Air precleaner and dust valve',
+    'Precleaner not plugged and its bowl empty; the rubber dust valve is soft, shut and not split.',
+  ),
+];
 
 export interface ChecklistDefinition {
   name: string;
@@ -146,5 +222,6 @@ export interface ChecklistDefinition {
 
 export const COMMON_PRACTICE =
   'Items are common practice for this kind of machine, on the pattern of published tractor daily ' +
-  "inspection lists; your operator's manual and local rules come first. Do the checks before " +
-  'starting with the engine stopped, the key removed and everything lowered.';
+  "inspection lists; your operator's manual and local rules come first. Walk round first with " +
+  'the engine stopped, the key removed and everything lowered; then check the rest from the seat ' +
+  'with the engine running.';

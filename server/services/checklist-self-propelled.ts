@@ -1,7 +1,17 @@
 // The built-in walkarounds of self-propelled machines: the tractor's follows published daily
-// inspection items (CHECKS.md §5); the others are common practice on the same pattern.
+// inspection items (CHECKS.md §5); the others are common practice on the same pattern. Each list
+// is walked round first (engine off, key out) and ends in the seat with the engine running:
+// brakes and parking brake, the brake pedal latch and the steering on every one of them.
 import type { MachineCategory } from '../../shared/constants';
-import { COMMON_PRACTICE, I, item, type ChecklistDefinition } from './checklist-items';
+import { FORAGE_HARVESTER, LMI_TEST, LOADER_TRACTOR } from './checklist-class-items';
+import {
+  COMMON_PRACTICE,
+  COOLING,
+  I,
+  IN_SEAT,
+  item,
+  type ChecklistDefinition,
+} from './checklist-items';
 
 const TRACTOR: ChecklistDefinition = {
   name: 'Tractor — daily walkaround',
@@ -11,9 +21,13 @@ const TRACTOR: ChecklistDefinition = {
     'cracked parts, hoses, shields, loose bolts, slow-moving-vehicle emblem, steps, seatbelt, oil ' +
     'pressure after start, lights and flashers), with OSHA 29 CFR 1928.57 (guards in place, PTO ' +
     'master shield; stop the engine and wait for all motion to stop before servicing) and 29 CFR ' +
-    '1928.51 (rollover protective structures and seatbelts). Do the checks before starting with ' +
-    "the engine stopped and the key removed. Your operator's manual and local rules come first.",
+    '1928.51 (rollover protective structures and seatbelts). Walk round first with the engine ' +
+    'stopped and the key removed; then check brakes, pedal latch, steering and lights from the ' +
+    'seat with the engine running (common practice). A tractor with a loader (class: utility ' +
+    "tractor with loader) also gets the loader's items. Your operator's manual and local rules " +
+    'come first.',
   items: [
+    LOADER_TRACTOR.lowered,
     I.engineOil,
     I.coolant,
     I.fuel,
@@ -29,16 +43,18 @@ const TRACTOR: ChecklistDefinition = {
     I.ptoShield,
     I.bolts,
     I.hitch,
+    LOADER_TRACTOR.pins,
+    LOADER_TRACTOR.hoses,
+    LOADER_TRACTOR.toolLock,
     I.belts,
     I.smv,
     I.steps,
-    I.rops,
-    I.oilPressure,
-    I.lights,
+    ...IN_SEAT,
   ],
 };
 
-const selfPropelledBase = [
+// Before start on every self-propelled machine; its own items follow, then IN_SEAT.
+const walkRound = [
   I.engineOil,
   I.coolant,
   I.fuel,
@@ -51,9 +67,6 @@ const selfPropelledBase = [
   I.shields,
   I.belts,
   I.steps,
-  I.rops,
-  I.oilPressure,
-  I.lights,
 ];
 
 const headerLock = item(
@@ -61,6 +74,12 @@ const headerLock = item(
   'Header lift-cylinder safety lock',
   'The lock engages; never go under a raised header without it.',
   { critical: true, hazards: ['raised_load'] },
+);
+
+const chaff = item(
+  'chaff',
+  'Chaff and straw cleared',
+  'Engine compartment, exhaust, bearings and batteries blown clean (fire risk).',
 );
 
 /** The lists of the self-propelled categories. */
@@ -73,24 +92,22 @@ export const SELF_PROPELLED_CHECKLISTS: Record<
     name: 'Combine — daily walkaround',
     description: `Daily pre-operation walkaround for combines. ${COMMON_PRACTICE}`,
     items: [
-      ...selfPropelledBase,
+      ...walkRound,
+      ...COOLING,
       headerLock,
-      item(
-        'chaff',
-        'Chaff and straw cleared',
-        'Engine compartment, exhaust, bearings and batteries blown clean (fire risk).',
-      ),
+      chaff,
       item('chains', 'Drive chains and feeder house', 'Tension and wear; no broken slats.', {
         hazards: ['stored_energy'],
       }),
       I.extinguisher,
+      ...IN_SEAT,
     ],
   },
   sprayer: {
     name: 'Sprayer — daily walkaround',
     description: `Daily pre-operation walkaround for self-propelled sprayers. ${COMMON_PRACTICE}`,
     items: [
-      ...selfPropelledBase,
+      ...walkRound,
       item(
         'boom-locks',
         'Boom transport locks and breakaways',
@@ -105,13 +122,14 @@ export const SELF_PROPELLED_CHECKLISTS: Record<
         'Clean-water tank and protective gear',
         'Wash-water tank full; gloves and eye protection on board.',
       ),
+      ...IN_SEAT,
     ],
   },
   loader: {
     name: 'Loader / telehandler — daily walkaround',
-    description: `Daily pre-operation walkaround for loaders and telehandlers. ${COMMON_PRACTICE}`,
+    description: `Daily pre-operation walkaround for loaders and telehandlers; a telehandler (class: telehandler) also gets the load-moment indicator test. ${COMMON_PRACTICE}`,
     items: [
-      ...selfPropelledBase,
+      ...walkRound,
       item(
         'boom-pins',
         'Boom, attachment and quick-hitch pins',
@@ -119,15 +137,15 @@ export const SELF_PROPELLED_CHECKLISTS: Record<
         { critical: true, hazards: ['raised_load'] },
       ),
       item('load-chart', 'Load chart readable', 'In the cab and legible.'),
-      item('alarm', 'Horn and reverse alarm', 'Both sound.'),
-      I.brakes,
+      ...IN_SEAT,
+      LMI_TEST,
     ],
   },
   mower: {
     name: 'Mower-conditioner — daily walkaround',
     description: `Daily pre-operation walkaround for self-propelled mower-conditioners. ${COMMON_PRACTICE}`,
     items: [
-      ...selfPropelledBase,
+      ...walkRound,
       headerLock,
       item(
         'cutterbar',
@@ -135,11 +153,18 @@ export const SELF_PROPELLED_CHECKLISTS: Record<
         'None missing, cracked or loose; curtains and guards fitted (thrown objects).',
         { critical: true, hazards: ['stored_energy'] },
       ),
+      ...IN_SEAT,
     ],
   },
   other: {
     name: 'Machine — daily walkaround',
-    description: `Daily pre-operation walkaround for self-propelled machines. ${COMMON_PRACTICE}`,
-    items: [...selfPropelledBase, I.extinguisher],
+    description: `Daily pre-operation walkaround for self-propelled machines; a forage harvester (class: self-propelled forage harvester) also gets its cooling, intake and cutterhead items. ${COMMON_PRACTICE}`,
+    items: [
+      ...walkRound,
+      ...FORAGE_HARVESTER,
+      { ...chaff, classes: ['forage_harvester'] },
+      I.extinguisher,
+      ...IN_SEAT,
+    ],
   },
 };

@@ -1,7 +1,7 @@
 import { UniqueConstraintError, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { invalid, notFound } from '../errors';
-import { ChecklistTemplate } from '../models';
+import { ChecklistTemplate, type Machine } from '../models';
 import type { ChecklistItem } from '../models/walkaround';
 import type { MachineCategory } from '../../shared/constants';
 import type {
@@ -11,10 +11,11 @@ import type {
 } from '../../shared/schemas/walkarounds';
 import type { OrgAccess } from '../policies/access';
 import { recordAudit } from '../infra/audit';
-import { defaultChecklist } from './checklist-defaults';
+import { builtInChecklist, itemsForMachine } from './checklist-defaults';
 import { cautionFor } from './checklist-items';
 
-// The walkaround checklists: the farm's template of a machine category (one each), else the built-in list.
+// The walkaround checklists: the farm's template of a machine category (one each), else the
+// built-in list; of either, the items for every machine of the category and those of its class.
 
 export interface Checklist {
   template: {
@@ -26,12 +27,17 @@ export interface Checklist {
   items: ChecklistItem[];
 }
 
-/** The checklist a machine's walkaround follows: the farm's template of its category, else the built-in one. */
+/**
+ * The checklist a machine's walkaround follows: the farm's template of its category, else the
+ * built-in one, narrowed to the machine's class (itemsForMachine), before-start items first.
+ */
 export async function checklistFor(
   access: OrgAccess,
-  category: MachineCategory,
+  machine: Pick<Machine, 'category' | 'machineClass'>,
   transaction?: Transaction,
 ): Promise<Checklist> {
+  const { category } = machine;
+  const machineClass = machine.machineClass ?? null;
   const template = await ChecklistTemplate.findOne({
     where: { organizationId: access.organization.id, category },
     transaction,
@@ -44,9 +50,9 @@ export async function checklistFor(
         description: template.description,
         source: 'farm',
       },
-      items: template.items,
+      items: itemsForMachine(template.items, machineClass),
     };
-  const builtIn = defaultChecklist(category);
+  const builtIn = builtInChecklist(category);
   return {
     template: {
       id: null,
@@ -54,7 +60,7 @@ export async function checklistFor(
       description: builtIn.description,
       source: 'built_in',
     },
-    items: builtIn.items,
+    items: itemsForMachine(builtIn.items, machineClass),
   };
 }
 
@@ -82,6 +88,8 @@ export function normaliseItems(items: ChecklistItemInput[]): ChecklistItem[] {
       critical: input.critical,
       hazards: input.hazards,
       caution: input.caution || cautionFor(input.hazards),
+      phase: input.phase,
+      classes: [...new Set(input.classes)],
     };
   });
   if (Object.keys(errors).length) throw invalid(errors);

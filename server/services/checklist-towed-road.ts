@@ -1,5 +1,6 @@
-// The built-in walkarounds of trailed machines (checked hitched, the tractor's engine stopped)
-// and of farm trucks: common practice.
+// The built-in walkarounds of trailed machines (checked hitched, the tractor's engine stopped;
+// the lights from the tractor's seat) and of farm trucks: common practice. A truck ends in the
+// seat too (brakes, parking brake, steering), but has no split brake pedals to latch.
 import type { MachineCategory } from '../../shared/constants';
 import { COMMON_PRACTICE, I, item, type ChecklistDefinition } from './checklist-items';
 
@@ -34,9 +35,9 @@ export const TOWED_AND_ROAD_CHECKLISTS: Record<
       I.tyrePressure,
       I.wheelNuts,
       I.hitch,
-      I.lights,
       I.smv,
       I.extinguisher,
+      I.lights,
     ],
   },
   truck: {
@@ -52,12 +53,6 @@ export const TOWED_AND_ROAD_CHECKLISTS: Record<
       I.wheelNuts,
       I.battery,
       item(
-        'air-brakes',
-        'Brakes and air pressure',
-        'Air builds to working pressure with no audible leaks; brakes hold.',
-        { critical: true, hazards: ['stored_energy'] },
-      ),
-      item(
         'body-prop',
         'Body down; body prop works',
         'Never work under a raised body without its prop.',
@@ -66,8 +61,20 @@ export const TOWED_AND_ROAD_CHECKLISTS: Record<
         },
       ),
       item('mirrors', 'Mirrors and windscreen', 'Clean, not cracked, adjusted.'),
+      item('seatbelt', 'Seatbelt', 'Latches and is not frayed.', {
+        critical: true,
+        phase: 'running',
+      }),
+      item(
+        'air-brakes',
+        'Brakes and air pressure',
+        'Air builds to working pressure with no audible leaks; brakes hold.',
+        { critical: true, hazards: ['stored_energy'], phase: 'running' },
+      ),
+      I.parkingBrake,
+      I.steering,
+      I.warningLights,
       I.lights,
-      item('seatbelt', 'Seatbelt', 'Latches and is not frayed.', { critical: true }),
     ],
   },
   implement: {
@@ -93,8 +100,8 @@ export const TOWED_AND_ROAD_CHECKLISTS: Record<
         hazards: ['raised_load'],
       }),
       I.shields,
-      I.lights,
       I.smv,
+      I.lights,
     ],
   },
 };

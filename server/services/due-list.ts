@@ -51,6 +51,7 @@ function dueWhere(filters: DueFilterFlags) {
 export function dueListSql(filters: DueFilterFlags & { page?: boolean }) {
   return `SELECT d.task_id, d.due, t.name AS task_name, t.hazards, t.labour_hours,
       m.id AS machine_id, m.fleet_number, m.name AS machine_name, m.category, m.status AS machine_status, m.meter_unit,
+      m.restriction_reason IS NOT NULL AS machine_restricted,
       f.last_value, f.last_raw_value, f.last_taken_at, f.usage - 'profile' AS usage
     FROM task_due_points d
     JOIN service_tasks t ON t.id = d.task_id AND t.organization_id = d.organization_id
@@ -78,6 +79,7 @@ interface RawDueRow {
   machine_name: string;
   category: MachineRef['category'];
   machine_status: MachineRef['status'];
+  machine_restricted: boolean;
   meter_unit: MachineRef['meterUnit'];
   last_value: number | null;
   last_raw_value: number | null;
@@ -132,6 +134,7 @@ export async function dueList(
       name: r.machine_name,
       category: r.category,
       status: r.machine_status,
+      restricted: r.machine_restricted,
       meterUnit: r.meter_unit,
     },
     due: r.due,

@@ -68,7 +68,7 @@ export function assertMayStart(access: OrgAccess, machine: Machine, purpose: Wal
 /** What a walkaround starts from: the machine's checklist and its last reading, if any. */
 export async function walkaroundStart(access: OrgAccess, machine: Machine) {
   const [checklist, forecast] = await Promise.all([
-    checklistFor(access, machine.category),
+    checklistFor(access, machine),
     MachineForecast.findByPk(machine.id),
   ]);
   const lastReading =
@@ -105,7 +105,7 @@ async function saveWalkaround(
       });
       await machine.reload({ transaction });
       assertMayStart(access, machine, input.purpose);
-      const checklist = await checklistFor(access, machine.category, transaction);
+      const checklist = await checklistFor(access, machine, transaction);
       const items = await checkAnswers(access, machine, checklist, input.items, transaction);
       const performedAt = input.performedAt ? new Date(input.performedAt) : new Date();
       const reading = await walkaroundReading(

@@ -4,6 +4,7 @@ import { boundedNumber, pagingFields, plainText, uuid } from './common';
 import { machineRefSchema, pageMetaSchema } from './refs';
 import { MONEY_MAX_MINOR, minorAmount } from './money';
 import { MACHINE_CLASSES } from '../domain/service-library/classes';
+import { machineRestrictionSchema } from './machine-restrictions';
 
 /** Ranges of a machine's numbers; prices are minor units (bigint), years integer. */
 export const MACHINE_BOUNDS = {
@@ -119,6 +120,8 @@ export const machineSchema = z
     listPriceMinor: z.number().nullable(),
     meterUnit: z.enum(METER_UNITS),
     status: z.enum(MACHINE_STATUSES),
+    /** restricted use (shared/schemas/machine-restrictions.ts); null when there is none */
+    restriction: machineRestrictionSchema.nullable(),
     seasonMonths: z.array(z.number()),
     notes: z.string(),
     operatorIds: z.array(z.string()),
@@ -143,6 +146,10 @@ export const machineAbilitiesSchema = z
     replaceMeter: z.boolean(),
     /** the machine is tagged out and the caller is one of the farm's technicians or managers */
     returnToService: z.boolean(),
+    /** set (or change) a restriction: the farm's technicians and managers, not on a sold machine */
+    restrict: z.boolean(),
+    /** lift the restriction it has: the farm's technicians and managers */
+    liftRestriction: z.boolean(),
   })
   .meta({ id: 'MachineAbilities' });
 export type MachineAbilities = z.infer<typeof machineAbilitiesSchema>;

@@ -19,6 +19,8 @@ export const machineRefSchema = z
     name: z.string(),
     category: z.enum(MACHINE_CATEGORIES),
     status: z.enum(MACHINE_STATUSES),
+    /** in service but restricted in use (its reason is on the machine and its checklist) */
+    restricted: z.boolean(),
     meterUnit: z.enum(METER_UNITS),
   })
   .meta({ id: 'MachineRef' });

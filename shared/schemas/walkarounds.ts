@@ -5,6 +5,8 @@ import { HAZARDS } from './schedule';
 import { METER_BOUNDS } from './readings';
 import { defectSchema } from './defects';
 import { machineRefSchema, pageMetaSchema, personRefSchema } from './refs';
+import { MACHINE_CLASSES } from '../domain/service-library/classes';
+import { machineRestrictionSchema } from './machine-restrictions';
 
 // Daily walkarounds (pre-operation inspections) and the checklist templates they follow.
 
@@ -19,6 +21,17 @@ export const WALKAROUND_RESULT_LABELS: Record<WalkaroundResult, string> = {
 /** 'use': the check before working the machine (refused on a tagged-out one); 'inspection': a shop check. */
 export const WALKAROUND_PURPOSES = ['use', 'inspection'] as const;
 export type WalkaroundPurpose = (typeof WALKAROUND_PURPOSES)[number];
+
+/**
+ * When an item is checked: walking round before start, engine off and key out; or from the seat
+ * with the engine running (brakes, steering, gauges). A stored item without one is before_start.
+ */
+export const CHECKLIST_PHASES = ['before_start', 'running'] as const;
+export type ChecklistPhase = (typeof CHECKLIST_PHASES)[number];
+export const CHECKLIST_PHASE_LABELS: Record<ChecklistPhase, string> = {
+  before_start: 'Before start — engine off, key out',
+  running: 'In the seat, engine running',
+};
 
 export const checklistItemSchema = z.object({
   /** stable within its template; generated from the label when left out */
@@ -39,6 +52,16 @@ export const checklistItemSchema = z.object({
     .default([]),
   /** shown beside the item; left empty, the standard caution of its hazards is used */
   caution: plainText(1200, { multiline: true }).default(''),
+  phase: z
+    .enum(CHECKLIST_PHASES, { error: `Phase must be one of: ${CHECKLIST_PHASES.join(', ')}` })
+    .default('before_start'),
+  /** only on machines of these service-library classes; empty: every machine of the category */
+  classes: z
+    .array(
+      z.enum(MACHINE_CLASSES, { error: `Classes must be among: ${MACHINE_CLASSES.join(', ')}` }),
+    )
+    .max(MACHINE_CLASSES.length)
+    .default([]),
 });
 export type ChecklistItemInput = z.infer<typeof checklistItemSchema>;
 
@@ -121,6 +144,9 @@ export const checklistItemOutSchema = z
     hazards: z.array(z.enum(HAZARDS)),
     /** the server's caution text for the item's hazards (empty when it has none) */
     caution: z.string(),
+    phase: z.enum(CHECKLIST_PHASES),
+    /** only on machines of these classes; empty: every machine of the category */
+    classes: z.array(z.enum(MACHINE_CLASSES)),
   })
   .meta({ id: 'ChecklistItem' });
 export type ChecklistItem = z.infer<typeof checklistItemOutSchema>;
@@ -159,6 +185,8 @@ export const builtInChecklistResponseSchema = z.object({ data: builtInChecklistS
 export const checklistSchema = z.object({
   machine: machineRefSchema.extend({
     lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
+    /** restricted use, with its reason: shown before the walkaround starts */
+    restriction: machineRestrictionSchema.nullable(),
   }),
   purpose: z.enum(WALKAROUND_PURPOSES),
   template: z.object({

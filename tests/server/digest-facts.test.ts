@@ -15,6 +15,7 @@ const row = (due: Partial<DueRow['due']>, dueOnMeter: number | null): DueRow => 
     name: 'Tractor',
     category: 'tractor',
     status: 'in_service',
+    restricted: false,
     meterUnit: 'h',
   },
   due: {

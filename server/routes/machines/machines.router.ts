@@ -36,7 +36,7 @@ export function machinesRouter(): Router {
       await ensureDuePointsCurrent(access.organization.id, access.organization.timeZone);
       const { total, items } = await listMachines(access, query);
       return {
-        data: items.map((i) => presentMachine(i.machine, i)),
+        data: items.map((i) => presentMachine(i.machine, { ...i, via: access.via })),
         meta: { total, page: query.page, pageSize: query.pageSize },
         abilities: { create: canCreateMachine(access) },
       };
@@ -57,7 +57,7 @@ export function machinesRouter(): Router {
       authorize(canCreateMachine(access), 'Only a manager may add machines');
       const machine = await createMachine(access, body);
       return {
-        data: presentMachine(machine, { operatorIds: body.operatorIds }),
+        data: presentMachine(machine, { via: access.via, operatorIds: body.operatorIds }),
         abilities: machineAbilities(access, machine),
       };
     },
@@ -78,6 +78,7 @@ export function machinesRouter(): Router {
       return {
         data: {
           ...presentMachine(machine, {
+            via: access.via,
             operatorIds,
             forecast,
             dueStatus,
@@ -107,7 +108,7 @@ export function machinesRouter(): Router {
       const { operatorIds } = await loadMachine(access, params.machineId);
       const forecast = await forecastOf(machine);
       return {
-        data: presentMachine(machine, { operatorIds, forecast }),
+        data: presentMachine(machine, { via: access.via, operatorIds, forecast }),
         abilities: machineAbilities(access, machine),
       };
     },

@@ -112,6 +112,7 @@ export function readingsRouter(): Router {
             name: i.machine.name,
             meterUnit: i.machine.meterUnit,
             status: i.machine.status,
+            restricted: i.machine.restrictionReason != null,
             category: i.machine.category,
           },
           lastReading: presentLastReading(i.forecast),

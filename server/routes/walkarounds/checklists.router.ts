@@ -20,7 +20,7 @@ import {
   loadChecklistTemplate,
   updateChecklistTemplate,
 } from '../../services/checklist-templates';
-import { defaultChecklist } from '../../services/checklist-defaults';
+import { builtInChecklist } from '../../services/checklist-defaults';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const templateParams = orgParams.extend({ templateId: z.uuid() });
@@ -55,7 +55,7 @@ export function registerChecklistTemplateRoutes(router: Router): void {
     params: orgParams.extend({ category: z.enum(MACHINE_CATEGORIES) }),
     response: builtInChecklistResponseSchema,
     handler: ({ params }) => {
-      const d = defaultChecklist(params.category);
+      const d = builtInChecklist(params.category);
       return {
         data: {
           category: params.category,

@@ -27,6 +27,7 @@ import { taggedOutMessage } from '../../services/defects';
 import { fileUpload } from '../../middlewares/upload';
 import { presentChecklistItem, presentWalkaround } from '../../presenters/walkaround';
 import { presentDefect, presentMachineRef, walkaroundPhotoUrls } from '../../presenters/defect';
+import { presentRestriction } from '../../presenters/machine';
 import { peopleById } from '../../presenters/people';
 import { sendObject } from '../service-records/attachments.router';
 import { registerChecklistTemplateRoutes } from './checklists.router';
@@ -68,6 +69,7 @@ export function walkaroundsRouter(): Router {
               value: lastReading.value,
               takenAt: lastReading.takenAt.toISOString(),
             },
+            restriction: presentRestriction(machine, access.via),
           },
           purpose: query.purpose,
           template: checklist.template,

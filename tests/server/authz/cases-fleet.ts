@@ -87,6 +87,20 @@ export const FLEET_CASES: Record<string, Case> = {
       body: { note: 'Brakes bled and tested on the yard' },
     }),
   },
+  'POST /organizations/{orgId}/machines/{machineId}/restriction': {
+    ids: 'path',
+    build: async (c) => ({
+      params: onMachine(c, c.succeeds ? await freshMachine(c.rec) : c.rec.machine),
+      body: { reason: 'Field only — no road: left flasher out' },
+    }),
+  },
+  'POST /organizations/{orgId}/machines/{machineId}/restriction/lift': {
+    ids: 'path',
+    build: async (c) => ({
+      params: onMachine(c, c.succeeds ? await freshMachine(c.rec, 'restricted') : c.rec.machine),
+      body: { note: 'Flasher bulb replaced' },
+    }),
+  },
   'PUT /organizations/{orgId}/machines/{machineId}/photo': {
     ids: 'path',
     build: (c) => ({ params: onMachine(c), file: png('photo') }),

@@ -101,6 +101,15 @@ export const EXPECTED: Record<string, Row> = {
   'PATCH /organizations/{orgId}/machines/{machineId}': managers,
   'PATCH /organizations/{orgId}/machines/{machineId} · tag out': managers,
   'POST /organizations/{orgId}/machines/{machineId}/return-to-service': shop,
+  // restricted use: the farm's shop sets and lifts it; a linked dealer reaches it only to be told no
+  'POST /organizations/{orgId}/machines/{machineId}/restriction': row(SHOP, [
+    'operator',
+    ...LINKED,
+  ]),
+  'POST /organizations/{orgId}/machines/{machineId}/restriction/lift': row(SHOP, [
+    'operator',
+    ...LINKED,
+  ]),
   'PUT /organizations/{orgId}/machines/{machineId}/photo': managers,
   'GET /organizations/{orgId}/machines/{machineId}/photo': read,
   'DELETE /organizations/{orgId}/machines/{machineId}/photo': managers,

@@ -20,9 +20,12 @@ import type { FarmWorld } from './world';
 let n = 0;
 const next = () => ++n;
 
-export async function freshMachine(farm: FarmWorld, status?: 'tagged_out') {
+/** A machine of its own: tagged out, or in service with a restriction, when asked. */
+export async function freshMachine(farm: FarmWorld, state?: 'tagged_out' | 'restricted') {
   const machine = await machineWithReadings(farm.org, `N-${next()}`);
-  if (status) await machine.update({ status });
+  if (state === 'tagged_out') await machine.update({ status: state });
+  if (state === 'restricted')
+    await machine.update({ restrictionReason: 'Field only — no road', restrictedAt: new Date() });
   return machine;
 }
 

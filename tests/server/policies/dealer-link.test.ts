@@ -95,6 +95,9 @@ describe('policies/dealer-link — dealerMayReach (the allow-list), by link acce
     ['GET', `${o}/service-records/:recordId/attachments/:attachmentId`, N, Y],
     ['GET', `${o}/machines/:machineId/measurements`, N, Y],
     ['GET', `${o}/machines/:machineId/measurements/series`, N, Y],
+    // reached only to be refused by role (403 with words), never to change anything
+    ['POST', `${o}/machines/:machineId/restriction`, Y, Y],
+    ['POST', `${o}/machines/:machineId/restriction/lift`, Y, Y],
     // The farm's own: schedule edits, readings entry, defects, walkarounds, team, settings.
     ['PATCH', `${o}/machines/:machineId`, N, N],
     ['POST', `${o}/machines`, N, N],

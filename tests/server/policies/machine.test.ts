@@ -14,6 +14,7 @@ import {
   canImportReadings,
   canLogReading,
   canReplaceMeter,
+  canRestrict,
   canReturnToService,
   canSetLastDone,
   canUpdateMachine,
@@ -27,6 +28,7 @@ const machine = (status: MachineStatus) => ({ id: 'machine-1', status }) as Mach
 const inService = machine('in_service');
 const taggedOut = machine('tagged_out');
 const sold = machine('sold');
+const restricted = { ...inService, restrictionReason: 'Field only — no road' } as Machine;
 
 const POLICIES = {
   'view machine assigned to operator A': (a: OrgAccess) =>
@@ -48,6 +50,14 @@ const POLICIES = {
   'abilities.returnToService, in service': (a: OrgAccess) =>
     machineAbilities(a, inService).returnToService,
   'abilities.logReading, sold': (a: OrgAccess) => machineAbilities(a, sold).logReading,
+  'set or lift a restriction': canRestrict,
+  'abilities.restrict, in service': (a: OrgAccess) => machineAbilities(a, inService).restrict,
+  'abilities.restrict, tagged out': (a: OrgAccess) => machineAbilities(a, taggedOut).restrict,
+  'abilities.restrict, sold': (a: OrgAccess) => machineAbilities(a, sold).restrict,
+  'abilities.liftRestriction, restricted': (a: OrgAccess) =>
+    machineAbilities(a, restricted).liftRestriction,
+  'abilities.liftRestriction, not restricted': (a: OrgAccess) =>
+    machineAbilities(a, inService).liftRestriction,
 };
 
 // Columns: manager, technician, operator (assigned), operator (not assigned), dealer (view link),
@@ -69,6 +79,13 @@ const TABLE: Record<keyof typeof POLICIES, Row> = {
   'abilities.returnToService, tagged out': [Y, Y, N, N, N, N, N, N],
   'abilities.returnToService, in service': [N, N, N, N, N, N, N, N],
   'abilities.logReading, sold': [N, N, N, N, N, N, N, N],
+  // restricted use: the farm's shop only; operators report a defect, dealers never
+  'set or lift a restriction': [Y, Y, N, N, N, N, N, N],
+  'abilities.restrict, in service': [Y, Y, N, N, N, N, N, N],
+  'abilities.restrict, tagged out': [Y, Y, N, N, N, N, N, N],
+  'abilities.restrict, sold': [N, N, N, N, N, N, N, N],
+  'abilities.liftRestriction, restricted': [Y, Y, N, N, N, N, N, N],
+  'abilities.liftRestriction, not restricted': [N, N, N, N, N, N, N, N],
 };
 
 describe('policies/machine — on the farm', () => {
@@ -88,6 +105,8 @@ describe('policies/machine — machineAbilities, whole objects', () => {
       correctReading: true,
       replaceMeter: true,
       returnToService: true,
+      restrict: true,
+      liftRestriction: false,
     });
   });
 
@@ -101,6 +120,8 @@ describe('policies/machine — machineAbilities, whole objects', () => {
       correctReading: false,
       replaceMeter: false,
       returnToService: false,
+      restrict: false,
+      liftRestriction: false,
     });
   });
 
@@ -114,6 +135,8 @@ describe('policies/machine — machineAbilities, whole objects', () => {
       correctReading: false,
       replaceMeter: false,
       returnToService: false,
+      restrict: false,
+      liftRestriction: false,
     });
   });
 });

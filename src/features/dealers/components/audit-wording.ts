@@ -24,6 +24,8 @@ const ACTIONS: Record<string, string> = {
   'machine.tag_out': 'tagged a machine out',
   'machine.return_to_service': 'returned a machine to service',
   'machine.clear_tag_out': 'cleared a machine’s tag-out',
+  'machine.restrict': 'restricted a machine’s use',
+  'machine.lift_restriction': 'lifted a machine’s restriction',
   'defect.report': 'reported a defect',
   'defect.update': 'updated a defect',
   'defect.close': 'closed a defect',

@@ -14,14 +14,19 @@ export const getLabelMachine = (orgId: string, machineId: string, signal?: Abort
     .get<MachineDetail>(`/organizations/${segment(orgId)}/machines/${segment(machineId)}`, {
       signal,
     })
-    .then(({ data: { id, fleetNumber, name, category, status, meterUnit } }): MachineRef => ({
-      id,
-      fleetNumber,
-      name,
-      category,
-      status,
-      meterUnit,
-    }));
+    .then(
+      ({
+        data: { id, fleetNumber, name, category, status, restriction, meterUnit },
+      }): MachineRef => ({
+        id,
+        fleetNumber,
+        name,
+        category,
+        status,
+        restricted: restriction !== null,
+        meterUnit,
+      }),
+    );
 
 export const labelMachineQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({
