@@ -14,6 +14,8 @@ export const presentParts = (parts: StoredTaskPart[]): Task['parts'] =>
     description: p.description,
     quantity: p.quantity,
     wearPart: p.wearPart === true,
+    // a line the machine's spec sheet fills says which filter it is
+    ...(p.filterRole && { filterRole: p.filterRole }),
   }));
 
 export const presentTask = (t: ServiceTask, due: DuePoint | null): Task => ({

@@ -3,36 +3,14 @@
 // The routes come from the OpenAPI document, and each field of each update schema needs a case
 // below, so a new PATCH route or field without one fails here.
 import { beforeAll, describe, expect, it } from 'vitest';
-import { QueryTypes } from 'sequelize';
 import { createApp } from '../../server/app';
-import { buildOpenApiDocument } from '../../server/openapi';
-import { sequelize } from '../../server/db';
 import { todayIso } from '../../shared/domain';
 import { buildPopulatedWorld, type PopulatedWorld } from '../support/populated-world';
+import { patchPaths, snapshot, without, type PatchRoute } from './patch-roundtrip-rows';
 
 const app = createApp();
 const DAY = 86_400_000;
 const daysFromToday = (n: number) => todayIso('America/Chicago', new Date(Date.now() + n * DAY));
-
-type Ids = PopulatedWorld['ids'];
-interface FieldCase {
-  /** the one field sent */
-  field: string;
-  value: (ids: Ids) => unknown;
-  /** the row's columns this field is stored in (default: the field in snake_case) */
-  columns?: string[];
-  /** child tables this field is stored in instead (their rows for the record may change) */
-  children?: string[];
-}
-interface PatchRoute {
-  table: string;
-  /** the row's id */
-  id: (w: PopulatedWorld) => string;
-  url: (w: PopulatedWorld) => string;
-  /** child tables holding parts of the record: (table, column naming the record) */
-  children?: [string, string][];
-  cases: FieldCase[];
-}
 
 const snake = (s: string) => s.replace(/[A-Z]/g, (c) => `_${c.toLowerCase()}`);
 const farm = (w: PopulatedWorld, rest: string) => `/api/v1/organizations/${w.farmId}${rest}`;
@@ -59,6 +37,23 @@ const ROUTES: Record<string, PatchRoute> = {
       { field: 'operatorIds', value: v([]), children: ['machine_operators'] },
       { field: 'notes', value: v('Cab filter due.') },
       { field: 'status', value: v('sold') },
+    ],
+  },
+  '/organizations/{orgId}/machines/{machineId}/spec-sheet': {
+    table: 'machine_spec_sheets',
+    idColumn: 'machine_id',
+    id: (w) => w.ids.machineId,
+    url: (w) => farm(w, `/machines/${w.ids.machineId}/spec-sheet`),
+    cases: [
+      { field: 'capacities', value: v({ coolant: { quantity: 28, unit: 'L' } }) },
+      { field: 'filters', value: v({ cab: 'BR-CF-7' }) },
+      { field: 'tyrePressures', value: v({ rear: { value: 140, unit: 'kPa' } }) },
+      { field: 'notes', value: v('From the dealer.') },
+      // the populated sheet's lists are emptied
+      ...['extraCapacities', 'extraFilters', 'torques', 'testPressures'].map((field) => ({
+        field,
+        value: v([]),
+      })),
     ],
   },
   '/organizations/{orgId}/tasks/{taskId}': {
@@ -189,48 +184,6 @@ const ROUTES: Record<string, PatchRoute> = {
     url: () => '/api/v1/account',
     cases: [{ field: 'name', value: v('Ridgeback Manager') }],
   },
-};
-
-/** Every column of one stored row, as JSON text (dates as ISO, numerics as PostgreSQL prints them). */
-async function storedRow(table: string, id: string): Promise<Record<string, string>> {
-  const [row] = await sequelize.query<Record<string, unknown>>(
-    `SELECT * FROM "${table}" WHERE id = :id`,
-    { replacements: { id }, type: QueryTypes.SELECT },
-  );
-  if (!row) throw new Error(`no ${table} row ${id}`);
-  return Object.fromEntries(Object.entries(row).map(([k, val]) => [k, JSON.stringify(val)]));
-}
-
-async function childRows(table: string, column: string, id: string) {
-  const rows = await sequelize.query<Record<string, unknown>>(
-    `SELECT * FROM "${table}" WHERE "${column}" = :id ORDER BY 1`,
-    { replacements: { id }, type: QueryTypes.SELECT },
-  );
-  return JSON.stringify(rows);
-}
-
-const without = (row: Record<string, string>, columns: string[]) =>
-  Object.fromEntries(Object.entries(row).filter(([k]) => !columns.includes(k)));
-
-async function snapshot(route: PatchRoute, w: PopulatedWorld) {
-  const row = await storedRow(route.table, route.id(w));
-  const children: Record<string, string> = {};
-  for (const [table, column] of route.children ?? [])
-    children[table] = await childRows(table, column, route.id(w));
-  return { row, children };
-}
-
-const patchPaths = () => {
-  const doc = buildOpenApiDocument() as unknown as {
-    paths: Record<string, Record<string, { requestBody?: { content: Record<string, unknown> } }>>;
-  };
-  return Object.entries(doc.paths)
-    .filter(([, ops]) => ops.patch)
-    .map(([path, ops]) => {
-      const body = ops.patch.requestBody?.content['application/json'] as
-        { schema: { properties?: Record<string, unknown> } } | undefined;
-      return { path, fields: Object.keys(body?.schema.properties ?? {}) };
-    });
 };
 
 describe('PATCH round-trip — a one-field update leaves every other stored column as it was', () => {

@@ -124,6 +124,17 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
     name: 'Hydraulic filters',
     hazards: ['hydraulic_pressure'],
   });
+  // a spec sheet with every section filled (the tasks' own lines stand: none is changed)
+  await send(agent, 'patch', `${m}/spec-sheet`, {
+    capacities: { engineOil: { quantity: 18, unit: 'L', spec: 'SAE 15W-40' } },
+    extraCapacities: [{ name: 'Front PTO gearbox', quantity: 1.2, unit: 'L' }],
+    filters: { engineOil: 'OF-100' },
+    extraFilters: [{ name: 'Hydraulic breather', partNumber: 'HB-2' }],
+    tyrePressures: { front: { value: 160, unit: 'kPa' } },
+    torques: [{ name: 'Wheel nuts', value: 650, unit: 'Nm' }],
+    testPressures: [{ name: 'PTO clutch pressure', min: 2000, max: 2200, unit: 'kPa' }],
+    notes: "From the operator's manual.",
+  });
   const defect = await send(agent, 'post', `${m}/defects`, {
     title: 'Left work light flickers',
     description: 'Loose connector behind the cab pillar.',

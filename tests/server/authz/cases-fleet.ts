@@ -210,6 +210,14 @@ export const FLEET_CASES: Record<string, Case> = {
       body: { machineClass: 'implement' },
     }),
   },
+  'GET /organizations/{orgId}/machines/{machineId}/spec-sheet': {
+    ids: 'path',
+    build: (c) => ({ params: onMachine(c) }),
+  },
+  'PATCH /organizations/{orgId}/machines/{machineId}/spec-sheet': {
+    ids: 'path',
+    build: (c) => ({ params: onMachine(c), body: { notes: "From the operator's manual" } }),
+  },
   // readings
   'GET /organizations/{orgId}/machines/{machineId}/readings': {
     ids: 'path',

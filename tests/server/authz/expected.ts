@@ -129,6 +129,9 @@ export const EXPECTED: Record<string, Row> = {
   'POST /organizations/{orgId}/schedule-templates': managers,
   'POST /organizations/{orgId}/machines/{machineId}/apply-template': shop,
   'POST /organizations/{orgId}/machines/{machineId}/apply-class': shop,
+  // the spec sheet: read as the machine is; written by the farm's shop, never a dealer
+  'GET /organizations/{orgId}/machines/{machineId}/spec-sheet': read,
+  'PATCH /organizations/{orgId}/machines/{machineId}/spec-sheet': shop,
   // readings
   'GET /organizations/{orgId}/machines/{machineId}/readings': read,
   'POST /organizations/{orgId}/machines/{machineId}/readings': farmOnly,
