@@ -115,6 +115,8 @@ describe('dealer access to a linked farm', () => {
       correctReading: false,
       replaceMeter: false,
       returnToService: false,
+      restrict: false,
+      liftRestriction: false,
     });
     for (const path of [
       `/machines/${machine.id}/service-records`,
