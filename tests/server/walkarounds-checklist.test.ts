@@ -8,7 +8,7 @@ import {
   createTask,
   signedInAgent,
 } from '../support/factories';
-import { MachineOperator } from '../../server/models';
+import { ChecklistTemplate, MachineOperator } from '../../server/models';
 import { app, submission, yard } from './walkarounds-fixture';
 
 const DEFER = "Follow the operator's manual, local regulations and qualified service practice.";
@@ -71,6 +71,95 @@ describe('walkarounds — checklist', () => {
     for (const i of items.filter((x: { hazards: string[] }) => x.hazards.length))
       expect(i.caution.endsWith(DEFER)).toBe(true);
     expect(res.body.data.criticalNote).toMatch(/tags the machine out/);
+    // walked round first (engine off, key out), then from the seat: the published "oil pressure
+    // after start" and "lights" need the engine running; brakes and steering are common practice
+    const phases = items.map((i: { phase: string }) => i.phase);
+    const seat = phases.indexOf('running');
+    expect(phases.slice(0, seat).every((p: string) => p === 'before_start')).toBe(true);
+    expect(phases.slice(seat).every((p: string) => p === 'running')).toBe(true);
+    for (const id of [
+      'oil-pressure',
+      'lights',
+      'brakes',
+      'parking-brake',
+      'brake-pedal-latch',
+      'steering',
+    ])
+      expect(byId[id].phase).toBe('running');
+    expect(byId['engine-oil'].phase).toBe('before_start');
+    // T-01 has no class: the loader tractor's items stay out
+    expect(byId['loader-lowered']).toBeUndefined();
+  });
+
+  it("checklist — a machine's class adds its items: a loader tractor's loader, on the built-in list and on the farm's", async () => {
+    const y = await yard();
+    await y.machine.update({ machineClass: 'utility_loader_tractor' });
+    const res = await y.opAgent.get(y.checklistUrl);
+    const ids = res.body.data.items.map((i: { id: string }) => i.id);
+    expect(ids[0]).toBe('loader-lowered');
+    expect(ids).toEqual(expect.arrayContaining(['loader-pins', 'loader-hoses', 'tool-lock']));
+    // the editor's built-in list holds every class's items, each saying its class
+    const managerAgent = await signedInAgent(app, y.manager);
+    const builtIn = await managerAgent.get(`${y.base}/checklist-templates/built-in/tractor`);
+    const toolLock = builtIn.body.data.items.find((i: { id: string }) => i.id === 'tool-lock');
+    expect(toolLock).toMatchObject({ classes: ['utility_loader_tractor'], phase: 'before_start' });
+    // the farm's own list: phase and classes kept; an item for another class is left out
+    const created = await managerAgent.post(`${y.base}/checklist-templates`).send({
+      category: 'tractor',
+      name: 'Our tractor check',
+      items: [
+        { label: 'Engine oil level' },
+        { label: 'Loader pins', classes: ['utility_loader_tractor'] },
+        { label: 'Front weights', classes: ['row_crop_tractor'] },
+        { label: 'Steering free play', phase: 'running', critical: true },
+      ],
+    });
+    expect(created.status).toBe(201);
+    expect(created.body.data.items[3]).toMatchObject({ phase: 'running', classes: [] });
+    const walked = (await y.opAgent.get(y.checklistUrl)).body.data.items;
+    expect(walked.map((i: { id: string }) => i.id)).toEqual([
+      'engine-oil-level',
+      'loader-pins',
+      'steering-free-play',
+    ]);
+    const bad = await managerAgent
+      .patch(`${y.base}/checklist-templates/${created.body.data.id}`)
+      .send({
+        items: [
+          { label: 'Brakes', phase: 'moving' },
+          { label: 'Pins', classes: ['crane'] },
+        ],
+      });
+    expect(bad.status).toBe(400);
+    expect(bad.body.error.fields['items.0.phase']).toBe(
+      'Phase must be one of: before_start, running',
+    );
+    expect(bad.body.error.fields['items.1.classes.0']).toMatch(
+      /^Classes must be among: row_crop_tractor/,
+    );
+  });
+
+  it('checklist — an item stored before phases (no phase, no classes) is walked before start', async () => {
+    const y = await yard();
+    await ChecklistTemplate.create({
+      organizationId: y.org.id,
+      category: 'tractor',
+      name: 'Old list',
+      items: [
+        {
+          id: 'horn',
+          label: 'Horn works',
+          guidance: '',
+          critical: false,
+          hazards: [],
+          caution: '',
+        },
+      ],
+    });
+    const res = await y.opAgent.get(y.checklistUrl);
+    expect(res.body.data.items).toEqual([
+      expect.objectContaining({ id: 'horn', phase: 'before_start', classes: [] }),
+    ]);
   });
 
   it('checklist — an operator cannot see a machine they are not assigned to (404, not_assigned with its fleet number) nor edit schedules (403)', async () => {
