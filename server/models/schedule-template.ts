@@ -7,7 +7,7 @@ import {
 } from 'sequelize';
 import { sequelize } from '../db';
 import type { MachineCategory } from '../../shared/constants';
-import type { TaskInput } from '../../shared/schemas/schedule';
+import type { StoredTaskInput } from '../../shared/schemas/schedule';
 
 export class ScheduleTemplate extends Model<
   InferAttributes<ScheduleTemplate>,
@@ -18,7 +18,7 @@ export class ScheduleTemplate extends Model<
   declare category: MachineCategory;
   declare name: string;
   declare description: CreationOptional<string>;
-  declare tasks: CreationOptional<TaskInput[]>;
+  declare tasks: CreationOptional<StoredTaskInput[]>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }

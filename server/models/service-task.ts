@@ -8,6 +8,7 @@ import {
 import { sequelize } from '../db';
 import { numericColumn } from './columns';
 import type { StoredTaskPart, TaskFluid } from '../../shared/schemas/schedule';
+import type { SeasonAnchor } from '../../shared/domain/season-dates';
 
 export class ServiceTask extends Model<
   InferAttributes<ServiceTask>,
@@ -36,6 +37,9 @@ export class ServiceTask extends Model<
   /** "start counting from now" in place of an unknown last service: lifetime meter and ISO date */
   declare countFromMeter: CreationOptional<number | null>;
   declare countFromOn: CreationOptional<string | null>;
+  /** season service: due seasonOffsetDays before the machine's season starts or after it ends */
+  declare seasonAnchor: CreationOptional<SeasonAnchor | null>;
+  declare seasonOffsetDays: CreationOptional<number | null>;
   declare position: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -63,6 +67,8 @@ ServiceTask.init(
     historyUnknown: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     countFromMeter: numericColumn('countFromMeter', 14, 2, true),
     countFromOn: { type: DataTypes.DATEONLY, allowNull: true },
+    seasonAnchor: { type: DataTypes.TEXT, allowNull: true },
+    seasonOffsetDays: { type: DataTypes.INTEGER, allowNull: true },
     position: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
     createdAt: DataTypes.DATE,
     updatedAt: DataTypes.DATE,

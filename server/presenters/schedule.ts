@@ -34,6 +34,8 @@ export const presentTask = (t: ServiceTask, due: DuePoint | null): Task => ({
   safetyNotes: t.safetyNotes,
   // The column holds only what the task schema let in.
   hazards: t.hazards as Hazard[],
+  seasonAnchor: t.seasonAnchor ?? null,
+  seasonOffsetDays: t.seasonOffsetDays ?? null,
   lastDoneMeter: t.lastDoneMeter,
   lastDoneOn: t.lastDoneOn,
   countFromMeter: t.countFromMeter ?? null,
@@ -46,5 +48,11 @@ export const presentTemplate = (t: ScheduleTemplate): ScheduleTemplateJson => ({
   category: t.category,
   name: t.name,
   description: t.description,
-  tasks: t.tasks.map((task) => ({ ...task, parts: presentParts(task.parts) })),
+  tasks: t.tasks.map((task) => ({
+    ...task,
+    parts: presentParts(task.parts),
+    // templates stored before season services have neither key
+    seasonAnchor: task.seasonAnchor ?? null,
+    seasonOffsetDays: task.seasonOffsetDays ?? null,
+  })),
 });

@@ -22,6 +22,8 @@ export function task(fields: Partial<TaskInput> & Pick<TaskInput, 'name'>): Task
     labourHours: null,
     instructions: '',
     hazards,
+    seasonAnchor: null,
+    seasonOffsetDays: null,
     ...fields,
     safetyNotes: fields.safetyNotes ?? '',
   };

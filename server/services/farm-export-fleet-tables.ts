@@ -113,6 +113,8 @@ export const FLEET_TABLES: readonly ExportTable[] = [
       ['instructions', 'instructions'],
       ['safety_notes', 'safety notes'],
       ['hazards', 'hazards, as a JSON array of words'],
+      ['season_anchor', 'season service: before_start or after_end, empty if none'],
+      ['season_offset_days', 'days before the season starts or after it ends'],
       ['last_done_meter', 'meter value when it was last done'],
       ['last_done_on', 'date it was last done (yyyy-mm-dd)'],
       ['position', 'order on the machine’s schedule'],

@@ -75,13 +75,17 @@ export async function refreshMachineForecast(
   await recomputeDuePoints(organizationId, [machineId], { transaction, timeZone: org.timeZone });
 }
 
-/** The due point of each task of one machine, from its summary, as of a local date. */
+/**
+ * The due point of each task of one machine, from its summary, as of a local date; the machine's
+ * season months (1–12, [] = all year) date its season services.
+ */
 export function duePointsFor(
   forecast: Pick<MachineForecast, 'daily' | 'lastValue' | 'firstTakenAt' | 'firstValue'> | null,
   tasks: ServiceTask[],
   timeZone: string,
   asOfIso: string,
   now: Date,
+  seasonMonths: readonly number[] = [],
 ): { usage: UsageEstimate; points: Map<string, DuePoint> } {
   const daily = forecast?.daily ?? [];
   const usage = estimateUsage(daily, localDayNumber(now, timeZone));
@@ -107,11 +111,14 @@ export function duePointsFor(
           countFromMeter: task.countFromMeter,
           countFromOn: task.countFromOn,
           historyUnknown: task.historyUnknown && cameWithHours,
+          seasonAnchor: task.seasonAnchor ?? null,
+          seasonOffsetDays: task.seasonOffsetDays ?? null,
         },
         usage,
         asOfIso,
         forecast?.lastValue ?? null,
         startIso,
+        seasonMonths,
       ),
     );
   }
@@ -135,9 +142,14 @@ export async function recomputeDuePoints(
     'UTC';
   const asOfIso = todayIso(timeZone, now);
   const machineWhere = { organizationId, ...(machineIds && { id: { [Op.in]: machineIds } }) };
-  const machines = await Machine.findAll({ where: machineWhere, attributes: ['id'], transaction });
+  const machines = await Machine.findAll({
+    where: machineWhere,
+    attributes: ['id', 'seasonMonths'],
+    transaction,
+  });
   if (!machines.length) return;
   const ids = machines.map((m) => m.id);
+  const seasonOf = new Map(machines.map((m) => [m.id, m.seasonMonths]));
   const [forecasts, tasks] = await Promise.all([
     MachineForecast.findAll({
       where: { organizationId, machineId: { [Op.in]: ids } },
@@ -153,7 +165,14 @@ export async function recomputeDuePoints(
   const usageRows: InferCreationAttributes<MachineForecast>[] = [];
   for (const id of ids) {
     const forecast = forecastOf.get(id) ?? null;
-    const { usage, points } = duePointsFor(forecast, tasksOf.get(id) ?? [], timeZone, asOfIso, now);
+    const { usage, points } = duePointsFor(
+      forecast,
+      tasksOf.get(id) ?? [],
+      timeZone,
+      asOfIso,
+      now,
+      seasonOf.get(id) ?? [],
+    );
     usageRows.push({
       machineId: id,
       organizationId,

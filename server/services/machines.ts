@@ -11,7 +11,7 @@ import type { OrgAccess } from '../policies/access';
 import { hasRole } from '../policies/access';
 import { canViewMachine } from '../policies/machine';
 import { recordAudit } from '../infra/audit';
-import { refreshMachineForecast } from './forecast';
+import { recomputeDuePoints, refreshMachineForecast } from './forecast';
 import { applyStatusEdit } from './machine-status';
 
 export async function operatorIdsOf(
@@ -254,6 +254,12 @@ export async function updateMachine(
       Object.keys(fields).map((k) => [k, machine.get(k as keyof Machine)]),
     );
     await machine.update(fields, { transaction });
+    // the season months date the machine's season services
+    if (fields.seasonMonths !== undefined)
+      await recomputeDuePoints(access.organization.id, [machine.id], {
+        transaction,
+        timeZone: access.organization.timeZone,
+      });
     if (operatorIds !== undefined) await setOperators(access, machine.id, operatorIds, transaction);
     await recordAudit(
       {

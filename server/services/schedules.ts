@@ -2,7 +2,8 @@ import type { Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { invalid, notFound } from '../errors';
 import { Machine, MachineForecast, ServiceTask, TaskDuePoint } from '../models';
-import type { LastDoneInput, TaskInput } from '../../shared/schemas/schedule';
+import type { LastDoneInput, StoredTaskInput, TaskInput } from '../../shared/schemas/schedule';
+import { taskTimingProblems, type TaskTiming } from '../../shared/schemas/task-season';
 import { todayIso } from '../../shared/domain';
 import type { OrgAccess } from '../policies/access';
 import { recordAudit } from '../infra/audit';
@@ -47,7 +48,7 @@ const refresh = (access: OrgAccess, machineId: string, transaction: Transaction)
 export async function addTasks(
   access: OrgAccess,
   machine: Machine,
-  inputs: TaskInput[],
+  inputs: StoredTaskInput[],
   action = 'task.create',
   outer?: Transaction,
 ): Promise<ServiceTask[]> {
@@ -79,13 +80,22 @@ export async function addTasks(
   return tasks;
 }
 
+/** The task's timing as it would stand with the fields sent merged into the stored ones. */
+function timingAfter(task: ServiceTask, input: Partial<TaskInput>): TaskTiming {
+  const after = <K extends keyof TaskTiming>(key: K): TaskTiming[K] =>
+    input[key] !== undefined ? (input[key] as TaskTiming[K]) : (task[key] ?? null);
+  return {
+    intervalMeter: after('intervalMeter'),
+    intervalDays: after('intervalDays'),
+    seasonAnchor: after('seasonAnchor'),
+    seasonOffsetDays: after('seasonOffsetDays'),
+  };
+}
+
 export async function updateTask(access: OrgAccess, task: ServiceTask, input: Partial<TaskInput>) {
-  const intervalMeter =
-    input.intervalMeter !== undefined ? input.intervalMeter : task.intervalMeter;
-  const intervalDays = input.intervalDays !== undefined ? input.intervalDays : task.intervalDays;
-  if (intervalMeter === null && intervalDays === null) {
-    throw invalid({ intervalMeter: 'Give a meter interval, a day interval, or both' });
-  }
+  // e.g. a season sent to a task that keeps its day interval: 422 naming intervalDays
+  const problems = taskTimingProblems(timingAfter(task, input));
+  if (Object.keys(problems).length) throw invalid(problems);
   return sequelize.transaction(async (transaction) => {
     const before = Object.fromEntries(
       Object.keys(input).map((k) => [k, task.get(k as keyof ServiceTask)]),

@@ -2,6 +2,12 @@ import { z } from 'zod';
 import { MACHINE_CATEGORIES } from '../constants';
 import { boundedNumber, isoDate, PAST_DATES, plainText } from './common';
 import { duePointSchema } from './due';
+import {
+  checkTaskTiming,
+  seasonTaskDefaults,
+  seasonTaskFields,
+  storedSeasonFields,
+} from './task-season';
 import { CAPACITY_KEYS, FILTER_ROLES } from './spec-keys';
 
 /**
@@ -98,12 +104,8 @@ const taskFields = {
       error: 'Hazards must be a list',
     })
     .max(HAZARDS.length, { error: `At most ${HAZARDS.length} hazards` }),
-};
-
-const atLeastOneInterval = {
-  check: (t: { intervalMeter: number | null; intervalDays: number | null }) =>
-    t.intervalMeter !== null || t.intervalDays !== null,
-  params: { error: 'Give a meter interval, a day interval, or both', path: ['intervalMeter'] },
+  /** pre-season / storage service: due days before the season starts or after it ends */
+  ...seasonTaskFields,
 };
 
 export const taskInputSchema = z
@@ -120,9 +122,15 @@ export const taskInputSchema = z
     instructions: taskFields.instructions.default(''),
     safetyNotes: taskFields.safetyNotes.default(''),
     hazards: taskFields.hazards.default([]),
+    ...seasonTaskDefaults,
   })
-  .refine(atLeastOneInterval.check, atLeastOneInterval.params);
+  // an interval or a season, and a season without a day interval (task-season.ts)
+  .superRefine(checkTaskTiming);
 export type TaskInput = z.infer<typeof taskInputSchema>;
+/** A task as a template stores it: rows written before season services have no season fields. */
+export type StoredTaskInput = Omit<TaskInput, SeasonFieldName> &
+  Partial<Pick<TaskInput, SeasonFieldName>>;
+type SeasonFieldName = 'seasonAnchor' | 'seasonOffsetDays';
 
 /** Only the fields sent; an unknown field is refused by name. */
 export const taskUpdateSchema = z.object(taskFields).partial().strict();
@@ -180,6 +188,7 @@ const storedTaskFields = {
   instructions: z.string(),
   safetyNotes: z.string(),
   hazards: z.array(z.enum(HAZARDS)),
+  ...storedSeasonFields,
 };
 
 /** One line of a machine's schedule, with the due point the server computed for it. */

@@ -64,6 +64,13 @@ const ROUTES: Record<string, PatchRoute> = {
       { field: 'name', value: v('Engine oil, filter and breather') },
       { field: 'intervalMeter', value: v(6000) },
       { field: 'intervalDays', value: v(null) },
+      // a season service takes no day interval (cleared just above); anchor and days go together
+      {
+        field: 'seasonAnchor',
+        value: v('before_start'),
+        setup: () => ({ seasonAnchor: 'after_end', seasonOffsetDays: 14 }),
+      },
+      { field: 'seasonOffsetDays', value: v(21) },
       { field: 'firstServiceMeter', value: v(600) },
       { field: 'warnMeter', value: v(300) },
       { field: 'warnDays', value: v(30) },
@@ -203,6 +210,10 @@ describe('PATCH round-trip — a one-field update leaves every other stored colu
     route.cases.map((c) => ({ path, route, c })),
   );
   it.each(cases)('PATCH $path — only $c.field changes', async ({ route, c }) => {
+    if (c.setup) {
+      const setup = await w.manager.patch(route.url(w)).send(c.setup(w.ids));
+      expect(setup.status, JSON.stringify(setup.body)).toBe(200);
+    }
     const before = await snapshot(route, w);
     const res = await w.manager.patch(route.url(w)).send({ [c.field]: c.value(w.ids) });
     expect(res.status, JSON.stringify(res.body)).toBe(200);

@@ -33,6 +33,8 @@ export function libTask(fields: Fields): TaskInput {
     labourHours: null,
     safetyNotes: '',
     hazards: [],
+    seasonAnchor: null,
+    seasonOffsetDays: null,
     ...fields,
     instructions: `${fields.instructions}\n\n${COMMON_PRACTICE_NOTE}`,
   };

@@ -11,6 +11,7 @@ import {
   wear,
   wheelNuts,
 } from './common';
+import { harvestPreSeason, harvestStorage, preSeasonService, storageService } from './season';
 
 const RINSED =
   'Rinse the tank, pump, lines and boom with clean water first; wear the gloves and eye protection the product labels name. ';
@@ -59,20 +60,19 @@ function sprayer(): TaskInput[] {
       parts: [wear('Pump diaphragm or seal kit, as worn')],
       instructions: `${RINSED}Check the pump's oil (diaphragm pumps) for milky colour, a sign of a split diaphragm; check seals and the pressure regulator.`,
     }),
-    libTask({
+    preSeasonService(14, {
       name: 'Pre-season calibration',
-      intervalDays: 365,
       labourHours: 2,
       hazards: ['chemicals'],
       instructions:
-        'Before the season: check the rate controller against a measured output with clean water, the speed sensor against a measured distance, and the pressure gauge.',
+        'Two weeks before the season: check the rate controller against a measured output with clean water, the speed sensor against a measured distance, and the pressure gauge.',
     }),
-    libTask({
+    // within a week of the season's end: before the first frost splits a pump or a valve
+    storageService(7, {
       name: 'Storage: flush and winterise the plumbing',
-      intervalDays: 365,
       labourHours: 2,
       hazards: ['chemicals'],
-      instructions: `${RINSED}Flush with a tank cleaner, then run antifreeze (as the manual allows) through the pump, lines and nozzles before frost.`,
+      instructions: `${RINSED}Flush with a tank cleaner the product labels allow and rinse again, then run antifreeze of a type the manual allows through the pump, filters, lines and every boom section until it shows at the nozzles. Catch the rinse water and antifreeze and dispose of them as the labels and local rules say, never into a drain or watercourse; wash gloves and boots after.`,
     }),
     wheelMotors(),
     wheelNuts(),
@@ -110,6 +110,13 @@ function windrower(): TaskInput[] {
     gearboxOil('Header gearbox oil', 'Header drive gearboxes and the wobble box.'),
     wheelMotors(),
     wheelNuts(),
+    harvestPreSeason(
+      'check the knife, guards and hold-downs, the conditioner rolls or tines, the reel or draper belts.',
+    ),
+    harvestStorage(
+      'Storage service',
+      'clean crop out of the header, conditioner and draper (it holds moisture), oil the knife against rust.',
+    ),
     ...calendarTasks(`${INSPECT_SELF_PROPELLED} Header locks and knife guards.`),
   ];
 }

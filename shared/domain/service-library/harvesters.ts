@@ -11,6 +11,7 @@ import {
   wear,
   wheelNuts,
 } from './common';
+import { harvestPreSeason, harvestStorage } from './season';
 
 const LOCK_OUT = 'Stop the engine, take the key and wait until every drive has stopped. ';
 
@@ -74,14 +75,13 @@ function combine(): TaskInput[] {
     ),
     finalDrives(),
     wheelNuts(),
-    libTask({
-      name: 'Storage: clean out and protect',
-      intervalDays: 365,
-      labourHours: 6,
-      hazards: ['raised_load'],
-      instructions:
-        'After harvest: clean out grain and chaff everywhere, run the machine empty, slacken belts, oil chains, grease everything, touch up paint; header down on blocks.',
-    }),
+    harvestPreSeason(
+      'check the header knife, guards, reel tines and auger fingers; set the concave and sieves for the first crop and check the rasp bars or rotor elements.',
+    ),
+    harvestStorage(
+      'Storage: clean out and protect',
+      'clean grain and chaff out of the tank, elevators, sieves, returns and header (they draw moisture and rodents), run the machine empty to clear the augers, touch up bare paint.',
+    ),
     ...calendarTasks(
       `${INSPECT_SELF_PROPELLED} Header lock, unloading auger guards, fire-risk areas.`,
     ),
@@ -125,6 +125,13 @@ function forageHarvester(): TaskInput[] {
     gearboxOil('Feed roll and header gearbox oil', 'Feed roll gearbox and the header drives.'),
     finalDrives(),
     wheelNuts(),
+    harvestPreSeason(
+      'test the metal detector and stone trap, check the knives, shear bar and processor roll gap, and the spout liners.',
+    ),
+    harvestStorage(
+      'Storage service',
+      'wash crop residue out of the knife drum housing, blower and spout (wet residue corrodes them), oil the knives and shear bar against rust.',
+    ),
     ...calendarTasks(`${INSPECT_SELF_PROPELLED} Spout, knife drum guards, metal detector test.`),
   ];
 }

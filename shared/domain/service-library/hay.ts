@@ -11,6 +11,7 @@ import {
   wear,
   wheelNuts,
 } from './common';
+import { hayStorage, preSeasonService } from './season';
 
 const LOCK_OUT =
   'Lower the machine, disengage the PTO, stop the tractor, take the key and wait until everything has stopped. ';
@@ -29,12 +30,11 @@ const pickup = (): TaskInput =>
   });
 
 const slipClutch = (): TaskInput =>
-  libTask({
+  preSeasonService(14, {
     name: 'Slip clutch and shear bolts check',
-    intervalDays: 365,
     labourHours: 0.5,
     hazards: ['pto', 'stored_energy'],
-    instructions: `${LOCK_OUT}Before the season, free a friction slip clutch as the manual says (it seizes in storage) and check its spring length; keep spare shear bolts of the right grade.`,
+    instructions: `${LOCK_OUT}Two weeks before the season, free a friction slip clutch as the manual says (it seizes in storage) and check its spring length; keep spare shear bolts of the right grade.`,
   });
 
 function mowerConditioner(): TaskInput[] {
@@ -61,6 +61,9 @@ function mowerConditioner(): TaskInput[] {
     gearboxOil('Main gearbox and angle drive oil', 'Input gearbox and the angle drives.'),
     slipClutch(),
     wheelNuts(),
+    hayStorage(
+      'oil the knives and cutter bar against rust, relieve the float springs as the manual says.',
+    ),
     ...calendarTasks(`${INSPECT_TRAILED} Cutter bar curtains and guards.`, false, ['tyres_rims']),
   ];
 }
@@ -89,6 +92,9 @@ function roundBaler(): TaskInput[] {
     gearboxOil('Main gearbox oil', 'Main input gearbox.'),
     slipClutch(),
     wheelNuts(),
+    hayStorage(
+      'take the net or twine out (it draws rodents), slacken the chamber belts or chains if the manual says so, tailgate closed.',
+    ),
     ...calendarTasks(`${INSPECT_TRAILED} Tailgate lock valve and props.`, true, [
       'tyres_rims',
       'raised_load',
@@ -118,15 +124,17 @@ function squareBaler(): TaskInput[] {
       instructions: `${LOCK_OUT}Flywheel stopped and braked. Sharpen or replace the knives and set the clearance; check plunger wear strips.`,
     }),
     gearboxOil('Main gearbox oil', 'Main gearbox (and the pre-compression drive if fitted).'),
-    libTask({
+    preSeasonService(14, {
       name: 'Needle timing and safety',
-      intervalDays: 365,
       labourHours: 1,
       hazards: ['pto', 'stored_energy'],
-      instructions: `${LOCK_OUT}Before the season, check the needle-to-plunger timing and the needle safety shear bolt; a flywheel keeps turning for minutes after the PTO stops.`,
+      instructions: `${LOCK_OUT}Two weeks before the season, check the needle-to-plunger timing and the needle safety shear bolt; a flywheel keeps turning for minutes after the PTO stops.`,
     }),
     slipClutch(),
     wheelNuts(),
+    hayStorage(
+      'clean and oil the knotters and billhooks against rust, take the twine out, release the bale chamber tension as the manual says.',
+    ),
     ...calendarTasks(`${INSPECT_TRAILED} Flywheel brake, needle guards.`, true, ['tyres_rims']),
   ];
 }

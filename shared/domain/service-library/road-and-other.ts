@@ -11,6 +11,7 @@ import {
   wear,
   wheelNuts,
 } from './common';
+import { preSeasonService, storageService } from './season';
 
 function grainTruck(): TaskInput[] {
   return [
@@ -87,6 +88,13 @@ function grainTruck(): TaskInput[] {
         'Each autumn, test the freeze point with a refractometer; open the cap only cold.',
     }),
     wheelNuts('km'),
+    preSeasonService(14, {
+      name: 'Pre-harvest body and hoist check',
+      labourHours: 1,
+      hazards: ['raised_load', 'hydraulic_pressure', 'power_lines'],
+      instructions:
+        'Two weeks before harvest, body on its safety prop: check the grain door and tailgate seals (grain leaks on the road), the tarp and its roller, the hoist hoses for leaks and the body-up warning. Tip only where the body cannot reach overhead lines.',
+    }),
     libTask({
       name: 'Annual roadworthiness test',
       intervalDays: 365,
@@ -137,9 +145,8 @@ function implement(): TaskInput[] {
         'Check hitch pins, linch pins and the drawbar eye for wear and cracks. Nobody between tractor and implement while hitching.',
     }),
     wheelNuts(),
-    libTask({
+    storageService(14, {
       name: 'Storage: clean and protect',
-      intervalDays: 365,
       labourHours: 2,
       hazards: ['raised_load', 'hydraulic_pressure'],
       instructions:

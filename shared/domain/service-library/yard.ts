@@ -13,6 +13,7 @@ import {
   wear,
   wheelNuts,
 } from './common';
+import { storageService } from './season';
 
 const LOCK_OUT =
   'Disengage the PTO, stop the tractor, take the key and wait until everything has stopped. ';
@@ -146,6 +147,13 @@ function slurryTanker(): TaskInput[] {
         'Tank empty. Check brake adjustment and linings and the hub bearing play; re-pack hubs as the manual says. The axle rests on stands, never on the jack.',
     }),
     wheelNuts(),
+    // within a week of the spreading season's end, before frost reaches the pump and valves
+    storageService(7, {
+      name: 'Storage service',
+      labourHours: 2,
+      hazards: ['stored_energy', 'pto'],
+      instructions: `${LOCK_OUT}Release all vacuum or pressure, then in the open: flush the tank, pump, valves and spreading gear with clean water and leave the drain valves open against frost. Top up the vacuum-pump oil and grease every point. Slurry gives off deadly gases: never enter the tank, not even an empty one.`,
+    }),
     ...calendarTasks(INSPECT_TRAILED, false, ['tyres_rims']),
   ];
 }
