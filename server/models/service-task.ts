@@ -29,6 +29,8 @@ export class ServiceTask extends Model<
   declare instructions: CreationOptional<string>;
   declare safetyNotes: CreationOptional<string>;
   declare hazards: CreationOptional<string[]>;
+  /** daily care: signed off by the operator in the walkaround, never a service record or a mail */
+  declare dailyCare: CreationOptional<boolean>;
   declare lastDoneMeter: number | null;
   /** ISO date, local to the organization */
   declare lastDoneOn: string | null;
@@ -62,6 +64,7 @@ ServiceTask.init(
     instructions: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     safetyNotes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     hazards: { type: DataTypes.ARRAY(DataTypes.TEXT), allowNull: false, defaultValue: [] },
+    dailyCare: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     lastDoneMeter: numericColumn('lastDoneMeter', 14, 2, true),
     lastDoneOn: { type: DataTypes.DATEONLY, allowNull: true },
     historyUnknown: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },

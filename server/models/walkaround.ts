@@ -9,6 +9,7 @@ import { sequelize } from '../db';
 import { numericColumn } from './columns';
 import type { MachineCategory } from '../../shared/constants';
 import type { Hazard } from '../../shared/schemas/schedule';
+import type { CareSignedOff } from '../../shared/schemas/daily-care';
 import type {
   ChecklistPhase,
   WalkaroundPurpose,
@@ -86,6 +87,8 @@ export class Walkaround extends Model<
   declare result: WalkaroundResult;
   declare taggedOut: CreationOptional<boolean>;
   declare notes: CreationOptional<string>;
+  /** daily care signed off with it (task, name, whether it was reset), kept with the walkaround */
+  declare careDone: CreationOptional<CareSignedOff[]>;
   declare createdAt: CreationOptional<Date>;
 }
 
@@ -106,6 +109,7 @@ Walkaround.init(
     result: { type: DataTypes.TEXT, allowNull: false },
     taggedOut: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
     notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    careDone: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     createdAt: DataTypes.DATE,
   },
   { sequelize, tableName: 'walkarounds', updatedAt: false },

@@ -36,6 +36,7 @@ export const presentTask = (t: ServiceTask, due: DuePoint | null): Task => ({
   hazards: t.hazards as Hazard[],
   seasonAnchor: t.seasonAnchor ?? null,
   seasonOffsetDays: t.seasonOffsetDays ?? null,
+  dailyCare: t.dailyCare,
   lastDoneMeter: t.lastDoneMeter,
   lastDoneOn: t.lastDoneOn,
   countFromMeter: t.countFromMeter ?? null,
@@ -54,5 +55,6 @@ export const presentTemplate = (t: ScheduleTemplate): ScheduleTemplateJson => ({
     // templates stored before season services have neither key
     seasonAnchor: task.seasonAnchor ?? null,
     seasonOffsetDays: task.seasonOffsetDays ?? null,
+    dailyCare: task.dailyCare === true,
   })),
 });

@@ -47,6 +47,7 @@ export const presentWalkaround = (
   result: w.result,
   taggedOut: w.taggedOut,
   notes: w.notes,
+  careDone: w.careDone ?? [],
   counts: {
     ok: w.items.filter((i) => i.result === 'ok').length,
     attention: w.items.filter((i) => i.result === 'attention').length,

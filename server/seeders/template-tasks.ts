@@ -22,6 +22,7 @@ export function task(fields: Partial<TaskInput> & Pick<TaskInput, 'name'>): Task
     labourHours: null,
     instructions: '',
     hazards,
+    dailyCare: false,
     seasonAnchor: null,
     seasonOffsetDays: null,
     ...fields,

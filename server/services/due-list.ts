@@ -34,8 +34,15 @@ interface DueFilterFlags {
  */
 const HORIZON_RULE = `(d.status IN ('overdue','history_unknown','no_forecast') OR d.sort_date <= :until)`;
 
+/**
+ * Daily care (grease rounds, daily items) is signed off in the walkaround and shown on the
+ * dashboard's daily-care board: never on the due list, so never in its digests, overdue mails,
+ * calendar feed, shop week or dealer board, which a 10 h round would flood every day in harvest.
+ */
+const NOT_DAILY_CARE = 'NOT t.daily_care';
+
 function dueWhere(filters: DueFilterFlags) {
-  const where = ['d.organization_id = :org', "m.status <> 'sold'"];
+  const where = ['d.organization_id = :org', "m.status <> 'sold'", NOT_DAILY_CARE];
   if (filters.category) where.push('m.category = :category');
   if (filters.status) where.push('d.status = :status');
   if (filters.machineId) where.push('d.machine_id = :machineId');
@@ -65,6 +72,7 @@ export function dueListSql(filters: DueFilterFlags & { page?: boolean }) {
 /** The SQL of the list's length with the same filters (for its pager). */
 export const dueTotalSql = (filters: DueFilterFlags) =>
   `SELECT count(*)::int AS n FROM task_due_points d
+     JOIN service_tasks t ON t.id = d.task_id AND t.organization_id = d.organization_id
      JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
      WHERE ${dueWhere(filters)}`;
 
@@ -189,6 +197,7 @@ async function fleetSize(access: OrgAccess) {
  */
 export function dueCountsSql(filters: Pick<DueFilterFlags, 'category' | 'machineId' | 'operator'>) {
   return `SELECT d.status, count(*)::int AS n FROM task_due_points d
+     JOIN service_tasks t ON t.id = d.task_id AND t.organization_id = d.organization_id
      JOIN machines m ON m.id = d.machine_id AND m.organization_id = d.organization_id
      WHERE ${dueWhere(filters)} GROUP BY d.status`;
 }

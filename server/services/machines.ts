@@ -115,6 +115,8 @@ export async function listMachines(access: OrgAccess, query: MachineListQuery) {
      LEFT JOIN LATERAL (
        SELECT min(t.sort_date) AS next_due, (array_agg(t.status ORDER BY ${STATUS_RANK}))[1] AS worst
        FROM task_due_points t WHERE t.organization_id = m.organization_id AND t.machine_id = m.id
+         -- daily care is signed off in the walkaround; the fleet's due figures are its services
+         AND NOT EXISTS (SELECT 1 FROM service_tasks s WHERE s.id = t.task_id AND s.daily_care)
      ) d ON true
      WHERE ${where.join(' AND ')}
      ORDER BY ${order}

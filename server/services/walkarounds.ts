@@ -12,6 +12,8 @@ import { raiseDefect, taggedOutMessage } from './defects';
 import { recordAudit } from '../infra/audit';
 import { checklistFor } from './checklist-templates';
 import { checkAnswers } from './walkaround-answers';
+import { checkCareDone, dailyCareOf, planCare, signOffCare } from './daily-care';
+import { todayIso } from '../../shared/domain';
 
 // Starting and submitting a walkaround; checklists are in checklist-templates.ts, photos in
 // walkaround-photos.ts, the list and one walkaround in walkaround-history.ts.
@@ -75,7 +77,9 @@ export async function walkaroundStart(access: OrgAccess, machine: Machine) {
     forecast?.lastValue != null && forecast.lastTakenAt
       ? { value: forecast.lastValue, takenAt: forecast.lastTakenAt }
       : null;
-  return { checklist, lastReading };
+  const { id: orgId, timeZone } = access.organization;
+  const dailyCare = (await dailyCareOf(orgId, timeZone, [machine.id])).get(machine.id) ?? [];
+  return { checklist, lastReading, dailyCare };
 }
 
 export interface WalkaroundOutcome {
@@ -107,6 +111,7 @@ async function saveWalkaround(
       assertMayStart(access, machine, input.purpose);
       const checklist = await checklistFor(access, machine, transaction);
       const items = await checkAnswers(access, machine, checklist, input.items, transaction);
+      const careTasks = await checkCareDone(access, machine, input.careDone, transaction);
       const performedAt = input.performedAt ? new Date(input.performedAt) : new Date();
       const reading = await walkaroundReading(
         access,
@@ -115,6 +120,12 @@ async function saveWalkaround(
         performedAt,
         transaction,
       );
+      // signed off at the walkaround's reading, on the lifetime scale, and its local date
+      const careDoneAt = {
+        lifetime: reading.lifetimeValue,
+        on: todayIso(access.organization.timeZone, performedAt),
+      };
+      const careDone = planCare(careTasks, careDoneAt.lifetime, careDoneAt.on);
       const result = items.some((i) => i.result === 'fail')
         ? 'fail'
         : items.some((i) => i.result === 'attention')
@@ -135,8 +146,18 @@ async function saveWalkaround(
           items,
           result,
           notes: input.notes,
+          careDone,
         },
         { transaction },
+      );
+      await signOffCare(
+        access,
+        machine,
+        walkaround.id,
+        careTasks,
+        careDone,
+        careDoneAt,
+        transaction,
       );
       const photoIds = items.map((i) => i.photoId).filter((p): p is string => !!p);
       if (photoIds.length)

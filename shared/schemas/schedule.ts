@@ -106,6 +106,8 @@ const taskFields = {
     .max(HAZARDS.length, { error: `At most ${HAZARDS.length} hazards` }),
   /** pre-season / storage service: due days before the season starts or after it ends */
   ...seasonTaskFields,
+  /** daily care (grease rounds, daily items): the operator signs it off in the walkaround */
+  dailyCare: z.boolean({ error: 'Daily care must be true or false' }),
 };
 
 export const taskInputSchema = z
@@ -123,13 +125,18 @@ export const taskInputSchema = z
     safetyNotes: taskFields.safetyNotes.default(''),
     hazards: taskFields.hazards.default([]),
     ...seasonTaskDefaults,
+    dailyCare: taskFields.dailyCare.default(false),
   })
   // an interval or a season, and a season without a day interval (task-season.ts)
   .superRefine(checkTaskTiming);
 export type TaskInput = z.infer<typeof taskInputSchema>;
-/** A task as a template stores it: rows written before season services have no season fields. */
-export type StoredTaskInput = Omit<TaskInput, SeasonFieldName> &
-  Partial<Pick<TaskInput, SeasonFieldName>>;
+/**
+ * A task as a template stores it: rows written before daily care existed have no `dailyCare`,
+ * rows written before season services no `seasonAnchor` / `seasonOffsetDays`.
+ */
+export type StoredTaskInput = Omit<TaskInput, 'dailyCare' | SeasonFieldName> & {
+  dailyCare?: boolean;
+} & Partial<Pick<TaskInput, SeasonFieldName>>;
 type SeasonFieldName = 'seasonAnchor' | 'seasonOffsetDays';
 
 /** Only the fields sent; an unknown field is refused by name. */
@@ -189,6 +196,8 @@ const storedTaskFields = {
   safetyNotes: z.string(),
   hazards: z.array(z.enum(HAZARDS)),
   ...storedSeasonFields,
+  /** signed off by the operator in the walkaround; never on the due list or in a mail */
+  dailyCare: z.boolean(),
 };
 
 /** One line of a machine's schedule, with the due point the server computed for it. */

@@ -5,6 +5,7 @@ import { HAZARDS } from './schedule';
 import { METER_BOUNDS } from './readings';
 import { defectSchema } from './defects';
 import { machineRefSchema, pageMetaSchema, personRefSchema } from './refs';
+import { careDoneSchema, careSignedOffSchema, dailyCareItemSchema } from './daily-care';
 import { MACHINE_CLASSES } from '../domain/service-library/classes';
 import { machineRestrictionSchema } from './machine-restrictions';
 
@@ -119,6 +120,8 @@ export const walkaroundCreateSchema = z.object({
     .min(1, { error: 'Answer the checklist items' })
     .max(100, { error: 'At most 100 items' }),
   notes: plainText(2000, { multiline: true }).default(''),
+  /** the machine's daily-care tasks the operator ticked done (grease rounds, daily items) */
+  careDone: careDoneSchema,
 });
 export type WalkaroundCreateInput = z.infer<typeof walkaroundCreateSchema>;
 
@@ -197,6 +200,8 @@ export const checklistSchema = z.object({
   }),
   items: z.array(checklistItemOutSchema),
   criticalNote: z.string(),
+  /** the machine's daily care, ticked done in the walkaround (careDone) */
+  dailyCare: z.array(dailyCareItemSchema),
 });
 export type Checklist = z.infer<typeof checklistSchema>;
 export const checklistResponseSchema = z.object({
@@ -220,6 +225,8 @@ export const walkaroundSchema = z
     result: z.enum(WALKAROUND_RESULTS),
     taggedOut: z.boolean(),
     notes: z.string(),
+    /** daily care signed off with this walkaround */
+    careDone: z.array(careSignedOffSchema),
     counts: z.object({ ok: z.number(), attention: z.number(), fail: z.number() }),
     items: z.array(
       z.object({

@@ -45,6 +45,8 @@ const due = {
   all: (orgId: string) => ['due', orgId] as const,
   lists: (orgId: string) => [...due.all(orgId), 'list'] as const,
   list: (orgId: string, filters: Filters) => [...due.lists(orgId), filters] as const,
+  /** the daily-care board: it moves with walkarounds and schedules, as the due list does */
+  dailyCare: (orgId: string) => [...due.all(orgId), 'daily-care'] as const,
 };
 
 const serviceRecords = {

@@ -58,6 +58,7 @@ const item = (clientId: string, userId = 'user-ann'): Queued => ({
     meterValue: 1200,
     notes: '',
     items: [],
+    careDone: [],
   },
   queuedAt: '2026-04-07T08:00:00.000Z',
 });

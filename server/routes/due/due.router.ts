@@ -5,6 +5,9 @@ import { dueListQuerySchema } from '../../../shared/schemas/readings';
 import { dueListResponseSchema } from '../../../shared/schemas/due';
 import { dueList } from '../../services/due-list';
 import { loadMachine } from '../../services/machines';
+import { dailyCareBoardResponseSchema } from '../../../shared/schemas/daily-care';
+import { dailyCareBoard } from '../../services/daily-care-board';
+import { presentMachineRef } from '../../presenters/defect';
 
 const orgParams = z.object({ orgId: z.uuid() });
 
@@ -45,6 +48,23 @@ export function dueRouter(): Router {
       return {
         data: rows,
         meta: { asOf, counts, machines: 1, stale: own, total, page: 1, pageSize: total },
+      };
+    },
+  });
+
+  route(router, {
+    method: 'get',
+    path: '/organizations/:orgId/daily-care',
+    summary:
+      "Daily care across the farm: each machine's grease rounds and daily items (signed off in the walkaround) and where each stands today — overdue, not yet today, done today; operators see the machines they may walk round",
+    tags: ['due'],
+    params: orgParams,
+    response: dailyCareBoardResponseSchema,
+    handler: async ({ req }) => {
+      const { asOf, rows } = await dailyCareBoard(req.access!);
+      return {
+        data: rows.map((r) => ({ ...r, machine: presentMachineRef(r.machine) })),
+        meta: { asOf },
       };
     },
   });

@@ -60,7 +60,7 @@ export function walkaroundsRouter(): Router {
       const access = req.access!;
       const { machine } = await loadMachineToWalk(access, params.machineId);
       assertMayStart(access, machine, query.purpose);
-      const { checklist, lastReading } = await walkaroundStart(access, machine);
+      const { checklist, lastReading, dailyCare } = await walkaroundStart(access, machine);
       return {
         data: {
           machine: {
@@ -75,6 +75,7 @@ export function walkaroundsRouter(): Router {
           template: checklist.template,
           items: checklist.items.map(presentChecklistItem),
           criticalNote: CRITICAL_NOTE,
+          dailyCare,
         },
         abilities: { editTemplate: canEditChecklists(access), inspect: canInspect(access) },
       };

@@ -2,6 +2,7 @@
 // that most engine-driven machines share. Every interval is common practice, not a
 // manufacturer's figure; the machine's operator's manual wins wherever the two differ.
 import type { Hazard, TaskInput, TaskPart } from '../../schemas/schedule';
+import { DAILY_CARE_MAX_HOURS, dailyItems } from './daily-care';
 
 /** What every library task says about its interval, so the label stays once it is applied. */
 export const COMMON_PRACTICE_NOTE =
@@ -33,6 +34,7 @@ export function libTask(fields: Fields): TaskInput {
     labourHours: null,
     safetyNotes: '',
     hazards: [],
+    dailyCare: false,
     seasonAnchor: null,
     seasonOffsetDays: null,
     ...fields,
@@ -48,13 +50,17 @@ export const wear = (description: string, quantity = 1): TaskPart => ({
   wearPart: true,
 });
 
-/** Grease points on a short meter interval; PTO shaft crosses and loader pivots every 8–10 h. */
+/**
+ * Grease points on a meter interval; PTO shaft crosses and loader pivots every 8–10 h. A round of
+ * a working day or less is daily care, signed off by the operator in the walkaround.
+ */
 export function grease(name: string, every: number, hazards: Hazard[], what: string): TaskInput {
   return libTask({
     name,
     intervalMeter: every,
     labourHours: 0.3,
     hazards,
+    dailyCare: every <= DAILY_CARE_MAX_HOURS,
     instructions: `${LOCK_OUT}${what} Wipe each nipple first; pump until fresh grease shows.`,
   });
 }
@@ -100,11 +106,13 @@ export interface EngineOptions {
   def?: boolean;
   /** the cab's air filter: 'charcoal' on a sprayer, 'dust' elsewhere; none without a cab */
   cab?: 'dust' | 'charcoal' | null;
+  /** the radiator screen as a daily item (harvesters blow it out in their daily clean-down) */
+  screen?: boolean;
 }
 
 /** The engine and cab items of a self-propelled diesel machine on hour intervals. */
 export function engineTasks(opts: EngineOptions = {}): TaskInput[] {
-  const { dpf = true, def = dpf, cab = 'dust' } = opts;
+  const { dpf = true, def = dpf, cab = 'dust', screen = true } = opts;
   const tasks: TaskInput[] = [
     libTask({
       name: 'Engine oil and filter',
@@ -215,6 +223,7 @@ export function engineTasks(opts: EngineOptions = {}): TaskInput[] {
               'Clean the fresh-air and recirculation filters with low-pressure air from the clean side, or replace them when damaged or clogged; more often in dust.',
           }),
     );
+  tasks.push(...dailyItems(libTask, { def, screen }));
   return tasks;
 }
 

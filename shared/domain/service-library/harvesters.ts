@@ -32,12 +32,13 @@ const cleanDown = (what: string): TaskInput =>
     intervalMeter: 10,
     labourHours: 0.5,
     hazards: ['hot_fluid', 'stored_energy'],
+    dailyCare: true,
     instructions: `${LOCK_OUT}Blow chaff and dust off the engine deck, exhaust, ${what} and the rotary screen; crop build-up near hot parts starts fires. Do not open the cooling system hot.`,
   });
 
 function combine(): TaskInput[] {
   return [
-    ...engineTasks(),
+    ...engineTasks({ screen: false }),
     cleanDown('bearings'),
     grease(
       'Daily grease points (feeder, beaters, header drive)',
@@ -90,7 +91,7 @@ function combine(): TaskInput[] {
 
 function forageHarvester(): TaskInput[] {
   return [
-    ...engineTasks(),
+    ...engineTasks({ screen: false }),
     cleanDown('the knife drum housing'),
     libTask({
       name: 'Knife sharpening and shear bar adjustment',

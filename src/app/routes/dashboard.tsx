@@ -5,6 +5,7 @@ import { PageHeader } from '../../components/ui/page-header';
 import { dueQueryOptions } from '../../features/due/api/get-due';
 import type { DueFilters } from '../../features/due/api/types';
 import { DueBoard } from '../../features/due/components/due-board';
+import { DailyCareBoard } from '../../features/due/components/daily-care-board';
 import { WaitingProposals } from '../../features/dealers/components/waiting-proposals';
 import { FirstRunChecklistPanel } from '../../features/onboarding/components/first-run-checklist';
 import { readDueFilters, writeDueFilters } from '../../features/due/filters';
@@ -104,25 +105,31 @@ export function DashboardPage() {
           <DealerBoardSection />
         </Section>
       ) : (
-        <DueBoard
-          orgId={organization.id}
-          filters={filters}
-          onFiltersChange={changeFilters}
-          machineHref={(machineId) => paths.organization.machine.href(organization.id, machineId)}
-          emptyFleetLinks={
-            membership.role === 'manager'
-              ? {
-                  addMachine: paths.organization.machineNew.href(organization.id),
-                  importFleet: paths.organization.importFleet.href(organization.id),
-                }
-              : undefined
-          }
-          logHoursHref={
-            LOGS_HOURS.has(membership.role)
-              ? (fleetNumber) => paths.organization.logHours.href(organization.id, fleetNumber)
-              : undefined
-          }
-        />
+        <>
+          <DailyCareBoard
+            orgId={organization.id}
+            machineHref={(machineId) => paths.organization.machine.href(organization.id, machineId)}
+          />
+          <DueBoard
+            orgId={organization.id}
+            filters={filters}
+            onFiltersChange={changeFilters}
+            machineHref={(machineId) => paths.organization.machine.href(organization.id, machineId)}
+            emptyFleetLinks={
+              membership.role === 'manager'
+                ? {
+                    addMachine: paths.organization.machineNew.href(organization.id),
+                    importFleet: paths.organization.importFleet.href(organization.id),
+                  }
+                : undefined
+            }
+            logHoursHref={
+              LOGS_HOURS.has(membership.role)
+                ? (fleetNumber) => paths.organization.logHours.href(organization.id, fleetNumber)
+                : undefined
+            }
+          />
+        </>
       )}
     </>
   );

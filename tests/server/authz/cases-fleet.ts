@@ -271,6 +271,7 @@ export const FLEET_CASES: Record<string, Case> = {
     build: (c) => ({ params: onFarm(c), file: csv(c) }),
   },
   'GET /organizations/{orgId}/due': { ids: 'none', build: (c) => ({ params: onFarm(c) }) },
+  'GET /organizations/{orgId}/daily-care': { ids: 'none', build: (c) => ({ params: onFarm(c) }) },
   'GET /organizations/{orgId}/machines/{machineId}/due': {
     ids: 'path',
     build: (c) => ({ params: onMachine(c) }),

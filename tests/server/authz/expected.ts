@@ -146,6 +146,8 @@ export const EXPECTED: Record<string, Row> = {
   'POST /organizations/{orgId}/readings/import/commit': shop,
   'GET /organizations/{orgId}/due': read,
   'GET /organizations/{orgId}/machines/{machineId}/due': read,
+  // daily care is the farm's own people's (a dealer link does not list it)
+  'GET /organizations/{orgId}/daily-care': farmOnly,
   // services
   'GET /organizations/{orgId}/machines/{machineId}/service-records': history,
   'GET /organizations/{orgId}/machines/{machineId}/service-records/prefill': history,

@@ -31,6 +31,7 @@ const SCALAR_FIELDS = [
   'instructions',
   'safetyNotes',
   'hazards',
+  'dailyCare',
   'parts',
   'fluids',
 ] as const;
@@ -65,6 +66,7 @@ export const emptyTask = (): TaskInput => ({
   instructions: '',
   safetyNotes: '',
   hazards: [],
+  dailyCare: false,
 });
 
 export const taskToInput = (task: Task): TaskInput => ({
@@ -82,4 +84,5 @@ export const taskToInput = (task: Task): TaskInput => ({
   instructions: task.instructions,
   safetyNotes: task.safetyNotes,
   hazards: [...task.hazards],
+  dailyCare: task.dailyCare,
 });

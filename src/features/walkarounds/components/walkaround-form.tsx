@@ -20,6 +20,7 @@ import type { useWalkaroundDraft } from '../lib/use-walkaround-draft';
 import { checklistSections, sectionProgress } from '../lib/sections';
 import { ChecklistItemCard } from './checklist-item-card';
 import { ChecklistSectionView } from './checklist-section';
+import { DailyCareChecks } from './daily-care-checks';
 
 type DraftApi = ReturnType<typeof useWalkaroundDraft>;
 
@@ -92,6 +93,7 @@ export function WalkaroundForm({
           items,
           units,
           performedAt: new Date().toISOString(),
+          careTaskIds: (checklist.dailyCare ?? []).map((task) => task.taskId),
         },
       );
       if (!built.ok) {
@@ -184,6 +186,14 @@ export function WalkaroundForm({
           );
         })}
       </div>
+
+      <DailyCareChecks
+        items={checklist.dailyCare ?? []}
+        unit={machine.meterUnit}
+        timeZone={timeZone}
+        done={draft.careDone ?? []}
+        onChange={(careDone) => update((d) => ({ ...d, careDone }))}
+      />
 
       <TextareaField
         label="Anything else for the shop (optional)"

@@ -4,6 +4,7 @@ import { Badge, type BadgeTone } from '../../../components/ui/badge';
 import { buttonClasses } from '../../../components/ui/button';
 import { Icon, type IconName } from '../../../components/ui/icons';
 import type { RaisedDefect, WalkaroundOutcome } from '../api/types';
+import { CareSignedOffNote } from './daily-care-checks';
 
 const SEVERITY: Record<DefectSeverity, { tone: BadgeTone; icon: IconName }> = {
   critical: { tone: 'overdue', icon: 'lock' },
@@ -71,6 +72,7 @@ export function WalkaroundOutcomeView({
           Hourstone already had this walkaround, so it was not recorded twice.
         </p>
       ) : null}
+      <CareSignedOffNote care={outcome.data.careDone ?? []} />
       {outcome.defects.length > 0 ? <RaisedDefects defects={outcome.defects} /> : null}
       <div className="flex flex-col gap-2 sm:flex-row">
         <Link to={pickHref} className={buttonClasses('primary', 'min-h-12')}>

@@ -33,6 +33,8 @@ export function buildSubmission(
     units: UnitSystem;
     /** ISO instant: when the walkaround was done (the moment it is sent or saved) */
     performedAt: string;
+    /** the daily-care tasks on the checklist now: a tick of one no longer there is dropped */
+    careTaskIds?: readonly string[];
   },
 ): { ok: true; input: WalkaroundCreateInput } | { ok: false; errors: SubmissionErrors } {
   const errors: SubmissionErrors = { items: {} };
@@ -51,6 +53,7 @@ export function buildSubmission(
     meterValue,
     performedAt: context.performedAt,
     notes: draft.notes,
+    careDone: (draft.careDone ?? []).filter((id) => context.careTaskIds?.includes(id) ?? true),
     items: context.items.map((item) => {
       const answer = draft.answers[item.id];
       return {

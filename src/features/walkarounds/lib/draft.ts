@@ -21,6 +21,8 @@ export interface WalkaroundDraft {
   meterValue: string;
   answers: Record<string, DraftAnswer>;
   notes: string;
+  /** ids of the daily-care tasks ticked done (drafts stored before daily care have none) */
+  careDone?: string[];
   /** the checklist it was started on, to carry on without a connection */
   checklist: Checklist | null;
 }

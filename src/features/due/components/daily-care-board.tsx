@@ -1,0 +1,113 @@
+import { useState } from 'react';
+import { Link } from 'react-router-dom';
+import { careSinceText } from '../../../../shared/domain/daily-care';
+import type { DailyCareBoard as Board } from '../../../../shared/schemas/daily-care';
+import { Badge } from '../../../components/ui/badge';
+import { Button } from '../../../components/ui/button';
+import { Section } from '../../../components/ui/card';
+import { ErrorState } from '../../../components/ui/error-state';
+import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
+import { useDailyCare } from '../api/get-daily-care';
+
+// The dashboard's daily care (issue 11): grease rounds and daily items per machine, as operators
+// signed them off in their walkarounds. Kept off the due list, so a 10 h round never floods it.
+
+type Row = Board['data'][number];
+
+/** Machines shown before "Show all": the most pressing ones come first. */
+const FIRST_MACHINES = 6;
+/** Tasks named per machine: the overdue ones, then those not done yet today. */
+const FIRST_TASKS = 3;
+
+/** Daily care per machine; nothing at all on a farm whose tasks have none. */
+export function DailyCareBoard({
+  orgId,
+  machineHref,
+}: {
+  orgId: string;
+  machineHref: (machineId: string) => string;
+}) {
+  const care = useDailyCare(orgId);
+  const [all, setAll] = useState(false);
+  // most farms have no daily care: no placeholder that would only vanish again
+  if (care.isPending) return null;
+  if (care.isError)
+    return (
+      <div className="mb-8">
+        <ErrorState
+          title="Daily care didn't load"
+          message={care.error.message}
+          onRetry={() => care.refetch()}
+          retrying={care.isRefetching}
+        />
+      </div>
+    );
+  const { data: rows, meta } = care.data;
+  if (!rows.length) return null;
+  const shown = all ? rows : rows.slice(0, FIRST_MACHINES);
+  return (
+    <div className="mb-8">
+      <Section
+        title="Daily care"
+        description="Grease rounds and daily items: operators tick them off in the walkaround. They stay off the due list and send no e-mails."
+      >
+        <ul aria-label="Daily care by machine" className="grid gap-3 sm:grid-cols-2 xl:grid-cols-3">
+          {shown.map((row) => (
+            <MachineCare
+              key={row.machine.id}
+              row={row}
+              today={meta.asOf}
+              href={machineHref(row.machine.id)}
+            />
+          ))}
+        </ul>
+        {rows.length > FIRST_MACHINES ? (
+          <Button variant="secondary" className="self-start" onClick={() => setAll(!all)}>
+            {all ? 'Show fewer' : `Show all ${rows.length} machines`}
+          </Button>
+        ) : null}
+      </Section>
+    </div>
+  );
+}
+
+function MachineCare({ row, today, href }: { row: Row; today: string; href: string }) {
+  const { machine, counts } = row;
+  const pressing = [
+    ...row.tasks.filter((t) => t.state === 'overdue'),
+    ...row.tasks.filter((t) => t.state === 'not_today'),
+  ];
+  return (
+    <li className="flex flex-col gap-2 rounded-xl border border-field-200 bg-white p-3 shadow-card">
+      <Link
+        to={href}
+        className="inline-flex min-h-touch items-center font-black text-field-950 underline-offset-2 hover:underline"
+      >
+        {machine.fleetNumber} · {machine.name}
+      </Link>
+      <p className="flex flex-wrap gap-1.5">
+        {counts.overdue ? <Badge tone="overdue">{counts.overdue} overdue</Badge> : null}
+        {counts.not_today ? <Badge tone="due-soon">{counts.not_today} not yet today</Badge> : null}
+        {counts.done_today ? <Badge tone="ok">{counts.done_today} done today</Badge> : null}
+      </p>
+      {pressing.length ? (
+        <ul className="flex flex-col gap-1 text-sm text-field-700">
+          {pressing.slice(0, FIRST_TASKS).map((t) => (
+            <li key={t.taskId}>
+              <span className="font-bold text-field-900">{t.name}</span>:{' '}
+              {careSinceText(t, machine.meterUnit, today, {
+                meter: formatMeter,
+                date: formatLocalDate,
+              })}
+            </li>
+          ))}
+          {pressing.length > FIRST_TASKS ? (
+            <li>and {pressing.length - FIRST_TASKS} more on the machine page</li>
+          ) : null}
+        </ul>
+      ) : (
+        <p className="text-sm text-clover-800">All done today.</p>
+      )}
+    </li>
+  );
+}
