@@ -2,7 +2,8 @@
 // week, the machine page's schedule, the digest and calendar e-mails. Nothing here computes a
 // forecast; each value is one computeDuePoint gave, only worded. The number and date formats are
 // parameters so the browser can use its language and the e-mails their own; the words are one.
-import type { DuePoint } from './types';
+import type { SeasonAnchor } from './season-dates';
+import type { DuePoint, DueSeason } from './types';
 
 /** How a meter value reads with its unit ("1,943.6 h"); value in meter units. */
 export type MeterFormat = (value: number, unit: string) => string;
@@ -131,4 +132,23 @@ export function fallsDueText(
     return over ? `overdue — ${over}` : 'overdue';
   }
   return due.effectiveDate ? (formats.date ?? englishDateText)(due.effectiveDate) : null;
+}
+
+/** "21 days before the season starts", "when the season ends": a season service's timing. */
+export function seasonTimingText(anchor: SeasonAnchor, offsetDays: number): string {
+  const event = anchor === 'before_start' ? 'the season starts' : 'the season ends';
+  if (offsetDays === 0) return `when ${event}`;
+  return `${dayCount(offsetDays)} ${anchor === 'before_start' ? 'before' : 'after'} ${event}`;
+}
+
+/** What a season service waits for on a machine without season months (all year). */
+export const SEASON_MONTHS_MISSING = "set the machine's season months";
+
+/**
+ * "14 days before the season starts on 1 Aug 2026": a season service's due in words, from its
+ * due point's season (ISO local date); without season months, what to do to get a date.
+ */
+export function seasonDueText(season: DueSeason, date: DateFormat = englishDateText): string {
+  if (season.seasonDate === null) return SEASON_MONTHS_MISSING;
+  return `${seasonTimingText(season.anchor, season.offsetDays)} on ${date(season.seasonDate)}`;
 }

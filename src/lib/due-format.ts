@@ -6,7 +6,10 @@ import {
   remainingDaysText,
   remainingMeterText as meterWords,
   remainingText as remainingWords,
+  seasonDueText as seasonWords,
+  seasonTimingText,
   type DuePoint,
+  type DueSeason,
 } from '../../shared/domain';
 import { formatLocalDate, formatMeter } from './fleet-format';
 
@@ -49,3 +52,9 @@ export const fallsDueText = (
   due: Pick<DuePoint, 'status' | 'effectiveDate' | 'remainingMeter' | 'remainingDays'>,
   unit: string,
 ): string | null => fallsDueWords(due, unit, { meter: formatMeter, date: formatLocalDate });
+
+/** "21 days before the season starts": a season service's timing, without its date. */
+export { seasonTimingText };
+
+/** "14 days before the season starts on 1 Aug 2026", or "set the machine's season months". */
+export const seasonDueText = (season: DueSeason): string => seasonWords(season, formatLocalDate);

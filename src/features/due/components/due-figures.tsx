@@ -3,6 +3,7 @@ import {
   dueRangeText,
   remainingDaysText,
   remainingMeterText,
+  seasonDueText,
 } from '../../../lib/due-format';
 import { formatMeter } from '../../../lib/fleet-format';
 import type { DueRow } from '../api/types';
@@ -14,10 +15,15 @@ const muted = 'text-sm text-field-600';
 
 /** The due meter value and/or due date, and which of the two falls first. */
 export function DueAtFigure({ row }: { row: DueRow }) {
-  const { dueMeter, dueDate, governs } = row.due;
+  const { dueMeter, dueDate, governs, season } = row.due;
   if (row.due.status === 'history_unknown')
     return <span className={muted}>Not known until last done is set</span>;
-  if (dueMeter === null && dueDate === null) return <span className={muted}>Not scheduled</span>;
+  if (dueMeter === null && dueDate === null)
+    return (
+      <span className={muted}>
+        {season ? `Season service: ${seasonDueText(season)}` : 'Not scheduled'}
+      </span>
+    );
   return (
     <div className="flex flex-col">
       {dueMeter !== null ? (
@@ -43,6 +49,7 @@ export function DueAtFigure({ row }: { row: DueRow }) {
           {dueDateText(dueDate)}
         </span>
       ) : null}
+      {season ? <span className={muted}>{seasonDueText(season)}</span> : null}
       {governs && dueMeter !== null && dueDate !== null ? (
         <span className={muted}>{GOVERNS_TEXT[governs]}</span>
       ) : null}

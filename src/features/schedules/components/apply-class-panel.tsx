@@ -66,10 +66,7 @@ export function ApplyClassPanel(props: ApplyClassPanelProps) {
             <li key={t.name} className="flex flex-wrap gap-x-2">
               <span className="font-bold">{t.name}</span>
               <span className="text-field-700">
-                {describeInterval(
-                  { intervalMeter: t.intervalMeter, intervalDays: t.intervalDays },
-                  library.meterUnit,
-                )}
+                {describeInterval(t, library.meterUnit)}
                 {t.firstServiceMeter !== null
                   ? `, first at ${t.firstServiceMeter} ${library.meterUnit}`
                   : ''}

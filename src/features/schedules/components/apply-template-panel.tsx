@@ -86,6 +86,8 @@ export function ApplyTemplatePanel({
                           {
                             intervalMeter: t.intervalMeter ?? null,
                             intervalDays: t.intervalDays ?? null,
+                            seasonAnchor: t.seasonAnchor,
+                            seasonOffsetDays: t.seasonOffsetDays,
                           },
                           unit,
                         )}{' '}

@@ -1,6 +1,6 @@
 import type { DuePoint } from '../../../../shared/domain/types';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
-import { fittedMeterText } from '../../../lib/due-format';
+import { fittedMeterText, seasonDueText } from '../../../lib/due-format';
 import { describeRemaining } from '../lib/task-text';
 
 const GOVERNS: Record<'meter' | 'calendar', string> = {
@@ -40,6 +40,7 @@ export function DuePointDetails({
         : formatMeter(due.dueMeter, unit),
     });
   if (due.dueDate !== null) rows.push({ term: 'Due date', detail: formatLocalDate(due.dueDate) });
+  if (due.season) rows.push({ term: 'Season service', detail: seasonDueText(due.season) });
   if (due.projectedDate !== null) {
     const range =
       due.projectedLow && due.projectedHigh

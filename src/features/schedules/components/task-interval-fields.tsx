@@ -1,24 +1,27 @@
 import { TextField } from '../../../components/ui/field';
 import { optionalNumber, type TaskFormApi } from '../lib/task-form-values';
+import { TaskSeasonFields } from './task-season-fields';
 
-/** The task's intervals, first service, warning window and labour, in the machine's unit. */
+/** The task's intervals, season service, first service, warning window and labour. */
 export function TaskIntervalFields({
-  form: {
-    register,
-    formState: { errors },
-  },
+  form,
   unitWord,
 }: {
   form: TaskFormApi;
   /** the meter unit spelled out ("hours") */
   unitWord: string;
 }) {
+  const {
+    register,
+    formState: { errors },
+  } = form;
   return (
     <fieldset className="flex flex-col gap-3">
       <legend className="mb-2 font-black text-field-900">Interval</legend>
       <p className="-mt-1 text-sm text-field-600">
         Take the figures from this machine's operator's manual. Give a meter interval, a day
-        interval or both (whichever comes first).
+        interval or both (whichever comes first) — or make it a season service, with or without a
+        meter interval.
       </p>
       <div className="grid gap-4 sm:grid-cols-3">
         <TextField
@@ -80,6 +83,7 @@ export function TaskIntervalFields({
           {...register('labourHours', optionalNumber)}
         />
       </div>
+      <TaskSeasonFields form={form} />
     </fieldset>
   );
 }

@@ -1,4 +1,5 @@
 import type { DuePoint } from '../../../../shared/domain/types';
+import { seasonDueText } from '../../../lib/due-format';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
 import type { Task } from '../api/types';
 import { describeRemaining } from '../lib/task-text';
@@ -19,13 +20,22 @@ export function DueSummary({ due, unit }: { due: DuePoint; unit: string }) {
         : null,
   ].filter(Boolean);
   const remaining = describeRemaining(due.remainingMeter, due.remainingDays, unit);
-  if (!at.length && !remaining) return null;
+  // a season service says what its date hangs on, or what it waits for
+  const season = due.season ? seasonDueText(due.season) : null;
+  if (!at.length && !remaining && !season) return null;
   return (
-    <p className="font-bold text-field-900 tabular-nums">
-      {at.length ? `Due ${at.join(' · ')}` : ''}
-      {at.length && remaining ? ' — ' : ''}
-      {remaining ?? ''}
-    </p>
+    <div>
+      {at.length || remaining ? (
+        <p className="font-bold text-field-900 tabular-nums">
+          {at.length ? `Due ${at.join(' · ')}` : ''}
+          {at.length && remaining ? ' — ' : ''}
+          {remaining ?? ''}
+        </p>
+      ) : null}
+      {season ? (
+        <p className="text-sm text-field-700">{`${season[0].toUpperCase()}${season.slice(1)}`}</p>
+      ) : null}
+    </div>
   );
 }
 

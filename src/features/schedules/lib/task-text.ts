@@ -1,15 +1,31 @@
-import { remainingText } from '../../../lib/due-format';
+import type { SeasonAnchor } from '../../../../shared/domain/season-dates';
+import { remainingText, seasonTimingText } from '../../../lib/due-format';
 import { formatMeter } from '../../../lib/fleet-format';
 
 const count = new Intl.NumberFormat();
 const days = (n: number) => `${count.format(n)} ${n === 1 ? 'day' : 'days'}`;
 
-/** "Every 500 h or 365 days, whichever comes first", from the task's own figures. */
+/**
+ * "Every 500 h or 365 days, whichever comes first", "21 days before the season starts", from the
+ * task's own figures.
+ */
 export function describeInterval(
-  task: { intervalMeter: number | null; intervalDays: number | null },
+  task: {
+    intervalMeter: number | null;
+    intervalDays: number | null;
+    seasonAnchor?: SeasonAnchor | null;
+    seasonOffsetDays?: number | null;
+  },
   unit: string,
 ): string {
-  const { intervalMeter, intervalDays } = task;
+  const { intervalMeter, intervalDays, seasonAnchor, seasonOffsetDays } = task;
+  if (seasonAnchor && seasonOffsetDays != null) {
+    const season = seasonTimingText(seasonAnchor, seasonOffsetDays);
+    const said = `${season[0].toUpperCase()}${season.slice(1)}`;
+    return intervalMeter !== null
+      ? `${said} or every ${formatMeter(intervalMeter, unit)}, whichever comes first`
+      : said;
+  }
   if (intervalMeter !== null && intervalDays !== null)
     return `Every ${formatMeter(intervalMeter, unit)} or ${days(intervalDays)}, whichever comes first`;
   if (intervalMeter !== null) return `Every ${formatMeter(intervalMeter, unit)}`;
