@@ -40,11 +40,13 @@ export const CATEGORY_LABELS: Record<MachineCategory, string> = {
   other: 'Other',
 };
 
-export const METER_UNITS = ['h', 'km', 'bales', 'ha', 'acres'] as const;
+// 'mi' (miles) came with issue 11, for a road machine on a US farm (migration 0022).
+export const METER_UNITS = ['h', 'km', 'mi', 'bales', 'ha', 'acres'] as const;
 export type MeterUnit = (typeof METER_UNITS)[number];
 export const METER_UNIT_LABELS: Record<MeterUnit, string> = {
   h: 'hours',
   km: 'km',
+  mi: 'miles',
   bales: 'bales',
   ha: 'ha',
   acres: 'acres',

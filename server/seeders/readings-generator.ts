@@ -68,11 +68,12 @@ export interface GeneratedReading {
 const MAX_USE_PER_DAY: Record<MeterUnit, number> = {
   h: 14,
   km: 850,
+  mi: 520,
   bales: 450,
   ha: 60,
   acres: 150,
 };
-const DECIMALS: Record<MeterUnit, number> = { h: 1, km: 0, bales: 0, ha: 1, acres: 1 };
+const DECIMALS: Record<MeterUnit, number> = { h: 1, km: 0, mi: 0, bales: 0, ha: 1, acres: 1 };
 const LATE_ENTRY_SHARE = 0.03;
 const GAP_SHARE = 0.04;
 const MORNING: [number, number] = [6 * 60 + 15, 8 * 60 + 45];

@@ -34,7 +34,7 @@ export const FLEET_TABLES: readonly ExportTable[] = [
       ['year', 'model year'],
       ['purchase_price_minor', 'purchase price, in minor units (cents) of the farm’s currency'],
       ['list_price_minor', 'list price when new, in minor units of the farm’s currency'],
-      ['meter_unit', 'unit of its meter: h, km, bales, ha or acres'],
+      ['meter_unit', 'unit of its meter: h, km, mi (miles), bales, ha or acres'],
       ['status', 'in_service, tagged_out or sold'],
       ['season_months', 'months it works, as a JSON array of 1–12 ([] = all year)'],
       ['notes', 'notes'],

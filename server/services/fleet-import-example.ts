@@ -30,12 +30,12 @@ const MACHINES = [
   ['B-03', 'Round baler', 'baler', 'Tamsin', 'RB 160', 'TS-RB-4410', '2018', 'bales', 18400],
 ] as const;
 
-/** The service library's class of each example machine (the baler counts bales, so none). */
+/** The service library's class of each example machine (the baler's in bales: its variant). */
 const CLASSES: (MachineClass | null)[] = [
   'articulated_tractor',
   'utility_loader_tractor',
   'grain_truck',
-  null,
+  'round_baler',
 ];
 
 /** The example file's text (with a byte-order mark, so spreadsheet programs read it as UTF-8). */

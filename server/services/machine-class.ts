@@ -9,6 +9,7 @@ import { invalid } from '../errors';
 import { Machine, ServiceTask } from '../models';
 import { METER_UNIT_LABELS, type MeterUnit } from '../../shared/constants';
 import {
+  classMeterUnits,
   MACHINE_CLASS_LABELS,
   serviceLibraryClass,
   type MachineClass,
@@ -18,11 +19,15 @@ import { recordAudit } from '../infra/audit';
 import { addTasks } from './schedules';
 import { applySheetToTasks } from './spec-sheets';
 
-/** Why a class cannot go on a machine whose meter counts in `own` (another unit), or null. */
+/**
+ * Why a class cannot go on a machine whose meter counts in `own`, or null: a class goes on a
+ * meter in its own unit or in one of its variants' (the truck in miles, a baler in bales).
+ */
 export function machineClassProblem(own: MeterUnit, machineClass: MachineClass): string | null {
-  const { meterUnit } = serviceLibraryClass(machineClass);
-  if (own === meterUnit) return null;
-  return `The ${MACHINE_CLASS_LABELS[machineClass].toLowerCase()} schedule counts in ${METER_UNIT_LABELS[meterUnit]}, but this machine's meter counts in ${METER_UNIT_LABELS[own]}; pick a class that counts in ${METER_UNIT_LABELS[own]} or change the meter unit first`;
+  const units = classMeterUnits(machineClass);
+  if (units.includes(own)) return null;
+  const counts = units.map((u) => METER_UNIT_LABELS[u]).join(' or ');
+  return `The ${MACHINE_CLASS_LABELS[machineClass].toLowerCase()} schedule counts in ${counts}, but this machine's meter counts in ${METER_UNIT_LABELS[own]}; pick a class that counts in ${METER_UNIT_LABELS[own]} or change the meter unit first`;
 }
 
 /** Gives the machine the class and adds the class's missing tasks, in the caller's transaction. */
@@ -44,7 +49,8 @@ export async function applyMachineClassIn(
     transaction,
   });
   const have = new Set(existing.map((t) => t.name.trim().toLowerCase()));
-  const { tasks } = serviceLibraryClass(machineClass);
+  // in the machine's own unit: a miles truck gets miles, a bale-counting baler bales
+  const { tasks } = serviceLibraryClass(machineClass, machine.meterUnit);
   const missing = tasks.filter((t) => !have.has(t.name.trim().toLowerCase()));
   const kept = tasks.filter((t) => have.has(t.name.trim().toLowerCase())).map((t) => t.name);
   const before = machine.machineClass ?? null;

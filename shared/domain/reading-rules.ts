@@ -39,11 +39,13 @@ export interface ReadingRuleOptions {
 /**
  * Most a meter can plausibly advance in a day, meter units per day (common practice, not from a
  * published source): 24 h for an hour meter is a hard limit; the others are generous
- * ceilings for one machine in one day.
+ * ceilings for one machine in one day. Miles are the km ceiling in miles (1,500 / 1.609344 =
+ * 932.06), rounded down to 930: a grain truck shuttling all day stays well under it.
  */
 export const DEFAULT_MAX_PER_DAY = {
   h: 24,
   km: 1500,
+  mi: 930,
   bales: 2000,
   ha: 300,
   acres: 750,

@@ -79,7 +79,7 @@ describe('fleet import — machine class', () => {
       'Engine oil and filter last meter',
     ]);
     expect(first.split(',')[10]).toBe('4WD articulated tractor');
-    expect(baler.split(',')[10]).toBe(''); // it counts bales; the round-baler class counts hours
+    expect(baler.split(',')[10]).toBe('Round baler'); // it counts bales: the class's bales variant
     const res = await f.commit(example.text);
     expect(res.status).toBe(201);
     const classes = await Machine.findAll({
@@ -87,7 +87,7 @@ describe('fleet import — machine class', () => {
       order: [['fleetNumber', 'ASC']],
     });
     expect(classes.map((m) => [m.fleetNumber, m.machineClass])).toEqual([
-      ['B-03', null],
+      ['B-03', 'round_baler'],
       ['L-02', 'utility_loader_tractor'],
       ['T-11', 'articulated_tractor'],
       ['TR-04', 'grain_truck'],

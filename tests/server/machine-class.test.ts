@@ -16,11 +16,14 @@ import {
 } from '../support/factories';
 import { AuditEvent, Machine, ServiceTask } from '../../server/models';
 import { serviceLibraryClass } from '../../shared/domain/service-library';
-import type { Role } from '../../shared/constants';
+import type { MachineCategory, MeterUnit, Role } from '../../shared/constants';
 
 const app = createApp();
 
-async function farm(role: Role = 'manager', fleet: { meterUnit?: 'h' | 'km' } = {}) {
+async function farm(
+  role: Role = 'manager',
+  fleet: { meterUnit?: MeterUnit; category?: MachineCategory } = {},
+) {
   const org = await createOrganization();
   const { user } = await createMember(org, role);
   const machine = await createMachine(org, { fleetNumber: 'RB-01', category: 'baler', ...fleet });
@@ -109,6 +112,53 @@ describe('apply a machine class', () => {
     expect(res.body.error.fields.machineClass).toMatch(/counts in km.*counts in hours/);
     expect(await taskCount(w.machine.id)).toBe(0);
     expect((await Machine.findByPk(w.machine.id))!.machineClass).toBeNull();
+  });
+
+  // Hand-worked, km → mi (1 mi = 1.609344 km, NIST Handbook 44), rounded down to two significant
+  // figures: engine oil 20,000 km → 12,427.4 mi → 12,000 mi, warning 2,000 km → 1,242.7 → 1,200 mi;
+  // wheel nuts first at 100 km → 62.1 → 62 mi. Day intervals stay (365 days).
+  it('apply class — the grain truck on a miles odometer — intervals in miles: 20,000 km → 12,000 mi, first wheel-nut check 62 mi', async () => {
+    const w = await farm('manager', { category: 'truck', meterUnit: 'mi' });
+    const res = await w.agent.post(w.url).send({ machineClass: 'grain_truck' });
+    expect(res.status).toBe(200);
+    type Added = { name: string; intervalMeter: number | null; warnMeter: number | null };
+    const added = (name: string) =>
+      res.body.data.added.find((t: Added) => t.name === name) as Added & Record<string, unknown>;
+    expect(added('Engine oil and filter')).toMatchObject({
+      intervalMeter: 12000,
+      warnMeter: 1200,
+      intervalDays: 365,
+    });
+    expect(added('Wheel nut torque').firstServiceMeter).toBe(62);
+    expect(added('Wheel nut torque').instructions).toMatch(/1 mi = 1\.609344 km/);
+    const stored = await ServiceTask.findOne({
+      where: { machineId: w.machine.id, name: 'Engine oil and filter' },
+    });
+    expect(stored!.intervalMeter).toBe(12000);
+  });
+
+  // Hand-worked, hours → bales at 30 round bales an hour (common practice): pickup tines every
+  // 50 h → 1,500 bales; main gearbox oil every 500 h → 15,000 bales, first at 50 h → 1,500 bales.
+  it('apply class — a round baler counting bales — intervals in bales: 50 h → 1,500 bales, 500 h → 15,000', async () => {
+    const w = await farm('manager', { meterUnit: 'bales' });
+    const res = await w.agent.post(w.url).send({ machineClass: 'round_baler' });
+    expect(res.status).toBe(200);
+    const byName = new Map(
+      res.body.data.added.map((t: { name: string }) => [t.name, t] as const),
+    ) as Map<string, { intervalMeter: number | null; firstServiceMeter: number | null }>;
+    expect(byName.get('Pickup tines and guards')!.intervalMeter).toBe(1500);
+    expect(byName.get('Main gearbox oil')).toMatchObject({
+      intervalMeter: 15000,
+      firstServiceMeter: 1500,
+    });
+  });
+
+  it('apply class — the truck class on a bale counter — 422 naming both of its units, nothing written', async () => {
+    const w = await farm('manager', { meterUnit: 'bales' });
+    const res = await w.agent.post(w.url).send({ machineClass: 'grain_truck' });
+    expect(res.status).toBe(422);
+    expect(res.body.error.fields.machineClass).toMatch(/counts in km or miles.*counts in bales/);
+    expect(await taskCount(w.machine.id)).toBe(0);
   });
 
   it('apply class — a technician may (as with templates); an operator gets 403, nothing written', async () => {

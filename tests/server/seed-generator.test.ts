@@ -100,7 +100,7 @@ describe('demo seed — readings generator', () => {
   });
 
   it('seed generator — hour meters — never more than 24 h per elapsed day; km ≤ 1500/day, bales ≤ 2000/day', () => {
-    const limit = { h: 24, km: 1500, bales: 2000, ha: 300, acres: 750 } as const;
+    const limit = { h: 24, km: 1500, mi: 930, bales: 2000, ha: 300, acres: 750 } as const;
     for (const m of DEMO_MACHINES) {
       for (const g of gaps(generateReadings(demoOptions(m)))) {
         expect(g.increase, `${m.fleetNumber} ${g.to.takenAt.toISOString()}`).toBeLessThanOrEqual(

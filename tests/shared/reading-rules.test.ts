@@ -99,7 +99,8 @@ describe('reading rules', () => {
 
   // Daily maxima: 24 h a day for an hour meter is a hard limit (a day has 24 hours); 1,500 km,
   // 2,000 bales, 300 ha and 750 acres a day are common practice (generous ceilings for one
-  // machine in one day, no published source).
+  // machine in one day, no published source); 930 mi is the km ceiling in miles (1,500 ÷
+  // 1.609344 = 932.06, NIST Handbook 44's mile, rounded down) — tests/shared/miles-meter.test.ts.
   it('reading rules — km meter uses its own default maximum (1,500 km/day, common practice)', () => {
     const prev = { value: 200_000, takenAtMs: at('2024-03-11T08:00') };
     const day = prev.takenAtMs + 24 * hour;
@@ -108,7 +109,14 @@ describe('reading rules', () => {
     const refused = checkReading({ value: 201_600, takenAtMs: day }, { previous: prev }, km);
     expect(refused?.rule).toBe('too_fast');
     expect(refused?.message).toContain('the previous reading of 200,000 km');
-    expect(DEFAULT_MAX_PER_DAY).toEqual({ h: 24, km: 1500, bales: 2000, ha: 300, acres: 750 });
+    expect(DEFAULT_MAX_PER_DAY).toEqual({
+      h: 24,
+      km: 1500,
+      mi: 930,
+      bales: 2000,
+      ha: 300,
+      acres: 750,
+    });
   });
 });
 

@@ -13,11 +13,13 @@ import {
 import { CROP_CARE_CLASSES } from './crop-care';
 import { HARVESTER_CLASSES } from './harvesters';
 import { HAY_CLASSES } from './hay';
+import { classVariant, tasksInMeterUnit } from './meter-variants';
 import { ROAD_AND_OTHER_CLASSES } from './road-and-other';
 import { TRACTOR_CLASSES } from './tractors';
 import { YARD_CLASSES } from './yard';
 
 export * from './classes';
+export { classMeterUnits, roundDownMeterFigure } from './meter-variants';
 export { COMMON_PRACTICE_NOTE, SERVICE_LIBRARY_NOTE } from './common';
 
 export interface LibraryClass {
@@ -28,6 +30,8 @@ export interface LibraryClass {
   category: MachineCategory;
   /** the unit its meter intervals count in */
   meterUnit: MeterUnit;
+  /** how the figures were converted from the class's own unit (meter-variants.ts), or null */
+  conversion: string | null;
   tasks: TaskInput[];
 }
 
@@ -40,18 +44,27 @@ const DEFINITIONS: Record<MachineClass, { description: string; tasks: () => Task
   ...ROAD_AND_OTHER_CLASSES,
 };
 
-/** The library's set of a class: its tasks with intervals in the class's meter unit. */
-export function serviceLibraryClass(machineClass: MachineClass): LibraryClass {
+/**
+ * The library's set of a class: its tasks with intervals in the class's meter unit, or in
+ * `meterUnit` when the class has a variant in it (miles for the truck, bales for the balers).
+ */
+export function serviceLibraryClass(
+  machineClass: MachineClass,
+  meterUnit: MeterUnit = MACHINE_CLASS_METER_UNIT[machineClass],
+): LibraryClass {
   const d = DEFINITIONS[machineClass];
+  const variant = classVariant(machineClass, meterUnit);
   return {
     machineClass,
     label: MACHINE_CLASS_LABELS[machineClass],
     description: d.description,
     category: MACHINE_CLASS_CATEGORY[machineClass],
-    meterUnit: MACHINE_CLASS_METER_UNIT[machineClass],
-    tasks: d.tasks(),
+    meterUnit: variant?.unit ?? MACHINE_CLASS_METER_UNIT[machineClass],
+    conversion: variant?.note ?? null,
+    tasks: variant ? tasksInMeterUnit(machineClass, d.tasks(), meterUnit) : d.tasks(),
   };
 }
 
 /** Every class of the library, in the order of MACHINE_CLASSES. */
-export const serviceLibrary = (): LibraryClass[] => MACHINE_CLASSES.map(serviceLibraryClass);
+export const serviceLibrary = (): LibraryClass[] =>
+  MACHINE_CLASSES.map((c) => serviceLibraryClass(c));
