@@ -1,5 +1,5 @@
 import { useState } from 'react';
-import type { MachineCategory } from '../../../../shared/constants';
+import type { MachineCategory, MeterUnit } from '../../../../shared/constants';
 import {
   MACHINE_CLASS_CATEGORY,
   MACHINE_CLASS_LABELS,
@@ -19,6 +19,8 @@ interface ApplyClassPanelProps {
   orgId: string;
   machineId: string;
   category: MachineCategory;
+  /** the machine's meter unit: the class's figures are shown (and applied) in it */
+  meterUnit: string;
   machineClass: MachineClass | null;
   onDone: (result: MachineClassApplied | null) => void;
 }
@@ -38,7 +40,7 @@ export function ApplyClassPanel(props: ApplyClassPanelProps) {
   const classes = ordered(category);
   const [chosen, setChosen] = useState<MachineClass>(props.machineClass ?? classes[0]);
   const apply = useApplyMachineClass(orgId, machineId);
-  const library = serviceLibraryClass(chosen);
+  const library = serviceLibraryClass(chosen, props.meterUnit as MeterUnit);
 
   return (
     <section
@@ -57,6 +59,7 @@ export function ApplyClassPanel(props: ApplyClassPanelProps) {
       <Alert tone="warning" title="Common practice — the operator's manual wins">
         {SERVICE_LIBRARY_NOTE}
       </Alert>
+      {library.conversion ? <p className="text-field-800">{library.conversion}</p> : null}
       <div>
         <h4 className="font-bold text-field-900">
           {library.tasks.length} tasks, with intervals of common practice

@@ -137,6 +137,7 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
           orgId={orgId}
           machineId={machine.id}
           category={machine.category}
+          meterUnit={machine.meterUnit}
           machineClass={machine.machineClass ?? null}
           onDone={(result) => {
             setPanel('none');
