@@ -112,6 +112,13 @@ export const changedBy = {
       : []),
   ],
 
+  /** a machine's spec sheet saved: the sheet, and the task lines it fills (schedule, prefill) */
+  specSheet: (orgId: string, machineId: string): QueryKey[] => [
+    k.machines.specSheet(orgId, machineId),
+    k.tasks.machine(orgId, machineId),
+    k.serviceRecords.prefills(orgId, machineId),
+  ],
+
   /** a fleet file imported: machines, their schedules and first readings */
   fleetImport: (orgId: string): QueryKey[] => [
     ...changedBy.readings(orgId),

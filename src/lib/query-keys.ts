@@ -18,6 +18,9 @@ const machines = {
   list: (orgId: string, filters: Filters) => [...machines.lists(orgId), filters] as const,
   details: (orgId: string) => [...machines.all(orgId), 'detail'] as const,
   detail: (orgId: string, machineId: string) => [...machines.details(orgId), machineId] as const,
+  /** a machine's spec sheet (capacities, filters, tyres, torques, test pressures) */
+  specSheet: (orgId: string, machineId: string) =>
+    [...machines.all(orgId), 'spec-sheet', machineId] as const,
 };
 
 const readings = {

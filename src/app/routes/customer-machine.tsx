@@ -13,6 +13,7 @@ import { AccessBadge } from '../../features/dealers/components/access-badge';
 import { machineQueryOptions, useMachine } from '../../features/machines/api/get-machine';
 import { MachineStatusPanel } from '../../features/machines/components/machine-status-panel';
 import { MeterSection } from '../../features/machines/components/meter-section';
+import { SpecSheetSection } from '../../features/machines/components/spec-sheet-section';
 import {
   machineReadingsQueryOptions,
   useMachineReadings,
@@ -172,6 +173,13 @@ function CustomerMachine({ scope }: { scope: FarmScope }) {
             units={farm.units}
             timeZone={farm.timeZone}
           />
+        </Section>
+
+        <Section
+          title="Spec sheet"
+          description="The farm's figures for this machine: capacities, fluids, filter numbers, tyre pressures, torques and test pressures."
+        >
+          <SpecSheetSection orgId={farm.id} machineId={detail.id} units={farm.units} />
         </Section>
       </div>
     </>

@@ -12,6 +12,7 @@ import { machineQueryOptions, useMachine } from '../../features/machines/api/get
 import { MachineDetails } from '../../features/machines/components/machine-details';
 import { MachineStatusPanel } from '../../features/machines/components/machine-status-panel';
 import { MeterSection } from '../../features/machines/components/meter-section';
+import { SpecSheetSection } from '../../features/machines/components/spec-sheet-section';
 import {
   machineReadingsQueryOptions,
   useMachineReadings,
@@ -50,6 +51,7 @@ const SECTIONS = [
   { id: 'history', label: 'History' },
   { id: 'meter', label: 'Meter' },
   { id: 'measurements', label: 'Measurements' },
+  { id: 'spec', label: 'Spec sheet' },
   { id: 'readings', label: 'Readings' },
   { id: 'details', label: 'Details' },
 ] as const;
@@ -225,6 +227,15 @@ export function MachinePage() {
             description="A reading taken at each service visit, against the manual's limits."
           >
             <MeasurementsSection orgId={orgId} machineId={detail.id} meterUnit={detail.meterUnit} />
+          </Section>
+        </div>
+
+        <div id="spec" className="scroll-mt-20">
+          <Section
+            title="Spec sheet"
+            description="Capacities, fluids, filter numbers, tyre pressures, torques and test pressures, as copied from the operator's manual."
+          >
+            <SpecSheetSection orgId={orgId} machineId={detail.id} units={organization.units} />
           </Section>
         </div>
 

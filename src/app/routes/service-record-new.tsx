@@ -15,6 +15,7 @@ import { Icon } from '../../components/ui/icons';
 import { PageHeader } from '../../components/ui/page-header';
 import { PageSkeleton } from '../../components/ui/skeleton';
 import { machineQueryOptions, useMachine } from '../../features/machines/api/get-machine';
+import { useSpecSheet } from '../../features/machines/api/get-spec-sheet';
 import { tasksQueryOptions, useTasks } from '../../features/schedules/api/get-tasks';
 import {
   activeDefectsQueryOptions,
@@ -113,6 +114,8 @@ function ServiceRecordNewScreen({ scope }: { scope: FarmScope }) {
   const people = useShopPeople(orgId, member);
   const defects = useActiveDefects(orgId, machineId, member);
   const history = useServiceHistory(orgId, machineId, { q: '', page: 1 });
+  // its test pressures give measurements their spec; the form does not wait for it
+  const sheet = useSpecSheet(orgId, machineId);
   const record = useServiceRecord(orgId, complete ?? '');
   const known = useMemo(() => {
     const ids = new Set((tasks.data?.data ?? []).map((t) => t.id));
@@ -260,6 +263,7 @@ function ServiceRecordNewScreen({ scope }: { scope: FarmScope }) {
         currency={scope.farm.currency}
         units={scope.farm.units}
         cancelHref={complete ? scope.serviceRecordHref(complete) : machineHref}
+        sheetTests={sheet.data?.data.testPressures}
         onSaved={(result) =>
           navigate(scope.serviceRecordHref(result.data.id), {
             state: result.data.status === 'completed' ? { resets: result.resets } : null,

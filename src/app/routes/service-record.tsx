@@ -7,6 +7,8 @@ import { PageHeader } from '../../components/ui/page-header';
 import { PageSkeleton } from '../../components/ui/skeleton';
 import { machineQueryOptions } from '../../features/machines/api/get-machine';
 import { TagOutPanel } from '../../features/machines/components/tag-out-panel';
+import { useSpecSheet } from '../../features/machines/api/get-spec-sheet';
+import { OutOfSpecDefects } from '../../features/defects/components/out-of-spec-defects';
 import {
   serviceRecordQueryOptions,
   useServiceRecord,
@@ -16,6 +18,7 @@ import { ServiceRecordView } from '../../features/services/components/service-re
 import { isApiError } from '../../lib/api-client';
 import { formatLocalDate } from '../../lib/fleet-format';
 import { loaderFarmId, WithFarmScope, type FarmScope } from '../farm-scope';
+import { outOfSpecItems } from '../out-of-spec';
 
 export const serviceRecordLoader =
   (queryClient: QueryClient) =>
@@ -46,6 +49,10 @@ function ServiceRecordScreen({ scope }: { scope: FarmScope }) {
   // the machine's tag-out shows here too: closing its defects did not release it
   const machineId = record.data?.data.machine.id ?? '';
   const machine = useQuery({ ...machineQueryOptions(orgId, machineId), enabled: !!machineId });
+  // a member who may report defects raises one in a tap from a measurement outside its spec
+  const defectsHref = scope.defectsHref?.(machineId) ?? null;
+  const mayRaise = defectsHref !== null && machine.data?.data.status !== 'sold';
+  const sheet = useSpecSheet(orgId, machineId, mayRaise);
 
   if (record.isPending) return <PageSkeleton label="Loading the service record" />;
   if (record.isError) {
@@ -85,6 +92,16 @@ function ServiceRecordScreen({ scope }: { scope: FarmScope }) {
             abilities={machine.data.abilities}
             timeZone={timeZone}
             defectsHref={scope.defectsHref?.(data.machine.id)}
+          />
+        </div>
+      ) : null}
+      {mayRaise && defectsHref && data.status === 'completed' ? (
+        <div className="mb-6">
+          <OutOfSpecDefects
+            orgId={orgId}
+            machineId={data.machine.id}
+            items={outOfSpecItems(data, sheet.data?.data.testPressures ?? [])}
+            defectsHref={defectsHref}
           />
         </div>
       ) : null}

@@ -46,6 +46,18 @@ export const ADVISOR_FLEET = 'AD-01';
 /** service-library.e2e.ts adds this used baler (one reading) and applies a machine class to it. */
 export const LIBRARY_FLEET = 'LB-01';
 
+/**
+ * spec-sheet.e2e.ts adds this tractor (one reading), fills its spec sheet, records a visit with a
+ * measurement outside the sheet's spec and raises a defect from it (issue 11).
+ */
+export const SPEC_SHEET_FLEET = 'SP-01';
+
+/**
+ * restricted-use.e2e.ts adds this machine (a tractor of lena's, no readings), restricts it on its
+ * page as the manager and opens its walkaround as lena.
+ */
+export const RESTRICTED_USE_FLEET = 'RU-01';
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -58,6 +70,8 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   PLANNED_ONCE_FLEET,
   LIBRARY_FLEET,
   ADVISOR_FLEET,
+  SPEC_SHEET_FLEET,
+  RESTRICTED_USE_FLEET,
 ]);
 
 /** The signed-in person's Larkspur Flats Farm membership: its organization id and time zone. */

@@ -24,6 +24,7 @@ export function TaskContents({ task, showSafetyNotes }: { task: Task; showSafety
                   {part.quantity} × {part.partNumber || part.description}
                   {part.partNumber && part.description ? ` — ${part.description}` : ''}
                   {part.wearPart ? ' (wear part: inspect, replace when worn)' : ''}
+                  {part.filterRole ? ' (number from the spec sheet)' : ''}
                 </li>
               ))}
             </ul>
@@ -36,6 +37,7 @@ export function TaskContents({ task, showSafetyNotes }: { task: Task; showSafety
               {task.fluids.map((fluid, i) => (
                 <li key={i}>
                   {fluid.volume} {fluid.unit} {fluid.kind}
+                  {fluid.capacity ? ' (from the spec sheet)' : ''}
                 </li>
               ))}
             </ul>

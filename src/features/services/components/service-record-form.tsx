@@ -20,7 +20,7 @@ import {
   type ServiceFormInput,
   type ServiceFormMode,
 } from '../lib/form-values';
-import { OtherCostsFields, MeasurementsFields } from './cost-measurement-fields';
+import { OtherCostsFields, MeasurementsFields, type SheetTest } from './cost-measurement-fields';
 import { PartsFields, FluidsFields } from './parts-fluids-fields';
 import { ReassemblyFields } from './reassembly-fields';
 import { FormBlock } from './form-block';
@@ -106,6 +106,8 @@ export interface ServiceRecordFormProps {
   units: UnitSystem;
   cancelHref: string;
   onSaved: (result: RecordWithResets) => void;
+  /** the machine's spec sheet tests: a measurement of the same name takes its spec */
+  sheetTests?: readonly SheetTest[];
 }
 
 /**
@@ -245,7 +247,7 @@ export function ServiceRecordForm(props: ServiceRecordFormProps) {
       {!isPlan ? (
         <>
           <FormBlock title="Measurements and reassembly">
-            <MeasurementsFields form={form} rows={measurements} />
+            <MeasurementsFields form={form} rows={measurements} sheetTests={props.sheetTests} />
             <ReassemblyFields
               form={form}
               rows={settings}
