@@ -173,7 +173,9 @@ describe('role flows — what new users tripped on (browser)', () => {
       const progress = page.getByRole('status').filter({ hasText: /answered$/ });
       expect(await progress.innerText()).toBe(`0 of ${total} answered`);
 
-      const first = page.getByRole('region', { name: /^Items 1–6/ });
+      const first = page.getByRole('region', {
+        name: /^Before start — engine off, key out · items 1–6/,
+      });
       const restOk = first.getByRole('button', { name: /^Mark the rest of this section OK/ });
       // the first item is a finding, entered by hand; the rest are not offered yet
       await first
@@ -203,12 +205,18 @@ describe('role flows — what new users tripped on (browser)', () => {
             .getByRole('radio', { name: 'OK', exact: true })
             .isChecked(),
         ).toBe(true);
-      const firstToggle = first.getByRole('button', { name: /^Items 1–6/ });
+      const firstToggle = first.getByRole('button', {
+        name: /^Before start — engine off, key out · items 1–6/,
+      });
       expect(await firstToggle.getAttribute('aria-expanded')).toBe('true');
 
       // the second section, answered one by one, folds away once its last item is answered
-      const second = page.getByRole('region', { name: /^Items 7–12/ });
-      const secondToggle = second.getByRole('button', { name: /^Items 7–12/ });
+      const second = page.getByRole('region', {
+        name: /^Before start — engine off, key out · items 7–12/,
+      });
+      const secondToggle = second.getByRole('button', {
+        name: /^Before start — engine off, key out · items 7–12/,
+      });
       for (const item of items.slice(6, 12))
         await second
           .getByRole('radiogroup', { name: item.label, exact: true })

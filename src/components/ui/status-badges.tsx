@@ -43,3 +43,12 @@ export function MachineStatusBadge({
     </Badge>
   );
 }
+
+/** A machine in service but restricted in use: its own word and icon, beside its status. */
+export function RestrictedBadge({ className }: { className?: string }) {
+  return (
+    <Badge tone="due-soon" icon="alert" className={className}>
+      Restricted use
+    </Badge>
+  );
+}

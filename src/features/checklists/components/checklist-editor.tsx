@@ -10,14 +10,24 @@ import { TextareaField } from '../../../components/ui/textarea-field';
 import { changedFields } from '../../../lib/changed-fields';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { useSaveTemplate } from '../api/save-template';
+import { classOptions } from '../lib/class-options';
 import type { BuiltInChecklist, ChecklistTemplate } from '../api/types';
 import { ChecklistItemFields, type ChecklistFormValues } from './checklist-item-fields';
 
-const blankItem = () => ({ label: '', guidance: '', critical: false, hazards: [], caution: '' });
+const blankItem = () => ({
+  label: '',
+  guidance: '',
+  critical: false,
+  hazards: [],
+  caution: '',
+  phase: 'before_start' as const,
+  classes: [],
+});
 
 /**
  * Edit a category's walkaround checklist: name, description (with its sources), and the items
- * (label, guidance, critical, hazards, caution), added, removed and reordered. Saving a category
+ * (label, guidance, when it is checked, the classes it is for, critical, hazards, caution), added,
+ * removed and reordered. Saving a category
  * that still uses the built-in list creates the farm's own from the edited copy.
  */
 export function ChecklistEditor({
@@ -61,6 +71,10 @@ export function ChecklistEditor({
   // the items carry their own `id` (kept so past walkarounds still match): rows get `key`
   const items = useFieldArray({ control, name: 'items', keyName: 'key' });
   const watched = useWatch({ control, name: 'items' });
+  const options = classOptions(
+    category,
+    start.items.flatMap((i) => i.classes),
+  );
 
   // A new item opens for typing; its row key exists only once the append has rendered.
   const [openNew, setOpenNew] = useState(false);
@@ -98,7 +112,9 @@ export function ChecklistEditor({
       } catch (error) {
         const names = ['name', 'description', 'items'].concat(
           values.items.flatMap((_, i) =>
-            ['label', 'guidance', 'critical', 'hazards', 'caution'].map((f) => `items.${i}.${f}`),
+            ['label', 'guidance', 'critical', 'hazards', 'caution', 'phase', 'classes'].map(
+              (f) => `items.${i}.${f}`,
+            ),
           ),
         ) as Path<ChecklistFormValues>[];
         setFormError(applyServerErrors(error, setError, names));
@@ -154,6 +170,9 @@ export function ChecklistEditor({
                 label={watched?.[index]?.label ?? ''}
                 critical={Boolean(watched?.[index]?.critical)}
                 hazardCount={watched?.[index]?.hazards?.length ?? 0}
+                running={watched?.[index]?.phase === 'running'}
+                classCount={watched?.[index]?.classes?.length ?? 0}
+                classOptions={options}
                 open={openKeys.has(field.key)}
                 control={control}
                 register={register}

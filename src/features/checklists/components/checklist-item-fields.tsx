@@ -7,6 +7,8 @@ import { TextField } from '../../../components/ui/field';
 import { Icon } from '../../../components/ui/icons';
 import { TextareaField } from '../../../components/ui/textarea-field';
 import { HAZARD_OPTIONS } from '../lib/hazards';
+import type { MachineClass } from '../../../../shared/domain/service-library/classes';
+import { ItemScopeFields } from './item-scope-fields';
 
 export type ChecklistFormValues = z.input<typeof checklistTemplateCreateSchema>;
 
@@ -16,6 +18,11 @@ interface ChecklistItemFieldsProps {
   label: string;
   critical: boolean;
   hazardCount: number;
+  /** checked from the seat with the engine running (else walking round before start) */
+  running: boolean;
+  /** the classes it is kept for (none: every machine of the category) */
+  classCount: number;
+  classOptions: readonly { value: MachineClass; label: string }[];
   open: boolean;
   control: Control<ChecklistFormValues, unknown, z.output<typeof checklistTemplateCreateSchema>>;
   register: UseFormRegister<ChecklistFormValues>;
@@ -35,6 +42,9 @@ export function ChecklistItemFields({
   label,
   critical,
   hazardCount,
+  running,
+  classCount,
+  classOptions,
   open,
   control,
   register,
@@ -67,6 +77,12 @@ export function ChecklistItemFields({
               Caution
             </Badge>
           ) : null}
+          {running ? (
+            <Badge tone="info" icon="gauge">
+              In the seat
+            </Badge>
+          ) : null}
+          {classCount > 0 ? <Badge tone="accent">Some classes only</Badge> : null}
           {itemErrors ? (
             <Badge tone="overdue" icon="error">
               Check this item
@@ -121,6 +137,13 @@ export function ChecklistItemFields({
               technician or manager clears it
             </span>
           </label>
+          <ItemScopeFields
+            index={index}
+            control={control}
+            register={register}
+            classOptions={classOptions}
+            phaseError={itemErrors?.phase?.message}
+          />
           <Controller
             control={control}
             name={`items.${index}.hazards`}

@@ -1,10 +1,10 @@
 import { Link } from 'react-router-dom';
 import { Caution } from '../../../components/ui/caution';
-import { MachineStatusBadge } from '../../../components/ui/status-badges';
+import { MachineStatusBadge, RestrictedBadge } from '../../../components/ui/status-badges';
 import type { DueRow } from '../api/types';
 import { BASIS_TEXT } from './due-format';
 
-/** Fleet number and name, linking to the machine page; tagged-out machines say so. */
+/** Fleet number and name, linking to the machine page; tagged-out and restricted machines say so. */
 export function DueMachine({ row, href }: { row: DueRow; href: string }) {
   const { machine } = row;
   return (
@@ -17,6 +17,7 @@ export function DueMachine({ row, href }: { row: DueRow; href: string }) {
         <span className="font-normal">{machine.name}</span>
       </Link>
       {machine.status !== 'in_service' ? <MachineStatusBadge status={machine.status} /> : null}
+      {machine.restricted ? <RestrictedBadge /> : null}
     </div>
   );
 }

@@ -2,7 +2,11 @@ import { Link } from 'react-router-dom';
 import { CATEGORY_LABELS } from '../../../../shared/constants';
 import { cx } from '../../../components/ui/cx';
 import { Icon } from '../../../components/ui/icons';
-import { DueStatusBadge, MachineStatusBadge } from '../../../components/ui/status-badges';
+import {
+  DueStatusBadge,
+  MachineStatusBadge,
+  RestrictedBadge,
+} from '../../../components/ui/status-badges';
 import { formatLocalDate } from '../../../lib/fleet-format';
 import type { Machine } from '../api/types';
 import { MeterReadingSummary } from './meter-reading-summary';
@@ -50,8 +54,12 @@ export function FleetCards({
               {machine.status !== 'in_service' ? (
                 <MachineStatusBadge status={machine.status} />
               ) : null}
+              {machine.restriction ? <RestrictedBadge /> : null}
               {machine.dueStatus ? <DueStatusBadge status={machine.dueStatus} /> : null}
             </span>
+            {machine.restriction?.reason ? (
+              <span className="text-sm font-bold text-straw-900">{machine.restriction.reason}</span>
+            ) : null}
             <span className="grid grid-cols-2 gap-3 text-sm">
               <span className="flex flex-col">
                 <span className="text-xs font-bold tracking-wide text-field-600 uppercase">

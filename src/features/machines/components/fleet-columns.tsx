@@ -1,7 +1,11 @@
 import { createColumnHelper } from '@tanstack/react-table';
 import { Link } from 'react-router-dom';
 import { CATEGORY_LABELS } from '../../../../shared/constants';
-import { DueStatusBadge, MachineStatusBadge } from '../../../components/ui/status-badges';
+import {
+  DueStatusBadge,
+  MachineStatusBadge,
+  RestrictedBadge,
+} from '../../../components/ui/status-badges';
 import { formatLocalDate } from '../../../lib/fleet-format';
 import type { Machine, MachineSortField } from '../api/types';
 import { MeterReadingSummary } from './meter-reading-summary';
@@ -89,7 +93,19 @@ export function fleetColumns({ machineHref, timeZone }: ColumnContext) {
       id: 'status',
       header: 'Status',
       meta: { sortField: 'status' },
-      cell: (info) => <MachineStatusBadge status={info.getValue()} />,
+      // a restriction is said beside the status, with its reason (the table has no hover-only text)
+      cell: (info) => {
+        const { restriction } = info.row.original;
+        return (
+          <span className="flex flex-col items-start gap-1">
+            <MachineStatusBadge status={info.getValue()} />
+            {restriction ? <RestrictedBadge /> : null}
+            {restriction?.reason ? (
+              <span className="max-w-56 text-sm text-straw-900">{restriction.reason}</span>
+            ) : null}
+          </span>
+        );
+      },
     }),
   ];
 }

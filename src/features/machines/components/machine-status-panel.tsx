@@ -1,11 +1,19 @@
 import { Alert } from '../../../components/ui/alert';
-import { DueStatusBadge, MachineStatusBadge } from '../../../components/ui/status-badges';
+import {
+  DueStatusBadge,
+  MachineStatusBadge,
+  RestrictedBadge,
+} from '../../../components/ui/status-badges';
 import { formatLocalDate, formatRate } from '../../../lib/fleet-format';
 import type { MachineAbilities, MachineDetail } from '../api/types';
 import { MeterReadingSummary } from './meter-reading-summary';
+import { RestrictionPanel } from './restriction-panel';
 import { TagOutPanel } from './tag-out-panel';
 
-/** The top of a machine's page: whether it may be used, where its meter stands, how fast it runs. */
+/**
+ * The top of a machine's page: whether it may be used (tagged out, restricted), where its meter
+ * stands, how fast it runs.
+ */
 export function MachineStatusPanel({
   orgId,
   machine,
@@ -15,7 +23,7 @@ export function MachineStatusPanel({
 }: {
   orgId: string;
   machine: MachineDetail['data'];
-  abilities: Pick<MachineAbilities, 'returnToService'>;
+  abilities: Pick<MachineAbilities, 'returnToService' | 'restrict' | 'liftRestriction'>;
   timeZone: string;
   /** the machine's defects (farm members) */
   defectsHref?: string;
@@ -30,6 +38,7 @@ export function MachineStatusPanel({
         timeZone={timeZone}
         defectsHref={defectsHref}
       />
+      <RestrictionPanel orgId={orgId} machine={machine} abilities={abilities} timeZone={timeZone} />
       {machine.status === 'sold' ? (
         <Alert tone="info" title="Sold">
           This machine has left the fleet. Its history stays here; no new readings are taken.
@@ -40,6 +49,7 @@ export function MachineStatusPanel({
           <dt className="text-sm font-bold text-field-600">Status</dt>
           <dd>
             <MachineStatusBadge status={machine.status} />
+            {machine.restriction ? <RestrictedBadge className="mt-1" /> : null}
           </dd>
         </div>
         <div className="flex flex-col gap-1">

@@ -8,7 +8,7 @@ import { queryKeys } from '../../../lib/query-keys';
 // them, where assignments exist). 200 is the page limit; a yard's walkaround list is far shorter.
 const PICK_QUERY = 'sort=fleetNumber&order=asc&page=1&pageSize=200';
 
-/** Machines to pick for a walkaround: sold ones are left out, tagged-out ones kept (and shown). */
+/** Machines to pick for a walkaround: sold ones are left out, tagged-out ones kept (and shown), restrictions with them. */
 export const getPickableMachines = (orgId: string, signal?: AbortSignal) =>
   apiClient
     .get<MachineList>(`/organizations/${segment(orgId)}/machines?${PICK_QUERY}`, { signal })
@@ -21,6 +21,7 @@ export const getPickableMachines = (orgId: string, signal?: AbortSignal) =>
           name: m.name,
           category: m.category,
           status: m.status,
+          restriction: m.restriction,
           meterUnit: m.meterUnit,
           lastReading: m.lastReading,
           operatorIds: m.operatorIds,

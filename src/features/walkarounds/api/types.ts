@@ -21,6 +21,7 @@ export type PickableMachine = Pick<
   | 'name'
   | 'category'
   | 'status'
+  | 'restriction'
   | 'meterUnit'
   | 'lastReading'
   | 'operatorIds'

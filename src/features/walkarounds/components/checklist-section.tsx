@@ -7,7 +7,8 @@ import { offersRestOk, type ChecklistSection, type SectionProgress } from '../li
 const SHOWN_RATIO = 0.5;
 
 /**
- * One run of the checklist. It folds away once every item is answered and none found a problem
+ * One phase of the checklist (before start, or in the seat with the engine running), or one run
+ * of a long phase. It folds away once every item is answered and none found a problem
  * (a section with an Attention or Fail stays open for its notes and photos; one with a missing
  * answer opens again). "Mark the rest of this section OK" appears only after each item still
  * unanswered has been shown.
@@ -85,6 +86,7 @@ export function ChecklistSectionView({
         </button>
       </h2>
       <div id={`${id}-items`} hidden={!open} className="flex flex-col gap-4">
+        {section.intro ? <p className="font-bold text-field-800">{section.intro}</p> : null}
         <ol ref={listRef} aria-label={section.title} className="flex flex-col gap-4">
           {children}
         </ol>

@@ -2,6 +2,7 @@ import { useId, useState } from 'react';
 import { Link } from 'react-router-dom';
 import { CATEGORY_LABELS } from '../../../../shared/constants';
 import { Badge } from '../../../components/ui/badge';
+import { RestrictedBadge } from '../../../components/ui/status-badges';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
 import { TextField } from '../../../components/ui/field';
@@ -20,7 +21,8 @@ const SEARCH_FROM = 8;
 /**
  * The machines this person may walk round: the ones assigned to them first, then the rest, each
  * in fleet-number order. Tagged-out ones are listed (so nobody thinks they are missing) but are
- * not links: they must not be used; a tap says why, since when and whom to ask.
+ * not links: they must not be used; a tap says why, since when and whom to ask. A restricted one
+ * is a link like any other, with its reason written on the card (never behind a hover).
  */
 export function WalkaroundPicker({
   orgId,
@@ -141,6 +143,14 @@ function MachineChoice({
           ? ` · last ${formatMeter(machine.lastReading.value, machine.meterUnit)}`
           : ''}
       </span>
+      {machine.restriction ? (
+        <span className="mt-2 flex flex-col items-start gap-1">
+          <RestrictedBadge />
+          <span className="font-bold text-straw-900">
+            {machine.restriction.reason ?? 'Ask the farm what it may be used for.'}
+          </span>
+        </span>
+      ) : null}
     </span>
   );
 

@@ -3,6 +3,7 @@ import type { UnitSystem } from '../../../../shared/constants';
 import type { WalkaroundPurpose } from '../../../../shared/schemas/walkarounds';
 import { ErrorState } from '../../../components/ui/error-state';
 import { PageHeader } from '../../../components/ui/page-header';
+import { RestrictionNotice } from '../../../components/ui/restriction-notice';
 import { PageSkeleton } from '../../../components/ui/skeleton';
 import { isApiError } from '../../../lib/api-client';
 import { formatDateTime } from '../../../lib/format';
@@ -171,8 +172,17 @@ function ReadyScreen({
     machine: checklist.machine,
     onDone: draftApi.finish,
   });
+  // a checklist kept on the phone before restrictions has none
+  const restriction = checklist.machine.restriction ?? null;
   return (
     <div className="flex flex-col gap-4">
+      {restriction ? (
+        <RestrictionNotice
+          fleetNumber={checklist.machine.fleetNumber}
+          restriction={restriction}
+          timeZone={timeZone}
+        />
+      ) : null}
       {offline ? (
         <p role="status" className="rounded-lg border-2 border-sky-300 bg-sky-50 p-3 text-sky-900">
           No connection: this is the checklist saved on this phone. Carry on; the walkaround is kept
