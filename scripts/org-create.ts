@@ -8,7 +8,7 @@
 //   --manager-name NAME     the greeting of the invitation (default: the e-mail's local part)
 //   --time-zone ZONE        IANA name (default UTC; the manager can change it in Settings)
 //   --currency CODE         ISO 4217 (default USD)
-//   --units metric|imperial a farm's units (default metric)
+//   --units metric|imperial units (default metric); a dealer's are its parts forecast's
 // DATABASE_URL names the database; without it the project's development cluster is used.
 import { randomBytes } from 'node:crypto';
 import { parseArgs } from 'node:util';
@@ -69,11 +69,9 @@ export function parseOrgCreateArgs(argv: string[]): OrgCreateRequest {
     name: values.name ?? '',
     timeZone: values['time-zone'] ?? 'UTC',
     currency: values.currency ?? 'USD',
-    ...(kind === 'farm' && values.units !== undefined && { units: values.units }),
+    ...(values.units !== undefined && { units: values.units }),
   });
   if (!organization.success) throw fail(organization.error.issues, (p) => OPTION_OF[p] ?? p);
-  if (kind !== 'farm' && values.units !== undefined)
-    throw new UsageError('--units: only a farm has units');
   const managerName = personName.safeParse(
     values['manager-name'] ?? managerEmail.data.split('@')[0],
   );

@@ -30,7 +30,13 @@ export async function createOrganization(
     const organization = await Organization.create(
       input.kind === 'farm'
         ? { ...input }
-        : { kind: 'dealer', name: input.name, timeZone: input.timeZone, currency: input.currency },
+        : {
+            kind: 'dealer',
+            name: input.name,
+            timeZone: input.timeZone,
+            currency: input.currency,
+            units: input.units,
+          },
       { transaction: t },
     );
     if (creatorId) {

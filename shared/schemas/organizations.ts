@@ -63,8 +63,11 @@ const organizationFields = {
   digestHour: boundedNumber('Digest hour', ORGANIZATION_BOUNDS.digestHour),
 };
 
-/** Settings only a farm has: a dealer refuses them by name. */
-export const FARM_ONLY_FIELDS = ['units', 'labourRateMinor', 'seasonMonths', 'digestHour'] as const;
+/**
+ * Settings only a farm has: a dealer refuses them by name. Units are both kinds': a dealer's pick
+ * the stock units of its parts forecast (litres and kg, or US gallons and pounds).
+ */
+export const FARM_ONLY_FIELDS = ['labourRateMinor', 'seasonMonths', 'digestHour'] as const;
 
 export const farmCreateSchema = z
   .object({
@@ -84,6 +87,7 @@ export const dealerCreateSchema = z
     name: organizationFields.name,
     timeZone: organizationFields.timeZone,
     currency: organizationFields.currency,
+    units: organizationFields.units.default('metric'),
   })
   .strict();
 

@@ -109,8 +109,8 @@ describe('org:create — reading the command line', () => {
       /--time-zone: Time zone must be an IANA name/,
     ],
     [
-      ['--kind', 'dealer', '--name', 'X', '--manager-email', 'a@b.example', '--units', 'metric'],
-      /--units: only a farm has units/,
+      ['--kind', 'dealer', '--name', 'X', '--manager-email', 'a@b.example', '--units', 'cubits'],
+      /--units: Units must be one of: metric, imperial/,
     ],
     [
       ['--kind', 'farm', '--name', 'X', '--manager-email', 'a@b.example', '--colour', 'red'],
@@ -132,7 +132,13 @@ describe('org:create — reading the command line', () => {
         'ines@kestrel.example',
       ]),
     ).toEqual({
-      input: { kind: 'dealer', name: 'Kestrel Parts', timeZone: 'UTC', currency: 'USD' },
+      input: {
+        kind: 'dealer',
+        name: 'Kestrel Parts',
+        timeZone: 'UTC',
+        currency: 'USD',
+        units: 'metric',
+      },
       manager: { email: 'ines@kestrel.example', name: 'ines' },
     });
   });

@@ -80,7 +80,7 @@ describe('organizations — create', () => {
       currency: 'USD',
     });
     expect(dealer.status).toBe(201);
-    expect(dealer.body.data).toMatchObject({ kind: 'dealer', currency: 'USD' });
+    expect(dealer.body.data).toMatchObject({ kind: 'dealer', currency: 'USD', units: 'metric' });
     expect(dealer.body.abilities).toEqual({ update: true, delete: true, export: false });
 
     const me = await agent.get('/api/v1/me');
@@ -115,11 +115,13 @@ describe('organizations — create', () => {
     });
     const noKind = await agent.post('/api/v1/organizations').send({ name: 'Kindless' });
     expect(noKind.body.error.fields).toEqual({ kind: 'Kind must be one of: farm, dealer' });
-    const dealerUnits = await agent
+    const dealerRate = await agent
       .post('/api/v1/organizations')
-      .send({ kind: 'dealer', name: 'D', timeZone: 'UTC', currency: 'USD', units: 'metric' });
-    expect(dealerUnits.status).toBe(400);
-    expect(dealerUnits.body.error.fields).toEqual({ units: 'Not a field of this request' });
+      .send({ kind: 'dealer', name: 'D', timeZone: 'UTC', currency: 'USD', labourRateMinor: 1 });
+    expect(dealerRate.status).toBe(400);
+    expect(dealerRate.body.error.fields).toEqual({
+      labourRateMinor: 'Not a field of this request',
+    });
     expect(await countRows('organizations')).toBe(0);
     expect(await countRows('memberships')).toBe(0);
   });
@@ -201,6 +203,15 @@ describe('organizations — settings', () => {
     });
     await dealer.reload();
     expect(dealer.name).toBe('Parts Counter');
+    // units are a dealer's too: they pick its parts forecast's stock units
+    const units = await (
+      await signedInAgent(app, user)
+    )
+      .patch(api(dealer.id))
+      .send({ units: 'imperial' });
+    expect(units.status).toBe(200);
+    await dealer.reload();
+    expect(dealer.units).toBe('imperial');
   });
 });
 

@@ -46,6 +46,11 @@ const FIELDS: Path<OrganizationFormValues>[] = [
   'seasonMonths',
   'digestHour',
 ];
+const UNIT_OPTIONS = [
+  { value: 'metric', label: 'Metric (litres, km, ha)' },
+  { value: 'imperial', label: 'Imperial (gallons, miles, acres)' },
+];
+
 /** API field → form field (the rate is typed in major units). */
 const formFieldOf = (field: string) =>
   (field === 'labourRateMinor'
@@ -128,6 +133,7 @@ export function OrganizationForm(props: OrganizationFormProps) {
                 name: fields.name,
                 timeZone: fields.timeZone,
                 currency: fields.currency,
+                units: fields.units,
               };
         const parsed = organizationCreateSchema.safeParse(body);
         if (!parsed.success) return showIssues(parsed.error, setError);
@@ -137,7 +143,6 @@ export function OrganizationForm(props: OrganizationFormProps) {
         const { kind: _same, ...after } = toApi(values);
         const changed = changedFields(before, after);
         if (kind === 'dealer') {
-          delete changed.units;
           delete changed.labourRateMinor;
           delete changed.seasonMonths;
           delete changed.digestHour;
@@ -189,15 +194,21 @@ export function OrganizationForm(props: OrganizationFormProps) {
             {...register('currency')}
           />
         </div>
+        {isFarm ? null : (
+          <SelectField
+            label="Units"
+            hint="The parts forecast sums fluids in them: litres and kilograms, or US gallons and pounds."
+            options={UNIT_OPTIONS}
+            error={errors.units?.message}
+            {...register('units')}
+          />
+        )}
         {isFarm ? (
           <>
             <div className="grid gap-5 sm:grid-cols-2">
               <SelectField
                 label="Units"
-                options={[
-                  { value: 'metric', label: 'Metric (litres, km, ha)' },
-                  { value: 'imperial', label: 'Imperial (gallons, miles, acres)' },
-                ]}
+                options={UNIT_OPTIONS}
                 error={errors.units?.message}
                 {...register('units')}
               />
