@@ -53,8 +53,9 @@ describe('restricted use — set by the manager, read by the operator before the
 
   it('manager — restricts RU-01 on its page; a missing reason is named beside the field; the fleet list marks it in words', async () => {
     const page = await browser.newPage(DESKTOP);
-    const errors = collectPageErrors(page);
     await signIn(page, 'marta@larkspur.example', PASSWORD);
+    // from here on (the sign-in page's own session check answers 401 before signing in)
+    const errors = collectPageErrors(page);
     await page.goto(`/o/${orgId}/machines/${machineId}`);
     await page.getByRole('button', { name: 'Restrict use…' }).click();
     const form = page.getByRole('form', { name: `Restrict the use of ${FLEET}` });
@@ -81,8 +82,8 @@ describe('restricted use — set by the manager, read by the operator before the
 
   it('operator (phone) — the picker and the walkaround say the reason in full; the walkaround is in two phases', async () => {
     const page = await browser.newPage(PHONE_VIEWPORT);
-    const errors = collectPageErrors(page);
     await signIn(page, 'lena@larkspur.example', PASSWORD);
+    const errors = collectPageErrors(page);
     await page.goto(`/o/${orgId}/walkaround`);
     // still a link: a restricted machine may be walked round and used, within the limit
     const choice = page.getByRole('link', { name: new RegExp(`^${FLEET}`) });
