@@ -58,6 +58,12 @@ export const SPEC_SHEET_FLEET = 'SP-01';
  */
 export const RESTRICTED_USE_FLEET = 'RU-01';
 
+/**
+ * season-service.e2e.ts adds this combine (harvest August–October, no readings) and gives it a
+ * pre-season service on its page (issue 11).
+ */
+export const SEASON_SERVICE_FLEET = 'SE-01';
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -72,6 +78,7 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ADVISOR_FLEET,
   SPEC_SHEET_FLEET,
   RESTRICTED_USE_FLEET,
+  SEASON_SERVICE_FLEET,
 ]);
 
 /** The signed-in person's Larkspur Flats Farm membership: its organization id and time zone. */
