@@ -3,6 +3,8 @@
 // in turn (all of them, or those named). Each part builds its own data set and prints one line per
 // figure — `bench <name>: <value> <unit> | baseline <value> <unit> | ratio <r>` — against a
 // baseline measured in the same run; the lines are also gathered in .data/bench/results.json.
+// HOURSTONE_TEST_SLOT=N (1-9) gives a run its own cluster (bench-N, port 54312 + 10·N) and
+// results folder (.data/bench-N), so runs sharing a checkout never drop each other's database.
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
@@ -25,15 +27,22 @@ if (unknown.length) {
 }
 const chosen = asked.length ? asked : parts;
 
+const SLOT = Number(process.env.HOURSTONE_TEST_SLOT ?? 0);
+if (!Number.isInteger(SLOT) || SLOT < 0 || SLOT > 9) {
+  console.error(`HOURSTONE_TEST_SLOT must be a whole number from 0 to 9 (got ${SLOT})`);
+  process.exit(2);
+}
+const slotSuffix = SLOT === 0 ? '' : `-${SLOT}`;
+
 ensureDependencies();
-const outDir = path.join(dataDir, 'bench');
+const outDir = path.join(dataDir, `bench${slotSuffix}`);
 mkdirSync(outDir, { recursive: true });
 const linesFile = path.join(outDir, 'figures.jsonl');
 rmSync(linesFile, { force: true });
 
 const postgres = await startPostgres({
-  name: 'bench',
-  port: process.env.BENCH_PG_PORT ?? 54312,
+  name: `bench${slotSuffix}`,
+  port: process.env.BENCH_PG_PORT ?? 54312 + SLOT * 10,
   database: 'hourstone_bench',
   externalUrl: process.env.BENCH_DATABASE_URL,
 });
@@ -71,5 +80,7 @@ writeFileSync(
   path.join(outDir, 'results.json'),
   `${JSON.stringify({ ranAt: new Date().toISOString(), machine, parts: chosen, figures }, null, 2)}\n`,
 );
-log(`\nbench: ${figures.length} figures on ${machine}; written to .data/bench/results.json`);
+log(
+  `\nbench: ${figures.length} figures on ${machine}; written to .data/bench${slotSuffix}/results.json`,
+);
 process.exit(code);
