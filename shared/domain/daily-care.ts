@@ -23,6 +23,8 @@ export function careState(
 
 export interface CareFacts {
   name: string;
+  /** the task's instructions: a round whose name or instructions speak of grease is greased */
+  instructions?: string;
   intervalMeter: number | null;
   intervalDays: number | null;
   lastDoneOn: string | null;
@@ -31,8 +33,9 @@ export interface CareFacts {
   sinceMeter: number | null;
 }
 
-/** "greased" for a grease round, "done" for any other daily item. */
-const doneWord = (name: string) => (/grease/i.test(name) ? 'greased' : 'done');
+/** A grease round: its name or its instructions speak of grease ("Loader pivots and bucket pins"). */
+export const isGreaseRound = (facts: Pick<CareFacts, 'name' | 'instructions'>) =>
+  /grease/i.test(facts.name) || /\bgrease\b/i.test(facts.instructions ?? '');
 
 /** "every 10 h", "every day", "every 10 h or 1 day": the task's interval. */
 export function careIntervalText(
@@ -60,7 +63,7 @@ export function careSinceText(
   const meter = formats.meter ?? englishMeter;
   const date = formats.date ?? englishDateText;
   const every = careIntervalText(facts, unit, meter);
-  const verb = doneWord(facts.name);
+  const verb = isGreaseRound(facts) ? 'greased' : 'done';
   let since: string;
   if (facts.lastDoneOn === null && facts.lastDoneMeter === null) since = 'Not signed off yet';
   else if (facts.sinceMeter !== null && facts.sinceMeter > 0)

@@ -83,6 +83,7 @@ const ROUTES: Record<string, PatchRoute> = {
       { field: 'instructions', value: v('Drain warm.') },
       { field: 'safetyNotes', value: v('Hot oil.') },
       { field: 'hazards', value: v(['hot_fluid', 'battery']) },
+      { field: 'dailyCare', value: v(true) },
     ],
   },
   '/organizations/{orgId}/service-records/{recordId}': {

@@ -12,6 +12,7 @@ import { HistoryUnknownPanel } from './history-unknown-panel';
 import { LastDoneForm } from './last-done-form';
 import { RemoveTaskDialog } from './remove-task-dialog';
 import { TaskContents } from './task-contents';
+import { DailyCareBadge } from './task-daily-care';
 import { TaskEditor } from './task-editor';
 import { DueSummary, LastDoneText } from './task-summary';
 
@@ -71,6 +72,7 @@ export function TaskCard({
               : ''}
             {warning ? ` · due soon ${warning}` : ''}
           </p>
+          {task.dailyCare ? <DailyCareBadge /> : null}
         </div>
         {task.due ? <DueStatusBadge status={task.due.status} /> : null}
       </div>

@@ -12,6 +12,7 @@ import { meterUnitLabel } from '../../../lib/fleet-format';
 import { HAZARD_LABELS } from '../lib/hazards';
 import { taskFieldNames, type TaskFormApi, type TaskFormInput } from '../lib/task-form-values';
 import { TaskIntervalFields } from './task-interval-fields';
+import { TaskDailyCareField } from './task-daily-care';
 import { TaskFluidsFields, TaskPartsFields } from './task-line-fields';
 
 const HAZARD_OPTIONS = HAZARDS.map((value) => ({ value, label: HAZARD_LABELS[value] }));
@@ -64,6 +65,8 @@ export function TaskForm({ unit, initial, submitLabel, onSubmit, onCancel, label
       />
 
       <TaskIntervalFields form={form} unitWord={unitWord} />
+
+      <TaskDailyCareField form={form} />
 
       <TaskPartsFields form={form} />
 

@@ -3,6 +3,7 @@ import { todayIso } from '../../../../shared/domain/calendar';
 import {
   CARE_STATE_LABELS,
   careSinceText,
+  isGreaseRound,
   type CareState,
 } from '../../../../shared/domain/daily-care';
 import type { CareSignedOff, DailyCareItem } from '../../../../shared/schemas/daily-care';
@@ -20,9 +21,6 @@ const STATE_TONE: Record<CareState, BadgeTone> = {
   not_today: 'due-soon',
   done_today: 'ok',
 };
-
-/** "Greased" for a grease round, "Done" for any other daily item: the tick's words. */
-const tickWord = (name: string) => (/grease/i.test(name) ? 'Greased' : 'Done');
 
 /** The daily-care ticks of one walkaround; nothing when the machine has no daily care. */
 export function DailyCareChecks({
@@ -108,7 +106,7 @@ function CareCheck({
           className="size-7 shrink-0 accent-clover-700"
         />
         <span className="text-lg leading-snug font-black text-field-950">
-          {tickWord(item.name)}: {item.name}
+          {isGreaseRound(item) ? 'Greased' : 'Done'}: {item.name}
         </span>
       </label>
       <div id={`${id}-since`} className="flex flex-wrap items-center gap-2 pl-1 text-sm">
