@@ -22,6 +22,7 @@ import { writeServiceHistory } from './demo-services';
 import type { DemoMachineWorld } from './demo-service-visits';
 import { writeWalkarounds } from './demo-walkarounds';
 import { writeDealerLinks } from './demo-dealers';
+import { writeSpecSheets } from './demo-spec-sheets';
 
 export interface DemoSummary {
   organizations: number;
@@ -119,11 +120,17 @@ async function writeScenario(
   );
 
   const farms = DEMO_ORGANIZATIONS.filter((o) => o.kind === 'farm');
-  const templates = await writeTemplates(farms, transaction);
+  // the farms keep category templates of their own to start from; machines get their class's tasks
+  await writeTemplates(farms, transaction);
 
   const { history, readingCount } = await writeMachines(today, transaction);
 
-  const taskRows = await writeTasks(farms, templates, history, today, transaction);
+  const taskRows = await writeTasks(farms, history, today, transaction);
+  // spec sheets after the tasks: the tasks' lines linked to a sheet take its figures
+  await writeSpecSheets(
+    transaction,
+    new Set(DEMO_MACHINES.map((m) => `${m.organization}/${m.fleetNumber}`)),
+  );
 
   // Service history and plans, checklists, walkarounds and defects, on the last-done points above.
   const worlds: DemoMachineWorld[] = DEMO_MACHINES.map((m) => {

@@ -6,6 +6,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import {
+  PHONE_VIEWPORT,
   collectPageErrors,
   launchBrowser,
   screenshot,
@@ -16,6 +17,15 @@ import { SPEC_SHEET_FLEET, larkspurFarm } from './support/demo-fleet';
 
 const DESKTOP = { width: 1280, height: 800 };
 const TEST = 'Hydraulic charge pressure';
+const TEST_PRESSURE = {
+  name: TEST,
+  min: 20,
+  max: 60,
+  unit: 'psi',
+  engineRpm: 2100,
+  oilTemperature: { value: 50, unit: 'C' },
+  conditions: '',
+};
 
 describe('spec sheet — fill it, and raise a defect from a measurement outside its spec', () => {
   let browser: TestBrowser;
@@ -57,7 +67,7 @@ describe('spec sheet — fill it, and raise a defect from a measurement outside 
     await form.getByLabel('Engine oil filter').fill('BR-OF-118');
     await form.getByRole('button', { name: 'Add test pressure' }).click();
     const test = form.getByRole('group', { name: 'Test pressure 1' });
-    await test.getByLabel('Test').fill(TEST);
+    await test.getByLabel('Test name').fill(TEST);
     await test.getByLabel('Minimum').fill('20');
     await test.getByLabel('Maximum').fill('60');
     await test.getByLabel('Unit', { exact: true }).selectOption('psi');
@@ -72,10 +82,26 @@ describe('spec sheet — fill it, and raise a defect from a measurement outside 
     const tests = section.getByText('Test pressures', { exact: true }).locator('..');
     expect(await tests.innerText()).toContain('20–60 psi at 2,100 rpm, oil 50 °C');
     await screenshot(page, 'spec-sheet-filled');
+    // on a phone the form's rows stack: the test's fields are on screen, none cut off
+    const phone = await browser.newPage(PHONE_VIEWPORT);
+    await phone.goto(`/o/${org}/machines/${machineId}#spec`);
+    await phone.getByRole('button', { name: 'Edit spec sheet' }).click();
+    const onPhone = phone.getByRole('group', { name: 'Test pressure 1' });
+    await onPhone.getByLabel('Test name').scrollIntoViewIfNeeded();
+    const box = await onPhone.getByLabel('Oil temperature').boundingBox();
+    expect(box!.x + box!.width).toBeLessThanOrEqual(PHONE_VIEWPORT.width);
+    await screenshot(phone, 'spec-sheet-form-phone');
+    await phone.close();
     expect(errors).toEqual([]);
   }, 60_000);
 
   it("a measurement of the sheet's test takes its spec; 12 psi against 20–60 raises a defect in one tap", async () => {
+    // the sheet's test as the first test saves it, so this test also runs alone (-t)
+    const sheet = await page.request.patch(
+      `/api/v1/organizations/${org}/machines/${machineId}/spec-sheet`,
+      { data: { testPressures: [TEST_PRESSURE] } },
+    );
+    expect(sheet.status()).toBe(200);
     await page.goto(`/o/${org}/machines/${machineId}/services/new`);
     await page.getByRole('heading', { name: `Record service · ${SPEC_SHEET_FLEET}` }).waitFor();
     await page.getByLabel('Meter at service').fill('1200');

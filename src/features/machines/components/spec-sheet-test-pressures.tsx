@@ -49,7 +49,7 @@ export function TestPressureFields({ form, units }: { form: SpecSheetFormApi; un
           return (
             <SheetRow key={row.id} label={label} columns="sm:grid-cols-[1fr_6rem_6rem_5rem_auto]">
               <TextField
-                label="Test"
+                label="Test name"
                 placeholder="PTO clutch pressure"
                 error={e?.name?.message}
                 {...register(`testPressures.${i}.name`)}
