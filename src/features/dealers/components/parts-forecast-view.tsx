@@ -147,6 +147,7 @@ function Lines({
       what: p.partNumber,
       detail: p.description,
       amount: number.format(p.quantity),
+      unit: null,
       machines: p.machines,
       first: p.firstNeededOn,
     })),
@@ -154,7 +155,8 @@ function Lines({
       key: `f:${x.kind}|${x.unit}`,
       what: x.kind,
       detail: fluidDetail(x),
-      amount: `${number.format(x.volume)} ${stockUnitLabel(x.unit)}`,
+      amount: number.format(x.volume),
+      unit: stockUnitLabel(x.unit),
       machines: x.machines,
       first: x.firstNeededOn,
     })),
@@ -189,7 +191,16 @@ function Lines({
                   {machinesText(l.machines)}
                 </span>
               </td>
-              <td className={`${td} text-right tabular-nums`}>{l.amount}</td>
+              <td className={`${td} text-right tabular-nums`}>
+                {l.amount}
+                {/* "US gal" may go under the figure on a phone, never split in two */}
+                {l.unit ? (
+                  <>
+                    {' '}
+                    <span className="whitespace-nowrap">{l.unit}</span>
+                  </>
+                ) : null}
+              </td>
               <td className={`${td} ${wideOnly} text-right tabular-nums`}>{l.machines}</td>
               <td className={`${td} whitespace-nowrap`}>{dateText(l.first)}</td>
             </tr>
