@@ -1,7 +1,8 @@
 // The demo's walkaround checklists (the built-in list of every category, editable per farm),
 // recent walkarounds by the operators, and their defects: a tyre cut to watch on T-01, a flasher
-// out on T-02 (in repair), a cracked PTO master shield that has T-03 tagged out with a repair
-// booked, and an older hose failure on T-02 closed by a repair visit.
+// out on T-02 (in repair; the machine restricted to field work), a cracked PTO master shield that
+// has T-03 tagged out with a repair booked, and an older hose failure on T-02 closed by a repair
+// visit.
 import type { CreationAttributes, Transaction } from 'sequelize';
 import { ChecklistTemplate, Defect, Machine, ServiceRecord, Walkaround } from '../models';
 import type { WalkaroundItem } from '../models/walkaround';
@@ -11,6 +12,7 @@ import type { DefectSeverity } from '../../shared/schemas/defects';
 import { addDaysIso, todayIso } from '../../shared/domain';
 import { builtInChecklist, defaultChecklist } from '../services/checklist-defaults';
 import { localDate, type DemoMachineWorld } from './demo-service-visits';
+import { writeRestrictions } from './demo-restrictions';
 
 const DAY = 86_400_000;
 
@@ -181,6 +183,7 @@ export async function writeWalkarounds(
   await Defect.bulkCreate(defects, { transaction, returning: false });
   if (taggedOut.length)
     await Machine.update({ status: 'tagged_out' }, { where: { id: taggedOut }, transaction });
+  await writeRestrictions(machines, defects, transaction);
   return { walkarounds: walkarounds.length, defects: defects.length };
 }
 

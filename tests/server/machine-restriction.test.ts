@@ -3,6 +3,7 @@
 // shown wherever the machine is picked, and left in place by a tag-out. The walkaround yard is
 // walkarounds-fixture.ts (an operator assigned to T-01, a technician and a manager).
 import { beforeEach, describe, expect, it } from 'vitest';
+import { Op } from 'sequelize';
 import request from 'supertest';
 import { resetDatabase } from '../support/db';
 import {
@@ -12,7 +13,8 @@ import {
   createTask,
   signedInAgent,
 } from '../support/factories';
-import { AuditEvent, Machine } from '../../server/models';
+import { AuditEvent, Defect, Machine } from '../../server/models';
+import { loadDemo } from '../../server/seeders/demo';
 import { linkDealer } from './dealer-fixture';
 import { app, submission, yard } from './walkarounds-fixture';
 
@@ -222,5 +224,26 @@ describe('machine restriction — shown, and still usable', () => {
       .send({ note: 'Shield refitted and checked' });
     expect(back.body.data).toMatchObject({ status: 'in_service', restricted: true });
     expect((await y.opAgent.get(y.checklistUrl)).body.data.machine.restriction.reason).toBe(REASON);
+  });
+});
+
+describe('machine restriction — the demo', () => {
+  beforeEach(resetDatabase);
+
+  it('demo — T-02, its left rear flasher out (in repair), is restricted to field work after the finding, audited', async () => {
+    await loadDemo({ reset: true });
+    const restricted = await Machine.findAll({ where: { restrictionReason: { [Op.ne]: null } } });
+    expect(restricted.map((m) => [m.fleetNumber, m.status, m.restrictionReason])).toEqual([
+      ['T-02', 'in_service', 'Field only — no road: left rear flasher out'],
+    ]);
+    const t2 = restricted[0];
+    const flasher = await Defect.findOne({ where: { machineId: t2.id, itemId: 'lights' } });
+    expect(flasher).toMatchObject({ status: 'in_repair', description: 'Left rear flasher out' });
+    expect(t2.restrictedAt!.getTime()).toBeGreaterThan(flasher!.createdAt.getTime());
+    const event = await AuditEvent.findOne({
+      where: { action: 'machine.restrict', entityId: t2.id },
+    });
+    expect(event).toMatchObject({ actorUserId: t2.restrictedBy });
+    expect(t2.restrictedBy).not.toBeNull();
   });
 });
