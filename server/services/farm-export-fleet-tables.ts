@@ -123,6 +123,30 @@ export const FLEET_TABLES: readonly ExportTable[] = [
     ],
   },
   {
+    file: 'spec-sheets.csv',
+    about:
+      'Each machine’s spec sheet as the farm entered it: capacities and fluids, part numbers, tyre pressures, torques, test pressures with their conditions.',
+    from: 'machine_spec_sheets t',
+    orderBy: 't.machine_id',
+    columns: [
+      machineId,
+      ['capacities', 'by compartment, as JSON {engineOil: {quantity, unit (L or gal), spec}, …}'],
+      ['extra_capacities', 'other compartments, as JSON [{name, quantity, unit, spec}]'],
+      ['filters', 'part numbers by filter role, as JSON {engineOil: "…", fuelPrimary: "…", …}'],
+      ['extra_filters', 'other parts, as JSON [{name, partNumber}]'],
+      ['tyre_pressures', 'as JSON {front: {value, unit (kPa, psi or bar), note}, rear: …}'],
+      ['torques', 'as JSON [{name, value, unit (Nm or lbf_ft), note}]'],
+      [
+        'test_pressures',
+        'as JSON [{name, min, max, unit, engineRpm, oilTemperature: {value, unit (C or F)}, conditions}]',
+      ],
+      ['notes', 'notes'],
+      person('updated_by', 'saved it last'),
+      createdAt,
+      updatedAt,
+    ],
+  },
+  {
     file: 'schedule-templates.csv',
     about: 'Schedule templates the farm keeps for new machines.',
     from: 'schedule_templates t',

@@ -17,6 +17,7 @@ import {
   Defect,
   MeterReading,
   ServiceAttachment,
+  MachineSpecSheet,
   ServiceMeasurement,
   ServiceRecord,
   Walkaround,
@@ -80,6 +81,12 @@ async function farmWithRecords(name: string, fleetNumber: string) {
     unit: 'mm',
     specMin: -3,
     specMax: 0,
+  });
+  await MachineSpecSheet.create({
+    organizationId: org.id,
+    machineId: machine.id,
+    capacities: { engineOil: { quantity: 14, unit: 'L', spec: 'SAE 15W-40' } },
+    updatedBy: manager.id,
   });
   const key = `org/${org.id}/service-records/${record.id}/${randomUUID()}`;
   const invoice = Buffer.from(`%PDF-1.4 invoice of ${name}`);
@@ -188,6 +195,7 @@ describe('farm data export — GET /organizations/:orgId/export', () => {
       'walkarounds.csv': 1,
       'walkaround-photos.csv': 1,
       'defects.csv': 1,
+      'spec-sheets.csv': 1,
     });
 
     // Nothing of the other farm anywhere in the archive.
