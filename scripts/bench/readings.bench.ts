@@ -5,11 +5,15 @@
 // handler each run as their own process on loopback; the data set is written with COPY
 // (readings-data.ts). Also printed: the queries and API CPU time one post costs.
 //   --machines=N (default 200)   --runs=N (default 200)   --seconds=N (default 20)
+//   --cpu-prof: profile the in-process posts (.data/bench…/reading-post.cpuprofile, top functions)
+//   --profile-only: stop after that (no servers, no load)
+import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import request from 'supertest';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../server/db';
 import { createApp } from '../../server/app';
+import { profiled } from './cpu-profile';
 import { percentiles, report } from './report';
 import { BENCH_EMAIL, BENCH_PASSWORD, buildReadingsFarm } from './readings-data';
 import { cpuMs, loadPosts, serve, timedPost, type PostTarget } from './readings-load';
@@ -61,7 +65,13 @@ async function profilePosts(n: number) {
   options.logging = false;
   return { queries: queries / n, cpuMs: (used.user + used.system) / 1000 / n };
 }
-const profile = await profilePosts(50);
+const profileFile = path.join(
+  path.dirname(process.env.BENCH_JSON ?? '.'),
+  'reading-post.cpuprofile',
+);
+const profile = process.argv.includes('--cpu-prof')
+  ? await profiled(profileFile, () => profilePosts(50))
+  : await profilePosts(50);
 console.log(
   `one post in-process: ${profile.queries.toFixed(1)} queries (BEGIN/COMMIT included), ${profile.cpuMs.toFixed(2)} ms CPU`,
 );
@@ -71,6 +81,11 @@ report({
   unit: 'queries',
   baseline: { what: 'bare handler: BEGIN, 3 writes, COMMIT', value: 5 },
 });
+
+if (process.argv.includes('--profile-only')) {
+  await sequelize.close();
+  process.exit(0);
+}
 
 // 2. The API and the bare handler, each its own process on loopback.
 const childEnv = {
