@@ -67,7 +67,7 @@ export const changedBy = {
     k.machines.lists(orgId),
   ],
 
-  /** a machine tagged out or returned to service */
+  /** a machine tagged out or returned to service, or its use restricted or the restriction lifted */
   machineStatus: (orgId: string): QueryKey[] => statusOfMachines(orgId),
 
   /** a defect reported, assigned or closed: it may tag the machine out or free it */
