@@ -10,6 +10,7 @@ import {
   TYRE_POSITIONS,
   TYRE_POSITION_LABELS,
 } from '../../../../shared/schemas/spec-keys';
+import { Caution } from '../../../components/ui/caution';
 import type { SpecSheet } from '../api/get-spec-sheet';
 
 const num = (n: number) => n.toLocaleString('en-US', { maximumFractionDigits: 4 });
@@ -108,6 +109,19 @@ export function SpecSheetView({ sheet }: { sheet: SpecSheet }) {
       <Block title="Tyre pressures" rows={tyres} />
       <Block title="Torques" rows={torques} />
       <Block title="Test pressures" rows={tests} />
+      {tests.length || tyres.length ? (
+        <Caution
+          compact
+          label="Testing and inflating"
+          heading="Caution"
+          text="A pressure test runs with the engine on and the system under pressure: gauges and hoses rated above the test pressure, everyone clear of the machine's moving parts."
+          hazards={[
+            ...(tests.length ? ['hydraulic_pressure'] : []),
+            ...(tyres.length ? ['tyres_rims'] : []),
+          ]}
+          defer
+        />
+      ) : null}
       {sheet.notes ? (
         <p className="whitespace-pre-line rounded-lg bg-field-50 p-3 text-field-800">
           {sheet.notes}

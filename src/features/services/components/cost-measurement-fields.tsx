@@ -2,6 +2,7 @@ import { useWatch, type UseFieldArrayReturn } from 'react-hook-form';
 import { specRangeWords, testConditionsWords } from '../../../../shared/domain/measurement-spec';
 import type { SpecSheet } from '../../../../shared/schemas/spec-sheet';
 import { Button } from '../../../components/ui/button';
+import { Caution } from '../../../components/ui/caution';
 import { TextField } from '../../../components/ui/field';
 import { MoneyField } from '../../../components/ui/money-field';
 import {
@@ -75,11 +76,15 @@ const sheetTestFor = (tests: readonly SheetTest[], name: string | undefined) =>
 function SheetSpecHint({ test }: { test: SheetTest }) {
   const conditions = testConditionsWords(test);
   return (
-    <p className="text-sm text-field-700">
-      <span className="font-bold">Spec sheet:</span> {specRangeWords(test.min, test.max, test.unit)}
-      {conditions ? ` ${conditions}` : ' (no test conditions on the sheet)'}. Measure at these
-      conditions, or note how they differed.
-    </p>
+    <div className="flex flex-col gap-1">
+      <p className="text-sm text-field-700">
+        <span className="font-bold">Spec sheet:</span>{' '}
+        {specRangeWords(test.min, test.max, test.unit)}
+        {conditions ? ` ${conditions}` : ' (no test conditions on the sheet)'}. Measure at these
+        conditions, or note how they differed.
+      </p>
+      <Caution variant="line" heading="Caution." hazards={['hydraulic_pressure']} defer />
+    </div>
   );
 }
 
