@@ -69,7 +69,7 @@ export async function writeDealerLinks(ctx: DemoDealerContext, transaction: Tran
   );
 
   // Larkspur: a proposal for the sprayer's overdue fuel filters, waiting for Marta.
-  const sprayer = item(ctx, 'larkspur', 'S-01', ['Fuel filters']);
+  const sprayer = item(ctx, 'larkspur', 'S-01', ['Fuel filters and water separator']);
   await ServiceBooking.create(
     {
       id: ctx.demoId('booking/larkspur/S-01'),

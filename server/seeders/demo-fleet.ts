@@ -16,23 +16,23 @@ export const METER_REPLACEMENT = { fleetNumber: 'T-03', daysAgo: 426 } as const;
 export const DEMO_OVERDUE: [string, string][] = [
   ['T-02', 'Engine oil and filter'],
   ['T-03', 'Battery check'],
-  ['S-01', 'Fuel filters'],
+  ['S-01', 'Fuel filters and water separator'],
   ['TR-01', 'Annual safety inspection'],
   ['T-11', 'Hydraulic/transmission filters'],
-  ['MW-01', 'Gearbox oil'],
+  ['MW-01', 'Planetary gearbox oil'],
   ['TH-01', 'Fire extinguisher check'],
 ];
 
 /** Tasks tried first when the demo needs more due-soon tasks. */
 export const DEMO_DUE_SOON: [string, string][] = [
-  ['T-01', 'Air filter inspection'],
+  ['T-01', 'Engine air filter'],
   ['C-01', 'Engine oil and filter'],
   ['B-01', 'Main gearbox oil'],
-  ['T-02', 'Fuel filters'],
+  ['T-02', 'Fuel filters and water separator'],
   ['T-11', 'Engine oil and filter'],
-  ['TH-01', 'Air filter inspection'],
+  ['TH-01', 'Engine air filter'],
   ['FH-01', 'Annual safety inspection'],
-  ['BW-01', 'Pickup, rollers and belts inspection'],
+  ['BW-01', 'Drive chains, belts and rollers'],
 ];
 
 /** How many due-soon tasks each farm shows (at least / at most). */

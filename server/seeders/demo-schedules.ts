@@ -6,6 +6,7 @@ import type { MachineReadings } from './demo-readings';
 import { DEMO_DUE_SOON, DEMO_MACHINES, DEMO_OVERDUE, DUE_SOON_RANGE } from './demo-fleet';
 import type { DemoOrganization } from './demo-people';
 import { planLastDone } from './service-plan';
+import { serviceLibraryClass } from '../../shared/domain/service-library';
 import { buildTemplates } from './templates';
 import { demoId, demoMachineId as machineId, demoOrgId as orgId } from './demo-ids';
 import { inChunks } from './demo-machines';
@@ -30,23 +31,23 @@ export async function writeTemplates(farms: DemoOrganization[], transaction: Tra
   return templates;
 }
 
-/** Writes every machine's tasks from its category's template; returns the rows written. */
+/** Writes every machine's tasks from its class in the service library; returns the rows written. */
 export async function writeTasks(
   farms: DemoOrganization[],
-  templates: Awaited<ReturnType<typeof writeTemplates>>,
   history: Map<string, MachineReadings>,
   today: Date,
   transaction: Transaction,
 ) {
-  // Each machine gets its category's schedule, with last-done points planned per farm.
+  // Each machine gets its class's schedule from the service library, in its own meter unit (as
+  // "Apply machine class" gives it), with last-done points planned per farm.
   const taskRows = farms.flatMap((farm) => {
     const fleet = DEMO_MACHINES.filter((m) => m.organization === farm.key);
-    const byCategory = new Map(templates.get(farm.key)!.map((t) => [t.category, t.tasks]));
     const planned = planLastDone(
       fleet.map((m) => ({
         fleetNumber: m.fleetNumber,
         readings: history.get(m.fleetNumber)!.readings,
-        tasks: byCategory.get(m.category) ?? [],
+        tasks: serviceLibraryClass(m.machineClass, m.meterUnit).tasks,
+        seasonMonths: m.season.months,
       })),
       {
         timeZone: farm.timeZone,

@@ -57,7 +57,7 @@ export function measurementsFor(m: DemoMachineWorld, v: Visit, ptoIndex: number,
         specMin: 12.4,
         specMax: null,
       });
-    if (t.name === 'Coolant')
+    if (t.name === 'Coolant freeze-point test before winter' || t.name === 'Coolant change')
       out.push(
         imperial(m.units)
           ? {

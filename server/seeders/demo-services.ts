@@ -121,12 +121,12 @@ export function machineServiceHistory(
 const DEMO_PLANS: [string, string[], number, string][] = [
   [
     'T-02',
-    ['Engine oil and filter', 'Fuel filters'],
+    ['Engine oil and filter', 'Fuel filters and water separator'],
     1,
     'Overdue oil change: first job of the morning.',
   ],
-  ['T-01', ['Air filter inspection'], 2, ''],
-  ['C-01', ['Engine oil and filter', 'Air filter inspection'], 4, 'Before harvest prep.'],
+  ['T-01', ['Engine air filter'], 2, ''],
+  ['C-01', ['Engine oil and filter', 'Engine air filter'], 4, 'Before harvest prep.'],
   ['T-11', ['Engine oil and filter', 'Hydraulic/transmission filters'], 1, 'Book the yard bay.'],
 ];
 

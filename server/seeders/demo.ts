@@ -120,11 +120,12 @@ async function writeScenario(
   );
 
   const farms = DEMO_ORGANIZATIONS.filter((o) => o.kind === 'farm');
-  const templates = await writeTemplates(farms, transaction);
+  // the farms keep category templates of their own to start from; machines get their class's tasks
+  await writeTemplates(farms, transaction);
 
   const { history, readingCount } = await writeMachines(today, transaction);
 
-  const taskRows = await writeTasks(farms, templates, history, today, transaction);
+  const taskRows = await writeTasks(farms, history, today, transaction);
   // spec sheets after the tasks: the tasks' lines linked to a sheet take its figures
   await writeSpecSheets(
     transaction,

@@ -16,6 +16,7 @@ import {
   type TaskSchedule,
   type UsageEstimate,
 } from '../../shared/domain';
+import { seasonSpans } from '../../shared/domain/season-dates';
 import type { TaskInput } from '../../shared/schemas/schedule';
 import { summariseReadings } from '../services/forecast';
 import { createRandom, seedFromString } from './random';
@@ -32,6 +33,8 @@ export interface MachinePlanInput {
   fleetNumber: string;
   readings: { lifetimeValue: number; takenAt: Date }[];
   tasks: TaskInput[];
+  /** months (1–12) the machine works; [] all year. Dates its season services. */
+  seasonMonths?: number[];
 }
 
 export interface PlannedTask {
@@ -51,6 +54,7 @@ export interface PlanOptions {
 }
 
 interface MachineCurve {
+  seasonMonths: number[];
   points: ReadingPoint[];
   usage: UsageEstimate;
   current: number;
@@ -89,7 +93,9 @@ function pointAtValue(curve: MachineCurve, value: number): LastDone {
 /** Service history of one task over the readings: done whenever an interval came round. */
 function simulate(task: TaskInput, curve: MachineCurve, seed: number): LastDone[] {
   const rng = createRandom(seed);
-  const { intervalMeter: im, intervalDays: id } = task;
+  const { intervalMeter: im } = task;
+  // A season service comes round once a season: simulated as yearly; its due date is the season's.
+  const id = task.intervalDays ?? (task.seasonAnchor ? 365 : null);
   const first = curve.points[0];
   // A phase before the history starts, as if the schedule had been running already.
   let meter = first.value - (im ? rng.between(0, im) : 0);
@@ -122,16 +128,52 @@ function statusOf(
     firstServiceMeter: task.firstServiceMeter,
     warnMeter: task.warnMeter,
     warnDays: task.warnDays,
+    seasonAnchor: task.seasonAnchor ?? null,
+    seasonOffsetDays: task.seasonOffsetDays ?? null,
     ...lastDone,
   };
-  return computeDuePoint(schedule, curve.usage, asOfIso, curve.current, curve.startIso).status;
+  return computeDuePoint(
+    schedule,
+    curve.usage,
+    asOfIso,
+    curve.current,
+    curve.startIso,
+    curve.seasonMonths,
+  ).status;
 }
 
-/** A last-done point that leaves the task overdue by about 7% of its interval. */
+/**
+ * A last-done point that leaves the task a little overdue: by about 7% of its meter interval or
+ * 12 days past its calendar one, whichever limit runs out first (the later of the two points), so
+ * a task with both is not shown a year over.
+ */
 function overduePoint(task: TaskInput, curve: MachineCurve, todayDay: number): LastDone {
-  if (task.intervalMeter !== null)
-    return pointAtValue(curve, curve.current - task.intervalMeter * 1.07);
-  return pointAtDay(curve, todayDay - (task.intervalDays ?? 0) - 12);
+  const byMeter =
+    task.intervalMeter !== null
+      ? pointAtValue(curve, curve.current - task.intervalMeter * 1.07)
+      : null;
+  const byDays =
+    task.intervalDays !== null ? pointAtDay(curve, todayDay - task.intervalDays - 12) : null;
+  if (byMeter && byDays) return byMeter.lastDoneOn > byDays.lastDoneOn ? byMeter : byDays;
+  return byMeter ?? byDays ?? pointAtDay(curve, todayDay - 377);
+}
+
+/**
+ * A season service done on time at its last season date that has come (the storage service after
+ * this year's season, the pre-season check before it), so the demo starts with it covered.
+ */
+function seasonPoint(task: TaskInput, curve: MachineCurve, todayDay: number): LastDone | null {
+  if (!task.seasonAnchor || !curve.seasonMonths.length) return null;
+  const offset = task.seasonOffsetDays ?? 0;
+  const year = Number(isoFromDayNumber(todayDay).slice(0, 4));
+  const onTime = seasonSpans(curve.seasonMonths, year - 2, year)
+    .map((span) =>
+      task.seasonAnchor === 'before_start'
+        ? dayNumberFromIso(span.start) - offset
+        : dayNumberFromIso(span.end) + offset,
+    )
+    .filter((day) => day <= todayDay && day >= curve.points[0].day);
+  return onTime.length ? pointAtDay(curve, Math.max(...onTime)) : null;
 }
 
 /** A last-done point inside the task's warning window (half of it left). */
@@ -155,6 +197,7 @@ export function planLastDone(machines: MachinePlanInput[], options: PlanOptions)
   for (const m of machines) {
     const points = summariseReadings(m.readings, timeZone);
     const curve: MachineCurve = {
+      seasonMonths: m.seasonMonths ?? [],
       points,
       usage: estimateUsage(points, localDayNumber(today, timeZone)),
       current: points[points.length - 1].value,
@@ -163,7 +206,8 @@ export function planLastDone(machines: MachinePlanInput[], options: PlanOptions)
     curves.set(m.fleetNumber, curve);
     m.tasks.forEach((task, position) => {
       const history = simulate(task, curve, seedFromString(`${m.fleetNumber}/${task.name}`));
-      const lastDone = history[history.length - 1];
+      const lastDone =
+        seasonPoint(task, curve, dayNumberFromIso(asOfIso)) ?? history[history.length - 1];
       planned.push({
         fleetNumber: m.fleetNumber,
         task,
