@@ -172,3 +172,40 @@ describe("Caution — hazards in the table's words", () => {
     expect(words(html)).toBe('Caution. sharp blade.');
   });
 });
+
+describe('Caution — summary (a row of a long list)', () => {
+  const html = renderToStaticMarkup(
+    createElement(Caution, {
+      variant: 'summary',
+      heading: 'Caution.',
+      hazards: ['pto', 'hot_fluid'],
+      defer: true,
+    }),
+  );
+  const summary = html.match(/<summary[^>]*>(.*?)<\/summary>/)?.[1] ?? '';
+  it('Caution summary — a native disclosure: the hazards named in its summary, always on screen', () => {
+    expect(html).toMatch(/^<details/);
+    expect(words(summary)).toBe('Caution: PTO shaft, Hot fluids what to dohide');
+  });
+  it('Caution summary — what to do, in the one table’s words, and the deferral open beneath it', () => {
+    const body = words(html.slice(html.indexOf('</summary>')));
+    expect(body).toContain(`PTO shaft: ${HAZARD_TABLE.pto.advice}`);
+    expect(body).toContain('Drain oil warm, not hot');
+    expect(body).toContain(DEFERRAL);
+    expect(words(summary)).not.toContain('Drain oil warm');
+  });
+  it('Caution summary — no hover title anywhere', () => {
+    expect(html).not.toMatch(/title=/);
+  });
+  it('Caution summary — no hazards — nothing but the heading line', () => {
+    const bare = renderToStaticMarkup(
+      createElement(Caution, {
+        variant: 'summary',
+        heading: 'Caution.',
+        text: 'Lower the header.',
+      }),
+    );
+    expect(bare).not.toMatch(/<details/);
+    expect(words(bare)).toBe('Caution. Lower the header.');
+  });
+});

@@ -18,9 +18,11 @@ interface CautionProps {
   defer?: boolean;
   /**
    * `panel`: the full caution of a task or item, a named aside (a landmark a screen reader can
-   * jump to); `line`: one sentence beside a task in a list, the same words always on screen.
+   * jump to); `line`: one sentence beside a task in a list, the same words always on screen;
+   * `summary`: for a row of a long list (due list, dealer board, shop week) — the hazards named
+   * on screen, what to do one tap or Enter away (a native disclosure, never a hover).
    */
-  variant?: 'panel' | 'line';
+  variant?: 'panel' | 'line' | 'summary';
   /** accessible name of a panel */
   label?: string;
   /** smaller type, for a panel inside a dense card */
@@ -51,7 +53,9 @@ export function Caution({
   children,
 }: CautionProps) {
   const entries = hazardCautionEntries(hazards);
-  if (variant === 'line') {
+  if (variant === 'summary' && entries.length)
+    return <CautionSummary entries={entries} defer={defer} />;
+  if (variant === 'line' || variant === 'summary') {
     const Line = inline ? 'span' : 'p';
     return (
       <Line
@@ -107,5 +111,44 @@ export function Caution({
         {defer ? <p className="font-bold">{SAFETY_DEFERRAL}</p> : null}
       </div>
     </aside>
+  );
+}
+
+/**
+ * A list row's caution: "Caution: PTO shaft, Hot fluids — what to do" always on screen; the full
+ * words of each hazard and the deferral open beneath it. The full panel stays on the task itself,
+ * the walkaround, the visit card and the e-mails.
+ */
+function CautionSummary({
+  entries,
+  defer,
+}: {
+  entries: ReturnType<typeof hazardCautionEntries>;
+  defer: boolean;
+}) {
+  return (
+    <details className="group text-sm text-straw-900">
+      <summary className="flex min-h-touch cursor-pointer list-none items-start gap-1.5 py-1 [&::-webkit-details-marker]:hidden">
+        <Icon name="alert" className="mt-0.5 size-4 shrink-0 text-straw-700" />
+        <span>
+          <span className="font-bold">Caution:</span> {entries.map((e) => e.label).join(', ')}{' '}
+          <span className="whitespace-nowrap text-straw-800 underline underline-offset-2 group-open:hidden">
+            what to do
+          </span>
+          <span className="hidden whitespace-nowrap text-straw-800 underline underline-offset-2 group-open:inline">
+            hide
+          </span>
+        </span>
+      </summary>
+      <ul className="ml-5.5 mt-1 flex flex-col gap-1 rounded-lg border border-straw-300 bg-straw-50 p-2">
+        {entries.map(({ hazard, label, advice }) => (
+          <li key={hazard}>
+            <span className="font-bold">{advice ? `${label}:` : `${label}.`}</span>
+            {advice ? ` ${advice}` : null}
+          </li>
+        ))}
+        {defer ? <li className="font-bold">{SAFETY_DEFERRAL}</li> : null}
+      </ul>
+    </details>
   );
 }

@@ -16,10 +16,10 @@ interface BoardListProps {
 const selectLabel = (r: BoardRow) =>
   `Select ${r.machine.fleetNumber} ${r.taskName} at ${r.customer.name}`;
 
-/** The task's caution in full, in the one table's words, whenever it involves a hazard. */
+/** The task's hazards named, their full caution a tap away, whenever it involves a hazard. */
 function TaskCaution({ row }: { row: BoardRow }) {
   return row.hazards.length ? (
-    <Caution variant="line" heading="Caution." hazards={row.hazards} defer />
+    <Caution variant="summary" heading="Caution." hazards={row.hazards} defer />
   ) : null;
 }
 

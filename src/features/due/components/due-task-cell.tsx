@@ -23,8 +23,8 @@ export function DueMachine({ row, href }: { row: DueRow; href: string }) {
 }
 
 /**
- * The task's name, how its due point is based, and the full caution of its hazards ("Caution. Hot
- * fluids: Drain oil warm, not hot… Follow the operator's manual, …"), in the table and on phones.
+ * The task's name, how its due point is based, and its hazards named ("Caution: Hot fluids — what
+ * to do", the full words a tap away), in the table and on phones.
  */
 export function DueTask({ row }: { row: DueRow }) {
   const basis = BASIS_TEXT[row.due.basis];
@@ -33,7 +33,7 @@ export function DueTask({ row }: { row: DueRow }) {
       <span>{row.taskName}</span>
       {basis ? <span className="text-sm text-field-600">{basis}</span> : null}
       {row.hazards.length ? (
-        <Caution variant="line" heading="Caution." hazards={row.hazards} defer />
+        <Caution variant="summary" heading="Caution." hazards={row.hazards} defer />
       ) : null}
     </div>
   );

@@ -129,7 +129,7 @@ export function DueItem({
         {row.labourHours !== null ? ` · about ${formatHours(row.labourHours)}` : ''}
       </p>
       {row.hazards.length ? (
-        <Caution variant="line" heading="Caution." hazards={row.hazards} defer />
+        <Caution variant="summary" heading="Caution." hazards={row.hazards} defer />
       ) : null}
       <div className="flex flex-wrap items-center gap-2">
         {row.booked ? (
