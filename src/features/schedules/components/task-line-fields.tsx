@@ -49,6 +49,12 @@ export function TaskPartsFields({ form }: { form: TaskFormApi }) {
             error={errors.parts?.[index]?.quantity?.message}
             {...register(`parts.${index}.quantity`, requiredNumber)}
           />
+          {row.filterRole ? (
+            <p className="text-sm text-field-600 sm:col-span-full">
+              The part number comes from the machine&apos;s spec sheet: saving the sheet sets it
+              again.
+            </p>
+          ) : null}
           <label className="flex min-h-12 cursor-pointer items-center gap-3 rounded-lg border border-field-200 px-3 py-2 sm:col-span-3 has-[:checked]:border-field-600 has-[:checked]:bg-field-50">
             <input type="checkbox" className="size-5" {...register(`parts.${index}.wearPart`)} />
             <span>
@@ -122,6 +128,12 @@ export function TaskFluidsFields({ form }: { form: TaskFormApi }) {
             error={errors.fluids?.[index]?.unit?.message}
             {...register(`fluids.${index}.unit`)}
           />
+          {row.capacity ? (
+            <p className="text-sm text-field-600 sm:col-span-full">
+              Volume, unit and fluid come from the machine&apos;s spec sheet: saving the sheet sets
+              them again.
+            </p>
+          ) : null}
           <Button
             variant="ghost"
             icon="trash"
