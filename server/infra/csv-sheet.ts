@@ -28,7 +28,8 @@ export const usesDecimalComma = (access: OrgAccess, delimiter: ',' | ';') =>
 /** Lower-case with single spaces: how a header cell is matched against the names we accept. */
 export const normaliseHeader = (cell: string) => cell.toLowerCase().replace(/\s+/g, ' ').trim();
 
-function detectDelimiter(text: string): ',' | ';' {
+/** Semicolons when the header line has more of them than commas, else commas. */
+export function detectDelimiter(text: string): ',' | ';' {
   const header = text.replace(/^\uFEFF/, '').split(/\r?\n/, 1)[0] ?? '';
   return (header.match(/;/g)?.length ?? 0) > (header.match(/,/g)?.length ?? 0) ? ';' : ',';
 }
@@ -98,6 +99,36 @@ export function parseLocalDate(cell: string, order: 'mdy' | 'dmy'): string | { e
   return `${String(y).padStart(4, '0')}-${String(mo).padStart(2, '0')}-${String(d).padStart(2, '0')}`;
 }
 
+// Local day (y·10⁴ + m·100 + d) → the zone's UTC offset all that day, per time zone; null for a
+// day whose offset changes (daylight saving). A file of 500,000 rows spans a few
+// thousand days, so each day's offset is worked out once instead of a zone lookup per row.
+const offsetsByZone = new Map<string, Map<number, number | null>>();
+const MAX_CACHED_DAYS = 100_000;
+
+/**
+ * The UTC offset (ms, local minus UTC) of the whole local day y-mo-d in `timeZone`; null when it
+ * changes during the day (then each time is converted on its own); undefined when the day does
+ * not exist (31/02).
+ */
+function dayOffsetMs(timeZone: string, y: number, mo: number, d: number) {
+  const midnightUtc = Date.UTC(y, mo - 1, d);
+  const day = new Date(midnightUtc);
+  if (day.getUTCFullYear() !== y || day.getUTCMonth() !== mo - 1 || day.getUTCDate() !== d)
+    return undefined;
+  let offsets = offsetsByZone.get(timeZone);
+  if (!offsets) offsetsByZone.set(timeZone, (offsets = new Map()));
+  const key = y * 10_000 + mo * 100 + d;
+  const known = offsets.get(key);
+  if (known !== undefined) return known;
+  if (offsets.size >= MAX_CACHED_DAYS) offsets.clear();
+  const start = midnightUtc - new TZDate(y, mo - 1, d, 0, 0, 0, timeZone).getTime();
+  const lastSecond = midnightUtc + 86_399_000;
+  const end = lastSecond - new TZDate(y, mo - 1, d, 23, 59, 59, timeZone).getTime();
+  const offset = start === end ? start : null;
+  offsets.set(key, offset);
+  return offset;
+}
+
 /**
  * Parses a date-time cell: ISO 8601 (with or without offset) or the farm's local d/m/y or m/d/y.
  * A date alone is taken at `dateOnlyHour` o'clock farm time (midday unless told otherwise).
@@ -111,6 +142,9 @@ export function parseTakenAt(
   const s = cell.trim();
   const local = (y: number, mo: number, d: number, h = dateOnlyHour, mi = 0, sec = 0) => {
     if (mo < 1 || mo > 12 || d < 1 || d > 31 || h > 23 || mi > 59 || sec > 59) return null;
+    const offset = dayOffsetMs(timeZone, y, mo, d);
+    if (offset === undefined) return null;
+    if (offset !== null) return new Date(Date.UTC(y, mo - 1, d, h, mi, sec) - offset);
     const date = new TZDate(y, mo - 1, d, h, mi, sec, timeZone);
     // Reject dates that roll over (31/02) by checking the calendar fields survive.
     if (date.getFullYear() !== y || date.getMonth() !== mo - 1 || date.getDate() !== d) return null;

@@ -129,6 +129,9 @@ export type BulkReadingOutcome = z.infer<typeof bulkReadingOutcomeSchema>;
 export const bulkReadingsResponseSchema = z.object({ data: z.array(bulkReadingOutcomeSchema) });
 export type BulkReadingsResponse = z.infer<typeof bulkReadingsResponseSchema>;
 
+/** The reading CSV import's limits: rows per file (the header not counted) and bytes. */
+export const READING_IMPORT_LIMITS = { maxRows: 500_000, maxBytes: 50 * 1024 * 1024 } as const;
+
 /** One row of a CSV file of readings as the server read and checked it. */
 export const readingImportRowSchema = z.object({
   /** the file line (the header is line 1) */
@@ -145,6 +148,7 @@ export const readingImportRowSchema = z.object({
 export type ImportPreviewRow = z.infer<typeof readingImportRowSchema>;
 
 export const readingImportPreviewSchema = z.object({
+  /** every row of a small file; of a large one its first rows and its first errors, by line */
   rows: z.array(readingImportRowSchema),
   summary: z.object({
     total: z.number(),

@@ -39,14 +39,17 @@ import {
   readingHistory,
 } from '../../services/reading-log';
 import { commitImport, previewImport } from '../../services/reading-import';
-import { csvUpload } from '../../middlewares/upload';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const machineParams = orgParams.extend({ machineId: z.uuid() });
 const readingParams = orgParams.extend({ readingId: z.uuid() });
 
 const csvBody = z.object({
-  file: z.string().openapi({ format: 'binary', description: 'CSV: fleet number, taken at, value' }),
+  file: z.string().openapi({
+    format: 'binary',
+    description:
+      'CSV: fleet number, taken at, value; at most 500,000 rows and 50 MB, read as it arrives',
+  }),
 });
 
 export function readingsRouter(): Router {
@@ -205,13 +208,12 @@ export function readingsRouter(): Router {
       'Check a CSV of readings: every row with its machine and any error by line number; writes nothing',
     tags: ['readings'],
     params: orgParams,
-    before: [csvUpload()],
     multipartBody: csvBody,
     response: readingImportPreviewResponseSchema,
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canImportReadings(access), 'Only a manager or technician may import readings');
-      return { data: await previewImport(access, req.file!.buffer) };
+      return { data: await previewImport(access, req) };
     },
   });
 
@@ -222,14 +224,13 @@ export function readingsRouter(): Router {
       'Import a CSV of readings: one transaction, all or nothing; rows already imported are skipped',
     tags: ['readings'],
     params: orgParams,
-    before: [csvUpload()],
     multipartBody: csvBody,
     status: 201,
     response: readingImportResultResponseSchema,
     handler: async ({ req }) => {
       const access = req.access!;
       authorize(canImportReadings(access), 'Only a manager or technician may import readings');
-      return { data: await commitImport(access, req.file!.buffer) };
+      return { data: await commitImport(access, req) };
     },
   });
 
