@@ -22,7 +22,7 @@ describe('demo scenario — spec sheets', () => {
     expect(t11.sheet?.capacities.engineOil).toMatchObject({ quantity: 13, unit: 'L' });
     expect(t11.sheet?.testPressures.map((t) => t.name)).toContain('PTO clutch pressure');
     expect(await MachineSpecSheet.count()).toBeGreaterThanOrEqual(12);
-    // the three Larkspur tractors of one template: each engine oil change now takes its sheet's
+    // the three Larkspur tractors' library oil changes each take their own sheet's
     // figure (T-01 10.5, T-02 5.5, T-03 2.4 US gal — demo-spec-sheet-data.ts)
     const oilOf = async (fleetNumber: string) => {
       const { machine } = await sheetOf(fleetNumber);
