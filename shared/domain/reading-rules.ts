@@ -125,14 +125,16 @@ export function checkReading(
     elapsedMs > 0
       ? `${formatValue((increase * MS_PER_DAY) / elapsedMs, 1)} ${unit} per day`
       : `${shown(increase)} with no time elapsed`;
-  const limit = `more than the ${formatValue(maxPerDay)} ${unit} per day this meter can advance.`;
+  // a function: formatting costs a number formatter, and most readings break no rule
+  const limit = () =>
+    `more than the ${formatValue(maxPerDay)} ${unit} per day this meter can advance.`;
 
   const sincePrevious = previous ? tooFast(previous, candidate) : null;
   if (previous && sincePrevious) {
     return {
       field: 'value',
       rule: 'too_fast',
-      message: `Reading ${reading(candidate)} implies ${pace(sincePrevious.increase, sincePrevious.elapsedMs)} since ${describe('previous', previous)} — ${limit}`,
+      message: `Reading ${reading(candidate)} implies ${pace(sincePrevious.increase, sincePrevious.elapsedMs)} since ${describe('previous', previous)} — ${limit()}`,
     };
   }
   const untilNext = next ? tooFast(candidate, next) : null;
@@ -140,7 +142,7 @@ export function checkReading(
     return {
       field: 'value',
       rule: 'too_fast',
-      message: `Reading ${reading(candidate)} leaves ${pace(untilNext.increase, untilNext.elapsedMs)} until ${describe('next', next)} — ${limit}`,
+      message: `Reading ${reading(candidate)} leaves ${pace(untilNext.increase, untilNext.elapsedMs)} until ${describe('next', next)} — ${limit()}`,
     };
   }
   return null;
