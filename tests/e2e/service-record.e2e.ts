@@ -29,6 +29,7 @@ interface TaskRow {
   name: string;
   intervalMeter: number | null;
   intervalDays: number | null;
+  dailyCare: boolean;
 }
 
 async function orgId(page: Page) {
@@ -73,10 +74,10 @@ describe('service records — the technician in the browser', () => {
       page,
       `/organizations/${org}/machines/${machine.id}/tasks`,
     );
-    // a task on hours alone, so "remaining" after the visit is exactly its interval
-    task =
-      tasks.data.find((t) => t.intervalMeter !== null && t.intervalDays === null) ??
-      tasks.data.find((t) => t.intervalMeter !== null)!;
+    // a task on hours alone, so "remaining" after the visit is exactly its interval; not daily
+    // care, which operators sign off in the walkaround and which stays off the due list
+    const serviced = tasks.data.filter((t) => !t.dailyCare && t.intervalMeter !== null);
+    task = serviced.find((t) => t.intervalDays === null) ?? serviced[0];
     await page.close();
   });
   afterAll(async () => {
