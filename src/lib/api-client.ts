@@ -144,6 +144,47 @@ async function request<T>(method: Method, path: string, options: RequestOptions 
   return (text ? JSON.parse(text) : undefined) as T;
 }
 
+/**
+ * POSTs one file as multipart form data like `upload`, reporting the share of it sent (0–1) as it
+ * goes. XMLHttpRequest, because fetch reports no upload progress; the answer and its errors are
+ * read the same way as every other call.
+ */
+function uploadWithProgress<T>(
+  path: string,
+  field: string,
+  file: File,
+  onProgress: (sent: number) => void,
+): Promise<T> {
+  return new Promise<T>((resolve, reject) => {
+    const xhr = new XMLHttpRequest();
+    xhr.open('POST', `${API_BASE}${path}`);
+    xhr.withCredentials = true;
+    xhr.setRequestHeader('Accept', 'application/json');
+    xhr.upload.onprogress = (event) => {
+      if (event.lengthComputable && event.total > 0) onProgress(event.loaded / event.total);
+    };
+    xhr.upload.onload = () => onProgress(1);
+    xhr.onerror = () =>
+      reject(new ApiError({ status: 0, code: 'unreachable', message: fallbackMessage(0) }));
+    xhr.onload = () => {
+      if (xhr.status === 0)
+        return reject(
+          new ApiError({ status: 0, code: 'unreachable', message: fallbackMessage(0) }),
+        );
+      const retryAfter = xhr.getResponseHeader('Retry-After');
+      const response = new Response(xhr.status === 204 ? null : xhr.responseText, {
+        status: xhr.status,
+        headers: retryAfter ? { 'Retry-After': retryAfter } : {},
+      });
+      if (!response.ok) return void toApiError(response).then(reject);
+      resolve((xhr.responseText ? JSON.parse(xhr.responseText) : undefined) as T);
+    };
+    const body = new FormData();
+    body.append(field, file);
+    xhr.send(body);
+  });
+}
+
 export const apiClient = {
   get: <T>(path: string, options?: Omit<RequestOptions, 'body'>) =>
     request<T>('GET', path, options),
@@ -160,6 +201,7 @@ export const apiClient = {
     body.append(field, file);
     return request<T>(method, path, { body });
   },
+  uploadWithProgress,
 };
 
 /** Path segments from the URL or the user go through this so ids cannot break out of the path. */

@@ -1,4 +1,5 @@
 import type { UnitSystem } from '../../../../shared/constants';
+import { READING_IMPORT_LIMITS } from '../../../../shared/schemas/readings';
 import { formatTimeZoneName } from '../../../lib/format';
 
 const LOCAL_FORMAT: Record<UnitSystem, { pattern: string; example: string }> = {
@@ -33,7 +34,11 @@ export function ImportFormatHelp({ units, timeZone }: { units: UnitSystem; timeZ
           Nothing is imported while any row has an error. Rows already recorded are skipped, so
           importing the same file twice adds nothing the second time.
         </li>
-        <li>Up to 20,000 rows and 2 MB per file.</li>
+        <li>
+          Up to {READING_IMPORT_LIMITS.maxRows.toLocaleString('en-US')} rows and{' '}
+          {READING_IMPORT_LIMITS.maxBytes / 1024 / 1024} MB per file. A large file takes a while:
+          the page shows how much has been sent, then that the rows are being checked and written.
+        </li>
       </ul>
       <figure className="flex flex-col gap-1">
         <figcaption className="text-sm font-bold text-field-700">Sample file</figcaption>

@@ -1,4 +1,5 @@
-import { useState, type FormEvent } from 'react';
+import { useCallback, useState, type FormEvent } from 'react';
+import { READING_IMPORT_LIMITS } from '../../../../shared/schemas/readings';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { TextField } from '../../../components/ui/field';
@@ -6,8 +7,10 @@ import { isApiError } from '../../../lib/api-client';
 import { useCommitImport, usePreviewImport } from '../api/import-readings';
 import type { ImportPreview, ImportResult } from '../api/types';
 import { ImportPreviewTable } from './import-preview-table';
+import { ImportProgress, progressed, type ImportStage } from './import-progress';
 
-const plural = (n: number, one: string, many: string) => `${n} ${n === 1 ? one : many}`;
+const plural = (n: number, one: string, many: string) =>
+  `${n.toLocaleString('en-US')} ${n === 1 ? one : many}`;
 
 interface Problem {
   fileError: string | null;
@@ -15,6 +18,13 @@ interface Problem {
   lines: string[];
 }
 const noProblem: Problem = { fileError: null, message: null, lines: [] };
+
+const MAX_MB = READING_IMPORT_LIMITS.maxBytes / 1024 / 1024;
+/** The server's limit, said before a byte is sent. */
+const tooLarge = (file: File) =>
+  file.size > READING_IMPORT_LIMITS.maxBytes
+    ? `${file.name} is larger than ${MAX_MB} MB; at most ${MAX_MB} MB per file`
+    : null;
 
 /** Splits a failed call into what goes beside the file input and what goes above the table. */
 function problemOf(error: unknown): Problem {
@@ -30,11 +40,16 @@ function problemOf(error: unknown): Problem {
 
 /**
  * Check a CSV of readings (every row, nothing written), then import it in one go. Importing is
- * offered only when no row has an error; the server checks the whole file again on commit.
+ * offered only when no row has an error; the server checks the whole file again on commit. Both
+ * show how much of the file is sent, then what the server is doing.
  */
 export function ImportReadingsForm({ orgId, timeZone }: { orgId: string; timeZone: string }) {
-  const previewCall = usePreviewImport(orgId);
-  const commitCall = useCommitImport(orgId);
+  const [stage, setStage] = useState<ImportStage | null>(null);
+  const onProgress = useCallback((sent: number) => setStage((s) => progressed(s, sent)), []);
+  const previewCall = usePreviewImport(orgId, onProgress);
+  const commitCall = useCommitImport(orgId, onProgress);
+  const start = (step: ImportStage['step'], chosen: File) =>
+    setStage({ step, fileName: chosen.name, sent: 0, sentAt: null });
   const [file, setFile] = useState<File | null>(null);
   const [inputKey, setInputKey] = useState(0);
   const [preview, setPreview] = useState<ImportPreview | null>(null);
@@ -56,17 +71,26 @@ export function ImportReadingsForm({ orgId, timeZone }: { orgId: string; timeZon
       setProblem({ ...noProblem, fileError: 'Choose a CSV file' });
       return;
     }
+    const refused = tooLarge(file);
+    if (refused) {
+      setProblem({ ...noProblem, fileError: refused });
+      return;
+    }
     setProblem(noProblem);
+    start('check', file);
     try {
       setPreview(await previewCall.mutateAsync(file));
     } catch (error) {
       setProblem(problemOf(error));
+    } finally {
+      setStage(null);
     }
   };
 
   const commit = async () => {
     if (!file) return;
     setProblem(noProblem);
+    start('import', file);
     try {
       const imported = await commitCall.mutateAsync(file);
       setResult(imported);
@@ -75,6 +99,8 @@ export function ImportReadingsForm({ orgId, timeZone }: { orgId: string; timeZon
       setInputKey((key) => key + 1);
     } catch (error) {
       setProblem(problemOf(error));
+    } finally {
+      setStage(null);
     }
   };
 
@@ -106,6 +132,8 @@ export function ImportReadingsForm({ orgId, timeZone }: { orgId: string; timeZon
         </Button>
       </form>
 
+      {stage ? <ImportProgress stage={stage} /> : null}
+
       {result ? (
         <Alert tone="success">
           Imported {plural(result.added, 'reading', 'readings')} (
@@ -135,16 +163,29 @@ export function ImportReadingsForm({ orgId, timeZone }: { orgId: string; timeZon
                 {errorRows.map((row) => (
                   <li key={row.line}>{row.error}</li>
                 ))}
+                {summary.errors > errorRows.length ? (
+                  <li>
+                    …and {plural(summary.errors - errorRows.length, 'more row', 'more rows')} (the
+                    first {errorRows.length} are listed)
+                  </li>
+                ) : null}
               </ul>
               <p className="mt-1">Fix them in the file, choose it again and check it again.</p>
             </Alert>
           ) : (
             <Alert tone="info">
-              {plural(summary.total, 'row', 'rows')} checked: {summary.new} new,{' '}
-              {summary.duplicates} already there.
+              {plural(summary.total, 'row', 'rows')} checked: {summary.new.toLocaleString('en-US')}{' '}
+              new, {summary.duplicates.toLocaleString('en-US')} already there.
               {summary.new === 0 ? ' There is nothing new to import.' : null}
             </Alert>
           )}
+          {preview.rows.length < summary.total ? (
+            <p className="text-sm text-field-700">
+              Every row was checked. Listed below: the first rows of the file and its first errors,{' '}
+              {preview.rows.length.toLocaleString('en-US')} of{' '}
+              {plural(summary.total, 'row', 'rows')}.
+            </p>
+          ) : null}
           <ImportPreviewTable rows={preview.rows} timeZone={timeZone} />
           <div>
             <Button
