@@ -124,11 +124,15 @@ try {
   const preview = await post('preview', file.csv);
   const commit = await post('commit', file.csv);
   const after = memoryMb(api.child.pid!);
+  // What the process gives back once idle (V8 shrinks its heap after a quiet spell), for the log.
+  await new Promise((r) => setTimeout(r, 10_000));
+  const settled = memoryMb(api.child.pid!);
   const added = (await readingCount()) - readingsBefore;
   console.log(
     `preview ${(preview.ms / 1000).toFixed(1)} s, commit ${(commit.ms / 1000).toFixed(1)} s ` +
       `(${JSON.stringify(commit.body.data)}); ${added.toLocaleString('en-US')} readings added; ` +
-      `COPY ${(copyMs / 1000).toFixed(2)} s`,
+      `COPY ${(copyMs / 1000).toFixed(2)} s; API RSS ${before.rss.toFixed(0)} MB before, ` +
+      `${after.rss.toFixed(0)} MB right after, ${settled.rss.toFixed(0)} MB 10 s later`,
   );
   if (added !== file.rows) throw new Error(`expected ${file.rows} readings added, found ${added}`);
 
