@@ -64,6 +64,12 @@ export const RESTRICTED_USE_FLEET = 'RU-01';
  */
 export const SEASON_SERVICE_FLEET = 'SE-01';
 
+/**
+ * daily-care.e2e.ts adds this tractor of lena's (a reading, two daily-care tasks) and greases it
+ * in her walkaround (issue 11).
+ */
+export const DAILY_CARE_FLEET = 'DC-01';
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -79,6 +85,7 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   SPEC_SHEET_FLEET,
   RESTRICTED_USE_FLEET,
   SEASON_SERVICE_FLEET,
+  DAILY_CARE_FLEET,
 ]);
 
 /** The signed-in person's Larkspur Flats Farm membership: its organization id and time zone. */

@@ -72,7 +72,7 @@ export function TaskCard({
               : ''}
             {warning ? ` · due soon ${warning}` : ''}
           </p>
-          {task.dailyCare ? <DailyCareBadge /> : null}
+          {task.dailyCare ? <DailyCareBadge task={task} unit={unit} /> : null}
         </div>
         {task.due ? <DueStatusBadge status={task.due.status} /> : null}
       </div>

@@ -1,4 +1,6 @@
 import { Badge } from '../../../components/ui/badge';
+import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
+import type { Task } from '../api/types';
 import type { TaskFormApi } from '../lib/task-form-values';
 
 // Daily care on the schedule (issue 11): the task form's tick and the task card's badge. A daily-
@@ -17,14 +19,24 @@ export function TaskDailyCareField({ form }: { form: TaskFormApi }) {
   );
 }
 
-/** The badge of a daily-care task on its card, with what it means. */
-export function DailyCareBadge() {
+/**
+ * The badge of a daily-care task on its card, with when it was last ticked off: outside the
+ * card's fold, as a walkaround moves it every day.
+ */
+export function DailyCareBadge({ task, unit }: { task: Task; unit: string }) {
+  const last = [
+    task.lastDoneMeter !== null ? formatMeter(task.lastDoneMeter, unit) : null,
+    task.lastDoneOn ? formatLocalDate(task.lastDoneOn) : null,
+  ].filter(Boolean);
   return (
     <p className="mt-1 flex flex-wrap items-center gap-x-2 gap-y-1 text-sm text-field-700">
       <Badge tone="info" icon="check">
         Daily care
       </Badge>
-      <span>ticked off by the operator in the walkaround</span>
+      <span>
+        ticked off in the walkaround
+        {last.length ? ` — last done ${last.join(' on ')}` : ' — not yet'}
+      </span>
     </p>
   );
 }

@@ -114,7 +114,13 @@ function CareCheck({
         <span className="text-field-700">{since}</span>
       </div>
       {item.hazards.length > 0 ? (
-        <Caution compact heading="Caution" hazards={item.hazards} defer />
+        <Caution
+          compact
+          heading="Caution"
+          label={`Safety: ${item.name}`}
+          hazards={item.hazards}
+          defer
+        />
       ) : null}
     </li>
   );
