@@ -3,7 +3,7 @@
 // columns. The farm's machines are loaded once beforehand, so no row waits on the database.
 import type { Request } from 'express';
 import { meterNumberMessage } from '../../shared/domain/meter-number';
-import { READING_IMPORT_LIMITS } from '../../shared/schemas/readings';
+import { METER_BOUNDS, READING_IMPORT_LIMITS } from '../../shared/schemas/readings';
 import { invalid } from '../errors';
 import { Machine } from '../models';
 import type { OrgAccess } from '../policies/access';
@@ -107,6 +107,11 @@ export async function readImportUpload(access: OrgAccess, req: Request): Promise
         if (!number.ok) {
           const row = rows.push(m, takenAt.getTime(), Number.NaN, line, STATUS_ERROR);
           const message = `Line ${line}: value ${meterNumberMessage(valueCell, number)}`;
+          return errors.add({ row, line, message, fleetNumber });
+        }
+        if (number.value > METER_BOUNDS.max) {
+          const row = rows.push(m, takenAt.getTime(), Number.NaN, line, STATUS_ERROR);
+          const message = `Line ${line}: value "${valueCell}" is above ${METER_BOUNDS.max.toLocaleString('en-US')}, the most a meter value may be`;
           return errors.add({ row, line, message, fleetNumber });
         }
         rows.push(m, takenAt.getTime(), number.value, line, STATUS_NEW);

@@ -127,6 +127,15 @@ describe('CSV import of readings — large files', { timeout: 180_000 }, () => {
     expect(commit.body.error.fields['line 45001']).toMatch(
       /^Line 45001: value "lots" must be a number/,
     );
+    // above the meter bound of every reading (shared/schemas/readings.ts METER_BOUNDS): refused, not a 500
+    const huge = readingsFile(10, (line, row) =>
+      line === 5 ? [row[0], row[1], '99999999999999'] : row,
+    );
+    const refused = await send('commit', huge);
+    expect(refused.status).toBe(422);
+    expect(refused.body.error.fields['line 5']).toBe(
+      'Line 5: value "99999999999999" is above 10,000,000, the most a meter value may be',
+    );
     expect(await countRows('meter_readings')).toBe(3);
   });
 
