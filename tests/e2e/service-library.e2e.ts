@@ -51,6 +51,13 @@ describe('service library — apply a machine class on the machine page', () => 
     await tasks.getByText('Pickup tines and guards').waitFor();
     for (const name of expected)
       expect(await tasks.getByText(name, { exact: true }).count()).toBe(1);
+    // every task of the class with a hazard shows its caution in full on its card — counted, so
+    // the check cannot pass on an empty list
+    const withHazard = serviceLibraryClass('round_baler').tasks.filter((t) => t.hazards.length);
+    expect(withHazard.length).toBeGreaterThan(3);
+    const cautions = tasks.getByRole('complementary', { name: 'Caution' });
+    expect(await cautions.count()).toBe(withHazard.length);
+    expect(await cautions.first().innerText()).toMatch(/operator's manual/);
     // it came with 850 h and no history: nothing pretends to be OK
     const api = await page.request.get(`/api/v1/organizations/${org}/machines/${machineId}/tasks`);
     const statuses = (await api.json()).data.map((t: { due: { status: string } }) => t.due.status);
