@@ -8,71 +8,50 @@ import {
   localDayNumber,
   todayIso,
   type DuePoint,
-  type ReadingPoint,
   type UsageEstimate,
 } from '../../shared/domain';
+import {
+  emptySummary,
+  pickSummaryColumns,
+  summaryColumns,
+  summaryOf,
+  SUMMARY_COLUMNS,
+  type ReadingSummary,
+  type SummaryColumns,
+} from './daily-summary';
 
-/** Days of daily summary kept per machine: a season (365 d) plus comparison weeks and slack. */
-const SUMMARY_DAYS = 3 * 365;
-
-/** Builds the per-day summary (each local day's last lifetime value) from a machine's readings. */
-export function summariseReadings(
-  readings: { lifetimeValue: number; takenAt: Date }[],
-  timeZone: string,
-): ReadingPoint[] {
-  const byDay = new Map<number, ReadingPoint>();
-  for (const r of readings) {
-    const day = localDayNumber(r.takenAt, timeZone);
-    const key = Math.floor(day);
-    const prev = byDay.get(key);
-    if (!prev || day >= prev.day) byDay.set(key, { day, value: r.lifetimeValue });
-  }
-  const points = [...byDay.values()].sort((a, b) => a.day - b.day);
-  const cutoff = (points.at(-1)?.day ?? 0) - SUMMARY_DAYS;
-  return points.filter((p) => p.day >= cutoff);
-}
+export { summariseReadings } from './daily-summary';
 
 /**
- * Rewrites a machine's forecast summary from its readings, then its tasks' due points. Called in the
- * transaction of every reading change, so the due list never rescans readings.
+ * Rebuilds a machine's forecast summary from all its readings, then its tasks' due points (one
+ * write of each). Reading writes keep the summary current incrementally (reading-summary.ts);
+ * this full pass is for a new machine, a time-zone change and the rare case those cannot settle.
  */
 export async function refreshMachineForecast(
   machineId: string,
   organizationId: string,
   transaction?: Transaction,
+  options: { timeZone?: string } = {},
 ): Promise<void> {
-  const org = await Organization.findByPk(organizationId, { transaction });
-  if (!org) return;
+  const timeZone =
+    options.timeZone ??
+    (await Organization.findByPk(organizationId, { transaction, attributes: ['timeZone'] }))
+      ?.timeZone;
+  if (!timeZone) return;
   const readings = await sequelize.query<{ value: number; lifetime_value: number; taken_at: Date }>(
     `SELECT value, lifetime_value, taken_at FROM meter_readings
      WHERE organization_id = :organizationId AND machine_id = :machineId ORDER BY taken_at, lifetime_value`,
     { replacements: { organizationId, machineId }, type: QueryTypes.SELECT, transaction },
   );
-  const daily = summariseReadings(
+  const summary = summaryOf(
     readings.map((r) => ({
+      value: Number(r.value),
       lifetimeValue: Number(r.lifetime_value),
       takenAt: new Date(r.taken_at),
     })),
-    org.timeZone,
+    timeZone,
   );
-  const last = readings.at(-1);
-  await MachineForecast.upsert(
-    {
-      machineId,
-      organizationId,
-      daily,
-      readingCount: readings.length,
-      lastValue: last ? Number(last.lifetime_value) : null,
-      lastRawValue: last ? Number(last.value) : null,
-      lastTakenAt: last ? new Date(last.taken_at) : null,
-      firstTakenAt: readings[0] ? new Date(readings[0].taken_at) : null,
-      firstValue: readings[0] ? Number(readings[0].lifetime_value) : null,
-      usage: null,
-      computedOn: null,
-    },
-    { transaction },
-  );
-  await recomputeDuePoints(organizationId, [machineId], { transaction, timeZone: org.timeZone });
+  await storeForecasts(organizationId, new Map([[machineId, summary]]), { transaction, timeZone });
 }
 
 /**
@@ -125,6 +104,14 @@ export function duePointsFor(
   return { usage, points };
 }
 
+interface StoreOptions {
+  transaction?: Transaction;
+  timeZone?: string;
+  now?: Date;
+  /** the machines already loaded (their season months), to spare reading them again */
+  machines?: Pick<Machine, 'id' | 'seasonMonths'>[];
+}
+
 /**
  * Recomputes and stores the usage estimate and task due points of the given machines (all of the
  * organization's when machineIds is omitted) from their stored summaries.
@@ -132,7 +119,29 @@ export function duePointsFor(
 export async function recomputeDuePoints(
   organizationId: string,
   machineIds?: string[],
-  options: { transaction?: Transaction; timeZone?: string; now?: Date } = {},
+  options: StoreOptions = {},
+): Promise<void> {
+  await computeAndStore(organizationId, machineIds, null, options);
+}
+
+/**
+ * Stores new summaries of machines with their usage estimates and due points: one upsert of
+ * machine_forecasts (summary and usage together) and one of task_due_points for all of them.
+ */
+export async function storeForecasts(
+  organizationId: string,
+  summaries: Map<string, ReadingSummary>,
+  options: StoreOptions = {},
+): Promise<void> {
+  if (summaries.size)
+    await computeAndStore(organizationId, [...summaries.keys()], summaries, options);
+}
+
+async function computeAndStore(
+  organizationId: string,
+  machineIds: string[] | undefined,
+  summaries: Map<string, ReadingSummary> | null,
+  options: StoreOptions,
 ): Promise<void> {
   const { transaction } = options;
   const now = options.now ?? new Date();
@@ -142,47 +151,49 @@ export async function recomputeDuePoints(
     'UTC';
   const asOfIso = todayIso(timeZone, now);
   const machineWhere = { organizationId, ...(machineIds && { id: { [Op.in]: machineIds } }) };
-  const machines = await Machine.findAll({
-    where: machineWhere,
-    attributes: ['id', 'seasonMonths'],
-    transaction,
-  });
+  const machines =
+    options.machines ??
+    (await Machine.findAll({
+      where: machineWhere,
+      attributes: ['id', 'seasonMonths'],
+      transaction,
+    }));
   if (!machines.length) return;
   const ids = machines.map((m) => m.id);
   const seasonOf = new Map(machines.map((m) => [m.id, m.seasonMonths]));
   const [forecasts, tasks] = await Promise.all([
-    MachineForecast.findAll({
-      where: { organizationId, machineId: { [Op.in]: ids } },
-      transaction,
-    }),
+    summaries
+      ? []
+      : MachineForecast.findAll({
+          where: { organizationId, machineId: { [Op.in]: ids } },
+          transaction,
+        }),
     ServiceTask.findAll({ where: { organizationId, machineId: { [Op.in]: ids } }, transaction }),
   ]);
-  const forecastOf = new Map(forecasts.map((f) => [f.machineId, f]));
+  const summaryOfMachine = new Map<string, SummaryColumns>(
+    summaries
+      ? [...summaries].map(([id, s]) => [id, summaryColumns(s)])
+      : forecasts.map((f) => [f.machineId, pickSummaryColumns(f)]),
+  );
   const tasksOf = new Map<string, ServiceTask[]>();
   for (const t of tasks) tasksOf.set(t.machineId, [...(tasksOf.get(t.machineId) ?? []), t]);
 
   const dueRows: InferCreationAttributes<TaskDuePoint>[] = [];
-  const usageRows: InferCreationAttributes<MachineForecast>[] = [];
+  const forecastRows: InferCreationAttributes<MachineForecast>[] = [];
   for (const id of ids) {
-    const forecast = forecastOf.get(id) ?? null;
+    const summary = summaryOfMachine.get(id) ?? null;
     const { usage, points } = duePointsFor(
-      forecast,
+      summary,
       tasksOf.get(id) ?? [],
       timeZone,
       asOfIso,
       now,
       seasonOf.get(id) ?? [],
     );
-    usageRows.push({
+    forecastRows.push({
+      ...(summary ?? summaryColumns(emptySummary())),
       machineId: id,
       organizationId,
-      daily: forecast?.daily ?? [],
-      readingCount: forecast?.readingCount ?? 0,
-      lastValue: forecast?.lastValue ?? null,
-      lastRawValue: forecast?.lastRawValue ?? null,
-      lastTakenAt: forecast?.lastTakenAt ?? null,
-      firstTakenAt: forecast?.firstTakenAt ?? null,
-      firstValue: forecast?.firstValue ?? null,
       usage,
       computedOn: asOfIso,
       updatedAt: now,
@@ -200,8 +211,10 @@ export async function recomputeDuePoints(
       });
     }
   }
-  await MachineForecast.bulkCreate(usageRows, {
-    updateOnDuplicate: ['usage', 'computedOn', 'updatedAt'],
+  // Without new summaries only the usage is written, so a stored summary changed meanwhile by a
+  // reading write (which holds the machine's lock; this may not) is never overwritten.
+  await MachineForecast.bulkCreate(forecastRows, {
+    updateOnDuplicate: [...(summaries ? SUMMARY_COLUMNS : []), 'usage', 'computedOn', 'updatedAt'],
     transaction,
   });
   if (dueRows.length) {
@@ -212,10 +225,22 @@ export async function recomputeDuePoints(
   }
 }
 
-/** Rebuilds every machine's summary and due points in an organization (demo load, nightly job). */
-export async function refreshOrganizationForecasts(organizationId: string): Promise<void> {
-  const machines = await Machine.findAll({ where: { organizationId }, attributes: ['id'] });
-  for (const m of machines) await refreshMachineForecast(m.id, organizationId);
+/**
+ * Rebuilds every machine's summary and due points in an organization (demo load; a time-zone
+ * change, since the summary's days are local days of the organization's zone).
+ */
+export async function refreshOrganizationForecasts(
+  organizationId: string,
+  options: { transaction?: Transaction; timeZone?: string } = {},
+): Promise<void> {
+  const { transaction } = options;
+  const machines = await Machine.findAll({
+    where: { organizationId },
+    attributes: ['id'],
+    transaction,
+  });
+  for (const m of machines)
+    await refreshMachineForecast(m.id, organizationId, transaction, options);
 }
 
 /** Brings stale due points (computed before today in the org's time zone) up to date. */

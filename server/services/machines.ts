@@ -30,13 +30,26 @@ export async function operatorIdsOf(
 
 /** The machine if it belongs to the caller's organization and the caller may see it; else 404. */
 export async function loadMachine(access: OrgAccess, machineId: string, transaction?: Transaction) {
+  // one query: the machine with its assigned operators (every request naming a machine asks)
   const machine = await Machine.findOne({
     where: { id: machineId, organizationId: access.organization.id },
+    attributes: {
+      include: [
+        [
+          sequelize.literal(
+            `(SELECT coalesce(array_agg(o.user_id::text), '{}') FROM machine_operators o
+              WHERE o.machine_id = "Machine"."id" AND o.organization_id = "Machine"."organization_id")`,
+          ),
+          'operatorIds',
+        ],
+      ],
+    },
     transaction,
   });
   if (!machine) throw notFound('Machine');
-  const operators =
-    (await operatorIdsOf([machine.id], access.organization.id, transaction)).get(machine.id) ?? [];
+  const operators = (machine.get('operatorIds' as keyof Machine) as string[] | null) ?? [];
+  // not a column: kept off the instance so saving or serialising it never meets it
+  delete (machine.dataValues as Record<string, unknown>).operatorIds;
   if (!canViewMachine(access, machine, operators)) throw notFound('Machine');
   return { machine, operatorIds: operators };
 }

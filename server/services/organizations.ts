@@ -17,6 +17,7 @@ import { managingRole } from '../policies/organization';
 import { inviteMember } from './accounts';
 import { organizationDeletedMail } from './account-mail';
 import { recordAudit } from '../infra/audit';
+import { refreshOrganizationForecasts } from './forecast';
 import { queueMessage } from '../infra/mailer';
 import { deleteObject, listObjectKeys } from '../infra/storage';
 
@@ -87,6 +88,12 @@ export async function updateOrganization(
       Object.fromEntries(Object.entries(changes).map(([field, [, value]]) => [field, value])),
       { transaction },
     );
+    // machine summaries hold local days of the farm's zone: a new zone rebuilds them
+    if (changes.timeZone)
+      await refreshOrganizationForecasts(organization.id, {
+        transaction,
+        timeZone: organization.timeZone,
+      });
     await recordAudit(
       {
         organizationId: organization.id,

@@ -1,20 +1,54 @@
 // Changes to a machine's recorded readings after the fact: correcting or deleting one reading,
-// recording a meter replacement. Each is audited and refreshes the machine's forecast.
-import { Op } from 'sequelize';
+// recording a meter replacement. Each is audited and updates the machine's summary from the
+// day(s) it touched (a replacement adds two readings, summarised as any new ones).
+import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { AppError, invalid, notFound } from '../errors';
-import { MeterReading, MeterReplacement, type Machine } from '../models';
+import { MachineForecast, MeterReading, MeterReplacement, type Machine } from '../models';
 import { checkReading, toLifetimeValue } from '../../shared/domain';
 import type { OrgAccess } from '../policies/context';
 import { recordAudit } from '../infra/audit';
-import { refreshMachineForecast } from './forecast';
+import { refreshMachineForecast, storeForecasts } from './forecast';
 import {
-  lockMachineReadings,
-  readingsAround,
-  replacementsOf,
-  timeFormatter,
-} from './reading-neighbours';
-import { writeReadings } from './readings';
+  pickSummaryColumns,
+  summaryFromColumns,
+  type ReadingSummary,
+  type SummaryReading,
+} from './daily-summary';
+import { lockMachineReadings, timeFormatter, writeContext } from './reading-neighbours';
+import { summaryAfterChange } from './reading-summary';
+import { asStoredValue, writeReadings } from './readings';
+
+const summaryReading = (r: MeterReading): SummaryReading => ({
+  value: r.value,
+  lifetimeValue: r.lifetimeValue,
+  takenAt: r.takenAt,
+});
+
+/**
+ * Stores the machine's summary after a correction or deletion, from the day(s) it touched; the
+ * whole history is read only when there is no summary yet or the change emptied its window.
+ */
+async function updateSummary(
+  access: OrgAccess,
+  machine: Machine,
+  stored: ReadingSummary | null,
+  change: { before: SummaryReading; after?: SummaryReading },
+  transaction: Transaction,
+) {
+  const { timeZone } = access.organization;
+  const summary =
+    stored && (await summaryAfterChange(machine, stored, change, timeZone, transaction));
+  if (!summary) {
+    await refreshMachineForecast(machine.id, access.organization.id, transaction, { timeZone });
+    return;
+  }
+  await storeForecasts(access.organization.id, new Map([[machine.id, summary]]), {
+    transaction,
+    timeZone,
+    machines: [machine],
+  });
+}
 
 /** A reading of the caller's organization, or 404. */
 export async function loadReading(access: OrgAccess, readingId: string) {
@@ -39,13 +73,20 @@ export async function correctReading(
     if (!stillThere) throw notFound('Reading');
     await reading.reload({ transaction });
     const before = { value: reading.value, takenAt: reading.takenAt.toISOString() };
-    const value = changes.value ?? reading.value;
+    const old = summaryReading(reading);
+    const value = asStoredValue(changes.value ?? reading.value);
     const takenAt = changes.takenAt ?? reading.takenAt;
-    const replacements = await replacementsOf(machine, transaction);
+    const context = await writeContext(machine, takenAt.getTime(), takenAt.getTime(), transaction);
+    const { replacements } = context;
     // Validate as a new reading that ignores the one being corrected, then update in place.
-    const existing = (
-      await readingsAround(machine, takenAt.getTime(), takenAt.getTime(), transaction)
-    ).filter((r) => r.id !== reading.id);
+    const existing = context.neighbours.filter((r) => r.id !== reading.id);
+    const formatTime = timeFormatter(access.organization.timeZone);
+    // the same value at the same time is another reading already: a copy, not a correction
+    if (existing.some((r) => r.takenAtMs === takenAt.getTime() && r.value === value)) {
+      throw invalid({
+        takenAt: `A reading of ${value} ${machine.meterUnit} taken ${formatTime(takenAt.getTime())} is already recorded — delete this one instead of making it a copy.`,
+      });
+    }
     const lifetime = toLifetimeValue(value, takenAt.getTime(), replacements);
     const previous = [...existing].reverse().find((r) => r.takenAtMs <= takenAt.getTime());
     const next = existing.find((r) => r.takenAtMs > takenAt.getTime());
@@ -62,11 +103,13 @@ export async function correctReading(
       {
         nowMs: Date.now(),
         meterUnit: machine.meterUnit,
-        formatTime: timeFormatter(access.organization.timeZone),
+        formatTime,
       },
     );
     if (violation) throw invalid({ [violation.field]: violation.message });
     await reading.update({ value, takenAt, lifetimeValue: lifetime }, { transaction });
+    // the stored values (numeric(14,2)), as the summary reads them back
+    await reading.reload({ transaction });
     await recordAudit(
       {
         organizationId: access.organization.id,
@@ -82,7 +125,13 @@ export async function correctReading(
       },
       transaction,
     );
-    await refreshMachineForecast(machine.id, access.organization.id, transaction);
+    await updateSummary(
+      access,
+      machine,
+      context.summary,
+      { before: old, after: summaryReading(reading) },
+      transaction,
+    );
     return reading;
   });
 }
@@ -91,6 +140,11 @@ export async function correctReading(
 export async function deleteReading(access: OrgAccess, machine: Machine, reading: MeterReading) {
   await sequelize.transaction(async (transaction) => {
     await lockMachineReadings(machine.id, transaction);
+    // re-read under the lock: another edit may have changed or removed it meanwhile
+    const stillThere = await MeterReading.count({ where: { id: reading.id }, transaction });
+    if (!stillThere) throw notFound('Reading');
+    await reading.reload({ transaction });
+    const stored = await MachineForecast.findByPk(machine.id, { transaction });
     await reading.destroy({ transaction });
     await recordAudit(
       {
@@ -108,7 +162,13 @@ export async function deleteReading(access: OrgAccess, machine: Machine, reading
       },
       transaction,
     );
-    await refreshMachineForecast(machine.id, access.organization.id, transaction);
+    await updateSummary(
+      access,
+      machine,
+      stored && summaryFromColumns(pickSummaryColumns(stored)),
+      { before: summaryReading(reading) },
+      transaction,
+    );
   });
 }
 

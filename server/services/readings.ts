@@ -4,13 +4,10 @@ import { MeterReading, type Machine } from '../models';
 import { checkReading, toLifetimeValue } from '../../shared/domain';
 import type { ReadingSource } from '../../shared/constants';
 import type { OrgAccess } from '../policies/context';
-import { refreshMachineForecast } from './forecast';
-import {
-  lockMachineReadings,
-  readingsAround,
-  replacementsOf,
-  timeFormatter,
-} from './reading-neighbours';
+import { refreshMachineForecast, storeForecasts } from './forecast';
+import type { ReadingSummary } from './daily-summary';
+import { lockMachineReadings, timeFormatter, writeContext } from './reading-neighbours';
+import { summaryWithNewReadings } from './reading-summary';
 
 export interface NewReading {
   machine: Machine;
@@ -31,6 +28,7 @@ export interface ReadingOutcome {
  * Checks and writes readings in the caller's transaction: every reading rule is checked against
  * its neighbours (existing and new); an identical repeat is accepted once and ignored after. Any
  * broken rule throws 422 naming each bad row (field `prefix.index.field`) and nothing is written.
+ * Each machine's summary is then brought up to date from its new readings alone.
  */
 export async function writeReadings(
   access: OrgAccess,
@@ -38,29 +36,88 @@ export async function writeReadings(
   transaction: Transaction,
   options: PlanOptions = {},
 ): Promise<ReadingOutcome[]> {
-  const { outcomes, errors, toInsert } = await planReadings(access, items, transaction, options);
+  const plan = await planReadings(access, items, transaction, options);
+  const { outcomes, errors, toInsert } = plan;
   if (Object.keys(errors).length) throw invalid(errors);
-  for (const { item, index, lifetime } of toInsert) {
-    const reading = await MeterReading.create(
-      {
-        organizationId: access.organization.id,
-        machineId: item.machine.id,
-        value: item.value,
-        lifetimeValue: lifetime,
-        takenAt: item.takenAt,
-        source: item.source,
-        enteredBy: access.userId,
-        importKey: item.importKey ?? null,
-      },
-      { transaction },
-    );
-    outcomes.push({ index, status: 'added', reading });
-  }
-  for (const machineId of new Set(toInsert.map((t) => t.item.machine.id))) {
-    await refreshMachineForecast(machineId, access.organization.id, transaction);
-  }
+  const rows = await insertReadings(access, toInsert, transaction);
+  toInsert.forEach(({ index }, i) => outcomes.push({ index, status: 'added', reading: rows[i] }));
+  await refreshSummaries(access, plan.summaries, rows, transaction);
   return outcomes.sort((a, b) => a.index - b.index);
 }
+
+// Rows per INSERT statement: large batches (an import) go in a few statements, not one per row.
+const INSERT_CHUNK = 1000;
+
+async function insertReadings(
+  access: OrgAccess,
+  toInsert: { item: NewReading; lifetime: number }[],
+  transaction: Transaction,
+): Promise<MeterReading[]> {
+  const rows: MeterReading[] = [];
+  for (let i = 0; i < toInsert.length; i += INSERT_CHUNK) {
+    const chunk = toInsert.slice(i, i + INSERT_CHUNK).map(({ item, lifetime }) => ({
+      organizationId: access.organization.id,
+      machineId: item.machine.id,
+      value: item.value,
+      lifetimeValue: lifetime,
+      takenAt: item.takenAt,
+      source: item.source,
+      enteredBy: access.userId,
+      importKey: item.importKey ?? null,
+    }));
+    // RETURNING gives the stored values (numeric(14,2)), which the summary must agree with.
+    rows.push(...(await MeterReading.bulkCreate(chunk, { transaction, returning: true })));
+  }
+  return rows;
+}
+
+/** Brings each machine's stored summary, usage and due points up to date with its new rows. */
+async function refreshSummaries(
+  access: OrgAccess,
+  stored: Map<string, { machine: Machine; summary: ReadingSummary | null }>,
+  rows: MeterReading[],
+  transaction: Transaction,
+) {
+  const { timeZone } = access.organization;
+  const added = new Map<string, MeterReading[]>();
+  for (const r of rows) added.set(r.machineId, [...(added.get(r.machineId) ?? []), r]);
+  const summaries = new Map<string, ReadingSummary>();
+  const machines: Machine[] = [];
+  for (const [machineId, readings] of added) {
+    const { machine, summary } = stored.get(machineId)!;
+    if (!summary) {
+      // no summary row yet (a machine stored before summaries were kept): build it in full
+      await refreshMachineForecast(machineId, access.organization.id, transaction, { timeZone });
+      continue;
+    }
+    machines.push(machine);
+    summaries.set(
+      machineId,
+      await summaryWithNewReadings(machine, summary, readings, timeZone, transaction),
+    );
+  }
+  await storeForecasts(access.organization.id, summaries, { transaction, timeZone, machines });
+}
+
+/**
+ * A meter value as its numeric(14,2) column stores it: PostgreSQL rounds the decimal digits it is
+ * sent (String(value)) half away from zero. Rules and repeats are judged on this value, so two
+ * readings that differ only past the second decimal are one reading, never a duplicate-key error.
+ */
+export function asStoredValue(value: number): number {
+  const text = String(Math.abs(value));
+  // only values under 1e-6 (or over 1e21) print with an exponent; under 0.005 they store as 0
+  const shifted = text.includes('e') ? Math.abs(value) * 100 : Number(`${text}e2`);
+  return (Math.sign(value) * Math.round(shifted)) / 100 || 0;
+}
+
+interface Point {
+  lifetime: number;
+  takenAtMs: number;
+  raw: number;
+}
+
+const pointOrder = (a: Point, b: Point) => a.takenAtMs - b.takenAtMs || a.lifetime - b.lifetime;
 
 interface PlanOptions {
   fieldPrefix?: (index: number) => string;
@@ -69,7 +126,8 @@ interface PlanOptions {
 
 /**
  * Checks readings against the rules and their neighbours without writing: what would be added,
- * what is an identical repeat, and every broken rule keyed by `prefix.index.field`.
+ * what is an identical repeat, and every broken rule keyed by `prefix.index.field`. Each machine
+ * is locked first; its stored summary comes back in `summaries` for the write to update.
  */
 export async function planReadings(
   access: OrgAccess,
@@ -83,40 +141,52 @@ export async function planReadings(
   const errors: Record<string, string> = {};
   const outcomes: ReadingOutcome[] = [];
   const byMachine = new Map<string, { item: NewReading; index: number }[]>();
-  items.forEach((item, index) => {
-    byMachine.set(item.machine.id, [...(byMachine.get(item.machine.id) ?? []), { item, index }]);
-  });
+  for (const [index, item] of items.entries()) {
+    const group = byMachine.get(item.machine.id);
+    if (group) group.push({ item, index });
+    else byMachine.set(item.machine.id, [{ item, index }]);
+  }
 
   const toInsert: { item: NewReading; index: number; lifetime: number }[] = [];
+  const summaries = new Map<string, { machine: Machine; summary: ReadingSummary | null }>();
   for (const group of byMachine.values()) {
     const machine = group[0].item.machine;
     await lockMachineReadings(machine.id, transaction);
-    const replacements = await replacementsOf(machine, transaction);
-    const times = group.map((g) => g.item.takenAt.getTime());
-    const existing = await readingsAround(
+    const sorted = [...group].sort((a, b) => a.item.takenAt.getTime() - b.item.takenAt.getTime());
+    const context = await writeContext(
       machine,
-      Math.min(...times),
-      Math.max(...times),
+      sorted[0].item.takenAt.getTime(),
+      sorted.at(-1)!.item.takenAt.getTime(),
       transaction,
     );
-    const merged: { lifetime: number; takenAtMs: number; raw: number }[] = existing.map((r) => ({
+    const { replacements } = context;
+    summaries.set(machine.id, { machine, summary: context.summary });
+    const existing: Point[] = context.neighbours.map((r) => ({
       lifetime: r.lifetimeValue,
       takenAtMs: r.takenAtMs,
       raw: r.value,
     }));
-    const sorted = [...group].sort((a, b) => a.item.takenAt.getTime() - b.item.takenAt.getTime());
+    // One pass in time order (a large import stays O(n log n)): the previous reading is the later
+    // of the last existing one at or before this time and the latest new one accepted so far; the
+    // next is always an existing one, as every accepted new reading is at or before this time.
+    const seen = new Set(existing.map((r) => `${r.takenAtMs}:${r.raw}`));
+    let after = 0;
+    let newest: Point | undefined;
     for (const { item, index } of sorted) {
       const takenAtMs = item.takenAt.getTime();
-      const lifetime = toLifetimeValue(item.value, takenAtMs, replacements);
-      if (merged.some((r) => r.takenAtMs === takenAtMs && r.raw === item.value)) {
+      const value = asStoredValue(item.value);
+      const lifetime = toLifetimeValue(value, takenAtMs, replacements);
+      if (seen.has(`${takenAtMs}:${value}`)) {
         outcomes.push({ index, status: 'duplicate', reading: null });
         continue;
       }
-      const previous = [...merged].reverse().find((r) => r.takenAtMs <= takenAtMs);
-      const next = merged.find((r) => r.takenAtMs > takenAtMs);
+      while (after < existing.length && existing[after].takenAtMs <= takenAtMs) after++;
+      const before = existing[after - 1];
+      const previous = !newest || (before && pointOrder(before, newest) > 0) ? before : newest;
+      const next = existing[after];
       const violation = checkReading(
         // each with the value its meter showed, so a refusal speaks in the meter fitted now
-        { value: lifetime, takenAtMs, raw: item.value },
+        { value: lifetime, takenAtMs, raw: value },
         {
           previous: previous && {
             value: previous.lifetime,
@@ -131,12 +201,13 @@ export async function planReadings(
         errors[`${prefix(index)}${violation.field}`] = violation.message;
         continue;
       }
-      merged.push({ lifetime, takenAtMs, raw: item.value });
-      merged.sort((a, b) => a.takenAtMs - b.takenAtMs || a.lifetime - b.lifetime);
-      toInsert.push({ item, index, lifetime });
+      const point = { lifetime, takenAtMs, raw: value };
+      seen.add(`${takenAtMs}:${value}`);
+      if (!newest || pointOrder(point, newest) >= 0) newest = point;
+      toInsert.push({ item: { ...item, value }, index, lifetime });
     }
   }
-  return { outcomes, errors, toInsert };
+  return { outcomes, errors, toInsert, summaries };
 }
 
 /**
