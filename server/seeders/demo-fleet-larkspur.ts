@@ -119,7 +119,7 @@ export const LARKSPUR_MACHINES: DemoMachine[] = [
     fleetNumber: 'M-01',
     machineClass: 'mower_conditioner',
     name: 'Brindle trailed mower-conditioner',
-    category: 'mower',
+    category: 'implement',
     make: 'Brindle',
     model: 'MC 32 trailed (hour counter)',
     serialNumber: 'BRN-W16-15-0544',

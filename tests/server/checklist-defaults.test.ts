@@ -155,3 +155,22 @@ describe('checklist defaults — every list and item', () => {
     ]);
   });
 });
+
+describe('checklist defaults — trailed machines', () => {
+  it.each([
+    'mower_conditioner',
+    'round_baler',
+    'square_baler',
+    'mixer_wagon',
+    'slurry_tanker',
+  ] as const)(
+    '%s — walked round as a towed machine: no pedal latch or steering of its own to check',
+    (c) => {
+      const items = ids(defaultChecklist(MACHINE_CLASS_CATEGORY[c], c).items);
+      // common practice: a trailed machine has no seat, pedals or steering to check
+      expect(items).not.toContain('brake-pedal-latch');
+      expect(items).not.toContain('steering');
+      expect(items.length).toBeGreaterThan(3);
+    },
+  );
+});

@@ -47,7 +47,8 @@ export const MACHINE_CLASS_CATEGORY: Record<MachineClass, MachineCategory> = {
   combine: 'combine',
   sp_sprayer: 'sprayer',
   sp_windrower: 'mower',
-  mower_conditioner: 'mower',
+  // trailed behind a tractor: walked round as an implement, not a self-propelled mower
+  mower_conditioner: 'implement',
   round_baler: 'baler',
   square_baler: 'baler',
   forage_harvester: 'other',
