@@ -114,7 +114,8 @@ export async function readImportUpload(access: OrgAccess, req: Request): Promise
           const message = `Line ${line}: value "${valueCell}" is above ${METER_BOUNDS.max.toLocaleString('en-US')}, the most a meter value may be`;
           return errors.add({ row, line, message, fleetNumber });
         }
-        rows.push(m, takenAt.getTime(), number.value, line, STATUS_NEW);
+        // to the hundredth meter_readings keeps, so a resent row matches the one stored
+        rows.push(m, takenAt.getTime(), Math.round(number.value * 100) / 100, line, STATUS_NEW);
       },
     },
   );

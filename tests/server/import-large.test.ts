@@ -139,6 +139,16 @@ describe('CSV import of readings — large files', { timeout: 180_000 }, () => {
     expect(await countRows('meter_readings')).toBe(3);
   });
 
+  it('import — a value with three decimals is kept to the hundredth numeric(14,2) stores, so resending it adds nothing', async () => {
+    const { send } = await setup();
+    const at = new Date(Date.now() - DAY).toISOString();
+    const csv = `fleet number,taken at,value\nT-01,${at},1200.555\n`;
+    expect((await send('commit', csv)).body.data).toEqual({ added: 1, duplicates: 0, total: 1 });
+    // 1,200.555 to the hundredth: 1,200.56 (worked by hand, half up)
+    expect(await MeterReading.count({ where: { value: 1200.56 } })).toBe(1);
+    expect((await send('commit', csv)).body.data).toEqual({ added: 0, duplicates: 1, total: 1 });
+  });
+
   it('import — more than 500,000 rows is refused with 422 naming the file and the limit; over 50 MB with 413; nothing written', async () => {
     const { send } = await setup();
     const at = new Date(Date.now() - DAY).toISOString();
