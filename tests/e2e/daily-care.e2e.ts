@@ -12,6 +12,7 @@ import {
   type TestBrowser,
 } from './support/browser';
 import { DAILY_CARE_FLEET, larkspurFarm } from './support/demo-fleet';
+import { addOwnMachine } from './support/own-machine';
 import { apiGet, type Member } from './support/role-flows-api';
 import { addDaysIso, todayIso } from '../../shared/domain';
 
@@ -40,22 +41,19 @@ describe('daily care — a grease sign-off in the walkaround', () => {
     ({ id: org, timeZone } = await larkspurFarm(page));
     const members = (await apiGet(page, `/organizations/${org}/members`)).data as Member[];
     const lena = members.find((m) => m.user.email === 'lena@larkspur.example')!.user.id;
-    const created = await page.request.post(`/api/v1/organizations/${org}/machines`, {
-      data: {
+    machineId = await addOwnMachine(
+      page,
+      org,
+      {
         fleetNumber: DAILY_CARE_FLEET,
         name: 'Harl loader tractor',
         category: 'tractor',
         meterUnit: 'h',
         operatorIds: [lena],
       },
-    });
-    expect(created.status()).toBe(201);
-    machineId = (await created.json()).data.id;
+      [{ agoMs: 20 * 3_600_000, value: 1200 }],
+    );
     const base = `/api/v1/organizations/${org}`;
-    const reading = await page.request.post(`${base}/machines/${machineId}/readings`, {
-      data: { value: 1200, takenAt: new Date(Date.now() - 20 * 3_600_000).toISOString() },
-    });
-    expect(reading.status()).toBe(201);
     const yesterday = addDaysIso(todayIso(timeZone), -1);
     for (const [name, hazards, lastDoneMeter, instructions] of [
       [GREASE, ['raised_load'], 1188, 'Bucket on the ground. Grease every loader pivot and pin.'],

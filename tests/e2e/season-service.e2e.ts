@@ -7,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { launchBrowser, signIn, type TestBrowser } from './support/browser';
 import { SEASON_SERVICE_FLEET, larkspurFarm } from './support/demo-fleet';
+import { addOwnMachine } from './support/own-machine';
 import { todayIso } from '../../shared/domain';
 
 const DESKTOP = { width: 1280, height: 800 };
@@ -22,16 +23,12 @@ describe('season services — a pre-season service on the machine page', () => {
     page = await browser.newPage(DESKTOP);
     await signIn(page, 'marta@larkspur.example', 'hourstone-demo');
     ({ id: org, timeZone } = await larkspurFarm(page));
-    const created = await page.request.post(`/api/v1/organizations/${org}/machines`, {
-      data: {
-        fleetNumber: SEASON_SERVICE_FLEET,
-        name: 'Harvest combine',
-        category: 'combine',
-        seasonMonths: [8, 9, 10],
-      },
+    machineId = await addOwnMachine(page, org, {
+      fleetNumber: SEASON_SERVICE_FLEET,
+      name: 'Harvest combine',
+      category: 'combine',
+      seasonMonths: [8, 9, 10],
     });
-    expect(created.status()).toBe(201);
-    machineId = (await created.json()).data.id;
   });
   afterAll(async () => {
     await browser?.close();

@@ -6,6 +6,7 @@ import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import { launchBrowser, signIn, type TestBrowser } from './support/browser';
 import { LIBRARY_FLEET, larkspurFarm } from './support/demo-fleet';
+import { addOwnMachine } from './support/own-machine';
 import { serviceLibraryClass } from '../../shared/domain/service-library';
 
 const DESKTOP = { width: 1280, height: 800 };
@@ -20,16 +21,12 @@ describe('service library — apply a machine class on the machine page', () => 
     page = await browser.newPage(DESKTOP);
     await signIn(page, 'marta@larkspur.example', 'hourstone-demo');
     org = (await larkspurFarm(page)).id;
-    const created = await page.request.post(`/api/v1/organizations/${org}/machines`, {
-      data: { fleetNumber: LIBRARY_FLEET, name: 'Second-hand round baler', category: 'baler' },
-    });
-    expect(created.status()).toBe(201);
-    machineId = (await created.json()).data.id;
-    const reading = await page.request.post(
-      `/api/v1/organizations/${org}/machines/${machineId}/readings`,
-      { data: { value: 850, takenAt: new Date(Date.now() - 60_000).toISOString() } },
+    machineId = await addOwnMachine(
+      page,
+      org,
+      { fleetNumber: LIBRARY_FLEET, name: 'Second-hand round baler', category: 'baler' },
+      [{ agoMs: 60_000, value: 850 }],
     );
-    expect(reading.status()).toBe(201);
   });
   afterAll(async () => {
     await browser?.close();

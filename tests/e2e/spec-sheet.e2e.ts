@@ -14,6 +14,7 @@ import {
   type TestBrowser,
 } from './support/browser';
 import { SPEC_SHEET_FLEET, larkspurFarm } from './support/demo-fleet';
+import { addOwnMachine } from './support/own-machine';
 
 const DESKTOP = { width: 1280, height: 800 };
 const TEST = 'Hydraulic charge pressure';
@@ -37,16 +38,12 @@ describe('spec sheet — fill it, and raise a defect from a measurement outside 
     page = await browser.newPage(DESKTOP);
     await signIn(page, 'marta@larkspur.example', 'hourstone-demo');
     org = (await larkspurFarm(page)).id;
-    const created = await page.request.post(`/api/v1/organizations/${org}/machines`, {
-      data: { fleetNumber: SPEC_SHEET_FLEET, name: 'Spec sheet tractor', category: 'tractor' },
-    });
-    expect(created.status()).toBe(201);
-    machineId = (await created.json()).data.id;
-    const reading = await page.request.post(
-      `/api/v1/organizations/${org}/machines/${machineId}/readings`,
-      { data: { value: 1200, takenAt: new Date(Date.now() - 60_000).toISOString() } },
+    machineId = await addOwnMachine(
+      page,
+      org,
+      { fleetNumber: SPEC_SHEET_FLEET, name: 'Spec sheet tractor', category: 'tractor' },
+      [{ agoMs: 60_000, value: 1200 }],
     );
-    expect(reading.status()).toBe(201);
   });
   afterAll(async () => {
     await browser?.close();
