@@ -5,7 +5,10 @@ import type { Request, Response } from 'express';
 import jwt from 'jsonwebtoken';
 import { Op, type Transaction } from 'sequelize';
 import { env } from '../env';
-import { Membership, Organization, Session, User } from '../models';
+import { Session } from '../models';
+import { readLiveSession, type SessionUser } from './session-load';
+
+export type { SessionUser } from './session-load';
 
 export const SESSION_COOKIE = 'hs_session';
 
@@ -18,8 +21,6 @@ interface SessionClaims {
   sub: string;
   sid: string;
 }
-
-export type SessionUser = User & { memberships: Membership[] };
 
 function cookieSecure(req: Request): boolean {
   if (env.COOKIE_SECURE === 'auto') return req.secure;
@@ -111,36 +112,31 @@ export function readSession(
 export async function loadSession(
   token: string | undefined,
 ): Promise<{ sessionId: string; user: SessionUser } | null> {
-  const claims = readSession(token);
+  const claims = verifiedClaims(token);
   // A token signed before sessions had ids, or tampered with, names no row.
   if (!claims || !/^[0-9a-f-]{36}$/i.test(claims.sessionId)) return null;
-  const session = await Session.findOne({
-    where: {
-      id: claims.sessionId,
-      userId: claims.userId,
-      revokedAt: null,
-      expiresAt: { [Op.gt]: new Date() },
-    },
-    include: [
-      {
-        model: User,
-        as: 'user',
-        required: true,
-        include: [
-          {
-            model: Membership,
-            as: 'memberships',
-            include: [{ model: Organization, as: 'organization' }],
-          },
-        ],
-      },
-    ],
-  });
-  if (!session?.user) return null;
+  const session = await readLiveSession(claims.userId, claims.sessionId);
+  if (!session) return null;
   if (Date.now() - session.lastSeenAt.getTime() > TOUCH_EVERY_MS) {
-    await Session.update({ lastSeenAt: new Date() }, { where: { id: session.id } });
+    await Session.update({ lastSeenAt: new Date() }, { where: { id: claims.sessionId } });
   }
-  const user = session.user as SessionUser;
-  user.memberships ??= [];
-  return { sessionId: session.id, user };
+  return { sessionId: claims.sessionId, user: session.user };
+}
+
+// Tokens already verified, with their expiry: checking a signature costs more than the session's
+// query, and a browser sends the same token with every request. What a token says never changes,
+// so remembering it is safe; whether its session is still live is asked of the database each time.
+const VERIFIED_MAX = 5_000;
+const verified = new Map<string, { userId: string; sessionId: string; expiresAtMs: number }>();
+
+function verifiedClaims(token: string | undefined) {
+  if (!token) return null;
+  const known = verified.get(token);
+  if (known && known.expiresAtMs > Date.now()) return known;
+  const claims = readSession(token);
+  if (!claims) return null;
+  const { exp } = jwt.decode(token) as { exp?: number };
+  if (verified.size >= VERIFIED_MAX) verified.clear();
+  verified.set(token, { ...claims, expiresAtMs: exp ? exp * 1000 : 0 });
+  return claims;
 }
