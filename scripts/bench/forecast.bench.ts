@@ -17,7 +17,8 @@ import {
   User,
 } from '../../server/models';
 import { refreshMachineForecast } from '../../server/services/forecast';
-import { dueCountsSql, dueListSql, staleSql } from '../../server/services/due-list';
+import { dueListSql, staleSql } from '../../server/services/due-list';
+import { dueCountsSql } from '../../server/services/due-counts';
 import {
   addDaysIso,
   computeDuePoint,

@@ -6,6 +6,7 @@ import { invalid } from '../errors';
 import { DealerLink, Organization } from '../models';
 import type { AuthContext, DealerAccessContext } from '../policies/context';
 import { recordAudit } from '../infra/audit';
+import { sequelize } from '../db';
 
 /**
  * The caller's access to a farm through an active link of a dealer they advise, or null. Looked
@@ -69,6 +70,34 @@ export async function recordDealerRead(
     },
     transaction,
   );
+}
+
+/**
+ * One 'dealer.read' audit row per farm (the same row recordDealerRead writes), in one statement:
+ * a read across many customers (the board) is audited in each farm's log without a write each.
+ * Replacements :farmIds and :accesses (in step), :actor, :dealer, :entityType, :path.
+ */
+export const DEALER_READS_SQL = `INSERT INTO audit_events (organization_id, actor_user_id, action, entity_type, entity_id, changes)
+  SELECT r.farm_id, :actor, 'dealer.read', :entityType, NULL,
+    jsonb_build_object('path', CAST(:path AS text), 'dealerOrganizationId', CAST(:dealer AS text), 'access', r.access)
+  FROM unnest(ARRAY[:farmIds]::uuid[], ARRAY[:accesses]::text[]) AS r(farm_id, access)`;
+
+/** Records one read of each of these farms by the same dealer's advisor (see DEALER_READS_SQL). */
+export async function recordDealerReads(
+  accesses: DealerAccessContext[],
+  read: { entityType: string; path: string },
+) {
+  if (!accesses.length) return;
+  await sequelize.query(DEALER_READS_SQL, {
+    replacements: {
+      farmIds: accesses.map((a) => a.organization.id),
+      accesses: accesses.map((a) => a.dealerAccess),
+      actor: accesses[0].userId,
+      dealer: accesses[0].dealerOrganizationId,
+      entityType: read.entityType,
+      path: read.path,
+    },
+  });
 }
 
 /** The active links of a dealer with their farms (optionally one customer), by farm name. */
