@@ -55,6 +55,23 @@ export async function farmsForReminders(): Promise<ReminderFarm[]> {
   );
 }
 
+/** Every farm (as farmsForReminders), `size` at a time in id order: a run never holds them all. */
+export async function* farmsInBatches(size = 100): AsyncGenerator<ReminderFarm[]> {
+  let after: string | null = null;
+  for (;;) {
+    const batch: ReminderFarm[] = await sequelize.query<ReminderFarm>(
+      `SELECT id, name, time_zone AS "timeZone", digest_hour AS "digestHour"
+       FROM organizations WHERE kind = 'farm' AND (CAST(:after AS uuid) IS NULL OR id > :after)
+       ORDER BY id LIMIT :size`,
+      { replacements: { after, size }, type: QueryTypes.SELECT },
+    );
+    if (!batch.length) return;
+    yield batch;
+    if (batch.length < size) return;
+    after = batch[batch.length - 1].id;
+  }
+}
+
 export async function digestHourOf(organizationId: string): Promise<number> {
   const [row] = await sequelize.query<{ digest_hour: number }>(
     'SELECT digest_hour FROM organizations WHERE id = :organizationId',

@@ -25,6 +25,13 @@ export const WEEKDAY_LABELS = [
 /** How far ahead the due digest looks at what the forecast brings due (days). */
 export const DIGEST_HORIZON_DAYS = 14;
 
+/**
+ * The most tasks one digest lists (overdue first, then by the date each falls due); past it the
+ * digest says how many more of each kind there are and links to the full due list, so a
+ * 2,000-machine farm gets a readable e-mail of a few hundred kB rather than several MB.
+ */
+export const DIGEST_TASK_CAP = 200;
+
 export const notificationPreferenceSchema = z.object({
   frequency: z.enum(DIGEST_FREQUENCIES, { error: 'Choose every day, once a week or off' }),
   weekday: z
