@@ -41,6 +41,7 @@ const ACTIONS: Record<string, string> = {
   'task.delete': 'removed a task from a machine’s schedule',
   'task.last_done': 'set when a task was last done',
   'task.count_from_now': 'restarted a task’s count from now',
+  'task.daily_care_done': 'signed off a daily-care task in a walkaround',
   'template.create': 'saved a schedule template',
   'checklist.create': 'added a walkaround checklist',
   'checklist.update': 'changed a walkaround checklist',
