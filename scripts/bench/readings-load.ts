@@ -2,7 +2,7 @@
 // Node process on loopback (so the load generator never shares its event loop), its CPU time read
 // from /proc, one timed HTTP post, and an autocannon load of posts spread over machines.
 import { spawn, type ChildProcess } from 'node:child_process';
-import { readFileSync } from 'node:fs';
+import { readdirSync, readFileSync } from 'node:fs';
 import { performance } from 'node:perf_hooks';
 import autocannon from 'autocannon';
 
@@ -12,15 +12,19 @@ export interface Served {
   stop(): Promise<void>;
 }
 
-/** Starts `node --import tsx <script> …args` with `env`, and waits until `healthPath` answers 200. */
+/**
+ * Starts `node [nodeArgs] --import tsx <script> …args` with `env`, and waits until `healthPath`
+ * answers 200.
+ */
 export async function serve(
   script: string,
   args: string[],
   env: NodeJS.ProcessEnv,
   port: number,
   healthPath: string,
+  nodeArgs: string[] = [],
 ): Promise<Served> {
-  const child = spawn(process.execPath, ['--import', 'tsx', script, ...args], {
+  const child = spawn(process.execPath, [...nodeArgs, '--import', 'tsx', script, ...args], {
     env,
     stdio: ['ignore', 'ignore', 'inherit'],
   });
@@ -50,6 +54,56 @@ export function cpuMs(pid: number): number {
   // fields after the command name (which may hold spaces) start at field 3
   const fields = stat.slice(stat.lastIndexOf(')') + 2).split(' ');
   return (Number(fields[11]) + Number(fields[12])) * 10;
+}
+
+const parentOf = (pid: number) => {
+  const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+  return Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[1]);
+};
+
+const pids = () =>
+  readdirSync('/proc')
+    .filter((e) => /^\d+$/.test(e))
+    .map(Number);
+
+/** The postmaster listening on `port`: found by the postmaster.pid file in its data folder. */
+export function postmasterOn(port: number): number | null {
+  for (const pid of pids()) {
+    try {
+      const args = readFileSync(`/proc/${pid}/cmdline`, 'utf8').split('\0');
+      const dir = args[args.indexOf('-D') + 1];
+      if (!args[0].endsWith('/postgres') || !args.includes('-D') || !dir) continue;
+      const lines = readFileSync(`${dir}/postmaster.pid`, 'utf8').split('\n');
+      if (Number(lines[0]) === pid && Number(lines[3]) === port) return pid;
+    } catch {
+      // ended, or not ours to read
+    }
+  }
+  return null;
+}
+
+/** CPU time (ms) so far of a PostgreSQL server's processes: its postmaster and its children. */
+export function databaseCpu(postmaster: number): Map<number, number> {
+  const byPid = new Map([[postmaster, cpuMs(postmaster)]]);
+  for (const pid of pids()) {
+    try {
+      if (parentOf(pid) === postmaster) byPid.set(pid, cpuMs(pid));
+    } catch {
+      // the process ended while being read
+    }
+  }
+  return byPid;
+}
+
+/**
+ * CPU time (ms) a server's processes used between two readings: processes started meanwhile count
+ * from zero; one that ended meanwhile (an idle pooled connection closing) is left out, not
+ * subtracted.
+ */
+export function databaseCpuSince(postmaster: number, before: Map<number, number>): number {
+  let total = 0;
+  for (const [pid, ms] of databaseCpu(postmaster)) total += ms - (before.get(pid) ?? 0);
+  return total;
 }
 
 export interface PostTarget {

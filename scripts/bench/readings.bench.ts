@@ -5,18 +5,29 @@
 // handler each run as their own process on loopback; the data set is written with COPY
 // (readings-data.ts). Also printed: the queries and API CPU time one post costs.
 //   --machines=N (default 200)   --runs=N (default 200)   --seconds=N (default 20)
-//   --cpu-prof: profile the in-process posts (.data/bench…/reading-post.cpuprofile, top functions)
+//   --cpu-prof: profile the in-process posts (.data/bench…/reading-post.cpuprofile) and the API
+//               process (CPU.….cpuprofile), each summarised by package and function
 //   --profile-only: stop after that (no servers, no load)
+import { readdirSync } from 'node:fs';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import request from 'supertest';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../server/db';
 import { createApp } from '../../server/app';
-import { profiled } from './cpu-profile';
+import { printProfileFile, profiled } from './cpu-profile';
 import { percentiles, report } from './report';
 import { BENCH_EMAIL, BENCH_PASSWORD, buildReadingsFarm } from './readings-data';
-import { cpuMs, loadPosts, serve, timedPost, type PostTarget } from './readings-load';
+import {
+  cpuMs,
+  databaseCpu,
+  databaseCpuSince,
+  loadPosts,
+  serve,
+  postmasterOn,
+  timedPost,
+  type PostTarget,
+} from './readings-load';
 
 const arg = (name: string, fallback: number) =>
   Number(process.argv.find((a) => a.startsWith(`--${name}=`))?.split('=')[1] ?? fallback);
@@ -69,7 +80,8 @@ const profileFile = path.join(
   path.dirname(process.env.BENCH_JSON ?? '.'),
   'reading-post.cpuprofile',
 );
-const profile = process.argv.includes('--cpu-prof')
+const CPU_PROF = process.argv.includes('--cpu-prof');
+const profile = CPU_PROF
   ? await profiled(profileFile, () => profilePosts(50))
   : await profilePosts(50);
 console.log(
@@ -98,7 +110,10 @@ const childEnv = {
   APP_URL: `http://127.0.0.1:${APP_PORT}`,
   VALIDATE_RESPONSES: '0',
 };
-const api = await serve('server/index.ts', [], childEnv, APP_PORT, '/api/v1/health');
+// --cpu-prof: the API process profiles itself too (written when it exits, summarised below)
+const profileDir = path.dirname(profileFile);
+const apiNodeArgs = CPU_PROF ? ['--cpu-prof', `--cpu-prof-dir=${profileDir}`] : [];
+const api = await serve('server/index.ts', [], childEnv, APP_PORT, '/api/v1/health', apiNodeArgs);
 const bare = await serve(
   'scripts/bench/readings-bare.ts',
   [String(BARE_PORT)],
@@ -170,12 +185,21 @@ try {
   });
 
   // 3. Load: the API, then the bare handler, each for SECONDS; CPU read from /proc around each.
+  // the database's CPU is read only when its server runs here (not BENCH_DATABASE_URL elsewhere)
+  const postmaster = postmasterOn(Number(new URL(databaseUrl).port));
+  const dbCpu = () => (postmaster ? databaseCpu(postmaster) : new Map<number, number>());
+  const dbCpuSince = (before: Map<number, number>) =>
+    postmaster ? databaseCpuSince(postmaster, before) : Number.NaN;
   const apiCpu0 = cpuMs(api.child.pid!);
+  const apiDb0 = dbCpu();
   const apiLoad = await loadPosts(apiTarget, rotation, CONNECTIONS, SECONDS);
   const apiCpu = cpuMs(api.child.pid!) - apiCpu0;
+  const apiDb = dbCpuSince(apiDb0);
   const bareCpu0 = cpuMs(bare.child.pid!);
+  const bareDb0 = dbCpu();
   const bareLoad = await loadPosts(bareTarget, rotation, CONNECTIONS, SECONDS);
   const bareCpu = cpuMs(bare.child.pid!) - bareCpu0;
+  const bareDb = dbCpuSince(bareDb0);
   for (const [who, l] of [
     ['API', apiLoad],
     ['bare handler', bareLoad],
@@ -199,7 +223,21 @@ try {
     unit: 'ms',
     baseline: { what: 'bare handler process', value: bareCpu / bareLoad.total },
   });
+  report({
+    name: 'database CPU per reading post under load',
+    value: apiDb / apiLoad.total,
+    unit: 'ms',
+    baseline: { what: 'the same for the bare handler', value: bareDb / bareLoad.total },
+  });
 } finally {
   await Promise.all([api.stop(), bare.stop()]);
   await sequelize.close();
+}
+if (CPU_PROF) {
+  // node names it CPU.<date>.<time>.<pid>.<thread>.<n>.cpuprofile; thread 0 is the main one
+  const mine = readdirSync(profileDir).filter((f) => f.includes(`.${api.child.pid}.0.`));
+  for (const f of mine) {
+    console.log(`API process (posts, then load): ${path.join(profileDir, f)}`);
+    printProfileFile(path.join(profileDir, f), 25);
+  }
 }

@@ -1,6 +1,6 @@
 import { Op, QueryTypes, type InferCreationAttributes, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
-import { Machine, MachineForecast, Organization, ServiceTask, TaskDuePoint } from '../models';
+import { Machine, MachineForecast, Organization, type MeterReading, TaskDuePoint } from '../models';
 import {
   computeDuePoint,
   estimateUsage,
@@ -10,12 +10,13 @@ import {
   type DuePoint,
   type UsageEstimate,
 } from '../../shared/domain';
+import { dueTasksOf, writeForecasts, type DueTask } from './forecast-rows';
+import type { ReadingRow } from './reading-rows';
 import {
   emptySummary,
   pickSummaryColumns,
   summaryColumns,
   summaryOf,
-  SUMMARY_COLUMNS,
   type ReadingSummary,
   type SummaryColumns,
 } from './daily-summary';
@@ -60,7 +61,7 @@ export async function refreshMachineForecast(
  */
 export function duePointsFor(
   forecast: Pick<MachineForecast, 'daily' | 'lastValue' | 'firstTakenAt' | 'firstValue'> | null,
-  tasks: ServiceTask[],
+  tasks: DueTask[],
   timeZone: string,
   asOfIso: string,
   now: Date,
@@ -110,6 +111,8 @@ interface StoreOptions {
   now?: Date;
   /** the machines already loaded (their season months), to spare reading them again */
   machines?: Pick<Machine, 'id' | 'seasonMonths'>[];
+  /** their tasks' due fields, already read (reading-neighbours.ts writeContext) */
+  tasks?: Map<string, DueTask[]>;
 }
 
 /**
@@ -125,24 +128,25 @@ export async function recomputeDuePoints(
 }
 
 /**
- * Stores new summaries of machines with their usage estimates and due points: one upsert of
- * machine_forecasts (summary and usage together) and one of task_due_points for all of them.
+ * Stores new summaries of machines with their usage estimates and due points — and the new
+ * readings they summarise, when given — in one statement (forecast-rows.ts writeForecasts).
+ * Returns the stored readings.
  */
 export async function storeForecasts(
   organizationId: string,
   summaries: Map<string, ReadingSummary>,
-  options: StoreOptions = {},
-): Promise<void> {
-  if (summaries.size)
-    await computeAndStore(organizationId, [...summaries.keys()], summaries, options);
+  options: StoreOptions & { readings?: ReadingRow[] } = {},
+): Promise<MeterReading[]> {
+  if (!summaries.size) return [];
+  return computeAndStore(organizationId, [...summaries.keys()], summaries, options);
 }
 
 async function computeAndStore(
   organizationId: string,
   machineIds: string[] | undefined,
   summaries: Map<string, ReadingSummary> | null,
-  options: StoreOptions,
-): Promise<void> {
+  options: StoreOptions & { readings?: ReadingRow[] },
+): Promise<MeterReading[]> {
   const { transaction } = options;
   const now = options.now ?? new Date();
   const timeZone =
@@ -158,7 +162,7 @@ async function computeAndStore(
       attributes: ['id', 'seasonMonths'],
       transaction,
     }));
-  if (!machines.length) return;
+  if (!machines.length) return [];
   const ids = machines.map((m) => m.id);
   const seasonOf = new Map(machines.map((m) => [m.id, m.seasonMonths]));
   const [forecasts, tasks] = await Promise.all([
@@ -168,14 +172,14 @@ async function computeAndStore(
           where: { organizationId, machineId: { [Op.in]: ids } },
           transaction,
         }),
-    ServiceTask.findAll({ where: { organizationId, machineId: { [Op.in]: ids } }, transaction }),
+    options.tasks ? [] : dueTasksOf(organizationId, ids, transaction),
   ]);
   const summaryOfMachine = new Map<string, SummaryColumns>(
     summaries
       ? [...summaries].map(([id, s]) => [id, summaryColumns(s)])
       : forecasts.map((f) => [f.machineId, pickSummaryColumns(f)]),
   );
-  const tasksOf = new Map<string, ServiceTask[]>();
+  const tasksOf = options.tasks ?? new Map<string, DueTask[]>();
   for (const t of tasks) tasksOf.set(t.machineId, [...(tasksOf.get(t.machineId) ?? []), t]);
 
   const dueRows: InferCreationAttributes<TaskDuePoint>[] = [];
@@ -211,18 +215,10 @@ async function computeAndStore(
       });
     }
   }
-  // Without new summaries only the usage is written, so a stored summary changed meanwhile by a
-  // reading write (which holds the machine's lock; this may not) is never overwritten.
-  await MachineForecast.bulkCreate(forecastRows, {
-    updateOnDuplicate: [...(summaries ? SUMMARY_COLUMNS : []), 'usage', 'computedOn', 'updatedAt'],
-    transaction,
-  });
-  if (dueRows.length) {
-    await TaskDuePoint.bulkCreate(dueRows, {
-      updateOnDuplicate: ['status', 'sortDate', 'due', 'computedOn', 'updatedAt'],
-      transaction,
-    });
-  }
+  return writeForecasts(
+    { forecasts: forecastRows, duePoints: dueRows, readings: options.readings },
+    { summary: summaries !== null, transaction },
+  );
 }
 
 /**

@@ -1,13 +1,14 @@
 // What every reading rule is checked against, read in one statement: a machine's meter
-// replacements, the readings either side of a time window and its stored summary; and the row
-// lock that serialises a machine's writers.
-import { QueryTypes, type Transaction } from 'sequelize';
+// replacements, the readings either side of a time window, its stored summary and its tasks'
+// due fields; and the row lock that serialises a machine's writers.
+import type { Transaction } from 'sequelize';
 import { format } from 'date-fns';
 import { TZDate } from '@date-fns/tz';
-import { sequelize } from '../db';
+import { directQuery } from '../db-direct';
 import type { Machine } from '../models';
 import type { MeterReplacementPoint, ReadingPoint } from '../../shared/domain';
 import { summaryFromColumns } from './daily-summary';
+import { DUE_TASK_COLUMNS, type DueTask } from './forecast-rows';
 
 export interface Neighbour {
   id: string;
@@ -20,13 +21,13 @@ export interface Neighbour {
 export const timeFormatter = (timeZone: string) => (ms: number) =>
   `${format(new TZDate(ms, timeZone), 'yyyy-MM-dd HH:mm')} (${timeZone})`;
 
-// Existing readings of a machine from the one before :from to the one after :to.
+// Existing readings of machine $2 (of organization $1) from the one before $3 to the one after $4.
 const AROUND_SQL = `SELECT id, value, lifetime_value, taken_at FROM meter_readings
-     WHERE organization_id = :org AND machine_id = :machine
+     WHERE organization_id = $1 AND machine_id = $2
        AND taken_at >= coalesce((SELECT max(taken_at) FROM meter_readings
-                                 WHERE organization_id = :org AND machine_id = :machine AND taken_at < :from), '-infinity')
+                                 WHERE organization_id = $1 AND machine_id = $2 AND taken_at < $3), '-infinity')
        AND taken_at <= coalesce((SELECT min(taken_at) FROM meter_readings
-                                 WHERE organization_id = :org AND machine_id = :machine AND taken_at > :to), 'infinity')`;
+                                 WHERE organization_id = $1 AND machine_id = $2 AND taken_at > $4), 'infinity')`;
 
 interface NeighbourRow {
   id: string;
@@ -45,6 +46,7 @@ const toNeighbour = (r: NeighbourRow): Neighbour => ({
 interface ContextRow {
   replacements: { replacedAt: string; oldFinalValue: number; newStartValue: number }[];
   neighbours: NeighbourRow[];
+  tasks: DueTask[];
   has_summary: boolean;
   daily: ReadingPoint[] | null;
   reading_count: number | null;
@@ -58,7 +60,8 @@ interface ContextRow {
 /**
  * What a batch of new readings of one machine is checked and summarised against, read in one
  * statement after the machine's lock is held (so nothing in it is stale): the meter replacements,
- * the existing readings around the batch's times, and the stored summary (null if none yet).
+ * the existing readings around the batch's times, the stored summary (null if none yet) and the
+ * due fields of the machine's tasks.
  */
 export async function writeContext(
   machine: Machine,
@@ -66,27 +69,23 @@ export async function writeContext(
   toMs: number,
   transaction: Transaction,
 ) {
-  const [row] = await sequelize.query<ContextRow>(
-    `SELECT f.machine_id IS NOT NULL AS has_summary, f.daily, f.reading_count, f.last_value,
-            f.last_raw_value, f.last_taken_at, f.first_taken_at, f.first_value,
+  const [row] = await directQuery<ContextRow>(
+    transaction,
+    // numeric columns as float8, so they arrive as numbers
+    `SELECT f.machine_id IS NOT NULL AS has_summary, f.daily, f.reading_count,
+            f.last_value::float8 AS last_value, f.last_raw_value::float8 AS last_raw_value,
+            f.last_taken_at, f.first_taken_at, f.first_value::float8 AS first_value,
             (SELECT coalesce(json_agg(json_build_object('replacedAt', r.replaced_at,
                       'oldFinalValue', r.old_final_value, 'newStartValue', r.new_start_value)), '[]')
              FROM meter_replacements r
-             WHERE r.organization_id = :org AND r.machine_id = :machine) AS replacements,
+             WHERE r.organization_id = $1 AND r.machine_id = $2) AS replacements,
             (SELECT coalesce(json_agg(n ORDER BY n.taken_at, n.lifetime_value), '[]')
-             FROM (${AROUND_SQL}) n) AS neighbours
+             FROM (${AROUND_SQL}) n) AS neighbours,
+            (SELECT coalesce(json_agg(t), '[]') FROM (SELECT ${DUE_TASK_COLUMNS} FROM service_tasks
+               WHERE organization_id = $1 AND machine_id = $2 ORDER BY position) t) AS tasks
      FROM machines m LEFT JOIN machine_forecasts f ON f.machine_id = m.id
-     WHERE m.id = :machine`,
-    {
-      replacements: {
-        org: machine.organizationId,
-        machine: machine.id,
-        from: new Date(fromMs),
-        to: new Date(toMs),
-      },
-      type: QueryTypes.SELECT,
-      transaction,
-    },
+     WHERE m.id = $2`,
+    [machine.organizationId, machine.id, new Date(fromMs), new Date(toMs)],
   );
   const replacements: MeterReplacementPoint[] = row.replacements.map((r) => ({
     replacedAtMs: Date.parse(r.replacedAt),
@@ -99,12 +98,12 @@ export async function writeContext(
         readingCount: row.reading_count ?? 0,
         lastValue: row.last_value,
         lastRawValue: row.last_raw_value,
-        lastTakenAt: row.last_taken_at,
-        firstTakenAt: row.first_taken_at,
+        lastTakenAt: row.last_taken_at && new Date(row.last_taken_at),
+        firstTakenAt: row.first_taken_at && new Date(row.first_taken_at),
         firstValue: row.first_value,
       })
     : null;
-  return { replacements, neighbours: row.neighbours.map(toNeighbour), summary };
+  return { replacements, neighbours: row.neighbours.map(toNeighbour), summary, tasks: row.tasks };
 }
 
 /**
@@ -112,8 +111,5 @@ export async function writeContext(
  * so two people editing at once cannot each pass the neighbour checks against a stale neighbour.
  */
 export async function lockMachineReadings(machineId: string, transaction: Transaction) {
-  await sequelize.query('SELECT id FROM machines WHERE id = :id FOR UPDATE', {
-    replacements: { id: machineId },
-    transaction,
-  });
+  await directQuery(transaction, 'SELECT id FROM machines WHERE id = $1 FOR UPDATE', [machineId]);
 }

@@ -4,10 +4,8 @@ import { MeterReading, type Machine } from '../models';
 import { checkReading, toLifetimeValue } from '../../shared/domain';
 import type { ReadingSource } from '../../shared/constants';
 import type { OrgAccess } from '../policies/context';
-import { refreshMachineForecast, storeForecasts } from './forecast';
-import type { ReadingSummary } from './daily-summary';
 import { lockMachineReadings, timeFormatter, writeContext } from './reading-neighbours';
-import { summaryWithNewReadings } from './reading-summary';
+import { storeNewReadings, type MachineContext } from './reading-store';
 
 export interface NewReading {
   machine: Machine;
@@ -39,23 +37,9 @@ export async function writeReadings(
   const plan = await planReadings(access, items, transaction, options);
   const { outcomes, errors, toInsert } = plan;
   if (Object.keys(errors).length) throw invalid(errors);
-  const rows = await insertReadings(access, toInsert, transaction);
-  toInsert.forEach(({ index }, i) => outcomes.push({ index, status: 'added', reading: rows[i] }));
-  await refreshSummaries(access, plan.summaries, rows, transaction);
-  return outcomes.sort((a, b) => a.index - b.index);
-}
-
-// Rows per INSERT statement: large batches (an import) go in a few statements, not one per row.
-const INSERT_CHUNK = 1000;
-
-async function insertReadings(
-  access: OrgAccess,
-  toInsert: { item: NewReading; lifetime: number }[],
-  transaction: Transaction,
-): Promise<MeterReading[]> {
-  const rows: MeterReading[] = [];
-  for (let i = 0; i < toInsert.length; i += INSERT_CHUNK) {
-    const chunk = toInsert.slice(i, i + INSERT_CHUNK).map(({ item, lifetime }) => ({
+  const rows = await storeNewReadings(
+    access,
+    toInsert.map(({ item, lifetime }) => ({
       organizationId: access.organization.id,
       machineId: item.machine.id,
       value: item.value,
@@ -64,39 +48,12 @@ async function insertReadings(
       source: item.source,
       enteredBy: access.userId,
       importKey: item.importKey ?? null,
-    }));
-    // RETURNING gives the stored values (numeric(14,2)), which the summary must agree with.
-    rows.push(...(await MeterReading.bulkCreate(chunk, { transaction, returning: true })));
-  }
-  return rows;
-}
-
-/** Brings each machine's stored summary, usage and due points up to date with its new rows. */
-async function refreshSummaries(
-  access: OrgAccess,
-  stored: Map<string, { machine: Machine; summary: ReadingSummary | null }>,
-  rows: MeterReading[],
-  transaction: Transaction,
-) {
-  const { timeZone } = access.organization;
-  const added = new Map<string, MeterReading[]>();
-  for (const r of rows) added.set(r.machineId, [...(added.get(r.machineId) ?? []), r]);
-  const summaries = new Map<string, ReadingSummary>();
-  const machines: Machine[] = [];
-  for (const [machineId, readings] of added) {
-    const { machine, summary } = stored.get(machineId)!;
-    if (!summary) {
-      // no summary row yet (a machine stored before summaries were kept): build it in full
-      await refreshMachineForecast(machineId, access.organization.id, transaction, { timeZone });
-      continue;
-    }
-    machines.push(machine);
-    summaries.set(
-      machineId,
-      await summaryWithNewReadings(machine, summary, readings, timeZone, transaction),
-    );
-  }
-  await storeForecasts(access.organization.id, summaries, { transaction, timeZone, machines });
+    })),
+    plan.contexts,
+    transaction,
+  );
+  toInsert.forEach(({ index }, i) => outcomes.push({ index, status: 'added', reading: rows[i] }));
+  return outcomes.sort((a, b) => a.index - b.index);
 }
 
 /**
@@ -127,7 +84,8 @@ interface PlanOptions {
 /**
  * Checks readings against the rules and their neighbours without writing: what would be added,
  * what is an identical repeat, and every broken rule keyed by `prefix.index.field`. Each machine
- * is locked first; its stored summary comes back in `summaries` for the write to update.
+ * is locked first; what was read under the lock (stored summary, tasks) comes back in `contexts`
+ * for the write.
  */
 export async function planReadings(
   access: OrgAccess,
@@ -148,7 +106,7 @@ export async function planReadings(
   }
 
   const toInsert: { item: NewReading; index: number; lifetime: number }[] = [];
-  const summaries = new Map<string, { machine: Machine; summary: ReadingSummary | null }>();
+  const contexts = new Map<string, MachineContext>();
   for (const group of byMachine.values()) {
     const machine = group[0].item.machine;
     await lockMachineReadings(machine.id, transaction);
@@ -160,7 +118,7 @@ export async function planReadings(
       transaction,
     );
     const { replacements } = context;
-    summaries.set(machine.id, { machine, summary: context.summary });
+    contexts.set(machine.id, { machine, summary: context.summary, tasks: context.tasks });
     const existing: Point[] = context.neighbours.map((r) => ({
       lifetime: r.lifetimeValue,
       takenAtMs: r.takenAtMs,
@@ -175,7 +133,7 @@ export async function planReadings(
     for (const { item, index } of sorted) {
       const takenAtMs = item.takenAt.getTime();
       const value = asStoredValue(item.value);
-      const lifetime = toLifetimeValue(value, takenAtMs, replacements);
+      const lifetime = asStoredValue(toLifetimeValue(value, takenAtMs, replacements));
       if (seen.has(`${takenAtMs}:${value}`)) {
         outcomes.push({ index, status: 'duplicate', reading: null });
         continue;
@@ -207,7 +165,7 @@ export async function planReadings(
       toInsert.push({ item: { ...item, value }, index, lifetime });
     }
   }
-  return { outcomes, errors, toInsert, summaries };
+  return { outcomes, errors, toInsert, contexts };
 }
 
 /**

@@ -4,7 +4,8 @@
 // random histories: inserts out of order, several on one local day, around the daylight-saving
 // changes of America/Chicago (the repeated hour included), batches, identical repeats,
 // corrections, deletions and meter replacements (reading-summary-ops.ts). A refused step
-// (422) must leave the readings exactly as they were. Seeded, so a failure replays.
+// (422) must leave the readings exactly as they were; the stored usage and due point must be what
+// the due math gives on the recomputed summary. Seeded, so a failure replays.
 import { beforeAll, describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { resetDatabase } from '../support/db';
@@ -12,11 +13,18 @@ import { createMachine, createMember, createOrganization } from '../support/fact
 import {
   MachineForecast,
   MeterReading,
+  ServiceTask,
+  TaskDuePoint,
   type Machine,
   type Organization,
 } from '../../server/models';
 import type { OrgAccess } from '../../server/policies/context';
-import { refreshMachineForecast, summariseReadings } from '../../server/services/forecast';
+import {
+  duePointsFor,
+  refreshMachineForecast,
+  summariseReadings,
+} from '../../server/services/forecast';
+import { dueTasksOf } from '../../server/services/forecast-rows';
 import { applyStep, step } from './reading-summary-ops';
 
 const TIME_ZONE = 'America/Chicago';
@@ -69,6 +77,23 @@ async function stored(machine: Machine) {
   };
 }
 
+/** The stored usage and due point equal the due math on the recomputed summary, as of their write. */
+async function expectDueFromRecomputed(machine: Machine, task: ServiceTask, label: string) {
+  const stored = await TaskDuePoint.findByPk(task.id);
+  if (!stored) return;
+  const forecast = (await MachineForecast.findByPk(machine.id))!;
+  const tasks = await dueTasksOf(org.id, [machine.id]);
+  const { usage, points } = duePointsFor(
+    await recomputed(machine),
+    tasks,
+    TIME_ZONE,
+    stored.computedOn,
+    stored.updatedAt,
+  );
+  expect(forecast.usage, `usage ${label}`).toEqual(usage);
+  expect(stored.due, `due point ${label}`).toEqual(points.get(task.id));
+}
+
 const snapshot = async (machine: Machine) =>
   (await allReadings(machine)).map((r) => [r.id, r.value, r.lifetimeValue, r.takenAt.getTime()]);
 
@@ -81,6 +106,20 @@ describe('reading summary — incremental against a full recomputation', () => {
         fc.boolean(),
         async (steps, summarisedAtStart) => {
           const machine = await createMachine(org);
+          // written directly, so the machine stays without a summary row until the first write
+          const task = await ServiceTask.create({
+            organizationId: org.id,
+            machineId: machine.id,
+            name: 'Engine oil and filter',
+            intervalMeter: 250,
+            intervalDays: 365,
+            firstServiceMeter: null,
+            warnMeter: 25,
+            warnDays: 30,
+            labourHours: 1,
+            lastDoneMeter: 100,
+            lastDoneOn: '2023-01-15',
+          });
           // a machine from before summaries were kept has no row; the first write builds it
           if (summarisedAtStart) await refreshMachineForecast(machine.id, org.id);
           for (const [i, s] of steps.entries()) {
@@ -94,6 +133,7 @@ describe('reading summary — incremental against a full recomputation', () => {
             // no row yet: nothing was ever written
             if (!summary) expect(before.length + (await snapshot(machine)).length).toBe(0);
             else expect(summary, `after step ${i} (${s.kind})`).toEqual(await recomputed(machine));
+            await expectDueFromRecomputed(machine, task, `after step ${i} (${s.kind})`);
           }
         },
       ),
