@@ -1,6 +1,6 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
-import { invalid, notFound } from '../errors';
+import { invalid } from '../errors';
 import { Machine, MachineForecast, MachineOperator, Membership } from '../models';
 import type {
   MachineCreateInput,
@@ -28,31 +28,7 @@ export async function operatorIdsOf(
   return map;
 }
 
-/** The machine if it belongs to the caller's organization and the caller may see it; else 404. */
-export async function loadMachine(access: OrgAccess, machineId: string, transaction?: Transaction) {
-  // one query: the machine with its assigned operators (every request naming a machine asks)
-  const machine = await Machine.findOne({
-    where: { id: machineId, organizationId: access.organization.id },
-    attributes: {
-      include: [
-        [
-          sequelize.literal(
-            `(SELECT coalesce(array_agg(o.user_id::text), '{}') FROM machine_operators o
-              WHERE o.machine_id = "Machine"."id" AND o.organization_id = "Machine"."organization_id")`,
-          ),
-          'operatorIds',
-        ],
-      ],
-    },
-    transaction,
-  });
-  if (!machine) throw notFound('Machine');
-  const operators = (machine.get('operatorIds' as keyof Machine) as string[] | null) ?? [];
-  // not a column: kept off the instance so saving or serialising it never meets it
-  delete (machine.dataValues as Record<string, unknown>).operatorIds;
-  if (!canViewMachine(access, machine, operators)) throw notFound('Machine');
-  return { machine, operatorIds: operators };
-}
+export { loadMachine } from './machine-load';
 
 /** The machines among `ids` that the caller may see, by id, in two queries (no per-row lookups). */
 export async function loadVisibleMachines(

@@ -5,8 +5,14 @@ import { invalid } from '../errors';
 import { MeterReading, MeterReplacement, type Machine } from '../models';
 import type { OrgAccess } from '../policies/context';
 import type { BulkReadingsInput, ReadingCreateInput } from '../../shared/schemas/readings';
-import { canLogReading, readingsClosedMessage, takesReadings } from '../policies/machine';
-import { listMachines, loadVisibleMachines } from './machines';
+import { authorize } from '../policies/access';
+import {
+  canLogReading,
+  logReadingRefusal,
+  readingsClosedMessage,
+  takesReadings,
+} from '../policies/machine';
+import { listMachines, loadMachine, loadVisibleMachines } from './machines';
 import { writeReadings, type NewReading } from './readings';
 
 /** A machine's readings (newest first, at most `limit`) and all its meter replacements. */
@@ -28,10 +34,16 @@ export async function readingHistory(access: OrgAccess, machine: Machine, limit:
   return { readings, replacements };
 }
 
-/** Logs one manual reading (now unless `takenAt` is given); an identical repeat is ignored. */
-export async function logReading(access: OrgAccess, machine: Machine, input: ReadingCreateInput) {
-  const [outcome] = await sequelize.transaction((transaction) =>
-    writeReadings(
+/**
+ * Logs one manual reading (now unless `takenAt` is given); an identical repeat is ignored. The
+ * machine is loaded, visibility-checked and locked in one statement inside the write's
+ * transaction, then the caller's right to log on it is checked (403 as before).
+ */
+export async function logReading(access: OrgAccess, machineId: string, input: ReadingCreateInput) {
+  const [outcome] = await sequelize.transaction(async (transaction) => {
+    const { machine } = await loadMachine(access, machineId, transaction, { lock: true });
+    authorize(canLogReading(access, machine), logReadingRefusal(machine));
+    return writeReadings(
       access,
       [
         {
@@ -42,8 +54,9 @@ export async function logReading(access: OrgAccess, machine: Machine, input: Rea
         },
       ],
       transaction,
-    ),
-  );
+      { locked: true },
+    );
+  });
   return outcome;
 }
 

@@ -79,6 +79,8 @@ const pointOrder = (a: Point, b: Point) => a.takenAtMs - b.takenAtMs || a.lifeti
 interface PlanOptions {
   fieldPrefix?: (index: number) => string;
   now?: Date;
+  /** the caller holds every machine's row lock already (loadMachine with `lock`) */
+  locked?: boolean;
 }
 
 /**
@@ -109,7 +111,7 @@ export async function planReadings(
   const contexts = new Map<string, MachineContext>();
   for (const group of byMachine.values()) {
     const machine = group[0].item.machine;
-    await lockMachineReadings(machine.id, transaction);
+    if (!options.locked) await lockMachineReadings(machine.id, transaction);
     const sorted = [...group].sort((a, b) => a.item.takenAt.getTime() - b.item.takenAt.getTime());
     const context = await writeContext(
       machine,

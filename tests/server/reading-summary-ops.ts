@@ -225,7 +225,7 @@ export async function applyStep(
         const lifetime = s.bad
           ? (readings.filter((r) => r.at <= at).at(-1)?.lifetime ?? 0) - 7
           : validLifetime(readings, at, s.frac, s.decimals);
-        await logReading(access, machine, {
+        await logReading(access, machine.id, {
           value: raw(lifetime, at),
           takenAt: new Date(at).toISOString(),
         });
@@ -248,7 +248,7 @@ export async function applyStep(
       case 'repeat': {
         if (!readings.length) return 'done';
         const r = pickOf(readings, s.pick);
-        await logReading(access, machine, {
+        await logReading(access, machine.id, {
           value: raw(r.lifetime, r.at),
           takenAt: new Date(r.at).toISOString(),
         });

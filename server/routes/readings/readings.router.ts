@@ -16,13 +16,7 @@ import {
   readingUpdateSchema,
 } from '../../../shared/schemas/readings';
 import { authorize } from '../../policies/access';
-import {
-  canCorrectReading,
-  canImportReadings,
-  canLogReading,
-  canReplaceMeter,
-  logReadingRefusal,
-} from '../../policies/machine';
+import { canCorrectReading, canImportReadings, canReplaceMeter } from '../../policies/machine';
 import { presentLastReading } from '../../presenters/machine';
 import { presentReading, presentReplacement } from '../../presenters/reading';
 import { loadMachine } from '../../services/machines';
@@ -85,10 +79,8 @@ export function readingsRouter(): Router {
     status: 201,
     response: readingLoggedResponseSchema,
     handler: async ({ req, params, body }) => {
-      const access = req.access!;
-      const { machine } = await loadMachine(access, params.machineId);
-      authorize(canLogReading(access, machine), logReadingRefusal(machine));
-      const outcome = await logReading(access, machine, body);
+      // loads, checks and locks the machine inside the write (one statement for the three)
+      const outcome = await logReading(req.access!, params.machineId, body);
       return {
         data: outcome.reading ? presentReading(outcome.reading) : null,
         status: outcome.status,
