@@ -17,6 +17,7 @@ import {
   copyText,
   importFile,
 } from './import-data';
+import { signIn } from './scale-timing';
 
 const arg = (name: string, fallback: number) =>
   Number(process.argv.find((a) => a.startsWith(`--${name}=`))?.split('=')[1] ?? fallback);
@@ -95,13 +96,7 @@ const api = await serve(
   '/api/v1/health',
 );
 try {
-  const signIn = await fetch(`${api.origin}/api/v1/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ email: IMPORT_EMAIL, password: IMPORT_PASSWORD }),
-  });
-  const cookie = (signIn.headers.get('set-cookie') ?? '').split(';')[0];
-  if (!signIn.ok || !cookie) throw new Error(`sign-in answered ${signIn.status}`);
+  const cookie = await signIn(api.origin, IMPORT_EMAIL, IMPORT_PASSWORD);
   const post = async (step: 'preview' | 'commit', csv: string) => {
     const form = new FormData();
     form.append('file', new Blob([csv], { type: 'text/csv' }), 'readings.csv');

@@ -28,6 +28,7 @@ import {
   timedPost,
   type PostTarget,
 } from './readings-load';
+import { signIn } from './scale-timing';
 
 const arg = (name: string, fallback: number) =>
   Number(process.argv.find((a) => a.startsWith(`--${name}=`))?.split('=')[1] ?? fallback);
@@ -122,13 +123,7 @@ const bare = await serve(
   '/health',
 );
 try {
-  const signIn = await fetch(`${api.origin}/api/v1/auth/sign-in`, {
-    method: 'POST',
-    headers: { 'content-type': 'application/json' },
-    body: JSON.stringify({ email: BENCH_EMAIL, password: BENCH_PASSWORD }),
-  });
-  const cookie = (signIn.headers.get('set-cookie') ?? '').split(';')[0];
-  if (!signIn.ok || !cookie) throw new Error(`sign-in answered ${signIn.status}`);
+  const cookie = await signIn(api.origin, BENCH_EMAIL, BENCH_PASSWORD);
   const apiTarget: PostTarget = {
     origin: api.origin,
     path: (id) => `/api/v1/organizations/${farm.orgId}/machines/${id}/readings`,

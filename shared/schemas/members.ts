@@ -39,3 +39,29 @@ export const invitationListResponseSchema = z.object({ data: z.array(invitationS
 export type InvitationListResponse = z.infer<typeof invitationListResponseSchema>;
 export const invitationResponseSchema = z.object({ data: invitationSchema });
 export type InvitationResponse = z.infer<typeof invitationResponseSchema>;
+
+// Views of the member list the client builds for its forms (no endpoint answers them as such):
+// derived from memberSchema so they cannot drift from it.
+const memberUser = memberSchema.shape.user;
+
+/** An operator of the farm, for assigning machines. */
+export const operatorChoiceSchema = z.object({
+  userId: memberUser.shape.id,
+  name: memberUser.shape.name,
+});
+export type Operator = z.infer<typeof operatorChoiceSchema>;
+
+/** A member who may be named on a service record: the farm's technicians and managers. */
+export const shopPersonSchema = operatorChoiceSchema.extend({
+  role: z.enum(['manager', 'technician']),
+});
+export type ShopPerson = z.infer<typeof shopPersonSchema>;
+
+/** The farm's people by name, for "ask …" lines on an operator's screens. */
+export const farmContactsSchema = z.object({
+  /** who assigns machines to operators */
+  managers: z.array(memberUser.shape.name),
+  /** who may clear a tag-out: the farm's technicians and managers */
+  shop: z.array(memberUser.shape.name),
+});
+export type FarmContacts = z.infer<typeof farmContactsSchema>;

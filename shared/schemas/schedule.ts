@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { MACHINE_CATEGORIES } from '../constants';
+import { DUE_STATUSES, MACHINE_CATEGORIES } from '../constants';
 import { boundedNumber, isoDate, PAST_DATES, plainText } from './common';
 import { duePointSchema } from './due';
 import {
@@ -217,6 +217,12 @@ export const taskSchema = z
   })
   .meta({ id: 'ServiceTask' });
 export type Task = z.infer<typeof taskSchema>;
+
+/** A task as the service form offers it: a few fields of the list and its due status now. */
+export const taskChoiceSchema = taskSchema
+  .pick({ id: true, name: true, hazards: true, safetyNotes: true, labourHours: true })
+  .extend({ dueStatus: z.enum(DUE_STATUSES).nullable() });
+export type TaskChoice = z.infer<typeof taskChoiceSchema>;
 
 export const scheduleAbilitiesSchema = z.object({ edit: z.boolean(), setLastDone: z.boolean() });
 

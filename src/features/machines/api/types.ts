@@ -1,5 +1,4 @@
 import { MACHINE_SORTS, type MachineListQuery } from '../../../../shared/schemas/machines';
-import type { Member } from '../../../../shared/schemas/members';
 import type { ListFilters } from '../../../lib/list-filters';
 
 // The JSON of the machine endpoints is typed by the zod schemas the server checks its answers
@@ -29,6 +28,4 @@ export type MachineSortField = (typeof MACHINE_SORT_FIELDS)[number];
 
 export type MachineFilters = Pick<MachineListQuery, 'category' | 'status' | 'dueStatus' | 'q'> &
   Pick<ListFilters<MachineListQuery>, 'sort' | 'order' | 'page' | 'pageSize'>;
-
-/** An operator of the farm, for assigning machines (taken from the member list). */
-export type Operator = { userId: Member['user']['id']; name: Member['user']['name'] };
+export type { Operator } from '../../../../shared/schemas/members';

@@ -1,17 +1,9 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { MemberList } from '../../../../shared/schemas/members';
+import type { FarmContacts, MemberList } from '../../../../shared/schemas/members';
 import { apiClient, segment } from '../../../lib/api-client';
 import { queryKeys } from '../../../lib/query-keys';
 
-type MemberName = MemberList['data'][number]['user']['name'];
-
-/** The farm's people by name, from the member list. */
-export type FarmContacts = {
-  /** who assigns machines to operators */
-  managers: MemberName[];
-  /** who may clear a tag-out: the farm's technicians and managers */
-  shop: MemberName[];
-};
+export type { FarmContacts };
 
 /** The farm's managers and technicians by name, for "ask …" lines on an operator's screens. */
 export const getFarmContacts = (orgId: string, signal?: AbortSignal) =>
