@@ -3,18 +3,26 @@
 // top level (icons, the manifest) are revalidated on every visit so a deploy is picked up at once.
 import path from 'node:path';
 import express, { type Express } from 'express';
+import expressStaticGzip from 'express-static-gzip';
 
 /** One year, the longest lifetime caches honour; `immutable` skips revalidation on reload. */
 const HASHED_ASSET_CACHE = 'public, max-age=31536000, immutable';
 const REVALIDATE = 'no-cache';
 
 export function serveClient(app: Express, dist: string) {
+  // The build's own .br/.gz copies (vite-plugin-compression2) are sent when the browser takes them;
+  // a file without one is compressed on the fly by the compression middleware.
   app.use(
     '/assets',
-    express.static(path.join(dist, 'assets'), {
+    expressStaticGzip(path.join(dist, 'assets'), {
+      enableBrotli: true,
+      orderPreference: ['br', 'gzip'],
       index: false,
-      fallthrough: false,
-      setHeaders: (res) => res.setHeader('Cache-Control', HASHED_ASSET_CACHE),
+      serveStatic: {
+        index: false,
+        fallthrough: false,
+        setHeaders: (res) => res.setHeader('Cache-Control', HASHED_ASSET_CACHE),
+      },
     }),
   );
   app.use(

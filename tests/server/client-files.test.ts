@@ -3,7 +3,13 @@ import { tmpdir } from 'node:os';
 import { get, type IncomingHttpHeaders } from 'node:http';
 import type { AddressInfo } from 'node:net';
 import path from 'node:path';
-import { brotliDecompressSync, gunzipSync } from 'node:zlib';
+import {
+  brotliCompressSync,
+  brotliDecompressSync,
+  constants,
+  gzipSync,
+  gunzipSync,
+} from 'node:zlib';
 import { afterAll, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createApp } from '../../server/app';
@@ -14,6 +20,14 @@ const dist = mkdtempSync(path.join(tmpdir(), 'hourstone-dist-'));
 mkdirSync(path.join(dist, 'assets'));
 const script = `export const rows = [${Array.from({ length: 400 }, (_, i) => `"row ${i}"`).join(',')}];\n`;
 writeFileSync(path.join(dist, 'assets', 'index-Ab12Cd34.js'), script);
+// A file the build compressed ahead (vite-plugin-compression2 writes .br and .gz beside it).
+const styles = `.row{color:#123}\n`.repeat(300);
+const stylesBr = brotliCompressSync(styles, {
+  params: { [constants.BROTLI_PARAM_QUALITY]: constants.BROTLI_MAX_QUALITY },
+});
+writeFileSync(path.join(dist, 'assets', 'index-Ef56Gh78.css'), styles);
+writeFileSync(path.join(dist, 'assets', 'index-Ef56Gh78.css.br'), stylesBr);
+writeFileSync(path.join(dist, 'assets', 'index-Ef56Gh78.css.gz'), gzipSync(styles, { level: 9 }));
 writeFileSync(path.join(dist, 'index.html'), '<!doctype html><title>Hourstone</title>');
 writeFileSync(path.join(dist, 'favicon.svg'), '<svg xmlns="http://www.w3.org/2000/svg"/>');
 afterAll(() => rmSync(dist, { recursive: true, force: true }));
@@ -48,6 +62,18 @@ describe('client files', () => {
     expect(res.headers['content-encoding']).toBe('br');
     expect(brotliDecompressSync(res.body).toString('utf8')).toBe(script);
     expect(res.body.length).toBeLessThan(script.length / 2);
+  });
+
+  it("the build's own compressed copy is sent as it is, with the asset's type and caching", async () => {
+    const br = await rawGet('/assets/index-Ef56Gh78.css', 'gzip, deflate, br');
+    expect(br.headers['content-encoding']).toBe('br');
+    expect(br.headers['content-type']).toMatch(/^text\/css/);
+    expect(br.headers['cache-control']).toBe('public, max-age=31536000, immutable');
+    expect(br.headers.vary).toMatch(/Accept-Encoding/i);
+    expect(br.body.equals(stylesBr)).toBe(true);
+    const gz = await rawGet('/assets/index-Ef56Gh78.css', 'gzip');
+    expect(gz.headers['content-encoding']).toBe('gzip');
+    expect(gunzipSync(gz.body).toString('utf8')).toBe(styles);
   });
 
   it('gzip for a client that only takes gzip; none for one that takes neither', async () => {
