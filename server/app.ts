@@ -34,6 +34,7 @@ import { notificationsRouter } from './routes/notifications/notifications.router
 import { calendarRouter } from './routes/calendar/calendar.router';
 import { dealersRouter } from './routes/dealers/dealers.router';
 import { exportRouter } from './routes/export/export.router';
+import { apiKeysRouter } from './routes/api-keys/api-keys.router';
 import './models';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -103,6 +104,7 @@ export function createApp(options: { serveClient?: boolean; clientDist?: string 
   api.use(calendarRouter());
   api.use(dealersRouter());
   api.use(exportRouter());
+  api.use(apiKeysRouter());
   api.use(devRouter());
   api.use(notFoundHandler);
   app.use('/api/v1', api);

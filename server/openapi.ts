@@ -24,6 +24,11 @@ export function buildOpenApiDocument() {
     in: 'cookie',
     name: 'hs_session',
   });
+  registry.registerComponent('securitySchemes', 'apiKey', {
+    type: 'http',
+    scheme: 'bearer',
+    description: 'An organization API key (hs_…), made by a manager; machine-data routes only',
+  });
   for (const config of routes.values()) registry.registerPath(config);
   return new OpenApiGeneratorV31(registry.definitions).generateDocument({
     openapi: '3.1.0',

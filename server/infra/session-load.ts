@@ -18,7 +18,10 @@ function columnsOf(model: ModelStatic<Model>) {
 const COLUMNS = new Map<ModelStatic<Model>, ReturnType<typeof columnsOf>>();
 
 /** A persisted instance of `model` from a to_jsonb() row, as a findOne would have built it. */
-function instanceFrom<M extends Model>(model: ModelStatic<M>, row: Record<string, unknown>): M {
+export function instanceFrom<M extends Model>(
+  model: ModelStatic<M>,
+  row: Record<string, unknown>,
+): M {
   let columns = COLUMNS.get(model);
   if (!columns) COLUMNS.set(model, (columns = columnsOf(model)));
   const values: Record<string, unknown> = {};

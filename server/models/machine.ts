@@ -21,6 +21,8 @@ export class Machine extends Model<InferAttributes<Machine>, InferCreationAttrib
   declare make: CreationOptional<string>;
   declare model: CreationOptional<string>;
   declare serialNumber: CreationOptional<string>;
+  /** the id a telematics feed knows the machine by (migration 0027); unique per organization */
+  declare telematicsId: CreationOptional<string | null>;
   declare year: number | null;
   /** minor units of the organization's currency */
   declare purchasePriceMinor: number | null;
@@ -51,6 +53,7 @@ Machine.init(
     make: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     model: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     serialNumber: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+    telematicsId: { type: DataTypes.TEXT, allowNull: true },
     year: { type: DataTypes.INTEGER, allowNull: true },
     purchasePriceMinor: minorUnitsColumn('purchasePriceMinor'),
     listPriceMinor: minorUnitsColumn('listPriceMinor'),

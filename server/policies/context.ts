@@ -35,3 +35,16 @@ export interface DealerAccessContext {
 }
 
 export type OrgAccess = MemberAccess | DealerAccessContext;
+
+/**
+ * A machine-data request authenticated by an organization API key (middlewares/api-key-auth.ts):
+ * the key's organization and what the key may do, never a person's session.
+ */
+export interface KeyContext {
+  organization: Organization;
+  keyId: string;
+  keyName: string;
+  scopes: readonly string[];
+  /** who made the key: its readings are entered in their name (null once the account is gone) */
+  createdBy: string | null;
+}

@@ -62,6 +62,7 @@ export function presentMachine(
     make: m.make,
     model: m.model,
     serialNumber: m.serialNumber,
+    telematicsId: m.telematicsId ?? null,
     year: m.year,
     purchasePriceMinor: m.purchasePriceMinor,
     listPriceMinor: m.listPriceMinor,

@@ -4,6 +4,8 @@ import type { RouteConfig } from '@asteasolutions/zod-to-openapi';
 import { documentRoute } from '../openapi';
 import { requireAuth } from '../middlewares/auth';
 import { resolveOrgAccess } from '../middlewares/org-access';
+import { perKeyLimit, requireApiKey } from '../middlewares/api-key-auth';
+import type { ApiKeyScope } from '../../shared/schemas/api-keys';
 import { AppError } from '../errors';
 import { fieldErrors } from '../middlewares/validate';
 import {
@@ -31,8 +33,11 @@ interface RouteSpec<
   path: string;
   summary: string;
   tags: string[];
-  /** 'public' (no sign-in), 'user' (signed in), 'org' (signed in + access to :orgId) */
-  access?: 'public' | 'user' | 'org';
+  /**
+   * 'public' (no sign-in), 'user' (signed in), 'org' (signed in + access to :orgId), or
+   * `{ apiKey: scope }`: an organization API key with that scope (no session; rate-limited per key)
+   */
+  access?: 'public' | 'user' | 'org' | { apiKey: ApiKeyScope };
   params?: P;
   query?: Q;
   body?: B;
@@ -47,6 +52,8 @@ interface RouteSpec<
   before?: RequestHandler[];
   /** a body documented but not validated here (multipart uploads, checked by the handler) */
   multipartBody?: ZodType;
+  /** a text/plain body (a log), read as a string and validated by this schema */
+  textBody?: ZodType<string>;
   handler: (ctx: {
     req: Request;
     res: Response;
@@ -113,6 +120,12 @@ export function route<
     },
     400: { description: 'Invalid input', content: { 'application/json': { schema: errorBody } } },
   };
+  if (typeof access === 'object') {
+    responses[429] = {
+      description: 'Too many requests with this key (Retry-After says when to send again)',
+      content: { 'application/json': { schema: errorBody } },
+    };
+  }
   if (access !== 'public') {
     responses[401] = {
       description: 'Not signed in',
@@ -132,7 +145,9 @@ export function route<
     path: openApiPath,
     summary: spec.summary,
     tags: spec.tags,
-    ...(access !== 'public' && { security: [{ sessionCookie: [] }] }),
+    ...(access !== 'public' && {
+      security: [typeof access === 'object' ? { apiKey: [access.apiKey] } : { sessionCookie: [] }],
+    }),
     request: {
       ...(spec.params && { params: spec.params as never }),
       ...(spec.query && { query: spec.query as never }),
@@ -140,18 +155,26 @@ export function route<
       ...(spec.multipartBody && {
         body: { content: { 'multipart/form-data': { schema: spec.multipartBody } } },
       }),
+      ...(spec.textBody && {
+        body: { content: { 'text/plain': { schema: spec.textBody } } },
+      }),
     },
     responses,
   });
 
   const chain: RequestHandler[] = [];
-  if (access !== 'public') chain.push(requireAuth);
+  if (typeof access === 'object') chain.push(requireApiKey(access.apiKey), perKeyLimit);
+  else if (access !== 'public') chain.push(requireAuth);
   if (access === 'org') chain.push(resolveOrgAccess);
   chain.push(...(spec.before ?? []));
   chain.push(async (req, res) => {
     const params = parseOr400(spec.params, req.params, 'path') as z.infer<P>;
     const query = parseOr400(spec.query, req.query, 'query') as z.infer<Q>;
-    const body = parseOr400(spec.body, req.body, 'body') as z.infer<B>;
+    const body = (
+      spec.textBody
+        ? parseOr400(spec.textBody, typeof req.body === 'string' ? req.body : undefined, 'body')
+        : parseOr400(spec.body, req.body, 'body')
+    ) as z.infer<B>;
     const validating = validatingResponses();
     const json = res.json;
     // A handler that writes JSON itself (res.json, res.send of an object) is checked too.

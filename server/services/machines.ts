@@ -171,6 +171,29 @@ async function fleetNumberTaken(
     });
 }
 
+/** A telematics id as stored: empty text means none; taken by another machine is a 422. */
+async function telematicsIdFree(
+  access: OrgAccess,
+  telematicsId: string | null,
+  exceptId: string | null,
+  transaction: Transaction,
+): Promise<string | null> {
+  if (!telematicsId) return null;
+  const found = await Machine.findOne({
+    where: {
+      organizationId: access.organization.id,
+      telematicsId,
+      ...(exceptId && { id: { [Op.ne]: exceptId } }),
+    },
+    transaction,
+  });
+  if (found)
+    throw invalid({
+      telematicsId: `Telematics id ${telematicsId} is mapped to ${found.fleetNumber} ${found.name} already; each feed id names one machine`,
+    });
+  return telematicsId;
+}
+
 async function setOperators(
   access: OrgAccess,
   machineId: string,
@@ -207,8 +230,9 @@ export async function createMachine(
     await fleetNumberTaken(access, input.fleetNumber, null, transaction);
     await checkOperators(access, input.operatorIds, transaction);
     const { operatorIds, ...fields } = input;
+    const telematicsId = await telematicsIdFree(access, fields.telematicsId, null, transaction);
     const machine = await Machine.create(
-      { ...fields, organizationId: access.organization.id, photoKey: null },
+      { ...fields, telematicsId, organizationId: access.organization.id, photoKey: null },
       { transaction },
     );
     await setOperators(access, machine.id, operatorIds, transaction);
@@ -239,6 +263,11 @@ export async function updateMachine(
       await fleetNumberTaken(access, input.fleetNumber, machine.id, transaction);
     if (input.operatorIds !== undefined)
       await checkOperators(access, input.operatorIds, transaction);
+    if (input.telematicsId !== undefined)
+      input = {
+        ...input,
+        telematicsId: await telematicsIdFree(access, input.telematicsId, machine.id, transaction),
+      };
     input = await applyStatusEdit(access, machine, input, transaction);
     const { operatorIds, ...fields } = input;
     const before = Object.fromEntries(

@@ -24,6 +24,8 @@ const machineFields = {
   make: plainText(80),
   model: plainText(80),
   serialNumber: plainText(80),
+  /** the id a telematics feed sends for the machine (ISO 15143-3 EquipmentID); unique per farm */
+  telematicsId: plainText(80).nullable(),
   year: boundedNumber('Year', MACHINE_BOUNDS.year).nullable(),
   /** minor units of the organization's currency */
   purchasePriceMinor: money('Purchase price'),
@@ -49,6 +51,7 @@ export const machineCreateSchema = z.object({
   make: machineFields.make.default(''),
   model: machineFields.model.default(''),
   serialNumber: machineFields.serialNumber.default(''),
+  telematicsId: machineFields.telematicsId.default(null),
   year: machineFields.year.default(null),
   purchasePriceMinor: machineFields.purchasePriceMinor.default(null),
   listPriceMinor: machineFields.listPriceMinor.default(null),
@@ -114,6 +117,8 @@ export const machineSchema = z
     make: z.string(),
     model: z.string(),
     serialNumber: z.string(),
+    /** the id a telematics feed sends for it; null when none is mapped */
+    telematicsId: z.string().nullable(),
     year: z.number().nullable(),
     /** minor units of the organization's currency */
     purchasePriceMinor: z.number().nullable(),

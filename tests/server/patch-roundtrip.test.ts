@@ -29,6 +29,7 @@ const ROUTES: Record<string, PatchRoute> = {
       { field: 'make', value: v('Tamsin') },
       { field: 'model', value: v('TX 2') },
       { field: 'serialNumber', value: v('TM-2-0099') },
+      { field: 'telematicsId', value: v('feed-0099') },
       { field: 'year', value: v(2019) },
       { field: 'purchasePriceMinor', value: v(17_000_000) },
       { field: 'listPriceMinor', value: v(null) },

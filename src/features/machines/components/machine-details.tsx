@@ -63,6 +63,7 @@ export function MachineDetails({
     ['Make', machine.make || '—'],
     ['Model', machine.model || '—'],
     ['Serial number', machine.serialNumber || '—'],
+    ['Telematics id', machine.telematicsId ?? '—'],
     ['Year', machine.year?.toString() ?? '—'],
     ['Meter unit', `${METER_UNIT_LABELS[machine.meterUnit]} (${machine.meterUnit})`],
     ['Purchase price', price(machine.purchasePriceMinor)],

@@ -34,6 +34,7 @@ const FIELD_NAMES = [
   'make',
   'model',
   'serialNumber',
+  'telematicsId',
   'year',
   'purchasePriceMinor',
   'listPriceMinor',
@@ -71,6 +72,7 @@ function defaultsFrom(machine: Machine | undefined): MachineCreateInput {
     make: machine?.make ?? '',
     model: machine?.model ?? '',
     serialNumber: machine?.serialNumber ?? '',
+    telematicsId: machine?.telematicsId ?? null,
     year: machine?.year ?? null,
     purchasePriceMinor: machine?.purchasePriceMinor ?? null,
     listPriceMinor: machine?.listPriceMinor ?? null,
@@ -173,6 +175,14 @@ export function MachineForm({ orgId, machine, submitLabel, onSubmit, onCancel }:
             spellCheck={false}
             error={errors.serialNumber?.message}
             {...register('serialNumber')}
+          />
+          <TextField
+            label="Telematics id"
+            hint="The id a telematics feed sends for this machine, if it is not the serial number"
+            autoComplete="off"
+            spellCheck={false}
+            error={errors.telematicsId?.message}
+            {...register('telematicsId', { setValueAs: (v: unknown) => (v ? String(v) : null) })}
           />
           <TextField
             label="Year"
