@@ -72,6 +72,18 @@ export type Me = z.infer<typeof meSchema>;
 export const meResponseSchema = z.object({ data: meSchema });
 export type MeResponse = z.infer<typeof meResponseSchema>;
 
+/**
+ * GET /session: whether this browser is signed in, and as whom. Always 200, so a signed-out visit
+ * asks without an error (the browser logs every 401 on the console); GET /me stays 401.
+ */
+export const sessionProbeResponseSchema = z.object({
+  data: z.union([
+    z.object({ signedIn: z.literal(true), me: meSchema }),
+    z.object({ signedIn: z.literal(false) }).strict(),
+  ]),
+});
+export type SessionProbe = z.infer<typeof sessionProbeResponseSchema>['data'];
+
 /** A request that sends an e-mail (answered alike whether or not the address has an account). */
 export const mailSentResponseSchema = z.object({ data: z.object({ sent: z.boolean() }) });
 export type MailSentResponse = z.infer<typeof mailSentResponseSchema>;

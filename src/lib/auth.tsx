@@ -6,7 +6,7 @@ import {
   useQueryClient,
   type QueryClient,
 } from '@tanstack/react-query';
-import type { Me } from '../../shared/schemas/auth';
+import type { Me, SessionProbe } from '../../shared/schemas/auth';
 import { apiClient, isApiError, type DataEnvelope } from './api-client';
 import { queryKeys } from './query-keys';
 
@@ -17,11 +17,14 @@ export type { Me };
 export type Membership = Me['memberships'][number];
 export type Organization = Membership['organization'];
 
-/** GET /me; a 401 is an answer here ("nobody is signed in"), not an error. */
+/**
+ * GET /session: the signed-in person, or null when nobody is. It answers 200 either way, so a
+ * signed-out visit logs no 401 on the console; a 401 (a gateway, an older server) still means null.
+ */
 export async function fetchMe(signal?: AbortSignal): Promise<Me | null> {
   try {
-    const body = await apiClient.get<DataEnvelope<Me>>('/me', { signal });
-    return body.data;
+    const body = await apiClient.get<DataEnvelope<SessionProbe>>('/session', { signal });
+    return body.data.signedIn ? body.data.me : null;
   } catch (error) {
     if (isApiError(error) && error.status === 401) return null;
     throw error;

@@ -36,7 +36,7 @@ beforeEach(() => {
   const meAnswer = new Promise<'farm' | 'dealer'>((resolve) => (releaseMe = resolve));
   vi.stubGlobal('fetch', async (url: string) => {
     asked.push(url);
-    if (url.endsWith('/me')) return json({ data: me(await meAnswer) });
+    if (url.endsWith('/session')) return json({ data: { signedIn: true, me: me(await meAnswer) } });
     return json({ data: [], meta: {} });
   });
   vi.resetModules();
@@ -61,7 +61,7 @@ describe('dashboard loader — due list beside the session', () => {
     const { rememberOrganization } = await import('../../src/lib/auth');
     rememberOrganization(ORG, 'farm');
     const { loading } = await startDashboard();
-    expect(asked.some((url) => url.endsWith('/me'))).toBe(true);
+    expect(asked.some((url) => url.endsWith('/session'))).toBe(true);
     expect(dueAsked()).toBe(1);
     releaseMe('farm');
     await loading;

@@ -104,6 +104,31 @@ describe('auth — sign-in', () => {
     expect(res.status).toBe(401);
   });
 
+  it('session probe — 200 signedIn false without a session, with a tampered token and after sign-out; the same user and memberships as /me when signed in', async () => {
+    const signedOut = { data: { signedIn: false } };
+    const anonymous = await request(app).get('/api/v1/session');
+    expect(anonymous.status).toBe(200);
+    expect(anonymous.body).toEqual(signedOut);
+    const tampered = await request(app)
+      .get('/api/v1/session')
+      .set('Cookie', 'hs_session=eyJhbGciOiJIUzI1NiJ9.e30.bad');
+    expect([tampered.status, tampered.body]).toEqual([200, signedOut]);
+
+    const org = await createOrganization();
+    const { user } = await createMember(org, 'operator');
+    const agent = await signedInAgent(app, user);
+    const probe = await agent.get('/api/v1/session');
+    const me = await agent.get('/api/v1/me');
+    expect(probe.status).toBe(200);
+    expect(probe.body).toEqual({ data: { signedIn: true, me: me.body.data } });
+    expect(probe.body.data.me.user.id).toBe(user.id);
+    expect(probe.body.data.me.memberships.map((m: { role: string }) => m.role)).toEqual([
+      'operator',
+    ]);
+    await agent.post('/api/v1/auth/sign-out');
+    expect((await agent.get('/api/v1/session')).body).toEqual(signedOut);
+  });
+
   it('helmet — security headers are set', async () => {
     const res = await request(app).get('/api/v1/health');
     expect(res.headers['x-content-type-options']).toBe('nosniff');

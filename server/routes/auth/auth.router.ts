@@ -9,10 +9,11 @@ import {
   invitationLookupResponseSchema,
   mailSentResponseSchema,
   meResponseSchema,
+  sessionProbeResponseSchema,
   signInSchema,
 } from '../../../shared/schemas/auth';
 import { presentMe } from '../../presenters/me';
-import { endSession, startSession } from '../../infra/session';
+import { endSession, loadSession, SESSION_COOKIE, startSession } from '../../infra/session';
 import {
   acceptInvitation,
   confirmPasswordReset,
@@ -82,6 +83,22 @@ export function authRouter(): Router {
     access: 'user',
     response: meResponseSchema,
     handler: ({ req }) => ({ data: presentMe(req.auth!.user, req.auth!.memberships) }),
+  });
+
+  route(router, {
+    method: 'get',
+    path: '/session',
+    summary:
+      'Whether this browser is signed in: the user and memberships, or signedIn: false (200 either way, unlike /me)',
+    tags: ['auth'],
+    access: 'public',
+    response: sessionProbeResponseSchema,
+    handler: async ({ req }) => {
+      const session = await loadSession(req.cookies?.[SESSION_COOKIE]);
+      if (!session) return { data: { signedIn: false as const } };
+      const me = presentMe(session.user, session.user.memberships);
+      return { data: { signedIn: true as const, me } };
+    },
   });
 
   route(router, {

@@ -1,7 +1,9 @@
 import type { QueryClient } from '@tanstack/react-query';
+import { lazy, Suspense } from 'react';
 import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { Section } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
+import { ListSkeleton } from '../../components/ui/skeleton';
 import { dueQueryOptions } from '../../features/due/api/get-due';
 import type { DueFilters } from '../../features/due/api/types';
 import { DueBoard } from '../../features/due/components/due-board';
@@ -16,7 +18,12 @@ import {
   useCurrentMembership,
 } from '../../lib/auth';
 import { paths } from '../paths';
-import { DealerBoardSection, dealerBoardLoader } from './dealer-board';
+
+// A dealer's board is another role's screen: fetched only when a dealer's dashboard opens.
+const loadDealerBoard = () => import('./dealer-board');
+const DealerBoardSection = lazy(() =>
+  loadDealerBoard().then((m) => ({ default: m.DealerBoardSection })),
+);
 
 /** Starts loading the due list with the page (farms only: a dealer has no machines of its own). */
 export const dashboardLoader =
@@ -36,8 +43,10 @@ export const dashboardLoader =
     const membership = me ? findMembership(me, orgId) : undefined;
     if (membership?.organization.kind === 'farm' && !early) prefetchDue();
     // a dealer's dashboard is its board across customers
-    if (membership?.organization.kind === 'dealer')
+    if (membership?.organization.kind === 'dealer') {
+      const { dealerBoardLoader } = await loadDealerBoard();
       return dealerBoardLoader(queryClient)({ request, params } as LoaderFunctionArgs);
+    }
     return null;
   };
 
@@ -102,7 +111,9 @@ export function DashboardPage() {
             </Link>
           }
         >
-          <DealerBoardSection />
+          <Suspense fallback={<ListSkeleton rows={4} label="Loading the board" />}>
+            <DealerBoardSection />
+          </Suspense>
         </Section>
       ) : (
         <>

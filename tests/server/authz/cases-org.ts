@@ -32,6 +32,7 @@ export const ORG_CASES: Record<string, Case> = {
     }),
   },
   'GET /me': { ids: 'none', build: () => ({ params: {} }) },
+  'GET /session': { ids: 'none', build: () => ({ params: {} }) },
   'POST /auth/password-reset': {
     ids: 'none',
     build: (c) => ({ params: {}, body: { email: person(c).email } }),

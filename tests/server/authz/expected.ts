@@ -56,6 +56,7 @@ export const EXPECTED: Record<string, Row> = {
   'POST /auth/sign-out': everyone(),
   'POST /auth/password': signedIn(),
   'GET /me': signedIn(),
+  'GET /session': everyone(),
   'POST /auth/password-reset': everyone(),
   'POST /auth/password-reset/confirm': everyone(),
   'GET /invitations/{token}': everyone(),
