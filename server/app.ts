@@ -35,6 +35,7 @@ import { calendarRouter } from './routes/calendar/calendar.router';
 import { dealersRouter } from './routes/dealers/dealers.router';
 import { exportRouter } from './routes/export/export.router';
 import { apiKeysRouter } from './routes/api-keys/api-keys.router';
+import { telematicsRouter } from './routes/telematics/telematics.router';
 import './models';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -105,6 +106,7 @@ export function createApp(options: { serveClient?: boolean; clientDist?: string 
   api.use(dealersRouter());
   api.use(exportRouter());
   api.use(apiKeysRouter());
+  api.use(telematicsRouter());
   api.use(devRouter());
   api.use(notFoundHandler);
   app.use('/api/v1', api);

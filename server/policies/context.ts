@@ -43,6 +43,8 @@ export type OrgAccess = MemberAccess | DealerAccessContext;
 export interface KeyContext {
   organization: Organization;
   keyId: string;
+  /** the key's shown prefix (hs_<prefix>_…) */
+  keyPrefix: string;
   keyName: string;
   scopes: readonly string[];
   /** who made the key: its readings are entered in their name (null once the account is gone) */

@@ -101,7 +101,7 @@ const KEY_SQL = `UPDATE api_keys k SET last_used_at = now()
   FROM organizations o
   WHERE k.prefix = $1 AND k.secret_hash = $2 AND k.revoked_at IS NULL
     AND o.id = k.organization_id
-  RETURNING k.id, k.name, k.scopes, k.created_by, to_jsonb(o) AS organization`;
+  RETURNING k.id, k.prefix, k.name, k.scopes, k.created_by, to_jsonb(o) AS organization`;
 
 /** The key a request's `Authorization: Bearer` names, or null when it is unknown or revoked. */
 export async function authenticateApiKey(text: string): Promise<KeyContext | null> {
@@ -109,6 +109,7 @@ export async function authenticateApiKey(text: string): Promise<KeyContext | nul
   if (!parsed) return null;
   const [row] = await sequelize.query<{
     id: string;
+    prefix: string;
     name: string;
     scopes: string[];
     created_by: string | null;
@@ -118,6 +119,7 @@ export async function authenticateApiKey(text: string): Promise<KeyContext | nul
   return {
     organization: instanceFrom(Organization, row.organization),
     keyId: row.id,
+    keyPrefix: row.prefix,
     keyName: row.name,
     scopes: row.scopes,
     createdBy: row.created_by,
