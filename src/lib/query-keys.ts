@@ -161,6 +161,12 @@ const invitations = {
   list: (orgId: string) => [...invitations.all(orgId), 'list'] as const,
 };
 
+/** the organization's API keys for machine data (its manager's settings) */
+const apiKeys = {
+  all: (orgId: string) => ['api-keys', orgId] as const,
+  list: (orgId: string) => [...apiKeys.all(orgId), 'list'] as const,
+};
+
 const organizations = {
   all: ['organizations'] as const,
   detail: (orgId: string) => [...organizations.all, orgId] as const,
@@ -217,6 +223,7 @@ export const queryKeys = {
   reminders,
   members,
   invitations,
+  apiKeys,
   organizations,
   onboarding,
   session,

@@ -11,6 +11,7 @@ import {
 } from '../../features/settings/api/organization';
 import { DeleteOrganizationCard } from '../../features/settings/components/delete-organization-card';
 import { FarmExportCard } from '../../features/settings/components/farm-export-card';
+import { ApiKeysCard } from '../../features/settings/components/api-keys-card';
 import {
   formValuesOf,
   OrganizationForm,
@@ -71,6 +72,14 @@ export function OrganizationSettingsPage() {
             description="Everything the farm keeps here is the farm’s: download a copy at any time."
           >
             <FarmExportCard orgId={orgId} />
+          </Section>
+        ) : null}
+        {abilities.update && data.kind === 'farm' ? (
+          <Section
+            title="API keys for machine data"
+            description="Let a telematics feed send engine hours without anyone typing them."
+          >
+            <ApiKeysCard orgId={orgId} timeZone={data.timeZone} />
           </Section>
         ) : null}
         {abilities.delete ? (
