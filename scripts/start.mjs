@@ -67,6 +67,9 @@ function printBanner(env) {
     '',
     `  app:        ${appUrl}`,
     `  mail page:  ${appUrl}/dev/mail`,
+    env.NODE_ENV !== 'production' && process.env.FAKE_TELEMATICS !== '0'
+      ? '  telematics: a fake feed posts T-02 and S-01 (Larkspur) engine hours every few seconds'
+      : undefined,
     '',
     `  demo sign-ins (password for all: ${DEMO_PASSWORD})`,
     ...DEMO_SIGN_INS.map(([email, role]) => `    ${email.padEnd(width)}  ${role}`),
@@ -143,6 +146,18 @@ async function main() {
     }),
   );
   await startApi({ env, port: apiPort, watch: devMode, services, onExit: onChildExit('api') });
+  // The demo farm's newer machines report their hours by themselves (scripts/fake-telematics.ts)
+  // beside the mail catcher; FAKE_TELEMATICS=0 leaves it out. Its stopping stops nothing else.
+  if (env.NODE_ENV !== 'production' && process.env.FAKE_TELEMATICS !== '0') {
+    services.push(
+      startService('telematics', tsx, ['scripts/fake-telematics.ts'], {
+        env: { ...env, FAKE_TELEMATICS_URL: `http://127.0.0.1:${apiPort}/api/v1` },
+        onExit: (code) => {
+          if (code) warn(`the fake telematics feed stopped (exit ${code}); the app runs on`);
+        },
+      }),
+    );
+  }
 
   if (devMode) {
     const client = startService(
