@@ -1,5 +1,5 @@
 import pg from 'pg';
-import { env } from '../server/env';
+import { databaseTargets, env } from '../server/env';
 import { logger } from '../server/logger';
 
 /** The channel the notifications trigger (migration 0009) notifies when new messages commit. */
@@ -27,11 +27,13 @@ function forget(client: pg.Client | null) {
  * notification (with the id of a row the committed statement inserted), and once on every
  * (re)connection to catch up with what committed meanwhile. A lost connection is retried every
  * `retryMs`. Every worker copy listens; the claims decide who sends, so a nudge to several
- * workers costs the others one empty claim each.
+ * workers costs the others one empty claim each. The connection goes to DATABASE_DIRECT_URL:
+ * through a transaction pooler (pgbouncer) a LISTEN would hold a server connection that is
+ * handed to other clients after each statement, and the notifications would never arrive.
  */
 export function listenForOutbox(
   onWake: (reason: WakeReason, notificationId?: string) => void,
-  { databaseUrl = env.DATABASE_URL, retryMs = 5000 } = {},
+  { databaseUrl = databaseTargets(env).direct, retryMs = 5000 } = {},
 ): OutboxListener {
   let client: pg.Client | null = null;
   let stopped = false;

@@ -1,6 +1,13 @@
 import { z } from 'zod';
 
 // The environment, validated once at start. Every variable is documented in .env.example.
+
+// A connection string that may be left empty (as .env.example lists it) to mean "not set".
+const optionalUrl = z
+  .string()
+  .optional()
+  .transform((v) => (v?.trim() ? v.trim() : undefined));
+
 const fields = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   HOST: z.string().default('127.0.0.1'),
@@ -8,6 +15,12 @@ const fields = z.object({
   APP_URL: z.string().url().default('http://127.0.0.1:4310'),
   DATABASE_URL: z.string().min(1, 'DATABASE_URL is required (npm start sets it up)'),
   DATABASE_POOL_MAX: z.coerce.number().int().positive().default(10),
+  // Straight to PostgreSQL, for what a transaction pooler (pgbouncer, pool_mode = transaction)
+  // cannot carry: the worker's LISTEN for new outbox mail. Unset or empty: DATABASE_URL.
+  DATABASE_DIRECT_URL: optionalUrl,
+  // A read replica for the read-only reports (the dealer board, the farm export), which may then
+  // be a few seconds behind. Unset or empty: they read DATABASE_URL like everything else.
+  DATABASE_READ_URL: optionalUrl,
   SMTP_URL: z.string().default('smtp://127.0.0.1:2525'),
   MAIL_FROM: z.string().default('Hourstone <no-reply@hourstone.example>'),
   MAIL_CATCHER_URL: z.string().default(''),
@@ -74,4 +87,20 @@ function loadEnv(): Env {
 }
 
 export const env = loadEnv();
+
+/**
+ * Where each kind of database connection goes: `main` for everything, `direct` for the outbox
+ * LISTEN (which a transaction pooler cannot carry), `read` for the read-only reports (null: main).
+ */
+export function databaseTargets(e: {
+  DATABASE_URL: string;
+  DATABASE_DIRECT_URL?: string;
+  DATABASE_READ_URL?: string;
+}) {
+  return {
+    main: e.DATABASE_URL,
+    direct: e.DATABASE_DIRECT_URL ?? e.DATABASE_URL,
+    read: e.DATABASE_READ_URL ?? null,
+  };
+}
 export const isProduction = env.NODE_ENV === 'production';

@@ -1,7 +1,7 @@
 import { createApp } from './app';
 import { env } from './env';
 import { logger } from './logger';
-import { sequelize } from './db';
+import { closeDatabases } from './db';
 
 const app = createApp();
 const server = app.listen(env.PORT, env.HOST, () => {
@@ -11,7 +11,7 @@ const server = app.listen(env.PORT, env.HOST, () => {
 async function shutdown(signal: string) {
   logger.info(`${signal}: closing api`);
   server.close();
-  await sequelize.close();
+  await closeDatabases();
   process.exit(0);
 }
 process.on('SIGTERM', () => void shutdown('SIGTERM'));

@@ -1,5 +1,5 @@
 import { QueryTypes } from 'sequelize';
-import { sequelize } from '../db';
+import { readDb } from '../db';
 import { addDaysIso, todayIso } from '../../shared/domain';
 import type { DueStatus } from '../../shared/domain/types';
 import type { BoardQuery } from '../../shared/schemas/dealers';
@@ -67,13 +67,16 @@ export async function boardRows(
     limit: page?.limit ?? null,
     offset: page?.offset ?? null,
   };
+  // The rows and counts come from the read replica when there is one (DATABASE_READ_URL), so a
+  // board may be a few seconds behind the farms; who is linked, the freshness check (which
+  // decides writes) and the audit stay on the primary.
   const read = () =>
     Promise.all([
-      sequelize.query<RawDueRow & { customer_id: string }>(
+      readDb.query<RawDueRow & { customer_id: string }>(
         boardRowsSql({ ...flags, status: !!query.status, page: !!page }),
         { replacements, type: QueryTypes.SELECT },
       ),
-      sequelize.query<{ status: DueStatus; n: number }>(boardCountsSql(flags), {
+      readDb.query<{ status: DueStatus; n: number }>(boardCountsSql(flags), {
         replacements,
         type: QueryTypes.SELECT,
       }),

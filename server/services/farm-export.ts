@@ -2,7 +2,7 @@ import { Readable, type Writable } from 'node:stream';
 import { ZipArchive } from 'archiver';
 import { stringify } from 'csv-stringify/sync';
 import { QueryTypes, Transaction } from 'sequelize';
-import { sequelize } from '../db';
+import { readDb } from '../db';
 import type { Organization } from '../models';
 import { getObject, isMissingObject } from '../infra/storage';
 import { recordAudit } from '../infra/audit';
@@ -13,7 +13,8 @@ import { EXPORT_TABLES, FILE_PATHS, type ExportTable } from './farm-export-table
 // A farm's own data as one zip: a CSV per kind of record, organization.json, the stored files and
 // a README.txt of the columns. Every query runs in one REPEATABLE READ transaction, so the files
 // agree with each other; rows are read a page at a time and files fetched only when the archive
-// reaches them, so a large farm streams without being held in memory.
+// reaches them, so a large farm streams without being held in memory. With DATABASE_READ_URL the
+// reads go to the replica, and the archive is as of a moment a few seconds back.
 
 /** Rows read per query. */
 export const EXPORT_PAGE_ROWS = 2000;
@@ -57,7 +58,7 @@ async function* csvChunks(
   yield stringify([], { header: true, columns });
   rows[table.file] = 0;
   for (let offset = 0; ; offset += EXPORT_PAGE_ROWS) {
-    const page = await sequelize.query<Record<string, unknown>>(sql, {
+    const page = await readDb.query<Record<string, unknown>>(sql, {
       replacements: { org: organizationId, limit: EXPORT_PAGE_ROWS, offset },
       type: QueryTypes.SELECT,
       transaction,
@@ -71,7 +72,7 @@ async function* csvChunks(
 /** The stored files of the organization: where each goes in the archive and its object's key. */
 async function storedFiles(organizationId: string, transaction: Transaction) {
   const { machinePhoto, serviceAttachment, walkaroundPhoto } = FILE_PATHS;
-  return sequelize.query<{ path: string; key: string }>(
+  return readDb.query<{ path: string; key: string }>(
     `SELECT ${machinePhoto.path} AS path, ${machinePhoto.key} AS key FROM machines t
        WHERE t.organization_id = :org AND t.photo_key IS NOT NULL
      UNION ALL
@@ -148,7 +149,8 @@ export async function writeFarmExport(
     await Promise.race([written, failed]);
   };
 
-  await sequelize.transaction(
+  // on the read replica when there is one (DATABASE_READ_URL): a standby runs REPEATABLE READ too
+  await readDb.transaction(
     { isolationLevel: Transaction.ISOLATION_LEVELS.REPEATABLE_READ },
     async (transaction) => {
       await add('README.txt', () => exportReadme(organization.name, now));
