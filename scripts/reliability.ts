@@ -4,7 +4,10 @@
 //   (a) PostgreSQL restarted (pg_ctl restart -m fast) during 30 s of reading posts: readings
 //       acknowledged vs stored, 5xx answers, recovery time;
 //   (b) mail down, then hanging, then back: messages lost / duplicated after recovery, and the
-//       due list's p95 during the hang against normal.
+//       due list's p95 during the hang against normal;
+//   (c) two workers and two API processes through pgbouncer (transaction pooling, port 54592):
+//       the due digest run by both at once sends one digest per person, and the sign-in
+//       throttles hold across the two APIs.
 // Every loop is bounded in count and time; the run stops itself (and everything it started)
 // within RELIABILITY_TIMEOUT_MS (5 minutes). Exit 1 when a figure misses its bar.
 import { spawnSync } from 'node:child_process';
@@ -13,13 +16,23 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import pg from 'pg';
 import { findServerBinaries, startPostgres } from './lib/postgres.mjs';
+import { startPgbouncer } from './lib/pgbouncer.mjs';
 import { assertPortsFree, stopAll, type Service } from './lib/processes.mjs';
 import { runTsScript, startApi, startMailCatcher } from './lib/app.mjs';
 import { ApiSession } from './reliability/http';
 import { postgresRestartUnderLoad } from './reliability/postgres-restart';
 import { startHangingSmtp } from './reliability/hanging-smtp';
 
-const PORTS = { pg: 54591, api: 4591, smtp: 2591, catcher: 2592, hang: 2593, dead: 2594 };
+const PORTS = {
+  pg: 54591,
+  pgbouncer: 54592,
+  api: 4591,
+  smtp: 2591,
+  catcher: 2592,
+  hang: 2593,
+  dead: 2594,
+  pooledApis: [4595, 4596],
+};
 const TIMEOUT_MS = Number(process.env.RELIABILITY_TIMEOUT_MS ?? 300_000);
 const DEMO_PASSWORD = 'hourstone-demo'; // the demo scenario's public password (SCENARIO.md)
 const MANAGER = 'marta@larkspur.example';
@@ -71,6 +84,9 @@ async function main() {
     'reliability mail catcher HTTP': PORTS.catcher,
     'reliability hanging mail server': PORTS.hang,
     'reliability dead mail port': PORTS.dead,
+    'reliability API through pgbouncer': PORTS.pooledApis[0],
+    'reliability second API through pgbouncer': PORTS.pooledApis[1],
+    'reliability pgbouncer': PORTS.pgbouncer,
   });
   const postgres = await startPostgres({
     name: 'test-59',
@@ -172,6 +188,33 @@ async function main() {
     b.crashResentSameMessageId ? 'sent again with the same Message-ID' : 'NOT resent as expected',
   );
 
+  console.log('\n(c) two workers and two APIs through pgbouncer (transaction pooling)');
+  const c = await scaleOutDrill(postgres.databaseUrl, env, mail);
+  const perWorker = c.digestRuns
+    .map(
+      (w, i) =>
+        `worker ${i + 1}: ${w.runs} runs (${w.skippedOnLock} skipped on the lock), ${w.queued} queued`,
+    )
+    .join('; ');
+  line('due-digest runs, both every 10 s', perWorker);
+  line('people with a digest queued', c.people);
+  line('digests in the mail catcher', c.caught);
+  line('people with more than one / with none', `${c.duplicated} / ${c.missing}`);
+  line('queued to sent, longest (NOTIFY via LISTEN)', `${c.deliveredWithinSeconds.toFixed(1)} s`);
+  line(
+    `${c.accountAttempts} failed sign-ins, one account, both APIs`,
+    `${c.accountPasswordChecked} × 401 (limit ${c.accountLimit}), by API: ${JSON.stringify(c.accountStatusesByApi)}`,
+  );
+  line(
+    `${c.addressAttempts} failed sign-ins, one address, both APIs`,
+    `${c.addressPasswordChecked} × 401 (limit ${c.addressLimit}), ${c.addressThrottled} × 429`,
+  );
+
+  line(
+    'CSV import through pgbouncer (COPY)',
+    `${c.importSent} rows sent, ${c.importStored} stored`,
+  );
+
   const misses = [
     a.serverErrors500 > 0 && 'a 500 during the restart',
     a.lost > 0 && 'acknowledged readings lost',
@@ -180,6 +223,16 @@ async function main() {
     b.duplicated > 0 && 'mail duplicated',
     b.dueP95HangMs > 2 * b.dueP95NormalMs && 'due list p95 during the hang above 2× normal',
     !b.crashResentSameMessageId && 'a crash between send and record did not resend',
+    c.people === 0 && 'no digest queued in the two-worker drill',
+    (c.duplicated > 0 || c.caught > c.people) && 'a person got the digest twice',
+    c.missing > 0 && 'a queued digest did not arrive',
+    c.digestRuns.some((w) => w.runs < 2) && 'a worker did not run the digest',
+    (c.accountPasswordChecked > c.accountLimit || c.accountPasswordChecked === 0) &&
+      'the account delay did not hold across two APIs',
+    c.accountStatusesByApi.some((s) => !s[429]) && 'an API did not throttle the account',
+    (c.addressPasswordChecked !== c.addressLimit || c.addressThrottled !== 10) &&
+      'the per-address limit did not hold across two APIs',
+    c.importStored !== c.importSent && 'the CSV import through pgbouncer did not store every row',
   ].filter(Boolean);
   console.log(
     misses.length
@@ -187,6 +240,39 @@ async function main() {
       : '\nreliability: every figure within its bar',
   );
   return misses.length ? 1 : 0;
+}
+
+/** (c): pgbouncer in front of the copy, two APIs and (in the drill) two workers through it. */
+async function scaleOutDrill(
+  directUrl: string,
+  env: NodeJS.ProcessEnv,
+  mail: { catcherUrl: string; smtpUrl: string },
+) {
+  const bouncer = await startPgbouncer({
+    name: 'test-59',
+    port: PORTS.pgbouncer,
+    databaseUrl: directUrl,
+  });
+  const stopRest = cleanup;
+  cleanup = async () => {
+    await stopAll(services);
+    await bouncer.stop();
+    await stopRest();
+  };
+  const pooled = { ...env, DATABASE_URL: bouncer.databaseUrl, DATABASE_DIRECT_URL: directUrl };
+  for (const port of PORTS.pooledApis) await startApi({ env: pooled, port, services });
+  const { scaleOut } = await import('./reliability/scale-out');
+  return scaleOut({
+    workerEnv: { ...pooled, SMTP_URL: mail.smtpUrl },
+    apiOrigins: [
+      `http://127.0.0.1:${PORTS.pooledApis[0]}`,
+      `http://127.0.0.1:${PORTS.pooledApis[1]}`,
+    ],
+    catcherUrl: mail.catcherUrl,
+    accountEmail: 'sam@larkspur.example',
+    manager: { email: MANAGER, password: DEMO_PASSWORD },
+    services,
+  });
 }
 
 const watchdog = setTimeout(() => {

@@ -21,10 +21,14 @@ export class ApiSession {
         method,
         headers: {
           Accept: 'application/json',
-          ...(body === undefined ? {} : { 'Content-Type': 'application/json' }),
+          // a FormData body (a file upload) brings its own multipart type
+          ...(body === undefined || body instanceof FormData
+            ? {}
+            : { 'Content-Type': 'application/json' }),
           ...(this.cookie ? { Cookie: this.cookie } : {}),
         },
-        body: body === undefined ? undefined : JSON.stringify(body),
+        body:
+          body === undefined ? undefined : body instanceof FormData ? body : JSON.stringify(body),
         signal: AbortSignal.timeout(REQUEST_TIMEOUT_MS),
       });
       const setCookie = response.headers.getSetCookie();
