@@ -6,7 +6,7 @@ import { organizationPages } from './organization-pages';
 import { paths } from './paths';
 import { OrganizationLayout, organizationLoader } from './routes/organization-layout';
 import { AppLoading, RootLayout } from './routes/root';
-import { WalkaroundOutboxSender } from '../features/walkarounds/components/outbox-sender';
+import { OutboxSender } from './outbox-sender';
 
 const home = paths.home.href();
 
@@ -93,11 +93,10 @@ export function createAppRouter(queryClient: QueryClient) {
           path: paths.organization.dashboard.path,
           loader: organizationLoader(queryClient),
           element: (
-            <>
-              {/* walkarounds saved on the phone go out as soon as the app runs online */}
-              <WalkaroundOutboxSender />
+            // work saved on the phone goes out as soon as the app runs online
+            <OutboxSender>
               <OrganizationLayout />
-            </>
+            </OutboxSender>
           ),
           children: [
             {

@@ -44,10 +44,14 @@ export function createQueryClient({ onUnauthorized }: QueryClientHooks): QueryCl
         retry: shouldRetryQuery,
         retryDelay: retryDelayMs,
         refetchOnWindowFocus: true,
+        // Offline, a read still goes to the service worker, which answers from its cache what
+        // this person saw before (instead of waiting for navigator.onLine).
+        networkMode: 'offlineFirst',
       },
       // A write is never repeated behind the person's back: the form shows the server's message
       // (503: "try again in a few seconds") and they press the button again.
-      mutations: { retry: false },
+      // Offline, a write fails at once ("unreachable") so the form can keep it on the phone.
+      mutations: { retry: false, networkMode: 'always' },
     },
   });
 }

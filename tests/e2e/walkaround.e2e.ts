@@ -8,6 +8,7 @@ import {
   type TestBrowser,
 } from './support/browser';
 import { WRITTEN_OR_READ_BY_OTHERS } from './support/demo-fleet';
+import { queuedEntries } from './support/outbox';
 
 // The operator's daily walkaround on a phone (issue 4): every item answered, a photo, a critical
 // fail that tags the machine out; and the offline queue that must not send a walkaround twice.
@@ -15,7 +16,6 @@ import { WRITTEN_OR_READ_BY_OTHERS } from './support/demo-fleet';
 // here are kept clear of the ones the other files use (support/demo-fleet.ts).
 
 const PASSWORD = 'hourstone-demo';
-const OUTBOX_KEY = 'hourstone.walkaround.outbox';
 /** A 1 × 1 PNG: enough for the server to check the type by content and make a thumbnail. */
 const PNG = Buffer.from(
   'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==',
@@ -224,12 +224,9 @@ describe('daily walkaround on a phone (browser)', () => {
       .getByRole('status')
       .filter({ hasText: 'Saved on this phone — it will be sent when the connection returns' })
       .waitFor();
-    const queued = await page.evaluate(
-      (key) => JSON.parse(localStorage.getItem(key) ?? '[]'),
-      OUTBOX_KEY,
-    );
+    const queued = await queuedEntries(page);
     expect(queued).toHaveLength(1);
-    const { clientId, input } = queued[0];
+    const { id: clientId, body: input } = queued[0];
     await screenshot(page, 'walkaround-phone-offline-saved');
 
     await browser.context.setOffline(false);
@@ -240,9 +237,7 @@ describe('daily walkaround on a phone (browser)', () => {
     await page.reload();
     await page.evaluate(() => window.dispatchEvent(new Event('online')));
     await page.getByRole('heading', { name: `Walkaround · ${machine.fleetNumber}` }).waitFor();
-    expect(
-      await page.evaluate((key) => JSON.parse(localStorage.getItem(key) ?? '[]'), OUTBOX_KEY),
-    ).toEqual([]);
+    expect(await queuedEntries(page)).toEqual([]);
     // a resend whose first answer was lost is answered as a duplicate, not recorded again
     const resend = await page.request.post(`/api/v1/organizations/${orgId}/walkarounds`, {
       data: input,

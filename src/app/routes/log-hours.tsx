@@ -1,6 +1,7 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { ForbiddenState } from '../../components/errors/forbidden-state';
+import { OutboxPanel } from '../../components/outbox/outbox-panel';
 import { buttonClasses } from '../../components/ui/button';
 import { EmptyState } from '../../components/ui/empty-state';
 import { ErrorState } from '../../components/ui/error-state';
@@ -26,7 +27,7 @@ export const logHoursLoader =
   };
 
 export function LogHoursPage() {
-  const { membership } = useCurrentMembership();
+  const { me, membership } = useCurrentMembership();
   const { organization, role } = membership;
   const [search] = useSearchParams();
   const canLog = role !== 'advisor';
@@ -59,6 +60,7 @@ export function LogHoursPage() {
           ) : null
         }
       />
+      <OutboxPanel orgId={organization.id} userId={me.user.id} timeZone={organization.timeZone} />
       {latest.isPending ? (
         <ListSkeleton rows={6} label="Loading machines" />
       ) : latest.isError ? (

@@ -8,6 +8,8 @@ import { TextField } from '../../../components/ui/field';
 import { isApiError } from '../../../lib/api-client';
 import { fromDateTimeLocalValue, toDateTimeLocalValue } from '../../../lib/fleet-format';
 import { useSaveReadings } from '../api/save-readings';
+import { enqueueReadings } from '../lib/queued-readings';
+import { useMe } from '../../../lib/auth';
 import type { LatestReading } from '../api/types';
 import { meterInputError, parseMeterInput } from '../../../lib/meter-input';
 import { LogHoursRow } from './log-hours-row';
@@ -69,6 +71,7 @@ export function LogHoursForm({
   initialFind = '',
 }: LogHoursFormProps) {
   const save = useSaveReadings(orgId);
+  const userId = useMe().data?.user.id;
   const [find, setFind] = useState(initialFind);
   const [outcome, setOutcome] = useState<{ tone: 'success' | 'error'; text: string } | null>(null);
   const defaultValues = useMemo(() => ({ entries: blankEntries(items) }), [items]);
@@ -141,6 +144,19 @@ export function LogHoursForm({
       return;
     }
 
+    // No connection: the round waits on the phone (each reading with its time) and goes later.
+    const keepOnPhone = async () => {
+      if (!userId) return;
+      const fleetNumbers = sent.map((item) => item.machine.fleetNumber);
+      await enqueueReadings({ orgId, userId, input: checked.data, fleetNumbers });
+      reset(defaultValues);
+      setOutcome({
+        tone: 'success',
+        text: `No connection: ${plural(sent.length, 'reading', 'readings')} saved on this phone. They are sent when the connection returns.`,
+      });
+    };
+    if (!navigator.onLine) return keepOnPhone();
+
     try {
       const result = await save.mutateAsync(checked.data);
       const added = result.filter((r) => r.status === 'added').length;
@@ -153,6 +169,7 @@ export function LogHoursForm({
         }.`,
       });
     } catch (error) {
+      if (isApiError(error) && error.code === 'unreachable') return keepOnPhone();
       const placed: [number, string, string][] = [];
       const unplaced: string[] = [];
       if (isApiError(error)) {

@@ -1,9 +1,9 @@
 import { Button } from '../../../components/ui/button';
 import { Icon } from '../../../components/ui/icons';
+import { RefusedActions } from '../../../components/outbox/refused-actions';
+import { useFlushOutbox } from '../../../lib/outbox/senders';
+import { useOutbox } from '../../../lib/outbox/use-outbox';
 import type { WalkaroundOutcome } from '../api/types';
-import { discardQueued } from '../lib/outbox';
-import { useFlushOutbox } from '../lib/use-flush-outbox';
-import { useOutbox } from '../lib/use-outbox';
 import { WalkaroundOutcomeView } from './walkaround-outcome';
 
 export const SAVED_ON_PHONE = 'Saved on this phone — it will be sent when the connection returns';
@@ -15,28 +15,29 @@ export const SAVED_ON_PHONE = 'Saved on this phone — it will be sent when the 
 export function QueuedWalkaround({
   clientId,
   fleetNumber,
-  photosLeftOut,
+  photosWaiting,
   pickHref,
   defectsHref,
   onDiscarded,
 }: {
   clientId: string;
   fleetNumber: string;
-  photosLeftOut: number;
+  photosWaiting: number;
   pickHref: string;
   defectsHref: string;
   onDiscarded: () => void;
 }) {
-  const { items, sent, sending } = useOutbox();
+  const { loaded, entries, sent, sending } = useOutbox();
   const flush = useFlushOutbox();
-  const outcome: WalkaroundOutcome | undefined = sent.get(clientId);
-  const queued = items.find((item) => item.clientId === clientId);
+  const outcome = sent.get(clientId) as WalkaroundOutcome | undefined;
+  const queued = entries.find((entry) => entry.id === clientId);
 
   if (outcome)
     return (
       <WalkaroundOutcomeView outcome={outcome} pickHref={pickHref} defectsHref={defectsHref} />
     );
 
+  if (!queued && !loaded) return null;
   if (!queued) {
     // sent from another window of this phone: the answer is there, not here
     return (
@@ -54,16 +55,11 @@ export function QueuedWalkaround({
           <p className="font-black text-poppy-900">Hourstone did not accept this walkaround</p>
           <p className="text-poppy-900">{queued.error}</p>
         </div>
-        <Button
-          variant="secondary"
-          className="min-h-12"
-          onClick={() => {
-            discardQueued(clientId);
-            onDiscarded();
-          }}
-        >
-          Discard it and start again
-        </Button>
+        <RefusedActions
+          entry={queued}
+          discardLabel="Discard it and start again"
+          onDiscarded={onDiscarded}
+        />
       </div>
     );
   }
@@ -81,11 +77,11 @@ export function QueuedWalkaround({
             The walkaround of {fleetNumber} keeps the time you did it. Keep this page or come back
             later: it goes out by itself, only once.
           </p>
-          {photosLeftOut > 0 ? (
+          {photosWaiting > 0 ? (
             <p className="font-bold">
-              {photosLeftOut === 1
-                ? '1 photo could not be uploaded without a connection and was left out; your notes go with it.'
-                : `${photosLeftOut} photos could not be uploaded without a connection and were left out; your notes go with them.`}
+              {photosWaiting === 1
+                ? 'Its photo is kept on this phone too and goes with it.'
+                : `Its ${photosWaiting} photos are kept on this phone too and go with it.`}
             </p>
           ) : null}
         </div>

@@ -43,7 +43,10 @@ export function WalkaroundForm({
   units: UnitSystem;
   timeZone: string;
   draftApi: DraftApi;
-  send: (input: WalkaroundCreateInput, photosLeftOut: number) => Promise<SendResult>;
+  send: (
+    input: WalkaroundCreateInput,
+    waitingPhotos: ReadonlyMap<string, File>,
+  ) => Promise<SendResult>;
   onSent: (result: SendResult) => void;
 }) {
   const { machine, items } = checklist;
@@ -51,7 +54,7 @@ export function WalkaroundForm({
   const [errors, setErrors] = useState<SubmissionErrors>(NO_ERRORS);
   const [sending, setSending] = useState(false);
   const formRef = useRef<HTMLFormElement>(null);
-  const photos = useItemPhotos(orgId, machine.id, (itemId, photo) =>
+  const photos = useItemPhotos(orgId, machine.id, draft.clientId, (itemId, photo) =>
     updateAnswer(itemId, { photo }),
   );
   const answered = items.filter((item) => draft.answers[item.id]?.result).length;
@@ -81,7 +84,7 @@ export function WalkaroundForm({
     if (sending) return;
     setSending(true);
     try {
-      const { uploaded, leftOut } = await photos.uploadWaiting();
+      const { uploaded, waiting } = await photos.uploadWaiting();
       const answers = { ...draft.answers };
       for (const [itemId, photo] of Object.entries(uploaded))
         answers[itemId] = { ...answers[itemId], photo };
@@ -102,7 +105,9 @@ export function WalkaroundForm({
         return;
       }
       setErrors(NO_ERRORS);
-      onSent(await send(built.input, leftOut));
+      const result = await send(built.input, waiting);
+      void photos.clearStored();
+      onSent(result);
     } catch (error) {
       const next = serverErrors(error);
       setErrors(next);

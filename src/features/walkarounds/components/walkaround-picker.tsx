@@ -12,7 +12,7 @@ import { formatMeter } from '../../../lib/fleet-format';
 import { usePickableMachines } from '../api/get-pickable-machines';
 import type { PickableMachine } from '../api/types';
 import { loadDraft } from '../lib/draft';
-import { OutboxList } from './outbox-list';
+import { OutboxPanel } from '../../../components/outbox/outbox-panel';
 import { TagOutExplanation } from './tag-out-explanation';
 
 /** Past this many machines the list gets a search box. */
@@ -68,7 +68,7 @@ export function WalkaroundPicker({
 
   return (
     <div className="flex flex-col gap-4">
-      <OutboxList orgId={orgId} userId={userId} timeZone={timeZone} />
+      <OutboxPanel orgId={orgId} userId={userId} timeZone={timeZone} />
       {machines.data.length === 0 ? (
         <EmptyState icon="field" title="No machines to walk round">
           <p>{emptyHint}</p>

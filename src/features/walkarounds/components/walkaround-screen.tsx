@@ -10,7 +10,8 @@ import { formatDateTime } from '../../../lib/format';
 import { useChecklist } from '../api/get-checklist';
 import { usePickableMachines } from '../api/get-pickable-machines';
 import type { Checklist } from '../api/types';
-import { useOutbox } from '../lib/use-outbox';
+import { useOutbox } from '../../../lib/outbox/use-outbox';
+import { queuedWalkarounds } from '../lib/queued-walkarounds';
 import { useSendWalkaround, type SendResult } from '../lib/use-send-walkaround';
 import { useWalkaroundDraft } from '../lib/use-walkaround-draft';
 import { QueuedWalkaround } from './queued-walkaround';
@@ -92,7 +93,7 @@ export function WalkaroundScreen(props: WalkaroundScreenProps) {
       <QueuedWalkaround
         clientId={result.clientId}
         fleetNumber={fleetNumber ?? 'this machine'}
-        photosLeftOut={result.photosLeftOut}
+        photosWaiting={result.photosWaiting}
         pickHref={hrefs.pick}
         defectsHref={hrefs.defects}
         onDiscarded={() => {
@@ -162,9 +163,9 @@ function ReadyScreen({
   draftApi: ReturnType<typeof useWalkaroundDraft>;
   onSent: (result: SendResult) => void;
 }) {
-  const { items: queue } = useOutbox();
-  const waiting = queue.filter(
-    (item) => item.machine.id === checklist.machine.id && item.userId === userId,
+  const { entries } = useOutbox();
+  const waiting = queuedWalkarounds(entries).filter(
+    (item) => item.input.machineId === checklist.machine.id && item.entry.userId === userId,
   );
   const send = useSendWalkaround({
     orgId,
@@ -195,7 +196,7 @@ function ReadyScreen({
           {checklist.machine.fleetNumber} from this phone {waiting.length === 1 ? 'is' : 'are'}{' '}
           still waiting to be sent (done{' '}
           {waiting
-            .map((item) => formatDateTime(item.input.performedAt ?? item.queuedAt, timeZone))
+            .map((item) => formatDateTime(item.input.performedAt ?? item.entry.queuedAt, timeZone))
             .join(', ')}
           ). Start this one only for a new check.
         </p>

@@ -4,18 +4,18 @@ import type { WalkaroundCreateInput } from '../../../../shared/schemas/walkaroun
 import { isApiError } from '../../../lib/api-client';
 import { submitWalkaround } from '../api/submit-walkaround';
 import type { MachineRef, WalkaroundOutcome } from '../api/types';
-import { enqueueWalkaround } from './outbox';
+import { enqueueWalkaround } from './queued-walkarounds';
 import { changedBy, invalidate } from '../../../lib/invalidation';
 import { queryKeys } from '../../../lib/query-keys';
 
 export type SendResult =
   | { kind: 'sent'; outcome: WalkaroundOutcome }
-  | { kind: 'queued'; clientId: string; photosLeftOut: number };
+  | { kind: 'queued'; clientId: string; photosWaiting: number };
 
 /**
- * Sends a finished walkaround, or keeps it on the phone when there is no connection (the browser
- * says it is offline, or the request never reached the server). Errors the server answered
- * (422, 409) are thrown for the form to show.
+ * Sends a finished walkaround, or keeps it on the phone with its photos when there is no
+ * connection (the browser says it is offline, or the request never reached the server). Errors
+ * the server answered (422, 409) are thrown for the form to show.
  */
 export function useSendWalkaround({
   orgId,
@@ -31,20 +31,23 @@ export function useSendWalkaround({
 }) {
   const queryClient = useQueryClient();
   return useCallback(
-    async (input: WalkaroundCreateInput, photosLeftOut: number): Promise<SendResult> => {
-      const queue = (): SendResult => {
-        enqueueWalkaround({
-          clientId: input.clientId,
+    async (
+      input: WalkaroundCreateInput,
+      waitingPhotos: ReadonlyMap<string, File>,
+    ): Promise<SendResult> => {
+      const queue = async (): Promise<SendResult> => {
+        await enqueueWalkaround({
           orgId,
           userId,
-          machine: { id: machine.id, fleetNumber: machine.fleetNumber, name: machine.name },
+          fleetNumber: machine.fleetNumber,
           input,
-          queuedAt: new Date().toISOString(),
+          photos: waitingPhotos,
         });
         onDone();
-        return { kind: 'queued', clientId: input.clientId, photosLeftOut };
+        return { kind: 'queued', clientId: input.clientId, photosWaiting: waitingPhotos.size };
       };
-      if (!navigator.onLine) return queue();
+      // a photo not uploaded yet goes with the queued walkaround, which uploads it first
+      if (!navigator.onLine || waitingPhotos.size > 0) return queue();
       try {
         const outcome = await submitWalkaround(orgId, input);
         onDone();
