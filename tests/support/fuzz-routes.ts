@@ -17,7 +17,8 @@ export interface WriteRoute {
   /** OpenAPI path, e.g. /organizations/{orgId}/machines */
   path: string;
   schema: JsonSchema;
-  access: 'public' | 'user' | 'org';
+  /** 'apiKey': sent with the world's organization API key and no session (telematics) */
+  access: 'public' | 'user' | 'org' | 'apiKey';
 }
 
 /** Dealer-side routes: called by the dealer's advisor on the dealer's own organization. */
@@ -39,9 +40,11 @@ const BOOKKEEPING_TABLES = new Set([
 ]);
 /** Rows a refused request may add by design: the log of farm data a dealer read before it. */
 const BOOKKEEPING_ROWS: Record<string, string> = { audit_events: "action <> 'dealer.read'" };
+/** Columns a refused request may write by design: a key's last use (it was used, then refused). */
+const BOOKKEEPING_COLUMNS: Record<string, string> = { api_keys: 'last_used_at' };
 
 type Operation = {
-  security?: unknown[];
+  security?: Record<string, unknown>[];
   requestBody?: { content: Record<string, { schema: JsonSchema }> };
 };
 
@@ -64,9 +67,11 @@ export function writeRoutes(): { routes: WriteRoute[]; skipped: string[] } {
       }
       const access = !op.security
         ? 'public'
-        : path.startsWith('/organizations/{orgId}')
-          ? 'org'
-          : 'user';
+        : op.security.some((s) => 'apiKey' in s)
+          ? 'apiKey'
+          : path.startsWith('/organizations/{orgId}')
+            ? 'org'
+            : 'user';
       routes.push({ method, path, schema: json.schema, access });
     }
   }
@@ -102,6 +107,10 @@ export function fuzzHints(w: PopulatedWorld): FuzzHints {
     itemId: w.checklistItemIds,
     // e-mail fields are plain strings in the document (trimmed and lower-cased before the check)
     email: [w.emails.advisor, w.emails.technician, 'new.person@example.com'],
+    // an ISO 15143-3 snapshot names the world's machine by its serial number or telematics id
+    SerialNumber: [w.serialNumber, 'NOT-OURS-1'],
+    PIN: [w.serialNumber],
+    EquipmentID: [w.serialNumber],
   };
   const numbers = {
     value: [4400, 4600, 5200],
@@ -109,6 +118,7 @@ export function fuzzHints(w: PopulatedWorld): FuzzHints {
     lastDoneMeter: [4000, 4300],
     oldFinalValue: [4400],
     newStartValue: [0, 12],
+    Hour: [4400, 4600],
   };
   const dates = {
     performedOn: [farmDay(0), farmDay(-2)],
@@ -118,6 +128,7 @@ export function fuzzHints(w: PopulatedWorld): FuzzHints {
     takenAt: [hoursAgo(1), hoursAgo(72)],
     performedAt: [hoursAgo(0.5)],
     replacedAt: [hoursAgo(48)],
+    datetime: [hoursAgo(1), hoursAgo(2)],
   };
   const all = [...Object.values(i), w.farmId, w.dealerId];
   return { byField, all, emails: [w.emails.advisor, w.emails.technician], numbers, dates };
@@ -136,6 +147,8 @@ function pathParams(w: PopulatedWorld, dealerSide: boolean): Record<string, stri
     linkId: i.linkId,
     bookingId: i.bookingId,
     customerId: w.farmId,
+    keyId: i.apiKeyId,
+    machine: i.machineId,
     id: i.membershipId,
     token: randomBytes(32).toString('base64url'),
   };
@@ -171,10 +184,10 @@ export class RouteFuzzer {
       this.tables = rows.map((r) => r.tablename).filter((t) => !BOOKKEEPING_TABLES.has(t));
     }
     const sql = this.tables
-      .map(
-        (t) =>
-          `SELECT '${t}' AS t, count(*) || ':' || md5(coalesce(string_agg(x::text, '|' ORDER BY x::text), '')) AS f FROM "${t}" x${BOOKKEEPING_ROWS[t] ? ` WHERE ${BOOKKEEPING_ROWS[t]}` : ''}`,
-      )
+      .map((t) => {
+        const row = BOOKKEEPING_COLUMNS[t] ? `(to_jsonb(x) - '${BOOKKEEPING_COLUMNS[t]}')` : 'x';
+        return `SELECT '${t}' AS t, count(*) || ':' || md5(coalesce(string_agg(${row}::text, '|' ORDER BY ${row}::text), '')) AS f FROM "${t}" x${BOOKKEEPING_ROWS[t] ? ` WHERE ${BOOKKEEPING_ROWS[t]}` : ''}`;
+      })
       .join(' UNION ALL ');
     const rows = await sequelize.query<{ t: string; f: string }>(sql, { type: QueryTypes.SELECT });
     return new Map(rows.map((r) => [r.t, r.f]));
@@ -191,15 +204,19 @@ export class RouteFuzzer {
     const params = pathParams(w, dealerSide);
     const url = `/api/v1${route.path.replace(/\{(\w+)\}/g, (_m, name: string) => params[name] ?? randomUUID())}`;
     const client =
-      route.access === 'public' ? request(this.app) : dealerSide ? w.advisor : w.manager;
+      route.access === 'public' || route.access === 'apiKey'
+        ? request(this.app)
+        : dealerSide
+          ? w.advisor
+          : w.manager;
     const xidBefore = await nextTransactionId();
     if (!this.last || xidBefore !== this.lastXid) {
       this.last = await this.fingerprint();
       this.lastXid = xidBefore;
     }
-    const res = await client[route.method](url)
-      .set('Content-Type', 'application/json')
-      .send('raw' in body ? body.raw : JSON.stringify(body.json));
+    let req = client[route.method](url).set('Content-Type', 'application/json');
+    if (route.access === 'apiKey') req = req.set('Authorization', `Bearer ${w.apiKey}`);
+    const res = await req.send('raw' in body ? body.raw : JSON.stringify(body.json));
     const xidAfter = await nextTransactionId();
     let changed: string[] = [];
     if (xidAfter !== xidBefore) {

@@ -36,9 +36,14 @@ export interface PopulatedWorld {
     managerUserId: string;
     technicianUserId: string;
     operatorUserId: string;
+    /** the farm's API key (api-keys/:keyId) */
+    apiKeyId: string;
   };
   emails: { advisor: string; technician: string };
   checklistItemIds: string[];
+  /** the farm's API key (the telematics routes take it) and its machine's serial number */
+  apiKey: string;
+  serialNumber: string;
 }
 
 async function send(agent: Agent, method: 'post' | 'patch' | 'put', url: string, body: object) {
@@ -201,7 +206,12 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
     severity: 'critical',
   });
 
+  const key = await send(agent, 'post', `/organizations/${farm.id}/api-keys`, {
+    name: 'World feed',
+  });
   return {
+    apiKey: key.secret,
+    serialNumber: machine.serialNumber,
     farmId: farm.id,
     dealerId: dealer.id,
     manager: agent,
@@ -221,6 +231,7 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
       managerUserId: manager.id,
       technicianUserId: tech.id,
       operatorUserId: op.id,
+      apiKeyId: key.id,
     },
     emails: { advisor: advisorUser.email, technician: tech.email },
     checklistItemIds: (template.items as { id: string }[]).map((item) => item.id),

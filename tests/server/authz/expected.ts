@@ -32,6 +32,8 @@ function row(ok: Caller[], forbidden: Caller[] = [], also: Partial<Row> = {}): R
 }
 /** A public route: the token or credentials decide, not the caller. */
 const everyone = (): Row => ({ ...row([...CALLERS]), anonymous: '2xx' });
+/** A route an API key reaches and no session does: every caller is refused as not signed in. */
+const keyOnly = (): Row => Object.fromEntries(CALLERS.map((c) => [c, 401])) as Row;
 /** Any signed-in person. */
 const signedIn = (also: Partial<Row> = {}): Row => row([...SIGNED_IN], [], also);
 
@@ -250,6 +252,13 @@ export const EXPECTED: Record<string, Row> = {
   'POST /organizations/{orgId}/bookings/{bookingId}/accept': managers,
   'POST /organizations/{orgId}/bookings/{bookingId}/decline': managers,
   'POST /organizations/{orgId}/bookings/{bookingId}/cancel': dealerSide,
+  // machine-data keys: the farm manager's settings (issue 13)
+  'GET /organizations/{orgId}/api-keys': managers,
+  'POST /organizations/{orgId}/api-keys': managers,
+  'DELETE /organizations/{orgId}/api-keys/{keyId}': managers,
+  // only an API key reaches these: a session, whoever holds it, is refused as not signed in
+  'POST /telematics/iso15143-3': keyOnly(),
+  'POST /telematics/machines/{machine}/j1939': keyOnly(),
 };
 
 /** The documented route a table key names (its variant, after " · ", left off). */

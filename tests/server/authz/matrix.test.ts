@@ -14,6 +14,7 @@ import { WORK_CASES } from './cases-work';
 import { ORG_CASES } from './cases-org';
 import { DEALER_CASES } from './cases-dealers';
 import { ACCOUNT_CASES } from './cases-account';
+import { KEY_CASES } from './cases-keys';
 import {
   app,
   changedTables,
@@ -34,6 +35,7 @@ const CASES: Record<string, Case> = {
   ...ORG_CASES,
   ...DEALER_CASES,
   ...ACCOUNT_CASES,
+  ...KEY_CASES,
 };
 
 async function documentedRoutes(): Promise<string[]> {
