@@ -11,6 +11,7 @@ import {
 } from '../server/services/reminder-mail';
 import { todayIso } from '../shared/domain';
 import { localDaysSince, staleCutoff } from '../server/services/stale-meters';
+import { PRIMARY_FORECAST_JOIN } from '../server/services/primary-forecast';
 import { loadJobSchedule } from './schedule';
 import { withJobLock } from './lock';
 
@@ -41,7 +42,7 @@ async function staleAssignments(farm: ReminderFarm, month: number, cutoff: Date)
      JOIN memberships ms ON ms.organization_id = mo.organization_id AND ms.user_id = mo.user_id
      JOIN users u ON u.id = mo.user_id
      JOIN machines m ON m.id = mo.machine_id AND m.organization_id = mo.organization_id
-     LEFT JOIN machine_forecasts f ON f.machine_id = m.id AND f.organization_id = m.organization_id
+     ${PRIMARY_FORECAST_JOIN}
      WHERE mo.organization_id = :org AND m.status = 'in_service'
        AND (cardinality(m.season_months) = 0 OR :month = ANY(m.season_months))
        AND coalesce(f.last_taken_at, m.created_at) < :cutoff

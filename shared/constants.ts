@@ -52,6 +52,52 @@ export const METER_UNIT_LABELS: Record<MeterUnit, string> = {
   acres: 'acres',
 };
 
+// Several meters per machine (issue 13, migration 0026): each meter has a kind, and its unit
+// follows from the kind. A machine's first meter (its primary) comes from its meter unit.
+export const METER_KINDS = [
+  'engine_hours',
+  'separator_hours',
+  'pto_hours',
+  'bales',
+  'km',
+  'miles',
+  'hectares',
+  'acres',
+] as const;
+export type MeterKind = (typeof METER_KINDS)[number];
+export const METER_KIND_UNITS: Record<MeterKind, MeterUnit> = {
+  engine_hours: 'h',
+  separator_hours: 'h',
+  pto_hours: 'h',
+  bales: 'bales',
+  km: 'km',
+  miles: 'mi',
+  hectares: 'ha',
+  acres: 'acres',
+};
+export const METER_KIND_LABELS: Record<MeterKind, string> = {
+  engine_hours: 'Engine hours',
+  separator_hours: 'Separator hours',
+  pto_hours: 'PTO hours',
+  bales: 'Bale counter',
+  km: 'Odometer (km)',
+  miles: 'Odometer (miles)',
+  hectares: 'Area (ha)',
+  acres: 'Area (acres)',
+};
+/** The kind of a machine's primary meter when only its meter unit is known. */
+export const PRIMARY_KIND_OF_UNIT: Record<MeterUnit, MeterKind> = {
+  h: 'engine_hours',
+  km: 'km',
+  mi: 'miles',
+  bales: 'bales',
+  ha: 'hectares',
+  acres: 'acres',
+};
+/** A meter replacement, or a counter zeroed on the same meter (recorded alike, issue 13). */
+export const METER_CHANGE_KINDS = ['replacement', 'reset'] as const;
+export type MeterChangeKind = (typeof METER_CHANGE_KINDS)[number];
+
 export const MACHINE_STATUSES = ['in_service', 'tagged_out', 'sold'] as const;
 export type MachineStatus = (typeof MACHINE_STATUSES)[number];
 export const MACHINE_STATUS_LABELS: Record<MachineStatus, string> = {

@@ -115,31 +115,37 @@ async function withoutChecks(client: pg.Client, table: string, fn: () => Promise
   }
 }
 
-/** The app's full summary of each machine (summaryOf over every reading), stored 100 at a time. */
+/**
+ * The app's full summary of each machine's meter (summaryOf over every reading; the summary is
+ * per meter since migration 0026), stored 100 machines at a time.
+ */
 async function summarise(machines: BenchMachine[], timeZoneOf: Map<string, string>) {
   for (let i = 0; i < machines.length; i += 100) {
     const chunk = machines.slice(i, i + 100);
     const org = chunk[0].organizationId;
     const ids = chunk.filter((m) => m.organizationId === org).map((m) => m.id);
     const readings = await sequelize.query<{
-      machine_id: string;
-      value: number;
-      lifetime_value: number;
-      taken_at: Date;
+      meter_id: string;
+      value: number | null;
+      lifetime_value: number | null;
+      taken_at: Date | null;
     }>(
-      `SELECT machine_id, value, lifetime_value, taken_at FROM meter_readings
-       WHERE organization_id = :org AND machine_id IN (:ids) ORDER BY machine_id, taken_at, lifetime_value`,
+      `SELECT mm.id AS meter_id, r.value, r.lifetime_value, r.taken_at FROM machine_meters mm
+       LEFT JOIN meter_readings r ON r.organization_id = mm.organization_id AND r.meter_id = mm.id
+       WHERE mm.organization_id = :org AND mm.machine_id IN (:ids)
+       ORDER BY mm.id, r.taken_at, r.lifetime_value`,
       { replacements: { org, ids }, type: QueryTypes.SELECT },
     );
-    const byMachine = new Map<string, { value: number; lifetimeValue: number; takenAt: Date }[]>(
-      ids.map((id) => [id, []]),
-    );
-    for (const r of readings)
-      byMachine.get(r.machine_id)!.push({
+    const byMachine = new Map<string, { value: number; lifetimeValue: number; takenAt: Date }[]>();
+    for (const r of readings) {
+      if (!byMachine.has(r.meter_id)) byMachine.set(r.meter_id, []);
+      if (r.taken_at === null) continue;
+      byMachine.get(r.meter_id)!.push({
         value: Number(r.value),
         lifetimeValue: Number(r.lifetime_value),
         takenAt: new Date(r.taken_at),
       });
+    }
     const timeZone = timeZoneOf.get(org)!;
     const summaries = new Map([...byMachine].map(([id, rs]) => [id, summaryOf(rs, timeZone)]));
     await storeForecasts(org, summaries, { timeZone });

@@ -11,12 +11,12 @@ import { createApp } from '../../server/app';
 import {
   Machine,
   Membership,
-  MachineForecast,
   Organization,
   ServiceTask,
   User,
 } from '../../server/models';
 import { refreshMachineForecast } from '../../server/services/forecast';
+import { primaryForecastOf } from '../../server/services/primary-forecast';
 import { dueListSql, staleSql } from '../../server/services/due-list';
 import { dueCountsSql } from '../../server/services/due-counts';
 import {
@@ -154,7 +154,7 @@ const apiMs = await time(RUNS, async () => {
 // 2. One reading posted and the machine's due points refreshed vs a bare INSERT of one reading row.
 const postMs = await time(RUNS * 2, async (i) => {
   const m = machines[i];
-  const f = (await MachineForecast.findByPk(m.id))!;
+  const f = (await primaryForecastOf(m))!;
   const res = await agent
     .post(`/api/v1/organizations/${org.id}/machines/${m.id}/readings`)
     .send({ value: (f.lastValue ?? 0) + 3, takenAt: new Date().toISOString() });
@@ -169,7 +169,7 @@ const insertMs = await time(RUNS * 2, (i) =>
 );
 
 // 3. Forecast of one machine from its full history (two years of daily points, 10 tasks) vs one pass over the points.
-const forecast = (await MachineForecast.findByPk(machines[1].id))!;
+const forecast = (await primaryForecastOf(machines[1]))!;
 const tasks = await ServiceTask.findAll({
   where: { organizationId: org.id, machineId: machines[1].id },
 });

@@ -55,7 +55,7 @@ app.post('/machines/:machineId/readings', async (req, res) => {
       `INSERT INTO machine_forecasts (machine_id, organization_id, daily, reading_count, last_value, last_raw_value,
                                       last_taken_at, first_taken_at, first_value, usage, computed_on, updated_at)
        VALUES ($1, $2, $3, $4, $5, $5, $6, $6, 0, $7, $8, now())
-       ON CONFLICT (machine_id) DO UPDATE SET daily = excluded.daily, reading_count = excluded.reading_count,
+       ON CONFLICT (meter_id) DO UPDATE SET daily = excluded.daily, reading_count = excluded.reading_count,
          last_value = excluded.last_value, last_raw_value = excluded.last_raw_value,
          last_taken_at = excluded.last_taken_at, usage = excluded.usage, computed_on = excluded.computed_on,
          updated_at = excluded.updated_at`,

@@ -12,6 +12,7 @@ import { CalendarFeed } from './calendar-feed';
 import { AuditEvent } from './audit-event';
 import { Machine, MachineOperator } from './machine';
 import { MachineSpecSheet } from './machine-spec-sheet';
+import { MachineMeter } from './machine-meter';
 import { MeterReading, MeterReplacement } from './meter-reading';
 import { ServiceTask } from './service-task';
 import { ScheduleTemplate } from './schedule-template';
@@ -29,7 +30,8 @@ Session.belongsTo(User, { foreignKey: 'userId', as: 'user' });
 Invitation.belongsTo(Organization, { foreignKey: 'organizationId', as: 'organization' });
 Machine.hasMany(ServiceTask, { foreignKey: 'machineId', as: 'tasks' });
 Machine.hasMany(MachineOperator, { foreignKey: 'machineId', as: 'operators' });
-Machine.hasOne(MachineForecast, { foreignKey: 'machineId', as: 'forecast' });
+Machine.hasMany(MachineMeter, { foreignKey: 'machineId', as: 'meters' });
+MachineForecast.belongsTo(MachineMeter, { foreignKey: 'meterId', as: 'meter' });
 ServiceTask.belongsTo(Machine, { foreignKey: 'machineId', as: 'machine' });
 ServiceTask.hasOne(TaskDuePoint, { foreignKey: 'taskId', as: 'duePoint' });
 DealerLink.belongsTo(Organization, { foreignKey: 'dealerOrganizationId', as: 'dealer' });
@@ -50,6 +52,7 @@ export {
   Machine,
   MachineOperator,
   MachineSpecSheet,
+  MachineMeter,
   MeterReading,
   MeterReplacement,
   ServiceTask,

@@ -9,11 +9,12 @@ import { sequelize } from '../db';
 import { numericColumn } from './columns';
 import type { ReadingPoint, UsageEstimate, DuePoint } from '../../shared/domain/types';
 
-/** Per-machine summary of its readings, rewritten whenever a reading changes. */
+/** Per-meter summary of its readings (keyed by meter since migration 0026), kept with every reading write. */
 export class MachineForecast extends Model<
   InferAttributes<MachineForecast>,
   InferCreationAttributes<MachineForecast>
 > {
+  declare meterId: string;
   declare machineId: string;
   declare organizationId: string;
   /** one point per local day that has readings: the day's last lifetime value */
@@ -33,7 +34,8 @@ export class MachineForecast extends Model<
 
 MachineForecast.init(
   {
-    machineId: { type: DataTypes.UUID, primaryKey: true },
+    meterId: { type: DataTypes.UUID, primaryKey: true },
+    machineId: { type: DataTypes.UUID, allowNull: false },
     organizationId: { type: DataTypes.UUID, allowNull: false },
     daily: { type: DataTypes.JSONB, allowNull: false, defaultValue: [] },
     readingCount: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },

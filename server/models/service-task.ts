@@ -17,6 +17,8 @@ export class ServiceTask extends Model<
   declare id: CreationOptional<string>;
   declare organizationId: string;
   declare machineId: string;
+  /** the meter its interval counts on (migration 0026); left out, the machine's primary meter */
+  declare meterId: CreationOptional<string>;
   declare name: string;
   declare intervalMeter: number | null;
   declare intervalDays: number | null;
@@ -52,6 +54,8 @@ ServiceTask.init(
     id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
     organizationId: { type: DataTypes.UUID, allowNull: false },
     machineId: { type: DataTypes.UUID, allowNull: false },
+    // NOT NULL in the table; left out, the database binds the primary meter (migration 0026)
+    meterId: { type: DataTypes.UUID, allowNull: true },
     name: { type: DataTypes.TEXT, allowNull: false },
     intervalMeter: numericColumn('intervalMeter', 12, 2, true),
     intervalDays: { type: DataTypes.INTEGER, allowNull: true },

@@ -6,6 +6,7 @@ import type {
 
 export const presentReading = (r: MeterReading): Reading => ({
   id: r.id,
+  meterId: r.meterId,
   value: r.value,
   lifetimeValue: r.lifetimeValue,
   takenAt: r.takenAt.toISOString(),
@@ -15,6 +16,8 @@ export const presentReading = (r: MeterReading): Reading => ({
 
 export const presentReplacement = (r: MeterReplacement): MeterReplacementJson => ({
   id: r.id,
+  meterId: r.meterId,
+  kind: r.kind,
   replacedAt: r.replacedAt.toISOString(),
   oldFinalValue: r.oldFinalValue,
   newStartValue: r.newStartValue,

@@ -41,16 +41,17 @@ export async function dailyCareOf(
       transaction,
     }),
     MachineForecast.findAll({
-      where: { organizationId, machineId: { [Op.in]: machineIds } },
-      attributes: ['machineId', 'lastValue'],
+      where: { organizationId, meterId: { [Op.in]: [...new Set(tasks.map((t) => t.meterId))] } },
+      attributes: ['meterId', 'lastValue'],
       transaction,
     }),
   ]);
   const statusOf = new Map(points.map((p) => [p.taskId, p.status]));
-  const lastValueOf = new Map(forecasts.map((f) => [f.machineId, f.lastValue]));
+  // each task counts on its own meter's last reading
+  const lastValueOf = new Map(forecasts.map((f) => [f.meterId, f.lastValue]));
   const today = todayIso(timeZone, options.now);
   for (const task of tasks) {
-    const last = lastValueOf.get(task.machineId) ?? null;
+    const last = lastValueOf.get(task.meterId) ?? null;
     const item: DailyCareItem = {
       taskId: task.id,
       name: task.name,

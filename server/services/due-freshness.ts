@@ -10,12 +10,12 @@ import { ensureDuePointsCurrent } from './forecast';
 
 /**
  * The farms (of those given, each with its local today) with a forecast not computed today, or
- * with a machine that has no forecast yet (fewer forecasts than machines).
+ * with a meter that has no forecast yet (fewer forecasts than meters).
  */
 const STALE_FARMS_SQL = `SELECT h.id FROM unnest(ARRAY[:ids]::uuid[], ARRAY[:asOfs]::date[]) AS h(id, as_of)
   WHERE EXISTS (SELECT 1 FROM machine_forecasts f WHERE f.organization_id = h.id
                   AND (f.computed_on IS NULL OR f.computed_on < h.as_of OR f.computed_on > h.as_of))
-     OR (SELECT count(*) FROM machines m WHERE m.organization_id = h.id)
+     OR (SELECT count(*) FROM machine_meters m WHERE m.organization_id = h.id)
         > (SELECT count(*) FROM machine_forecasts f WHERE f.organization_id = h.id)`;
 
 export interface FarmClock {

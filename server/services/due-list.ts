@@ -8,6 +8,7 @@ import type { DueQuery } from '../../shared/schemas/readings';
 import type { DueRow } from '../../shared/schemas/due';
 import { bringDuePointsCurrent, readCurrent } from './due-freshness';
 import { dueCounts } from './due-counts';
+import { PRIMARY_FORECAST_JOIN } from './primary-forecast';
 import { localDaysSince, staleCutoff } from './stale-meters';
 import {
   DUE_ORDER,
@@ -129,7 +130,7 @@ export async function dueList(
 /** The SQL of the stale-meter list (replacements :org, :user, :month, :cutoff). */
 export const staleSql = (operator: boolean) =>
   `SELECT m.id, m.fleet_number, m.name, f.last_taken_at
-     FROM machines m LEFT JOIN machine_forecasts f ON f.machine_id = m.id AND f.organization_id = m.organization_id
+     FROM machines m ${PRIMARY_FORECAST_JOIN}
      WHERE m.organization_id = :org AND m.status <> 'sold'
        AND (cardinality(m.season_months) = 0 OR :month = ANY(m.season_months))
        AND (f.last_taken_at IS NULL OR f.last_taken_at < :cutoff)

@@ -4,7 +4,8 @@
 import { Op, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { AppError, invalid } from '../errors';
-import { Machine, MachineForecast, ScheduleTemplate, ServiceTask, TaskDuePoint } from '../models';
+import { Machine, ScheduleTemplate, ServiceTask, TaskDuePoint } from '../models';
+import { primaryForecastOf } from './primary-forecast';
 import { todayIso } from '../../shared/domain';
 import type {
   FleetImportPreview,
@@ -128,7 +129,7 @@ async function writeRow(access: OrgAccess, plan: RowPlan, transaction: Transacti
   }
   const errors: string[] = [];
   if (plan.lastDone.length) {
-    const forecast = await MachineForecast.findByPk(machine.id, { transaction });
+    const forecast = await primaryForecastOf(machine, transaction);
     const today = todayIso(access.organization.timeZone);
     for (const { taskName, input } of plan.lastDone) {
       const task = tasks.find((t) => t.name.toLowerCase() === taskName.toLowerCase())!;

@@ -14,6 +14,7 @@ export type DueTask = Pick<
   ServiceTask,
   | 'id'
   | 'machineId'
+  | 'meterId'
   | 'intervalMeter'
   | 'intervalDays'
   | 'firstServiceMeter'
@@ -29,7 +30,7 @@ export type DueTask = Pick<
 >;
 
 /** The select list of a DueTask row from service_tasks (meter figures as float8: numbers). */
-export const DUE_TASK_COLUMNS = `id, machine_id AS "machineId", interval_meter::float8 AS "intervalMeter",
+export const DUE_TASK_COLUMNS = `id, machine_id AS "machineId", meter_id AS "meterId", interval_meter::float8 AS "intervalMeter",
   interval_days AS "intervalDays", first_service_meter::float8 AS "firstServiceMeter",
   warn_meter::float8 AS "warnMeter", warn_days AS "warnDays",
   last_done_meter::float8 AS "lastDoneMeter", last_done_on AS "lastDoneOn",
@@ -49,13 +50,14 @@ export function dueTasksOf(
   return sequelize.query<DueTask>(
     `SELECT ${DUE_TASK_COLUMNS} FROM service_tasks
      WHERE organization_id = $1 AND machine_id = ANY($2::uuid[])
-     ORDER BY machine_id, position`,
+     ORDER BY meter_id, position`,
     { bind: [organizationId, machineIds], type: QueryTypes.SELECT, transaction },
   );
 }
 
 export type ForecastRow = InferCreationAttributes<MachineForecast>;
-export type DueRow = InferCreationAttributes<TaskDuePoint>;
+/** A due point row, with its task's meter (which statement it goes in; not a column). */
+export type DueRow = InferCreationAttributes<TaskDuePoint> & { meterId: string };
 
 const SUMMARY_SET = `daily = excluded.daily, reading_count = excluded.reading_count,
   last_value = excluded.last_value, last_raw_value = excluded.last_raw_value,
@@ -63,16 +65,16 @@ const SUMMARY_SET = `daily = excluded.daily, reading_count = excluded.reading_co
   first_value = excluded.first_value,`;
 
 const upsertForecastsSql = (param: string, summary: boolean) => `INSERT INTO machine_forecasts
-    (machine_id, organization_id, daily, reading_count, last_value, last_raw_value, last_taken_at,
-     first_taken_at, first_value, usage, computed_on, updated_at)
-  SELECT r."machineId", r."organizationId", r.daily, r."readingCount", r."lastValue",
+    (meter_id, machine_id, organization_id, daily, reading_count, last_value, last_raw_value,
+     last_taken_at, first_taken_at, first_value, usage, computed_on, updated_at)
+  SELECT r."meterId", r."machineId", r."organizationId", r.daily, r."readingCount", r."lastValue",
     r."lastRawValue", r."lastTakenAt", r."firstTakenAt", r."firstValue", r.usage, r."computedOn",
     r."updatedAt"
-  FROM jsonb_to_recordset(${param}::jsonb) AS r("machineId" uuid, "organizationId" uuid,
-    daily jsonb, "readingCount" integer, "lastValue" numeric, "lastRawValue" numeric,
+  FROM jsonb_to_recordset(${param}::jsonb) AS r("meterId" uuid, "machineId" uuid,
+    "organizationId" uuid, daily jsonb, "readingCount" integer, "lastValue" numeric, "lastRawValue" numeric,
     "lastTakenAt" timestamptz, "firstTakenAt" timestamptz, "firstValue" numeric, usage jsonb,
     "computedOn" date, "updatedAt" timestamptz)
-  ON CONFLICT (machine_id) DO UPDATE SET ${summary ? SUMMARY_SET : ''}
+  ON CONFLICT (meter_id) DO UPDATE SET ${summary ? SUMMARY_SET : ''}
     usage = excluded.usage, computed_on = excluded.computed_on, updated_at = excluded.updated_at
   RETURNING 1`;
 
@@ -87,12 +89,12 @@ const upsertDuePointsSql = (param: string) => `INSERT INTO task_due_points
     due = excluded.due, computed_on = excluded.computed_on, updated_at = excluded.updated_at
   RETURNING 1`;
 
-// Machines per statement: a fleet-wide refresh stays a few statements of bounded size.
-const MACHINES_PER_STATEMENT = 500;
+// Meters per statement: a fleet-wide refresh stays a few statements of bounded size.
+const METERS_PER_STATEMENT = 500;
 
 /**
- * Writes machines' forecast rows and due points, with their new readings when given, in one
- * statement per 500 machines (each part a data-modifying CTE). With `summary` false an existing
+ * Writes meters' forecast rows and due points, with their new readings when given, in one
+ * statement per 500 meters (each part a data-modifying CTE). With `summary` false an existing
  * forecast row keeps its summary columns and takes only the usage: a refresh that does not hold
  * the machine's lock then never writes back a summary a reading write changed meanwhile.
  * Returns the stored readings in the order given.
@@ -102,11 +104,12 @@ export async function writeForecasts(
   options: { summary: boolean; transaction?: Transaction },
 ): Promise<MeterReading[]> {
   const stored: Record<string, unknown>[] = [];
-  for (let i = 0; i < rows.forecasts.length; i += MACHINES_PER_STATEMENT) {
-    const forecasts = rows.forecasts.slice(i, i + MACHINES_PER_STATEMENT);
-    const ids = new Set(forecasts.map((f) => f.machineId));
-    const duePoints = rows.duePoints.filter((d) => ids.has(d.machineId));
-    const readings = (rows.readings ?? []).filter((r) => ids.has(r.machineId));
+  for (let i = 0; i < rows.forecasts.length; i += METERS_PER_STATEMENT) {
+    const forecasts = rows.forecasts.slice(i, i + METERS_PER_STATEMENT);
+    const one = rows.forecasts.length <= METERS_PER_STATEMENT;
+    const ids = new Set(forecasts.map((f) => f.meterId));
+    const duePoints = one ? rows.duePoints : rows.duePoints.filter((d) => ids.has(d.meterId));
+    const readings = one ? (rows.readings ?? []) : (rows.readings ?? []).filter((r) => ids.has(r.meterId));
     const parts = [
       `forecasts AS (${upsertForecastsSql('$1', options.summary)})`,
       `due_points AS (${upsertDuePointsSql('$2')})`,

@@ -1,6 +1,6 @@
 import { Op, QueryTypes, type InferCreationAttributes, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
-import { Machine, MachineForecast, Organization, type MeterReading, TaskDuePoint } from '../models';
+import { Machine, MachineForecast, MachineMeter, Organization, type MeterReading } from '../models';
 import {
   computeDuePoint,
   estimateUsage,
@@ -10,7 +10,7 @@ import {
   type DuePoint,
   type UsageEstimate,
 } from '../../shared/domain';
-import { dueTasksOf, writeForecasts, type DueTask } from './forecast-rows';
+import { dueTasksOf, writeForecasts, type DueRow, type DueTask } from './forecast-rows';
 import type { ReadingRow } from './reading-rows';
 import {
   emptySummary,
@@ -19,14 +19,16 @@ import {
   summaryOf,
   type ReadingSummary,
   type SummaryColumns,
+  type SummaryReading,
 } from './daily-summary';
 
 export { summariseReadings } from './daily-summary';
 
 /**
- * Rebuilds a machine's forecast summary from all its readings, then its tasks' due points (one
- * write of each). Reading writes keep the summary current incrementally (reading-summary.ts);
- * this full pass is for a new machine, a time-zone change and the rare case those cannot settle.
+ * Rebuilds the forecast summary of each of a machine's meters from all its readings, then its
+ * tasks' due points (one write of each). Reading writes keep the summaries current incrementally
+ * (reading-summary.ts); this full pass is for a new machine, a time-zone change and the rare case
+ * those cannot settle.
  */
 export async function refreshMachineForecast(
   machineId: string,
@@ -39,24 +41,37 @@ export async function refreshMachineForecast(
     (await Organization.findByPk(organizationId, { transaction, attributes: ['timeZone'] }))
       ?.timeZone;
   if (!timeZone) return;
-  const readings = await sequelize.query<{ value: number; lifetime_value: number; taken_at: Date }>(
-    `SELECT value, lifetime_value, taken_at FROM meter_readings
-     WHERE organization_id = :organizationId AND machine_id = :machineId ORDER BY taken_at, lifetime_value`,
+  // every meter of the machine, a meter without readings as one row of nulls
+  const readings = await sequelize.query<{
+    meter_id: string;
+    value: number | null;
+    lifetime_value: number | null;
+    taken_at: Date | null;
+  }>(
+    `SELECT mm.id AS meter_id, r.value, r.lifetime_value, r.taken_at FROM machine_meters mm
+     LEFT JOIN meter_readings r ON r.organization_id = mm.organization_id AND r.meter_id = mm.id
+     WHERE mm.organization_id = :organizationId AND mm.machine_id = :machineId
+     ORDER BY mm.id, r.taken_at, r.lifetime_value`,
     { replacements: { organizationId, machineId }, type: QueryTypes.SELECT, transaction },
   );
-  const summary = summaryOf(
-    readings.map((r) => ({
+  const byMeter = new Map<string, SummaryReading[]>();
+  for (const r of readings) {
+    const list = byMeter.get(r.meter_id) ?? [];
+    byMeter.set(r.meter_id, list);
+    if (r.taken_at === null) continue;
+    list.push({
       value: Number(r.value),
       lifetimeValue: Number(r.lifetime_value),
       takenAt: new Date(r.taken_at),
-    })),
-    timeZone,
-  );
-  await storeForecasts(organizationId, new Map([[machineId, summary]]), { transaction, timeZone });
+    });
+  }
+  const summaries = new Map([...byMeter].map(([id, list]) => [id, summaryOf(list, timeZone)]));
+  const meters = [...byMeter.keys()].map((id) => ({ id, machineId }));
+  await storeForecasts(organizationId, summaries, { transaction, timeZone, meters });
 }
 
 /**
- * The due point of each task of one machine, from its summary, as of a local date; the machine's
+ * The due point of each task of one meter, from its summary, as of a local date; the machine's
  * season months (1–12, [] = all year) date its season services.
  */
 export function duePointsFor(
@@ -105,19 +120,27 @@ export function duePointsFor(
   return { usage, points };
 }
 
+/** A meter as a forecast needs it: which machine it is on. */
+export interface MeterOfMachine {
+  id: string;
+  machineId: string;
+}
+
 interface StoreOptions {
   transaction?: Transaction;
   timeZone?: string;
   now?: Date;
   /** the machines already loaded (their season months), to spare reading them again */
   machines?: Pick<Machine, 'id' | 'seasonMonths'>[];
-  /** their tasks' due fields, already read (reading-neighbours.ts writeContext) */
+  /** the meters of the summaries given, to spare reading them again */
+  meters?: MeterOfMachine[];
+  /** their tasks' due fields by meter, already read (reading-neighbours.ts writeContext) */
   tasks?: Map<string, DueTask[]>;
 }
 
 /**
- * Recomputes and stores the usage estimate and task due points of the given machines (all of the
- * organization's when machineIds is omitted) from their stored summaries.
+ * Recomputes and stores the usage estimate and task due points of every meter of the given
+ * machines (all of the organization's when machineIds is omitted) from their stored summaries.
  */
 export async function recomputeDuePoints(
   organizationId: string,
@@ -128,9 +151,9 @@ export async function recomputeDuePoints(
 }
 
 /**
- * Stores new summaries of machines with their usage estimates and due points — and the new
- * readings they summarise, when given — in one statement (forecast-rows.ts writeForecasts).
- * Returns the stored readings.
+ * Stores new summaries of meters (keyed by meter id) with their usage estimates and due points —
+ * and the new readings they summarise, when given — in one statement (forecast-rows.ts
+ * writeForecasts). Returns the stored readings.
  */
 export async function storeForecasts(
   organizationId: string,
@@ -138,7 +161,15 @@ export async function storeForecasts(
   options: StoreOptions & { readings?: ReadingRow[] } = {},
 ): Promise<MeterReading[]> {
   if (!summaries.size) return [];
-  return computeAndStore(organizationId, [...summaries.keys()], summaries, options);
+  const meters =
+    options.meters ??
+    (await MachineMeter.findAll({
+      where: { organizationId, id: { [Op.in]: [...summaries.keys()] } },
+      attributes: ['id', 'machineId'],
+      transaction: options.transaction,
+    }));
+  const machineIds = [...new Set(meters.map((m) => m.machineId))];
+  return computeAndStore(organizationId, machineIds, summaries, { ...options, meters });
 }
 
 async function computeAndStore(
@@ -165,7 +196,13 @@ async function computeAndStore(
   if (!machines.length) return [];
   const ids = machines.map((m) => m.id);
   const seasonOf = new Map(machines.map((m) => [m.id, m.seasonMonths]));
-  const [forecasts, tasks] = await Promise.all([
+  const [meters, forecasts, tasks] = await Promise.all([
+    options.meters ??
+      MachineMeter.findAll({
+        where: { organizationId, machineId: { [Op.in]: ids } },
+        attributes: ['id', 'machineId'],
+        transaction,
+      }),
     summaries
       ? []
       : MachineForecast.findAll({
@@ -174,29 +211,30 @@ async function computeAndStore(
         }),
     options.tasks ? [] : dueTasksOf(organizationId, ids, transaction),
   ]);
-  const summaryOfMachine = new Map<string, SummaryColumns>(
+  const summaryOfMeter = new Map<string, SummaryColumns>(
     summaries
       ? [...summaries].map(([id, s]) => [id, summaryColumns(s)])
-      : forecasts.map((f) => [f.machineId, pickSummaryColumns(f)]),
+      : forecasts.map((f) => [f.meterId, pickSummaryColumns(f)]),
   );
   const tasksOf = options.tasks ?? new Map<string, DueTask[]>();
-  for (const t of tasks) tasksOf.set(t.machineId, [...(tasksOf.get(t.machineId) ?? []), t]);
+  for (const t of tasks) tasksOf.set(t.meterId, [...(tasksOf.get(t.meterId) ?? []), t]);
 
-  const dueRows: InferCreationAttributes<TaskDuePoint>[] = [];
+  const dueRows: DueRow[] = [];
   const forecastRows: InferCreationAttributes<MachineForecast>[] = [];
-  for (const id of ids) {
-    const summary = summaryOfMachine.get(id) ?? null;
+  for (const { id, machineId } of meters) {
+    const summary = summaryOfMeter.get(id) ?? null;
     const { usage, points } = duePointsFor(
       summary,
       tasksOf.get(id) ?? [],
       timeZone,
       asOfIso,
       now,
-      seasonOf.get(id) ?? [],
+      seasonOf.get(machineId) ?? [],
     );
     forecastRows.push({
       ...(summary ?? summaryColumns(emptySummary())),
-      machineId: id,
+      meterId: id,
+      machineId,
       organizationId,
       usage,
       computedOn: asOfIso,
@@ -205,8 +243,9 @@ async function computeAndStore(
     for (const [taskId, due] of points) {
       dueRows.push({
         taskId,
+        meterId: id,
         organizationId,
-        machineId: id,
+        machineId,
         status: due.status,
         sortDate: due.effectiveDate,
         due,
@@ -247,7 +286,7 @@ export async function ensureDuePointsCurrent(
 ) {
   const asOfIso = todayIso(timeZone, now);
   const stale = await sequelize.query<{ id: string }>(
-    `SELECT m.id FROM machines m LEFT JOIN machine_forecasts f ON f.machine_id = m.id
+    `SELECT DISTINCT m.machine_id AS id FROM machine_meters m LEFT JOIN machine_forecasts f ON f.meter_id = m.id
      WHERE m.organization_id = :organizationId AND (f.computed_on IS NULL OR f.computed_on <> :asOfIso)`,
     { replacements: { organizationId, asOfIso }, type: QueryTypes.SELECT },
   );

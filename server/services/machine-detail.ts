@@ -1,14 +1,15 @@
 // What one machine's page shows beside its record: the stored forecast and the worst and next
 // due of its tasks.
 import { Op } from 'sequelize';
-import { MachineForecast, ServiceTask, TaskDuePoint, type Machine } from '../models';
+import { ServiceTask, TaskDuePoint, type Machine } from '../models';
+import { primaryForecastOf } from './primary-forecast';
 import type { OrgAccess } from '../policies/context';
 
 // Worst first: the status a machine shows is the worst of its tasks'.
 const STATUS_RANK = { overdue: 0, due_soon: 1, history_unknown: 2, no_forecast: 3, ok: 4 } as const;
 
 /** The machine's stored forecast summary, or null before its first reading. */
-export const forecastOf = (machine: Machine) => MachineForecast.findByPk(machine.id);
+export const forecastOf = (machine: Machine) => primaryForecastOf(machine);
 
 /**
  * The forecast, the worst due status of the machine's service tasks and their earliest due date

@@ -1,7 +1,8 @@
 import { Op, QueryTypes, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { invalid } from '../errors';
-import { Machine, MachineForecast, MachineOperator, Membership } from '../models';
+import { Machine, MachineOperator, Membership } from '../models';
+import { primaryForecastsOf } from './primary-forecast';
 import type {
   MachineCreateInput,
   MachineListQuery,
@@ -115,8 +116,7 @@ export async function listMachines(access: OrgAccess, query: MachineListQuery) {
   const ids = rows.map((r) => r.id);
   const [machines, forecasts, operators] = await Promise.all([
     Machine.findAll({ where: { organizationId: access.organization.id, id: { [Op.in]: ids } } }),
-    MachineForecast.findAll({
-      where: { organizationId: access.organization.id, machineId: { [Op.in]: ids } },
+    primaryForecastsOf(access.organization.id, ids, {
       attributes: ['machineId', 'lastValue', 'lastRawValue', 'lastTakenAt'],
     }),
     operatorIdsOf(ids, access.organization.id),

@@ -1,10 +1,10 @@
-// Changes to a machine's recorded readings after the fact: correcting or deleting one reading,
-// recording a meter replacement. Each is audited and updates the machine's summary from the
-// day(s) it touched (a replacement adds two readings, summarised as any new ones).
-import { Op, type Transaction } from 'sequelize';
+// Changes to a meter's recorded readings after the fact: correcting or deleting one reading.
+// Each is audited and updates the meter's summary from the day(s) it touched. (Replacements and
+// counter resets, which add readings, are meter-changes.ts.)
+import type { Transaction } from 'sequelize';
 import { sequelize } from '../db';
-import { AppError, invalid, notFound } from '../errors';
-import { MachineForecast, MeterReading, MeterReplacement, type Machine } from '../models';
+import { invalid, notFound } from '../errors';
+import { MachineForecast, MeterReading, type Machine } from '../models';
 import { checkReading, toLifetimeValue } from '../../shared/domain';
 import type { OrgAccess } from '../policies/context';
 import { recordAudit } from '../infra/audit';
@@ -16,8 +16,8 @@ import {
   type SummaryReading,
 } from './daily-summary';
 import { lockMachineReadings, timeFormatter, writeContext } from './reading-neighbours';
-import { summaryAfterChange } from './reading-summary';
-import { asStoredValue, writeReadings } from './readings';
+import { meterRef, summaryAfterChange } from './reading-summary';
+import { asStoredValue } from './readings';
 
 const summaryReading = (r: MeterReading): SummaryReading => ({
   value: r.value,
@@ -26,27 +26,29 @@ const summaryReading = (r: MeterReading): SummaryReading => ({
 });
 
 /**
- * Stores the machine's summary after a correction or deletion, from the day(s) it touched; the
+ * Stores the meter's summary after a correction or deletion, from the day(s) it touched; the
  * whole history is read only when there is no summary yet or the change emptied its window.
  */
 async function updateSummary(
   access: OrgAccess,
   machine: Machine,
+  meterId: string,
   stored: ReadingSummary | null,
   change: { before: SummaryReading; after?: SummaryReading },
   transaction: Transaction,
 ) {
   const { timeZone } = access.organization;
-  const summary =
-    stored && (await summaryAfterChange(machine, stored, change, timeZone, transaction));
+  const ref = meterRef(machine, { id: meterId });
+  const summary = stored && (await summaryAfterChange(ref, stored, change, timeZone, transaction));
   if (!summary) {
     await refreshMachineForecast(machine.id, access.organization.id, transaction, { timeZone });
     return;
   }
-  await storeForecasts(access.organization.id, new Map([[machine.id, summary]]), {
+  await storeForecasts(access.organization.id, new Map([[meterId, summary]]), {
     transaction,
     timeZone,
     machines: [machine],
+    meters: [{ id: meterId, machineId: machine.id }],
   });
 }
 
@@ -76,15 +78,22 @@ export async function correctReading(
     const old = summaryReading(reading);
     const value = asStoredValue(changes.value ?? reading.value);
     const takenAt = changes.takenAt ?? reading.takenAt;
-    const context = await writeContext(machine, takenAt.getTime(), takenAt.getTime(), transaction);
-    const { replacements } = context;
+    const context = await writeContext(
+      machine,
+      reading.meterId,
+      takenAt.getTime(),
+      takenAt.getTime(),
+      transaction,
+    );
+    if (!context) throw notFound('Reading');
+    const { replacements, meter } = context;
     // Validate as a new reading that ignores the one being corrected, then update in place.
     const existing = context.neighbours.filter((r) => r.id !== reading.id);
     const formatTime = timeFormatter(access.organization.timeZone);
     // the same value at the same time is another reading already: a copy, not a correction
     if (existing.some((r) => r.takenAtMs === takenAt.getTime() && r.value === value)) {
       throw invalid({
-        takenAt: `A reading of ${value} ${machine.meterUnit} taken ${formatTime(takenAt.getTime())} is already recorded — delete this one instead of making it a copy.`,
+        takenAt: `A reading of ${value} ${meter.unit} taken ${formatTime(takenAt.getTime())} is already recorded — delete this one instead of making it a copy.`,
       });
     }
     const lifetime = toLifetimeValue(value, takenAt.getTime(), replacements);
@@ -102,7 +111,7 @@ export async function correctReading(
       },
       {
         nowMs: Date.now(),
-        meterUnit: machine.meterUnit,
+        meterUnit: meter.unit,
         formatTime,
       },
     );
@@ -128,6 +137,7 @@ export async function correctReading(
     await updateSummary(
       access,
       machine,
+      meter.id,
       context.summary,
       { before: old, after: summaryReading(reading) },
       transaction,
@@ -144,7 +154,7 @@ export async function deleteReading(access: OrgAccess, machine: Machine, reading
     const stillThere = await MeterReading.count({ where: { id: reading.id }, transaction });
     if (!stillThere) throw notFound('Reading');
     await reading.reload({ transaction });
-    const stored = await MachineForecast.findByPk(machine.id, { transaction });
+    const stored = await MachineForecast.findByPk(reading.meterId, { transaction });
     await reading.destroy({ transaction });
     await recordAudit(
       {
@@ -165,81 +175,10 @@ export async function deleteReading(access: OrgAccess, machine: Machine, reading
     await updateSummary(
       access,
       machine,
+      reading.meterId,
       stored && summaryFromColumns(pickSummaryColumns(stored)),
       { before: summaryReading(reading) },
       transaction,
     );
-  });
-}
-
-/**
- * Records a meter replacement: the old meter's final reading just before, the new meter's start at
- * the replacement time; lifetime values stay continuous.
- */
-export async function replaceMeter(
-  access: OrgAccess,
-  machine: Machine,
-  input: { oldFinalValue: number; newStartValue: number; replacedAt: Date; note: string },
-) {
-  return sequelize.transaction(async (transaction) => {
-    const later = await MeterReading.count({
-      where: {
-        organizationId: machine.organizationId,
-        machineId: machine.id,
-        takenAt: { [Op.gte]: input.replacedAt },
-      },
-      transaction,
-    });
-    if (later > 0) {
-      throw invalid({
-        replacedAt:
-          'There are readings after this time; a replacement must come after the last reading',
-      });
-    }
-    const replacement = await MeterReplacement.create(
-      {
-        organizationId: machine.organizationId,
-        machineId: machine.id,
-        replacedAt: input.replacedAt,
-        oldFinalValue: input.oldFinalValue,
-        newStartValue: input.newStartValue,
-        note: input.note,
-        enteredBy: access.userId,
-      },
-      { transaction },
-    );
-    try {
-      await writeReadings(
-        access,
-        [
-          {
-            machine,
-            value: input.oldFinalValue,
-            takenAt: new Date(input.replacedAt.getTime() - 1000),
-            source: 'manual',
-          },
-          { machine, value: input.newStartValue, takenAt: input.replacedAt, source: 'manual' },
-        ],
-        transaction,
-      );
-    } catch (err) {
-      if (err instanceof AppError && err.fields) {
-        const message = Object.values(err.fields)[0];
-        throw invalid({ oldFinalValue: message });
-      }
-      throw err;
-    }
-    await recordAudit(
-      {
-        organizationId: access.organization.id,
-        actorUserId: access.userId,
-        action: 'meter.replace',
-        entityType: 'meter_replacement',
-        entityId: replacement.id,
-        changes: { machineId: machine.id, ...input, replacedAt: input.replacedAt.toISOString() },
-      },
-      transaction,
-    );
-    return replacement;
   });
 }

@@ -1,7 +1,8 @@
 // What the log-hours screens call: a machine's reading history, one reading, many at once, and
 // the machines that still take readings. Every write goes through writeReadings (readings.ts).
 import { sequelize } from '../db';
-import { invalid } from '../errors';
+import { AppError, invalid } from '../errors';
+import { meterNotFound } from './meter-changes';
 import { MeterReading, MeterReplacement, type Machine } from '../models';
 import type { OrgAccess } from '../policies/context';
 import type { BulkReadingsInput, ReadingCreateInput } from '../../shared/schemas/readings';
@@ -15,11 +16,24 @@ import {
 import { listMachines, loadMachine, loadVisibleMachines } from './machines';
 import { writeReadings, type NewReading } from './readings';
 
-/** A machine's readings (newest first, at most `limit`) and all its meter replacements. */
-export async function readingHistory(access: OrgAccess, machine: Machine, limit: number) {
+/**
+ * A machine's readings (newest first, at most `limit`; of one meter when `meterId` is given, else
+ * of all its meters) and its meter replacements and counter resets.
+ */
+export async function readingHistory(
+  access: OrgAccess,
+  machine: Machine,
+  limit: number,
+  meterId?: string,
+) {
+  const where = {
+    organizationId: access.organization.id,
+    machineId: machine.id,
+    ...(meterId && { meterId }),
+  };
   const [readings, replacements] = await Promise.all([
     MeterReading.findAll({
-      where: { organizationId: access.organization.id, machineId: machine.id },
+      where,
       order: [
         ['takenAt', 'DESC'],
         ['lifetimeValue', 'DESC'],
@@ -27,7 +41,7 @@ export async function readingHistory(access: OrgAccess, machine: Machine, limit:
       limit,
     }),
     MeterReplacement.findAll({
-      where: { organizationId: access.organization.id, machineId: machine.id },
+      where,
       order: [['replacedAt', 'DESC']],
     }),
   ]);
@@ -48,6 +62,7 @@ export async function logReading(access: OrgAccess, machineId: string, input: Re
       [
         {
           machine,
+          meterId: input.meterId,
           value: input.value,
           takenAt: input.takenAt ? new Date(input.takenAt) : new Date(),
           source: 'manual',
@@ -55,7 +70,11 @@ export async function logReading(access: OrgAccess, machineId: string, input: Re
       ],
       transaction,
       { locked: true },
-    );
+    ).catch((err: unknown) => {
+      // another machine's (or farm's) meter id: not found, as the machine itself would be
+      if (err instanceof AppError && err.fields?.meterId) throw meterNotFound();
+      throw err;
+    });
   });
   return outcome;
 }
@@ -81,6 +100,7 @@ export async function logBulkReadings(access: OrgAccess, readings: BulkReadingsI
       missing[`readings.${i}.machineId`] = readingsClosedMessage(machine.fleetNumber);
     items.push({
       machine,
+      meterId: r.meterId,
       value: r.value,
       takenAt: r.takenAt ? new Date(r.takenAt) : new Date(),
       source: 'manual' as const,
@@ -90,7 +110,11 @@ export async function logBulkReadings(access: OrgAccess, readings: BulkReadingsI
   const outcomes = await sequelize.transaction((transaction) =>
     writeReadings(access, items, transaction, { fieldPrefix: (i) => `readings.${i}.` }),
   );
-  return outcomes.map((o) => ({ machineId: items[o.index].machine.id, status: o.status }));
+  return outcomes.map((o) => ({
+    machineId: items[o.index].machine.id,
+    meterId: o.meterId,
+    status: o.status,
+  }));
 }
 
 /** Every machine the caller sees that still takes readings, by fleet number, with its forecast. */

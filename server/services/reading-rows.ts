@@ -9,6 +9,7 @@ import type { ReadingSource } from '../../shared/constants';
 export interface ReadingRow {
   organizationId: string;
   machineId: string;
+  meterId: string;
   value: number;
   lifetimeValue: number;
   takenAt: Date;
@@ -21,19 +22,21 @@ const CHUNK = 1000;
 
 /** INSERT of rows given as a JSON array parameter, returning them as MeterReading attributes. */
 export const INSERT_READINGS_SQL = (param: string) => `INSERT INTO meter_readings
-    (organization_id, machine_id, value, lifetime_value, taken_at, source, entered_by, import_key)
-  SELECT r."organizationId", r."machineId", r.value, r."lifetimeValue", r."takenAt", r.source,
+    (organization_id, machine_id, meter_id, value, lifetime_value, taken_at, source, entered_by,
+     import_key)
+  SELECT r."organizationId", r."machineId", r."meterId", r.value, r."lifetimeValue", r."takenAt", r.source,
     r."enteredBy", r."importKey"
   FROM jsonb_to_recordset(${param}::jsonb) AS r("organizationId" uuid, "machineId" uuid,
-    value numeric, "lifetimeValue" numeric, "takenAt" timestamptz, source text, "enteredBy" uuid,
+    "meterId" uuid, value numeric, "lifetimeValue" numeric, "takenAt" timestamptz, source text, "enteredBy" uuid,
     "importKey" text)
-  RETURNING id, organization_id AS "organizationId", machine_id AS "machineId", value,
+  RETURNING id, organization_id AS "organizationId", machine_id AS "machineId",
+    meter_id AS "meterId", value,
     lifetime_value AS "lifetimeValue", taken_at AS "takenAt", source, entered_by AS "enteredBy",
     import_key AS "importKey", created_at AS "createdAt", updated_at AS "updatedAt"`;
 
-// (machine, time, value) is the rows' unique key: returned rows are matched to those sent by it.
-const keyOf = (machineId: string, takenAt: Date, value: number) =>
-  `${machineId}|${takenAt.getTime()}|${value}`;
+// (meter, time, value) is the rows' unique key: returned rows are matched to those sent by it.
+const keyOf = (meterId: string, takenAt: Date, value: number) =>
+  `${meterId}|${takenAt.getTime()}|${value}`;
 
 /** The stored readings (RETURNING rows) as MeterReading instances, in the order of `rows`. */
 export function matchStored(rows: ReadingRow[], stored: Record<string, unknown>[]): MeterReading[] {
@@ -46,11 +49,11 @@ export function matchStored(rows: ReadingRow[], stored: Record<string, unknown>[
           raw: true,
         },
       );
-      return [keyOf(reading.machineId, reading.takenAt, reading.value), reading];
+      return [keyOf(reading.meterId, reading.takenAt, reading.value), reading];
     }),
   );
   return rows.map((r) => {
-    const reading = byKey.get(keyOf(r.machineId, r.takenAt, r.value));
+    const reading = byKey.get(keyOf(r.meterId, r.takenAt, r.value));
     // a value the column rounded differently than planReadings did (asStoredValue) lands here
     if (!reading) throw new Error(`reading ${r.value} at ${r.takenAt.toISOString()} not returned`);
     return reading;

@@ -10,11 +10,13 @@ import { refreshMachineForecast, storeForecasts } from './forecast';
 import type { DueTask } from './forecast-rows';
 import { addReadings, type ReadingSummary } from './daily-summary';
 import { insertReadingRows, type ReadingRow } from './reading-rows';
-import { summaryWithNewReadings } from './reading-summary';
+import { meterRef, summaryWithNewReadings } from './reading-summary';
+import type { MeterOfWrite } from './reading-neighbours';
 
-/** What planReadings read for each machine under its lock. */
+/** What planReadings read for each meter under its machine's lock. */
 export interface MachineContext {
   machine: Machine;
+  meter: MeterOfWrite;
   summary: ReadingSummary | null;
   tasks: DueTask[];
 }
@@ -30,22 +32,28 @@ export async function storeNewReadings(
   transaction: Transaction,
 ): Promise<MeterReading[]> {
   const { timeZone } = access.organization;
-  const byMachine = new Map<string, ReadingRow[]>();
-  for (const r of rows) byMachine.set(r.machineId, [...(byMachine.get(r.machineId) ?? []), r]);
-  const machines = [...byMachine.keys()].map((id) => contexts.get(id)!);
-  const tasks = new Map(machines.map((c) => [c.machine.id, c.tasks]));
-  const options = { transaction, timeZone, machines: machines.map((c) => c.machine), tasks };
+  const byMeter = new Map<string, ReadingRow[]>();
+  for (const r of rows) byMeter.set(r.meterId, [...(byMeter.get(r.meterId) ?? []), r]);
+  const meters = [...byMeter.keys()].map((id) => contexts.get(id)!);
+  const tasks = new Map(meters.map((c) => [c.meter.id, c.tasks]));
+  const options = {
+    transaction,
+    timeZone,
+    machines: [...new Map(meters.map((c) => [c.machine.id, c.machine])).values()],
+    meters: meters.map((c) => ({ id: c.meter.id, machineId: c.machine.id })),
+    tasks,
+  };
 
   const summaries = new Map<string, ReadingSummary>();
   let settled = rows.length <= ONE_STATEMENT_ROWS;
-  for (const { machine, summary } of machines) {
+  for (const { meter, summary } of meters) {
     if (!settled || !summary) {
       settled = false;
       break;
     }
-    const next = addReadings(summary, byMachine.get(machine.id)!, timeZone);
+    const next = addReadings(summary, byMeter.get(meter.id)!, timeZone);
     if (next.recheck.size) settled = false;
-    summaries.set(machine.id, next.summary);
+    summaries.set(meter.id, next.summary);
   }
   if (settled) {
     return storeForecasts(access.organization.id, summaries, { ...options, readings: rows });
@@ -53,18 +61,23 @@ export async function storeNewReadings(
 
   const stored = await insertReadingRows(rows, transaction);
   summaries.clear();
-  for (const { machine, summary } of machines) {
+  const rebuilt = new Set<string>();
+  for (const { machine, meter, summary } of meters) {
     if (!summary) {
-      // no summary row yet (a machine stored before summaries were kept): build it in full
-      await refreshMachineForecast(machine.id, access.organization.id, transaction, { timeZone });
+      // no summary row yet (a meter stored before summaries were kept): build its machine's in full
+      if (!rebuilt.has(machine.id))
+        await refreshMachineForecast(machine.id, access.organization.id, transaction, { timeZone });
+      rebuilt.add(machine.id);
       continue;
     }
-    const added = stored.filter((r) => r.machineId === machine.id);
+    const added = stored.filter((r) => r.meterId === meter.id);
     summaries.set(
-      machine.id,
-      await summaryWithNewReadings(machine, summary, added, timeZone, transaction),
+      meter.id,
+      await summaryWithNewReadings(meterRef(machine, meter), summary, added, timeZone, transaction),
     );
   }
+  for (const id of [...summaries.keys()])
+    if (rebuilt.has(contexts.get(id)!.machine.id)) summaries.delete(id);
   await storeForecasts(access.organization.id, summaries, options);
   return stored;
 }

@@ -19,10 +19,18 @@ import {
 
 const DAY_MS = 86_400_000;
 
-interface MachineRef {
+/** The meter whose readings are read back (the summary is per meter, migration 0026). */
+interface MeterRef {
+  /** the meter's id */
   id: string;
   organizationId: string;
 }
+
+/** The reference of one meter of a machine, as the functions below read it. */
+export const meterRef = (machine: { organizationId: string }, meter: { id: string }): MeterRef => ({
+  id: meter.id,
+  organizationId: machine.organizationId,
+});
 
 interface ReadingRow {
   value: number;
@@ -38,7 +46,7 @@ const toReading = (r: ReadingRow): SummaryReading => ({
 
 /** The day points of local days fromKey…toKey (whole day numbers, inclusive) from their readings. */
 async function readDays(
-  machine: MachineRef,
+  machine: MeterRef,
   fromKey: number,
   toKey: number,
   timeZone: string,
@@ -48,7 +56,7 @@ async function readDays(
   // a day's margin each side reads every reading of those days, and the keys sort out the rest.
   const rows = await sequelize.query<ReadingRow>(
     `SELECT value, lifetime_value, taken_at FROM meter_readings
-     WHERE organization_id = :org AND machine_id = :machine AND taken_at >= :from AND taken_at < :to
+     WHERE organization_id = :org AND meter_id = :machine AND taken_at >= :from AND taken_at < :to
      ORDER BY taken_at, lifetime_value`,
     {
       replacements: {
@@ -68,7 +76,7 @@ async function readDays(
 
 /** The day points of a few scattered local days, one query per day. */
 async function readEachDay(
-  machine: MachineRef,
+  machine: MeterRef,
   keys: Iterable<number>,
   timeZone: string,
   transaction: Transaction,
@@ -81,13 +89,13 @@ async function readEachDay(
 }
 
 /** The first and last of a machine's readings (in taken at, lifetime value order), one query. */
-async function readEnds(machine: MachineRef, transaction: Transaction) {
+async function readEnds(machine: MeterRef, transaction: Transaction) {
   const rows = await sequelize.query<ReadingRow & { end: 'first' | 'last' }>(
     `(SELECT 'first' AS end, value, lifetime_value, taken_at FROM meter_readings
-      WHERE organization_id = :org AND machine_id = :machine ORDER BY taken_at, lifetime_value LIMIT 1)
+      WHERE organization_id = :org AND meter_id = :machine ORDER BY taken_at, lifetime_value LIMIT 1)
      UNION ALL
      (SELECT 'last' AS end, value, lifetime_value, taken_at FROM meter_readings
-      WHERE organization_id = :org AND machine_id = :machine
+      WHERE organization_id = :org AND meter_id = :machine
       ORDER BY taken_at DESC, lifetime_value DESC LIMIT 1)`,
     {
       replacements: { org: machine.organizationId, machine: machine.id },
@@ -102,7 +110,7 @@ async function readEnds(machine: MachineRef, transaction: Transaction) {
 
 /** The summary with new readings (already written) added; O(new readings), not O(history). */
 export async function summaryWithNewReadings(
-  machine: MachineRef,
+  machine: MeterRef,
   stored: ReadingSummary,
   added: SummaryReading[],
   timeZone: string,
@@ -123,7 +131,7 @@ const sameReading = (a: ReadingPlace | null, b: ReadingPlace) => !!a && readingO
  * than SUMMARY_DAYS before the removed ones): the caller then rebuilds from all readings.
  */
 export async function summaryAfterChange(
-  machine: MachineRef,
+  machine: MeterRef,
   stored: ReadingSummary,
   change: { before: SummaryReading; after?: SummaryReading },
   timeZone: string,

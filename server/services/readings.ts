@@ -4,11 +4,14 @@ import { MeterReading, type Machine } from '../models';
 import { checkReading, toLifetimeValue } from '../../shared/domain';
 import type { ReadingSource } from '../../shared/constants';
 import type { OrgAccess } from '../policies/context';
+import { directQuery } from '../db-direct';
 import { lockMachineReadings, timeFormatter, writeContext } from './reading-neighbours';
 import { storeNewReadings, type MachineContext } from './reading-store';
 
 export interface NewReading {
   machine: Machine;
+  /** the machine's meter read; left out (null), its primary meter */
+  meterId?: string | null;
   /** value shown on the meter fitted at the time */
   value: number;
   takenAt: Date;
@@ -20,6 +23,8 @@ export interface ReadingOutcome {
   index: number;
   status: 'added' | 'duplicate';
   reading: MeterReading | null;
+  /** the meter it is on (the primary when none was named) */
+  meterId: string;
 }
 
 /**
@@ -42,6 +47,7 @@ export async function writeReadings(
     toInsert.map(({ item, lifetime }) => ({
       organizationId: access.organization.id,
       machineId: item.machine.id,
+      meterId: item.meterId!,
       value: item.value,
       lifetimeValue: lifetime,
       takenAt: item.takenAt,
@@ -52,7 +58,9 @@ export async function writeReadings(
     plan.contexts,
     transaction,
   );
-  toInsert.forEach(({ index }, i) => outcomes.push({ index, status: 'added', reading: rows[i] }));
+  toInsert.forEach(({ index }, i) =>
+    outcomes.push({ index, status: 'added', reading: rows[i], meterId: rows[i].meterId }),
+  );
   return outcomes.sort((a, b) => a.index - b.index);
 }
 
@@ -85,9 +93,10 @@ interface PlanOptions {
 
 /**
  * Checks readings against the rules and their neighbours without writing: what would be added,
- * what is an identical repeat, and every broken rule keyed by `prefix.index.field`. Each machine
- * is locked first; what was read under the lock (stored summary, tasks) comes back in `contexts`
- * for the write.
+ * what is an identical repeat, and every broken rule keyed by `prefix.index.field`. Readings are
+ * checked per meter (the one named, else the machine's primary; a meter not on the machine is a
+ * `prefix.index.meterId` error). Each machine is locked first; what was read under the lock
+ * (meter, stored summary, tasks) comes back in `contexts`, by meter id, for the write.
  */
 export async function planReadings(
   access: OrgAccess,
@@ -100,27 +109,31 @@ export async function planReadings(
   const prefix = options.fieldPrefix ?? (() => '');
   const errors: Record<string, string> = {};
   const outcomes: ReadingOutcome[] = [];
-  const byMachine = new Map<string, { item: NewReading; index: number }[]>();
-  for (const [index, item] of items.entries()) {
-    const group = byMachine.get(item.machine.id);
-    if (group) group.push({ item, index });
-    else byMachine.set(item.machine.id, [{ item, index }]);
-  }
+  const byMeter = await groupByMeter(items, transaction);
 
   const toInsert: { item: NewReading; index: number; lifetime: number }[] = [];
   const contexts = new Map<string, MachineContext>();
-  for (const group of byMachine.values()) {
+  const locked = new Set<string>();
+  for (const group of byMeter) {
     const machine = group[0].item.machine;
-    if (!options.locked) await lockMachineReadings(machine.id, transaction);
+    if (!options.locked && !locked.has(machine.id)) {
+      await lockMachineReadings(machine.id, transaction);
+      locked.add(machine.id);
+    }
     const sorted = [...group].sort((a, b) => a.item.takenAt.getTime() - b.item.takenAt.getTime());
     const context = await writeContext(
       machine,
+      group[0].item.meterId,
       sorted[0].item.takenAt.getTime(),
       sorted.at(-1)!.item.takenAt.getTime(),
       transaction,
     );
-    const { replacements } = context;
-    contexts.set(machine.id, { machine, summary: context.summary, tasks: context.tasks });
+    if (!context) {
+      for (const { index } of group) errors[`${prefix(index)}meterId`] = NO_SUCH_METER;
+      continue;
+    }
+    const { replacements, meter } = context;
+    contexts.set(meter.id, { machine, meter, summary: context.summary, tasks: context.tasks });
     const existing: Point[] = context.neighbours.map((r) => ({
       lifetime: r.lifetimeValue,
       takenAtMs: r.takenAtMs,
@@ -137,7 +150,7 @@ export async function planReadings(
       const value = asStoredValue(item.value);
       const lifetime = asStoredValue(toLifetimeValue(value, takenAtMs, replacements));
       if (seen.has(`${takenAtMs}:${value}`)) {
-        outcomes.push({ index, status: 'duplicate', reading: null });
+        outcomes.push({ index, status: 'duplicate', reading: null, meterId: meter.id });
         continue;
       }
       while (after < existing.length && existing[after].takenAtMs <= takenAtMs) after++;
@@ -155,7 +168,7 @@ export async function planReadings(
           },
           next: next && { value: next.lifetime, takenAtMs: next.takenAtMs, raw: next.raw },
         },
-        { nowMs, meterUnit: machine.meterUnit, formatTime: fmt },
+        { nowMs, meterUnit: meter.unit, formatTime: fmt },
       );
       if (violation) {
         errors[`${prefix(index)}${violation.field}`] = violation.message;
@@ -164,10 +177,43 @@ export async function planReadings(
       const point = { lifetime, takenAtMs, raw: value };
       seen.add(`${takenAtMs}:${value}`);
       if (!newest || pointOrder(point, newest) >= 0) newest = point;
-      toInsert.push({ item: { ...item, value }, index, lifetime });
+      toInsert.push({ item: { ...item, value, meterId: meter.id }, index, lifetime });
     }
   }
   return { outcomes, errors, toInsert, contexts };
+}
+
+/** The refusal of a meter id that is not one of the machine's meters. */
+export const NO_SUCH_METER = 'No such meter on this machine';
+
+/**
+ * The items grouped by the meter they are on, in order of first appearance. A machine named
+ * both with and without its primary meter's id in one batch gets its primary looked up first
+ * (one statement, only then), so the two land in one group.
+ */
+async function groupByMeter(items: NewReading[], transaction: Transaction) {
+  const named = new Set<string>();
+  const unnamed = new Set<string>();
+  for (const item of items) (item.meterId ? named : unnamed).add(item.machine.id);
+  const mixed = [...unnamed].filter((id) => named.has(id));
+  const primary = new Map<string, string>();
+  if (mixed.length) {
+    const rows = await directQuery<{ id: string; machine_id: string }>(
+      transaction,
+      'SELECT id, machine_id FROM machine_meters WHERE machine_id = ANY($1::uuid[]) AND is_primary',
+      [mixed],
+    );
+    for (const r of rows) primary.set(r.machine_id, r.id);
+  }
+  const groups = new Map<string, { item: NewReading; index: number }[]>();
+  for (const [index, item] of items.entries()) {
+    const meter = item.meterId ?? primary.get(item.machine.id) ?? '';
+    const key = `${item.machine.id}|${meter}`;
+    const group = groups.get(key);
+    if (group) group.push({ item, index });
+    else groups.set(key, [{ item, index }]);
+  }
+  return [...groups.values()];
 }
 
 /**
@@ -189,6 +235,7 @@ export async function writeAccompanyingReading(
         where: {
           organizationId: access.organization.id,
           machineId: item.machine.id,
+          meterId: outcome.meterId,
           takenAt: item.takenAt,
           value: item.value,
         },

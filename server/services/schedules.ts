@@ -144,7 +144,7 @@ export async function recordLastDone(
 
 /** Sets when a task was last done before the machine came into the system. */
 export async function setLastDone(access: OrgAccess, task: ServiceTask, input: LastDoneInput) {
-  const forecast = await MachineForecast.findByPk(task.machineId);
+  const forecast = await MachineForecast.findByPk(task.meterId);
   const problems = lastDoneProblems(
     input,
     todayIso(access.organization.timeZone),

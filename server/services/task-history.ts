@@ -29,17 +29,20 @@ export async function unknownHistoryTasks(access: OrgAccess, machineId: string) 
  * refused (422) while the machine has no reading to count from.
  */
 export async function countFromNow(access: OrgAccess, machine: Machine, tasks: ServiceTask[]) {
-  const forecast = await MachineForecast.findOne({
-    where: { organizationId: access.organization.id, machineId: machine.id },
+  // tasks on several meters count each from its own meter's last reading
+  const meterIds = [...new Set(tasks.map((t) => t.meterId))];
+  const forecasts = await MachineForecast.findAll({
+    where: { organizationId: access.organization.id, meterId: { [Op.in]: meterIds } },
   });
-  if (forecast?.lastValue == null)
+  const lastOf = new Map(forecasts.map((f) => [f.meterId, f.lastValue]));
+  if (meterIds.some((id) => lastOf.get(id) == null))
     throw invalid({
       task: `${machine.fleetNumber} has no meter reading yet; log one first, then count from it`,
     });
-  const countFromMeter = forecast.lastValue;
   const countFromOn = todayIso(access.organization.timeZone);
   await sequelize.transaction(async (transaction) => {
     for (const task of tasks) {
+      const countFromMeter = lastOf.get(task.meterId)!;
       await task.update({ countFromMeter, countFromOn, historyUnknown: false }, { transaction });
       await recordAudit(
         {

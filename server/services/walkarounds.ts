@@ -1,7 +1,8 @@
 import { Op, UniqueConstraintError, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { AppError } from '../errors';
-import { Defect, Machine, MachineForecast, Walkaround, WalkaroundPhoto } from '../models';
+import { Defect, Machine, Walkaround, WalkaroundPhoto } from '../models';
+import { primaryForecastOf } from './primary-forecast';
 import type { WalkaroundCreateInput, WalkaroundPurpose } from '../../shared/schemas/walkarounds';
 import type { OrgAccess } from '../policies/access';
 import { authorize, hasRole } from '../policies/access';
@@ -71,7 +72,7 @@ export function assertMayStart(access: OrgAccess, machine: Machine, purpose: Wal
 export async function walkaroundStart(access: OrgAccess, machine: Machine) {
   const [checklist, forecast] = await Promise.all([
     checklistFor(access, machine),
-    MachineForecast.findByPk(machine.id),
+    primaryForecastOf(machine),
   ]);
   const lastReading =
     forecast?.lastValue != null && forecast.lastTakenAt

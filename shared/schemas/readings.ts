@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { MACHINE_CATEGORIES, READING_SOURCES } from '../constants';
+import { MACHINE_CATEGORIES, METER_CHANGE_KINDS, READING_SOURCES } from '../constants';
 import { boundedNumber, isoDateTime, pagingFields, PAST_DATES, plainText, uuid } from './common';
 import { lastReadingSchema } from './machines';
 import { machineRefSchema } from './refs';
@@ -12,9 +12,13 @@ const readingFields = {
   takenAt: isoDateTime('Time taken', PAST_DATES),
 };
 
+/** One of the machine's meters (machine_meters.id); left out, its primary meter. */
+const meterIdField = uuid.optional();
+
 export const readingCreateSchema = z.object({
   value: readingFields.value,
   takenAt: readingFields.takenAt.optional(),
+  meterId: meterIdField,
 });
 export type ReadingCreateInput = z.infer<typeof readingCreateSchema>;
 
@@ -32,12 +36,26 @@ export const bulkReadingsSchema = z.object({
 export type BulkReadingsInput = z.infer<typeof bulkReadingsSchema>;
 
 export const meterReplacementSchema = z.object({
+  meterId: meterIdField,
   oldFinalValue: boundedNumber('Old meter final value', METER_BOUNDS),
   newStartValue: boundedNumber('New meter start value', METER_BOUNDS),
   replacedAt: isoDateTime('Replaced at', PAST_DATES),
   note: plainText(500, { multiline: true }).default(''),
 });
 export type MeterReplacementInput = z.infer<typeof meterReplacementSchema>;
+
+/**
+ * A counter reset (a bale counter zeroed): recorded like a replacement of the same meter, the
+ * count before the reset and the one it restarted from (usually 0), at the reset's time.
+ */
+export const counterResetSchema = z.object({
+  meterId: meterIdField,
+  oldFinalValue: boundedNumber('Count before the reset', METER_BOUNDS),
+  newStartValue: boundedNumber('Count after the reset', METER_BOUNDS).default(0),
+  resetAt: isoDateTime('Reset at', PAST_DATES),
+  note: plainText(500, { multiline: true }).default(''),
+});
+export type CounterResetInput = z.infer<typeof counterResetSchema>;
 
 export const dueQuerySchema = z.object({
   horizon: z.coerce
@@ -65,6 +83,7 @@ export type DueListQuery = z.infer<typeof dueListQuerySchema>;
 export const readingSchema = z
   .object({
     id: z.string(),
+    meterId: z.string(),
     /** as the meter showed it */
     value: z.number(),
     /** continuous across meter replacements; what the forecast and the chart use */
@@ -79,6 +98,9 @@ export type Reading = z.infer<typeof readingSchema>;
 export const meterReplacementRecordSchema = z
   .object({
     id: z.string(),
+    meterId: z.string(),
+    /** a new meter fitted, or the same counter reset */
+    kind: z.enum(METER_CHANGE_KINDS),
     replacedAt: z.string(),
     oldFinalValue: z.number(),
     newStartValue: z.number(),
@@ -123,6 +145,7 @@ export type LatestReadings = z.infer<typeof latestReadingsResponseSchema>;
 
 export const bulkReadingOutcomeSchema = z.object({
   machineId: z.string(),
+  meterId: z.string(),
   status: z.enum(READING_OUTCOMES),
 });
 export type BulkReadingOutcome = z.infer<typeof bulkReadingOutcomeSchema>;

@@ -25,6 +25,8 @@ const reading = (days: number, lifetimeValue: number): Reading => ({
 });
 const replacement = (days: number): Replacement => ({
   id: `m-${days}`,
+  meterId: 'meter-1',
+  kind: 'replacement',
   replacedAt: new Date(at(days)).toISOString(),
   oldFinalValue: 0,
   newStartValue: 0,

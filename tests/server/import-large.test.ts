@@ -5,7 +5,8 @@
 import { createHash } from 'node:crypto';
 import { beforeEach, describe, expect, it } from 'vitest';
 import { createApp } from '../../server/app';
-import { MachineForecast, MeterReading } from '../../server/models';
+import { MeterReading } from '../../server/models';
+import { primaryForecastOf } from '../../server/services/primary-forecast';
 import { READING_IMPORT_LIMITS } from '../../shared/schemas/readings';
 import { countRows, resetDatabase } from '../support/db';
 import {
@@ -81,7 +82,7 @@ describe('CSV import of readings — large files', { timeout: 180_000 }, () => {
     const first = await MeterReading.findOne({ where: { importKey: `${digest}:2` } });
     expect(first).toMatchObject({ machineId: machines[0].id, value: 1000.05, source: 'import' });
     for (const m of machines) {
-      const f = await MachineForecast.findByPk(m.id);
+      const f = await primaryForecastOf(m);
       // 1 stored + 20,000 imported; the last of T-0x is 1,000 + 0.05 × 20,000 = 2,000 h
       expect(f).toMatchObject({ readingCount: 20_001, lastValue: 2000 });
     }

@@ -1,7 +1,9 @@
 // Random reading histories for the summary property test (reading-summary.property.test.ts): each
 // step is an intent (fast-check values) that `applyStep` turns into a concrete call of the real
 // service — logReading, logBulkReadings, correctReading, deleteReading, replaceMeter — against
-// the machine's current readings, so most steps are valid and some are refused on purpose.
+// the machine's current readings, so most steps are valid and some are refused on purpose. Each
+// step is on one meter of the machine (issue 13): the primary, sent without a meter id as older
+// clients do, or a second meter named by its id; the rules and summaries of the two never mix.
 //
 // Times run over four years (so the summary's three-year window matters) with extra weight on the
 // daylight-saving changes of America/Chicago: since 2007 the US changes at 2:00 local time on the
@@ -13,12 +15,10 @@ import { AppError } from '../../server/errors';
 import { MeterReading, MeterReplacement, type Machine } from '../../server/models';
 import type { OrgAccess } from '../../server/policies/context';
 import { logBulkReadings, logReading } from '../../server/services/reading-log';
-import {
-  correctReading,
-  deleteReading,
-  replaceMeter,
-} from '../../server/services/reading-corrections';
+import { correctReading, deleteReading } from '../../server/services/reading-corrections';
+import { replaceMeter } from '../../server/services/meter-changes';
 import { toRawValue, type MeterReplacementPoint } from '../../shared/domain';
+import { DST_CHANGES_UTC, timeChoice, type TimeChoice } from './reading-summary-times';
 
 const HOUR = 3_600_000;
 const DAY = 24 * HOUR;
@@ -29,52 +29,6 @@ const MAX_PER_DAY = 24;
 /** Clock skew the pace rule allows on elapsed time (reading-rules.ts: 5 minutes). */
 const SKEW_MS = 5 * 60_000;
 
-const DST_CHANGES_UTC = [
-  Date.UTC(2023, 2, 12, 8), // spring forward: 02:00 CST becomes 03:00 CDT
-  Date.UTC(2023, 10, 5, 7), // fall back: 02:00 CDT becomes 01:00 CST
-  Date.UTC(2024, 2, 10, 8),
-  Date.UTC(2024, 10, 3, 7),
-  Date.UTC(2025, 2, 9, 8),
-  Date.UTC(2025, 10, 2, 7),
-];
-
-/** Where a step's time falls: anywhere, near a clock change, the same local day as a reading… */
-const timeChoice = fc.oneof(
-  fc.record({
-    near: fc.constant('anywhere' as const),
-    at: fc.double({ min: 0, max: 1, noNaN: true }),
-  }),
-  fc.record({
-    near: fc.constant('dst' as const),
-    change: fc.nat(DST_CHANGES_UTC.length - 1),
-    minutes: fc.integer({ min: -150, max: 150 }),
-  }),
-  // the repeated hour: the same local time in CDT and an hour later in CST
-  fc.record({
-    near: fc.constant('repeated hour' as const),
-    change: fc.constantFrom(1, 3, 5),
-    minute: fc.nat(59),
-    second: fc.boolean(),
-  }),
-  fc.record({
-    near: fc.constant('same day' as const),
-    pick: fc.double({ min: 0, max: 1, noNaN: true }),
-    minutes: fc.integer({ min: -600, max: 600 }),
-  }),
-  fc.record({ near: fc.constant('after last' as const), hours: fc.integer({ min: 1, max: 400 }) }),
-  // a reading's very instant (a second reading then differs by at most the clock-skew allowance)
-  fc.record({
-    near: fc.constant('same instant' as const),
-    pick: fc.double({ min: 0, max: 1, noNaN: true }),
-  }),
-  // a reading in the repeated hour's twin: the same local time an hour earlier or later
-  fc.record({
-    near: fc.constant('twin' as const),
-    pick: fc.double({ min: 0, max: 1, noNaN: true }),
-    later: fc.boolean(),
-  }),
-);
-type TimeChoice = typeof timeChoice extends fc.Arbitrary<infer T> ? T : never;
 
 const fraction = fc.double({ min: 0, max: 1, noNaN: true });
 /** Which stored reading a step takes (0…1 over them in order); often the last, the usual typo. */
@@ -132,9 +86,15 @@ interface Stored {
   at: number;
 }
 
-async function storedReadings(machine: Machine): Promise<Stored[]> {
+/** The meter a step is on: its id, and whether the call names it (the primary need not). */
+export interface StepMeter {
+  id: string;
+  named: boolean;
+}
+
+async function storedReadings(machine: Machine, meter: StepMeter): Promise<Stored[]> {
   const rows = await MeterReading.findAll({
-    where: { machineId: machine.id },
+    where: { machineId: machine.id, meterId: meter.id },
     order: [
       ['takenAt', 'ASC'],
       ['lifetimeValue', 'ASC'],
@@ -143,8 +103,10 @@ async function storedReadings(machine: Machine): Promise<Stored[]> {
   return rows.map((r) => ({ id: r.id, lifetime: r.lifetimeValue, at: r.takenAt.getTime() }));
 }
 
-async function replacementsOf(machine: Machine): Promise<MeterReplacementPoint[]> {
-  const rows = await MeterReplacement.findAll({ where: { machineId: machine.id } });
+async function replacementsOf(machine: Machine, meter: StepMeter): Promise<MeterReplacementPoint[]> {
+  const rows = await MeterReplacement.findAll({
+    where: { machineId: machine.id, meterId: meter.id },
+  });
   return rows.map((r) => ({
     replacedAtMs: r.replacedAt.getTime(),
     oldFinalValue: r.oldFinalValue,
@@ -213,9 +175,11 @@ export async function applyStep(
   access: OrgAccess,
   machine: Machine,
   s: Step,
+  meter: StepMeter,
 ): Promise<'done' | 'refused'> {
-  const readings = await storedReadings(machine);
-  const replacements = await replacementsOf(machine);
+  const readings = await storedReadings(machine, meter);
+  const replacements = await replacementsOf(machine, meter);
+  const meterId = meter.named ? meter.id : undefined;
   const raw = (lifetime: number, at: number) =>
     Math.round(toRawValue(lifetime, at, replacements) * 1000) / 1000;
   try {
@@ -228,6 +192,7 @@ export async function applyStep(
         await logReading(access, machine.id, {
           value: raw(lifetime, at),
           takenAt: new Date(at).toISOString(),
+          meterId,
         });
         break;
       }
@@ -239,6 +204,7 @@ export async function applyStep(
           access,
           times.map((at) => ({
             machineId: machine.id,
+            meterId,
             value: raw(base, at),
             takenAt: new Date(at).toISOString(),
           })),
@@ -251,6 +217,7 @@ export async function applyStep(
         await logReading(access, machine.id, {
           value: raw(r.lifetime, r.at),
           takenAt: new Date(r.at).toISOString(),
+          meterId,
         });
         break;
       }
@@ -280,6 +247,7 @@ export async function applyStep(
         const at = (last?.at ?? START_MS) + s.hours * HOUR;
         const oldFinal = raw((last?.lifetime ?? 0) + s.extra * s.hours * 0.5, at);
         await replaceMeter(access, machine, {
+          meterId,
           oldFinalValue: Math.round(oldFinal * 100) / 100,
           newStartValue: s.newStart,
           replacedAt: new Date(at),

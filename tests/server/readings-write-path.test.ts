@@ -12,7 +12,8 @@ import {
   createTask,
   signedInAgent,
 } from '../support/factories';
-import { MachineForecast, MeterReading } from '../../server/models';
+import { MeterReading } from '../../server/models';
+import { primaryForecastOf } from '../../server/services/primary-forecast';
 import { asStoredValue } from '../../server/services/readings';
 import { refreshMachineForecast } from '../../server/services/forecast';
 
@@ -67,9 +68,11 @@ describe('reading write path', () => {
     // each statement by its first words (ids and values differ)
     const heads = (list: string[]) => list.map((sql) => sql.replace(/'[^']*'/g, '?').slice(0, 90));
     expect(heads(onLarge)).toEqual(heads(onSmall));
-    // a full rebuild selects every reading of the machine in order, with no bound on time
+    // a full rebuild selects every reading of the machine's meters in order, with no bound on time
     const wholeHistory = (sql: string) =>
-      /FROM meter_readings WHERE organization_id = \S+ AND machine_id = \S+ ORDER BY/.test(sql);
+      /FROM machine_meters mm LEFT JOIN meter_readings r ON .* WHERE mm.organization_id = \S+ AND mm.machine_id = \S+ ORDER BY/.test(
+        sql,
+      );
     const rebuild = await statementsOf(() => refreshMachineForecast(large.id, org.id));
     expect(rebuild.filter(wholeHistory)).toHaveLength(1);
     expect(onLarge.filter(wholeHistory)).toEqual([]);
@@ -78,7 +81,7 @@ describe('reading write path', () => {
     // session; BEGIN; the machine loaded and locked; what the rules and summary read; all the
     // writes; COMMIT
     expect(onLarge.length).toBeLessThanOrEqual(6);
-    const stored = (await MachineForecast.findByPk(large.id))!;
+    const stored = (await primaryForecastOf(large))!;
     expect(stored.readingCount).toBe(401);
     expect(stored.lastValue).toBe(2000);
   });

@@ -20,12 +20,8 @@ import { canCorrectReading, canImportReadings, canReplaceMeter } from '../../pol
 import { presentLastReading } from '../../presenters/machine';
 import { presentReading, presentReplacement } from '../../presenters/reading';
 import { loadMachine } from '../../services/machines';
-import {
-  correctReading,
-  deleteReading,
-  loadReading,
-  replaceMeter,
-} from '../../services/reading-corrections';
+import { correctReading, deleteReading, loadReading } from '../../services/reading-corrections';
+import { replaceMeter } from '../../services/meter-changes';
 import {
   logBulkReadings,
   logReading,
