@@ -9,7 +9,7 @@ import pg from 'pg';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../server/db';
 import { report } from './report';
-import { serve } from './readings-load';
+import { serveApi } from './api-process';
 import {
   IMPORT_EMAIL,
   IMPORT_PASSWORD,
@@ -79,22 +79,7 @@ const copyMs = await copyBaseline();
 const copyRate = (file.rows / copyMs) * 1000;
 
 // 2. The API as its own process: preview, then commit, of the same file.
-const api = await serve(
-  'server/index.ts',
-  [],
-  {
-    ...process.env,
-    NODE_ENV: 'production',
-    LOG_LEVEL: 'silent',
-    SERVE_CLIENT: '0',
-    HOST: '127.0.0.1',
-    PORT: String(APP_PORT),
-    APP_URL: `http://127.0.0.1:${APP_PORT}`,
-    VALIDATE_RESPONSES: '0',
-  },
-  APP_PORT,
-  '/api/v1/health',
-);
+const api = await serveApi(APP_PORT);
 try {
   const cookie = await signIn(api.origin, IMPORT_EMAIL, IMPORT_PASSWORD);
   const post = async (step: 'preview' | 'commit', csv: string) => {

@@ -11,7 +11,7 @@ import { spawn } from 'node:child_process';
 import { performance } from 'node:perf_hooks';
 import pg from 'pg';
 import { report } from './report';
-import { serve } from './readings-load';
+import { apiProcessEnv, serveApi } from './api-process';
 import { buildScaleData, SCALE_PASSWORD, type BenchFarm } from './datasets';
 import { memoryMb, pairedP95, signIn, timedBare, timedGet } from './scale-timing';
 import { dueBareStatements, boardBareStatements } from './scale-statements';
@@ -35,17 +35,7 @@ console.log(
     `COPY ${data.copySeconds.toFixed(1)} s, summaries ${data.summarySeconds.toFixed(1)} s`,
 );
 
-const childEnv = {
-  ...process.env,
-  NODE_ENV: 'production',
-  LOG_LEVEL: 'silent',
-  SERVE_CLIENT: '0',
-  HOST: '127.0.0.1',
-  PORT: String(APP_PORT),
-  APP_URL: `http://127.0.0.1:${APP_PORT}`,
-  VALIDATE_RESPONSES: '0',
-};
-const api = await serve('server/index.ts', [], childEnv, APP_PORT, '/api/v1/health');
+const api = await serveApi(APP_PORT);
 const bare = new pg.Client({ connectionString: databaseUrl });
 await bare.connect();
 try {
@@ -123,7 +113,7 @@ async function runDigestProcess(now: Date) {
   const child = spawn(
     process.execPath,
     ['--import', 'tsx', 'scripts/bench/scale-digest.ts', now.toISOString()],
-    { env: childEnv, stdio: ['pipe', 'pipe', 'inherit'] },
+    { env: apiProcessEnv(APP_PORT), stdio: ['pipe', 'pipe', 'inherit'] },
   );
   const t = performance.now();
   let out = '';

@@ -16,7 +16,7 @@ import { ingestSnapshot } from '../../server/services/telematics';
 import { authenticateApiKey } from '../../server/services/api-keys';
 import { buildScaleData } from './datasets';
 import { profiled } from './cpu-profile';
-import { serve } from './readings-load';
+import { serveApi } from './api-process';
 import { percentiles, report } from './report';
 
 const arg = (name: string, fallback: number) =>
@@ -100,22 +100,7 @@ if (process.argv.includes('--cpu-prof')) {
   );
 }
 
-const api = await serve(
-  'server/index.ts',
-  [],
-  {
-    ...process.env,
-    NODE_ENV: 'production',
-    LOG_LEVEL: 'silent',
-    SERVE_CLIENT: '0',
-    HOST: '127.0.0.1',
-    PORT: String(APP_PORT),
-    APP_URL: `http://127.0.0.1:${APP_PORT}`,
-    VALIDATE_RESPONSES: '0',
-  },
-  APP_PORT,
-  '/api/v1/health',
-);
+const api = await serveApi(APP_PORT);
 const bare = new pg.Client({ connectionString: databaseUrl });
 await bare.connect();
 
