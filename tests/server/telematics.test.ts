@@ -184,6 +184,32 @@ describe('ISO/TS 15143-3 snapshot', () => {
   });
 });
 
+describe('telematics id of a machine', () => {
+  beforeEach(resetDatabase);
+
+  it('set and cleared through the API; unique per farm (422 naming telematicsId), free on another farm', async () => {
+    const { org, agent, bySerial, byFeedId } = await farm();
+    const url = (id: string) => `/api/v1/organizations/${org.id}/machines/${id}`;
+    const set = await agent.patch(url(bySerial.id)).send({ telematicsId: 'feed-t02' });
+    expect(set.status).toBe(200);
+    expect(set.body.data.telematicsId).toBe('feed-t02');
+    const taken = await agent.patch(url(bySerial.id)).send({ telematicsId: 'feed-c01' });
+    expect(taken.status).toBe(422);
+    expect(taken.body.error.fields.telematicsId).toMatch(/C-01/);
+    expect((await byFeedId.reload()).telematicsId).toBe('feed-c01');
+    const cleared = await agent.patch(url(bySerial.id)).send({ telematicsId: '' });
+    expect(cleared.body.data.telematicsId).toBeNull();
+    const other = await createOrganization();
+    const { user } = await createMember(other, 'manager');
+    const theirs = await signedInAgent(app, user);
+    const made = await theirs
+      .post(`/api/v1/organizations/${other.id}/machines`)
+      .send({ fleetNumber: 'X-1', name: 'Theirs', category: 'tractor', telematicsId: 'feed-c01' });
+    expect(made.status).toBe(201);
+    expect(made.body.data.telematicsId).toBe('feed-c01');
+  });
+});
+
 describe('SAE J1939 candump log', () => {
   beforeEach(resetDatabase);
 
