@@ -3,6 +3,8 @@ import { RouterProvider } from 'react-router-dom';
 import { FullPageMessage } from '../components/errors/full-page-message';
 import { ErrorBoundary } from '../components/errors/error-boundary';
 import { ReconnectingBanner } from '../components/errors/reconnecting-banner';
+import { OfflineBanner } from '../components/layouts/offline-banner';
+import { UpdatePrompt } from '../components/layouts/update-prompt';
 import { Button } from '../components/ui/button';
 import { clearSession, type Me } from '../lib/auth';
 import { createQueryClient } from '../lib/query-client';
@@ -43,6 +45,8 @@ export function AppProviders() {
       <QueryClientProvider client={queryClient}>
         <RouterProvider router={router} />
         <ReconnectingBanner />
+        <OfflineBanner />
+        <UpdatePrompt />
       </QueryClientProvider>
     </ErrorBoundary>
   );

@@ -6,6 +6,7 @@ import { organizationPages } from './organization-pages';
 import { paths } from './paths';
 import { OrganizationLayout, organizationLoader } from './routes/organization-layout';
 import { AppLoading, RootLayout } from './routes/root';
+import { OfflineWarmUp } from './offline-warm-up';
 import { OutboxSender } from './outbox-sender';
 
 const home = paths.home.href();
@@ -95,6 +96,7 @@ export function createAppRouter(queryClient: QueryClient) {
           element: (
             // work saved on the phone goes out as soon as the app runs online
             <OutboxSender>
+              <OfflineWarmUp />
               <OrganizationLayout />
             </OutboxSender>
           ),

@@ -8,6 +8,7 @@ import {
 } from '@tanstack/react-query';
 import type { Me, SessionProbe } from '../../shared/schemas/auth';
 import { apiClient, isApiError, type DataEnvelope } from './api-client';
+import { clearApiCache } from './offline-cache';
 import { queryKeys } from './query-keys';
 
 // The signed-in person and their memberships. This lives in lib (not in a feature) because the
@@ -24,7 +25,9 @@ export type Organization = Membership['organization'];
 export async function fetchMe(signal?: AbortSignal): Promise<Me | null> {
   try {
     const body = await apiClient.get<DataEnvelope<SessionProbe>>('/session', { signal });
-    return body.data.signedIn ? body.data.me : null;
+    if (body.data.signedIn) return body.data.me;
+    await clearApiCache();
+    return null;
   } catch (error) {
     if (isApiError(error) && error.status === 401) return null;
     throw error;
@@ -46,6 +49,7 @@ export const useMe = () => useQuery(meQueryOptions());
  * before belonged to whoever was signed in before, so it goes first.
  */
 export function storeSession(queryClient: QueryClient, me: Me): void {
+  void clearApiCache();
   queryClient.removeQueries({
     predicate: (query) => query.queryKey[0] !== queryKeys.session.all[0],
   });
@@ -53,6 +57,7 @@ export function storeSession(queryClient: QueryClient, me: Me): void {
 }
 
 export function clearSession(queryClient: QueryClient): void {
+  void clearApiCache();
   queryClient.clear();
   queryClient.setQueryData(queryKeys.session.me(), null);
 }

@@ -30,6 +30,10 @@ writeFileSync(path.join(dist, 'assets', 'index-Ef56Gh78.css.br'), stylesBr);
 writeFileSync(path.join(dist, 'assets', 'index-Ef56Gh78.css.gz'), gzipSync(styles, { level: 9 }));
 writeFileSync(path.join(dist, 'index.html'), '<!doctype html><title>Hourstone</title>');
 writeFileSync(path.join(dist, 'favicon.svg'), '<svg xmlns="http://www.w3.org/2000/svg"/>');
+// What vite-plugin-pwa writes at the top level: the service worker, its Workbox runtime, the manifest.
+writeFileSync(path.join(dist, 'sw.js'), "importScripts('workbox-1a2b3c4d.js');\n");
+writeFileSync(path.join(dist, 'workbox-1a2b3c4d.js'), 'self.workbox = {};\n');
+writeFileSync(path.join(dist, 'manifest.webmanifest'), '{"name":"Hourstone"}');
 afterAll(() => rmSync(dist, { recursive: true, force: true }));
 
 const app = createApp({ serveClient: true, clientDist: dist });
@@ -94,6 +98,22 @@ describe('client files', () => {
       expect(res.headers['cache-control'], url).toBe('no-cache');
     }
     expect((await request(app).get('/due')).text).toContain('<title>Hourstone</title>');
+  });
+
+  it('the service worker, its runtime and the web app manifest are revalidated, with their types', async () => {
+    // A cached sw.js would keep an old app running past a deploy: browsers revalidate a worker
+    // script at most once a day unless told no-cache (Service Workers spec, update check).
+    const types: Record<string, RegExp> = {
+      '/sw.js': /^(application|text)\/javascript/,
+      '/workbox-1a2b3c4d.js': /^(application|text)\/javascript/,
+      '/manifest.webmanifest': /^application\/manifest\+json/,
+    };
+    for (const [url, type] of Object.entries(types)) {
+      const res = await request(app).get(url);
+      expect(res.status, url).toBe(200);
+      expect(res.headers['cache-control'], url).toBe('no-cache');
+      expect(res.headers['content-type'], url).toMatch(type);
+    }
   });
 
   it('a missing asset is a 404, not the app page (a stale tab must not run HTML as a script)', async () => {

@@ -1,5 +1,6 @@
 import { useIsFetching, type Query } from '@tanstack/react-query';
 import { isUnavailable } from '../../lib/api-client';
+import { useOnline } from '../layouts/offline-banner';
 import { Spinner } from '../ui/spinner';
 
 /** A read that failed because the server or its database was away, and is being tried again. */
@@ -12,7 +13,9 @@ export const isRetryingUnavailable = (query: Query) =>
  */
 export function ReconnectingBanner() {
   const retrying = useIsFetching({ predicate: isRetryingUnavailable });
-  if (retrying === 0) return null;
+  const online = useOnline();
+  // offline, the offline banner says it (and what waits to be sent)
+  if (retrying === 0 || !online) return null;
   return (
     <div
       role="status"

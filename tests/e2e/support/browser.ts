@@ -38,15 +38,20 @@ const CHROMIUM_ARGS = [
 
 /**
  * Starts chromium with a fresh profile. A persistent context is used because launch() refuses
- * --user-data-dir; the profile folder is removed again by close().
+ * --user-data-dir; the profile folder is removed again by close(). The app's service worker is
+ * blocked unless a test asks for it (offline.e2e.ts): page.route() does not see the requests a
+ * service worker answers, and the other tests check the pages, not the offline copy.
  */
-export async function launchBrowser(): Promise<TestBrowser> {
+export async function launchBrowser(
+  options: { serviceWorkers?: 'allow' | 'block' } = {},
+): Promise<TestBrowser> {
   const profileDir = await mkdtemp(path.join(tmpdir(), 'hourstone-e2e-'));
   const context = await chromium.launchPersistentContext(profileDir, {
     executablePath: process.env.CHROMIUM_PATH ?? '/usr/bin/chromium',
     headless: true,
     args: CHROMIUM_ARGS,
     baseURL: baseUrl,
+    serviceWorkers: options.serviceWorkers ?? 'block',
   });
   return {
     context,

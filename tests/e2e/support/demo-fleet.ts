@@ -70,6 +70,12 @@ export const SEASON_SERVICE_FLEET = 'SE-01';
  */
 export const DAILY_CARE_FLEET = 'DC-01';
 
+/**
+ * offline.e2e.ts adds these tractors of lena's (a reading each): OF-01 is walked round offline
+ * with a photo, OF-02 gets a Log hours reading offline and then a refused one (issue 14).
+ */
+export const OFFLINE_FLEET = ['OF-01', 'OF-02'] as const;
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -86,6 +92,7 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   RESTRICTED_USE_FLEET,
   SEASON_SERVICE_FLEET,
   DAILY_CARE_FLEET,
+  ...OFFLINE_FLEET,
 ]);
 
 /** The signed-in person's Larkspur Flats Farm membership: its organization id and time zone. */
