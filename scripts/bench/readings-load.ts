@@ -56,6 +56,20 @@ export function cpuMs(pid: number): number {
   return (Number(fields[11]) + Number(fields[12])) * 10;
 }
 
+/** CPU time (ms) so far of every process in a process group (a service started detached). */
+export function groupCpuMs(pgid: number): number {
+  let total = 0;
+  for (const pid of pids()) {
+    try {
+      const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
+      if (Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[2]) === pgid) total += cpuMs(pid);
+    } catch {
+      // ended while being read
+    }
+  }
+  return total;
+}
+
 const parentOf = (pid: number) => {
   const stat = readFileSync(`/proc/${pid}/stat`, 'utf8');
   return Number(stat.slice(stat.lastIndexOf(')') + 2).split(' ')[1]);
@@ -137,27 +151,50 @@ export async function loadPosts(
   connections: number,
   seconds: number,
 ) {
+  return loadPostsOver([target], machines, connections, seconds);
+}
+
+/**
+ * The same load spread over several servers at once (as a load balancer with keep-alive spreads
+ * it): the connections are dealt round-robin to the targets and the machines taken in one turn
+ * across all of them. Rates and counts are summed; p50 is the slowest target's.
+ */
+export async function loadPostsOver(
+  targets: PostTarget[],
+  machines: { id: string; value: number }[],
+  connections: number,
+  seconds: number,
+) {
   let next = 0;
-  const result = await autocannon({
-    url: target.origin,
-    connections,
-    duration: seconds,
-    headers: { 'content-type': 'application/json', ...target.headers },
-    requests: [
-      {
-        method: 'POST',
-        setupRequest: (req) => {
-          const m = machines[next++ % machines.length];
-          return { ...req, path: target.path(m.id), body: JSON.stringify({ value: m.value }) };
+  const runs = targets.map((target, t) => {
+    const share =
+      Math.floor(connections / targets.length) + (t < connections % targets.length ? 1 : 0);
+    return autocannon({
+      url: target.origin,
+      connections: share,
+      duration: seconds,
+      headers: { 'content-type': 'application/json', ...target.headers },
+      requests: [
+        {
+          method: 'POST',
+          setupRequest: (req) => {
+            const m = machines[next++ % machines.length];
+            return { ...req, path: target.path(m.id), body: JSON.stringify({ value: m.value }) };
+          },
         },
-      },
-    ],
+      ],
+    });
   });
+  const results = await Promise.all(runs);
+  const sum = (f: (r: (typeof results)[number]) => number) => results.reduce((a, r) => a + f(r), 0);
   return {
-    reqPerSec: result.requests.average,
-    total: result.requests.total,
-    non2xx: result.non2xx,
-    errors: result.errors,
-    p50: result.latency.p50,
+    reqPerSec: sum((r) => r.requests.average),
+    total: sum((r) => r.requests.total),
+    non2xx: sum((r) => r.non2xx),
+    errors: sum((r) => r.errors),
+    timeouts: sum((r) => r.timeouts),
+    p50: Math.max(...results.map((r) => r.latency.p50)),
+    /** requests each target answered */
+    perTarget: results.map((r) => r.requests.total),
   };
 }

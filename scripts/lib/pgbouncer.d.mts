@@ -6,6 +6,8 @@ export interface PgbouncerHandle {
   adminUrl: string;
   port: number;
   logFile: string;
+  /** process id of the running pgbouncer (from its pid file) */
+  pid(): number | undefined;
   stop(): Promise<void>;
 }
 

@@ -187,6 +187,8 @@ export async function startPgbouncer({ name, port, databaseUrl, poolSize = 20, m
     adminUrl: adminUrl.toString(),
     port,
     logFile: files.log,
+    /** process id of the running pgbouncer (from its pid file) */
+    pid: () => savedPid(files.pid),
     async stop() {
       if (!running) return;
       running = false;
