@@ -6,10 +6,10 @@
 import { sequelize } from '../db';
 import { AppError, notFound } from '../errors';
 import type { KeyContext } from '../policies/context';
-import { readingsClosedMessage, takesReadings } from '../policies/machine';
 import { lastOfEachHour, parseCandumpLine } from '../../shared/domain/candump';
 import { PGN_ENGINE_HOURS, engineHoursOf, pgnOf } from '../../shared/domain/j1939';
 import type { CandumpResult } from '../../shared/schemas/telematics';
+import { hoursRefusal } from './telematics';
 import { lockMachineNamed } from './telematics-match';
 import { recordTelematicsReadings } from './telematics-write';
 
@@ -79,19 +79,19 @@ export async function ingestCandump(
   // every PGN 65253 frame: those decoded and those refused before any rule was asked
   const engineHourFrames = frames.length + refused.length;
   return sequelize.transaction(async (transaction) => {
-    const machine = await lockMachineNamed(key.organization.id, machineRef, transaction);
-    if (!machine) throw notFound('Machine');
-    if (!takesReadings(machine))
-      throw new AppError(409, 'readings_closed', readingsClosedMessage(machine.fleetNumber));
-    if (machine.meterUnit !== 'h')
-      throw new AppError(
-        409,
-        'not_hours',
-        `${machine.fleetNumber} counts ${machine.meterUnit}, not hours: engine hours cannot go on its meter`,
-      );
+    const found = await lockMachineNamed(key.organization.id, machineRef, transaction);
+    if (!found) throw notFound('Machine');
+    const { machine, meter } = found;
+    const refusal = hoursRefusal(machine, meter);
+    if (refusal) throw new AppError(409, 'no_hour_meter', refusal);
     const outcomes = await recordTelematicsReadings(
       key,
-      kept.map((f) => ({ machine, value: f.hours, takenAt: new Date(f.timeMs) })),
+      kept.map((f) => ({
+        machine,
+        meterId: meter!.id,
+        value: f.hours,
+        takenAt: new Date(f.timeMs),
+      })),
       transaction,
     );
     let recorded = 0;

@@ -10,6 +10,8 @@ import { writeReadings } from './readings';
 
 export interface TelematicsReading {
   machine: Machine;
+  /** the machine's meter the hours go on (its engine-hours meter, else its primary) */
+  meterId: string;
   /** engine hours, as the machine's meter shows them */
   value: number;
   takenAt: Date;

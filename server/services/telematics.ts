@@ -12,7 +12,12 @@ import type {
   SnapshotResult,
   TelematicsItemStatus,
 } from '../../shared/schemas/telematics';
-import { lockMachinesNamed, serialKey, type MachineIndex } from './telematics-match';
+import {
+  lockMachinesNamed,
+  serialKey,
+  type HoursMeter,
+  type MachineIndex,
+} from './telematics-match';
 import { recordTelematicsReadings, type TelematicsReading } from './telematics-write';
 
 type Header = IsoSnapshot['Fleet']['Equipment'][number]['EquipmentHeader'];
@@ -46,10 +51,13 @@ function matchHeader(h: Header, index: MachineIndex): { machine: Machine } | { r
 }
 
 /** Why a matched machine takes no engine hours from a feed, if it does not. */
-function hoursRefusal(machine: Machine): string | null {
+export function hoursRefusal(
+  machine: Machine,
+  meter: HoursMeter | null | undefined,
+): string | null {
   if (!takesReadings(machine)) return readingsClosedMessage(named(machine));
-  if (machine.meterUnit !== 'h')
-    return `${named(machine)} counts ${machine.meterUnit}, not hours: CumulativeOperatingHours cannot go on its meter`;
+  if (!meter || meter.unit !== 'h')
+    return `${named(machine)} has no hour meter (it counts ${meter?.unit ?? machine.meterUnit}): engine hours cannot go on it`;
   return null;
 }
 
@@ -94,13 +102,15 @@ export async function ingestSnapshot(
       item.machineId = match.machine.id;
       item.fleetNumber = match.machine.fleetNumber;
       const hours = entry.CumulativeOperatingHours;
-      const refusal = hoursRefusal(match.machine);
+      const meter = index.meters.get(match.machine.id);
+      const refusal = hoursRefusal(match.machine, meter);
       if (!hours)
         Object.assign(item, { status: 'no_hours', reason: 'No CumulativeOperatingHours' });
       else if (refusal) Object.assign(item, { status: 'refused', reason: refusal });
       else {
         readings.push({
           machine: match.machine,
+          meterId: meter!.id,
           value: hours.Hour,
           takenAt: new Date(hours.datetime),
         });

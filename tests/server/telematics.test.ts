@@ -5,7 +5,7 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import request from 'supertest';
 import { createApp } from '../../server/app';
-import { MeterReading } from '../../server/models';
+import { MachineMeter, MeterReading } from '../../server/models';
 import { countRows, resetDatabase } from '../support/db';
 import {
   addReadings,
@@ -125,6 +125,32 @@ describe('ISO/TS 15143-3 snapshot', () => {
     expect(res.body.data.items[0].reason).toMatch(/sold/);
     expect(res.body.data.items[1].reason).toMatch(/counts km/);
     expect(await countRows('meter_readings')).toBe(0);
+  });
+
+  it("hours go on the machine's engine-hours meter when it has one, else on its primary", async () => {
+    const { key, org, bySerial } = await farm();
+    // a truck counting km on its primary meter, with an engine-hours meter beside it
+    const truck = await createMachine(org, { fleetNumber: 'TR-02', meterUnit: 'km' });
+    await truck.update({ serialNumber: 'TRUCK-2' });
+    const engine = await MachineMeter.create({
+      organizationId: org.id,
+      machineId: truck.id,
+      kind: 'engine_hours',
+      unit: 'h',
+      position: 1,
+    });
+    const res = await send(key, [
+      entry({ SerialNumber: 'TRUCK-2' }, 5210.5),
+      entry({ SerialNumber: 'TMS-RC210-19-4417' }, 3120.5),
+    ]);
+    expect(res.body.data.counts.recorded).toBe(2);
+    const onTruck = await MeterReading.findOne({ where: { machineId: truck.id } });
+    expect(onTruck).toMatchObject({ meterId: engine.id, value: 5210.5 });
+    const primary = await MachineMeter.findOne({
+      where: { machineId: bySerial.id, isPrimary: true },
+    });
+    const onTractor = await MeterReading.findOne({ where: { machineId: bySerial.id } });
+    expect(onTractor!.meterId).toBe(primary!.id);
   });
 
   it('a serial number on two machines — names neither, asks for a telematics id', async () => {
