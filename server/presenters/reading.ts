@@ -3,6 +3,7 @@ import type {
   MeterReplacement as MeterReplacementJson,
   Reading,
 } from '../../shared/schemas/readings';
+import { apiKeyNameOf } from '../../shared/domain/telematics-source';
 
 export const presentReading = (r: MeterReading): Reading => ({
   id: r.id,
@@ -11,6 +12,7 @@ export const presentReading = (r: MeterReading): Reading => ({
   lifetimeValue: r.lifetimeValue,
   takenAt: r.takenAt.toISOString(),
   source: r.source,
+  sourceName: apiKeyNameOf(r.importKey),
   enteredBy: r.enteredBy,
 });
 

@@ -90,6 +90,8 @@ export const readingSchema = z
     lifetimeValue: z.number(),
     takenAt: z.string(),
     source: z.enum(READING_SOURCES),
+    /** the name of the API key a telematics reading came with; null for any other reading */
+    sourceName: z.string().nullable(),
     enteredBy: z.string().nullable(),
   })
   .meta({ id: 'MeterReading' });

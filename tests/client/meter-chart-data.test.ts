@@ -17,10 +17,12 @@ const T0 = Date.parse('2025-01-01T00:00:00Z');
 const at = (days: number) => T0 + days * DAY;
 const reading = (days: number, lifetimeValue: number): Reading => ({
   id: `r-${days}`,
+  meterId: 'meter-1',
   value: lifetimeValue,
   lifetimeValue,
   takenAt: new Date(at(days)).toISOString(),
   source: 'manual',
+  sourceName: null,
   enteredBy: null,
 });
 const replacement = (days: number): Replacement => ({

@@ -51,7 +51,7 @@ describe('ISO/TS 15143-3 snapshot', () => {
   beforeEach(resetDatabase);
 
   it('matches by serial number, PIN and telematics id; unknown equipment is reported, never created', async () => {
-    const { key, bySerial, byPin, byFeedId } = await farm();
+    const { key, org, agent, bySerial, byPin, byFeedId } = await farm();
     const machinesBefore = await countRows('machines');
     const res = await send(key, [
       entry({ SerialNumber: 'tms-rc210-19-4417' }, 3120.5),
@@ -84,6 +84,13 @@ describe('ISO/TS 15143-3 snapshot', () => {
     const stored = await MeterReading.findOne({ where: { machineId: byPin.id } });
     expect(stored).toMatchObject({ value: 1450.25, source: 'telematics' });
     expect(stored!.importKey).toMatch(/^api-key:[a-z0-9]{8}:Yard feed$/);
+    // the machine's history says where each reading came from: the key's name
+    const history = await agent.get(
+      `/api/v1/organizations/${org.id}/machines/${byPin.id}/readings`,
+    );
+    expect(history.body.data).toEqual([
+      expect.objectContaining({ value: 1450.25, source: 'telematics', sourceName: 'Yard feed' }),
+    ]);
   });
 
   it('a resend adds nothing — every item already there', async () => {
