@@ -12,7 +12,7 @@ export const presentReading = (r: MeterReading): Reading => ({
   lifetimeValue: r.lifetimeValue,
   takenAt: r.takenAt.toISOString(),
   source: r.source,
-  sourceName: apiKeyNameOf(r.importKey),
+  sourceName: r.source === 'telematics' ? apiKeyNameOf(r.importKey) : null,
   enteredBy: r.enteredBy,
 });
 
