@@ -76,6 +76,12 @@ export const DAILY_CARE_FLEET = 'DC-01';
  */
 export const OFFLINE_FLEET = ['OF-01', 'OF-02'] as const;
 
+/**
+ * telematics.e2e.ts adds this tractor (a serial number, one reading) and posts engine hours for
+ * it with an API key made in Settings (issue 13).
+ */
+export const TELEMATICS_FLEET = 'TM-01';
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -93,6 +99,7 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   SEASON_SERVICE_FLEET,
   DAILY_CARE_FLEET,
   ...OFFLINE_FLEET,
+  TELEMATICS_FLEET,
 ]);
 
 /** The signed-in person's Larkspur Flats Farm membership: its organization id and time zone. */
