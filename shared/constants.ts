@@ -106,7 +106,16 @@ export const MACHINE_STATUS_LABELS: Record<MachineStatus, string> = {
   sold: 'Sold',
 };
 
-export const READING_SOURCES = ['manual', 'walkaround', 'import', 'service', 'telematics'] as const;
+// 'hitch': an implement's hours from the tractor it was hitched to (migration 0028), written by
+// the server from the hitch log, never typed
+export const READING_SOURCES = [
+  'manual',
+  'walkaround',
+  'import',
+  'service',
+  'telematics',
+  'hitch',
+] as const;
 export type ReadingSource = (typeof READING_SOURCES)[number];
 
 // history_unknown: a task on a machine that came with hours, whose last service nobody has

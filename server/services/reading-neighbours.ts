@@ -31,6 +31,15 @@ const AROUND_SQL = `SELECT id, value, lifetime_value, taken_at FROM meter_readin
        AND taken_at <= coalesce((SELECT min(taken_at) FROM meter_readings
                                  WHERE organization_id = $1 AND meter_id = mm.id AND taken_at > $4), 'infinity')`;
 
+// The implements whose hitch hours a new reading of this meter may change (hitch-readings.ts): on
+// this tractor by this meter's kind, still hitched, or unhitched after the reading before the new
+// ones (the span's end was read from that reading and the next). Empty for almost every post, so
+// the follow-up statements run only for a tractor pulling something.
+const HITCHED_SQL = `SELECT coalesce(array_agg(DISTINCT h.implement_id::text), '{}') FROM hitch_spans h
+     WHERE h.organization_id = $1 AND h.tractor_id = $2 AND h.meter_kind = mm.kind
+       AND (h.ended_at IS NULL OR h.ended_at > coalesce((SELECT max(taken_at) FROM meter_readings
+              WHERE organization_id = $1 AND meter_id = mm.id AND taken_at < $3), '-infinity'))`;
+
 interface NeighbourRow {
   id: string;
   value: number | string;
@@ -61,6 +70,7 @@ interface ContextRow {
   replacements: { replacedAt: string; oldFinalValue: number; newStartValue: number }[];
   neighbours: NeighbourRow[];
   tasks: DueTask[];
+  hitched: string[];
   has_summary: boolean;
   daily: ReadingPoint[] | null;
   reading_count: number | null;
@@ -99,7 +109,8 @@ export async function writeContext(
             (SELECT coalesce(json_agg(n ORDER BY n.taken_at, n.lifetime_value), '[]')
              FROM (${AROUND_SQL}) n) AS neighbours,
             (SELECT coalesce(json_agg(t), '[]') FROM (SELECT ${DUE_TASK_COLUMNS} FROM service_tasks
-               WHERE organization_id = $1 AND meter_id = mm.id ORDER BY position) t) AS tasks
+               WHERE organization_id = $1 AND meter_id = mm.id ORDER BY position) t) AS tasks,
+            (${HITCHED_SQL}) AS hitched
      FROM machine_meters mm LEFT JOIN machine_forecasts f ON f.meter_id = mm.id
      WHERE mm.organization_id = $1 AND mm.machine_id = $2
        AND CASE WHEN $5::uuid IS NULL THEN mm.is_primary ELSE mm.id = $5::uuid END`,
@@ -134,6 +145,8 @@ export async function writeContext(
     neighbours: row.neighbours.map(toNeighbour),
     summary,
     tasks: row.tasks,
+    /** implements on this tractor whose hitch readings follow this write */
+    hitchedImplementIds: row.hitched,
   };
 }
 

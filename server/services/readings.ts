@@ -7,6 +7,7 @@ import type { OrgAccess } from '../policies/context';
 import { directQuery } from '../db-direct';
 import { lockMachineReadings, timeFormatter, writeContext } from './reading-neighbours';
 import { storeNewReadings, type MachineContext } from './reading-store';
+import { recomputeImplements } from './hitch-readings';
 
 export interface NewReading {
   machine: Machine;
@@ -61,6 +62,12 @@ export async function writeReadings(
   toInsert.forEach(({ index }, i) =>
     outcomes.push({ index, status: 'added', reading: rows[i], meterId: rows[i].meterId }),
   );
+  // a tractor pulling an implement: the implement's hours follow (hitch-readings.ts)
+  if (rows.length && plan.hitched.size) {
+    const { organization, userId } = access;
+    const who = { organizationId: organization.id, timeZone: organization.timeZone, userId };
+    await recomputeImplements(who, plan.hitched, transaction);
+  }
   return outcomes.sort((a, b) => a.index - b.index);
 }
 
@@ -113,6 +120,7 @@ export async function planReadings(
 
   const toInsert: { item: NewReading; index: number; lifetime: number }[] = [];
   const contexts = new Map<string, MachineContext>();
+  const hitched = new Set<string>();
   const locked = new Set<string>();
   for (const group of byMeter) {
     const machine = group[0].item.machine;
@@ -133,6 +141,7 @@ export async function planReadings(
       continue;
     }
     const { replacements, meter } = context;
+    for (const id of context.hitchedImplementIds) hitched.add(id);
     contexts.set(meter.id, { machine, meter, summary: context.summary, tasks: context.tasks });
     const existing: Point[] = context.neighbours.map((r) => ({
       lifetime: r.lifetimeValue,
@@ -180,7 +189,7 @@ export async function planReadings(
       toInsert.push({ item: { ...item, value, meterId: meter.id }, index, lifetime });
     }
   }
-  return { outcomes, errors, toInsert, contexts };
+  return { outcomes, errors, toInsert, contexts, hitched };
 }
 
 /** The refusal of a meter id that is not one of the machine's meters. */

@@ -28,6 +28,7 @@ const SOURCE_LABELS: Record<Reading['source'], string> = {
   import: 'Imported',
   service: 'Service',
   telematics: 'Telematics',
+  hitch: 'From hitching',
 };
 
 interface ReadingRowProps {
