@@ -90,10 +90,14 @@ export async function restoreDatabase(snapshot: DatabaseSnapshot): Promise<void>
     for (const { table, columns, rows } of snapshot) {
       if (rows === '[]') continue;
       const list = columns.join(', ');
+      // the rows go back as they were: the tables' own triggers (a new machine adds its primary
+      // meter, migration 0026) would add rows the snapshot already holds
+      await sequelize.query(`ALTER TABLE "${table}" DISABLE TRIGGER USER`, { transaction });
       await sequelize.query(
         `INSERT INTO "${table}" (${list}) SELECT ${list} FROM json_populate_recordset(NULL::"${table}", :rows)`,
         { replacements: { rows }, transaction },
       );
+      await sequelize.query(`ALTER TABLE "${table}" ENABLE TRIGGER USER`, { transaction });
     }
     const owned = await sequelize.query<{ seq: string; tbl: string; col: string }>(
       `SELECT s.relname AS seq, t.relname AS tbl, a.attname AS col
