@@ -1,3 +1,6 @@
+import { readFile, writeFile } from 'node:fs/promises';
+import path from 'node:path';
+import { fileURLToPath } from 'node:url';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import type { Page } from 'playwright-core';
 import {
@@ -27,6 +30,15 @@ const [WALKED, LOGGED] = OFFLINE_FLEET;
 const PNG = Buffer.from(
   'iVBORw0KGgoAAAANSUhEUgAAAAEAAAABCAYAAAAfFcSJAAAADUlEQVR42mP8z8BQDwAEhQGAhKmMIQAAAABJRU5ErkJggg==',
   'base64',
+);
+
+/** The service worker of the build under test (scripts/test.mjs builds into CLIENT_DIST). */
+const SW_FILE = path.resolve(
+  path.dirname(fileURLToPath(import.meta.url)),
+  '..',
+  '..',
+  process.env.CLIENT_DIST ?? 'dist',
+  'sw.js',
 );
 
 interface Checklist {
@@ -232,12 +244,18 @@ describe('offline — the installed app in the yard (browser, service worker on)
     await page.getByRole('button', { name: 'Sign out' }).click();
     await page.waitForURL((url) => url.pathname.startsWith('/sign-in'));
     await page.getByLabel('Email', { exact: true }).waitFor();
-    // nothing of lena's is left: at most the sign-in page's own answer, "nobody is signed in"
+    // nothing of lena's is left: only what the signed-out sign-in page itself asked for (the
+    // probe's "nobody is signed in", whether sign-up is open), nothing of a farm or a person
     await expect
-      .poll(async () => (await cachedBodies(page)).filter(([url]) => url !== '/api/v1/session'))
+      .poll(async () =>
+        (await cachedBodies(page)).filter(
+          ([url, body]) =>
+            url.includes('/organizations') || body.includes(WALKED) || body.includes('lena'),
+        ),
+      )
       .toEqual([]);
-    for (const [, body] of await cachedBodies(page))
-      expect(JSON.parse(body)).toEqual({ data: { signedIn: false } });
+    const probe = (await cachedBodies(page)).find(([url]) => url === '/api/v1/session');
+    if (probe) expect(JSON.parse(probe[1])).toEqual({ data: { signedIn: false } });
 
     await browser.context.setOffline(true);
     await page.goto(`/o/${org}/log-hours`);
@@ -246,4 +264,35 @@ describe('offline — the installed app in the yard (browser, service worker on)
     expect(await page.locator('body').innerText()).not.toContain(WALKED);
     await browser.context.setOffline(false);
   });
+
+  it('a new version deployed — the open app says so, and Reload brings the new one in', async () => {
+    await page.goto('/sign-in');
+    await page.evaluate(async () => void (await navigator.serviceWorker.ready));
+    const original = await readFile(SW_FILE, 'utf8');
+    try {
+      // a deploy: the worker script's bytes change (browsers compare them byte for byte)
+      await writeFile(SW_FILE, `${original}\n// the next build\n`);
+      await page.evaluate(async () => {
+        await (await navigator.serviceWorker.getRegistration())?.update();
+      });
+      const prompt = page
+        .getByRole('alert')
+        .filter({ hasText: 'A new version of Hourstone is ready.' });
+      await prompt.waitFor({ timeout: 30_000 });
+      await screenshot(page, 'offline-update-prompt');
+      await Promise.all([
+        page.waitForEvent('load'),
+        prompt.getByRole('button', { name: 'Reload' }).click(),
+      ]);
+      await page.getByLabel('Email', { exact: true }).waitFor();
+      expect(
+        await page.evaluate(async () =>
+          Boolean((await navigator.serviceWorker.getRegistration())?.waiting),
+        ),
+      ).toBe(false);
+      expect(await prompt.count()).toBe(0);
+    } finally {
+      await writeFile(SW_FILE, original);
+    }
+  }, 60_000);
 });
