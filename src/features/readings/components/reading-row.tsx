@@ -31,6 +31,12 @@ const SOURCE_LABELS: Record<Reading['source'], string> = {
   hitch: 'From hitching',
 };
 
+/** Where a reading came from: by hand, an import, a walkaround… or which telematics key sent it. */
+const sourceLabel = (reading: Reading) => {
+  const label = SOURCE_LABELS[reading.source] ?? reading.source;
+  return reading.sourceName ? `${label} · ${reading.sourceName}` : label;
+};
+
 interface ReadingRowProps {
   orgId: string;
   machineId: string;
@@ -72,7 +78,7 @@ export function ReadingRow({
           ) : null}
           <span className="flex flex-wrap items-center gap-2 text-sm text-field-600">
             <time dateTime={reading.takenAt}>{when}</time>
-            <Badge>{SOURCE_LABELS[reading.source] ?? reading.source}</Badge>
+            <Badge>{sourceLabel(reading)}</Badge>
           </span>
         </div>
         {canCorrect && !editing ? (
