@@ -181,3 +181,20 @@ export async function buildReadingsFarm(
   );
   return { orgId: org.id, userId: user.id, daily: dailyIds[0], hourly, machines, readings: n };
 }
+
+/**
+ * What the load posts go round: the farm's daily machines (the hourly one is timed on its own),
+ * each with its current value (a repeat value taken now is a valid reading); `valueOf` has every
+ * machine's.
+ */
+export async function postRotation(farm: ReadingsFarm) {
+  const rows = await sequelize.query<{ machine_id: string; v: number }>(
+    'SELECT machine_id, last_raw_value::float AS v FROM machine_forecasts',
+    { type: QueryTypes.SELECT },
+  );
+  const valueOf = new Map(rows.map((r) => [r.machine_id, r.v]));
+  const rotation = farm.machines
+    .filter((id) => id !== farm.hourly)
+    .map((id) => ({ id, value: valueOf.get(id)! }));
+  return { rotation, valueOf };
+}

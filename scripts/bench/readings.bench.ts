@@ -12,12 +12,11 @@ import { readdirSync } from 'node:fs';
 import path from 'node:path';
 import { performance } from 'node:perf_hooks';
 import request from 'supertest';
-import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../server/db';
 import { createApp } from '../../server/app';
 import { printProfileFile, profiled } from './cpu-profile';
 import { percentiles, report } from './report';
-import { BENCH_EMAIL, BENCH_PASSWORD, buildReadingsFarm } from './readings-data';
+import { BENCH_EMAIL, BENCH_PASSWORD, buildReadingsFarm, postRotation } from './readings-data';
 import {
   cpuMs,
   databaseCpu,
@@ -47,15 +46,7 @@ console.log(
   `farm: ${farm.machines.length} machines × 10 tasks, ${farm.readings.toLocaleString('en-US')} readings ` +
     `(one machine of 17,500 hourly, the rest 730 daily), built with COPY in ${((performance.now() - t0) / 1000).toFixed(1)} s`,
 );
-const valueRows = await sequelize.query<{ machine_id: string; v: number }>(
-  'SELECT machine_id, last_raw_value::float AS v FROM machine_forecasts',
-  { type: QueryTypes.SELECT },
-);
-const valueOf = new Map(valueRows.map((r) => [r.machine_id, r.v]));
-// Posts go round the farm's daily machines (the hourly one is timed on its own).
-const rotation = farm.machines
-  .filter((id) => id !== farm.hourly)
-  .map((id) => ({ id, value: valueOf.get(id)! }));
+const { rotation, valueOf } = await postRotation(farm);
 
 // 1. What one post costs in-process: queries issued and CPU time (API + Sequelize + pg client).
 async function profilePosts(n: number) {

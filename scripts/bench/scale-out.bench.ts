@@ -10,13 +10,12 @@
 //   --machines=N (default 200)   --seconds=N (default 20)
 import { performance } from 'node:perf_hooks';
 import pg from 'pg';
-import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../server/db';
 import { startPgbouncer } from '../lib/pgbouncer.mjs';
 import { startApi, tsx } from '../lib/app.mjs';
 import { startService, stopAll, type Service } from '../lib/processes.mjs';
 import { report } from './report';
-import { BENCH_EMAIL, BENCH_PASSWORD, buildReadingsFarm } from './readings-data';
+import { BENCH_EMAIL, BENCH_PASSWORD, buildReadingsFarm, postRotation } from './readings-data';
 import {
   cpuMs,
   databaseCpu,
@@ -48,14 +47,8 @@ console.log(
   `farm: ${farm.machines.length} machines × 10 tasks, ${farm.readings.toLocaleString('en-US')} readings, ` +
     `built with COPY in ${((performance.now() - t0) / 1000).toFixed(1)} s`,
 );
-const valueRows = await sequelize.query<{ machine_id: string; v: number }>(
-  'SELECT machine_id, last_raw_value::float AS v FROM machine_forecasts',
-  { type: QueryTypes.SELECT },
-);
+const { rotation } = await postRotation(farm);
 await sequelize.close();
-const rotation = valueRows
-  .filter((r) => r.machine_id !== farm.hourly)
-  .map((r) => ({ id: r.machine_id, value: r.v }));
 
 const bouncer = await startPgbouncer({
   name: `bench${SLOT ? `-${SLOT}` : ''}`,
