@@ -192,3 +192,21 @@ export async function recomputeImplements(
     await recomputeHitchReadings(who, id, transaction);
   }
 }
+
+/** After a change of a tractor's readings: every implement it ever pulled (none, mostly). */
+export async function recomputeImplementsOf(
+  who: HitchRecompute,
+  tractorId: string,
+  transaction: Transaction,
+): Promise<void> {
+  const rows = await directQuery<{ implement_id: string }>(
+    transaction,
+    'SELECT DISTINCT implement_id FROM hitch_spans WHERE organization_id = $1 AND tractor_id = $2',
+    [who.organizationId, tractorId],
+  );
+  await recomputeImplements(
+    who,
+    rows.map((r) => r.implement_id),
+    transaction,
+  );
+}

@@ -9,6 +9,7 @@ import { checkReading, toLifetimeValue } from '../../shared/domain';
 import type { OrgAccess } from '../policies/context';
 import { recordAudit } from '../infra/audit';
 import { refreshMachineForecast, storeForecasts } from './forecast';
+import { recomputeImplementsOf } from './hitch-readings';
 import {
   pickSummaryColumns,
   summaryFromColumns,
@@ -42,14 +43,17 @@ async function updateSummary(
   const summary = stored && (await summaryAfterChange(ref, stored, change, timeZone, transaction));
   if (!summary) {
     await refreshMachineForecast(machine.id, access.organization.id, transaction, { timeZone });
-    return;
+  } else {
+    await storeForecasts(access.organization.id, new Map([[meterId, summary]]), {
+      transaction,
+      timeZone,
+      machines: [machine],
+      meters: [{ id: meterId, machineId: machine.id }],
+    });
   }
-  await storeForecasts(access.organization.id, new Map([[meterId, summary]]), {
-    transaction,
-    timeZone,
-    machines: [machine],
-    meters: [{ id: meterId, machineId: machine.id }],
-  });
+  // a tractor's reading changed: the implements it pulled count its hours again
+  const who = { organizationId: access.organization.id, timeZone, userId: access.userId };
+  await recomputeImplementsOf(who, machine.id, transaction);
 }
 
 /** A reading of the caller's organization, or 404. */

@@ -34,6 +34,20 @@ export const changedBy = {
     k.readings.all(orgId),
     ...dueOfMachine(orgId, machineId),
     k.walkarounds.checklists(orgId),
+    // a tractor's reading moves the hours of what it pulls (the hitch log): their due figures too
+    k.hitch.all(orgId),
+    k.tasks.all(orgId),
+    k.machines.details(orgId),
+  ],
+
+  /** a span of the hitch log started, ended, corrected or removed: the implement's hours move */
+  hitch: (orgId: string): QueryKey[] => [
+    k.hitch.all(orgId),
+    k.readings.all(orgId),
+    k.tasks.all(orgId),
+    k.machines.all(orgId),
+    k.due.all(orgId),
+    k.shopWeek.all(orgId),
   ],
 
   /** readings of many machines at once (Log hours, a CSV import) */

@@ -162,6 +162,12 @@ const invitations = {
 };
 
 /** the organization's API keys for machine data (its manager's settings) */
+/** the hitch log: which tractor pulled which implement (issue 13) */
+const hitch = {
+  all: (orgId: string) => ['hitch', orgId] as const,
+  machine: (orgId: string, machineId: string) => [...hitch.all(orgId), machineId] as const,
+};
+
 const apiKeys = {
   all: (orgId: string) => ['api-keys', orgId] as const,
   list: (orgId: string) => [...apiKeys.all(orgId), 'list'] as const,
@@ -224,6 +230,7 @@ export const queryKeys = {
   members,
   invitations,
   apiKeys,
+  hitch,
   organizations,
   onboarding,
   session,

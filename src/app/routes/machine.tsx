@@ -8,7 +8,13 @@ import { buttonClasses } from '../../components/ui/button';
 import { Icon } from '../../components/ui/icons';
 import { PageHeader } from '../../components/ui/page-header';
 import { PageSkeleton } from '../../components/ui/skeleton';
+import {
+  HITCH_IMPLEMENT_CATEGORIES,
+  HITCH_TRACTOR_CATEGORIES,
+} from '../../../shared/schemas/hitch';
+import { HitchSection } from '../../features/hitch/components/hitch-section';
 import { machineQueryOptions, useMachine } from '../../features/machines/api/get-machine';
+import { useMachines } from '../../features/machines/api/get-machines';
 import { MachineDetails } from '../../features/machines/components/machine-details';
 import { MachineStatusPanel } from '../../features/machines/components/machine-status-panel';
 import { MeterSection } from '../../features/machines/components/meter-section';
@@ -48,6 +54,7 @@ export const machineLoader =
 
 const SECTIONS = [
   { id: 'due', label: 'Due' },
+  { id: 'hitch', label: 'Hitch log' },
   { id: 'history', label: 'History' },
   { id: 'meter', label: 'Meter' },
   { id: 'measurements', label: 'Measurements' },
@@ -55,6 +62,16 @@ const SECTIONS = [
   { id: 'readings', label: 'Readings' },
   { id: 'details', label: 'Details' },
 ] as const;
+
+const HITCH_CATEGORIES: string[] = [...HITCH_TRACTOR_CATEGORIES, ...HITCH_IMPLEMENT_CATEGORIES];
+const TRACTOR_FILTERS = {
+  category: 'tractor',
+  status: 'in_service',
+  sort: 'fleetNumber',
+  order: 'asc',
+  page: 1,
+  pageSize: 200,
+} as const;
 
 export function MachinePage() {
   const { machineId = '' } = useParams();
@@ -76,6 +93,8 @@ export function MachinePage() {
   const canRecordService = useCanRecordService(orgId, machineId);
   const serviceEvents = useServiceEvents(orgId, machineId);
   const isShop = membership.role === 'manager' || membership.role === 'technician';
+  // the tractors an implement may be hitched to (the hitch log)
+  const tractors = useMachines(orgId, TRACTOR_FILTERS);
 
   if (machine.isPending) return <PageSkeleton label="Loading the machine" />;
   if (machine.isError) {
@@ -92,6 +111,7 @@ export function MachinePage() {
   }
 
   const { data: detail, abilities } = machine.data;
+  const hitched = HITCH_CATEGORIES.includes(detail.category);
   const org = paths.organization;
   const defectsHref = org.defects.href(orgId, detail.id);
   const recordHref = (taskIds?: string[]) =>
@@ -163,7 +183,7 @@ export function MachinePage() {
 
         <nav aria-label="On this page" className="-mt-2">
           <ul className="flex flex-wrap gap-2">
-            {SECTIONS.map((s) => (
+            {SECTIONS.filter((s) => s.id !== 'hitch' || hitched).map((s) => (
               <li key={s.id}>
                 <a
                   href={`#${s.id}`}
@@ -195,6 +215,22 @@ export function MachinePage() {
             />
           </Section>
         </div>
+
+        {hitched ? (
+          <div id="hitch" className="scroll-mt-20">
+            <Section
+              title="Hitch log"
+              description="Which tractor pulled which implement, from when to when. An implement without a meter of its own counts the tractor's hours while it is on."
+            >
+              <HitchSection
+                orgId={orgId}
+                machine={detail}
+                tractors={(tractors.data?.data ?? []).filter((t) => t.id !== detail.id)}
+                timeZone={timeZone}
+              />
+            </Section>
+          </div>
+        ) : null}
 
         <div id="history" className="scroll-mt-20">
           <Section
