@@ -63,7 +63,7 @@ export function ApiKeysCard({ orgId, timeZone }: { orgId: string; timeZone: stri
         <Alert tone="success" title={`Key “${made.name}” made`}>
           <p>Copy it now: it is shown this once and cannot be shown again.</p>
           <label className="mt-2 block font-bold" htmlFor="new-api-key">
-            New API key
+            Your new API key
           </label>
           <input
             id="new-api-key"
@@ -77,7 +77,12 @@ export function ApiKeysCard({ orgId, timeZone }: { orgId: string; timeZone: stri
           </Button>
         </Alert>
       ) : null}
-      <form onSubmit={submit} noValidate aria-label="New API key" className="flex flex-col gap-3">
+      <form
+        onSubmit={submit}
+        noValidate
+        aria-label="Make an API key"
+        className="flex flex-col gap-3"
+      >
         {formError ? <Alert>{formError}</Alert> : null}
         <TextField
           label="Key name"
