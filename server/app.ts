@@ -17,6 +17,7 @@ import { organizationsRouter } from './routes/organizations/organizations.router
 import { membersRouter } from './routes/members/members.router';
 import { devRouter } from './routes/dev/dev.router';
 import { machinesRouter } from './routes/machines/machines.router';
+import { metersRouter } from './routes/machines/meters.router';
 import { machinePhotoRouter } from './routes/machines/photo.router';
 import { fleetImportRouter } from './routes/machines/fleet-import.router';
 import { machineStatusRouter } from './routes/machines/status.router';
@@ -88,6 +89,7 @@ export function createApp(options: { serveClient?: boolean; clientDist?: string 
   api.use(organizationsRouter());
   api.use(membersRouter());
   api.use(machinesRouter());
+  api.use(metersRouter());
   api.use(machinePhotoRouter());
   api.use(fleetImportRouter());
   api.use(machineStatusRouter());

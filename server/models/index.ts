@@ -32,6 +32,7 @@ Machine.hasMany(ServiceTask, { foreignKey: 'machineId', as: 'tasks' });
 Machine.hasMany(MachineOperator, { foreignKey: 'machineId', as: 'operators' });
 Machine.hasMany(MachineMeter, { foreignKey: 'machineId', as: 'meters' });
 MachineForecast.belongsTo(MachineMeter, { foreignKey: 'meterId', as: 'meter' });
+MachineMeter.belongsTo(Machine, { foreignKey: 'machineId', as: 'machine' });
 ServiceTask.belongsTo(Machine, { foreignKey: 'machineId', as: 'machine' });
 ServiceTask.hasOne(TaskDuePoint, { foreignKey: 'taskId', as: 'duePoint' });
 DealerLink.belongsTo(Organization, { foreignKey: 'dealerOrganizationId', as: 'dealer' });

@@ -7,7 +7,7 @@ import { hasRole, type OrgAccess } from './access';
  * closed to dealers until it is listed here. The route's own policy still decides after this
  * (a listed write refused by role answers 403).
  *
- * - view: machines, readings, due points, the schedule's tasks and the spec sheet, read only.
+ * - view: machines, their meters, readings, due points, the schedule's tasks and the spec sheet, read only.
  * - service: also the service history (records, attachments, measurements) and recording,
  *   planning, completing and cancelling services. Schedule and spec sheet edits, readings entry and import,
  *   defects, walkarounds, the team, messages and settings stay the farm's own.
@@ -17,6 +17,7 @@ const DEALER_ROUTES: readonly { method: string; path: string; access: DealerAcce
   { method: 'GET', path: '/organizations/:orgId/machines/:machineId', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/machines/:machineId/photo', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/machines/:machineId/readings', access: 'view' },
+  { method: 'GET', path: '/organizations/:orgId/machines/:machineId/meters', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/readings/latest', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/due', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/machines/:machineId/due', access: 'view' },

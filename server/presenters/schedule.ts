@@ -21,6 +21,7 @@ export const presentParts = (parts: StoredTaskPart[]): Task['parts'] =>
 export const presentTask = (t: ServiceTask, due: DuePoint | null): Task => ({
   id: t.id,
   machineId: t.machineId,
+  meterId: t.meterId,
   name: t.name,
   intervalMeter: t.intervalMeter,
   intervalDays: t.intervalDays,

@@ -1,6 +1,6 @@
 // Second stage of a reading import: every row checked against its neighbours by the same rules as
 // one reading (shared/domain checkReading), once, for the whole file. The rows are grouped by
-// machine and sorted by time; each machine's existing readings in the file's time window (and the
+// meter (a machine's primary unless the file names another) and sorted by time; each machine's existing readings in the file's time window (and the
 // one either side) come in one query per batch of machines, and each row is checked in one pass
 // with a pointer — not a search per row. Same outcome as planReadings (readings.ts) row for row:
 // an identical repeat (same time, same value) is a duplicate; a row that breaks a rule is an error
@@ -41,7 +41,7 @@ interface Existing {
   lifetime: number;
 }
 
-/** Existing readings of each machine from the one before its window to the one after. */
+/** Existing readings of each meter (window id) from the one before its window to the one after. */
 async function existingAround(
   organizationId: string,
   windows: { id: string; from: number; to: number }[],
@@ -52,11 +52,11 @@ async function existingAround(
      FROM unnest($2::uuid[], $3::timestamptz[], $4::timestamptz[]) WITH ORDINALITY AS w(id, from_at, to_at, i)
      CROSS JOIN LATERAL (
        SELECT value, lifetime_value, taken_at FROM meter_readings
-       WHERE organization_id = $1 AND machine_id = w.id
+       WHERE organization_id = $1 AND meter_id = w.id
          AND taken_at >= coalesce((SELECT max(taken_at) FROM meter_readings
-                                   WHERE organization_id = $1 AND machine_id = w.id AND taken_at < w.from_at), '-infinity')
+                                   WHERE organization_id = $1 AND meter_id = w.id AND taken_at < w.from_at), '-infinity')
          AND taken_at <= coalesce((SELECT min(taken_at) FROM meter_readings
-                                   WHERE organization_id = $1 AND machine_id = w.id AND taken_at > w.to_at), 'infinity')
+                                   WHERE organization_id = $1 AND meter_id = w.id AND taken_at > w.to_at), 'infinity')
      ) r
      ORDER BY w.i, r.taken_at, r.lifetime_value`,
     {
@@ -80,19 +80,20 @@ async function existingAround(
   return byWindow;
 }
 
-async function replacementsByMachine(
+/** The replacements and counter resets of each meter (by meter id). */
+async function replacementsByMeter(
   organizationId: string,
-  ids: string[],
+  meterIds: string[],
   transaction: Transaction,
 ) {
   const rows = await MeterReplacement.findAll({
-    where: { organizationId, machineId: { [Op.in]: ids } },
+    where: { organizationId, meterId: { [Op.in]: meterIds } },
     transaction,
   });
   const by = new Map<string, MeterReplacementPoint[]>();
   for (const r of rows)
-    by.set(r.machineId, [
-      ...(by.get(r.machineId) ?? []),
+    by.set(r.meterId, [
+      ...(by.get(r.meterId) ?? []),
       {
         replacedAtMs: r.replacedAt.getTime(),
         oldFinalValue: r.oldFinalValue,
@@ -122,7 +123,7 @@ export async function planImport(
     .filter((m) => starts[m + 1] > starts[m])
     .sort((a, b) => (machines[a].id < machines[b].id ? -1 : 1));
   if (!touched.length) return;
-  const ids = touched.map((m) => machines[m].id);
+  const ids = [...new Set(touched.map((m) => machines[m].id))];
   if (lock)
     await sequelize.query(
       'SELECT id FROM machines WHERE id = ANY($1::uuid[]) ORDER BY id FOR UPDATE',
@@ -131,7 +132,8 @@ export async function planImport(
         transaction,
       },
     );
-  const replacements = await replacementsByMachine(orgId, ids, transaction);
+  const meterIds = touched.map((m) => machines[m].meterId);
+  const replacements = await replacementsByMeter(orgId, meterIds, transaction);
   const rule = { nowMs: now.getTime(), formatTime: timeFormatter(access.organization.timeZone) };
 
   for (let b = 0; b < touched.length;) {
@@ -141,7 +143,7 @@ export async function planImport(
       n += starts[touched[b] + 1] - starts[touched[b]];
     }
     const windows = batch.map((m) => ({
-      id: machines[m].id,
+      id: machines[m].meterId,
       from: rows.takenAtMs[order[starts[m]]],
       to: rows.takenAtMs[order[starts[m + 1] - 1]],
     }));
@@ -150,7 +152,7 @@ export async function planImport(
       checkMachine(parsed, order.subarray(starts[m], starts[m + 1]), existing[k], {
         ...rule,
         meterUnit: machines[m].meterUnit,
-        replacements: replacements.get(machines[m].id) ?? [],
+        replacements: replacements.get(machines[m].meterId) ?? [],
       }),
     );
   }

@@ -1,11 +1,13 @@
-// First stage of a reading import: the upload read as it arrives, each row turned into a machine,
-// an instant and a meter value (or the reason it cannot be, by line and field) and kept in typed
-// columns. The farm's machines are loaded once beforehand, so no row waits on the database.
+// First stage of a reading import: the upload read as it arrives, each row turned into a machine's
+// meter (the one an optional meter column names by kind, else the primary), an instant and a
+// meter value (or the reason it cannot be, by line and field) and kept in typed columns. The
+// farm's machines and meters are loaded once beforehand, so no row waits on the database.
 import type { Request } from 'express';
 import { meterNumberMessage } from '../../shared/domain/meter-number';
 import { METER_BOUNDS, READING_IMPORT_LIMITS } from '../../shared/schemas/readings';
 import { invalid } from '../errors';
-import { Machine } from '../models';
+import { Machine, MachineMeter } from '../models';
+import { METER_KIND_LABELS, METER_KINDS, type MeterKind } from '../../shared/constants';
 import type { OrgAccess } from '../policies/access';
 import { localDateOrder, parseCsvNumber, parseTakenAt, usesDecimalComma } from '../infra/csv-sheet';
 import { streamCsvUpload, type CsvHeader, type CsvUploadInfo } from '../infra/csv-upload';
@@ -23,6 +25,8 @@ const HEADER_ALIASES: Record<'fleetNumber' | 'takenAt' | 'value', string[]> = {
   value: ['value', 'reading', 'meter', 'hours', 'hour meter'],
 };
 type Column = keyof typeof HEADER_ALIASES;
+/** The optional column naming which meter a row is of (its kind); without it, the primary. */
+const METER_COLUMN = ['meter kind', 'meter_kind', 'meterkind', 'kind'];
 
 export interface ParsedImport {
   upload: CsvUploadInfo;
@@ -51,27 +55,78 @@ function columnsOf({ header }: CsvHeader): Record<Column, number> {
   return col;
 }
 
-/** Fleet number cell → machine index (-1: none), remembered for the cells a file repeats. */
-function fleetLookup(machines: ImportMachine[]) {
-  const byLower = new Map(machines.map((m, i) => [m.fleetNumber.toLowerCase(), i]));
+/** A meter kind as a cell may write it: its key (pto_hours) or its label (PTO hours), any case. */
+function kindOfCell(cell: string): MeterKind | null {
+  const text = cell.trim().toLowerCase().replace(/[\s-]+/g, '_');
+  return (
+    METER_KINDS.find(
+      (k) => k === text || METER_KIND_LABELS[k].toLowerCase().replace(/[\s-]+/g, '_') === text,
+    ) ?? null
+  );
+}
+
+/**
+ * (Fleet number, meter kind) cells → meter index (-1: no such machine, -2: no such meter on it),
+ * remembered for the cells a file repeats; an empty kind is the machine's primary meter.
+ */
+function meterLookup(meters: ImportMachine[]) {
+  const byKey = new Map<string, number>();
+  for (const [i, m] of meters.entries()) {
+    const fleet = m.fleetNumber.toLowerCase();
+    byKey.set(`${fleet}|${m.meterKind}`, byKey.get(`${fleet}|${m.meterKind}`) ?? i);
+    if (m.isPrimary) byKey.set(`${fleet}|`, i);
+  }
   const seen = new Map<string, number>();
-  return (cell: string) => {
+  return (fleetCell: string, kindCell: string) => {
+    const cell = `${fleetCell}|${kindCell}`;
     let i = seen.get(cell);
     if (i === undefined) {
-      i = byLower.get(cell.toLowerCase()) ?? -1;
+      const fleet = fleetCell.toLowerCase();
+      const kind = kindCell.trim() ? kindOfCell(kindCell) : '';
+      i = byKey.get(`${fleet}|${kind ?? '?'}`) ?? (byKey.has(`${fleet}|`) ? -2 : -1);
       if (seen.size < 50_000) seen.set(cell, i);
     }
     return i;
   };
 }
 
+/** Every meter of the farm's machines with its machine, the primary first. */
+async function farmMeters(organizationId: string): Promise<ImportMachine[]> {
+  const rows = await MachineMeter.findAll({
+    where: { organizationId },
+    include: [
+      {
+        model: Machine,
+        as: 'machine',
+        attributes: ['id', 'name', 'fleetNumber', 'status', 'organizationId'],
+      },
+    ],
+    order: [
+      ['isPrimary', 'DESC'],
+      ['position', 'ASC'],
+    ],
+  });
+  return rows.map((meter) => {
+    const m = (meter as MachineMeter & { machine: Machine }).machine;
+    return {
+      id: m.id,
+      name: m.name,
+      fleetNumber: m.fleetNumber,
+      status: m.status,
+      organizationId: m.organizationId,
+      meterUnit: meter.unit,
+      meterId: meter.id,
+      meterKind: meter.kind,
+      isPrimary: meter.isPrimary,
+    };
+  });
+}
+
 /** Reads the uploaded CSV of readings into columns; nothing is written. */
 export async function readImportUpload(access: OrgAccess, req: Request): Promise<ParsedImport> {
-  const machines: ImportMachine[] = await Machine.findAll({
-    where: { organizationId: access.organization.id },
-    attributes: ['id', 'name', 'fleetNumber', 'meterUnit', 'status', 'organizationId'],
-  });
-  const machineOf = fleetLookup(machines);
+  const machines = await farmMeters(access.organization.id);
+  const meterOf = meterLookup(machines);
+  let kindColumn = -1;
   const rows = new ReadingColumns();
   const errors = new ErrorList();
   const timeZone = access.organization.timeZone;
@@ -85,16 +140,26 @@ export async function readImportUpload(access: OrgAccess, req: Request): Promise
     {
       header(header) {
         col = columnsOf(header);
+        kindColumn = header.header.findIndex((h) => METER_COLUMN.includes(h));
         decimalComma = usesDecimalComma(access, header.delimiter);
       },
       row(record, line) {
         const fleetNumber = record[col.fleetNumber] ?? '';
-        const m = fleetNumber ? machineOf(fleetNumber) : -1;
+        const kindCell = kindColumn < 0 ? '' : (record[kindColumn] ?? '');
+        const m = fleetNumber ? meterOf(fleetNumber, kindCell) : -1;
         const fail = (message: string) => {
           const row = rows.push(m, Number.NaN, Number.NaN, line, STATUS_ERROR);
           errors.add({ row, line, message: `Line ${line}: ${message}`, fleetNumber });
         };
         if (!fleetNumber) return fail('fleet number is empty');
+        if (m === -2) {
+          const kinds = machines
+            .filter((t) => t.fleetNumber.toLowerCase() === fleetNumber.toLowerCase())
+            .map((t) => METER_KIND_LABELS[t.meterKind]);
+          return fail(
+            `meter kind "${kindCell}" is not a meter of ${fleetNumber} (its meters: ${kinds.join(', ')})`,
+          );
+        }
         if (m < 0) return fail(`fleet number "${fleetNumber}" is not a machine of this farm`);
         const machine = machines[m];
         if (machine.status === 'sold')

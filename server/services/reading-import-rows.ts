@@ -4,6 +4,7 @@
 // kept as objects; every other error is counted.
 import type { ImportPreviewRow } from '../../shared/schemas/readings';
 import type { Machine } from '../models';
+import type { MeterKind } from '../../shared/constants';
 
 export const STATUS_NEW = 0;
 export const STATUS_DUPLICATE = 1;
@@ -12,10 +13,14 @@ export const STATUS_ERROR = 2;
 /** How many rows a preview lists: the file's first rows and, as many again, its first errors. */
 export const SHOWN_ROWS = 200;
 
+/**
+ * What an import row is written to: one meter of one of the farm's machines (issue 13). `id` is
+ * the machine's; `meterUnit` the meter's own unit, which its rules speak in.
+ */
 export type ImportMachine = Pick<
   Machine,
   'id' | 'name' | 'fleetNumber' | 'meterUnit' | 'status' | 'organizationId'
->;
+> & { meterId: string; meterKind: MeterKind; isPrimary: boolean };
 
 /** Typed columns that double as they fill. */
 export class ReadingColumns {

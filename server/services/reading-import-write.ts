@@ -13,7 +13,8 @@ import { STATUS_NEW } from './reading-import-rows';
 import type { ParsedImport } from './reading-import-read';
 
 const COPY_SQL = `COPY meter_readings
-  (organization_id, machine_id, value, lifetime_value, taken_at, source, entered_by, import_key)
+  (organization_id, machine_id, meter_id, value, lifetime_value, taken_at, source, entered_by,
+   import_key)
   FROM STDIN`;
 const ROWS_PER_CHUNK = 2_000;
 
@@ -27,7 +28,8 @@ function* copyChunks(access: OrgAccess, { rows, machines, upload }: ParsedImport
   for (let i = 0; i < rows.length; i++) {
     if (rows.status[i] !== STATUS_NEW) continue;
     const at = new Date(rows.takenAtMs[i]).toISOString();
-    chunk += `${org}\t${machines[rows.machine[i]].id}\t${rows.value[i]}\t${rows.lifetime[i]}\t${at}\timport\t${user}\t${key}:${rows.line[i]}\n`;
+    const target = machines[rows.machine[i]];
+    chunk += `${org}\t${target.id}\t${target.meterId}\t${rows.value[i]}\t${rows.lifetime[i]}\t${at}\timport\t${user}\t${key}:${rows.line[i]}\n`;
     if (++n === ROWS_PER_CHUNK) {
       yield chunk;
       [chunk, n] = ['', 0];
@@ -51,7 +53,7 @@ export async function copyNewReadings(
   const client = (transaction as unknown as { connection: PoolClient }).connection;
   const copy = client.query(copyStreams.from(COPY_SQL));
   await pipeline(Readable.from(copyChunks(access, parsed)), copy);
-  for (const m of touched)
-    await refreshMachineForecast(machines[m].id, access.organization.id, transaction);
+  for (const id of new Set([...touched].map((m) => machines[m].id)))
+    await refreshMachineForecast(id, access.organization.id, transaction);
   return Number(copy.rowCount);
 }

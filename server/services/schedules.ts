@@ -1,7 +1,8 @@
 import type { Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { invalid, notFound } from '../errors';
-import { Machine, MachineForecast, ServiceTask, TaskDuePoint } from '../models';
+import { Machine, MachineForecast, MachineMeter, ServiceTask, TaskDuePoint } from '../models';
+import { meterNotFound } from './meter-changes';
 import type { LastDoneInput, StoredTaskInput, TaskInput } from '../../shared/schemas/schedule';
 import { taskTimingProblems, type TaskTiming } from '../../shared/schemas/task-season';
 import { todayIso } from '../../shared/domain';
@@ -44,11 +45,25 @@ const refresh = (access: OrgAccess, machineId: string, transaction: Transaction)
     timeZone: access.organization.timeZone,
   });
 
-/** Adds tasks to a machine in one transaction (the caller's, if given) and refreshes its due points. */
+/** A task's meter must be one of its machine's (404 naming meterId otherwise). */
+async function checkTaskMeter(
+  machineId: string,
+  meterId: string | undefined,
+  transaction?: Transaction,
+) {
+  if (!meterId) return;
+  const found = await MachineMeter.count({ where: { id: meterId, machineId }, transaction });
+  if (!found) throw meterNotFound();
+}
+
+/**
+ * Adds tasks to a machine in one transaction (the caller's, if given) and refreshes its due
+ * points; each on the meter it names, else the machine's primary.
+ */
 export async function addTasks(
   access: OrgAccess,
   machine: Machine,
-  inputs: StoredTaskInput[],
+  inputs: (StoredTaskInput & { meterId?: string })[],
   action = 'task.create',
   outer?: Transaction,
 ): Promise<ServiceTask[]> {
@@ -59,6 +74,8 @@ export async function addTasks(
     transaction,
   });
   const tasks: ServiceTask[] = [];
+  for (const meterId of new Set(inputs.map((i) => i.meterId)))
+    await checkTaskMeter(machine.id, meterId, transaction);
   for (const [i, input] of inputs.entries()) {
     const task = await ServiceTask.create(
       {
@@ -92,10 +109,15 @@ function timingAfter(task: ServiceTask, input: Partial<TaskInput>): TaskTiming {
   };
 }
 
-export async function updateTask(access: OrgAccess, task: ServiceTask, input: Partial<TaskInput>) {
+export async function updateTask(
+  access: OrgAccess,
+  task: ServiceTask,
+  input: Partial<TaskInput> & { meterId?: string },
+) {
   // e.g. a season sent to a task that keeps its day interval: 422 naming intervalDays
   const problems = taskTimingProblems(timingAfter(task, input));
   if (Object.keys(problems).length) throw invalid(problems);
+  await checkTaskMeter(task.machineId, input.meterId);
   return sequelize.transaction(async (transaction) => {
     const before = Object.fromEntries(
       Object.keys(input).map((k) => [k, task.get(k as keyof ServiceTask)]),

@@ -51,6 +51,13 @@ export const DEFAULT_MAX_PER_DAY = {
   acres: 750,
 } as const satisfies Record<string, number>;
 
+/**
+ * What a refused lower reading points to: a counter that was zeroed (or a meter that was swapped)
+ * is recorded as such, and readings then run on from its new start (issue 13).
+ */
+export const BACKWARDS_HINT =
+  'If the counter was reset, record it with “Counter was reset” when logging the reading (a new meter fitted: Record meter replacement).';
+
 /** Default clock skew tolerated for the future and too-fast rules, ms (5 minutes). */
 export const DEFAULT_SKEW_MS = 5 * 60 * 1000;
 
@@ -101,7 +108,7 @@ export function checkReading(
     return {
       field: 'value',
       rule: 'backwards',
-      message: `Reading ${reading(candidate)} is lower than ${describe('previous', previous)} — readings may not go backwards.`,
+      message: `Reading ${reading(candidate)} is lower than ${describe('previous', previous)} — readings may not go backwards. ${BACKWARDS_HINT}`,
     };
   }
   if (next && candidate.value > next.value) {

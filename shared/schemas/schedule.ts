@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { DUE_STATUSES, MACHINE_CATEGORIES } from '../constants';
-import { boundedNumber, isoDate, PAST_DATES, plainText } from './common';
+import { boundedNumber, isoDate, PAST_DATES, plainText, uuid } from './common';
 import { duePointSchema } from './due';
 import {
   checkTaskTiming,
@@ -110,9 +110,8 @@ const taskFields = {
   dailyCare: z.boolean({ error: 'Daily care must be true or false' }),
 };
 
-export const taskInputSchema = z
-  .object({
-    ...taskFields,
+const taskInputFields = z.object({
+  ...taskFields,
     intervalMeter: taskFields.intervalMeter.default(null),
     intervalDays: taskFields.intervalDays.default(null),
     firstServiceMeter: taskFields.firstServiceMeter.default(null),
@@ -126,10 +125,21 @@ export const taskInputSchema = z
     hazards: taskFields.hazards.default([]),
     ...seasonTaskDefaults,
     dailyCare: taskFields.dailyCare.default(false),
-  })
-  // an interval or a season, and a season without a day interval (task-season.ts)
-  .superRefine(checkTaskTiming);
+});
+// an interval or a season, and a season without a day interval (task-season.ts)
+export const taskInputSchema = taskInputFields.superRefine(checkTaskTiming);
 export type TaskInput = z.infer<typeof taskInputSchema>;
+
+/**
+ * The machine a task is added to or edited on: one of its meters (issue 13), which the meter
+ * interval counts on and is in the unit of; left out, the machine's primary meter. Templates
+ * carry no meter: they are applied to many machines.
+ */
+const taskMeterId = uuid;
+export const machineTaskInputSchema = taskInputFields
+  .extend({ meterId: taskMeterId.optional() })
+  .superRefine(checkTaskTiming);
+export type MachineTaskInput = z.infer<typeof machineTaskInputSchema>;
 /**
  * A task as a template stores it: rows written before daily care existed have no `dailyCare`,
  * rows written before season services no `seasonAnchor` / `seasonOffsetDays`.
@@ -140,7 +150,10 @@ export type StoredTaskInput = Omit<TaskInput, 'dailyCare' | SeasonFieldName> & {
 type SeasonFieldName = 'seasonAnchor' | 'seasonOffsetDays';
 
 /** Only the fields sent; an unknown field is refused by name. */
-export const taskUpdateSchema = z.object(taskFields).partial().strict();
+export const taskUpdateSchema = z
+  .object({ ...taskFields, meterId: taskMeterId })
+  .partial()
+  .strict();
 export type TaskUpdateInput = z.infer<typeof taskUpdateSchema>;
 
 /** A schedule template of a machine category: a named list of tasks applied in one step. */
@@ -205,6 +218,8 @@ export const taskSchema = z
   .object({
     id: z.string(),
     machineId: z.string(),
+    /** the meter its interval counts on (machine_meters.id) */
+    meterId: z.string(),
     ...storedTaskFields,
     /** lifetime meter value */
     lastDoneMeter: z.number().nullable(),

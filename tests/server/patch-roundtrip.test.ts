@@ -85,6 +85,17 @@ const ROUTES: Record<string, PatchRoute> = {
       { field: 'safetyNotes', value: v('Hot oil.') },
       { field: 'hazards', value: v(['hot_fluid', 'battery']) },
       { field: 'dailyCare', value: v(true) },
+      // the task counted on the machine's PTO hours instead of its primary meter (issue 13)
+      { field: 'meterId', value: (ids) => ids.meterId },
+    ],
+  },
+  '/organizations/{orgId}/machines/{machineId}/meters/{meterId}': {
+    table: 'machine_meters',
+    id: (w) => w.ids.meterId,
+    url: (w) => farm(w, `/machines/${w.ids.machineId}/meters/${w.ids.meterId}`),
+    cases: [
+      { field: 'label', value: v('Rear PTO') },
+      { field: 'position', value: v(4) },
     ],
   },
   '/organizations/{orgId}/service-records/{recordId}': {

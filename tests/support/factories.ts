@@ -3,6 +3,7 @@ import request from 'supertest';
 import type { Express } from 'express';
 import {
   Machine,
+  MachineMeter,
   Membership,
   MeterReading,
   Organization,
@@ -10,7 +11,13 @@ import {
   User,
 } from '../../server/models';
 import { refreshMachineForecast } from '../../server/services/forecast';
-import type { MachineCategory, MeterUnit, Role } from '../../shared/constants';
+import {
+  METER_KIND_UNITS,
+  type MachineCategory,
+  type MeterKind,
+  type MeterUnit,
+  type Role,
+} from '../../shared/constants';
 
 let seq = 0;
 const next = () => ++seq;
@@ -91,16 +98,32 @@ export async function createMachine(
   });
 }
 
-/** Inserts readings directly (bypassing the rules) and refreshes the machine's forecast. */
+/** Adds a meter beside the machine's primary one (issue 13). */
+export function createMeter(machine: Machine, kind: MeterKind, label = '') {
+  return MachineMeter.create({
+    organizationId: machine.organizationId,
+    machineId: machine.id,
+    kind,
+    unit: METER_KIND_UNITS[kind],
+    label,
+    position: 1,
+  });
+}
+
+/**
+ * Inserts readings directly (bypassing the rules) and refreshes the machine's forecast; each on
+ * the meter it names, else the machine's primary.
+ */
 export async function addReadings(
   machine: Machine,
-  points: { daysAgo: number; value: number }[],
+  points: { daysAgo: number; value: number; meterId?: string }[],
   now = new Date(),
 ) {
   await MeterReading.bulkCreate(
     points.map((p) => ({
       organizationId: machine.organizationId,
       machineId: machine.id,
+      ...(p.meterId && { meterId: p.meterId }),
       value: p.value,
       lifetimeValue: p.value,
       takenAt: new Date(now.getTime() - p.daysAgo * 86_400_000),

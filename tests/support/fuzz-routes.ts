@@ -96,6 +96,7 @@ export function fuzzHints(w: PopulatedWorld): FuzzHints {
     machineIds: [i.machineId],
     taskId: [i.taskId],
     taskIds: [i.taskId, i.otherTaskId],
+    meterId: [i.meterId],
     technicianIds: [i.technicianUserId, i.managerUserId],
     operatorIds: [i.operatorUserId],
     assignedTo: [i.technicianUserId],
@@ -128,6 +129,7 @@ export function fuzzHints(w: PopulatedWorld): FuzzHints {
     takenAt: [hoursAgo(1), hoursAgo(72)],
     performedAt: [hoursAgo(0.5)],
     replacedAt: [hoursAgo(48)],
+    resetAt: [hoursAgo(24)],
     datetime: [hoursAgo(1), hoursAgo(2)],
   };
   const all = [...Object.values(i), w.farmId, w.dealerId];
@@ -148,6 +150,7 @@ function pathParams(w: PopulatedWorld, dealerSide: boolean): Record<string, stri
     bookingId: i.bookingId,
     customerId: w.farmId,
     keyId: i.apiKeyId,
+    meterId: i.meterId,
     machine: i.machineId,
     id: i.membershipId,
     token: randomBytes(32).toString('base64url'),

@@ -38,6 +38,8 @@ export interface PopulatedWorld {
     operatorUserId: string;
     /** the farm's API key (api-keys/:keyId) */
     apiKeyId: string;
+    /** the machine's second meter, PTO hours (meters/:meterId) */
+    meterId: string;
   };
   emails: { advisor: string; technician: string };
   checklistItemIds: string[];
@@ -119,6 +121,7 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
     safetyNotes: 'Hot oil: gloves and eye protection.',
     hazards: ['hot_fluid'],
   };
+  const meter = await send(agent, 'post', `${m}/meters`, { kind: 'pto_hours' });
   const task = await send(agent, 'post', `${m}/tasks`, fullTask);
   await send(agent, 'put', `${org}/tasks/${task.id}/last-done`, {
     lastDoneMeter: 4000,
@@ -232,6 +235,7 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
       technicianUserId: tech.id,
       operatorUserId: op.id,
       apiKeyId: key.id,
+      meterId: meter.id,
     },
     emails: { advisor: advisorUser.email, technician: tech.email },
     checklistItemIds: (template.items as { id: string }[]).map((item) => item.id),

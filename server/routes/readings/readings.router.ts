@@ -48,15 +48,24 @@ export function readingsRouter(): Router {
   route(router, {
     method: 'get',
     path: '/organizations/:orgId/machines/:machineId/readings',
-    summary: "A machine's readings (newest first) and meter replacements",
+    summary:
+      "A machine's readings (newest first; of one meter with meterId, else of all) and meter replacements and resets",
     tags: ['readings'],
     params: machineParams,
-    query: z.object({ limit: z.coerce.number().int().min(1).max(5000).default(200) }),
+    query: z.object({
+      limit: z.coerce.number().int().min(1).max(5000).default(200),
+      meterId: z.uuid().optional(),
+    }),
     response: readingHistoryResponseSchema,
     handler: async ({ req, params, query }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);
-      const { readings, replacements } = await readingHistory(access, machine, query.limit);
+      const { readings, replacements } = await readingHistory(
+        access,
+        machine,
+        query.limit,
+        query.meterId,
+      );
       return {
         data: readings.map(presentReading),
         replacements: replacements.map(presentReplacement),

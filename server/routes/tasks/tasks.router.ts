@@ -6,7 +6,7 @@ import {
   scheduleTemplateCreateSchema,
   scheduleTemplateListResponseSchema,
   scheduleTemplateResponseSchema,
-  taskInputSchema,
+  machineTaskInputSchema,
   taskListResponseSchema,
   taskResponseSchema,
   tasksResponseSchema,
@@ -72,7 +72,7 @@ export function tasksRouter(): Router {
     summary: 'Add a service task to a machine',
     tags: ['schedule'],
     params: machineParams,
-    body: taskInputSchema,
+    body: machineTaskInputSchema,
     status: 201,
     response: taskResponseSchema,
     handler: async ({ req, params, body }) => {

@@ -145,6 +145,14 @@ export const EXPECTED: Record<string, Row> = {
   'PATCH /organizations/{orgId}/readings/{readingId}': shop,
   'DELETE /organizations/{orgId}/readings/{readingId}': shop,
   'POST /organizations/{orgId}/machines/{machineId}/meter-replacements': shop,
+  // a machine's meters (issue 13): read as the machine is, changed by the farm's shop; a counter
+  // reset is what the counter shows, so whoever logs readings records it
+  'GET /organizations/{orgId}/machines/{machineId}/meters': read,
+  'POST /organizations/{orgId}/machines/{machineId}/meters': shop,
+  'PATCH /organizations/{orgId}/machines/{machineId}/meters/{meterId}': shop,
+  'DELETE /organizations/{orgId}/machines/{machineId}/meters/{meterId}': shop,
+  'POST /organizations/{orgId}/machines/{machineId}/meters/{meterId}/primary': shop,
+  'POST /organizations/{orgId}/machines/{machineId}/meter-resets': farmOnly,
   'POST /organizations/{orgId}/readings/import/preview': shop,
   'POST /organizations/{orgId}/readings/import/commit': shop,
   'GET /organizations/{orgId}/due': read,

@@ -15,6 +15,7 @@ import { ORG_CASES } from './cases-org';
 import { DEALER_CASES } from './cases-dealers';
 import { ACCOUNT_CASES } from './cases-account';
 import { KEY_CASES } from './cases-keys';
+import { METER_CASES } from './cases-meters';
 import {
   app,
   changedTables,
@@ -36,6 +37,7 @@ const CASES: Record<string, Case> = {
   ...DEALER_CASES,
   ...ACCOUNT_CASES,
   ...KEY_CASES,
+  ...METER_CASES,
 };
 
 async function documentedRoutes(): Promise<string[]> {
