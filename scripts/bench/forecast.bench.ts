@@ -8,13 +8,7 @@ import bcrypt from 'bcryptjs';
 import { QueryTypes } from 'sequelize';
 import { sequelize } from '../../server/db';
 import { createApp } from '../../server/app';
-import {
-  Machine,
-  Membership,
-  Organization,
-  ServiceTask,
-  User,
-} from '../../server/models';
+import { Machine, Membership, Organization, ServiceTask, User } from '../../server/models';
 import { refreshMachineForecast } from '../../server/services/forecast';
 import { primaryForecastOf } from '../../server/services/primary-forecast';
 import { dueListSql, staleSql } from '../../server/services/due-list';

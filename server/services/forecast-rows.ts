@@ -109,7 +109,9 @@ export async function writeForecasts(
     const one = rows.forecasts.length <= METERS_PER_STATEMENT;
     const ids = new Set(forecasts.map((f) => f.meterId));
     const duePoints = one ? rows.duePoints : rows.duePoints.filter((d) => ids.has(d.meterId));
-    const readings = one ? (rows.readings ?? []) : (rows.readings ?? []).filter((r) => ids.has(r.meterId));
+    const readings = one
+      ? (rows.readings ?? [])
+      : (rows.readings ?? []).filter((r) => ids.has(r.meterId));
     const parts = [
       `forecasts AS (${upsertForecastsSql('$1', options.summary)})`,
       `due_points AS (${upsertDuePointsSql('$2')})`,

@@ -181,7 +181,10 @@ export async function makePrimary(access: OrgAccess, machine: Machine, meterId: 
     if (meter.isPrimary) return meter;
     const where = { organizationId: access.organization.id, machineId: machine.id };
     // the partial unique index allows one primary at a time: the old one first
-    await MachineMeter.update({ isPrimary: false }, { where: { ...where, isPrimary: true }, transaction });
+    await MachineMeter.update(
+      { isPrimary: false },
+      { where: { ...where, isPrimary: true }, transaction },
+    );
     await meter.update({ isPrimary: true }, { transaction });
     await machine.update({ meterUnit: meter.unit }, { transaction });
     await audit(access, 'meter.primary', meter, { label: meter.label }, transaction);

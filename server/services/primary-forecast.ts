@@ -10,7 +10,9 @@ import { MachineForecast, MachineMeter } from '../models';
 export const PRIMARY_FORECAST_JOIN = `JOIN machine_meters pm ON pm.machine_id = m.id AND pm.is_primary
      LEFT JOIN machine_forecasts f ON f.meter_id = pm.id AND f.organization_id = m.organization_id`;
 
-const primaryOnly = [{ model: MachineMeter, as: 'meter', where: { isPrimary: true }, attributes: [] }];
+const primaryOnly = [
+  { model: MachineMeter, as: 'meter', where: { isPrimary: true }, attributes: [] },
+];
 
 /** The stored forecast of the machine's primary meter, or null before its first summary. */
 export function primaryForecastOf(

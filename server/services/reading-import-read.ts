@@ -57,7 +57,10 @@ function columnsOf({ header }: CsvHeader): Record<Column, number> {
 
 /** A meter kind as a cell may write it: its key (pto_hours) or its label (PTO hours), any case. */
 function kindOfCell(cell: string): MeterKind | null {
-  const text = cell.trim().toLowerCase().replace(/[\s-]+/g, '_');
+  const text = cell
+    .trim()
+    .toLowerCase()
+    .replace(/[\s-]+/g, '_');
   return (
     METER_KINDS.find(
       (k) => k === text || METER_KIND_LABELS[k].toLowerCase().replace(/[\s-]+/g, '_') === text,

@@ -112,19 +112,19 @@ const taskFields = {
 
 const taskInputFields = z.object({
   ...taskFields,
-    intervalMeter: taskFields.intervalMeter.default(null),
-    intervalDays: taskFields.intervalDays.default(null),
-    firstServiceMeter: taskFields.firstServiceMeter.default(null),
-    warnMeter: taskFields.warnMeter.default(null),
-    warnDays: taskFields.warnDays.default(null),
-    parts: taskFields.parts.default([]),
-    fluids: taskFields.fluids.default([]),
-    labourHours: taskFields.labourHours.default(null),
-    instructions: taskFields.instructions.default(''),
-    safetyNotes: taskFields.safetyNotes.default(''),
-    hazards: taskFields.hazards.default([]),
-    ...seasonTaskDefaults,
-    dailyCare: taskFields.dailyCare.default(false),
+  intervalMeter: taskFields.intervalMeter.default(null),
+  intervalDays: taskFields.intervalDays.default(null),
+  firstServiceMeter: taskFields.firstServiceMeter.default(null),
+  warnMeter: taskFields.warnMeter.default(null),
+  warnDays: taskFields.warnDays.default(null),
+  parts: taskFields.parts.default([]),
+  fluids: taskFields.fluids.default([]),
+  labourHours: taskFields.labourHours.default(null),
+  instructions: taskFields.instructions.default(''),
+  safetyNotes: taskFields.safetyNotes.default(''),
+  hazards: taskFields.hazards.default([]),
+  ...seasonTaskDefaults,
+  dailyCare: taskFields.dailyCare.default(false),
 });
 // an interval or a season, and a season without a day interval (task-season.ts)
 export const taskInputSchema = taskInputFields.superRefine(checkTaskTiming);

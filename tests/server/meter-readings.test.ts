@@ -60,7 +60,11 @@ describe('readings per meter', () => {
     // engine 10 h/day (1,000 → 1,300 h), separator 6 h/day (500 → 680 h) over 30 days
     await addReadings(combine, [
       ...[0, 10, 20, 30].map((d) => ({ daysAgo: 30 - d, value: 1000 + d * 10 })),
-      ...[0, 10, 20, 30].map((d) => ({ daysAgo: 30 - d, value: 500 + d * 6, meterId: separator.id })),
+      ...[0, 10, 20, 30].map((d) => ({
+        daysAgo: 30 - d,
+        value: 500 + d * 6,
+        meterId: separator.id,
+      })),
     ]);
     await createTask(combine, {
       name: 'Separator drive belt',
@@ -72,7 +76,8 @@ describe('readings per meter', () => {
     // due at 1,350 engine hours: 50 h left at 10 h/day = 5 days
     const res = await agent.get(`/api/v1/organizations/${org.id}/due`);
     expect(res.status).toBe(200);
-    const row = (name: string) => res.body.data.find((r: { taskName: string }) => r.taskName === name);
+    const row = (name: string) =>
+      res.body.data.find((r: { taskName: string }) => r.taskName === name);
     const today = todayIso('America/Chicago');
     const belt = row('Separator drive belt');
     expect(belt.due).toMatchObject({ status: 'ok', dueMeter: 750, remainingMeter: 70 });
@@ -96,7 +101,9 @@ describe('counter reset', () => {
     });
     await addReadings(baler, [{ daysAgo: 3, value: 9800 }]);
     const base = `/api/v1/organizations/${org.id}/machines/${baler.id}`;
-    expect((await agent.post(`${base}/readings`).send({ value: 9950, takenAt: ago(2 * DAY) })).status).toBe(201);
+    expect(
+      (await agent.post(`${base}/readings`).send({ value: 9950, takenAt: ago(2 * DAY) })).status,
+    ).toBe(201);
     const lower = await agent.post(`${base}/readings`).send({ value: 40, takenAt: ago(HOUR) });
     expect(lower.status).toBe(422);
     expect(lower.body.error.fields.value).toMatch(/may not go backwards.*Counter was reset/);

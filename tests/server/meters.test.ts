@@ -142,7 +142,9 @@ describe('meters API', () => {
     const url = `/api/v1/organizations/${org.id}/machines/${machine.id}/tasks`;
     const task = await agent.post(url).send({ name: 'Knotter check', intervalMeter: 10000 });
     expect(task.status).toBe(201);
-    const [primary] = await MachineMeter.findAll({ where: { machineId: machine.id, isPrimary: true } });
+    const [primary] = await MachineMeter.findAll({
+      where: { machineId: machine.id, isPrimary: true },
+    });
     expect(task.body.data.meterId).toBe(primary.id);
     const moved = await agent
       .patch(`/api/v1/organizations/${org.id}/tasks/${task.body.data.id}`)

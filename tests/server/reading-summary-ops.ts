@@ -29,7 +29,6 @@ const MAX_PER_DAY = 24;
 /** Clock skew the pace rule allows on elapsed time (reading-rules.ts: 5 minutes). */
 const SKEW_MS = 5 * 60_000;
 
-
 const fraction = fc.double({ min: 0, max: 1, noNaN: true });
 /** Which stored reading a step takes (0…1 over them in order); often the last, the usual typo. */
 const pick = fc.oneof(fraction, fc.constant(1));
@@ -103,7 +102,10 @@ async function storedReadings(machine: Machine, meter: StepMeter): Promise<Store
   return rows.map((r) => ({ id: r.id, lifetime: r.lifetimeValue, at: r.takenAt.getTime() }));
 }
 
-async function replacementsOf(machine: Machine, meter: StepMeter): Promise<MeterReplacementPoint[]> {
+async function replacementsOf(
+  machine: Machine,
+  meter: StepMeter,
+): Promise<MeterReplacementPoint[]> {
   const rows = await MeterReplacement.findAll({
     where: { machineId: machine.id, meterId: meter.id },
   });

@@ -7,7 +7,10 @@ import {
   meterResponseSchema,
   meterUpdateSchema,
 } from '../../../shared/schemas/meters';
-import { counterResetSchema, meterReplacementResponseSchema } from '../../../shared/schemas/readings';
+import {
+  counterResetSchema,
+  meterReplacementResponseSchema,
+} from '../../../shared/schemas/readings';
 import { authorize } from '../../policies/access';
 import { canManageMeters, canResetCounter, meterAbilities } from '../../policies/meter';
 import { logReadingRefusal } from '../../policies/machine';
@@ -15,13 +18,7 @@ import { presentMeter } from '../../presenters/meter';
 import { presentReplacement } from '../../presenters/reading';
 import { loadMachine } from '../../services/machines';
 import { replaceMeter } from '../../services/meter-changes';
-import {
-  addMeter,
-  listMeters,
-  makePrimary,
-  removeMeter,
-  updateMeter,
-} from '../../services/meters';
+import { addMeter, listMeters, makePrimary, removeMeter, updateMeter } from '../../services/meters';
 import type { OrgAccess } from '../../policies/context';
 import type { Machine } from '../../models';
 
