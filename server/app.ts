@@ -17,6 +17,7 @@ import { organizationsRouter } from './routes/organizations/organizations.router
 import { membersRouter } from './routes/members/members.router';
 import { devRouter } from './routes/dev/dev.router';
 import { machinesRouter } from './routes/machines/machines.router';
+import { hitchRouter } from './routes/hitch/hitch.router';
 import { metersRouter } from './routes/machines/meters.router';
 import { machinePhotoRouter } from './routes/machines/photo.router';
 import { fleetImportRouter } from './routes/machines/fleet-import.router';
@@ -90,6 +91,7 @@ export function createApp(options: { serveClient?: boolean; clientDist?: string 
   api.use(membersRouter());
   api.use(machinesRouter());
   api.use(metersRouter());
+  api.use(hitchRouter());
   api.use(machinePhotoRouter());
   api.use(fleetImportRouter());
   api.use(machineStatusRouter());

@@ -18,6 +18,7 @@ const DEALER_ROUTES: readonly { method: string; path: string; access: DealerAcce
   { method: 'GET', path: '/organizations/:orgId/machines/:machineId/photo', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/machines/:machineId/readings', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/machines/:machineId/meters', access: 'view' },
+  { method: 'GET', path: '/organizations/:orgId/machines/:machineId/hitch-spans', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/readings/latest', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/due', access: 'view' },
   { method: 'GET', path: '/organizations/:orgId/machines/:machineId/due', access: 'view' },

@@ -234,9 +234,11 @@ export async function correctSpan(access: OrgAccess, spanId: string, input: Hitc
       transaction,
       input.tractorId,
     );
-    checkPair(implement.machine, newTractor.machine);
-    const meterKind = input.meterKind ?? span.meterKind;
-    await checkTractorMeter(newTractor.machine, meterKind, transaction);
+    // only what is sent is checked again: a past span stays correctable after its tractor was
+    // sold or reclassed
+    if (input.tractorId !== undefined) checkPair(implement.machine, newTractor.machine);
+    if (input.tractorId !== undefined || input.meterKind !== undefined)
+      await checkTractorMeter(newTractor.machine, input.meterKind ?? span.meterKind, transaction);
     const startedAt = input.startedAt ? new Date(input.startedAt) : span.startedAt;
     const endedAt =
       input.endedAt === undefined ? span.endedAt : input.endedAt ? new Date(input.endedAt) : null;

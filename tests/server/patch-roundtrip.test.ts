@@ -98,6 +98,18 @@ const ROUTES: Record<string, PatchRoute> = {
       { field: 'position', value: v(4) },
     ],
   },
+  '/organizations/{orgId}/hitch-spans/{spanId}': {
+    table: 'hitch_spans',
+    id: (w) => w.ids.spanId,
+    url: (w) => farm(w, `/hitch-spans/${w.ids.spanId}`),
+    cases: [
+      { field: 'note', value: v('Third cut.') },
+      { field: 'endedAt', value: v(new Date(Date.now() - 11 * 86_400_000).toISOString()) },
+      { field: 'startedAt', value: v(new Date(Date.now() - 16 * 86_400_000).toISOString()) },
+      { field: 'meterKind', value: v('pto_hours') },
+      { field: 'tractorId', value: (ids) => ids.spareTractorId },
+    ],
+  },
   '/organizations/{orgId}/service-records/{recordId}': {
     table: 'service_records',
     id: (w) => w.ids.recordId,

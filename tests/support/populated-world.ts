@@ -40,6 +40,10 @@ export interface PopulatedWorld {
     apiKeyId: string;
     /** the machine's second meter, PTO hours (meters/:meterId) */
     meterId: string;
+    /** a closed hitch span of a trailed implement on the machine (hitch-spans/:spanId) */
+    spanId: string;
+    /** a second tractor in hours with a PTO meter (a span's tractor corrected onto it) */
+    spareTractorId: string;
   };
   emails: { advisor: string; technician: string };
   checklistItemIds: string[];
@@ -122,6 +126,32 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
     hazards: ['hot_fluid'],
   };
   const meter = await send(agent, 'post', `${m}/meters`, { kind: 'pto_hours' });
+  // a trailed implement without a meter of its own, three days on a tractor's engine hours;
+  // two tractors in hours with a PTO meter each (a span's tractor and meter can be corrected)
+  const tractorInHours = async (fleetNumber: string) => {
+    const t = await send(agent, 'post', `${org}/machines`, {
+      fleetNumber,
+      name: 'Utility tractor',
+      category: 'tractor',
+    });
+    await send(agent, 'post', `${org}/machines/${t.id}/meters`, { kind: 'pto_hours' });
+    return t.id as string;
+  };
+  const hitchTractorId = await tractorInHours('T-09');
+  const spareTractorId = await tractorInHours('T-10');
+  const implement = await send(agent, 'post', `${org}/machines`, {
+    fleetNumber: 'M-07',
+    name: 'Trailed mower',
+    category: 'implement',
+  });
+  const span = await send(agent, 'post', `${org}/hitch-spans`, {
+    implementId: implement.id,
+    tractorId: hitchTractorId,
+    meterKind: 'engine_hours',
+    startedAt: new Date(Date.now() - 15 * DAY).toISOString(),
+    endedAt: new Date(Date.now() - 12 * DAY).toISOString(),
+    note: 'Second cut.',
+  });
   const task = await send(agent, 'post', `${m}/tasks`, fullTask);
   await send(agent, 'put', `${org}/tasks/${task.id}/last-done`, {
     lastDoneMeter: 4000,
@@ -236,6 +266,8 @@ export async function buildPopulatedWorld(app: Express): Promise<PopulatedWorld>
       operatorUserId: op.id,
       apiKeyId: key.id,
       meterId: meter.id,
+      spanId: span.id,
+      spareTractorId,
     },
     emails: { advisor: advisorUser.email, technician: tech.email },
     checklistItemIds: (template.items as { id: string }[]).map((item) => item.id),

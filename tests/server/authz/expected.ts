@@ -264,6 +264,13 @@ export const EXPECTED: Record<string, Row> = {
   'GET /organizations/{orgId}/api-keys': managers,
   'POST /organizations/{orgId}/api-keys': managers,
   'DELETE /organizations/{orgId}/api-keys/{keyId}': managers,
+  // the hitch log (issue 13): read by the farm and linked dealers, hitched and unhitched by the
+  // farm's people (the operator is assigned to the tractor), corrected by the shop
+  'GET /organizations/{orgId}/machines/{machineId}/hitch-spans': read,
+  'POST /organizations/{orgId}/hitch-spans': farmOnly,
+  'POST /organizations/{orgId}/hitch-spans/{spanId}/end': farmOnly,
+  'PATCH /organizations/{orgId}/hitch-spans/{spanId}': shop,
+  'DELETE /organizations/{orgId}/hitch-spans/{spanId}': shop,
   // only an API key reaches these: a session, whoever holds it, is refused as not signed in
   'POST /telematics/iso15143-3': keyOnly(),
   'POST /telematics/machines/{machine}/j1939': keyOnly(),

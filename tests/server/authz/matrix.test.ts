@@ -16,6 +16,7 @@ import { DEALER_CASES } from './cases-dealers';
 import { ACCOUNT_CASES } from './cases-account';
 import { KEY_CASES } from './cases-keys';
 import { METER_CASES } from './cases-meters';
+import { HITCH_CASES } from './cases-hitch';
 import {
   app,
   changedTables,
@@ -38,6 +39,7 @@ const CASES: Record<string, Case> = {
   ...ACCOUNT_CASES,
   ...KEY_CASES,
   ...METER_CASES,
+  ...HITCH_CASES,
 };
 
 async function documentedRoutes(): Promise<string[]> {
