@@ -3,7 +3,7 @@
 import { sequelize } from '../db';
 import { AppError, invalid } from '../errors';
 import { meterNotFound } from './meter-changes';
-import { MeterReading, MeterReplacement, type Machine } from '../models';
+import { MachineMeter, MeterReading, MeterReplacement, type Machine } from '../models';
 import type { OrgAccess } from '../policies/context';
 import type { BulkReadingsInput, ReadingCreateInput } from '../../shared/schemas/readings';
 import { authorize } from '../policies/access';
@@ -17,8 +17,8 @@ import { listMachines, loadMachine, loadVisibleMachines } from './machines';
 import { writeReadings, type NewReading } from './readings';
 
 /**
- * A machine's readings (newest first, at most `limit`; of one meter when `meterId` is given, else
- * of all its meters) and its meter replacements and counter resets.
+ * A meter's readings (newest first, at most `limit`) and its replacements and counter resets: of
+ * the meter `meterId` names, else of the machine's primary meter (as before several meters).
  */
 export async function readingHistory(
   access: OrgAccess,
@@ -26,10 +26,16 @@ export async function readingHistory(
   limit: number,
   meterId?: string,
 ) {
+  const primary = meterId
+    ? null
+    : await MachineMeter.findOne({
+        where: { machineId: machine.id, isPrimary: true },
+        attributes: ['id'],
+      });
   const where = {
     organizationId: access.organization.id,
     machineId: machine.id,
-    ...(meterId && { meterId }),
+    meterId: meterId ?? primary!.id,
   };
   const [readings, replacements] = await Promise.all([
     MeterReading.findAll({

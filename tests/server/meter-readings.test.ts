@@ -51,6 +51,9 @@ describe('readings per meter', () => {
     expect(plain.body.data.meterId).not.toBe(pto.id);
     const history = await agent.get(`${url}?meterId=${pto.id}`);
     expect(history.body.data.map((r: { value: number }) => r.value)).toEqual([310]);
+    // without meterId: the primary meter's, as before several meters
+    const primary = await agent.get(url);
+    expect(primary.body.data.map((r: { value: number }) => r.value)).toEqual([4210, 4200]);
   });
 
   it('forecast per meter — a separator task falls due by separator hours, an engine task by engine hours (hand-worked)', async () => {

@@ -49,7 +49,7 @@ export function readingsRouter(): Router {
     method: 'get',
     path: '/organizations/:orgId/machines/:machineId/readings',
     summary:
-      "A machine's readings (newest first; of one meter with meterId, else of all) and meter replacements and resets",
+      "A meter's readings (newest first; the machine's primary meter unless meterId names another) and its replacements and resets",
     tags: ['readings'],
     params: machineParams,
     query: z.object({
