@@ -1,10 +1,10 @@
 import { useState } from 'react';
-import type { UnitSystem } from '../../../../shared/constants';
+import { METER_UNIT_LABELS, type MeterUnit, type UnitSystem } from '../../../../shared/constants';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
-import { TextField } from '../../../components/ui/field';
+import { SelectField, TextField } from '../../../components/ui/field';
 import { formatDateTime, formatTimeZoneName } from '../../../lib/format';
 import {
   formatMeter,
@@ -13,9 +13,10 @@ import {
 } from '../../../lib/fleet-format';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { meterValueAs, withMeterReasons } from '../../../lib/meter-input';
+import { meterName, useCounterReset, type MachineMeterJson } from '../../../lib/meters';
 import { useLogReading } from '../api/log-reading';
 import type { Reading } from '../api/types';
-import { readingFormSchema } from '../lib/reading-form-schema';
+import { newReadingFormSchema } from '../lib/reading-form-schema';
 
 interface ReadingFormProps {
   orgId: string;
@@ -26,11 +27,27 @@ interface ReadingFormProps {
   timeZone: string;
   /** the newest reading, as the meter showed it, for the hint */
   latest: Reading | null;
+  /** the machine's meters (primary first); a choice appears when there is more than one */
+  meters?: MachineMeterJson[];
 }
 
-/** "Log a reading": the meter as it shows now, optionally when it was read. */
-export function ReadingForm({ orgId, machineId, unit, units, timeZone, latest }: ReadingFormProps) {
+const EMPTY = {
+  value: undefined as unknown as number,
+  takenAt: '',
+  meterId: '',
+  reset: false,
+  oldFinalValue: undefined,
+};
+
+/**
+ * "Log a reading": the meter as it shows now, optionally when it was read; on which meter when
+ * the machine has several; or "counter was reset" (a bale counter zeroed), recorded like a
+ * meter replacement so the meter's lifetime runs on.
+ */
+export function ReadingForm(props: ReadingFormProps) {
+  const { orgId, machineId, units, timeZone, meters = [] } = props;
   const log = useLogReading(orgId, machineId);
+  const resetCounter = useCounterReset(orgId, machineId);
   const [formError, setFormError] = useState<string | null>(null);
   const [notice, setNotice] = useState<{ tone: 'success' | 'info'; text: string } | null>(null);
   const {
@@ -38,11 +55,16 @@ export function ReadingForm({ orgId, machineId, unit, units, timeZone, latest }:
     handleSubmit,
     setError,
     reset,
+    watch,
     formState: { errors, isSubmitting },
   } = useForm({
-    resolver: withMeterReasons(zodResolver(readingFormSchema)),
-    defaultValues: { value: undefined as unknown as number, takenAt: '' },
+    resolver: withMeterReasons(zodResolver(newReadingFormSchema)),
+    defaultValues: EMPTY,
   });
+  const chosen = meters.find((m) => m.id === watch('meterId')) ?? meters[0];
+  const unit = chosen ? METER_UNIT_LABELS[chosen.unit as MeterUnit] : props.unit;
+  const last = chosen && meters.length > 1 ? chosen.lastReading : props.latest;
+  const resetting = watch('reset');
 
   const submit = handleSubmit(async (values) => {
     setFormError(null);
@@ -56,16 +78,32 @@ export function ReadingForm({ orgId, machineId, unit, units, timeZone, latest }:
       }
       takenAt = instant;
     }
+    const meterId = values.meterId || undefined;
     try {
-      const result = await log.mutateAsync({ value: values.value, takenAt });
-      setNotice(
-        result.status === 'duplicate'
-          ? { tone: 'info', text: 'That reading was already recorded; nothing was added.' }
-          : { tone: 'success', text: `Reading saved: ${formatMeter(values.value, unit)}.` },
-      );
-      reset({ value: undefined as unknown as number, takenAt: '' });
+      if (values.reset) {
+        await resetCounter.mutateAsync({
+          meterId,
+          oldFinalValue: values.oldFinalValue!,
+          newStartValue: values.value,
+          resetAt: takenAt ?? new Date().toISOString(),
+        });
+        setNotice({
+          tone: 'success',
+          text: `Counter reset saved: ${formatMeter(values.oldFinalValue!, unit)} before, ${formatMeter(values.value, unit)} after.`,
+        });
+      } else {
+        const result = await log.mutateAsync({ value: values.value, takenAt, meterId });
+        setNotice(
+          result.status === 'duplicate'
+            ? { tone: 'info', text: 'That reading was already recorded; nothing was added.' }
+            : { tone: 'success', text: `Reading saved: ${formatMeter(values.value, unit)}.` },
+        );
+      }
+      reset({ ...EMPTY, meterId: values.meterId });
     } catch (error) {
-      setFormError(applyServerErrors(error, setError, ['value', 'takenAt']));
+      setFormError(
+        applyServerErrors(error, setError, ['value', 'takenAt', 'meterId', 'oldFinalValue']),
+      );
     }
   });
 
@@ -73,13 +111,42 @@ export function ReadingForm({ orgId, machineId, unit, units, timeZone, latest }:
     <form onSubmit={submit} noValidate aria-label="Log a reading" className="flex flex-col gap-4">
       {formError ? <Alert>{formError}</Alert> : null}
       {notice ? <Alert tone={notice.tone}>{notice.text}</Alert> : null}
+      {meters.length > 1 ? (
+        <SelectField
+          label="Meter"
+          hint="Which of the machine's meters you read."
+          error={errors.meterId?.message}
+          options={meters.map((m) => ({
+            value: m.isPrimary ? '' : m.id,
+            label: `${meterName(m)}${m.isPrimary ? ' (primary)' : ''}`,
+          }))}
+          {...register('meterId')}
+        />
+      ) : null}
+      <label className="flex min-h-touch items-center gap-3 font-bold text-field-900">
+        <input type="checkbox" className="size-5" {...register('reset')} />
+        Counter was reset
+      </label>
       <div className="grid gap-4 sm:grid-cols-2">
+        {resetting ? (
+          <TextField
+            label="Count before the reset"
+            hint={`What the counter showed just before it was zeroed (${unit}).`}
+            type="text"
+            inputMode="decimal"
+            autoComplete="off"
+            error={errors.oldFinalValue?.message}
+            {...register('oldFinalValue', meterValueAs(units))}
+          />
+        ) : null}
         <TextField
-          label="Meter reading"
+          label={resetting ? 'Count after the reset' : 'Meter reading'}
           hint={
-            latest
-              ? `As the meter shows it (${unit}). Last: ${formatMeter(latest.value, unit)} on ${formatDateTime(latest.takenAt, timeZone)}.`
-              : `As the meter shows it (${unit}).`
+            resetting
+              ? `Usually 0 (${unit}).`
+              : last
+                ? `As the meter shows it (${unit}). Last: ${formatMeter(last.value, unit)} on ${formatDateTime(last.takenAt, timeZone)}.`
+                : `As the meter shows it (${unit}).`
           }
           type="text"
           inputMode="decimal"
@@ -89,7 +156,7 @@ export function ReadingForm({ orgId, machineId, unit, units, timeZone, latest }:
           {...register('value', meterValueAs(units))}
         />
         <TextField
-          label="Time taken"
+          label={resetting ? 'Reset at' : 'Time taken'}
           hint={`Optional; empty means now. Farm time (${formatTimeZoneName(timeZone)}).`}
           type="datetime-local"
           max={toDateTimeLocalValue(new Date(), timeZone)}
@@ -99,7 +166,7 @@ export function ReadingForm({ orgId, machineId, unit, units, timeZone, latest }:
       </div>
       <div>
         <Button type="submit" icon="plus" pending={isSubmitting} className="w-full sm:w-auto">
-          Save reading
+          {resetting ? 'Save counter reset' : 'Save reading'}
         </Button>
       </div>
     </form>

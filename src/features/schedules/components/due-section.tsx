@@ -10,6 +10,7 @@ import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
 import { ListSkeleton } from '../../../components/ui/skeleton';
+import { useMachineMeters } from '../../../lib/meters';
 import { useCreateTask } from '../api/create-task';
 import { useTasks } from '../api/get-tasks';
 import type { Task } from '../api/types';
@@ -50,6 +51,7 @@ function byUrgency(a: Task, b: Task): number {
 export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueSectionProps) {
   const tasks = useTasks(orgId, machine.id);
   const create = useCreateTask(orgId, machine.id);
+  const meters = useMachineMeters(orgId, machine.id);
   const [panel, setPanel] = useState<'none' | 'add' | 'template' | 'class'>('none');
   const [notice, setNotice] = useState<string | null>(null);
   const open = (next: 'add' | 'template' | 'class') => {
@@ -122,8 +124,9 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
             label="Add task"
             initial={emptyTask()}
             submitLabel="Add task"
-            onSubmit={async (values) => {
-              const task = await create.mutateAsync(values);
+            meters={meters.data?.data}
+            onSubmit={async (values, meterId) => {
+              const task = await create.mutateAsync({ ...values, meterId });
               setPanel('none');
               setNotice(`${task.name} is on the schedule.`);
             }}

@@ -5,7 +5,8 @@ import { HAZARDS, taskInputSchema, type TaskInput } from '../../../../shared/sch
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { CheckboxGroup } from '../../../components/ui/checkbox-group';
-import { TextField } from '../../../components/ui/field';
+import { SelectField, TextField } from '../../../components/ui/field';
+import { meterName, type MachineMeterJson } from '../../../lib/meters';
 import { TextareaField } from '../../../components/ui/textarea-field';
 import { applyServerErrors } from '../../../lib/form-errors';
 import { meterUnitLabel } from '../../../lib/fleet-format';
@@ -22,15 +23,28 @@ interface TaskFormProps {
   unit: string;
   initial: TaskInput;
   submitLabel: string;
-  onSubmit: (values: TaskInput) => Promise<unknown>;
+  /** `meterId`: the meter chosen when the machine has several (its primary otherwise) */
+  onSubmit: (values: TaskInput, meterId?: string) => Promise<unknown>;
+  /** the machine's meters (primary first): with several, the task counts on the one chosen */
+  meters?: MachineMeterJson[];
   onCancel: () => void;
   /** accessible name of the form ("Edit Engine oil and filter") */
   label: string;
 }
 
 /** Every field of a schedule task: intervals, warning window, parts, fluids, labour, safety. */
-export function TaskForm({ unit, initial, submitLabel, onSubmit, onCancel, label }: TaskFormProps) {
+export function TaskForm({
+  unit,
+  initial,
+  submitLabel,
+  onSubmit,
+  onCancel,
+  label,
+  meters = [],
+}: TaskFormProps) {
   const [formError, setFormError] = useState<string | null>(null);
+  const [meterId, setMeterId] = useState(meters[0]?.id ?? '');
+  const meter = meters.find((m) => m.id === meterId);
   const form: TaskFormApi = useForm<TaskFormInput, unknown, TaskInput>({
     resolver: zodResolver(taskInputSchema),
     defaultValues: initial,
@@ -43,12 +57,13 @@ export function TaskForm({ unit, initial, submitLabel, onSubmit, onCancel, label
     getValues,
     formState: { errors, isSubmitting },
   } = form;
-  const unitWord = meterUnitLabel(unit);
+  // a task's interval is in its meter's unit
+  const unitWord = meterUnitLabel(meter?.unit ?? unit);
 
   const submit = handleSubmit(async (values) => {
     setFormError(null);
     try {
-      await onSubmit(values);
+      await onSubmit(values, meters.length > 1 ? meterId : undefined);
     } catch (error) {
       setFormError(applyServerErrors(error, setError, taskFieldNames(getValues())));
     }
@@ -63,6 +78,17 @@ export function TaskForm({ unit, initial, submitLabel, onSubmit, onCancel, label
         error={errors.name?.message}
         {...register('name')}
       />
+
+      {meters.length > 1 ? (
+        <SelectField
+          label="Counts on meter"
+          hint="The meter the interval is counted on, in its unit."
+          value={meterId}
+          onChange={(e) => setMeterId(e.target.value)}
+          error={errors.root?.message}
+          options={meters.map((m) => ({ value: m.id, label: meterName(m) }))}
+        />
+      ) : null}
 
       <TaskIntervalFields form={form} unitWord={unitWord} />
 
