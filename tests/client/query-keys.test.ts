@@ -152,13 +152,17 @@ const screens: Record<string, QueryKey> = {
 
 describe('changedBy — what each write refreshes, and nothing of another organization', () => {
   it('a reading logged on the machine page — its history, its due points, the fleet, the due list, the shop week and the Log hours list', async () => {
+    // a tractor's reading moves the hours of the implements it pulls (the hitch log), so every
+    // machine's page and tasks of the farm are refreshed — never another farm's
     expect(await invalidatedBy(changedBy.machineReadings(ORG, M), screens)).toEqual([
       'logHoursList',
       'machineReadings',
       'otherMachineReadings',
       'machineDetail',
+      'otherMachineDetail',
       'fleetPage',
       'machineTasks',
+      'otherMachineTasks',
       'dueList',
       'shopWeek',
     ]);

@@ -220,6 +220,8 @@ function badOf(s: JsonSchema, hints: FuzzHints, key: string): Arbitrary<unknown>
     if (required.length)
       options.push(
         fc.tuple(whole, fc.constantFrom(...required)).map(([o, k]) => {
+          // a nullable object's valid value may be null: nothing to drop then
+          if (o === null || typeof o !== 'object') return o;
           const { [k]: _dropped, ...rest } = o;
           return rest;
         }),
