@@ -40,7 +40,7 @@ export const visibleToOperator = (machine = 'm.id', org = 'm.organization_id') =
 export const DUE_ROW_COLUMNS = `d.task_id, d.due, t.name AS task_name, t.hazards, t.labour_hours,
       m.id AS machine_id, m.fleet_number, m.name AS machine_name, m.category, m.status AS machine_status, mt.unit AS meter_unit,
       m.restriction_reason IS NOT NULL AS machine_restricted,
-      f.last_value, f.last_raw_value, f.last_taken_at, f.usage - 'profile' AS usage`;
+      f.last_value, f.last_raw_value, f.last_taken_at, f.usage - array['profile', 'profileFast', 'profileSlow'] AS usage`;
 
 /**
  * The due points of the fleet a list may show, as conditions on d alone (org given as SQL, e.g.

@@ -83,7 +83,8 @@ export function duePointsFor(
   seasonMonths: readonly number[] = [],
 ): { usage: UsageEstimate; points: Map<string, DuePoint> } {
   const daily = forecast?.daily ?? [];
-  const usage = estimateUsage(daily, localDayNumber(now, timeZone));
+  // season months are the prior of a machine in its first year
+  const usage = estimateUsage(daily, localDayNumber(now, timeZone), { seasonMonths });
   const startIso = forecast?.firstTakenAt
     ? isoFromDayNumber(localDayNumber(forecast.firstTakenAt, timeZone))
     : null;
@@ -118,6 +119,15 @@ export function duePointsFor(
     );
   }
   return { usage, points };
+}
+
+/**
+ * The usage estimate as stored: without its daily profiles (a few thousand numbers), which only
+ * date the due points computed beside it and are never read back.
+ */
+function storedUsage(usage: UsageEstimate): UsageEstimate {
+  const { profile: _p, profileFast: _f, profileSlow: _s, ...kept } = usage;
+  return kept;
 }
 
 /** A meter as a forecast needs it: which machine it is on. */
@@ -236,7 +246,7 @@ async function computeAndStore(
       meterId: id,
       machineId,
       organizationId,
-      usage,
+      usage: storedUsage(usage),
       computedOn: asOfIso,
       updatedAt: now,
     });

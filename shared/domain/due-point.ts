@@ -56,16 +56,18 @@ export function projectDateForValue(
   if (target <= anchorValue) {
     day = anchorDay;
   } else if (usage.method === 'season' && usage.profile && usage.profile.length > 0) {
+    const banded =
+      variant === 'low' ? usage.profileFast : variant === 'high' ? usage.profileSlow : null;
     const scale = usage.scale && usage.scale > 0 ? usage.scale : 1;
     // profile = base × scale; low/high are base × max(scale,1) × 1.2 and base × min(scale,1) × 0.8.
     const factor =
-      variant === 'point'
+      variant === 'point' || banded
         ? 1
         : variant === 'low'
           ? (Math.max(scale, 1) * 1.2) / scale
           : (Math.min(scale, 1) * 0.8) / scale;
     const steps = Math.ceil(asOfDay + MAX_PROJECTION_DAYS - anchorDay) + 1;
-    day = walkProfile(usage.profile, factor, anchorDay, anchorValue, target, steps);
+    day = walkProfile(banded ?? usage.profile, factor, anchorDay, anchorValue, target, steps);
   } else {
     const rate = variant === 'point' ? usage.rate : variant === 'low' ? usage.high : usage.low;
     day = rate > 0 ? anchorDay + (target - anchorValue) / rate : null;

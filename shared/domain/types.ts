@@ -31,6 +31,12 @@ export interface UsageEstimate {
   anchorValue?: number;
   /** season only: projected usage per day for the next `profile.length` days (index 0 = day after asOf, i.e. after anchorDay), scaled */
   profile?: number[];
+  /**
+   * season only: the fast and slow sides of the range (profiles whose running totals are the 90th
+   * and 10th percentiles of the meter's rise); without them the range is profile × scale factors
+   */
+  profileFast?: number[];
+  profileSlow?: number[];
   /** season only: the scale factor this year vs. last year's same weeks */
   scale?: number;
   /** short human explanation shown in the UI */

@@ -1,8 +1,8 @@
 // The documented constants of the forecast (shared/domain/usage.ts, usage-season.ts,
 // due-point.ts), each pinned by an example worked by hand here, so that changing one fails a
 // test: the projection limit (three years and a day), the range percentiles (20th / 80th), the
-// season comparison window (28 days), the minimum season history (395 days, and 393 days of
-// readings) and the lower scale clamp (×0.5). Provenance: derived — the arithmetic is in each
+// season history needed (a year of readings) and, for the previous method the accuracy benchmark
+// compares with, its comparison window (28 days) and lower scale clamp (×0.5). Provenance: derived — the arithmetic is in each
 // test; the constants themselves are the method's choices (common practice), not published.
 import { describe, expect, it } from 'vitest';
 import { dayNumberFromIso } from '../../shared/domain/calendar';
@@ -109,7 +109,7 @@ describe('range percentiles — low = 20th, high = 80th of the interval rates', 
   });
 });
 
-describe('season comparison window — the last 28 days against the same 28 days a year earlier', () => {
+describe('previous method — season comparison window — the last 28 days against the same 28 days a year earlier', () => {
   it('usage — 2 h/day for 372 days, then 4 h/day for the last 28 — scale 114.14 / 58.14', () => {
     // Readings (0, 0), (372, 744), (400, 856); asOf day 400. One average day = 856 / 400 = 2.14.
     // This year's last 28 days: 856 − 744 = 112; the same 28 days a year before (days 7…35):
@@ -124,6 +124,7 @@ describe('season comparison window — the last 28 days against the same 28 days
         [400, 856],
       ]),
       startDay + 400,
+      { method: 'previous' },
     );
     expect(usage.method).toBe('season');
     expect(usage.scale).toBeCloseTo(1.963192, 6);
@@ -134,7 +135,7 @@ describe('season comparison window — the last 28 days against the same 28 days
   });
 });
 
-describe('minimum season history — asOf 395 days after the first reading, readings spanning 393', () => {
+describe('minimum season history — readings spanning a year (365 days)', () => {
   // 2 h/day throughout; only which method answers changes.
   const steady = (lastDay: number) =>
     readingsFrom(START, [
@@ -142,25 +143,24 @@ describe('minimum season history — asOf 395 days after the first reading, read
       [lastDay, 2 * lastDay],
     ]);
 
-  it('usage — readings over 394 days, asOf 394 days after the first — trend', () => {
-    expect(estimateUsage(steady(394), startDay + 394).method).toBe('trend');
+  it('usage — readings spanning 364 days — trend (no whole past year to repeat)', () => {
+    expect(estimateUsage(steady(364), startDay + 364).method).toBe('trend');
   });
 
-  it('usage — the same readings, asOf 395 days after the first — season', () => {
-    expect(estimateUsage(steady(394), startDay + 395).method).toBe('season');
+  it('usage — readings spanning 365 days — season', () => {
+    expect(estimateUsage(steady(365), startDay + 365).method).toBe('season');
   });
 
-  it('usage — readings spanning 392 days (asOf 400) — trend: no year-earlier 28 days to compare', () => {
-    // 365 + 28 = 393 days of readings are needed to compare the last 28 with a year earlier.
-    expect(estimateUsage(steady(392), startDay + 400).method).toBe('trend');
-  });
-
-  it('usage — readings spanning 393 days (asOf 400) — season', () => {
-    expect(estimateUsage(steady(393), startDay + 400).method).toBe('season');
+  it('usage — previous method: readings spanning 392 days (asOf 400) — trend: no year-earlier 28 days', () => {
+    // 365 + 28 = 393 days of readings were needed to compare the last 28 with a year earlier.
+    expect(estimateUsage(steady(392), startDay + 400, { method: 'previous' }).method).toBe('trend');
+    expect(estimateUsage(steady(393), startDay + 400, { method: 'previous' }).method).toBe(
+      'season',
+    );
   });
 });
 
-describe('lower scale clamp — a quiet year is scaled by ×0.5 at the least', () => {
+describe('previous method — lower scale clamp — a quiet year is scaled by ×0.5 at the least', () => {
   it('usage — 4 h/day for 372 days, then 1 h/day for the last 28 — raw 0.2745, clamped to 0.5', () => {
     // Readings (0, 0), (372, 1,488), (400, 1,516); asOf day 400. One average day = 3.79.
     // Raw scale = (28 + 3.79) / (4 × 28 + 3.79) = 31.79 / 115.79 = 0.2745, below 0.5: ×0.5.
@@ -173,6 +173,7 @@ describe('lower scale clamp — a quiet year is scaled by ×0.5 at the least', (
         [400, 1516],
       ]),
       startDay + 400,
+      { method: 'previous' },
     );
     expect(usage.method).toBe('season');
     expect(usage.scale).toBe(0.5);

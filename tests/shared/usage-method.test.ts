@@ -200,7 +200,7 @@ describe('usage — lifetimeValueAt (linear between readings, flat outside)', ()
   });
 });
 
-describe('usage — season details', () => {
+describe("usage — the previous season method, details (the accuracy benchmark's baseline)", () => {
   it('usage — idle for 400 days — season, scale 1 (idle against idle), rate 0', () => {
     const usage = estimateUsage(
       readingsFrom(START, [
@@ -208,6 +208,7 @@ describe('usage — season details', () => {
         [400, 500],
       ]),
       startDay + 400,
+      { method: 'previous' },
     );
     expect(usage.method).toBe('season');
     expect(usage.scale).toBe(1);
@@ -224,6 +225,7 @@ describe('usage — season details', () => {
         [400, 1856],
       ]),
       startDay + 400,
+      { method: 'previous' },
     );
     expect(usage.scale).toBeCloseTo(1.963192, 6);
   });
@@ -238,6 +240,7 @@ describe('usage — season details', () => {
         [400, 856],
       ]),
       startDay + 410,
+      { method: 'previous' },
     );
     expect(usage.method).toBe('season');
     expect(usage.anchorDay).toBe(startDay + 410);

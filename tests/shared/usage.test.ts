@@ -145,10 +145,10 @@ describe('usage — trend', () => {
   });
 });
 
-describe('usage — season', () => {
+describe("usage — the previous season method (last year's weeks × the 28-day scale; the accuracy benchmark's baseline)", () => {
   it('usage — two years of steady 5 h/day — season method, rate 5, scale 1', () => {
     const readings = seasonalReadings('2024-01-01', '2025-12-31', 7, 0, () => 5);
-    const usage = estimateUsage(readings, dayNumberFromIso('2026-01-01'));
+    const usage = estimateUsage(readings, dayNumberFromIso('2026-01-01'), { method: 'previous' });
     expect(usage.method).toBe('season');
     expect(usage.scale).toBeCloseTo(1, 6);
     expect(usage.rate).toBeCloseTo(5, 6);
@@ -162,7 +162,7 @@ describe('usage — season', () => {
       inHarvest(d) ? 4 : 0,
     );
     const asOf = dayNumberFromIso('2026-05-10');
-    const usage = estimateUsage(readings, asOf);
+    const usage = estimateUsage(readings, asOf, { method: 'previous' });
     expect(usage.method).toBe('season');
     expect(usage.explanation).toContain('Same weeks last year');
     // Idle spring against idle spring: scale ≈ 1, not 0/0 and not clamped.
@@ -180,7 +180,7 @@ describe('usage — season', () => {
     const readings = seasonalReadings('2024-06-01', '2026-05-01', 1, 0, (d) =>
       d < dayNumberFromIso('2026-01-01') ? 2 : 8,
     );
-    const usage = estimateUsage(readings, dayNumberFromIso('2026-05-01'));
+    const usage = estimateUsage(readings, dayNumberFromIso('2026-05-01'), { method: 'previous' });
     expect(usage.method).toBe('season');
     expect(usage.scale).toBe(2);
     expect(usage.rate).toBeCloseTo(4, 6); // last year's 2 h/day × 2
