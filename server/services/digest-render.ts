@@ -1,7 +1,7 @@
 // The words of one due digest: the facts of each task, the cap on how many tasks one e-mail
 // lists, and its subject, plain text and HTML. digest.ts chooses the rows and queues the mail.
 import {
-  dueRangeText,
+  dueSpreadText,
   fittedMeterText,
   overText,
   remainingDaysText,
@@ -56,8 +56,8 @@ export function taskFacts(row: DueRow): string[] {
   }
   if (due.projectedDate !== null && due.status !== 'overdue') {
     let projected = `Projected ${formatIsoDate(due.projectedDate)}`;
-    const range = dueRangeText(due.projectedLow, due.projectedHigh, formatIsoDate);
-    if (range && due.projectedLow !== due.projectedHigh) projected += ` (range ${range})`;
+    const spread = dueSpreadText(due, formatIsoDate);
+    if (spread) projected += ` (${spread})`;
     facts.push(projected);
   }
   if (due.status === 'overdue') facts.push(`Overdue: ${overText(due, unit) ?? 'now'}`);

@@ -4,6 +4,7 @@
 // A season service takes its date from the machine's season months (season-dates.ts) in place of
 // a day interval, and may keep a meter interval: whichever comes first.
 import { addDaysIso, dayNumberFromIso, daysBetweenIso, isoFromDayNumber } from './calendar';
+import { dueOutcomes } from './due-outcomes';
 import { seasonServiceDue } from './season-dates';
 import type { DuePoint, DueSeason, DueStatus, TaskSchedule, UsageEstimate } from './types';
 
@@ -206,6 +207,7 @@ export function computeDuePoint(
   const projectedDate = project('point');
   const projectedLow = project('low');
   const projectedHigh = project('high');
+  const outcomes = dueOutcomes(usage, projectedLow, projectedDate, projectedHigh);
 
   let governs: DuePoint['governs'] = null;
   let effectiveDate: string | null = null;
@@ -260,6 +262,7 @@ export function computeDuePoint(
     remainingMeter,
     remainingDays,
     basis: basisOf(task, meter),
+    ...(outcomes && { outcomes }),
     ...(season && { season: season.season }),
   };
 }

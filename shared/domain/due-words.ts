@@ -84,6 +84,25 @@ export function overText(
 }
 
 /**
+ * A projection's spread in words: its range ("range 22 – 29 Dec 2026") or, when the range crosses
+ * an idle spell, its two outcomes ("late this season (20 Sep – 31 Oct 2027) or early next
+ * (1 – 26 Aug 2028), likelier this season"); null without a range.
+ */
+export function dueSpreadText(
+  due: Pick<DuePoint, 'projectedLow' | 'projectedHigh' | 'outcomes'>,
+  date: DateFormat = englishDateText,
+): string | null {
+  const o = due.outcomes;
+  if (o) {
+    const side = (s: { from: string; to: string }) => dueRangeText(s.from, s.to, date);
+    const likelier = o.likelier === 'this_season' ? 'this season' : 'next season';
+    return `late this season (${side(o.thisSeason)}) or early next (${side(o.nextSeason)}), likelier ${likelier}`;
+  }
+  const range = dueRangeText(due.projectedLow, due.projectedHigh, date);
+  return range && due.projectedLow !== due.projectedHigh ? `range ${range}` : null;
+}
+
+/**
  * "22 Dec – 29 Dec 2026", "29 Dec 2026 – 14 Jan 2027": a projected range (ISO local dates), one
  * date when both ends agree, null without a range. Within one year the year is said once.
  */

@@ -6,6 +6,7 @@ export * from './usage';
 export * from './usage-trend';
 export * from './usage-season';
 export * from './due-point';
+export * from './due-outcomes';
 export * from './season-dates';
 export * from './reading-rules';
 export * from './cost';

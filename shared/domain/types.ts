@@ -82,6 +82,13 @@ export interface DueSeason {
   seasonDate: string | null;
 }
 
+/** A projected range split by an idle spell: ISO dates of each side, and the likelier side. */
+export interface DueOutcomes {
+  thisSeason: { from: string; to: string };
+  nextSeason: { from: string; to: string };
+  likelier: 'this_season' | 'next_season';
+}
+
 export type DueStatus = 'overdue' | 'due_soon' | 'ok' | 'no_forecast' | 'history_unknown';
 
 /** The computed due point of one task. Dates are ISO local dates (yyyy-mm-dd). */
@@ -105,6 +112,11 @@ export interface DuePoint {
    * 'assumed' otherwise
    */
   basis: 'recorded' | 'first_service' | 'assumed' | 'counted' | 'unknown';
+  /**
+   * when the projected range crosses an idle spell: the two outcomes (late this season, early
+   * next) and the likelier one; absent otherwise
+   */
+  outcomes?: DueOutcomes;
   /** season services only: the season start or end their date follows (dueDate is its date) */
   season?: DueSeason;
 }

@@ -30,6 +30,17 @@ export const duePointSchema = z
      */
     basis: z.enum(['recorded', 'first_service', 'assumed', 'counted', 'unknown']),
     /**
+     * when the projected range crosses an idle spell of the machine's season: the two outcomes
+     * (late this season, early next; ISO dates) and the likelier one
+     */
+    outcomes: z
+      .object({
+        thisSeason: z.object({ from: z.string(), to: z.string() }),
+        nextSeason: z.object({ from: z.string(), to: z.string() }),
+        likelier: z.enum(['this_season', 'next_season']),
+      })
+      .optional(),
+    /**
      * season services only: the season start ('before_start') or end ('after_end') the due date
      * follows, offsetDays before or after it; seasonDate null when the machine has no season months
      */

@@ -1,5 +1,6 @@
 import {
   dueRangeText as rangeWords,
+  dueSpreadText as spreadWords,
   fallsDueText as fallsDueWords,
   fittedMeterText as fittedMeterWords,
   overText as overWords,
@@ -42,6 +43,11 @@ export const dueDateText = formatLocalDate;
 /** "22 Dec – 29 Dec 2026": the projected range (ISO local dates), null without one. */
 export const dueRangeText = (low: string | null, high: string | null): string | null =>
   rangeWords(low, high, formatLocalDate);
+
+/** "range 22 – 29 Dec" or the two outcomes across an idle spell ("late this season … or early next …"). */
+export const dueSpreadText = (
+  due: Pick<DuePoint, 'projectedLow' | 'projectedHigh' | 'outcomes'>,
+): string | null => spreadWords(due, formatLocalDate);
 
 /** "234 h (1,956.3 h lifetime)": a value on the meter fitted now, lifetime in brackets. */
 export const fittedMeterText = (onMeter: number, lifetime: number, unit: string): string =>

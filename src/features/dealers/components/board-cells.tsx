@@ -1,5 +1,5 @@
 import { Icon } from '../../../components/ui/icons';
-import { dueDateText, dueRangeText, overText } from '../../../lib/due-format';
+import { dueDateText, dueSpreadText, overText } from '../../../lib/due-format';
 import type { BoardRow } from '../api/types';
 import { isStaleReading, meterText, readingAgeText } from './dealer-format';
 
@@ -34,12 +34,12 @@ export function Projected({ row }: { row: BoardRow }) {
         <span className="text-sm">{overText(row.due, row.machine.meterUnit)}</span>
       </span>
     );
-  const range = dueRangeText(row.due.projectedLow, row.due.projectedHigh);
+  const range = dueSpreadText(row.due);
   if (!row.due.effectiveDate && !range) return <span className="text-field-600">No forecast</span>;
   return (
     <span className="flex flex-col">
       {row.due.effectiveDate ? <span>{dueDateText(row.due.effectiveDate)}</span> : null}
-      {range ? <span className="text-sm text-field-600">range {range}</span> : null}
+      {range ? <span className="text-sm text-field-600">{range}</span> : null}
     </span>
   );
 }

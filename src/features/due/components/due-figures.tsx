@@ -1,6 +1,6 @@
 import {
   dueDateText,
-  dueRangeText,
+  dueSpreadText,
   remainingDaysText,
   remainingMeterText,
   seasonDueText,
@@ -59,7 +59,7 @@ export function DueAtFigure({ row }: { row: DueRow }) {
 
 /** The date the meter is projected to reach its due value, with the slower–faster range. */
 export function ProjectedFigure({ row }: { row: DueRow }) {
-  const { projectedDate, projectedLow, projectedHigh, status, dueMeter } = row.due;
+  const { projectedDate, status, dueMeter } = row.due;
   if (status === 'no_forecast') return <span className={muted}>Not enough readings</span>;
   if (status === 'history_unknown') return <span className={muted}>—</span>;
   if (!projectedDate)
@@ -68,11 +68,11 @@ export function ProjectedFigure({ row }: { row: DueRow }) {
         {dueMeter === null ? 'Calendar only' : status === 'overdue' ? 'Already reached' : '—'}
       </span>
     );
-  const range = dueRangeText(projectedLow, projectedHigh);
+  const range = dueSpreadText(row.due);
   return (
     <div className="flex flex-col">
       <span>{dueDateText(projectedDate)}</span>
-      {range ? <span className={muted}>range {range}</span> : null}
+      {range ? <span className={muted}>{range}</span> : null}
     </div>
   );
 }

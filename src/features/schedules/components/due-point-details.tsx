@@ -1,6 +1,6 @@
 import type { DuePoint } from '../../../../shared/domain/types';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
-import { fittedMeterText, seasonDueText } from '../../../lib/due-format';
+import { dueSpreadText, fittedMeterText, seasonDueText } from '../../../lib/due-format';
 import { describeRemaining } from '../lib/task-text';
 
 const GOVERNS: Record<'meter' | 'calendar', string> = {
@@ -42,10 +42,12 @@ export function DuePointDetails({
   if (due.dueDate !== null) rows.push({ term: 'Due date', detail: formatLocalDate(due.dueDate) });
   if (due.season) rows.push({ term: 'Season service', detail: seasonDueText(due.season) });
   if (due.projectedDate !== null) {
-    const range =
-      due.projectedLow && due.projectedHigh
-        ? ` (${formatLocalDate(due.projectedLow)} – ${formatLocalDate(due.projectedHigh)})`
-        : '';
+    const spread = due.outcomes
+      ? dueSpreadText(due)
+      : due.projectedLow && due.projectedHigh
+        ? `${formatLocalDate(due.projectedLow)} – ${formatLocalDate(due.projectedHigh)}`
+        : null;
+    const range = spread ? ` (${spread})` : '';
     rows.push({
       term: 'Meter reaches it',
       detail: `about ${formatLocalDate(due.projectedDate)}${range}`,
