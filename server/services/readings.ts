@@ -5,7 +5,7 @@ import { checkReading, toLifetimeValue } from '../../shared/domain';
 import type { ReadingSource } from '../../shared/constants';
 import type { OrgAccess } from '../policies/context';
 import { directQuery } from '../db-direct';
-import { lockMachineReadings, timeFormatter, writeContext } from './reading-neighbours';
+import { lockMachinesReadings, timeFormatter, writeContexts } from './reading-neighbours';
 import { storeNewReadings, type MachineContext } from './reading-store';
 import { recomputeImplements } from './hitch-readings';
 
@@ -41,8 +41,22 @@ export async function writeReadings(
   options: PlanOptions = {},
 ): Promise<ReadingOutcome[]> {
   const plan = await planReadings(access, items, transaction, options);
-  const { outcomes, errors, toInsert } = plan;
-  if (Object.keys(errors).length) throw invalid(errors);
+  if (Object.keys(plan.errors).length) throw invalid(plan.errors);
+  return storePlannedReadings(access, plan, transaction);
+}
+
+/**
+ * Writes what planReadings accepted (its toInsert), with the summaries, forecasts and hitched
+ * implements that follow; the outcomes of the plan's items, in their order. A plan's refused
+ * items are left out: every accepted reading was checked against accepted ones only.
+ */
+export async function storePlannedReadings(
+  access: OrgAccess,
+  plan: ReadingPlan,
+  transaction: Transaction,
+): Promise<ReadingOutcome[]> {
+  const { toInsert } = plan;
+  const outcomes = [...plan.outcomes];
   const rows = await storeNewReadings(
     access,
     toInsert.map(({ item, lifetime }) => ({
@@ -91,7 +105,7 @@ interface Point {
 
 const pointOrder = (a: Point, b: Point) => a.takenAtMs - b.takenAtMs || a.lifetime - b.lifetime;
 
-interface PlanOptions {
+export interface PlanOptions {
   fieldPrefix?: (index: number) => string;
   now?: Date;
   /** the caller holds every machine's row lock already (loadMachine with `lock`) */
@@ -121,23 +135,26 @@ export async function planReadings(
   const toInsert: { item: NewReading; index: number; lifetime: number }[] = [];
   const contexts = new Map<string, MachineContext>();
   const hitched = new Set<string>();
-  const locked = new Set<string>();
-  for (const group of byMeter) {
-    const machine = group[0].item.machine;
-    if (!options.locked && !locked.has(machine.id)) {
-      await lockMachineReadings(machine.id, transaction);
-      locked.add(machine.id);
-    }
-    const sorted = [...group].sort((a, b) => a.item.takenAt.getTime() - b.item.takenAt.getTime());
-    const context = await writeContext(
-      machine,
-      group[0].item.meterId,
-      sorted[0].item.takenAt.getTime(),
-      sorted.at(-1)!.item.takenAt.getTime(),
-      transaction,
-    );
+  if (!options.locked)
+    await lockMachinesReadings([...new Set(items.map((i) => i.machine.id))], transaction);
+  const sortedGroups = byMeter.map((group) =>
+    [...group].sort((a, b) => a.item.takenAt.getTime() - b.item.takenAt.getTime()),
+  );
+  // every meter's context in one statement, however many machines the batch names
+  const loaded = await writeContexts(
+    sortedGroups.map((sorted) => ({
+      machine: sorted[0].item.machine,
+      meterId: sorted[0].item.meterId,
+      fromMs: sorted[0].item.takenAt.getTime(),
+      toMs: sorted.at(-1)!.item.takenAt.getTime(),
+    })),
+    transaction,
+  );
+  for (const [g, sorted] of sortedGroups.entries()) {
+    const machine = sorted[0].item.machine;
+    const context = loaded[g];
     if (!context) {
-      for (const { index } of group) errors[`${prefix(index)}meterId`] = NO_SUCH_METER;
+      for (const { index } of sorted) errors[`${prefix(index)}meterId`] = NO_SUCH_METER;
       continue;
     }
     const { replacements, meter } = context;
@@ -191,6 +208,9 @@ export async function planReadings(
   }
   return { outcomes, errors, toInsert, contexts, hitched };
 }
+
+/** What planReadings found: outcomes of repeats, broken rules, and what to write. */
+export type ReadingPlan = Awaited<ReturnType<typeof planReadings>>;
 
 /** The refusal of a meter id that is not one of the machine's meters. */
 export const NO_SUCH_METER = 'No such meter on this machine';

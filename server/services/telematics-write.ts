@@ -1,12 +1,11 @@
 // Readings that arrive with an organization API key, written through the same rules as any other
-// (writeReadings), one answer per reading: recorded, already there (an identical resend adds
+// (planReadings, storePlannedReadings of readings.ts), one answer per reading: recorded, already there (an identical resend adds
 // nothing), or refused with the rule's reason — a refused reading does not hold back the rest.
 import type { Transaction } from 'sequelize';
-import { AppError } from '../errors';
 import type { Machine } from '../models';
 import type { KeyContext, MemberAccess } from '../policies/context';
 import { apiKeySource } from '../../shared/domain/telematics-source';
-import { writeReadings } from './readings';
+import { planReadings, storePlannedReadings } from './readings';
 
 export interface TelematicsReading {
   machine: Machine;
@@ -33,10 +32,12 @@ export const keyWriter = (key: KeyContext): MemberAccess => ({
 });
 
 /**
- * Writes the readings in the caller's transaction, whose machines it has locked (FOR UPDATE).
- * writeReadings refuses a batch with any broken rule and writes nothing; the refused readings
- * are then set aside with their reasons and the rest is sent again (a refusal can only shrink
- * the batch, so this ends).
+ * Writes the readings in the caller's transaction, whose machines it has locked (FOR UPDATE),
+ * set-based however many machines they are on: one plan of them all (planReadings: every meter's
+ * context in one statement, the same rules as any reading), the refused ones set aside with their
+ * reasons, and the rest written with their summaries and forecasts in one statement
+ * (storePlannedReadings). A refused reading does not hold back the rest, and leaving it out
+ * changes no other outcome: each reading is checked against the accepted ones only.
  */
 export async function recordTelematicsReadings(
   key: KeyContext,
@@ -44,39 +45,29 @@ export async function recordTelematicsReadings(
   transaction: Transaction,
 ): Promise<TelematicsOutcome[]> {
   const outcomes: TelematicsOutcome[] = items.map(() => ({ status: 'refused', reason: '' }));
+  if (!items.length) return outcomes;
   const importKey = apiKeySource(key.keyPrefix, key.keyName);
-  let pending = items.map((_, i) => i);
-  while (pending.length) {
-    try {
-      const written = await writeReadings(
-        keyWriter(key),
-        pending.map((i) => ({ ...items[i], source: 'telematics' as const, importKey })),
-        transaction,
-        { locked: true, fieldPrefix: (j) => `${j}.` },
-      );
-      for (const o of written)
-        outcomes[pending[o.index]] = {
-          status: o.status === 'added' ? 'recorded' : 'already_there',
-        };
-      break;
-    } catch (err) {
-      const refused = refusedOf(err, pending.length);
-      if (!refused) throw err;
-      for (const [j, reason] of refused) outcomes[pending[j]] = { status: 'refused', reason };
-      pending = pending.filter((_, j) => !refused.has(j));
-    }
-  }
+  const access = keyWriter(key);
+  const plan = await planReadings(
+    access,
+    items.map((item) => ({ ...item, source: 'telematics' as const, importKey })),
+    transaction,
+    { locked: true, fieldPrefix: (j) => `${j}.` },
+  );
+  for (const [place, reason] of refusalsOf(plan.errors))
+    outcomes[place] = { status: 'refused', reason };
+  const written = await storePlannedReadings(access, plan, transaction);
+  for (const o of written)
+    outcomes[o.index] = { status: o.status === 'added' ? 'recorded' : 'already_there' };
   return outcomes;
 }
 
-/** The batch places a 422 of writeReadings names (`<place>.<field>`), with their messages. */
-function refusedOf(err: unknown, count: number): Map<number, string> | null {
-  if (!(err instanceof AppError) || err.status !== 422 || !err.fields) return null;
+/** The refusals of a plan (fields `<place>.<field>`) by place, a place's messages joined. */
+function refusalsOf(errors: Record<string, string>): Map<number, string> {
   const refused = new Map<number, string>();
-  for (const [field, message] of Object.entries(err.fields)) {
+  for (const [field, message] of Object.entries(errors)) {
     const place = Number(field.split('.')[0]);
-    if (!Number.isInteger(place) || place < 0 || place >= count) return null;
     refused.set(place, refused.has(place) ? `${refused.get(place)}; ${message}` : message);
   }
-  return refused.size ? refused : null;
+  return refused;
 }
