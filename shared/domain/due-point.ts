@@ -77,6 +77,11 @@ export function projectDateForValue(
   return isoFromDayNumber(Math.max(day, asOfDay));
 }
 
+/** An estimate under which the meter never moves: rate, range and season profile all zero. */
+function notMoving(usage: UsageEstimate): boolean {
+  return !(usage.rate > 0 || usage.high > 0 || (usage.profile ?? []).some((u) => u > 0));
+}
+
 interface MeterDue {
   value: number;
   basis: DuePoint['basis'];
@@ -243,8 +248,11 @@ export function computeDuePoint(
   } else if (
     dueDate === null &&
     !meterReached &&
-    (dueMeter === null || current === null || usage.method === 'none')
+    (dueMeter === null || current === null || usage.method === 'none' || notMoving(usage))
   ) {
+    // nothing dates it: too few readings, or a meter that is not moving (an idle machine with
+    // no past season to say when it works again) — "no forecast", never "ok" without a date;
+    // a date more than three years off is "ok" (not in sight), not this
     status = 'no_forecast';
   } else {
     status = 'ok';

@@ -115,7 +115,7 @@ describe('due point — meter', () => {
     expect(computeDuePoint(t, none, asOf, null).status).toBe('no_forecast');
   });
 
-  it('due point — meter-only task, idle machine (rate 0) — ok, no projected date', () => {
+  it('due point — meter-only task, idle machine (rate 0) — no forecast: nothing dates it, not "ok"', () => {
     const due = computeDuePoint(
       task({ intervalMeter: 250, lastDoneMeter: 1000 }),
       steady(asOf, 1100, 0),
@@ -123,7 +123,7 @@ describe('due point — meter', () => {
       1100,
     );
     expect(due.projectedDate).toBeNull();
-    expect(due.status).toBe('ok');
+    expect(due.status).toBe('no_forecast');
   });
 
   it('due point — 0.05 h/day with 200 h left (11 years) — no projected date beyond 3 years', () => {

@@ -60,7 +60,14 @@ export function DueAtFigure({ row }: { row: DueRow }) {
 /** The date the meter is projected to reach its due value, with the slower–faster range. */
 export function ProjectedFigure({ row }: { row: DueRow }) {
   const { projectedDate, status, dueMeter } = row.due;
-  if (status === 'no_forecast') return <span className={muted}>Not enough readings</span>;
+  if (status === 'no_forecast')
+    return (
+      <span className={muted}>
+        {row.usage && row.usage.method !== 'none'
+          ? 'Meter not moving: no date'
+          : 'Not enough readings'}
+      </span>
+    );
   if (status === 'history_unknown') return <span className={muted}>—</span>;
   if (!projectedDate)
     return (
