@@ -2,8 +2,13 @@ import { QueryTypes } from 'sequelize';
 import { sequelize } from '../db';
 import type { OrgAccess } from '../policies/access';
 import { hasRole } from '../policies/access';
-import { addDaysIso, todayIso } from '../../shared/domain';
-import { STALE_READING_DAYS } from '../../shared/constants';
+import {
+  addDaysIso,
+  isStaleMeter,
+  STALE_MIN_DAYS,
+  todayIso,
+  unrecordedUse,
+} from '../../shared/domain';
 import type { DueQuery } from '../../shared/schemas/readings';
 import type { DueRow } from '../../shared/schemas/due';
 import { bringDuePointsCurrent, readCurrent } from './due-freshness';
@@ -127,38 +132,70 @@ export async function dueList(
   return { asOf, rows, counts, machines, total, stale };
 }
 
-/** The SQL of the stale-meter list (replacements :org, :user, :month, :cutoff). */
+/**
+ * The SQL of the stale-meter candidates (replacements :org, :user, :month, :cutoff): machines not
+ * sold whose primary meter was last read before :cutoff (STALE_MIN_DAYS ago) or never, with its
+ * pace, its tasks' shortest meter interval and whether :month is in its season.
+ */
 export const staleSql = (operator: boolean) =>
-  `SELECT m.id, m.fleet_number, m.name, f.last_taken_at
+  `SELECT m.id, m.fleet_number, m.name, f.last_taken_at,
+          CASE WHEN f.usage->>'method' IN ('trend', 'season') THEN (f.usage->>'rate')::float8 END AS rate,
+          (SELECT min(t.interval_meter)::float8 FROM service_tasks t
+            WHERE t.organization_id = m.organization_id AND t.meter_id = pm.id) AS shortest,
+          (cardinality(m.season_months) = 0 OR :month = ANY(m.season_months)) AS in_season,
+          pm.unit
      FROM machines m ${PRIMARY_FORECAST_JOIN}
      WHERE m.organization_id = :org AND m.status <> 'sold'
-       AND (cardinality(m.season_months) = 0 OR :month = ANY(m.season_months))
        AND (f.last_taken_at IS NULL OR f.last_taken_at < :cutoff)
        ${operator ? `AND ${visibleToOperator()}` : ''}
      ORDER BY f.last_taken_at ASC NULLS FIRST`;
 
-/** Machines in season (or with no season set) with no reading for STALE_READING_DAYS local days. */
+/**
+ * Machines whose meter is stale (shared/domain/staleness.ts): the use that may have gone
+ * unrecorded at their current pace is 5 % of their shortest meter interval or more, or, in
+ * season, no reading for 60 days; never within two days of a reading.
+ */
 export async function staleMachines(access: OrgAccess, asOf: string, now = new Date()) {
   const month = Number(asOf.slice(5, 7));
+  const timeZone = access.organization.timeZone;
   const rows = await sequelize.query<{
     id: string;
     fleet_number: string;
     name: string;
     last_taken_at: Date | null;
+    rate: number | null;
+    shortest: number | null;
+    in_season: boolean;
+    unit: string;
   }>(staleSql(hasRole(access, 'operator')), {
     replacements: {
       org: access.organization.id,
       user: access.userId,
       month,
-      cutoff: staleCutoff(access.organization.timeZone, now, STALE_READING_DAYS),
+      cutoff: staleCutoff(timeZone, now, STALE_MIN_DAYS),
     },
     type: QueryTypes.SELECT,
   });
-  return rows.map((r) => ({
-    machine: { id: r.id, fleetNumber: r.fleet_number, name: r.name },
-    lastReadingAt: r.last_taken_at ? new Date(r.last_taken_at).toISOString() : null,
-    daysSince: r.last_taken_at
-      ? localDaysSince(new Date(r.last_taken_at), access.organization.timeZone, now)
-      : null,
-  }));
+  return rows.flatMap((r) => {
+    const daysSince = r.last_taken_at
+      ? localDaysSince(new Date(r.last_taken_at), timeZone, now)
+      : null;
+    const input = {
+      daysSince,
+      ratePerDay: r.rate,
+      shortestInterval: r.shortest,
+      inSeason: r.in_season,
+    };
+    if (!isStaleMeter(input)) return [];
+    return [
+      {
+        machine: { id: r.id, fleetNumber: r.fleet_number, name: r.name },
+        lastReadingAt: r.last_taken_at ? new Date(r.last_taken_at).toISOString() : null,
+        daysSince,
+        unrecorded:
+          daysSince === null ? null : Math.round(unrecordedUse(daysSince, r.rate) * 10) / 10,
+        unit: r.unit,
+      },
+    ];
+  });
 }

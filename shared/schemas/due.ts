@@ -81,11 +81,18 @@ export const dueCountsSchema = z.object({
 });
 export type DueCounts = z.infer<typeof dueCountsSchema>;
 
-/** A machine in season whose meter has not been read for STALE_READING_DAYS or more. */
+/**
+ * A machine whose meter is stale: the use that may have gone unrecorded at its current pace
+ * matters (shared/domain/staleness.ts), or it has never been read in season.
+ */
 export const staleMeterSchema = z.object({
   machine: machineRefSchema.pick({ id: true, fleetNumber: true, name: true }),
   lastReadingAt: z.string().nullable(),
   daysSince: z.number().nullable(),
+  /** use that may have gone unrecorded since the last reading at the current pace; null unread */
+  unrecorded: z.number().nullable(),
+  /** the meter's unit */
+  unit: z.string(),
 });
 export type StaleMeter = z.infer<typeof staleMeterSchema>;
 

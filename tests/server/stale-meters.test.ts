@@ -1,6 +1,12 @@
 import { beforeEach, describe, expect, it } from 'vitest';
 import { resetDatabase } from '../support/db';
-import { addReadings, createMachine, createMember, createOrganization } from '../support/factories';
+import {
+  addReadings,
+  createMachine,
+  createMember,
+  createOrganization,
+  createTask,
+} from '../support/factories';
 import { caughtMail, clearMail, setMailAccepting } from '../support/mail';
 import { localDaysSince, staleCutoff } from '../../server/services/stale-meters';
 import { staleMachines } from '../../server/services/due-list';
@@ -77,6 +83,35 @@ describe('stale meters — days since the last reading count the farm’s calend
       const mail = await caughtMail();
       expect(mail.map((m) => m.subject)).toEqual(['Log the hours of LATE · Yard loader']);
       expect(mail[0].text).toContain('no hour-meter reading for 14 days');
+    });
+
+    it('due list — by hours at risk: a combine at 10 h/day unread 3 days is stale (≈ 30 h); a tractor at 0.5 h/day unread 20 days is not (10 h < 12.5 h)', async () => {
+      // Both have a 250 h task: 5 % of it, 12.5 h, is what may go unrecorded (staleness.ts).
+      const org = await createOrganization({ timeZone: 'UTC' });
+      const { user } = await createMember(org, 'manager');
+      const busy = await createMachine(org, { fleetNumber: 'BUSY' });
+      const slow = await createMachine(org, { fleetNumber: 'SLOW' });
+      await createTask(busy);
+      await createTask(slow);
+      await addReadings(
+        busy,
+        Array.from({ length: 28 }, (_, i) => ({ daysAgo: 30 - i, value: 1000 + 10 * i })),
+      );
+      await addReadings(
+        slow,
+        Array.from({ length: 15 }, (_, i) => ({ daysAgo: 118 - 7 * i, value: 500 + 3.5 * i })),
+      );
+      const access = {
+        organization: org,
+        userId: user.id,
+        role: 'manager' as const,
+        via: 'member' as const,
+      };
+      const stale = await staleMachines(access, new Date().toISOString().slice(0, 10));
+      expect(stale.map((s) => s.machine.fleetNumber)).toEqual(['BUSY']);
+      expect(stale[0].unrecorded).toBeGreaterThan(25);
+      expect(stale[0].unrecorded).toBeLessThan(35);
+      expect(stale[0].unit).toBe('h');
     });
   });
 });

@@ -1,5 +1,5 @@
 import { Link } from 'react-router-dom';
-import { STALE_READING_DAYS } from '../../../../shared/constants';
+import { formatMeter } from '../../../lib/fleet-format';
 import { buttonClasses } from '../../../components/ui/button';
 import { Section } from '../../../components/ui/card';
 import { Icon } from '../../../components/ui/icons';
@@ -13,19 +13,19 @@ interface StaleMetersProps {
 }
 
 /**
- * Machines in season whose meter has not been read for two weeks: their forecasts are going
- * stale, so the due dates above are less sure than they look.
+ * Machines whose meter is stale — the hours that may have gone unrecorded at their pace matter —
+ * so the due dates above are less sure than they look.
  */
 export function StaleMeters({ stale, machineHref, logHoursHref }: StaleMetersProps) {
   return (
     <Section
       title="Stale meters"
-      description={`Machines in season with no reading for ${STALE_READING_DAYS} days or more. Their forecasts drift until the meter is read again.`}
+      description="Machines whose hours may have gone unrecorded: at their pace since the last reading, enough to matter for their shortest service interval (a busy combine after two days, a tractor in winter after weeks). Their forecasts drift until the meter is read again."
     >
       {stale.length === 0 ? (
         <p className="flex items-center gap-2 rounded-xl border border-field-200 bg-white p-4 text-field-700">
           <Icon name="check" className="size-5 text-clover-700" />
-          Every machine in season has a reading from the last {STALE_READING_DAYS} days.
+          Every machine's meter is read recently enough for its pace.
         </p>
       ) : (
         <ul className="divide-y divide-field-100 rounded-xl border border-straw-300 bg-white">
@@ -47,6 +47,9 @@ export function StaleMeters({ stale, machineHref, logHoursHref }: StaleMetersPro
                   {item.daysSince === null
                     ? 'No reading yet'
                     : `No reading for ${item.daysSince} ${item.daysSince === 1 ? 'day' : 'days'}`}
+                  {item.unrecorded
+                    ? ` · about ${formatMeter(item.unrecorded, item.unit)} unrecorded`
+                    : ''}
                 </p>
               </div>
               {logHoursHref ? (
