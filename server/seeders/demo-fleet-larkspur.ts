@@ -133,6 +133,26 @@ export const LARKSPUR_MACHINES: DemoMachine[] = [
     operators: ['sam@larkspur.example'],
   },
   {
+    // No hour counter: its hours come from the hitch log, T-02's PTO hours while it is on T-02
+    // (DEMO_HITCHES, demo-hitch.ts); aboutNow and perYear are about what that log comes to.
+    organization: 'larkspur',
+    fleetNumber: 'RC-01',
+    machineClass: 'implement',
+    name: 'Brindle rotary cutter',
+    category: 'implement',
+    make: 'Brindle',
+    model: 'RC 15 flex-wing (no hour counter)',
+    serialNumber: 'BRN-RC15-20-1187',
+    year: 2020,
+    listPrice: 31500,
+    purchasePrice: 28700,
+    meterUnit: 'h',
+    aboutNow: 70,
+    perYear: 35,
+    season: { months: [5, 6, 7, 8, 9, 10, 11], peakMonths: [10, 11], useShare: 0.2 },
+    operators: ['lena@larkspur.example'],
+  },
+  {
     organization: 'larkspur',
     fleetNumber: 'TR-01',
     machineClass: 'grain_truck',

@@ -1,10 +1,14 @@
-// Writes the demo's machines with their operators, generated readings and the one meter
-// replacement (whose date goes into that machine's notes).
+// Writes the demo's machines with their operators, generated readings, the one meter
+// replacement (whose date goes into that machine's notes) and the one counter reset, then the
+// meters beside the primary ones and the hitch log (demo-meter-writes.ts).
 import type { Transaction } from 'sequelize';
 import { Machine, MachineOperator, MeterReading, MeterReplacement } from '../models';
 import { todayIso } from '../../shared/domain';
 import { buildMachineReadings, type MachineReadings } from './demo-readings';
 import { DEMO_MACHINES, METER_REPLACEMENT } from './demo-fleet';
+import { DEMO_HITCHES } from './demo-hitch';
+import { COUNTER_RESET } from './demo-meters';
+import { buildHitchesAndMeters, writeHitchesAndMeters } from './demo-meter-writes';
 import {
   demoMachineId as machineId,
   demoOrganization as orgOf,
@@ -24,7 +28,9 @@ export async function inChunks<T>(rows: T[], write: (chunk: T[]) => Promise<unkn
 export async function writeMachines(today: Date, transaction: Transaction) {
   // Readings first: the T-03 meter replacement goes into that machine's notes.
   const history = new Map<string, MachineReadings>();
+  const onHitchLog = new Set(DEMO_HITCHES.map((h) => h.implement));
   for (const m of DEMO_MACHINES) {
+    if (onHitchLog.has(m.fleetNumber)) continue;
     const operators = (m.operators ?? []).map(userId);
     history.set(
       m.fleetNumber,
@@ -35,9 +41,12 @@ export async function writeMachines(today: Date, transaction: Transaction) {
         technician: staff(m.organization, 'technician')[0] ?? null,
         replaceDaysAgo:
           m.fleetNumber === METER_REPLACEMENT.fleetNumber ? METER_REPLACEMENT.daysAgo : undefined,
+        reset: m.fleetNumber === COUNTER_RESET.fleetNumber ? COUNTER_RESET : undefined,
       }),
     );
   }
+  // the implements on the hitch log take their readings from their tractors' extra meters
+  const extras = buildHitchesAndMeters(history, today);
 
   await Machine.bulkCreate(
     DEMO_MACHINES.map((m) => {
@@ -59,9 +68,10 @@ export async function writeMachines(today: Date, transaction: Transaction) {
         meterUnit: m.meterUnit,
         seasonMonths: m.season.months,
         photoKey: null,
-        notes: replacement
-          ? `Hour meter replaced ${todayIso(orgOf(m.organization).timeZone, replacement.replacedAt)}: the old meter stopped at ${replacement.oldFinalValue.toLocaleString('en-US')} h, the new one started at 0 h.`
-          : '',
+        notes:
+          replacement?.kind === 'replacement'
+            ? `Hour meter replaced ${todayIso(orgOf(m.organization).timeZone, replacement.replacedAt)}: the old meter stopped at ${replacement.oldFinalValue.toLocaleString('en-US')} h, the new one started at 0 h.`
+            : '',
       };
     }),
     { transaction },
@@ -82,15 +92,29 @@ export async function writeMachines(today: Date, transaction: Transaction) {
     return r ? [{ organizationId: orgId(m.organization), machineId: machineId(m), ...r }] : [];
   });
   await MeterReplacement.bulkCreate(replacements, { transaction });
-  const readingRows = DEMO_MACHINES.flatMap((m) =>
-    history.get(m.fleetNumber)!.readings.map((r) => ({
-      organizationId: orgId(m.organization),
-      machineId: machineId(m),
-      importKey: null,
-      updatedAt: r.createdAt,
-      ...r,
-    })),
-  );
+  await writeHitchesAndMeters(extras, transaction);
+  // readings without a meter id go on the machine's primary meter (migration 0026's trigger)
+  const readingRows = [
+    ...DEMO_MACHINES.flatMap((m) =>
+      history.get(m.fleetNumber)!.readings.map((r) => ({
+        organizationId: orgId(m.organization),
+        machineId: machineId(m),
+        importKey: null,
+        updatedAt: r.createdAt,
+        ...r,
+      })),
+    ),
+    ...extras.readings.map(({ fleetNumber, ...r }) => {
+      const m = DEMO_MACHINES.find((x) => x.fleetNumber === fleetNumber)!;
+      return {
+        organizationId: orgId(m.organization),
+        machineId: machineId(m),
+        importKey: null,
+        updatedAt: r.createdAt,
+        ...r,
+      };
+    }),
+  ];
   await inChunks(readingRows, (chunk) =>
     MeterReading.bulkCreate(chunk, { transaction, returning: false }),
   );

@@ -1,6 +1,6 @@
-// The demo's meter readings per machine: the generated history, who typed each one in, and the
-// one hour-meter replacement (T-03), after which the meter shows new-meter values while the
-// lifetime value runs on.
+// The demo's meter readings per machine: the generated history, who typed each one in, the one
+// hour-meter replacement (T-03) and the one bale-counter reset (B-01), after which the meter
+// shows values from 0 again while the lifetime value runs on.
 import type { ReadingSource } from '../../shared/constants';
 import { generateReadings } from './readings-generator';
 import type { DemoMachine } from './demo-machine';
@@ -20,6 +20,8 @@ export interface DemoReading {
 }
 
 export interface DemoReplacement {
+  /** a new meter fitted, or the same counter zeroed */
+  kind: 'replacement' | 'reset';
   replacedAt: Date;
   oldFinalValue: number;
   newStartValue: number;
@@ -46,6 +48,8 @@ export function buildMachineReadings(
     enteredBy: string[];
     technician: string | null;
     replaceDaysAgo?: number;
+    /** days ago the counter was zeroed (a reset, recorded like a replacement) */
+    reset?: { daysAgo: number; note: string };
   },
 ): MachineReadings {
   const seed = seedFromString(`hourstone-demo/${machine.organization}/${machine.fleetNumber}`);
@@ -69,42 +73,43 @@ export function buildMachineReadings(
     source: 'manual',
     enteredBy: opts.enteredBy.length ? rng.pick(opts.enteredBy) : null,
   }));
+  if (opts.reset)
+    return replaceMeter(readings, opts.today.getTime() - opts.reset.daysAgo * MS_PER_DAY, {
+      kind: 'reset',
+      note: opts.reset.note,
+      enteredBy: opts.enteredBy.length ? rng.pick(opts.enteredBy) : null,
+    });
   if (opts.replaceDaysAgo === undefined) return { readings, replacement: null };
-  return replaceMeter(
-    readings,
-    opts.today.getTime() - opts.replaceDaysAgo * MS_PER_DAY,
-    opts.technician,
-  );
+  return replaceMeter(readings, opts.today.getTime() - opts.replaceDaysAgo * MS_PER_DAY, {
+    kind: 'replacement',
+    note: 'Hour meter stopped counting; new meter fitted, starting at 0 h.',
+    enteredBy: opts.technician,
+  });
 }
 
 /**
- * Fits a new meter (starting at 0) just after the last reading before `atMs`: the old meter's
- * final value is that reading's; later readings show value = lifetime − (old final − new start).
+ * Fits a new meter, or zeroes the counter (starting at 0), just after the last reading before
+ * `atMs`: the old count's final value is that reading's; later readings show value = lifetime −
+ * (old final − new start).
  */
 function replaceMeter(
   readings: DemoReading[],
   atMs: number,
-  technician: string | null,
+  change: Pick<DemoReplacement, 'kind' | 'note' | 'enteredBy'>,
 ): MachineReadings {
   const lastOld = readings.findLastIndex((r) => r.takenAt.getTime() <= atMs);
   if (lastOld < 0 || lastOld === readings.length - 1) return { readings, replacement: null };
   const failed = readings[lastOld];
   const replacedAt = new Date(failed.takenAt.getTime() + 45 * 60_000);
   const oldFinalValue = failed.lifetimeValue;
-  const replacement: DemoReplacement = {
-    replacedAt,
-    oldFinalValue,
-    newStartValue: 0,
-    note: 'Hour meter stopped counting; new meter fitted, starting at 0 h.',
-    enteredBy: technician,
-  };
+  const replacement: DemoReplacement = { ...change, replacedAt, oldFinalValue, newStartValue: 0 };
   const fitted: DemoReading = {
     value: 0,
     lifetimeValue: oldFinalValue,
     takenAt: replacedAt,
     createdAt: replacedAt,
     source: 'service',
-    enteredBy: technician,
+    enteredBy: change.enteredBy,
   };
   const after = readings.slice(lastOld + 1).map((r) => ({
     ...r,
