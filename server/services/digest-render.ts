@@ -2,6 +2,7 @@
 // lists, and its subject, plain text and HTML. digest.ts chooses the rows and queues the mail.
 import {
   dueSpreadText,
+  beforePeakText,
   fittedMeterText,
   overText,
   remainingDaysText,
@@ -59,6 +60,7 @@ export function taskFacts(row: DueRow): string[] {
     const spread = dueSpreadText(due, formatIsoDate);
     if (spread) projected += ` (${spread})`;
     facts.push(projected);
+    if (due.beforePeak) facts.push(beforePeakText(due.beforePeak, unit, formatIsoDate));
   }
   if (due.status === 'overdue') facts.push(`Overdue: ${overText(due, unit) ?? 'now'}`);
   else if (due.effectiveDate !== null) facts.push(`Falls due ${formatIsoDate(due.effectiveDate)}`);

@@ -4,6 +4,7 @@
 // A season service takes its date from the machine's season months (season-dates.ts) in place of
 // a day interval, and may keep a meter interval: whichever comes first.
 import { addDaysIso, dayNumberFromIso, daysBetweenIso, isoFromDayNumber } from './calendar';
+import { beforePeak } from './due-before-peak';
 import { dueOutcomes } from './due-outcomes';
 import { seasonServiceDue } from './season-dates';
 import type { DuePoint, DueSeason, DueStatus, TaskSchedule, UsageEstimate } from './types';
@@ -227,6 +228,10 @@ export function computeDuePoint(
     governs = 'meter';
     effectiveDate = projectedDate;
   }
+  const ahead =
+    governs === 'meter' && !meterReached && projectedDate !== null
+      ? beforePeak(usage, dueMeter, dayNumberFromIso(projectedDate), asOfDay)
+      : null;
 
   const warnMeter = defaultWarn(task.warnMeter, task.intervalMeter);
   const warnDays = season
@@ -271,6 +276,7 @@ export function computeDuePoint(
     remainingDays,
     basis: basisOf(task, meter),
     ...(outcomes && { outcomes }),
+    ...(ahead && { beforePeak: ahead }),
     ...(season && { season: season.season }),
   };
 }

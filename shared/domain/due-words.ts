@@ -3,7 +3,7 @@
 // forecast; each value is one computeDuePoint gave, only worded. The number and date formats are
 // parameters so the browser can use its language and the e-mails their own; the words are one.
 import type { SeasonAnchor } from './season-dates';
-import type { DuePoint, DueSeason } from './types';
+import type { BeforePeak, DuePoint, DueSeason } from './types';
 
 /** How a meter value reads with its unit ("1,943.6 h"); value in meter units. */
 export type MeterFormat = (value: number, unit: string) => string;
@@ -81,6 +81,19 @@ export function overText(
     remainingDays: due.remainingDays !== null && due.remainingDays < 0 ? due.remainingDays : null,
   };
   return remainingText(past, unit, meter) ?? remainingText(due, unit, meter);
+}
+
+/**
+ * "Do it before 25 Jul: 60 h early, avoids a stop in the busy season": the before-the-peak advice
+ * in words (meter units as the meter format says them).
+ */
+export function beforePeakText(
+  advice: BeforePeak,
+  unit: string,
+  date: DateFormat = englishDateText,
+  meter: MeterFormat = englishMeter,
+): string {
+  return `Do it before ${date(advice.doBy)}: ${meter(advice.earlyBy, unit)} early, avoids a stop in the busy season`;
 }
 
 /**

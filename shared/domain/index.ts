@@ -7,6 +7,7 @@ export * from './usage-trend';
 export * from './usage-season';
 export * from './due-point';
 export * from './due-outcomes';
+export * from './due-before-peak';
 export * from './staleness';
 export * from './season-dates';
 export * from './reading-rules';

@@ -82,6 +82,14 @@ export interface DueSeason {
   seasonDate: string | null;
 }
 
+/** Do a task before the busy season it would fall in: the last day before it, units early. */
+export interface BeforePeak {
+  /** ISO date: the last day before the busy season starts */
+  doBy: string;
+  /** how much of the interval is given up by doing it then, meter units */
+  earlyBy: number;
+}
+
 /** A projected range split by an idle spell: ISO dates of each side, and the likelier side. */
 export interface DueOutcomes {
   thisSeason: { from: string; to: string };
@@ -117,6 +125,8 @@ export interface DuePoint {
    * next) and the likelier one; absent otherwise
    */
   outcomes?: DueOutcomes;
+  /** when the task falls due inside a busy season that has not started: do it before (absent otherwise) */
+  beforePeak?: BeforePeak;
   /** season services only: the season start or end their date follows (dueDate is its date) */
   season?: DueSeason;
 }

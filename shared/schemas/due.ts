@@ -41,6 +41,11 @@ export const duePointSchema = z
       })
       .optional(),
     /**
+     * when the task falls due inside a busy season that has not started yet: the last day before
+     * it (ISO) and how much of the interval doing it then gives up (meter units)
+     */
+    beforePeak: z.object({ doBy: z.string(), earlyBy: z.number() }).optional(),
+    /**
      * season services only: the season start ('before_start') or end ('after_end') the due date
      * follows, offsetDays before or after it; seasonDate null when the machine has no season months
      */

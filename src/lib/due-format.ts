@@ -1,6 +1,8 @@
 import {
   dueRangeText as rangeWords,
   dueSpreadText as spreadWords,
+  beforePeakText as beforePeakWords,
+  type BeforePeak,
   fallsDueText as fallsDueWords,
   fittedMeterText as fittedMeterWords,
   overText as overWords,
@@ -48,6 +50,10 @@ export const dueRangeText = (low: string | null, high: string | null): string | 
 export const dueSpreadText = (
   due: Pick<DuePoint, 'projectedLow' | 'projectedHigh' | 'outcomes'>,
 ): string | null => spreadWords(due, formatLocalDate);
+
+/** "Do it before 20 Jul: 200 h early, avoids a stop in the busy season". */
+export const beforePeakText = (advice: BeforePeak, unit: string): string =>
+  beforePeakWords(advice, unit, formatLocalDate, formatMeter);
 
 /** "234 h (1,956.3 h lifetime)": a value on the meter fitted now, lifetime in brackets. */
 export const fittedMeterText = (onMeter: number, lifetime: number, unit: string): string =>

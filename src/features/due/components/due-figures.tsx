@@ -1,6 +1,7 @@
 import {
   dueDateText,
   dueSpreadText,
+  beforePeakText,
   remainingDaysText,
   remainingMeterText,
   seasonDueText,
@@ -80,6 +81,11 @@ export function ProjectedFigure({ row }: { row: DueRow }) {
     <div className="flex flex-col">
       <span>{dueDateText(projectedDate)}</span>
       {range ? <span className={muted}>{range}</span> : null}
+      {row.due.beforePeak ? (
+        <span className="text-sm font-bold text-straw-900">
+          {beforePeakText(row.due.beforePeak, row.machine.meterUnit)}
+        </span>
+      ) : null}
     </div>
   );
 }

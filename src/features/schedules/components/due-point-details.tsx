@@ -1,6 +1,11 @@
 import type { DuePoint } from '../../../../shared/domain/types';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
-import { dueSpreadText, fittedMeterText, seasonDueText } from '../../../lib/due-format';
+import {
+  beforePeakText,
+  dueSpreadText,
+  fittedMeterText,
+  seasonDueText,
+} from '../../../lib/due-format';
 import { describeRemaining } from '../lib/task-text';
 
 const GOVERNS: Record<'meter' | 'calendar', string> = {
@@ -55,6 +60,8 @@ export function DuePointDetails({
   } else if (due.dueMeter !== null) {
     rows.push({ term: 'Meter reaches it', detail: 'No projected date' });
   }
+  if (due.beforePeak)
+    rows.push({ term: 'Before the season', detail: beforePeakText(due.beforePeak, unit) });
   if (due.governs) rows.push({ term: 'Governs', detail: GOVERNS[due.governs] });
   if (remaining) rows.push({ term: 'Remaining', detail: remaining });
   const basis = BASIS[due.basis];
