@@ -4,7 +4,6 @@ import { Link, useParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { NotFound } from '../../components/errors/route-error';
 import { Section } from '../../components/ui/card';
 import { ErrorState } from '../../components/ui/error-state';
-import { buttonClasses } from '../../components/ui/button';
 import { Icon } from '../../components/ui/icons';
 import { PageHeader } from '../../components/ui/page-header';
 import { PageSkeleton } from '../../components/ui/skeleton';
@@ -15,9 +14,11 @@ import {
 import { HitchSection } from '../../features/hitch/components/hitch-section';
 import { machineQueryOptions, useMachine } from '../../features/machines/api/get-machine';
 import { useMachines } from '../../features/machines/api/get-machines';
+import { MachineLinks, MachinePageNav } from './machine-links';
 import { MachineDetails } from '../../features/machines/components/machine-details';
 import { MachineStatusPanel } from '../../features/machines/components/machine-status-panel';
 import { MeterSection } from '../../features/machines/components/meter-section';
+import { MetersPanel } from '../../features/machines/components/meters-panel';
 import { SpecSheetSection } from '../../features/machines/components/spec-sheet-section';
 import {
   machineReadingsQueryOptions,
@@ -36,6 +37,7 @@ import { MeasurementsSection } from '../../features/services/components/measurem
 import { ServiceActions, ServiceHistory } from '../../features/services/components/service-history';
 import { isApiError } from '../../lib/api-client';
 import { useCurrentMembership } from '../../lib/auth';
+import { machineMetersQueryOptions, useMachineMeters } from '../../lib/meters';
 import { paths } from '../paths';
 
 export const machineLoader =
@@ -47,21 +49,11 @@ export const machineLoader =
     void queryClient.prefetchQuery(machineQueryOptions(orgId, machineId));
     void queryClient.prefetchQuery(tasksQueryOptions(orgId, machineId));
     void queryClient.prefetchQuery(machineReadingsQueryOptions(orgId, machineId));
+    void queryClient.prefetchQuery(machineMetersQueryOptions(orgId, machineId));
     void queryClient.prefetchQuery(serviceHistoryQueryOptions(orgId, machineId));
     void queryClient.prefetchQuery(serviceEventsQueryOptions(orgId, machineId));
     return null;
   };
-
-const SECTIONS = [
-  { id: 'due', label: 'Due' },
-  { id: 'hitch', label: 'Hitch log' },
-  { id: 'history', label: 'History' },
-  { id: 'meter', label: 'Meter' },
-  { id: 'measurements', label: 'Measurements' },
-  { id: 'spec', label: 'Spec sheet' },
-  { id: 'readings', label: 'Readings' },
-  { id: 'details', label: 'Details' },
-] as const;
 
 const HITCH_CATEGORIES: string[] = [...HITCH_TRACTOR_CATEGORIES, ...HITCH_IMPLEMENT_CATEGORIES];
 const TRACTOR_FILTERS = {
@@ -82,10 +74,13 @@ export function MachinePage() {
   const machine = useMachine(orgId, machineId);
   const tasks = useTasks(orgId, machineId);
   const readings = useMachineReadings(orgId, machineId);
+  const meters = useMachineMeters(orgId, machineId);
   const dues = useMemo(
     () =>
       (tasks.data?.data ?? []).flatMap((task) =>
-        task.due?.dueMeter != null ? [{ taskName: task.name, dueMeter: task.due.dueMeter }] : [],
+        task.due?.dueMeter != null
+          ? [{ taskName: task.name, dueMeter: task.due.dueMeter, meterId: task.meterId }]
+          : [],
       ),
     [tasks.data],
   );
@@ -148,53 +143,8 @@ export function MachinePage() {
           defectsHref={membership.organization.kind === 'farm' ? defectsHref : undefined}
         />
 
-        <ul aria-label="For this machine" className="-mt-4 flex flex-wrap gap-2">
-          {detail.status === 'in_service' || (detail.status === 'tagged_out' && isShop) ? (
-            <li>
-              <Link
-                to={org.walkaround.href(
-                  orgId,
-                  detail.id,
-                  detail.status === 'tagged_out' ? 'inspection' : 'use',
-                )}
-                className={buttonClasses('secondary')}
-              >
-                <Icon name="check" />
-                {detail.status === 'tagged_out' ? 'Inspection walkaround' : 'Daily walkaround'}
-              </Link>
-            </li>
-          ) : null}
-          <li>
-            <Link
-              to={org.machineLabel.href(orgId, detail.id)}
-              className={buttonClasses('secondary')}
-            >
-              <Icon name="printer" />
-              Print label
-            </Link>
-          </li>
-          <li>
-            <Link to={defectsHref} className={buttonClasses('secondary')}>
-              <Icon name="alert" />
-              Defects
-            </Link>
-          </li>
-        </ul>
-
-        <nav aria-label="On this page" className="-mt-2">
-          <ul className="flex flex-wrap gap-2">
-            {SECTIONS.filter((s) => s.id !== 'hitch' || hitched).map((s) => (
-              <li key={s.id}>
-                <a
-                  href={`#${s.id}`}
-                  className="inline-flex min-h-touch items-center rounded-full border border-field-300 bg-white px-4 font-bold text-field-800 hover:bg-field-50"
-                >
-                  {s.label}
-                </a>
-              </li>
-            ))}
-          </ul>
-        </nav>
+        <MachineLinks orgId={orgId} machine={detail} isShop={isShop} defectsHref={defectsHref} />
+        <MachinePageNav hitched={hitched} />
 
         <div id="due" className="scroll-mt-20">
           <Section
@@ -246,9 +196,15 @@ export function MachinePage() {
         </div>
 
         <div id="meter" className="scroll-mt-20">
-          <Section title="Meter" description="Lifetime meter over time and the trend ahead.">
+          <Section
+            title="Meters"
+            description="The machine's meters, and each one's lifetime count over time with the trend ahead."
+          >
+            <MetersPanel orgId={orgId} machineId={detail.id} />
             <MeterSection
+              orgId={orgId}
               readings={readings}
+              meters={meters.data?.data}
               machine={detail}
               dues={dues}
               services={serviceEvents.data}

@@ -117,13 +117,23 @@ export function ReadingRow({
       {replacementBefore ? (
         <li className="flex items-start gap-2 bg-sky-50 p-3 text-sky-900">
           <Icon name="refresh" className="mt-0.5 size-5" />
-          <span>
-            <span className="font-bold">Meter replaced</span>{' '}
-            {formatDateTime(replacementBefore.replacedAt, timeZone)}: old meter ended at{' '}
-            {formatMeter(replacementBefore.oldFinalValue, unit)}, new meter started at{' '}
-            {formatMeter(replacementBefore.newStartValue, unit)}.
-            {replacementBefore.note ? ` ${replacementBefore.note}` : ''}
-          </span>
+          {replacementBefore.kind === 'reset' ? (
+            <span>
+              <span className="font-bold">Counter reset</span>{' '}
+              {formatDateTime(replacementBefore.replacedAt, timeZone)}: counted{' '}
+              {formatMeter(replacementBefore.oldFinalValue, unit)} before, started again at{' '}
+              {formatMeter(replacementBefore.newStartValue, unit)}; the lifetime count runs on.
+              {replacementBefore.note ? ` ${replacementBefore.note}` : ''}
+            </span>
+          ) : (
+            <span>
+              <span className="font-bold">Meter replaced</span>{' '}
+              {formatDateTime(replacementBefore.replacedAt, timeZone)}: old meter ended at{' '}
+              {formatMeter(replacementBefore.oldFinalValue, unit)}, new meter started at{' '}
+              {formatMeter(replacementBefore.newStartValue, unit)}.
+              {replacementBefore.note ? ` ${replacementBefore.note}` : ''}
+            </span>
+          )}
         </li>
       ) : null}
       <ConfirmDialog

@@ -1,4 +1,6 @@
 import { useState } from 'react';
+import type { UseQueryResult } from '@tanstack/react-query';
+import { ChoiceChips } from '../../../components/ui/choice-chips';
 import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
@@ -6,12 +8,22 @@ import { ErrorState } from '../../../components/ui/error-state';
 import { ListSkeleton } from '../../../components/ui/skeleton';
 import type { UnitSystem } from '../../../../shared/constants';
 import type { MachineAbilities, MachineDetail } from '../../../../shared/schemas/machines';
+import {
+  meterName,
+  useMachineMeters,
+  useMeterReadings,
+  type MachineMeterJson,
+} from '../../../lib/meters';
 import { useMachineReadings } from '../api/get-machine-readings';
+import type { ReadingHistory as History } from '../api/types';
 import { MeterReplacementForm } from './meter-replacement-form';
 import { ReadingForm } from './reading-form';
 import { ReadingHistory } from './reading-history';
 
-/** Log a reading, the history newest first, corrections and meter replacements. */
+/**
+ * Log a reading (on a chosen meter when the machine has several, or a counter reset), the history
+ * of each meter newest first, corrections and meter replacements.
+ */
 export function ReadingsSection({
   orgId,
   machine,
@@ -27,6 +39,10 @@ export function ReadingsSection({
   timeZone: string;
 }) {
   const readings = useMachineReadings(orgId, machine.id);
+  const meters = useMachineMeters(orgId, machine.id);
+  const meterList = meters.data?.data ?? [];
+  const [shownId, setShownId] = useState('');
+  const shown = meterList.find((m) => m.id === shownId && !m.isPrimary);
   const [replacing, setReplacing] = useState(false);
   const [notice, setNotice] = useState<string | null>(null);
   const latest = readings.data?.data[0] ?? null;
@@ -48,6 +64,7 @@ export function ReadingsSection({
             units={units}
             timeZone={timeZone}
             latest={latest}
+            meters={meterList}
           />
         </Card>
       ) : machine.status === 'sold' ? (
@@ -85,21 +102,28 @@ export function ReadingsSection({
       ) : null}
 
       <h3 className="text-lg font-black text-field-950">History</h3>
-      {readings.isPending ? (
-        <ListSkeleton rows={4} label="Loading readings" />
-      ) : readings.isError ? (
-        <ErrorState
-          title="The readings didn't load"
-          message={readings.error.message}
-          onRetry={() => readings.refetch()}
-          retrying={readings.isRefetching}
+      {meterList.length > 1 ? (
+        <ChoiceChips
+          legend="Readings of"
+          value={shown?.id ?? ''}
+          onChange={setShownId}
+          options={meterList.map((m) => ({ value: m.isPrimary ? '' : m.id, label: meterName(m) }))}
         />
-      ) : (
-        <ReadingHistory
+      ) : null}
+      {shown ? (
+        <OtherMeterHistory
           orgId={orgId}
           machineId={machine.id}
-          readings={readings.data.data}
-          replacements={readings.data.replacements}
+          meter={shown}
+          units={units}
+          timeZone={timeZone}
+          canCorrect={abilities.correctReading}
+        />
+      ) : (
+        <HistoryPart
+          orgId={orgId}
+          machineId={machine.id}
+          readings={readings}
           unit={machine.meterUnit}
           units={units}
           timeZone={timeZone}
@@ -107,5 +131,45 @@ export function ReadingsSection({
         />
       )}
     </div>
+  );
+}
+
+interface HistoryProps {
+  orgId: string;
+  machineId: string;
+  units: UnitSystem;
+  timeZone: string;
+  canCorrect: boolean;
+}
+
+/** A meter other than the primary: its readings, fetched when it is chosen. */
+function OtherMeterHistory({ meter, ...props }: HistoryProps & { meter: MachineMeterJson }) {
+  const readings = useMeterReadings(props.orgId, props.machineId, meter.id);
+  return <HistoryPart {...props} readings={readings} unit={meter.unit} />;
+}
+
+/** One meter's readings, newest first, or why they are not shown. */
+function HistoryPart({
+  readings,
+  unit,
+  ...props
+}: HistoryProps & { readings: UseQueryResult<History>; unit: string }) {
+  if (readings.isPending) return <ListSkeleton rows={4} label="Loading readings" />;
+  if (readings.isError)
+    return (
+      <ErrorState
+        title="The readings didn't load"
+        message={readings.error.message}
+        onRetry={() => readings.refetch()}
+        retrying={readings.isRefetching}
+      />
+    );
+  return (
+    <ReadingHistory
+      {...props}
+      readings={readings.data.data}
+      replacements={readings.data.replacements}
+      unit={unit}
+    />
   );
 }
