@@ -4,7 +4,8 @@
 // cut off at days spread over its last year; the forecast made from the readings before the cut
 // dates the day the meter reaches the last reading + R, for R = 5, 15, 30 and 60 % of a year's use;
 // that is compared with the day the simulated meter really got there. Printed for the season
-// method in use and, in the same run, a plain 90-day linear trend and the previous method (last
+// method in use — on the simulated fleet and on the demo fleet (accuracy-demo.ts) — and, in the
+// same run, a plain 90-day linear trend and the previous method (last
 // year's same weeks scaled by the last 28 days): median and 90th-percentile absolute error in days,
 // and the share of real dates inside the stated range.
 //   --fleets=N (default 4)   --per-kind=N machines of each kind per fleet (default 12)
@@ -25,6 +26,7 @@ import {
   trueDayOf,
   type FleetKind,
 } from './accuracy-fleet';
+import { demoBacktests, demoTruthDay, yearUseBefore } from './accuracy-demo';
 import { report } from './report';
 
 const arg = (name: string, fallback: number) =>
@@ -54,16 +56,49 @@ const dayOf = (u: UsageEstimate, target: number, asOf: number, v: 'point' | 'low
   return iso === null ? null : dayNumberFromIso(iso);
 };
 
+type Kind = FleetKind | 'demo';
 interface Outcome {
-  kind: FleetKind;
+  kind: Kind;
   error: number;
   /** whether the method gave a date (and so a range) */
   dated: boolean;
   inRange: boolean;
 }
 const outcomes: Record<Method, Outcome[]> = { season: [], trend: [], previous: [] };
-const t0 = performance.now();
+const SHARES = [0.05, 0.15, 0.3, 0.6];
 let cases = 0;
+
+/** Forecasts from the readings before `cut` against the truth, for each target share of a year. */
+function backtest(
+  kind: Kind,
+  points: ReadingPoint[],
+  cut: number,
+  months: number[],
+  yearUse: number,
+  truthOf: (target: number) => number | null,
+) {
+  if (points.length < 2 || !(yearUse > 0)) return;
+  const last = points[points.length - 1];
+  const usages = Object.fromEntries(
+    METHODS.map((k) => [k, estimate(k, points, cut, months)]),
+  ) as Record<Method, UsageEstimate>;
+  for (const share of SHARES) {
+    const target = last.value + share * yearUse;
+    const truth = truthOf(target);
+    if (truth === null || truth - cut > HORIZON) continue;
+    cases++;
+    for (const k of METHODS) {
+      const point = dayOf(usages[k], target, cut, 'point');
+      const low = dayOf(usages[k], target, cut, 'low');
+      const high = dayOf(usages[k], target, cut, 'high');
+      const error = point === null ? HORIZON : Math.min(HORIZON, Math.abs(point - truth));
+      const inRange = low !== null && low <= truth + 0.5 && (high === null || truth - 0.5 <= high);
+      outcomes[k].push({ kind, error, dated: point !== null, inRange });
+    }
+  }
+}
+
+const t0 = performance.now();
 for (let f = 0; f < FLEETS; f++) {
   for (const m of simulatedFleet(PER_KIND, 17 + f, START)) {
     const curve = lifetimeCurve(m);
@@ -73,27 +108,23 @@ for (let f = 0; f < FLEETS; f++) {
       const cut = START + 3 * 365 + Math.round(((c + ((m.id.length * 7 + f) % 6) / 6) * 365) / 6);
       if (m.kind === 'young') m.firstReadDay = cut - 200;
       const points = readingsBefore(m, curve, cut, cut * 31 + f);
-      if (points.length < 2) continue;
-      const last = points[points.length - 1];
-      const usages = Object.fromEntries(
-        METHODS.map((k) => [k, estimate(k, points, cut, m.seasonMonths)]),
-      ) as Record<Method, UsageEstimate>;
-      for (const share of [0.05, 0.15, 0.3, 0.6]) {
-        const target = last.value + share * yearUse;
-        const truth = trueDayOf(m, curve, cut, target);
-        if (truth === null || truth - cut > HORIZON) continue;
-        cases++;
-        for (const k of METHODS) {
-          const point = dayOf(usages[k], target, cut, 'point');
-          const low = dayOf(usages[k], target, cut, 'low');
-          const high = dayOf(usages[k], target, cut, 'high');
-          const error = point === null ? HORIZON : Math.min(HORIZON, Math.abs(point - truth));
-          const inRange =
-            low !== null && low <= truth + 0.5 && (high === null || truth - 0.5 <= high);
-          outcomes[k].push({ kind: m.kind, error, dated: point !== null, inRange });
-        }
-      }
+      backtest(m.kind, points, cut, m.seasonMonths, yearUse, (target) =>
+        trueDayOf(m, curve, cut, target),
+      );
     }
+  }
+}
+// the demo fleet: its machines' generated readings, cut at eight days over the year before their
+// last, so a year of truth follows each cut
+const TODAY = new Date('2026-11-30T12:00:00Z');
+for (const d of demoBacktests(TODAY)) {
+  const end = d.points[d.points.length - 1].day;
+  for (let c = 0; c < 8; c++) {
+    const cut = Math.floor(end - 730 + (c * 365) / 8);
+    const before = d.points.filter((p) => p.day < cut);
+    backtest('demo', before, cut, d.seasonMonths, yearUseBefore(d.points, cut), (target) =>
+      demoTruthDay(d.points, cut, target),
+    );
   }
 }
 
@@ -115,12 +146,12 @@ const summary = (list: Outcome[]) => ({
   dated: list.filter((o) => o.dated).length / Math.max(1, list.length),
 });
 console.log(
-  `${cases} cases (${FLEETS} fleets × ${PER_KIND} machines of each of ${FLEET_KINDS.length} kinds × 6 cut-offs × 4 targets) in ${((performance.now() - t0) / 1000).toFixed(1)} s`,
+  `${cases} cases (${FLEETS} simulated fleets × ${PER_KIND} machines of each of ${FLEET_KINDS.length} kinds × 6 cut-offs, and the demo fleet × 8 cut-offs; × 4 targets) in ${((performance.now() - t0) / 1000).toFixed(1)} s`,
 );
 console.log(
   'median / p90 error in days (no date counts as 400), real dates inside the stated range, cases dated, by kind:',
 );
-for (const kind of FLEET_KINDS) {
+for (const kind of [...FLEET_KINDS, 'demo' as const]) {
   const line = METHODS.map((k) => {
     const s = summary(outcomes[k].filter((o) => o.kind === kind));
     return `${k} ${s.median.toFixed(1)} / ${s.p90.toFixed(0)} d, ${(s.coverage * 100).toFixed(0)} % in range, ${(s.dated * 100).toFixed(0)} % dated`;
