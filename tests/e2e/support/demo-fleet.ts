@@ -82,6 +82,12 @@ export const OFFLINE_FLEET = ['OF-01', 'OF-02'] as const;
  */
 export const TELEMATICS_FLEET = 'TM-01';
 
+/**
+ * meters.e2e.ts adds these (issue 13): MT-01, a tractor that gets a PTO-hours meter, a reading
+ * and a task on it; MT-02, a baler of lena's whose bale counter she resets.
+ */
+export const METERS_FLEET = ['MT-01', 'MT-02'] as const;
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -100,6 +106,7 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   DAILY_CARE_FLEET,
   ...OFFLINE_FLEET,
   TELEMATICS_FLEET,
+  ...METERS_FLEET,
 ]);
 
 /** The signed-in person's Larkspur Flats Farm membership: its organization id and time zone. */
