@@ -113,7 +113,8 @@ describe('ISO/TS 15143-3 snapshot of a whole fleet, set-based', () => {
     const again = await ingestSnapshot(key, snapshot(MACHINES) as never);
     expect(again.counts).toMatchObject({ recorded: 0, alreadyThere: MACHINES - 1, refused: 1 });
     expect(await farmRows(batch.organization.id)).toEqual(rows);
-  });
+    // a time limit, not a timed assertion: 1,000 machines built and 500 posts one by one
+  }, 180_000);
 
   it('statements — a snapshot of 3 machines and one of 60 cost the same number', async () => {
     const farm = await twinFarm(60, NOW);
