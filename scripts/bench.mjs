@@ -5,6 +5,8 @@
 // baseline measured in the same run; the lines are also gathered in .data/bench/results.json.
 // HOURSTONE_TEST_SLOT=N (1-9) gives a run its own cluster (bench-N, port 54312 + 10·N) and
 // results folder (.data/bench-N), so runs sharing a checkout never drop each other's database.
+// The client part (`npm run bench:client`) builds the production client into the slot's folder
+// (dist, dist-test-N) and drives chromium (CHROMIUM_PATH, default /usr/bin/chromium).
 import { existsSync, mkdirSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';

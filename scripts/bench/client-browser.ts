@@ -110,30 +110,26 @@ export async function emptyCaches(session: CDPSession, origin: string) {
 }
 
 /**
- * Sends one command to every service worker of `origin` through the browser's session (a
- * page's session does not reach the worker, whose own fetches — the API answers it relays —
- * would then go out unthrottled). Returns how many workers took it.
+ * The origin's service workers, each attached through the browser's session and kept attached
+ * while throttled (a page's session does not reach the worker, whose own fetches — the API
+ * answers it relays — would go out unthrottled; and a target's emulation ends with the session
+ * that set it). Returns the attached sessions.
  */
-async function sendToWorkers(
-  bench: BenchBrowser,
-  origin: string,
-  method: string,
-  params: object,
-): Promise<number> {
+async function attachWorkers(bench: BenchBrowser, origin: string): Promise<string[]> {
   const { targetInfos } = await bench.cdp.send('Target.getTargets');
   const workers = targetInfos.filter(
     (t) => t.type === 'service_worker' && t.url.startsWith(origin),
   );
+  const sessions: string[] = [];
   for (const worker of workers) {
     const { sessionId } = await bench.cdp.send('Target.attachToTarget', {
       targetId: worker.targetId,
       flatten: false,
     });
+    sessions.push(sessionId);
     await workerCommand(bench.cdp, sessionId, 'Network.enable', {});
-    await workerCommand(bench.cdp, sessionId, method, params);
-    await bench.cdp.send('Target.detachFromTarget', { sessionId });
   }
-  return workers.length;
+  return sessions;
 }
 
 let nextId = 1;
@@ -160,6 +156,9 @@ function workerCommand(cdp: CDPSession, sessionId: string, method: string, param
   });
 }
 
+/** The worker sessions the phone profile is set on now (lifted and detached by the next call). */
+let throttledWorkers: string[] = [];
+
 /** Sets (or lifts) the phone profile on the page and on the origin's service workers. */
 export async function setThrottling(
   bench: BenchBrowser,
@@ -167,16 +166,19 @@ export async function setThrottling(
   origin: string,
   on: boolean,
 ): Promise<{ workers: number }> {
+  for (const sessionId of throttledWorkers) {
+    await workerCommand(bench.cdp, sessionId, 'Network.emulateNetworkConditions', UNTHROTTLED);
+    await bench.cdp.send('Target.detachFromTarget', { sessionId });
+  }
+  throttledWorkers = [];
   const conditions = on ? NETWORK_CONDITIONS : UNTHROTTLED;
   await session.send('Network.emulateNetworkConditions', conditions);
   await session.send('Emulation.setCPUThrottlingRate', { rate: on ? THROTTLE.cpuSlowdown : 1 });
-  const workers = await sendToWorkers(
-    bench,
-    origin,
-    'Network.emulateNetworkConditions',
-    conditions,
-  );
-  return { workers };
+  if (!on) return { workers: 0 };
+  throttledWorkers = await attachWorkers(bench, origin);
+  for (const sessionId of throttledWorkers)
+    await workerCommand(bench.cdp, sessionId, 'Network.emulateNetworkConditions', conditions);
+  return { workers: throttledWorkers.length };
 }
 
 export interface Visit {
@@ -185,6 +187,8 @@ export interface Visit {
   /** whether a service worker answered the navigation */
   controlled: boolean;
   consoleErrors: string[];
+  /** the page's own timings up to the due list: the document, then each file and API call */
+  timeline: string;
 }
 
 /**
@@ -216,12 +220,34 @@ export async function timedVisit(page: Page, url: string, label: string): Promis
       });
     const ms = Number(await handle.jsonValue());
     const controlled = await page.evaluate(() => Boolean(navigator.serviceWorker?.controller));
-    return { ms, controlled, consoleErrors };
+    const timeline = await pageTimeline(page, ms);
+    return { ms, controlled, consoleErrors, timeline };
   } finally {
     page.off('console', onConsole);
     page.off('pageerror', onError);
   }
 }
+
+/**
+ * The document, then each file and API call that started by `until` (ms): start–end; an API
+ * call without the organization's id, a file without its folder. (No named function inside:
+ * tsx's name helper would not exist in the page.)
+ */
+const pageTimeline = (page: Page, until: number) =>
+  page.evaluate((until) => {
+    const nav = performance.getEntriesByType('navigation')[0] as PerformanceNavigationTiming;
+    const calls = (performance.getEntriesByType('resource') as PerformanceResourceTiming[])
+      .filter((e) => e.startTime <= until)
+      .map((e) => {
+        const url = new URL(e.name);
+        const name = url.pathname
+          .replace(/^\/api\/v1\/organizations\/[^/]+/, '…')
+          .replace(/^\/assets\//, '');
+        return `${name}${url.search} ${e.startTime.toFixed(0)}–${e.responseEnd.toFixed(0)}`;
+      });
+    const head = `document –${nav.responseEnd.toFixed(0)}, DOM ready ${nav.domContentLoadedEventEnd.toFixed(0)}`;
+    return [head, ...calls].join('; ');
+  }, until);
 
 async function saveScreenshot(page: Page, label: string): Promise<string> {
   const dir = path.resolve(import.meta.dirname, '..', '..', '.screenshots');

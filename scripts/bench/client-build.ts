@@ -49,19 +49,38 @@ function staleReason(dist: string): string | undefined {
   return changed ? `${changed} changed since` : undefined;
 }
 
+/** How long to wait for another build of this checkout to finish (one builds at a time here). */
+const BUSY_WAIT_MS = 15_000;
+const BUSY_TRIES = 20;
+
+/** `vite build` with the manifest, production mode; waits its turn when another build runs. */
+function viteBuild(distName: string) {
+  const vite = path.join(projectRoot, 'node_modules', '.bin', 'vite');
+  for (let attempt = 1; ; attempt++) {
+    const built = spawnSync(vite, ['build', '--outDir', distName, '--emptyOutDir', '--manifest'], {
+      cwd: projectRoot,
+      env: { ...process.env, NODE_ENV: 'production' },
+      stdio: ['ignore', 'ignore', 'pipe'],
+      encoding: 'utf8',
+    });
+    if (built.status === 0) return;
+    const busy = /another Vite build process/i.test(built.stderr);
+    if (!busy || attempt === BUSY_TRIES) {
+      process.stderr.write(built.stderr);
+      throw new Error(`vite build failed (exit ${built.status})`);
+    }
+    console.log(`client: another vite build is running; trying again in ${BUSY_WAIT_MS / 1000} s`);
+    Atomics.wait(new Int32Array(new SharedArrayBuffer(4)), 0, 0, BUSY_WAIT_MS);
+  }
+}
+
 /** Builds the client into `distName` unless its production build is current; returns its path. */
 export function buildClient(distName: string): string {
   const dist = path.join(projectRoot, distName);
   const reason = staleReason(dist);
   if (reason) {
     console.log(`client: building ${distName} (${reason})`);
-    const vite = path.join(projectRoot, 'node_modules', '.bin', 'vite');
-    const built = spawnSync(vite, ['build', '--outDir', distName, '--emptyOutDir', '--manifest'], {
-      cwd: projectRoot,
-      env: { ...process.env, NODE_ENV: 'production' },
-      stdio: ['ignore', 'ignore', 'inherit'],
-    });
-    if (built.status !== 0) throw new Error(`vite build failed (exit ${built.status})`);
+    viteBuild(distName);
     writeFileSync(path.join(dist, MARK), `${new Date().toISOString()}\n`);
   } else {
     console.log(`client: ${distName} is a current production build`);

@@ -11,7 +11,9 @@
 //    files; the API still from the network) target ≤ 1 s;
 //  - baseline in the same run, same profile: a static page of a few hundred bytes served by the
 //    same server from the same folder, cold (cache emptied) and on a second visit.
-// Each time is the median of --runs=N visits (default 3).
+// Each time is the median of --runs=N visits (default 3); --timeline prints, for each visit, the
+// page's own timings up to the due list (the document, each file and API call: start–end in ms).
+import os from 'node:os';
 import { performance } from 'node:perf_hooks';
 import { loadDemo } from '../../server/seeders/demo';
 import { sequelize } from '../../server/db';
@@ -131,6 +133,9 @@ async function warmVisits(bench: BenchBrowser) {
   return { app, workers };
 }
 
+// The 2-core machine is shared: a busy one slows the 4× slowed CPU further, so say how busy.
+const load = () => os.loadavg()[0].toFixed(1);
+const loadBefore = load();
 try {
   const cold = await coldVisits(bench);
   const warm = await warmVisits(bench);
@@ -160,8 +165,15 @@ try {
       `warm ${warm.app.map((v) => v.ms.toFixed(0)).join(', ')} ms; ` +
       `static ${cold.baseline.map((v) => v.ms.toFixed(0)).join(', ')} / ` +
       `${cold.second.map((v) => v.ms.toFixed(0)).join(', ')} ms; ` +
-      `service workers throttled: ${warm.workers}`,
+      `service workers throttled: ${warm.workers}; load average ${loadBefore} → ${load()}`,
   );
+  if (process.argv.includes('--timeline')) {
+    for (const [what, visits] of [
+      ['cold', cold.app],
+      ['warm', warm.app],
+    ] as const)
+      for (const v of visits) console.log(`client: ${what} ${v.ms.toFixed(0)} ms: ${v.timeline}`);
+  }
   if (noted.size) console.log(`client: console errors on the visits: ${[...noted].join(' | ')}`);
 } finally {
   await bench.close();
