@@ -94,7 +94,7 @@ export const boardResponseSchema = z.object({
 });
 export type Board = z.infer<typeof boardResponseSchema>;
 
-const partLine = z.object({
+export const partLineSchema = z.object({
   partNumber: z.string(),
   description: z.string(),
   quantity: z.number(),
@@ -103,7 +103,7 @@ const partLine = z.object({
   firstNeededOn: z.string(),
 });
 /** A fluid summed in its stock unit (L / US gal, kg / lb), or apart in a unit not known. */
-const fluidLine = z.object({
+export const fluidLineSchema = z.object({
   kind: z.string(),
   unit: z.string(),
   volume: z.number(),
@@ -116,16 +116,16 @@ const fluidLine = z.object({
   firstNeededOn: z.string(),
 });
 /** A wear part to inspect — replaced when worn — on the machines named; never a quantity. */
-const wearLine = z.object({
+export const wearLineSchema = z.object({
   partNumber: z.string(),
   description: z.string(),
   machines: z.array(z.object({ id: z.string(), fleetNumber: z.string(), name: z.string() })),
   services: z.number(),
   firstNeededOn: z.string(),
 });
-export type PartLine = z.infer<typeof partLine>;
-export type FluidLine = z.infer<typeof fluidLine>;
-export type WearLine = z.infer<typeof wearLine>;
+export type PartLine = z.infer<typeof partLineSchema>;
+export type FluidLine = z.infer<typeof fluidLineSchema>;
+export type WearLine = z.infer<typeof wearLineSchema>;
 
 export const partsForecastSchema = z
   .object({
@@ -136,15 +136,15 @@ export const partsForecastSchema = z
     services: z.number(),
     undated: z.number(),
     customers: z.array(customerRefSchema),
-    parts: z.array(partLine),
-    fluids: z.array(fluidLine),
-    wearParts: z.array(wearLine),
+    parts: z.array(partLineSchema),
+    fluids: z.array(fluidLineSchema),
+    wearParts: z.array(wearLineSchema),
     byCustomer: z.array(
       z.object({
         customer: orgRefSchema,
-        parts: z.array(partLine),
-        fluids: z.array(fluidLine),
-        wearParts: z.array(wearLine),
+        parts: z.array(partLineSchema),
+        fluids: z.array(fluidLineSchema),
+        wearParts: z.array(wearLineSchema),
       }),
     ),
   })
