@@ -82,7 +82,8 @@ describe('fleet and forecast — the manager in the browser', () => {
       const add = Math.floor(Math.min(6, 20 * elapsedDays) * 10) / 10;
       added.push(add);
       await page
-        .getByLabel(`${p.machine.fleetNumber} reading`)
+        // exact: "C-01 reading" is also the end of "RC-01 reading" (and of other files' DC-01)
+        .getByLabel(`${p.machine.fleetNumber} reading`, { exact: true })
         .fill(String(Math.round((p.lastReading!.value + add) * 10) / 10));
     }
     await page.getByRole('button', { name: 'Save readings' }).click();
