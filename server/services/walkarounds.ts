@@ -74,9 +74,11 @@ export async function walkaroundStart(access: OrgAccess, machine: Machine) {
     checklistFor(access, machine),
     primaryForecastOf(machine),
   ]);
+  // the value the meter shows (after a replacement or a counter reset, not the lifetime value):
+  // the operator reads the meter and types what it shows
   const lastReading =
     forecast?.lastValue != null && forecast.lastTakenAt
-      ? { value: forecast.lastValue, takenAt: forecast.lastTakenAt }
+      ? { value: forecast.lastRawValue ?? forecast.lastValue, takenAt: forecast.lastTakenAt }
       : null;
   const { id: orgId, timeZone } = access.organization;
   const dailyCare = (await dailyCareOf(orgId, timeZone, [machine.id])).get(machine.id) ?? [];

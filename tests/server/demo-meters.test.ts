@@ -3,6 +3,8 @@
 // takes its hours from the hitch log. They check that the invented demo is consistent with the
 // server's own rules (the triggers of migration 0026, the hitch log's recompute), not the math.
 import { beforeAll, describe, expect, it } from 'vitest';
+import request from 'supertest';
+import { createApp } from '../../server/app';
 import { sequelize } from '../../server/db';
 import {
   Machine,
@@ -71,6 +73,22 @@ describe('demo scenario — meters and hitch log', () => {
     for (const r of after) expect(r.lifetimeValue - r.value).toBe(changes[0].oldFinalValue);
     for (let i = 1; i < readings.length; i += 1)
       expect(readings[i].lifetimeValue).toBeGreaterThanOrEqual(readings[i - 1].lifetimeValue);
+  });
+
+  it('demo — B-01 walkaround after the reset — starts from what the counter shows, not the lifetime count', async () => {
+    const baler = await machine('B-01');
+    const counter = await meterOf('B-01', 'bales');
+    const last = (await readingsOf(counter.id)).at(-1)!;
+    expect(last.value).toBeLessThan(last.lifetimeValue);
+    const agent = request.agent(createApp());
+    await agent
+      .post('/api/v1/auth/sign-in')
+      .send({ email: 'lena@larkspur.example', password: 'hourstone-demo' })
+      .expect(200);
+    const res = await agent
+      .get(`/api/v1/organizations/${baler.organizationId}/machines/${baler.id}/checklist`)
+      .expect(200);
+    expect(res.body.data.machine.lastReading.value).toBe(last.value);
   });
 
   it("demo — RC-01 has no meter: its hours are T-02's PTO hours over its spans, as the server works them out", async () => {
