@@ -5,6 +5,10 @@ type OnExit = (code: number | null, signal: NodeJS.Signals | null) => void;
 
 export const tsx: string;
 export function jwtSecret(): string;
+/** Newest modification time (ms) of a file, or of any file below a folder. */
+export function newestMtime(target: string): number;
+/** What a client build is made from, relative to the project. */
+export const CLIENT_INPUTS: string[];
 export function runTsScript(script: string, args: string[], env: NodeJS.ProcessEnv): Promise<void>;
 export function startMailCatcher(options: {
   smtpPort: number;

@@ -72,7 +72,7 @@ export async function startFakeS3({ port, directory, services, onExit }) {
 }
 
 /** Newest modification time (ms) of a file, or of any file below a folder. */
-function newestMtime(target) {
+export function newestMtime(target) {
   if (!existsSync(target)) return 0;
   const stats = statSync(target);
   if (!stats.isDirectory()) return stats.mtimeMs;
@@ -83,7 +83,8 @@ function newestMtime(target) {
   return newest;
 }
 
-const CLIENT_INPUTS = [
+/** What a client build is made from, relative to the project. */
+export const CLIENT_INPUTS = [
   'src',
   'shared',
   'public',

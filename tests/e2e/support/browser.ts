@@ -25,7 +25,7 @@ const projectRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '
 const screenshotDir = path.join(projectRoot, '.screenshots');
 
 // Without the background-networking flags chromium keeps trying to reach the (closed) network.
-const CHROMIUM_ARGS = [
+export const CHROMIUM_ARGS = [
   '--headless',
   '--no-sandbox',
   '--disable-gpu',
