@@ -10,6 +10,8 @@ import {
   type CDPSession,
   type Page,
 } from 'playwright-core';
+// the browser tests' flags: without the background-networking ones chromium keeps calling out
+import { CHROMIUM_ARGS } from '../../tests/e2e/support/browser';
 
 /**
  * The issue's phone on a poor connection: 150 ms round trip, 1.6 Mbit/s down, 750 kbit/s up, the
@@ -36,17 +38,6 @@ const PHONE = { width: 360, height: 740 };
 /** What "the due list is visible" means, on the dashboard and on the static page alike. */
 const DUE_LIST_ROW = '[aria-label="Due services"] > li';
 const VISIT_TIMEOUT_MS = 60_000;
-
-const CHROMIUM_ARGS = [
-  '--headless',
-  '--no-sandbox',
-  '--disable-gpu',
-  '--disable-quic',
-  '--no-first-run',
-  '--disable-background-networking',
-  '--disable-component-update',
-  '--disable-sync',
-];
 
 export interface BenchBrowser {
   browser: Browser;

@@ -4,21 +4,12 @@
 // CLIENT_DIST accepts), with the build manifest (.vite/manifest.json) the initial JavaScript is
 // read from; and the static page the timings are compared with, written beside it.
 import { spawnSync } from 'node:child_process';
-import { existsSync, readdirSync, readFileSync, statSync, writeFileSync } from 'node:fs';
+import { existsSync, readFileSync, statSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { gzipSync } from 'node:zlib';
+import { CLIENT_INPUTS, newestMtime } from '../lib/app.mjs';
 
 const projectRoot = path.resolve(import.meta.dirname, '..', '..');
-/** What a build is made from (as scripts/lib/app.mjs's staleness check). */
-const CLIENT_INPUTS = [
-  'src',
-  'shared',
-  'public',
-  'index.html',
-  'vite.config.ts',
-  'tailwind.config.ts',
-  'package-lock.json',
-];
 /** Written after a build made here, so a build of `npm test` (or one cut short) is made again. */
 const MARK = '.bench-production-build';
 /** The baseline: one small static page, no script, served by the same server from the same folder. */
@@ -26,17 +17,6 @@ export const STATIC_PAGE = 'bench-static.html';
 
 /** The slot's client folder, relative to the project: dist, or dist-test-N. */
 export const clientDistFor = (slot: number) => (slot === 0 ? 'dist' : `dist-test-${slot}`);
-
-function newestMtime(target: string): number {
-  if (!existsSync(target)) return 0;
-  const stats = statSync(target);
-  if (!stats.isDirectory()) return stats.mtimeMs;
-  let newest = stats.mtimeMs;
-  for (const entry of readdirSync(target)) {
-    newest = Math.max(newest, newestMtime(path.join(target, entry)));
-  }
-  return newest;
-}
 
 /** Why the folder needs a new build, or undefined when its production build is current. */
 function staleReason(dist: string): string | undefined {
