@@ -1,10 +1,24 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { useParams, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
 import { ForbiddenState } from '../../components/errors/forbidden-state';
+import { HITCH_IMPLEMENT_CATEGORIES } from '../../../shared/schemas/hitch';
+import { WalkaroundHitch } from '../../features/hitch/components/walkaround-hitch';
+import { useMachines } from '../../features/machines/api/get-machines';
 import { checklistQueryOptions } from '../../features/walkarounds/api/get-checklist';
 import { WalkaroundScreen } from '../../features/walkarounds/components/walkaround-screen';
 import { findMembership, meQueryOptions, useCurrentMembership } from '../../lib/auth';
 import { paths } from '../paths';
+
+// the implements an operator may say are on a tractor at its walkaround (the hitch log)
+const IN_SERVICE = {
+  status: 'in_service',
+  sort: 'fleetNumber',
+  order: 'asc',
+  page: 1,
+  pageSize: 200,
+} as const;
+const isImplement = (category: string) =>
+  (HITCH_IMPLEMENT_CATEGORIES as readonly string[]).includes(category);
 
 const purposeOf = (search: URLSearchParams) =>
   search.get('purpose') === 'inspection' ? 'inspection' : 'use';
@@ -31,6 +45,10 @@ export function WalkaroundPage() {
   const orgId = organization.id;
   const purpose = purposeOf(search);
   const shop = role === 'manager' || role === 'technician';
+  const machines = useMachines(orgId, IN_SERVICE);
+  const implementsToPick = (machines.data?.data ?? []).filter(
+    (m) => isImplement(m.category) && m.meterUnit === 'h',
+  );
 
   if (role === 'advisor') {
     return (
@@ -52,6 +70,16 @@ export function WalkaroundPage() {
       userId={me.user.id}
       units={organization.units}
       timeZone={organization.timeZone}
+      machineExtras={(machine) =>
+        machine.category === 'tractor' && purpose === 'use' ? (
+          <WalkaroundHitch
+            orgId={orgId}
+            tractor={machine}
+            implementsToPick={implementsToPick}
+            timeZone={organization.timeZone}
+          />
+        ) : null
+      }
       hrefs={{
         pick: paths.organization.walkaroundPick.href(orgId),
         defects: paths.organization.defects.href(orgId, machineId),

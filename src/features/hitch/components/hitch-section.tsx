@@ -7,12 +7,12 @@ import { Alert } from '../../../components/ui/alert';
 import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { SelectField } from '../../../components/ui/field';
-import { TableScroll } from '../../../components/ui/table-scroll';
 import { formatMeter } from '../../../lib/fleet-format';
 import { formatDateTime } from '../../../lib/format';
 import { useEndHitch } from '../api/end-hitch';
-import { useHitchLog, type HitchSpan } from '../api/get-hitch-log';
+import { useHitchLog } from '../api/get-hitch-log';
 import { useStartHitch } from '../api/start-hitch';
+import { HitchHistory } from './hitch-history';
 
 export interface HitchMachine {
   id: string;
@@ -88,7 +88,7 @@ export function HitchSection({ orgId, machine, tractors, timeZone }: HitchSectio
             if (tractorId) start.mutate({ implementId: machine.id, tractorId });
           }}
         >
-          <div className="min-w-60">
+          <div className="w-full sm:w-auto sm:min-w-60">
             <SelectField
               label="Tractor"
               value={tractorId}
@@ -121,7 +121,7 @@ export function HitchSection({ orgId, machine, tractors, timeZone }: HitchSectio
       ) : null}
 
       {spans.length ? (
-        <HitchTable spans={spans} timeZone={timeZone} />
+        <HitchHistory spans={spans} timeZone={timeZone} />
       ) : (
         <EmptyState title="No hitch log yet">
           {implement
@@ -130,37 +130,5 @@ export function HitchSection({ orgId, machine, tractors, timeZone }: HitchSectio
         </EmptyState>
       )}
     </div>
-  );
-}
-
-function HitchTable({ spans, timeZone }: { spans: HitchSpan[]; timeZone: string }) {
-  return (
-    <TableScroll label="Hitch history">
-      <table className="w-full text-left">
-        <caption className="sr-only">Hitch history</caption>
-        <thead className="bg-field-50 text-sm text-field-700">
-          <tr>
-            <th className="px-3 py-2">Implement</th>
-            <th className="px-3 py-2">Tractor</th>
-            <th className="px-3 py-2">Hitched</th>
-            <th className="px-3 py-2">Unhitched</th>
-            <th className="px-3 py-2 text-right">Hours</th>
-          </tr>
-        </thead>
-        <tbody>
-          {spans.map((s) => (
-            <tr key={s.id} className="border-t border-field-100">
-              <td className="px-3 py-2">{s.implement.fleetNumber}</td>
-              <td className="px-3 py-2">{s.tractor.fleetNumber}</td>
-              <td className="px-3 py-2">{formatDateTime(s.startedAt, timeZone)}</td>
-              <td className="px-3 py-2">
-                {s.endedAt ? formatDateTime(s.endedAt, timeZone) : 'Still hitched'}
-              </td>
-              <td className="px-3 py-2 text-right">{formatMeter(s.hours, 'h')}</td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
-    </TableScroll>
   );
 }

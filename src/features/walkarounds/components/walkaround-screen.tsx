@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useState, type ReactNode } from 'react';
 import type { UnitSystem } from '../../../../shared/constants';
 import type { WalkaroundPurpose } from '../../../../shared/schemas/walkarounds';
 import { ErrorState } from '../../../components/ui/error-state';
@@ -35,6 +35,11 @@ interface WalkaroundScreenProps {
   units: UnitSystem;
   timeZone: string;
   hrefs: WalkaroundHrefs;
+  /**
+   * What the page shows above the checklist for this machine, online only (e.g. a tractor's
+   * hitched implement, from the hitch log): the page composes it, as features stay apart.
+   */
+  machineExtras?: (machine: Checklist['machine']) => ReactNode;
 }
 
 const isUnreachable = (error: unknown) => isApiError(error) && error.code === 'unreachable';
@@ -157,6 +162,7 @@ function ReadyScreen({
   offline,
   draftApi,
   onSent,
+  machineExtras,
 }: WalkaroundScreenProps & {
   checklist: Checklist;
   offline: boolean;
@@ -201,6 +207,7 @@ function ReadyScreen({
           ). Start this one only for a new check.
         </p>
       ) : null}
+      {!offline && machineExtras ? machineExtras(checklist.machine) : null}
       <WalkaroundForm
         orgId={orgId}
         checklist={checklist}
