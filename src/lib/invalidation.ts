@@ -99,6 +99,8 @@ export const changedBy = {
     ...dueOfMachine(orgId, machineId),
     k.serviceRecords.prefills(orgId, machineId),
     k.onboarding.checklist(orgId),
+    // each meter says how many tasks count on it
+    k.readings.meters(orgId, machineId),
   ],
 
   /**

@@ -22,8 +22,7 @@ const base = (orgId: string, machineId: string) =>
   `/organizations/${segment(orgId)}/machines/${segment(machineId)}`;
 
 export const meterKeys = {
-  machine: (orgId: string, machineId: string) =>
-    [...queryKeys.readings.all(orgId), 'meters', machineId] as const,
+  machine: (orgId: string, machineId: string) => queryKeys.readings.meters(orgId, machineId),
   /** one meter's readings (its chart) */
   readings: (orgId: string, machineId: string, meterId: string) =>
     [...queryKeys.readings.machine(orgId, machineId), 'meter', meterId] as const,

@@ -30,6 +30,9 @@ const readings = {
   /** one machine's readings and meter replacements (history and chart) */
   machine: (orgId: string, machineId: string) =>
     [...readings.all(orgId), 'machine', machineId] as const,
+  /** a machine's meters, each with its last reading and its task count (issue 13) */
+  meters: (orgId: string, machineId: string) =>
+    [...readings.all(orgId), 'meters', machineId] as const,
 };
 
 const tasks = {
