@@ -88,6 +88,13 @@ export const TELEMATICS_FLEET = 'TM-01';
  */
 export const METERS_FLEET = ['MT-01', 'MT-02'] as const;
 
+/**
+ * hitch.e2e.ts adds these (issue 13): HX-01 a tractor of lena's with readings, HX-02 a tractor
+ * of no one's, HK-01 an implement of lena's with a 50 h task, HK-02 an implement of lena's kept
+ * on HX-02; it hitches, logs readings and answers the walkaround's hitch question on HX-01.
+ */
+export const HITCH_FLEET = ['HX-01', 'HX-02', 'HK-01', 'HK-02'] as const;
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
