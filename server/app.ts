@@ -38,6 +38,7 @@ import { dealersRouter } from './routes/dealers/dealers.router';
 import { exportRouter } from './routes/export/export.router';
 import { apiKeysRouter } from './routes/api-keys/api-keys.router';
 import { telematicsRouter } from './routes/telematics/telematics.router';
+import { shopOutlookRouter } from './routes/shop-outlook/shop-outlook.router';
 import './models';
 
 const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), '..');
@@ -111,6 +112,7 @@ export function createApp(options: { serveClient?: boolean; clientDist?: string 
   api.use(exportRouter());
   api.use(apiKeysRouter());
   api.use(telematicsRouter());
+  api.use(shopOutlookRouter());
   api.use(devRouter());
   api.use(notFoundHandler);
   app.use('/api/v1', api);

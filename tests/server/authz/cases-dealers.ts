@@ -100,6 +100,10 @@ export const DEALER_CASES: Record<string, Case> = {
     ids: 'none',
     build: (c) => ({ params: home(c) }),
   },
+  'GET /organizations/{orgId}/customer-outlook': {
+    ids: 'none',
+    build: (c) => ({ params: home(c), query: { weeks: '4' } }),
+  },
   'GET /organizations/{orgId}/customers/{customerId}/reminder-draft': {
     // the customer is checked as an input: one not linked is refused by name (422)
     ids: 'field',

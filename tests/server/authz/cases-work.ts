@@ -113,6 +113,10 @@ export const WORK_CASES: Record<string, Case> = {
     build: (c) => ({ params: onMachine(c), query: { name: 'Brake lining' } }),
   },
   'GET /organizations/{orgId}/shop-week': { ids: 'none', build: (c) => ({ params: onFarm(c) }) },
+  'GET /organizations/{orgId}/shop-outlook': {
+    ids: 'none',
+    build: (c) => ({ params: onFarm(c), query: { weeks: '4' } }),
+  },
   // walkarounds
   'GET /organizations/{orgId}/checklist-templates': {
     ids: 'none',

@@ -182,6 +182,7 @@ export const EXPECTED: Record<string, Row> = {
   'GET /organizations/{orgId}/machines/{machineId}/measurements': history,
   'GET /organizations/{orgId}/machines/{machineId}/measurements/series': history,
   'GET /organizations/{orgId}/shop-week': shop,
+  'GET /organizations/{orgId}/shop-outlook': shop,
   // walkarounds
   'GET /organizations/{orgId}/checklist-templates': farmOnly,
   'GET /organizations/{orgId}/checklist-templates/built-in/{category}': farmOnly,
@@ -245,6 +246,7 @@ export const EXPECTED: Record<string, Row> = {
   'GET /organizations/{orgId}/board.csv': dealerSide,
   'GET /organizations/{orgId}/parts-forecast': dealerSide,
   'GET /organizations/{orgId}/parts-forecast.csv': dealerSide,
+  'GET /organizations/{orgId}/customer-outlook': dealerSide,
   // a customer not linked (any more) is a refused field, as the dealer-board tests have it
   'GET /organizations/{orgId}/customers/{customerId}/reminder-draft': row(LINKED, [], {
     unlinkedDealer: 422,
