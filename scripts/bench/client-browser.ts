@@ -180,6 +180,8 @@ export interface Visit {
   consoleErrors: string[];
   /** the page's own timings up to the due list: the document, then each file and API call */
   timeline: string;
+  /** JavaScript that came over the network before the due list, kB as sent (gzip or brotli) */
+  scriptKb: number;
 }
 
 /**
@@ -212,7 +214,14 @@ export async function timedVisit(page: Page, url: string, label: string): Promis
     const ms = Number(await handle.jsonValue());
     const controlled = await page.evaluate(() => Boolean(navigator.serviceWorker?.controller));
     const timeline = await pageTimeline(page, ms);
-    return { ms, controlled, consoleErrors, timeline };
+    const scriptKb = await page.evaluate(
+      (until) =>
+        (performance.getEntriesByType('resource') as PerformanceResourceTiming[])
+          .filter((e) => e.startTime <= until && new URL(e.name).pathname.endsWith('.js'))
+          .reduce((sum, e) => sum + e.encodedBodySize, 0) / 1000,
+      ms,
+    );
+    return { ms, controlled, consoleErrors, timeline, scriptKb };
   } finally {
     page.off('console', onConsole);
     page.off('pageerror', onError);

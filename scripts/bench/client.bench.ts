@@ -165,7 +165,8 @@ try {
       `warm ${warm.app.map((v) => v.ms.toFixed(0)).join(', ')} ms; ` +
       `static ${cold.baseline.map((v) => v.ms.toFixed(0)).join(', ')} / ` +
       `${cold.second.map((v) => v.ms.toFixed(0)).join(', ')} ms; ` +
-      `service workers throttled: ${warm.workers}; load average ${loadBefore} → ${load()}`,
+      `service workers throttled: ${warm.workers}; load average ${loadBefore} → ${load()}; ` +
+      `JavaScript fetched before the cold due list ${cold.app.map((v) => v.scriptKb.toFixed(1)).join(', ')} kB as sent`,
   );
   if (process.argv.includes('--timeline')) {
     for (const [what, visits] of [
