@@ -9,6 +9,7 @@ import { sequelize } from '../db';
 import { minorUnitsColumn } from './columns';
 import type { MachineCategory, MachineStatus, MeterUnit } from '../../shared/constants';
 import type { MachineClass } from '../../shared/domain/service-library';
+import type { SeasonPlans } from '../../shared/domain/season-use';
 
 export class Machine extends Model<InferAttributes<Machine>, InferCreationAttributes<Machine>> {
   declare id: CreationOptional<string>;
@@ -32,6 +33,8 @@ export class Machine extends Model<InferAttributes<Machine>, InferCreationAttrib
   declare status: CreationOptional<MachineStatus>;
   /** months (1–12) the machine normally works; empty = all year */
   declare seasonMonths: CreationOptional<number[]>;
+  /** plans by season year (migration 0029; shared/domain/season-use.ts) */
+  declare seasonPlans: CreationOptional<SeasonPlans>;
   declare photoKey: string | null;
   declare notes: CreationOptional<string>;
   /** restricted use (migration 0021): why, since when and by whom; all null when unrestricted */
@@ -60,6 +63,7 @@ Machine.init(
     meterUnit: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'h' },
     status: { type: DataTypes.TEXT, allowNull: false, defaultValue: 'in_service' },
     seasonMonths: { type: DataTypes.ARRAY(DataTypes.INTEGER), allowNull: false, defaultValue: [] },
+    seasonPlans: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
     photoKey: { type: DataTypes.TEXT, allowNull: true },
     notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
     restrictionReason: { type: DataTypes.TEXT, allowNull: true },

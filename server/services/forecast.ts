@@ -6,6 +6,7 @@ import {
   estimateUsage,
   isoFromDayNumber,
   localDayNumber,
+  plannedUseOn,
   todayIso,
   type DuePoint,
   type UsageEstimate,
@@ -81,10 +82,14 @@ export function duePointsFor(
   asOfIso: string,
   now: Date,
   seasonMonths: readonly number[] = [],
+  plannedSeasonUse: number | null = null,
 ): { usage: UsageEstimate; points: Map<string, DuePoint> } {
   const daily = forecast?.daily ?? [];
-  // season months are the prior of a machine in its first year
-  const usage = estimateUsage(daily, localDayNumber(now, timeZone), { seasonMonths });
+  // season months are the prior of a machine in its first year; the season's plan that of its pace
+  const usage = estimateUsage(daily, localDayNumber(now, timeZone), {
+    seasonMonths,
+    plannedSeasonUse,
+  });
   const startIso = forecast?.firstTakenAt
     ? isoFromDayNumber(localDayNumber(forecast.firstTakenAt, timeZone))
     : null;
@@ -125,7 +130,7 @@ export function duePointsFor(
  * The usage estimate as stored: without its daily profiles (a few thousand numbers), which only
  * date the due points computed beside it and are never read back.
  */
-function storedUsage(usage: UsageEstimate): UsageEstimate {
+export function storedUsage(usage: UsageEstimate): UsageEstimate {
   const { profile: _p, profileFast: _f, profileSlow: _s, ...kept } = usage;
   return kept;
 }
@@ -141,7 +146,7 @@ interface StoreOptions {
   timeZone?: string;
   now?: Date;
   /** the machines already loaded (their season months), to spare reading them again */
-  machines?: Pick<Machine, 'id' | 'seasonMonths'>[];
+  machines?: (Pick<Machine, 'id' | 'seasonMonths'> & Partial<Pick<Machine, 'seasonPlans'>>)[];
   /** the meters of the summaries given, to spare reading them again */
   meters?: MeterOfMachine[];
   /** their tasks' due fields by meter, already read (reading-neighbours.ts writeContext) */
@@ -200,12 +205,13 @@ async function computeAndStore(
     options.machines ??
     (await Machine.findAll({
       where: machineWhere,
-      attributes: ['id', 'seasonMonths'],
+      attributes: ['id', 'seasonMonths', 'seasonPlans'],
       transaction,
     }));
   if (!machines.length) return [];
   const ids = machines.map((m) => m.id);
   const seasonOf = new Map(machines.map((m) => [m.id, m.seasonMonths]));
+  const plansOf = new Map(machines.map((m) => [m.id, m.seasonPlans ?? {}]));
   const [meters, forecasts, tasks] = await Promise.all([
     options.meters ??
       MachineMeter.findAll({
@@ -240,6 +246,7 @@ async function computeAndStore(
       asOfIso,
       now,
       seasonOf.get(machineId) ?? [],
+      plannedUseOn(plansOf.get(machineId), id, asOfIso, seasonOf.get(machineId) ?? []),
     );
     forecastRows.push({
       ...(summary ?? summaryColumns(emptySummary())),

@@ -9,6 +9,7 @@ export * from './due-point';
 export * from './due-outcomes';
 export * from './due-before-peak';
 export * from './staleness';
+export * from './season-use';
 export * from './season-dates';
 export * from './reading-rules';
 export * from './cost';

@@ -1,7 +1,7 @@
 // A machine with less than a year of readings has no whole past year to repeat. When the manager
 // has entered its season months, a stand-in year is built: the days its readings reach as they
 // were, the others from the season months — season days at the pace it has shown on its season
-// days so far (or a given typical pace), other days at the pace it has shown outside them — and the same scenarios as a real past year (usage-seasons.ts) place the
+// days so far (or the season's plan spread over its days, or a given typical pace), other days at the pace it has shown outside them — and the same scenarios as a real past year (usage-seasons.ts) place the
 // season start and the pace, with wider spreads since one stand-in year knows less than a real one.
 import { isoFromDayNumber } from './calendar';
 import type { ReadingPoint } from './types';
@@ -35,16 +35,21 @@ function shownPaces(sorted: ReadingPoint[], months: Set<number>) {
 export function firstYearStandIn(
   sorted: ReadingPoint[],
   seasonMonths: readonly number[],
-  typicalRate: number | null = null,
-): { year: AnalogYear; paceFrom: 'seen' | 'typical' } | null {
+  prior: { typicalRate?: number | null; plannedUse?: number | null } = {},
+): { year: AnalogYear; paceFrom: 'seen' | 'planned' | 'typical' } | null {
   if (!seasonMonths.length || seasonMonths.length >= 12) return null;
   const months = new Set(seasonMonths);
   const shown = shownPaces(sorted, months);
   const seen = shown.season.days >= FIRST_YEAR_MIN_SEASON_DAYS && shown.season.use > 0;
-  const seasonRate = seen ? shown.season.use / shown.season.days : typicalRate;
+  const last = sorted[sorted.length - 1].day;
+  let seasonDays = 0;
+  for (let i = 0; i < YEAR_DAYS; i++) if (months.has(monthOf(last + i))) seasonDays++;
+  // the plan's season use spread over the season's days
+  const planned = prior.plannedUse && prior.plannedUse > 0 ? prior.plannedUse / seasonDays : null;
+  const paceFrom = seen ? 'seen' : planned ? 'planned' : 'typical';
+  const seasonRate = seen ? shown.season.use / shown.season.days : (planned ?? prior.typicalRate);
   if (!seasonRate || !(seasonRate > 0)) return null;
   const otherRate = shown.other.days ? shown.other.use / shown.other.days : 0;
-  const last = sorted[sorted.length - 1].day;
   const lead = EVIDENCE_DAYS + MAX_SHIFT_DAYS;
   const first = sorted[0].day;
   const use: number[] = [];
@@ -62,6 +67,6 @@ export function firstYearStandIn(
   const total = use.slice(lead).reduce((s, u) => s + u, 0);
   return {
     year: { yearsBack: 0, use, lead, known: use.map(() => true), total },
-    paceFrom: seen ? 'seen' : 'typical',
+    paceFrom,
   };
 }

@@ -23,11 +23,11 @@ export function estimateFromYears(
   asOfDay: number,
   horizonDays: number,
   years: AnalogYear[],
-  spreads: { shiftSd: number; paceSd: number },
+  spreads: { shiftSd: number; paceSd: number; plannedUse?: number | null },
   explanation: (likeliest: { yearsBack: number; shift: number; pace: number }) => string,
 ): UsageEstimate {
   const last = sorted[sorted.length - 1];
-  const scenarios = weighScenarios(sorted, years, spreads.shiftSd);
+  const scenarios = weighScenarios(sorted, years, spreads.shiftSd, spreads.plannedUse ?? null);
   const days = Math.max(1, Math.ceil(horizonDays + Math.max(0, asOfDay - last.day)));
   const bands = usageBands(scenarios, days, spreads.paceSd);
   // rates over the 30 days from asOf (the profiles start the day after the last reading)
@@ -65,20 +65,33 @@ export function estimateSeasons(
   sorted: ReadingPoint[],
   asOfDay: number,
   horizonDays: number,
+  plannedUse: number | null = null,
 ): UsageEstimate {
   const years = analogYears(sorted);
+  const plan =
+    plannedUse !== null
+      ? `; the season's plan, ${round1(plannedUse)}, sets its pace until the season shows its own`
+      : '';
   return estimateFromYears(
     sorted,
     asOfDay,
     horizonDays,
     years,
-    { shiftSd: shiftSpread(years), paceSd: paceSpread(years) },
+    { shiftSd: shiftSpread(years), paceSd: paceSpread(years), plannedUse },
     (l) =>
       `${years.length === 1 ? 'Last year' : `The last ${years.length} years`}: likeliest like ` +
       `${l.yearsBack === 1 ? 'last year' : `${l.yearsBack} years ago`}, ${shiftWords(l.shift)}, ` +
-      `at ×${l.pace.toFixed(2)} its pace`,
+      `at ×${l.pace.toFixed(2)} its pace${plan}`,
   );
 }
+
+const round1 = (n: number) => Math.round(n * 10) / 10;
+
+const PACE_FROM = {
+  seen: 'it has shown in its season so far',
+  planned: "of the season's plan",
+  typical: 'typical of its class',
+} as const;
 
 const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
 
@@ -91,9 +104,9 @@ export function estimateFirstYear(
   asOfDay: number,
   horizonDays: number,
   seasonMonths: readonly number[],
-  typicalRate: number | null = null,
+  prior: { typicalRate?: number | null; plannedUse?: number | null } = {},
 ): UsageEstimate | null {
-  const standIn = firstYearStandIn(sorted, seasonMonths, typicalRate);
+  const standIn = firstYearStandIn(sorted, seasonMonths, prior);
   if (!standIn) return null;
   const months = [...seasonMonths].sort((a, b) => a - b).map((m) => MONTHS[m - 1]);
   return estimateFromYears(
@@ -104,7 +117,7 @@ export function estimateFirstYear(
     { shiftSd: SHIFT_PRIOR_SD_DAYS, paceSd: FIRST_YEAR_PACE_SD },
     (l) =>
       `First year: the season months entered (${months.join(', ')}) at the pace ` +
-      `${standIn.paceFrom === 'seen' ? 'it has shown in its season so far' : 'typical of its class'}` +
+      `${PACE_FROM[standIn.paceFrom]}` +
       `; likeliest ${shiftWords(l.shift)}, at ×${l.pace.toFixed(2)}`,
   );
 }

@@ -195,6 +195,7 @@ export function weighScenarios(
   sorted: ReadingPoint[],
   years: AnalogYear[],
   shiftSd: number,
+  plannedUse: number | null = null,
 ): Scenario[] {
   const recent = weekSums(recentUse(sorted, EVIDENCE_DAYS));
   const scenarios: (Scenario & { logWeight: number })[] = [];
@@ -215,7 +216,9 @@ export function weighScenarios(
         actualSum += a;
         analogSum += analog[w]!;
       });
-      const pace = clampPace((actualSum + pseudo) / (analogSum + pseudo));
+      // without this year's evidence the pace is the plan's against that year's use (or ×1)
+      const prior = plannedUse !== null && year.total > 0 ? clampPace(plannedUse / year.total) : 1;
+      const pace = clampPace((actualSum + pseudo * prior) / (analogSum + pseudo));
       let misfit = 0;
       recent.forEach((a, w) => {
         const b = analog[w];

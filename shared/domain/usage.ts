@@ -42,6 +42,11 @@ export interface UsageOptions {
   seasonMonths?: readonly number[];
   /** a typical in-season pace of its class (units per day), when known: the first-year prior's pace */
   typicalRate?: number | null;
+  /**
+   * the manager's plan for the coming (or current) season, meter units (season-use.ts): the pace
+   * prior of every scenario until this year's use shows its own, and a first year's season pace
+   */
+  plannedSeasonUse?: number | null;
 }
 
 /** Default tuning of estimateUsage, days. */
@@ -78,11 +83,16 @@ export function estimateUsage(
     return estimateSeason(sorted, asOfDay, horizon);
   }
   if (options.method === 'auto' || options.method === undefined) {
-    if (last.day - first.day >= YEAR_DAYS) return estimateSeasons(sorted, asOfDay, horizon);
+    const planned = options.plannedSeasonUse ?? null;
+    if (last.day - first.day >= YEAR_DAYS)
+      return estimateSeasons(sorted, asOfDay, horizon, planned);
     const months = options.seasonMonths ?? [];
     const prior =
       months.length > 0 &&
-      estimateFirstYear(sorted, asOfDay, horizon, months, options.typicalRate ?? null);
+      estimateFirstYear(sorted, asOfDay, horizon, months, {
+        typicalRate: options.typicalRate ?? null,
+        plannedUse: planned,
+      });
     if (prior) return prior;
   }
   return estimateTrend(

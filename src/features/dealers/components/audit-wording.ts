@@ -27,6 +27,8 @@ const ACTIONS: Record<string, string> = {
   'machine.clear_tag_out': 'cleared a machine’s tag-out',
   'machine.restrict': 'restricted a machine’s use',
   'machine.lift_restriction': 'lifted a machine’s restriction',
+  'machine.season_plan': 'planned a machine’s season',
+  'machine.season_plan_remove': 'removed a machine’s season plan',
   'defect.report': 'reported a defect',
   'defect.update': 'updated a defect',
   'defect.close': 'closed a defect',
