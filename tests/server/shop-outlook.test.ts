@@ -57,7 +57,7 @@ async function farm() {
     { daysAgo: 2, value: 1140 },
   ]);
   const M = monday();
-  const oil = [{ kind: 'Engine oil 15W-40', volume: 18, unit: 'L' }];
+  const oil = [{ kind: 'Engine oil 15W-40', volume: 18, unit: 'L' as const }];
   const filter = [{ partNumber: 'OF-100', description: 'Oil filter', quantity: 1 }];
   const a = await createTask(machine, {
     name: 'A',
