@@ -38,6 +38,7 @@ import { dealersRouter } from './routes/dealers/dealers.router';
 import { exportRouter } from './routes/export/export.router';
 import { apiKeysRouter } from './routes/api-keys/api-keys.router';
 import { telematicsRouter } from './routes/telematics/telematics.router';
+import { seasonHoursRouter } from './routes/season-hours/season-hours.router';
 import { shopOutlookRouter } from './routes/shop-outlook/shop-outlook.router';
 import './models';
 
@@ -112,6 +113,7 @@ export function createApp(options: { serveClient?: boolean; clientDist?: string 
   api.use(exportRouter());
   api.use(apiKeysRouter());
   api.use(telematicsRouter());
+  api.use(seasonHoursRouter());
   api.use(shopOutlookRouter());
   api.use(devRouter());
   api.use(notFoundHandler);

@@ -183,6 +183,11 @@ export const EXPECTED: Record<string, Row> = {
   'GET /organizations/{orgId}/machines/{machineId}/measurements/series': history,
   'GET /organizations/{orgId}/shop-week': shop,
   'GET /organizations/{orgId}/shop-outlook': shop,
+  // season hours (issue 17): the farm's people read them (operators their machines'); only a
+  // manager plans a season, since the plan moves every forecast of the machine
+  'GET /organizations/{orgId}/season-hours': farmOnly,
+  'PUT /organizations/{orgId}/machines/{machineId}/season-plans/{year}': managers,
+  'DELETE /organizations/{orgId}/machines/{machineId}/season-plans/{year}': managers,
   // walkarounds
   'GET /organizations/{orgId}/checklist-templates': farmOnly,
   'GET /organizations/{orgId}/checklist-templates/built-in/{category}': farmOnly,

@@ -17,6 +17,7 @@ import { ACCOUNT_CASES } from './cases-account';
 import { KEY_CASES } from './cases-keys';
 import { METER_CASES } from './cases-meters';
 import { HITCH_CASES } from './cases-hitch';
+import { SEASON_CASES } from './cases-seasons';
 import {
   app,
   changedTables,
@@ -40,6 +41,7 @@ const CASES: Record<string, Case> = {
   ...KEY_CASES,
   ...METER_CASES,
   ...HITCH_CASES,
+  ...SEASON_CASES,
 };
 
 async function documentedRoutes(): Promise<string[]> {
