@@ -202,7 +202,7 @@ function MeterFigures({ meter }: { meter: MachineMeterJson }) {
           <dd>{formatRelative(last.takenAt)}</dd>
         </>
       ) : null}
-      <dt>Counts</dt>
+      <dt>Recorded</dt>
       <dd>
         {meter.readingCount} {meter.readingCount === 1 ? 'reading' : 'readings'} · {meter.taskCount}{' '}
         {meter.taskCount === 1 ? 'task' : 'tasks'}
