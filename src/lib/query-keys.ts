@@ -91,6 +91,8 @@ const shopWeek = {
   /** `start` null: the server's current week */
   week: (orgId: string, start: string | null) =>
     [...shopWeek.all(orgId), start ?? 'current'] as const,
+  /** the next weeks (issue 17): under the shop week, so what refreshes the week refreshes it */
+  outlook: (orgId: string, weeks: number) => [...shopWeek.all(orgId), 'outlook', weeks] as const,
 };
 
 const defects = {
@@ -127,6 +129,8 @@ const dealers = {
   boardPage: (orgId: string, filters: Filters) => [...dealers.board(orgId), filters] as const,
   parts: (orgId: string, horizon: number, customerId: string | null) =>
     [...dealers.all(orgId), 'parts', horizon, customerId] as const,
+  outlook: (orgId: string, weeks: number, customerId: string | null) =>
+    [...dealers.all(orgId), 'outlook', weeks, customerId] as const,
   customers: (orgId: string) => [...dealers.all(orgId), 'customers'] as const,
   farmLinks: (orgId: string) => [...dealers.all(orgId), 'farm-links'] as const,
   reminderDraft: (orgId: string, customerId: string, taskIds: string[]) =>

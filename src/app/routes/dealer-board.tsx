@@ -5,6 +5,7 @@ import { ForbiddenState } from '../../components/errors/forbidden-state';
 import { PageHeader } from '../../components/ui/page-header';
 import { boardQueryOptions } from '../../features/dealers/api/get-board';
 import type { BoardFilters } from '../../features/dealers/api/types';
+import { CustomerOutlookSection } from '../../features/dealers/components/customer-outlook-section';
 import { DealerBoard } from '../../features/dealers/components/dealer-board';
 import { readBoardFilters, writeBoardFilters } from '../../features/dealers/filters';
 import { findMembership, meQueryOptions, useCurrentMembership } from '../../lib/auth';
@@ -67,6 +68,21 @@ export function DealerBoardPage() {
         description="Services coming due across your customers, by the date each falls due."
       />
       <DealerBoardSection />
+      <div className="mt-10">
+        <CustomerOutlookSection
+          orgId={membership.organization.id}
+          links={{
+            machineHref: (machine, customer) =>
+              customer
+                ? paths.organization.customerMachine.href(
+                    membership.organization.id,
+                    customer.id,
+                    machine.id,
+                  )
+                : null,
+          }}
+        />
+      </div>
     </>
   );
 }

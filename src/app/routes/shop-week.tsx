@@ -10,6 +10,7 @@ import { ListSkeleton } from '../../components/ui/skeleton';
 import { shopWeekQueryOptions, useShopWeek } from '../../features/services/api/get-shop-week';
 import type { ShopLinks } from '../../features/services/components/shop-week-lines';
 import { ShopWeekView } from '../../features/services/components/shop-week-view';
+import { ShopOutlookSection } from '../../features/services/components/shop-outlook-section';
 import { isApiError } from '../../lib/api-client';
 import { useCurrentMembership } from '../../lib/auth';
 import { formatLocalDate } from '../../lib/fleet-format';
@@ -118,6 +119,12 @@ export function ShopWeekPage() {
           <ShopWeekView week={week.data} links={links} />
         </div>
       )}
+      <div className="mt-10">
+        <ShopOutlookSection
+          orgId={orgId}
+          links={{ machineHref: (machine) => links.machineHref(machine.id) }}
+        />
+      </div>
     </>
   );
 }
