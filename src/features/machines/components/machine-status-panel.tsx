@@ -83,8 +83,10 @@ export function MachineStatusPanel({
             {usage && usage.method !== 'none' ? (
               <>
                 <span className="block text-lg font-black text-field-950 tabular-nums">
-                  ≈ {formatRate(usage.rate)} {machine.meterUnit}/day ({formatRate(usage.low)}–
-                  {formatRate(usage.high)})
+                  {usage.method === 'season' && usage.high === 0
+                    ? // before its season: no use in the next 30 days, its season dated from past years
+                      'Idle for the next 30 days'
+                    : `≈ ${formatRate(usage.rate)} ${machine.meterUnit}/day (${formatRate(usage.low)}–${formatRate(usage.high)})`}
                 </span>
                 <span className="block text-sm text-field-700">{usage.explanation}</span>
                 <span className="block text-sm text-field-600">
