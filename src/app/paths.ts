@@ -151,6 +151,12 @@ export const paths = {
         `/o/${q(orgId)}/customers/${q(farmId)}/service-records/${q(recordId)}`,
     },
     partsForecast: { path: '/o/:orgId/parts', href: (orgId: string) => `/o/${q(orgId)}/parts` },
+    seasonHours: {
+      path: '/o/:orgId/season-hours',
+      /** `year`: the season to show; none: this year */
+      href: (orgId: string, year?: number) =>
+        `/o/${q(orgId)}/season-hours${year ? `?year=${year}` : ''}`,
+    },
     customers: { path: '/o/:orgId/customers', href: (orgId: string) => `/o/${q(orgId)}/customers` },
     bookings: { path: '/o/:orgId/bookings', href: (orgId: string) => `/o/${q(orgId)}/bookings` },
     farmDealers: { path: '/o/:orgId/dealers', href: (orgId: string) => `/o/${q(orgId)}/dealers` },

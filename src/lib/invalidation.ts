@@ -32,6 +32,8 @@ export const changedBy = {
   /** a reading logged, corrected or deleted on one machine, or its meter replaced */
   machineReadings: (orgId: string, machineId: string): QueryKey[] => [
     k.readings.all(orgId),
+    // season hours count the readings
+    k.seasonHours.all(orgId),
     ...dueOfMachine(orgId, machineId),
     k.walkarounds.checklists(orgId),
     // a tractor's reading moves the hours of what it pulls (the hitch log): their due figures too
@@ -44,6 +46,7 @@ export const changedBy = {
   hitch: (orgId: string): QueryKey[] => [
     k.hitch.all(orgId),
     k.readings.all(orgId),
+    k.seasonHours.all(orgId),
     k.tasks.all(orgId),
     k.machines.all(orgId),
     k.due.all(orgId),
@@ -53,6 +56,7 @@ export const changedBy = {
   /** readings of many machines at once (Log hours, a CSV import) */
   readings: (orgId: string): QueryKey[] => [
     k.readings.all(orgId),
+    k.seasonHours.all(orgId),
     k.machines.all(orgId),
     k.tasks.all(orgId),
     k.due.all(orgId),
@@ -91,6 +95,7 @@ export const changedBy = {
   walkaround: (orgId: string): QueryKey[] => [
     ...statusOfMachines(orgId),
     k.readings.all(orgId),
+    k.seasonHours.all(orgId),
     k.tasks.all(orgId),
   ],
 
@@ -121,11 +126,18 @@ export const changedBy = {
       ? [
           k.measurements.machine(orgId, machineId),
           k.readings.all(orgId),
+          k.seasonHours.all(orgId),
           ...dueOfMachine(orgId, machineId),
           ...statusOfMachines(orgId),
           k.onboarding.checklist(orgId),
         ]
       : []),
+  ],
+
+  /** a machine's season plan set or removed: it is the forecast's pace for that season */
+  seasonPlan: (orgId: string, machineId: string): QueryKey[] => [
+    k.seasonHours.all(orgId),
+    ...dueOfMachine(orgId, machineId),
   ],
 
   /** a machine's spec sheet saved: the sheet, and the task lines it fills (schedule, prefill) */

@@ -95,6 +95,12 @@ const shopWeek = {
   outlook: (orgId: string, weeks: number) => [...shopWeek.all(orgId), 'outlook', weeks] as const,
 };
 
+/** season hours (issue 17): each machine's season use by year, with its plan */
+const seasonHours = {
+  all: (orgId: string) => ['season-hours', orgId] as const,
+  year: (orgId: string, year: number) => [...seasonHours.all(orgId), year] as const,
+};
+
 const defects = {
   all: (orgId: string) => ['defects', orgId] as const,
   lists: (orgId: string) => [...defects.all(orgId), 'list'] as const,
@@ -227,6 +233,7 @@ export const queryKeys = {
   serviceRecords,
   measurements,
   shopWeek,
+  seasonHours,
   defects,
   walkarounds,
   checklistTemplates,
