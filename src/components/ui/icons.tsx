@@ -185,6 +185,16 @@ const PATHS = {
       <path d="M15.5 3.5v4" />
     </>
   ),
+  // bars side by side: a season's hours against the last (Season hours)
+  bars: (
+    <>
+      <path d="M4 20h16" />
+      <path d="M7 20v-7" />
+      <path d="M11 20V8" />
+      <path d="M15 20v-9" />
+      <path d="M19 20V5" />
+    </>
+  ),
   printer: (
     <>
       <path d="M7 9V4h10v5" />
