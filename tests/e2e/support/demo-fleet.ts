@@ -95,6 +95,12 @@ export const METERS_FLEET = ['MT-01', 'MT-02'] as const;
  */
 export const HITCH_FLEET = ['HX-01', 'HX-02', 'HK-01', 'HK-02'] as const;
 
+/**
+ * season-hours.e2e.ts adds this tractor (readings, no season months) and plans its next season by
+ * area and work rate (issue 17).
+ */
+export const SEASON_HOURS_FLEET = 'SH-01';
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -114,6 +120,7 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...OFFLINE_FLEET,
   TELEMATICS_FLEET,
   ...METERS_FLEET,
+  SEASON_HOURS_FLEET,
 ]);
 
 /** The signed-in person's Larkspur Flats Farm membership: its organization id and time zone. */
