@@ -26,10 +26,16 @@ const [TRACTOR, BALER] = METERS_FLEET;
 const TASK = 'PTO gearbox oil';
 
 /** The page at a phone's width scrolls no wider than the screen. */
-async function expectFitsPhone(browser: TestBrowser, url: string, shot: string) {
+async function expectFitsPhone(
+  browser: TestBrowser,
+  url: string,
+  shot: string,
+  prepare?: (phone: Page) => Promise<void>,
+) {
   const phone = await browser.newPage(PHONE);
   await phone.goto(url);
   await settle(phone);
+  await prepare?.(phone);
   expect(await fitProblems(phone, [])).toEqual([]);
   await screenshot(phone, shot);
   await phone.close();
@@ -186,7 +192,33 @@ describe('meters — a PTO-hours meter with its reading and task; a bale counter
     await dialog.getByText(/This meter has 2 readings and 1 task/).waitFor();
     await dialog.getByRole('button', { name: 'Cancel' }).click();
     expect(await list.getByRole('listitem', { name: 'PTO hours' }).count()).toBe(1);
-    await expectFitsPhone(browser, `/o/${org}/machines/${tractorId}#meter`, 'meters-phone');
+  });
+
+  it('renames the PTO meter “Rear” and makes it primary; the mark moves', async () => {
+    const section = page.getByRole('region', { name: 'Meters' });
+    const list = section.getByRole('list', { name: 'Meters' });
+    await list
+      .getByRole('listitem', { name: 'PTO hours' })
+      .getByRole('button', { name: 'Rename' })
+      .click();
+    const form = list.getByRole('form', { name: 'Rename PTO hours' });
+    await form.getByLabel('Label').fill('Rear');
+    await form.getByRole('button', { name: 'Save name' }).click();
+    await section.getByText('Renamed: PTO hours — Rear.').waitFor();
+    const rear = list.getByRole('listitem', { name: 'PTO hours — Rear' });
+    await rear.getByRole('button', { name: 'Make primary' }).click();
+    await section.getByText('PTO hours — Rear is now the primary meter.').waitFor();
+    await rear.getByText('Primary', { exact: true }).waitFor();
+    const engine = list.getByRole('listitem', { name: 'Engine hours' });
+    await engine.getByRole('button', { name: 'Make primary' }).waitFor();
+    expect(await engine.getByText('Primary', { exact: true }).count()).toBe(0);
+    // on a phone, the list and the open add form fit the width
+    await expectFitsPhone(
+      browser,
+      `/o/${org}/machines/${tractorId}#meter`,
+      'meters-phone',
+      (phone) => phone.getByRole('button', { name: 'Add meter' }).click(),
+    );
   });
 
   it('the operator resets the bale counter; the history shows the reset, the meters read only', async () => {
