@@ -135,6 +135,18 @@ describe('meter chart data — the last 183 days of a long history, no estimate'
     expect(data.replacements).toEqual([{ t: at(300), label: 'Meter replaced' }]);
   });
 
+  it('buildMeterChartData — a counter reset (issue 13) — marked as a reset, not a new meter', () => {
+    const reset = { ...replacement(300), kind: 'reset' as const };
+    const chart = buildMeterChartData(
+      [reading(400, 800), reading(200, 400), reading(0, 0)],
+      [reset],
+      null,
+      [],
+      'all',
+    );
+    expect(chart?.replacements).toEqual([{ t: at(300), label: 'Counter reset' }]);
+  });
+
   it('buildMeterChartData — due lines 10 h apart — each its own colour, labels at opposite ends', () => {
     // Values 434 … 830, pad 19.8 → ticks over 414.2 … 849.8: step 200 (435.6 / 4 = 108.9).
     // A label needs 18/220 of 600 = 49 h: 830 is too close to 820 for the same end, so it takes

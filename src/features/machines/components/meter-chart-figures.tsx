@@ -127,7 +127,7 @@ export function ChartSummaryTable({
           ))}
           {data.replacements.map((r) => (
             <tr key={r.t}>
-              <th scope="row">Meter replaced</th>
+              <th scope="row">{r.label}</th>
               <td>{date(r.t)}</td>
               <td>—</td>
             </tr>

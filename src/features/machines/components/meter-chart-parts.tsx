@@ -89,11 +89,12 @@ export function ChartTooltip({
 /** What each line and mark is; hidden from screen readers, who get the table instead. */
 export function ChartLegend({
   hasProjection,
-  hasReplacement,
+  replacementLabels,
   hasServices,
 }: {
   hasProjection: boolean;
-  hasReplacement: boolean;
+  /** the kinds of meter change on the chart: "Meter replaced", "Counter reset" */
+  replacementLabels: string[];
   hasServices: boolean;
 }) {
   const item = 'flex items-center gap-2';
@@ -149,14 +150,14 @@ export function ChartLegend({
           Service done
         </li>
       ) : null}
-      {hasReplacement ? (
-        <li className={item}>
+      {replacementLabels.map((label) => (
+        <li key={label} className={item}>
           <svg width="8" height="14">
             <line x1="4" y1="0" x2="4" y2="14" stroke={REPLACED} strokeWidth="2" />
           </svg>
-          Meter replaced
+          {label}
         </li>
-      ) : null}
+      ))}
     </ul>
   );
 }

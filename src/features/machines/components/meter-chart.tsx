@@ -202,7 +202,7 @@ export function MeterChart({
       </div>
       <ChartLegend
         hasProjection={Boolean(data.projection)}
-        hasReplacement={data.replacements.length > 0}
+        replacementLabels={[...new Set(data.replacements.map((r) => r.label))]}
         hasServices={marks.length > 0}
       />
       <DueMeterList dueLines={data.dueLines} dueBeyond={data.dueBeyond} unit={unit} />

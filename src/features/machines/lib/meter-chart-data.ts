@@ -166,7 +166,11 @@ export function buildMeterChartData(
     dueLines,
     dueBeyond,
     replacements: replacements
-      .map((r) => ({ t: new Date(r.replacedAt).getTime(), label: 'Meter replaced' }))
+      .map((r) => ({
+        t: new Date(r.replacedAt).getTime(),
+        // a bale counter zeroed is the same counter, not a new meter (issue 13)
+        label: r.kind === 'reset' ? 'Counter reset' : 'Meter replaced',
+      }))
       .filter((r) => r.t >= first.t && r.t <= last.t),
     // a single reading and no estimate: the week around it, so the axis shows days, not hours
     xDomain: projection
