@@ -35,11 +35,22 @@ export function weekIndexOf(service: OutlookService, start: string, weeks: numbe
   return week < weeks ? week : null;
 }
 
+/** Plans by the week of their date; one dated before `start` in the first (still to do). */
+function plansByWeek(plans: OutlookPlan[], start: string, weeks: number): OutlookPlan[][] {
+  const byWeek: OutlookPlan[][] = Array.from({ length: weeks }, () => []);
+  for (const plan of plans) {
+    const days = dayNumberFromIso(plan.plannedFor) - dayNumberFromIso(start);
+    const week = Math.max(0, Math.floor(days / 7));
+    if (week < weeks) byWeek[week].push(plan);
+  }
+  return byWeek;
+}
+
 /**
  * The outlook's weeks from `start` (a Monday): per week its services (by the date they fall due,
  * overdue in the first week) with their labour summed (tasks without an estimate counted apart)
- * and their parts and fluids summed in `units`, and the plans dated in it (open plans dated
- * before `start` in the first week: they are still to do).
+ * and their parts and fluids summed in `units`, the plans dated in it (open plans dated
+ * before `start` in the first week: they are still to do) and the bookings proposed for it.
  */
 export function outlookWeeks(
   start: string,
@@ -47,18 +58,15 @@ export function outlookWeeks(
   inputs: OutlookInput[],
   plans: OutlookPlan[],
   units: UnitSystem,
+  proposed: OutlookPlan[] = [],
 ): OutlookWeek[] {
   const servicesOf: OutlookInput[][] = Array.from({ length: weeks }, () => []);
   for (const input of inputs) {
     const week = weekIndexOf(input.service, start, weeks);
     if (week !== null) servicesOf[week].push(input);
   }
-  const plansOf: OutlookPlan[][] = Array.from({ length: weeks }, () => []);
-  for (const plan of plans) {
-    const days = dayNumberFromIso(plan.plannedFor) - dayNumberFromIso(start);
-    const week = Math.max(0, Math.floor(days / 7));
-    if (week < weeks) plansOf[week].push(plan);
-  }
+  const plansOf = plansByWeek(plans, start, weeks);
+  const proposedOf = plansByWeek(proposed, start, weeks);
   return servicesOf.map((list, i) => {
     const weekStart = addDaysIso(start, i * 7);
     const weekEnd = addDaysIso(weekStart, 6);
@@ -91,6 +99,8 @@ export function outlookWeeks(
       planned: weekPlans,
       plannedLabourHours: round2(weekPlans.reduce((n, p) => n + p.labourHours, 0)),
       plannedLabourUnknown: weekPlans.reduce((n, p) => n + p.labourUnknown, 0),
+      proposed: proposedOf[i],
+      proposedLabourHours: round2(proposedOf[i].reduce((n, p) => n + p.labourHours, 0)),
     };
   });
 }

@@ -8,7 +8,7 @@ import type {
   ShopOutlookQuery,
 } from '../../shared/schemas/shop-outlook';
 import { notFound } from '../errors';
-import { Machine, ServiceRecord, ServiceTask } from '../models';
+import { Machine, ServiceBooking, ServiceRecord, ServiceTask } from '../models';
 import type { OrgAccess } from '../policies/access';
 import { boardRows } from './dealer-board';
 import { dueRows } from './due-list';
@@ -76,6 +76,53 @@ async function openPlans(farms: OrgRef[], end: string) {
   return { all, dated };
 }
 
+/**
+ * Bookings a dealer proposed for a date inside the span that the farm has not decided yet, one
+ * entry per machine, labour from the tasks' estimates. `where` picks the farm's or the dealer's.
+ */
+async function proposedBookings(
+  where: { organizationId: string | string[]; dealerOrganizationId?: string },
+  span: { start: string; end: string },
+  customerOf: (farmId: string) => OrgRef | null,
+): Promise<OutlookPlan[]> {
+  const farmIds = ([] as string[]).concat(where.organizationId);
+  if (!farmIds.length) return [];
+  const bookings = await ServiceBooking.findAll({
+    where: {
+      organizationId: { [Op.in]: farmIds },
+      ...(where.dealerOrganizationId && { dealerOrganizationId: where.dealerOrganizationId }),
+      status: 'proposed',
+      proposedFor: { [Op.between]: [span.start, span.end] },
+    },
+    order: [
+      ['proposedFor', 'ASC'],
+      ['createdAt', 'ASC'],
+    ],
+  });
+  const taskIds = bookings.flatMap((b) => b.items.flatMap((i) => i.tasks.map((t) => t.taskId)));
+  const tasks = taskIds.length
+    ? await ServiceTask.findAll({
+        where: { organizationId: { [Op.in]: farmIds }, id: { [Op.in]: [...new Set(taskIds)] } },
+        attributes: ['id', 'labourHours'],
+      })
+    : [];
+  const labourOf = new Map(tasks.map((t) => [t.id, t.labourHours]));
+  return bookings.flatMap((b) =>
+    b.items.map((item) => {
+      const labour = item.tasks.map((t) => labourOf.get(t.taskId) ?? null);
+      return {
+        id: b.id,
+        plannedFor: b.proposedFor,
+        machine: { id: item.machineId, fleetNumber: item.fleetNumber, name: item.machineName },
+        customer: customerOf(b.organizationId),
+        tasks: item.tasks.length,
+        labourHours: round2(labour.reduce<number>((n, h) => n + (h ?? 0), 0)),
+        labourUnknown: labour.filter((h) => h === null).length,
+      };
+    }),
+  );
+}
+
 /** The due rows as the outlook's services, with each task's parts and fluids. */
 async function servicesOf(
   rows: (DueRow & { customer?: OrgRef })[],
@@ -119,14 +166,15 @@ const undatedOf = (rows: DueRow[]) =>
 /**
  * The farm shop's next weeks from this Monday (the farm's time zone): per week the services its
  * due list brings due (overdue in the first week), their labour, parts and fluids, beside the
- * open plans dated in it (accepted bookings are plans).
+ * open plans dated in it (accepted bookings are plans) and the dealers' proposals awaiting it.
  */
 export async function shopOutlook(access: OrgAccess, query: ShopOutlookQuery, now = new Date()) {
   const org = access.organization;
   const span = spanOf(org.timeZone, query.weeks, now);
-  const [{ rows }, plans] = await Promise.all([
+  const [{ rows }, plans, proposed] = await Promise.all([
     dueRows(access, { horizon: span.horizon }, now),
     openPlans([{ id: org.id, name: org.name }], span.end),
+    proposedBookings({ organizationId: org.id }, span, () => null),
   ]);
   const inputs = await servicesOf(rows, [org.id], plans.all);
   return {
@@ -135,7 +183,7 @@ export async function shopOutlook(access: OrgAccess, query: ShopOutlookQuery, no
     end: span.end,
     units: org.units,
     undated: undatedOf(rows),
-    weeks: outlookWeeks(span.start, query.weeks, inputs, plans.dated, org.units),
+    weeks: outlookWeeks(span.start, query.weeks, inputs, plans.dated, org.units, proposed),
   };
 }
 
@@ -143,7 +191,8 @@ export async function shopOutlook(access: OrgAccess, query: ShopOutlookQuery, no
  * The dealer's next weeks across its linked customers (or one, `customerId`; one not linked is
  * 404): the customers' due rows as the board reads them (each farm's own list, its reads
  * audited), and the plans of the customers whose link gives `service` access (service history is
- * not shown through a view link). Weeks start on the dealer's Monday; fluids in its units.
+ * not shown through a view link), and its own proposals not yet decided. Weeks start on the
+ * dealer's Monday; fluids in its units.
  */
 export async function dealerOutlook(
   access: OrgAccess,
@@ -163,8 +212,16 @@ export async function dealerOutlook(
     throw notFound('Customer');
   const shown = board.customers.filter((c) => !query.customerId || c.id === query.customerId);
   const serviced = shown.filter((c) => c.access === 'service');
-  const plans = await openPlans(serviced, span.end);
   const customerOf = new Map(shown.map((c) => [c.id, { id: c.id, name: c.name }]));
+  const [plans, proposed] = await Promise.all([
+    openPlans(serviced, span.end),
+    // the dealer's own proposals, whatever the link's access: it made them
+    proposedBookings(
+      { organizationId: shown.map((c) => c.id), dealerOrganizationId: org.id },
+      span,
+      (farmId) => customerOf.get(farmId) ?? null,
+    ),
+  ]);
   const farmOfPlan = new Map(plans.all.map((r) => [r.id, r.organizationId]));
   const dated = plans.dated.map((p) => ({
     ...p,
@@ -182,6 +239,6 @@ export async function dealerOutlook(
     units: org.units,
     undated: undatedOf(board.rows),
     customers: board.customers,
-    weeks: outlookWeeks(span.start, query.weeks, inputs, dated, org.units),
+    weeks: outlookWeeks(span.start, query.weeks, inputs, dated, org.units, proposed),
   };
 }

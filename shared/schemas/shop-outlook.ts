@@ -48,7 +48,10 @@ export const outlookServiceSchema = z.object({
 });
 export type OutlookService = z.infer<typeof outlookServiceSchema>;
 
-/** A planned visit (an open plan, accepted bookings included) dated in the week. */
+/**
+ * A planned visit (an open plan, accepted bookings included) dated in the week; or, in `proposed`,
+ * one machine of a booking the farm has not decided yet (its id is the booking's).
+ */
 export const outlookPlanSchema = z.object({
   id: z.string(),
   plannedFor: z.string(),
@@ -81,6 +84,9 @@ export const outlookWeekSchema = z.object({
   planned: z.array(outlookPlanSchema),
   plannedLabourHours: z.number(),
   plannedLabourUnknown: z.number(),
+  /** a dealer's bookings proposed for the week and not yet decided by the farm: one per machine */
+  proposed: z.array(outlookPlanSchema),
+  proposedLabourHours: z.number(),
 });
 export type OutlookWeek = z.infer<typeof outlookWeekSchema>;
 

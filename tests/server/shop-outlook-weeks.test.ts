@@ -42,7 +42,7 @@ describe('shop outlook weeks — which week, and each week’s sums', () => {
     expect(weekIndexOf(service(over), START, 4)).toBe(expected);
   });
 
-  it('outlookWeeks — 4 weeks: labour summed with those without an estimate counted; plans before the start in week 1, after the end in none', () => {
+  it('outlookWeeks — 4 weeks: labour summed with those without an estimate counted; plans before the start in week 1, after the end in none; proposed bookings apart', () => {
     const weeks = outlookWeeks(
       START,
       4,
@@ -75,6 +75,7 @@ describe('shop outlook weeks — which week, and each week’s sums', () => {
         plan({ id: 'late', plannedFor: '2027-04-01', labourHours: 5 }),
       ],
       'metric',
+      [plan({ id: 'bk', plannedFor: '2027-03-09', labourHours: 1.5 })],
     );
     expect(weeks.map((w) => [w.isoWeek, w.start, w.end])).toEqual([
       ['2027-W09', '2027-03-01', '2027-03-07'],
@@ -92,6 +93,9 @@ describe('shop outlook weeks — which week, and each week’s sums', () => {
     });
     expect(weeks[0].planned.map((p) => p.id)).toEqual(['old']);
     expect(weeks[1]).toMatchObject({ services: [], labourHours: 0, planned: [] });
+    // a booking proposed for Tue 9 Mar, beside (not in) the planned labour of week 2
+    expect(weeks[1].proposed.map((p) => p.id)).toEqual(['bk']);
+    expect(weeks[1]).toMatchObject({ proposedLabourHours: 1.5, plannedLabourHours: 0 });
     // week 3: c 2 h, on a plan (none unplanned); its parts and oil, needed on its date
     expect(weeks[2]).toMatchObject({
       labourHours: 2,

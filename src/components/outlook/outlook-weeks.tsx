@@ -67,7 +67,7 @@ function WeekRow({
 }) {
   const [open, setOpen] = useState(false);
   const panelId = useId();
-  const empty = week.services.length === 0 && week.planned.length === 0;
+  const empty = week.services.length + week.planned.length + week.proposed.length === 0;
   const unknown = week.labourUnknown
     ? ` (${countOf(week.labourUnknown, 'service')} without an estimate)`
     : '';
@@ -86,6 +86,9 @@ function WeekRow({
           {countOf(week.services.length, 'service')} · forecast{' '}
           {formatOutlookHours(week.labourHours)}
           {unknown} · planned {formatOutlookHours(week.plannedLabourHours)}
+          {week.proposed.length
+            ? ` · proposed ${formatOutlookHours(week.proposedLabourHours)}`
+            : ''}
         </span>
       </button>
       {open ? (
@@ -93,7 +96,16 @@ function WeekRow({
           {week.services.length > 0 ? (
             <ServiceList week={week} first={first} links={links} />
           ) : null}
-          {week.planned.length > 0 ? <PlanList plans={week.planned} links={links} /> : null}
+          {week.planned.length > 0 ? (
+            <PlanList title="Already planned" plans={week.planned} links={links} />
+          ) : null}
+          {week.proposed.length > 0 ? (
+            <PlanList
+              title="Proposed by a dealer, not decided yet"
+              plans={week.proposed}
+              links={links}
+            />
+          ) : null}
           <PartsList week={week} />
         </div>
       ) : null}
@@ -165,13 +177,24 @@ function ServiceList({
   );
 }
 
-function PlanList({ plans, links }: { plans: OutlookPlan[]; links: OutlookLinks }) {
+function PlanList({
+  title,
+  plans,
+  links,
+}: {
+  title: string;
+  plans: OutlookPlan[];
+  links: OutlookLinks;
+}) {
   return (
     <div className="flex flex-col gap-2">
-      <h4 className="font-black text-field-900">Already planned</h4>
-      <ul aria-label="Planned visits" className="flex flex-col gap-2">
+      <h4 className="font-black text-field-900">{title}</h4>
+      <ul aria-label={title} className="flex flex-col gap-2">
         {plans.map((p) => (
-          <li key={p.id} className="flex flex-col gap-1 rounded-lg bg-oat-50 p-2 text-sm">
+          <li
+            key={`${p.id}-${p.machine.id}`}
+            className="flex flex-col gap-1 rounded-lg bg-oat-50 p-2 text-sm"
+          >
             <span>
               <MachineName machine={p.machine} customer={p.customer} links={links} />
             </span>
