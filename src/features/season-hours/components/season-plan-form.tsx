@@ -137,7 +137,9 @@ export function SeasonPlanForm({
         <p className="text-field-700" aria-live="polite">
           {worked !== null
             ? `Worked out: ${formatMeter(Math.round(worked * 10) / 10, row.unit)} for the season.`
-            : `Enter the area and the work rate to see the ${unitLabel} it comes to.`}
+            : (numberOrNull(watched.area) ?? 0) > 0 && (numberOrNull(watched.areaPerHour) ?? 0) > 0
+              ? `An area cannot be said in ${unitLabel}: plan the use in ${unitLabel} instead.`
+              : `Enter the area and the work rate to see the ${unitLabel} it comes to.`}
         </p>
       ) : null}
       <div className="flex flex-col gap-2 sm:flex-row">
