@@ -17,3 +17,12 @@ export const lazyPage =
     const [Component, loader] = pick(await load());
     return loader ? { Component, loader: loader(queryClient) } : { Component };
   };
+
+/**
+ * A page whose loader is in the first file and only its component fetched on the first visit
+ * (React Router's lazy object): the router calls the loader at once, so its reads run while the
+ * module downloads, instead of after it (a lazy function must resolve before its loader exists).
+ */
+export const lazyComponent = <M>(load: () => Promise<M>, pick: (module: M) => ComponentType) => ({
+  Component: async () => pick(await load()),
+});

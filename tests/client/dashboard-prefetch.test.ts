@@ -1,5 +1,7 @@
-// The dashboard's first load: on a cold start the due list of a farm opened here before is asked
-// for beside the session, not one round trip after it; a guess never replaces the session's word.
+// The dashboard's first load (dashboard-loader.ts): on a cold start the due list and daily care of
+// a farm opened here before are asked for beside the session, not one round trip after it; the
+// bookings and the first-run checklist as soon as the session names a role that sees them; a guess
+// never replaces the session's word.
 // Node has no localStorage: the test gives the modules a small in-memory one and a fake fetch that
 // holds the session's answer back until the test lets it go.
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
@@ -17,9 +19,10 @@ function memoryStorage() {
   };
 }
 
+let role = 'manager';
 const me = (kind: 'farm' | 'dealer') => ({
   user: { id: 'u-1', name: 'Marta', email: 'marta@example.test' },
-  memberships: [{ role: 'manager', organization: { id: ORG, name: 'Test farm', kind } }],
+  memberships: [{ role, organization: { id: ORG, name: 'Test farm', kind } }],
 });
 const json = (body: unknown) =>
   new Response(JSON.stringify(body), {
@@ -32,6 +35,7 @@ let releaseMe: (kind: 'farm' | 'dealer') => void;
 
 beforeEach(() => {
   asked = [];
+  role = 'manager';
   vi.stubGlobal('localStorage', memoryStorage());
   const meAnswer = new Promise<'farm' | 'dealer'>((resolve) => (releaseMe = resolve));
   vi.stubGlobal('fetch', async (url: string) => {
@@ -44,7 +48,7 @@ beforeEach(() => {
 afterEach(() => vi.unstubAllGlobals());
 
 async function startDashboard() {
-  const { dashboardLoader } = await import('../../src/app/routes/dashboard');
+  const { dashboardLoader } = await import('../../src/app/routes/dashboard-loader');
   const request = new Request(`http://hourstone.test/o/${ORG}`);
   const loading = dashboardLoader(new QueryClient())({
     request,
@@ -55,6 +59,8 @@ async function startDashboard() {
   return { loading };
 }
 const dueAsked = () => asked.filter((url) => url.includes(`/organizations/${ORG}/due?`)).length;
+const askedFor = (tail: string) =>
+  asked.filter((url) => url.endsWith(`/organizations/${ORG}/${tail}`)).length;
 
 describe('dashboard loader — due list beside the session', () => {
   it('a farm opened here before: the due list is asked for while the session is still on its way, once', async () => {
@@ -85,5 +91,36 @@ describe('dashboard loader — due list beside the session', () => {
     releaseMe('dealer');
     await loading.catch(() => undefined);
     expect(dueAsked()).toBe(0);
+  });
+
+  it('a farm opened here before: daily care is asked for beside the session too, once', async () => {
+    const { rememberOrganization } = await import('../../src/lib/auth');
+    rememberOrganization(ORG, 'farm');
+    const { loading } = await startDashboard();
+    expect(askedFor('daily-care')).toBe(1);
+    releaseMe('farm');
+    await loading;
+    expect(askedFor('daily-care')).toBe(1);
+  });
+
+  it("a farm's manager: bookings and the first-run checklist are asked for once the session names the role, not before", async () => {
+    const { rememberOrganization } = await import('../../src/lib/auth');
+    rememberOrganization(ORG, 'farm');
+    const { loading } = await startDashboard();
+    expect(askedFor('bookings') + askedFor('first-run-checklist')).toBe(0);
+    releaseMe('farm');
+    await loading;
+    expect(askedFor('bookings')).toBe(1);
+    expect(askedFor('first-run-checklist')).toBe(1);
+  });
+
+  it("a farm's operator: neither bookings nor the first-run checklist is asked for (the page shows neither)", async () => {
+    role = 'operator';
+    const { loading } = await startDashboard();
+    releaseMe('farm');
+    await loading;
+    expect(dueAsked()).toBe(1);
+    expect(askedFor('daily-care')).toBe(1);
+    expect(askedFor('bookings') + askedFor('first-run-checklist')).toBe(0);
   });
 });
