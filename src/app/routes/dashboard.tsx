@@ -1,58 +1,27 @@
-import type { QueryClient } from '@tanstack/react-query';
 import { lazy, Suspense } from 'react';
-import { Link, useSearchParams, type LoaderFunctionArgs } from 'react-router-dom';
+import { Link, useSearchParams } from 'react-router-dom';
 import { Section } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
 import { ListSkeleton } from '../../components/ui/skeleton';
-import { dueQueryOptions } from '../../features/due/api/get-due';
 import type { DueFilters } from '../../features/due/api/types';
 import { DueBoard } from '../../features/due/components/due-board';
 import { DailyCareBoard } from '../../features/due/components/daily-care-board';
 import { WaitingProposals } from '../../features/dealers/components/waiting-proposals';
 import { FirstRunChecklistPanel } from '../../features/onboarding/components/first-run-checklist';
 import { readDueFilters, writeDueFilters } from '../../features/due/filters';
-import {
-  findMembership,
-  rememberedOrganizationKind,
-  meQueryOptions,
-  useCurrentMembership,
-} from '../../lib/auth';
+import { useCurrentMembership } from '../../lib/auth';
 import { paths } from '../paths';
+import { loadDealerBoard, SEES_BOOKINGS } from './dashboard-loader';
 
-// A dealer's board is another role's screen: fetched only when a dealer's dashboard opens.
-const loadDealerBoard = () => import('./dealer-board');
+export { dashboardLoader } from './dashboard-loader';
+
+// The page's loader is dashboard-loader.ts (it starts every read of the page, each on its own). A
+// dealer's board is another role's screen: fetched only when a dealer's dashboard opens.
 const DealerBoardSection = lazy(() =>
   loadDealerBoard().then((m) => ({ default: m.DealerBoardSection })),
 );
 
-/** Starts loading the due list with the page (farms only: a dealer has no machines of its own). */
-export const dashboardLoader =
-  (queryClient: QueryClient) =>
-  async ({ request, params }: LoaderFunctionArgs) => {
-    const orgId = params.orgId ?? '';
-    const prefetchDue = () =>
-      void queryClient.prefetchQuery(
-        dueQueryOptions(orgId, readDueFilters(new URL(request.url).searchParams)),
-      );
-    // On a cold start the session is not known yet: a farm opened here before gets its due list
-    // asked for beside the session, not one round trip after it, and only once.
-    const sessionKnown = queryClient.getQueryData(meQueryOptions().queryKey) !== undefined;
-    const early = !sessionKnown && rememberedOrganizationKind(orgId) === 'farm';
-    if (early) prefetchDue();
-    const me = await queryClient.ensureQueryData(meQueryOptions()).catch(() => null);
-    const membership = me ? findMembership(me, orgId) : undefined;
-    if (membership?.organization.kind === 'farm' && !early) prefetchDue();
-    // a dealer's dashboard is its board across customers
-    if (membership?.organization.kind === 'dealer') {
-      const { dealerBoardLoader } = await loadDealerBoard();
-      return dealerBoardLoader(queryClient)({ request, params } as LoaderFunctionArgs);
-    }
-    return null;
-  };
-
 const LOGS_HOURS = new Set(['manager', 'technician', 'operator']);
-// who on a farm sees the dealers' proposals (the bookings page's roles)
-const SEES_BOOKINGS = new Set(['manager', 'technician']);
 
 export function DashboardPage() {
   const { membership } = useCurrentMembership();
