@@ -19,6 +19,7 @@ type ItemId =
   | 'logHours'
   | 'defects'
   | 'shopWeek'
+  | 'seasonHours'
   | 'team'
   | 'reminders'
   | 'messages'
@@ -43,6 +44,11 @@ const ITEMS: Record<ItemId, NavItem> = {
     to: (orgId: string) => org.shopWeek.href(orgId),
     icon: 'wrench',
   },
+  seasonHours: {
+    label: 'Season hours',
+    to: (orgId: string) => org.seasonHours.href(orgId),
+    icon: 'bars',
+  },
   team: { label: 'Team', to: org.team.href, icon: 'team' },
   reminders: { label: 'Reminders', to: org.reminders.href, icon: 'mail' },
   messages: { label: 'Messages', to: org.messages.href, icon: 'send' },
@@ -63,7 +69,16 @@ const ITEMS: Record<ItemId, NavItem> = {
 // Per role, most used first: on a phone the first four sit in the bottom bar and the rest go
 // under "More" (components/layouts/main-nav.tsx), so the order decides what is one tap away.
 const ORDER: Record<Role, readonly ItemId[]> = {
-  operator: ['walkaround', 'logHours', 'fleet', 'dashboard', 'defects', 'reminders', 'account'],
+  operator: [
+    'walkaround',
+    'logHours',
+    'fleet',
+    'dashboard',
+    'defects',
+    'seasonHours',
+    'reminders',
+    'account',
+  ],
   technician: [
     'dashboard',
     'shopWeek',
@@ -71,6 +86,7 @@ const ORDER: Record<Role, readonly ItemId[]> = {
     'fleet',
     'logHours',
     'walkaround',
+    'seasonHours',
     'bookings',
     'reminders',
     'account',
@@ -81,6 +97,7 @@ const ORDER: Record<Role, readonly ItemId[]> = {
     'logHours',
     'defects',
     'shopWeek',
+    'seasonHours',
     'bookings',
     'team',
     'dealers',

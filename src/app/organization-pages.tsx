@@ -76,6 +76,13 @@ export function organizationPages(page: ReturnType<typeof lazyPage>): RouteObjec
       ),
     },
     {
+      path: paths.organization.seasonHours.path,
+      lazy: page(
+        () => import('./routes/season-hours'),
+        (m) => [m.SeasonHoursPage, m.seasonHoursLoader],
+      ),
+    },
+    {
       path: paths.organization.walkaroundPick.path,
       lazy: page(
         () => import('./routes/walkaround-pick'),

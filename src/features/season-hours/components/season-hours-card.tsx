@@ -56,7 +56,10 @@ export function SeasonHoursCard({
     >
       <div className="flex flex-wrap items-baseline justify-between gap-x-3">
         <h3 id={titleId} className="min-w-0 text-lg font-black break-words text-field-950">
-          <Link to={machineHref} className="underline-offset-2 hover:underline">
+          <Link
+            to={machineHref}
+            className="inline-flex min-h-touch items-center underline-offset-2 hover:underline"
+          >
             {machine.fleetNumber} · {machine.name}
           </Link>
         </h3>
