@@ -48,11 +48,16 @@ export function OutlookChart({ weeks }: { weeks: OutlookWeek[] }) {
           <Legend wrapperStyle={{ fontSize: 12 }} />
           <Bar
             dataKey="forecast"
-            name="Forecast labour"
+            name="Forecast labour (h)"
             fill={FORECAST}
             isAnimationActive={false}
           />
-          <Bar dataKey="planned" name="Planned labour" fill={PLANNED} isAnimationActive={false} />
+          <Bar
+            dataKey="planned"
+            name="Planned labour (h)"
+            fill={PLANNED}
+            isAnimationActive={false}
+          />
         </BarChart>
       </ResponsiveContainer>
     </div>
