@@ -1,15 +1,22 @@
+import type { QueryClient } from '@tanstack/react-query';
 import type { RouteObject } from 'react-router-dom';
-import type { lazyPage } from './lazy-page';
+import { lazyComponent, type lazyPage } from './lazy-page';
 import { paths } from './paths';
+import { dashboardLoader } from './routes/dashboard-loader';
 
 /** The pages inside an organization's shell (/o/:orgId/…), each fetched on its first visit. */
-export function organizationPages(page: ReturnType<typeof lazyPage>): RouteObject[] {
+export function organizationPages(
+  page: ReturnType<typeof lazyPage>,
+  queryClient: QueryClient,
+): RouteObject[] {
   return [
     {
+      // the start page: its loader is in the first file, so its reads start beside the session
       index: true,
-      lazy: page(
+      loader: dashboardLoader(queryClient),
+      lazy: lazyComponent(
         () => import('./routes/dashboard'),
-        (m) => [m.DashboardPage, m.dashboardLoader],
+        (m) => m.DashboardPage,
       ),
     },
     {

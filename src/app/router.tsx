@@ -104,7 +104,7 @@ export function createAppRouter(queryClient: QueryClient) {
             {
               // errors of a page show inside the shell, so the navigation stays usable
               errorElement: <RouteError homeHref={home} inShell />,
-              children: organizationPages(page),
+              children: organizationPages(page, queryClient),
             },
           ],
         },

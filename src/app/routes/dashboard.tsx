@@ -13,10 +13,9 @@ import { useCurrentMembership } from '../../lib/auth';
 import { paths } from '../paths';
 import { loadDealerBoard, SEES_BOOKINGS } from './dashboard-loader';
 
-export { dashboardLoader } from './dashboard-loader';
-
-// The page's loader is dashboard-loader.ts (it starts every read of the page, each on its own). A
-// dealer's board is another role's screen: fetched only when a dealer's dashboard opens.
+// The page's loader is dashboard-loader.ts, in the first file (it starts every read of the page
+// beside the session). A dealer's board is another role's screen: fetched only when a dealer's
+// dashboard opens.
 const DealerBoardSection = lazy(() =>
   loadDealerBoard().then((m) => ({ default: m.DealerBoardSection })),
 );
