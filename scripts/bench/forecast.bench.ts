@@ -82,7 +82,10 @@ async function buildFarm() {
     { replacements: { org: org.id, days: DAYS } },
   );
   const built = performance.now() - t0;
-  const machines = await Machine.findAll({ where: { organizationId: org.id }, attributes: ['id'] });
+  const machines = await Machine.findAll({
+    where: { organizationId: org.id },
+    attributes: ['id', 'organizationId'],
+  });
   const t1 = performance.now();
   for (const m of machines) await refreshMachineForecast(m.id, org.id);
   const summarised = performance.now() - t1;
