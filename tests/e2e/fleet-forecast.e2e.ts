@@ -132,7 +132,10 @@ describe('fleet and forecast — the manager in the browser', () => {
       .getByRole('link', { name: 'Fleet' })
       .click();
     await page.getByRole('heading', { name: 'Fleet' }).waitFor();
-    await page.getByRole('link', { name: /T-02/ }).first().click();
+    await page
+      .getByRole('link', { name: /^T-02\b/ })
+      .first()
+      .click();
     await page.getByRole('heading', { name: /^T-02 · / }).waitFor();
     await page.getByRole('list', { name: 'Service tasks' }).waitFor();
     const chart = page.locator('.recharts-surface').first();
