@@ -34,14 +34,17 @@ export function Projected({ row }: { row: BoardRow }) {
         <span className="text-sm">{overText(row.due, row.machine.meterUnit)}</span>
       </span>
     );
-  // two outcomes across an idle spell in short (the task's page gives both ranges)
+  // two outcomes across an idle spell in short: the date shown is the likelier one, the other
+  // side said in words (the task's page gives both ranges)
   const o = row.due.outcomes;
   const range = o
-    ? `late this season or early next, likelier ${o.likelier === 'this_season' ? 'this season' : 'next season'}`
+    ? o.likelier === 'this_season'
+      ? 'or early next season'
+      : 'or late this season'
     : dueSpreadText(row.due);
   if (!row.due.effectiveDate && !range) return <span className="text-field-600">No forecast</span>;
   return (
-    <span className="flex max-w-64 flex-col">
+    <span className="flex max-w-48 flex-col">
       {row.due.effectiveDate ? <span>{dueDateText(row.due.effectiveDate)}</span> : null}
       {range ? <span className="text-sm text-field-600">{range}</span> : null}
     </span>
