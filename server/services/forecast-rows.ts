@@ -9,7 +9,7 @@ import { directQuery } from '../db-direct';
 import type { MachineForecast, MeterReading, ServiceTask, TaskDuePoint } from '../models';
 import { INSERT_READINGS_SQL, matchStored, type ReadingRow } from './reading-rows';
 
-/** What a task's due point is computed from (forecast.ts duePointsFor). */
+/** What a task's due point is computed from (due-points-of-meter.ts duePointsFor). */
 export type DueTask = Pick<
   ServiceTask,
   | 'id'

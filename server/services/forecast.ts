@@ -1,16 +1,7 @@
 import { Op, QueryTypes, type InferCreationAttributes, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { Machine, MachineForecast, MachineMeter, Organization, type MeterReading } from '../models';
-import {
-  computeDuePoint,
-  estimateUsage,
-  isoFromDayNumber,
-  localDayNumber,
-  plannedUseOn,
-  todayIso,
-  type DuePoint,
-  type UsageEstimate,
-} from '../../shared/domain';
+import { plannedUseOn, todayIso } from '../../shared/domain';
 import { dueTasksOf, writeForecasts, type DueRow, type DueTask } from './forecast-rows';
 import type { ReadingRow } from './reading-rows';
 import {
@@ -22,6 +13,8 @@ import {
   type SummaryColumns,
   type SummaryReading,
 } from './daily-summary';
+
+import { duePointsFor, storedUsage } from './due-points-of-meter';
 
 export { summariseReadings } from './daily-summary';
 
@@ -69,70 +62,6 @@ export async function refreshMachineForecast(
   const summaries = new Map([...byMeter].map(([id, list]) => [id, summaryOf(list, timeZone)]));
   const meters = [...byMeter.keys()].map((id) => ({ id, machineId }));
   await storeForecasts(organizationId, summaries, { transaction, timeZone, meters });
-}
-
-/**
- * The due point of each task of one meter, from its summary, as of a local date; the machine's
- * season months (1–12, [] = all year) date its season services.
- */
-export function duePointsFor(
-  forecast: Pick<MachineForecast, 'daily' | 'lastValue' | 'firstTakenAt' | 'firstValue'> | null,
-  tasks: DueTask[],
-  timeZone: string,
-  asOfIso: string,
-  now: Date,
-  seasonMonths: readonly number[] = [],
-  plannedSeasonUse: number | null = null,
-): { usage: UsageEstimate; points: Map<string, DuePoint> } {
-  const daily = forecast?.daily ?? [];
-  // season months are the prior of a machine in its first year; the season's plan that of its pace
-  const usage = estimateUsage(daily, localDayNumber(now, timeZone), {
-    seasonMonths,
-    plannedSeasonUse,
-  });
-  const startIso = forecast?.firstTakenAt
-    ? isoFromDayNumber(localDayNumber(forecast.firstTakenAt, timeZone))
-    : null;
-  // A machine whose first reading was above zero came with hours: a task added to it without a
-  // last service has an unknown history, not the "serviced on time since new" assumption.
-  const cameWithHours = (forecast?.firstValue ?? 0) > 0;
-  const points = new Map<string, DuePoint>();
-  for (const task of tasks) {
-    points.set(
-      task.id,
-      computeDuePoint(
-        {
-          intervalMeter: task.intervalMeter,
-          intervalDays: task.intervalDays,
-          firstServiceMeter: task.firstServiceMeter,
-          warnMeter: task.warnMeter,
-          warnDays: task.warnDays,
-          lastDoneMeter: task.lastDoneMeter,
-          lastDoneOn: task.lastDoneOn,
-          countFromMeter: task.countFromMeter,
-          countFromOn: task.countFromOn,
-          historyUnknown: task.historyUnknown && cameWithHours,
-          seasonAnchor: task.seasonAnchor ?? null,
-          seasonOffsetDays: task.seasonOffsetDays ?? null,
-        },
-        usage,
-        asOfIso,
-        forecast?.lastValue ?? null,
-        startIso,
-        seasonMonths,
-      ),
-    );
-  }
-  return { usage, points };
-}
-
-/**
- * The usage estimate as stored: without its daily profiles (a few thousand numbers), which only
- * date the due points computed beside it and are never read back.
- */
-export function storedUsage(usage: UsageEstimate): UsageEstimate {
-  const { profile: _p, profileFast: _f, profileSlow: _s, ...kept } = usage;
-  return kept;
 }
 
 /** A meter as a forecast needs it: which machine it is on. */

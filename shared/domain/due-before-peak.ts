@@ -5,6 +5,7 @@
 // average working day, 14 days long at least (common practice for "a season", not a published
 // figure). The advice: the last day before that run, and how many meter units early that is.
 import { isoFromDayNumber } from './calendar';
+import { averageWorkingDay, profileDay } from './profile-days';
 import type { BeforePeak, UsageEstimate } from './types';
 
 /** A busy day: at least this share of the profile's average working day (dimensionless). */
@@ -28,9 +29,8 @@ export function beforePeak(
   if (usage.method !== 'season' || !profile?.length || anchor === null || start === null)
     return null;
   if (dueMeter === null || projectedDay === null) return null;
-  const working = profile.filter((u) => u > 0);
-  const busy = (BUSY_SHARE * working.reduce((s, u) => s + u, 0)) / Math.max(1, working.length);
-  const at = (i: number) => (i < 0 ? 0 : profile[i < profile.length ? i : i % 365]);
+  const busy = BUSY_SHARE * averageWorkingDay(profile);
+  const at = (i: number) => profileDay(profile, i) ?? 0;
   const due = Math.floor(projectedDay - anchor);
   if (!(at(due) >= busy && busy > 0)) return null;
   let first = due;

@@ -5,6 +5,7 @@
 // profile runs under 5 % of its own average working day (common practice for "not working": a
 // few moves in the yard, not work).
 import { dayNumberFromIso, isoFromDayNumber } from './calendar';
+import { averageWorkingDay, profileDay } from './profile-days';
 import type { DueOutcomes, UsageEstimate } from './types';
 
 /** Shortest idle run that splits a range in two, days. */
@@ -17,13 +18,9 @@ function idleSpell(usage: UsageEstimate, fromDay: number, toDay: number) {
   const profile = usage.profile;
   const anchor = usage.anchorDay ?? usage.lastDay;
   if (!profile?.length || anchor === null) return null;
-  const working = profile.filter((u) => u > 0);
-  if (!working.length) return null;
-  const idle = (IDLE_SHARE * working.reduce((s, u) => s + u, 0)) / working.length;
-  const at = (day: number) => {
-    const i = Math.floor(day - anchor);
-    return i < 0 ? Infinity : profile[i < profile.length ? i : i % 365];
-  };
+  const idle = IDLE_SHARE * averageWorkingDay(profile);
+  if (!(idle > 0)) return null;
+  const at = (day: number) => profileDay(profile, Math.floor(day - anchor)) ?? Infinity;
   let start: number | null = null;
   for (let day = Math.floor(fromDay) + 1; day <= toDay; day++) {
     if (at(day) < idle) {

@@ -104,8 +104,12 @@ export function beforePeakText(
 export function dueSpreadText(
   due: Pick<DuePoint, 'projectedLow' | 'projectedHigh' | 'outcomes'>,
   date: DateFormat = englishDateText,
+  options: { compact?: boolean } = {},
 ): string | null {
   const o = due.outcomes;
+  // compact (a narrow column beside the likelier date): only the other side, without its dates
+  if (o && options.compact)
+    return o.likelier === 'this_season' ? 'or early next season' : 'or late this season';
   if (o) {
     const side = (s: { from: string; to: string }) => dueRangeText(s.from, s.to, date);
     const likelier = o.likelier === 'this_season' ? 'this season' : 'next season';

@@ -49,6 +49,10 @@ export const seasonPlanSchema = z.object({
 });
 export type SeasonPlanJson = z.infer<typeof seasonPlanSchema>;
 
+/** PUT …/season-plans/:year answers the plan as stored. */
+export const seasonPlanResponseSchema = z.object({ data: seasonPlanSchema });
+export type SeasonPlanResponse = z.infer<typeof seasonPlanResponseSchema>;
+
 export const seasonHoursRowSchema = z.object({
   machine: machineRefSchema.pick({ id: true, fleetNumber: true, name: true }),
   unit: z.string(),

@@ -49,7 +49,8 @@ export const dueRangeText = (low: string | null, high: string | null): string | 
 /** "range 22 – 29 Dec" or the two outcomes across an idle spell ("late this season … or early next …"). */
 export const dueSpreadText = (
   due: Pick<DuePoint, 'projectedLow' | 'projectedHigh' | 'outcomes'>,
-): string | null => spreadWords(due, formatLocalDate);
+  options: { compact?: boolean } = {},
+): string | null => spreadWords(due, formatLocalDate, options);
 
 /** "Do it before 20 Jul: 200 h early, avoids a stop in the busy season". */
 export const beforePeakText = (advice: BeforePeak, unit: string): string =>

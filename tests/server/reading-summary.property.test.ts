@@ -22,12 +22,8 @@ import {
   type Organization,
 } from '../../server/models';
 import type { OrgAccess } from '../../server/policies/context';
-import {
-  duePointsFor,
-  refreshMachineForecast,
-  storedUsage,
-  summariseReadings,
-} from '../../server/services/forecast';
+import { refreshMachineForecast, summariseReadings } from '../../server/services/forecast';
+import { duePointsFor, storedUsage } from '../../server/services/due-points-of-meter';
 import { dueTasksOf } from '../../server/services/forecast-rows';
 import { applyStep, step } from './reading-summary-ops';
 
@@ -95,7 +91,7 @@ async function expectDueFromRecomputed(machine: Machine, task: ServiceTask, labe
     stored.computedOn,
     stored.updatedAt,
   );
-  // stored without its daily profiles (forecast.ts storedUsage)
+  // stored without its daily profiles (due-points-of-meter.ts storedUsage)
   expect(forecast.usage, `usage ${label}`).toEqual(storedUsage(usage));
   expect(stored.due, `due point ${label}`).toEqual(points.get(task.id));
 }

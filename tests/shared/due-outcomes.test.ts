@@ -55,6 +55,10 @@ describe('two outcomes — a range across the idle months', () => {
     );
   });
 
+  it('dueSpreadText compact — only the other side, for a narrow column beside the likelier date', () => {
+    expect(dueSpreadText(due, undefined, { compact: true })).toBe('or early next season');
+  });
+
   it('computeDuePoint — 250 h to go — the median is past the season: likelier next season', () => {
     // Median: 240 h by day 60, the last 10 h at 4 h/day from day 365 → day 367.5.
     const later = computeDuePoint(

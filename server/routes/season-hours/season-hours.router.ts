@@ -5,10 +5,11 @@ import { authorize } from '../../policies/access';
 import { canUpdateMachine } from '../../policies/machine';
 import { loadMachine } from '../../services/machines';
 import { seasonHours, setSeasonPlan } from '../../services/season-hours';
+import { todayIso } from '../../../shared/domain';
 import {
   seasonHoursResponseSchema,
   seasonPlanInputSchema,
-  seasonPlanSchema,
+  seasonPlanResponseSchema,
 } from '../../../shared/schemas/season-hours';
 
 const year = z.coerce
@@ -36,12 +37,7 @@ export function seasonHoursRouter(): Router {
     handler: async ({ req, query }) => {
       const access = req.access!;
       const now = new Date();
-      const asOfYear = Number(
-        new Intl.DateTimeFormat('en-CA', {
-          timeZone: access.organization.timeZone,
-          year: 'numeric',
-        }).format(now),
-      );
+      const asOfYear = Number(todayIso(access.organization.timeZone, now).slice(0, 4));
       const y = query.year ?? asOfYear;
       const { asOf, rows } = await seasonHours(access, y, now);
       return { data: rows, meta: { year: y, asOf } };
@@ -56,7 +52,7 @@ export function seasonHoursRouter(): Router {
     tags: ['forecast'],
     params: planParams,
     body: seasonPlanInputSchema,
-    response: z.object({ data: seasonPlanSchema }),
+    response: seasonPlanResponseSchema,
     handler: async ({ req, params, body }) => {
       const access = req.access!;
       const { machine } = await loadMachine(access, params.machineId);

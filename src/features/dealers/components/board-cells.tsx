@@ -34,14 +34,8 @@ export function Projected({ row }: { row: BoardRow }) {
         <span className="text-sm">{overText(row.due, row.machine.meterUnit)}</span>
       </span>
     );
-  // two outcomes across an idle spell in short: the date shown is the likelier one, the other
-  // side said in words (the task's page gives both ranges)
-  const o = row.due.outcomes;
-  const range = o
-    ? o.likelier === 'this_season'
-      ? 'or early next season'
-      : 'or late this season'
-    : dueSpreadText(row.due);
+  // two outcomes in short beside the likelier date (the task's page gives both ranges)
+  const range = dueSpreadText(row.due, { compact: true });
   if (!row.due.effectiveDate && !range) return <span className="text-field-600">No forecast</span>;
   return (
     <span className="flex max-w-48 flex-col">

@@ -1,5 +1,5 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SeasonPlanInput, SeasonPlanJson } from '../../../../shared/schemas/season-hours';
+import type { SeasonPlanInput, SeasonPlanResponse } from '../../../../shared/schemas/season-hours';
 import { apiClient, segment } from '../../../lib/api-client';
 import { changedBy, invalidate } from '../../../lib/invalidation';
 
@@ -12,7 +12,7 @@ export const putSeasonPlan = (
   machineId: string,
   year: number,
   input: SeasonPlanInput,
-) => apiClient.put<{ data: SeasonPlanJson }>(planPath(orgId, machineId, year), input);
+) => apiClient.put<SeasonPlanResponse>(planPath(orgId, machineId, year), input);
 
 /** DELETE …/season-plans/:year: the forecast goes back to the machine's past seasons (204). */
 export const deleteSeasonPlan = (orgId: string, machineId: string, year: number) =>
