@@ -5,7 +5,7 @@ import { Membership, User } from '../models';
 import type { OrgAccess } from '../policies/access';
 import type { ReminderInput } from '../../shared/schemas/dealers';
 import { DUE_STATUS_LABELS } from '../../shared/constants';
-import { dueSpreadText } from '../../shared/domain';
+import { dueSpreadText, projectionSaid } from '../../shared/domain';
 import { recordAudit } from '../infra/audit';
 import { dealerAccessFor, recordDealerRead, requireCustomer } from './dealer-access';
 import { dueList, type DueRow } from './due-list';
@@ -21,8 +21,9 @@ function dueLine(r: DueRow): string {
   const dueMeter = r.dueOnMeter ?? r.due.dueMeter;
   if (dueMeter !== null) parts.push(`due at ${meter(dueMeter, r.machine.meterUnit)}`);
   if (r.due.dueDate) parts.push(`${dueMeter !== null ? 'or by' : 'due by'} ${day(r.due.dueDate)}`);
-  if (r.due.outcomes) parts.push(`projected ${dueSpreadText(r.due, day)}`);
-  else if (r.due.projectedLow && r.due.projectedHigh)
+  // an overdue task is said overdue (its status), without a projection into a later year
+  if (projectionSaid(r.due) && r.due.outcomes) parts.push(`projected ${dueSpreadText(r.due, day)}`);
+  else if (projectionSaid(r.due) && r.due.projectedLow && r.due.projectedHigh)
     parts.push(
       r.due.projectedLow === r.due.projectedHigh
         ? `projected ${day(r.due.projectedLow)}`

@@ -1,11 +1,10 @@
 // The words of one due digest: the facts of each task, the cap on how many tasks one e-mail
 // lists, and its subject, plain text and HTML. digest.ts chooses the rows and queues the mail.
 import {
-  dueSpreadText,
-  beforePeakText,
   fittedMeterText,
   overText,
   remainingDaysText,
+  projectionWords,
   remainingMeterText,
 } from '../../shared/domain';
 import { DIGEST_HORIZON_DAYS, DIGEST_TASK_CAP } from '../../shared/schemas/notifications';
@@ -55,12 +54,11 @@ export function taskFacts(row: DueRow): string[] {
     if (due.remainingDays !== null) calendar += ` (${remainingDaysText(due.remainingDays)})`;
     facts.push(calendar);
   }
-  if (due.projectedDate !== null && due.status !== 'overdue') {
-    let projected = `Projected ${formatIsoDate(due.projectedDate)}`;
-    const spread = dueSpreadText(due, formatIsoDate);
-    if (spread) projected += ` (${spread})`;
-    facts.push(projected);
-    if (due.beforePeak) facts.push(beforePeakText(due.beforePeak, unit, formatIsoDate));
+  // an overdue task: how far over it is, not a projection running on into a later year
+  const projection = projectionWords(due, unit, { date: formatIsoDate });
+  if (projection) {
+    facts.push(`Projected ${projection.date}${projection.spread ? ` (${projection.spread})` : ''}`);
+    if (projection.beforePeak) facts.push(projection.beforePeak);
   }
   if (due.status === 'overdue') facts.push(`Overdue: ${overText(due, unit) ?? 'now'}`);
   else if (due.effectiveDate !== null) facts.push(`Falls due ${formatIsoDate(due.effectiveDate)}`);

@@ -97,15 +97,54 @@ export function beforePeakText(
 }
 
 /**
+ * Whether a due point's projection is said at all: not without a projected date, and not once the
+ * task is overdue (by its date or its meter) — then a projection running on into a later year is
+ * noise, and only how far over it is matters (overText).
+ */
+export function projectionSaid(due: Pick<DuePoint, 'status' | 'projectedDate'>): boolean {
+  return due.status !== 'overdue' && due.projectedDate !== null;
+}
+
+/** A projection in words: its date, its spread (dueSpreadText) and the before-the-peak advice. */
+export interface ProjectionWords {
+  date: string;
+  spread: string | null;
+  beforePeak: string | null;
+}
+
+/**
+ * The projection of a due point as every screen and e-mail says it, or null when it is not said
+ * (projectionSaid: none, or the task is overdue).
+ */
+export function projectionWords(
+  due: Pick<
+    DuePoint,
+    'status' | 'projectedDate' | 'projectedLow' | 'projectedHigh' | 'outcomes' | 'beforePeak'
+  >,
+  unit: string,
+  formats: { meter?: MeterFormat; date?: DateFormat } = {},
+): ProjectionWords | null {
+  if (!projectionSaid(due) || due.projectedDate === null) return null;
+  const date = formats.date ?? englishDateText;
+  return {
+    date: date(due.projectedDate),
+    spread: dueSpreadText(due, date),
+    beforePeak: due.beforePeak ? beforePeakText(due.beforePeak, unit, date, formats.meter) : null,
+  };
+}
+
+/**
  * A projection's spread in words: its range ("range 22 – 29 Dec 2026") or, when the range crosses
  * an idle spell, its two outcomes ("late this season (20 Sep – 31 Oct 2027) or early next
- * (1 – 26 Aug 2028), likelier this season"); null without a range.
+ * (1 – 26 Aug 2028), likelier this season"); null without a range, and for an overdue task (its
+ * projection is not said: projectionSaid).
  */
 export function dueSpreadText(
-  due: Pick<DuePoint, 'projectedLow' | 'projectedHigh' | 'outcomes'>,
+  due: Pick<DuePoint, 'status' | 'projectedLow' | 'projectedHigh' | 'outcomes'>,
   date: DateFormat = englishDateText,
   options: { compact?: boolean } = {},
 ): string | null {
+  if (due.status === 'overdue') return null;
   const o = due.outcomes;
   // compact (a narrow column beside the likelier date): only the other side, without its dates
   if (o && options.compact)

@@ -2,6 +2,8 @@ import {
   dueRangeText as rangeWords,
   dueSpreadText as spreadWords,
   beforePeakText as beforePeakWords,
+  projectionWords as projectionWordsOf,
+  type ProjectionWords,
   type BeforePeak,
   fallsDueText as fallsDueWords,
   fittedMeterText as fittedMeterWords,
@@ -46,15 +48,28 @@ export const dueDateText = formatLocalDate;
 export const dueRangeText = (low: string | null, high: string | null): string | null =>
   rangeWords(low, high, formatLocalDate);
 
-/** "range 22 – 29 Dec" or the two outcomes across an idle spell ("late this season … or early next …"). */
+/**
+ * "range 22 – 29 Dec" or the two outcomes across an idle spell ("late this season … or early
+ * next …"); null for an overdue task, whose projection is not said.
+ */
 export const dueSpreadText = (
-  due: Pick<DuePoint, 'projectedLow' | 'projectedHigh' | 'outcomes'>,
+  due: Pick<DuePoint, 'status' | 'projectedLow' | 'projectedHigh' | 'outcomes'>,
   options: { compact?: boolean } = {},
 ): string | null => spreadWords(due, formatLocalDate, options);
 
 /** "Do it before 20 Jul: 200 h early, avoids a stop in the busy season". */
 export const beforePeakText = (advice: BeforePeak, unit: string): string =>
   beforePeakWords(advice, unit, formatLocalDate, formatMeter);
+
+/**
+ * The projected date, its spread and the before-the-peak advice in the farm's formats, or null
+ * when the projection is not said (none, or the task is overdue: only how far over it is).
+ */
+export const projectionWords = (
+  due: Parameters<typeof projectionWordsOf>[0],
+  unit: string,
+): ProjectionWords | null =>
+  projectionWordsOf(due, unit, { meter: formatMeter, date: formatLocalDate });
 
 /** "234 h (1,956.3 h lifetime)": a value on the meter fitted now, lifetime in brackets. */
 export const fittedMeterText = (onMeter: number, lifetime: number, unit: string): string =>

@@ -18,6 +18,7 @@ const row = (due: Partial<DueRow['due']>, dueOnMeter: number | null): DueRow => 
     restricted: false,
     meterUnit: 'h',
   },
+  meter: { id: 'mm', kind: 'engine_hours', label: '', isPrimary: true },
   due: {
     status: 'ok',
     governs: 'meter',
@@ -56,6 +57,34 @@ describe('digest task facts', () => {
     expect(facts).toEqual([
       'Calendar limit Sun, Apr 12, 2026 (5 days left)',
       'Falls due Sun, Apr 12, 2026',
+    ]);
+  });
+
+  it('past its calendar limit — overdue and by how much; the meter projection into next season is not said', () => {
+    // like the demo's S-01: 12 days past its date, its meter projected across the idle months
+    const facts = taskFacts(
+      row(
+        {
+          status: 'overdue',
+          governs: 'calendar',
+          dueDate: '2026-03-31',
+          remainingDays: -12,
+          effectiveDate: '2026-03-31',
+          projectedDate: '2026-09-20',
+          projectedLow: '2026-09-02',
+          projectedHigh: '2027-08-16',
+          outcomes: {
+            thisSeason: { from: '2026-09-02', to: '2026-10-31' },
+            nextSeason: { from: '2027-08-01', to: '2027-08-16' },
+            likelier: 'this_season',
+          },
+        },
+        null,
+      ),
+    );
+    expect(facts).toEqual([
+      'Calendar limit Tue, Mar 31, 2026 (12 days over)',
+      'Overdue: 12 days over',
     ]);
   });
 });

@@ -1,7 +1,7 @@
 import {
   dueDateText,
-  dueSpreadText,
-  beforePeakText,
+  overText,
+  projectionWords,
   remainingDaysText,
   remainingMeterText,
   seasonDueText,
@@ -58,9 +58,13 @@ export function DueAtFigure({ row }: { row: DueRow }) {
   );
 }
 
-/** The date the meter is projected to reach its due value, with the slower–faster range. */
+/**
+ * The date the meter is projected to reach its due value, with its spread and the before-the-peak
+ * advice; for an overdue task only that it is overdue and how far (no projection into a later year).
+ */
 export function ProjectedFigure({ row }: { row: DueRow }) {
-  const { projectedDate, status, dueMeter } = row.due;
+  const { status, dueMeter } = row.due;
+  const unit = row.machine.meterUnit;
   if (status === 'no_forecast')
     return (
       <span className={muted}>
@@ -70,21 +74,22 @@ export function ProjectedFigure({ row }: { row: DueRow }) {
       </span>
     );
   if (status === 'history_unknown') return <span className={muted}>—</span>;
-  if (!projectedDate)
+  if (status === 'overdue')
     return (
-      <span className={muted}>
-        {dueMeter === null ? 'Calendar only' : status === 'overdue' ? 'Already reached' : '—'}
+      <span className="flex flex-col font-bold text-poppy-800">
+        <span>Overdue</span>
+        <span className="text-sm">{overText(row.due, unit)}</span>
       </span>
     );
-  const range = dueSpreadText(row.due);
+  const projection = projectionWords(row.due, unit);
+  if (!projection)
+    return <span className={muted}>{dueMeter === null ? 'Calendar only' : '—'}</span>;
   return (
     <div className="flex flex-col">
-      <span>{dueDateText(projectedDate)}</span>
-      {range ? <span className={muted}>{range}</span> : null}
-      {row.due.beforePeak ? (
-        <span className="text-sm font-bold text-straw-900">
-          {beforePeakText(row.due.beforePeak, row.machine.meterUnit)}
-        </span>
+      <span>{projection.date}</span>
+      {projection.spread ? <span className={muted}>{projection.spread}</span> : null}
+      {projection.beforePeak ? (
+        <span className="text-sm font-bold text-straw-900">{projection.beforePeak}</span>
       ) : null}
     </div>
   );

@@ -1,11 +1,6 @@
 import type { DuePoint } from '../../../../shared/domain/types';
 import { formatLocalDate, formatMeter } from '../../../lib/fleet-format';
-import {
-  beforePeakText,
-  dueSpreadText,
-  fittedMeterText,
-  seasonDueText,
-} from '../../../lib/due-format';
+import { fittedMeterText, projectionWords, seasonDueText } from '../../../lib/due-format';
 import { describeRemaining } from '../lib/task-text';
 
 const GOVERNS: Record<'meter' | 'calendar', string> = {
@@ -46,22 +41,18 @@ export function DuePointDetails({
     });
   if (due.dueDate !== null) rows.push({ term: 'Due date', detail: formatLocalDate(due.dueDate) });
   if (due.season) rows.push({ term: 'Season service', detail: seasonDueText(due.season) });
-  if (due.projectedDate !== null) {
-    const spread = due.outcomes
-      ? dueSpreadText(due)
-      : due.projectedLow && due.projectedHigh
-        ? `${formatLocalDate(due.projectedLow)} – ${formatLocalDate(due.projectedHigh)}`
-        : null;
-    const range = spread ? ` (${spread})` : '';
+  // an overdue task says how far over it is (Remaining), not a projection into a later year
+  const projection = projectionWords(due, unit);
+  if (projection) {
     rows.push({
       term: 'Meter reaches it',
-      detail: `about ${formatLocalDate(due.projectedDate)}${range}`,
+      detail: `about ${projection.date}${projection.spread ? ` (${projection.spread})` : ''}`,
     });
-  } else if (due.dueMeter !== null) {
+    if (projection.beforePeak)
+      rows.push({ term: 'Before the season', detail: projection.beforePeak });
+  } else if (due.dueMeter !== null && due.status !== 'overdue') {
     rows.push({ term: 'Meter reaches it', detail: 'No projected date' });
   }
-  if (due.beforePeak)
-    rows.push({ term: 'Before the season', detail: beforePeakText(due.beforePeak, unit) });
   if (due.governs) rows.push({ term: 'Governs', detail: GOVERNS[due.governs] });
   if (remaining) rows.push({ term: 'Remaining', detail: remaining });
   const basis = BASIS[due.basis];
