@@ -49,6 +49,16 @@ export function planYear(asOfIso: string, months: readonly number[]): number {
   return months.length && month > Math.max(...months) ? year + 1 : year;
 }
 
+/**
+ * The first local date (ISO) on which a plan for `year` feeds the forecast — where planYear turns
+ * to it: 1 January of that year for a machine without season months (or a season ending in
+ * December), else the first day after the season months of the year before.
+ */
+export function planCountsFrom(year: number, months: readonly number[]): string {
+  const last = months.length ? Math.max(...months) : 12;
+  return last === 12 ? `${year}-01-01` : `${year - 1}-${String(last + 1).padStart(2, '0')}-01`;
+}
+
 /** The planned use of a meter (meter units) for the season of asOf, or null without one. */
 export function plannedUseOn(
   plans: SeasonPlans | null | undefined,

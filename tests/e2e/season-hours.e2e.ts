@@ -2,7 +2,8 @@
 // navigation and reads a demo combine's figures (C-01, harvest August–October) as the API gives
 // them; she plans next season for a tractor of her own (SH-01, written by no other file) by area
 // and work rate — a work rate of 0 is refused beside its field, 300 ha at 4 ha/h is worked out as
-// 75 h (hours = area ÷ rate, shared/domain/season-use.ts) — and the card shows the plan's hours.
+// 75 h (hours = area ÷ rate, shared/domain/season-use.ts) — and the card shows the plan's hours;
+// the form and the card say that on this all-year machine next year's plan counts only from 1 January.
 // A technician reads the plan but is offered no way to change it, and the API refuses him (403).
 // The page fits a 390 px phone without sideways scrolling, its controls 44 px high.
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
@@ -110,6 +111,12 @@ describe('season hours — the season so far against last season, and a plan tha
     await tractor.getByText(`No plan for ${next}.`).waitFor();
     await tractor.getByRole('button', { name: 'Plan season' }).click();
     const form = tractor.getByRole('form', { name: `Plan the ${next} season of SH-01` });
+    // SH-01 works all year, so its season is the calendar year (planYear, season-use.ts): a plan
+    // for next year counts only from 1 January — said where the plan is entered (en-US date)
+    const startsOn = `only from Jan 1, ${next}. Until then its due dates go by ${thisYear}.`;
+    expect(await form.innerText()).toContain(
+      `This machine works all year, so its season is the calendar year: a ${next} plan counts in its forecast ${startsOn}`,
+    );
     await form.locator('label', { hasText: 'Area and work rate' }).click();
     expect(await form.getByRole('radio', { name: 'Area and work rate' }).isChecked()).toBe(true);
     await form.getByLabel('Planned area').fill('300');
@@ -126,6 +133,7 @@ describe('season hours — the season so far against last season, and a plan tha
     await form.waitFor({ state: 'detached' });
     await tractor.getByText(`comes to 75 h`, { exact: false }).waitFor();
     expect(await tractor.innerText()).toMatch(new RegExp(`Plan for ${next}\\s*75 h`));
+    expect(await tractor.innerText()).toContain(startsOn);
 
     const plan = (await rowsOf(page, org, next)).find((r) => r.machine.id === tractorId)!.plan;
     expect(plan).toMatchObject({ year: next, area: 300, areaUnit: 'ha', areaPerHour: 4 });

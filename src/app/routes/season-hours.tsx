@@ -98,6 +98,7 @@ export function SeasonHoursPage() {
             orgId={orgId}
             rows={hours.data.data}
             year={year}
+            asOf={hours.data.meta.asOf}
             canPlan={membership.role === 'manager'}
             machineHref={(machineId) => paths.organization.machine.href(orgId, machineId)}
           />

@@ -6,6 +6,7 @@ import { ConfirmDialog } from '../../../components/ui/confirm-dialog';
 import { formatMeter } from '../../../lib/fleet-format';
 import type { SeasonHoursRow, SeasonPlanJson } from '../api/get-season-hours';
 import { useChangeSeasonPlan } from '../api/set-season-plan';
+import { planStartNote } from '../lib/plan-start';
 import { seasonLabel } from '../lib/season-label';
 import { SeasonBars, type SeasonFigure } from './season-bars';
 import { SeasonPlanForm } from './season-plan-form';
@@ -21,12 +22,15 @@ export function SeasonHoursCard({
   orgId,
   row,
   year,
+  asOf,
   canPlan,
   machineHref,
 }: {
   orgId: string;
   row: SeasonHoursRow;
   year: number;
+  /** the farm's local date the figures are to */
+  asOf: string;
   canPlan: boolean;
   machineHref: string;
 }) {
@@ -77,13 +81,22 @@ export function SeasonHoursCard({
       ) : (
         <p className="text-sm text-field-600">No plan for {year}.</p>
       )}
+      {plan && !editing ? (
+        <p className="text-sm text-field-700">{planStartNote(year, row.seasonMonths, asOf)}</p>
+      ) : null}
       {notice ? (
         <Alert tone="success" className="text-sm">
           {notice}
         </Alert>
       ) : null}
       {canPlan && editing ? (
-        <SeasonPlanForm orgId={orgId} row={row} year={year} onDone={() => setEditing(false)} />
+        <SeasonPlanForm
+          orgId={orgId}
+          row={row}
+          year={year}
+          asOf={asOf}
+          onDone={() => setEditing(false)}
+        />
       ) : null}
       {canPlan && !editing ? (
         <div className="flex flex-wrap gap-2">

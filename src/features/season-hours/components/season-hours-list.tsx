@@ -7,12 +7,15 @@ export function SeasonHoursList({
   orgId,
   rows,
   year,
+  asOf,
   canPlan,
   machineHref,
 }: {
   orgId: string;
   rows: SeasonHoursRow[];
   year: number;
+  /** the farm's local date the figures are to */
+  asOf: string;
   canPlan: boolean;
   machineHref: (machineId: string) => string;
 }) {
@@ -31,6 +34,7 @@ export function SeasonHoursList({
           orgId={orgId}
           row={row}
           year={year}
+          asOf={asOf}
           canPlan={canPlan}
           machineHref={machineHref(row.machine.id)}
         />

@@ -16,6 +16,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { meterValueAs, withMeterReasons } from '../../../lib/meter-input';
 import type { SeasonHoursRow } from '../api/get-season-hours';
 import { useChangeSeasonPlan } from '../api/set-season-plan';
+import { planStartNote } from '../lib/plan-start';
 
 type Mode = 'value' | 'area';
 const MODES: { value: Mode; label: string }[] = [
@@ -30,17 +31,20 @@ const FIELDS = ['value', 'area', 'areaUnit', 'areaPerHour'] as const;
 
 /**
  * A manager's plan for one machine's season: its use in the meter's unit, or the area it will
- * work at a rate (hours = area ÷ rate, worked out by shared/domain as the server does).
+ * work at a rate (hours = area ÷ rate, worked out by shared/domain as the server does). Says when
+ * the plan starts to count when that is later than today (`asOf`, the farm's local date).
  */
 export function SeasonPlanForm({
   orgId,
   row,
   year,
+  asOf,
   onDone,
 }: {
   orgId: string;
   row: SeasonHoursRow;
   year: number;
+  asOf: string;
   onDone: () => void;
 }) {
   const { units } = useCurrentMembership().membership.organization;
@@ -91,6 +95,7 @@ export function SeasonPlanForm({
   });
 
   const unitLabel = meterUnitLabel(row.unit);
+  const startNote = planStartNote(year, row.seasonMonths, asOf);
   return (
     <form
       onSubmit={submit}
@@ -99,6 +104,7 @@ export function SeasonPlanForm({
       className="flex flex-col gap-4 rounded-lg border border-field-200 bg-oat-50 p-3"
     >
       {formError ? <Alert>{formError}</Alert> : null}
+      {startNote ? <p className="text-field-800">{startNote}</p> : null}
       <ChoiceChips legend="Plan by" options={MODES} value={mode} onChange={setMode} />
       {mode === 'value' ? (
         <TextField
