@@ -40,18 +40,23 @@ export async function fitProblems(page: Page, keyColumns: readonly string[]): Pr
       );
     }
 
-    // fully inside the window and inside every box that clips it (an overflow scroll box)
-    const shown = (el: Element) => {
+    // why an element is not fully inside the window and every box that clips it (an overflow
+    // scroll box), in words with the pixels it misses by; null when it is shown
+    const cut = (el: Element): string | null => {
       const box = el.getBoundingClientRect();
-      if (box.width === 0 || box.left < -0.5 || box.right > window.innerWidth + 0.5) return false;
+      if (box.width === 0) return 'not laid out';
+      if (box.left < -0.5 || box.right > window.innerWidth + 0.5)
+        return `spans ${Math.round(box.left)}–${Math.round(box.right)} px of a ${window.innerWidth} px window`;
       for (let up = el.parentElement; up; up = up.parentElement) {
         const style = getComputedStyle(up);
         if (style.overflowX === 'visible') continue;
         const clip = up.getBoundingClientRect();
-        if (box.left < clip.left - 0.5 || box.right > clip.right + 0.5) return false;
+        if (box.left < clip.left - 0.5 || box.right > clip.right + 0.5)
+          return `ends at ${box.right.toFixed(1)} px, its scroll box (${up.tagName.toLowerCase()}, ${up.scrollWidth} px of content in ${up.clientWidth}) at ${clip.right.toFixed(1)} px`;
       }
-      return true;
+      return null;
     };
+    const shown = (el: Element) => cut(el) === null;
     for (const item of document.querySelectorAll('nav[aria-label="Main"] :is(a, button)')) {
       if (!shown(item)) problems.push(`navigation "${item.textContent?.trim()}" off screen`);
     }
@@ -64,7 +69,8 @@ export async function fitProblems(page: Page, keyColumns: readonly string[]): Pr
           ![...el.children].some((child) => child.textContent?.trim() === key),
       );
       if (candidates.length === 0) problems.push(`no "${key}" column`);
-      else if (!candidates.some(shown)) problems.push(`"${key}" column cut off`);
+      else if (!candidates.some(shown))
+        problems.push(`"${key}" column cut off: ${cut(candidates[0]!)}`);
     }
     return problems;
   }, keyColumns);

@@ -55,7 +55,7 @@ export function ReadingAge({ row }: { row: BoardRow }) {
         {readingAgeText(row.lastReadingAgeDays)}
       </span>
       {row.lastReading ? (
-        <span className="text-sm text-field-600 tabular-nums">
+        <span className="whitespace-nowrap text-sm text-field-600 tabular-nums">
           at {meterText(row.lastReading.value, row.machine.meterUnit)}
         </span>
       ) : null}

@@ -111,7 +111,7 @@ function BoardTable({ rows, selected, onToggle, machineHref }: BoardListProps) {
               <td className={`${td} min-w-36`}>
                 <Projected row={row} />
               </td>
-              <td className={`${td} whitespace-nowrap`}>
+              <td className={`${td} min-w-28`}>
                 <ReadingAge row={row} />
               </td>
             </tr>
