@@ -6,7 +6,8 @@ import { Op } from 'sequelize';
 import { sequelize } from '../db';
 import { AppError, invalid } from '../errors';
 import { MachineMeter, MeterReading, MeterReplacement, type Machine } from '../models';
-import type { MeterChangeKind } from '../../shared/constants';
+import { METER_KIND_LABELS, type MeterChangeKind } from '../../shared/constants';
+import { isCountingMeter } from '../../shared/domain/meter-kinds';
 import type { OrgAccess } from '../policies/context';
 import { recordAudit } from '../infra/audit';
 import { lockMachineReadings } from './reading-neighbours';
@@ -17,6 +18,12 @@ export const meterNotFound = () =>
   new AppError(404, 'not_found', 'Meter not found on this machine', {
     meterId: 'No such meter on this machine',
   });
+
+/** The 400 of a counter reset on a meter that is not zeroed in use (an hour meter, an odometer). */
+const notACounter = (kind: MachineMeter['kind']) => {
+  const message = `A counter reset is only for a counting meter (a bale counter); ${METER_KIND_LABELS[kind]} is not zeroed in use — record a meter replacement when a new meter is fitted`;
+  return new AppError(400, 'invalid', `meterId: ${message}`, { meterId: message });
+};
 
 /** What a meter replacement or counter reset records. */
 export interface MeterChangeInput {
@@ -50,6 +57,7 @@ export async function replaceMeter(
       transaction,
     });
     if (!meter) throw meterNotFound();
+    if (kind === 'reset' && !isCountingMeter(meter.kind)) throw notACounter(meter.kind);
     const later = await MeterReading.count({
       where: {
         organizationId: machine.organizationId,

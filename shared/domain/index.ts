@@ -17,3 +17,4 @@ export * from './money';
 export * from './record-costs';
 export * from './due-words';
 export * from './hazards';
+export * from './meter-kinds';

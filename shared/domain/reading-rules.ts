@@ -2,6 +2,8 @@
 // Values are lifetime values (see lifetime.ts), so a meter replacement is not "going backwards".
 // Each refusal names the rule, the field and the neighbouring reading, so the person entering it
 // can see what to fix.
+import type { MeterUnit } from '../constants';
+import { isCountingUnit } from './meter-kinds';
 
 /** A reading as the rules see it: lifetime value (meter units) and when it was taken (epoch ms). */
 export interface ReadingAt {
@@ -57,6 +59,9 @@ export const DEFAULT_MAX_PER_DAY = {
  */
 export const BACKWARDS_HINT =
   'If the counter was reset, record it with “Counter was reset” when logging the reading (a new meter fitted: Record meter replacement).';
+/** The same for a meter that is not zeroed in use (hours, distance, area): only a new meter. */
+export const BACKWARDS_HINT_NOT_COUNTING =
+  'If a new meter was fitted, record it with “Record meter replacement” on its meter.';
 
 /** Default clock skew tolerated for the future and too-fast rules, ms (5 minutes). */
 export const DEFAULT_SKEW_MS = 5 * 60 * 1000;
@@ -108,7 +113,7 @@ export function checkReading(
     return {
       field: 'value',
       rule: 'backwards',
-      message: `Reading ${reading(candidate)} is lower than ${describe('previous', previous)} — readings may not go backwards. ${BACKWARDS_HINT}`,
+      message: `Reading ${reading(candidate)} is lower than ${describe('previous', previous)} — readings may not go backwards. ${isCountingUnit(unit as MeterUnit) ? BACKWARDS_HINT : BACKWARDS_HINT_NOT_COUNTING}`,
     };
   }
   if (next && candidate.value > next.value) {

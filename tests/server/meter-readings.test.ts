@@ -151,6 +151,86 @@ describe('counter reset', () => {
   });
 });
 
+describe('a counter reset belongs to counting meters (shared/domain/meter-kinds.ts)', () => {
+  it('on the engine hours, the separator hours or a PTO meter — 400 naming meterId and the rule; nothing written', async () => {
+    const { org, agent } = await farm();
+    const combine = await createMachine(org, { category: 'combine' });
+    const separator = await createMeter(combine, 'separator_hours');
+    const pto = await createMeter(combine, 'pto_hours');
+    await addReadings(combine, [{ daysAgo: 2, value: 1200 }]);
+    const url = `/api/v1/organizations/${org.id}/machines/${combine.id}/meter-resets`;
+    for (const meterId of [undefined, separator.id, pto.id]) {
+      const res = await agent.post(url).send({ oldFinalValue: 1210, resetAt: ago(HOUR), meterId });
+      expect(res.status).toBe(400);
+      expect(res.body.error.fields.meterId).toMatch(
+        /only for a counting meter \(a bale counter\); (Engine|Separator|PTO) hours is not zeroed in use/,
+      );
+    }
+    expect(await countRows('meter_replacements')).toBe(0);
+    expect(await MeterReading.count()).toBe(1);
+  });
+
+  it('on a bale counter added to a tractor-drawn baler with an hour meter — accepted', async () => {
+    const { org, agent } = await farm('operator');
+    const baler = await createMachine(org, { category: 'baler' });
+    const bales = await createMeter(baler, 'bales');
+    const url = `/api/v1/organizations/${org.id}/machines/${baler.id}/meter-resets`;
+    const res = await agent
+      .post(url)
+      .send({ oldFinalValue: 820, resetAt: ago(HOUR), meterId: bales.id });
+    expect(res.status).toBe(201);
+    expect(res.body.data).toMatchObject({ meterId: bales.id, kind: 'reset' });
+  });
+});
+
+describe('meter replacement on any meter', () => {
+  it('a new separator meter on a combine — its lifetime runs on; the engine hours are untouched (hand-worked)', async () => {
+    const { org, agent } = await farm();
+    const combine = await createMachine(org, { category: 'combine' });
+    const separator = await createMeter(combine, 'separator_hours');
+    await addReadings(combine, [
+      { daysAgo: 3, value: 2400 },
+      { daysAgo: 3, value: 900, meterId: separator.id },
+    ]);
+    const base = `/api/v1/organizations/${org.id}/machines/${combine.id}`;
+    const replaced = await agent.post(`${base}/meter-replacements`).send({
+      meterId: separator.id,
+      oldFinalValue: 910,
+      newStartValue: 0,
+      replacedAt: ago(2 * DAY),
+    });
+    expect(replaced.status).toBe(201);
+    expect(replaced.body.data).toMatchObject({ meterId: separator.id, kind: 'replacement' });
+    const onSeparator = await agent
+      .post(`${base}/readings`)
+      .send({ value: 12, takenAt: ago(DAY), meterId: separator.id });
+    expect(onSeparator.status).toBe(201);
+    // 12 h on the new meter + (910 − 0) on the old one = 922 separator hours over its life
+    expect(onSeparator.body.data).toMatchObject({ value: 12, lifetimeValue: 922 });
+    // the engine meter has no replacement: a reading shows its own value as its lifetime
+    const onEngine = await agent.post(`${base}/readings`).send({ value: 2410, takenAt: ago(DAY) });
+    expect(onEngine.body.data).toMatchObject({ value: 2410, lifetimeValue: 2410 });
+    const meters = (await agent.get(`${base}/meters`)).body.data as {
+      kind: string;
+      lastReading: { value: number; lifetimeValue: number };
+    }[];
+    expect(meters.find((m) => m.kind === 'separator_hours')!.lastReading).toMatchObject({
+      value: 12,
+      lifetimeValue: 922,
+    });
+    expect(meters.find((m) => m.kind === 'engine_hours')!.lastReading).toMatchObject({
+      value: 2410,
+      lifetimeValue: 2410,
+    });
+    const history = await agent.get(`${base}/readings`);
+    expect(history.body.replacements).toEqual([]);
+    const separatorHistory = await agent.get(`${base}/readings?meterId=${separator.id}`);
+    expect(separatorHistory.body.replacements).toEqual([
+      expect.objectContaining({ meterId: separator.id, oldFinalValue: 910 }),
+    ]);
+  });
+});
+
 describe('meter ids from elsewhere', () => {
   it('another farm’s meter, or another machine’s — 404 naming meterId on a reading, a reset and a task; nothing written', async () => {
     const { org, agent } = await farm();

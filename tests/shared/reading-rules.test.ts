@@ -26,7 +26,7 @@ describe('reading rules', () => {
       field: 'value',
       rule: 'backwards',
       message:
-        'Reading 1,040 h is lower than the previous reading of 1,052 h taken 2024-03-11 08:00 — readings may not go backwards. If the counter was reset, record it with “Counter was reset” when logging the reading (a new meter fitted: Record meter replacement).',
+        'Reading 1,040 h is lower than the previous reading of 1,052 h taken 2024-03-11 08:00 — readings may not go backwards. If a new meter was fitted, record it with “Record meter replacement” on its meter.',
     });
   });
 

@@ -48,11 +48,16 @@ export const METER_CASES: Record<string, Case> = {
     ids: 'path',
     build: async (c) => ({ params: await onMeter(c) }),
   },
+  // a counter reset is for a counting meter: a bale counter on the fresh machine
   'POST /organizations/{orgId}/machines/{machineId}/meter-resets': {
     ids: 'path',
-    build: async (c) => ({
-      params: onMachine(c, c.succeeds ? await freshMachine(c.rec) : c.rec.machine),
-      body: { oldFinalValue: LAST_METER + 10, resetAt: new Date().toISOString() },
-    }),
+    build: async (c) => {
+      const machine = c.succeeds ? await freshMachine(c.rec) : c.rec.machine;
+      const meterId = c.succeeds ? (await createMeter(machine, 'bales')).id : undefined;
+      return {
+        params: onMachine(c, machine),
+        body: { oldFinalValue: LAST_METER + 10, resetAt: new Date().toISOString(), meterId },
+      };
+    },
   },
 };

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useEffect, useState } from 'react';
 import { METER_UNIT_LABELS, type MeterUnit, type UnitSystem } from '../../../../shared/constants';
 import { useForm } from 'react-hook-form';
 import { zodResolver } from '@hookform/resolvers/zod';
@@ -14,6 +14,7 @@ import {
 import { applyServerErrors } from '../../../lib/form-errors';
 import { meterValueAs, withMeterReasons } from '../../../lib/meter-input';
 import { meterName, useCounterReset, type MachineMeterJson } from '../../../lib/meters';
+import { isCountingMeter, isCountingUnit } from '../../../../shared/domain/meter-kinds';
 import { useLogReading } from '../api/log-reading';
 import type { Reading } from '../api/types';
 import { newReadingFormSchema } from '../lib/reading-form-schema';
@@ -55,6 +56,7 @@ export function ReadingForm(props: ReadingFormProps) {
     handleSubmit,
     setError,
     reset,
+    setValue,
     watch,
     formState: { errors, isSubmitting },
   } = useForm({
@@ -64,7 +66,13 @@ export function ReadingForm(props: ReadingFormProps) {
   const chosen = meters.find((m) => m.id === watch('meterId')) ?? meters[0];
   const unit = chosen ? METER_UNIT_LABELS[chosen.unit as MeterUnit] : props.unit;
   const last = chosen && meters.length > 1 ? chosen.lastReading : props.latest;
-  const resetting = watch('reset');
+  // a counter reset belongs to counting meters only (a bale counter), never an hour meter
+  const counting = chosen ? isCountingMeter(chosen.kind) : isCountingUnit(props.unit as MeterUnit);
+  const resetting = counting && watch('reset');
+  // another meter chosen: a tick left from a counting meter would ask for a count before a reset
+  useEffect(() => {
+    if (!counting) setValue('reset', false);
+  }, [counting, setValue]);
 
   const submit = handleSubmit(async (values) => {
     setFormError(null);
@@ -80,7 +88,7 @@ export function ReadingForm(props: ReadingFormProps) {
     }
     const meterId = values.meterId || undefined;
     try {
-      if (values.reset) {
+      if (counting && values.reset) {
         await resetCounter.mutateAsync({
           meterId,
           oldFinalValue: values.oldFinalValue!,
@@ -123,10 +131,12 @@ export function ReadingForm(props: ReadingFormProps) {
           {...register('meterId')}
         />
       ) : null}
-      <label className="flex min-h-touch items-center gap-3 font-bold text-field-900">
-        <input type="checkbox" className="size-5" {...register('reset')} />
-        Counter was reset
-      </label>
+      {counting ? (
+        <label className="flex min-h-touch items-center gap-3 font-bold text-field-900">
+          <input type="checkbox" className="size-5" {...register('reset')} />
+          Counter was reset
+        </label>
+      ) : null}
       <div className="grid gap-4 sm:grid-cols-2">
         {resetting ? (
           <TextField
