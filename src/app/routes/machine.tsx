@@ -24,6 +24,7 @@ import {
   machineReadingsQueryOptions,
   useMachineReadings,
 } from '../../features/readings/api/get-machine-readings';
+import { MeterReplacementForm } from '../../features/readings/components/meter-replacement-form';
 import { ReadingsSection } from '../../features/readings/components/readings-section';
 import { tasksQueryOptions, useTasks } from '../../features/schedules/api/get-tasks';
 import { DueSection } from '../../features/schedules/components/due-section';
@@ -37,7 +38,7 @@ import { MeasurementsSection } from '../../features/services/components/measurem
 import { ServiceActions, ServiceHistory } from '../../features/services/components/service-history';
 import { isApiError } from '../../lib/api-client';
 import { useCurrentMembership } from '../../lib/auth';
-import { machineMetersQueryOptions, useMachineMeters } from '../../lib/meters';
+import { machineMetersQueryOptions, meterName, useMachineMeters } from '../../lib/meters';
 import { paths } from '../paths';
 
 export const machineLoader =
@@ -200,7 +201,26 @@ export function MachinePage() {
             title="Meters"
             description="The machine's meters, and each one's lifetime count over time with the trend ahead."
           >
-            <MetersPanel orgId={orgId} machineId={detail.id} />
+            <MetersPanel
+              orgId={orgId}
+              machineId={detail.id}
+              replacementForm={
+                abilities.replaceMeter
+                  ? (meter, done) => (
+                      <MeterReplacementForm
+                        orgId={orgId}
+                        machineId={detail.id}
+                        meterId={meter.id}
+                        meterLabel={meterName(meter)}
+                        unit={meter.unit}
+                        units={organization.units}
+                        timeZone={timeZone}
+                        onDone={done}
+                      />
+                    )
+                  : undefined
+              }
+            />
             <MeterSection
               orgId={orgId}
               readings={readings}

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { Alert } from '../../../components/ui/alert';
 import { Badge } from '../../../components/ui/badge';
 import { Button } from '../../../components/ui/button';
@@ -23,14 +23,33 @@ const reasonOf = (error: unknown) =>
     : 'Something went wrong. Try again.';
 
 /**
- * The machine's meters: kind, unit, the value shown and the lifetime, which one is primary. A
- * manager or technician adds, renames, makes primary and removes; others only read.
+ * The form that records a new meter fitted in place of this one (the readings feature's, composed
+ * by the page, as features stay apart); `done` closes it with a message (empty: cancelled).
  */
-export function MetersPanel({ orgId, machineId }: { orgId: string; machineId: string }) {
+export type ReplacementForm = (
+  meter: MachineMeterJson,
+  done: (message: string) => void,
+) => ReactNode;
+
+/**
+ * The machine's meters: kind, unit, the value shown and the lifetime, which one is primary. A
+ * manager or technician adds, renames, makes primary and removes, and records a meter
+ * replacement on any of them (`replacementForm`, given to those who may); others only read.
+ */
+export function MetersPanel({
+  orgId,
+  machineId,
+  replacementForm,
+}: {
+  orgId: string;
+  machineId: string;
+  replacementForm?: ReplacementForm;
+}) {
   const meters = useMachineMeters(orgId, machineId);
   const change = useChangeMeter(orgId, machineId);
   const [adding, setAdding] = useState(false);
   const [renaming, setRenaming] = useState<string | null>(null);
+  const [replacing, setReplacing] = useState<string | null>(null);
   const [removing, setRemoving] = useState<MachineMeterJson | null>(null);
   const [notice, setNotice] = useState<string | null>(null);
   const [refusal, setRefusal] = useState<string | null>(null);
@@ -80,14 +99,19 @@ export function MetersPanel({ orgId, machineId }: { orgId: string; machineId: st
           <li
             key={meter.id}
             aria-label={meterName(meter)}
-            className="flex min-w-0 flex-col gap-2 rounded-xl border border-field-200 bg-white p-4"
+            className={`flex min-w-0 flex-col gap-2 rounded-xl border border-field-200 bg-white p-4 ${replacing === meter.id ? 'sm:col-span-2' : ''}`}
           >
             <div className="flex flex-wrap items-center gap-2">
               <h4 className="min-w-0 font-black break-words text-field-950">{meterName(meter)}</h4>
               {meter.isPrimary ? <Badge tone="info">Primary</Badge> : null}
             </div>
             <MeterFigures meter={meter} />
-            {abilities.manage && renaming === meter.id ? (
+            {replacementForm && replacing === meter.id ? (
+              replacementForm(meter, (message) => {
+                setReplacing(null);
+                said(message || null);
+              })
+            ) : abilities.manage && renaming === meter.id ? (
               <RenameMeterForm
                 orgId={orgId}
                 machineId={machineId}
@@ -108,6 +132,19 @@ export function MetersPanel({ orgId, machineId }: { orgId: string; machineId: st
                 >
                   Rename
                 </Button>
+                {replacementForm ? (
+                  <Button
+                    variant="secondary"
+                    icon="refresh"
+                    onClick={() => {
+                      said(null);
+                      setRenaming(null);
+                      setReplacing(meter.id);
+                    }}
+                  >
+                    Record meter replacement
+                  </Button>
+                ) : null}
                 {meter.isPrimary ? null : (
                   <>
                     <Button

@@ -12,6 +12,7 @@ import { applyServerErrors } from '../../../lib/form-errors';
 import { meterValueAs, withMeterReasons } from '../../../lib/meter-input';
 import {
   formatMeter,
+  meterUnitLabel,
   fromDateTimeLocalValue,
   toDateTimeLocalValue,
 } from '../../../lib/fleet-format';
@@ -23,10 +24,16 @@ const formSchema = meterReplacementSchema.extend({
   replacedAt: z.string().min(1, { error: 'Enter when the meter was replaced' }),
 });
 
-/** A new hour meter: the old one's last value and the new one's first, so lifetime stays continuous. */
+/**
+ * A new meter fitted in place of one of the machine's meters (any of them: engine, separator,
+ * PTO…): the old one's last value and the new one's first, so that meter's lifetime stays
+ * continuous. The others are untouched.
+ */
 export function MeterReplacementForm({
   orgId,
   machineId,
+  meterId,
+  meterLabel,
   unit,
   units,
   timeZone,
@@ -34,6 +41,10 @@ export function MeterReplacementForm({
 }: {
   orgId: string;
   machineId: string;
+  /** the meter replaced (machine_meters.id) */
+  meterId: string;
+  /** how the meter is named on screen ("Separator hours") */
+  meterLabel: string;
   unit: string;
   units: UnitSystem;
   timeZone: string;
@@ -64,9 +75,9 @@ export function MeterReplacementForm({
       return;
     }
     try {
-      await record.mutateAsync({ ...values, replacedAt });
+      await record.mutateAsync({ ...values, meterId, replacedAt });
       onDone(
-        `Meter replacement recorded: the new meter starts at ${formatMeter(values.newStartValue, unit)}.`,
+        `Meter replacement recorded on ${meterLabel}: the new meter starts at ${formatMeter(values.newStartValue, unit)}.`,
       );
     } catch (error) {
       setFormError(
@@ -84,13 +95,14 @@ export function MeterReplacementForm({
     <form
       onSubmit={submit}
       noValidate
-      aria-label="Record meter replacement"
+      aria-label={`Record meter replacement of ${meterLabel}`}
       className="flex flex-col gap-4 rounded-xl border border-field-300 bg-white p-4"
     >
       <h3 className="text-lg font-black text-field-950">Record meter replacement</h3>
       <p className="text-field-700">
-        Readings after the replacement count from the new meter's start; the machine's lifetime{' '}
-        {unit} carry on without a jump.
+        A new meter in place of {meterLabel}: its readings after the replacement count from the new
+        meter's start, and its lifetime {meterUnitLabel(unit)} carry on without a jump. The
+        machine's other meters are not changed.
       </p>
       {formError ? <Alert>{formError}</Alert> : null}
       <div className="grid gap-4 sm:grid-cols-2">

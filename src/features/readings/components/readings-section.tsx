@@ -2,7 +2,6 @@ import { useState } from 'react';
 import type { UseQueryResult } from '@tanstack/react-query';
 import { ChoiceChips } from '../../../components/ui/choice-chips';
 import { Alert } from '../../../components/ui/alert';
-import { Button } from '../../../components/ui/button';
 import { Card } from '../../../components/ui/card';
 import { ErrorState } from '../../../components/ui/error-state';
 import { ListSkeleton } from '../../../components/ui/skeleton';
@@ -16,13 +15,13 @@ import {
 } from '../../../lib/meters';
 import { useMachineReadings } from '../api/get-machine-readings';
 import type { ReadingHistory as History } from '../api/types';
-import { MeterReplacementForm } from './meter-replacement-form';
 import { ReadingForm } from './reading-form';
 import { ReadingHistory } from './reading-history';
 
 /**
- * Log a reading (on a chosen meter when the machine has several, or a counter reset), the history
- * of each meter newest first, corrections and meter replacements.
+ * Log a reading (on a chosen meter when the machine has several, or a counter reset on a counting
+ * meter), the history of each meter newest first, and corrections. A meter replacement is
+ * recorded from that meter's panel under Meters.
  */
 export function ReadingsSection({
   orgId,
@@ -43,8 +42,6 @@ export function ReadingsSection({
   const meterList = meters.data?.data ?? [];
   const [shownId, setShownId] = useState('');
   const shown = meterList.find((m) => m.id === shownId && !m.isPrimary);
-  const [replacing, setReplacing] = useState(false);
-  const [notice, setNotice] = useState<string | null>(null);
   const latest = readings.data?.data[0] ?? null;
 
   return (
@@ -69,36 +66,6 @@ export function ReadingsSection({
         </Card>
       ) : machine.status === 'sold' ? (
         <Alert tone="info">This machine is sold; its readings are closed.</Alert>
-      ) : null}
-
-      {notice ? <Alert tone="success">{notice}</Alert> : null}
-      {abilities.replaceMeter ? (
-        replacing ? (
-          <MeterReplacementForm
-            orgId={orgId}
-            machineId={machine.id}
-            unit={machine.meterUnit}
-            units={units}
-            timeZone={timeZone}
-            onDone={(message) => {
-              setReplacing(false);
-              setNotice(message || null);
-            }}
-          />
-        ) : (
-          <div>
-            <Button
-              variant="secondary"
-              icon="refresh"
-              onClick={() => {
-                setNotice(null);
-                setReplacing(true);
-              }}
-            >
-              Record meter replacement
-            </Button>
-          </div>
-        )
       ) : null}
 
       <h3 className="text-lg font-black text-field-950">History</h3>
