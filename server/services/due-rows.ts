@@ -39,6 +39,7 @@ export const visibleToOperator = (machine = 'm.id', org = 'm.organization_id') =
 /** The select list of a due row (the joins are the caller's: d, t, m, mt and f). */
 export const DUE_ROW_COLUMNS = `d.task_id, d.due, t.name AS task_name, t.hazards, t.labour_hours,
       m.id AS machine_id, m.fleet_number, m.name AS machine_name, m.category, m.status AS machine_status, mt.unit AS meter_unit,
+      mt.id AS meter_id, mt.kind AS meter_kind, mt.label AS meter_label, mt.is_primary AS meter_primary,
       m.restriction_reason IS NOT NULL AS machine_restricted,
       f.last_value, f.last_raw_value, f.last_taken_at, f.usage - array['profile', 'profileFast', 'profileSlow'] AS usage`;
 
@@ -97,6 +98,10 @@ export interface RawDueRow {
   machine_status: MachineRef['status'];
   machine_restricted: boolean;
   meter_unit: MachineRef['meterUnit'];
+  meter_id: string;
+  meter_kind: DueRow['meter']['kind'];
+  meter_label: string;
+  meter_primary: boolean;
   last_value: number | null;
   last_raw_value: number | null;
   last_taken_at: Date | null;
@@ -119,6 +124,7 @@ export function toDueRow(r: RawDueRow): DueRow {
       restricted: r.machine_restricted,
       meterUnit: r.meter_unit,
     },
+    meter: { id: r.meter_id, kind: r.meter_kind, label: r.meter_label, isPrimary: r.meter_primary },
     due: r.due,
     lastReading:
       r.last_value !== null && r.last_taken_at

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { DUE_STATUSES } from '../constants';
+import { DUE_STATUSES, METER_KINDS } from '../constants';
 import { SEASON_ANCHORS } from '../domain/season-dates';
 import { lastReadingSchema, usageSchema } from './machines';
 import { machineRefSchema } from './refs';
@@ -66,7 +66,15 @@ export const dueRowSchema = z
     taskName: z.string(),
     hazards: z.array(z.string()),
     labourHours: z.number().nullable(),
+    /** the machine; its meterUnit is the unit of the task's meter */
     machine: machineRefSchema,
+    /** the meter the task counts on (a combine's separator hours, say), named where not primary */
+    meter: z.object({
+      id: z.string(),
+      kind: z.enum(METER_KINDS),
+      label: z.string(),
+      isPrimary: z.boolean(),
+    }),
     due: duePointSchema,
     /** last reading: value on the meter fitted now, and on the lifetime scale */
     lastReading: lastReadingSchema.nullable(),

@@ -32,6 +32,13 @@ export const meterKeys = {
 export const meterName = (m: Pick<MachineMeterJson, 'kind' | 'label'>) =>
   m.label ? `${METER_KIND_LABELS[m.kind]} — ${m.label}` : METER_KIND_LABELS[m.kind];
 
+/**
+ * What a task's line says of the meter it counts on: the meter's name where it is not the
+ * machine's primary ("Separator hours"), nothing on the primary, whose unit every screen shows.
+ */
+export const boundMeterName = (m: Pick<MachineMeterJson, 'kind' | 'label' | 'isPrimary'>) =>
+  m.isPrimary ? null : meterName(m);
+
 export const machineMetersQueryOptions = (orgId: string, machineId: string) =>
   queryOptions({
     queryKey: meterKeys.machine(orgId, machineId),

@@ -1,6 +1,7 @@
 import { Link } from 'react-router-dom';
 import { Caution } from '../../../components/ui/caution';
 import { MachineStatusBadge, RestrictedBadge } from '../../../components/ui/status-badges';
+import { boundMeterName } from '../../../lib/meters';
 import type { DueRow } from '../api/types';
 import { BASIS_TEXT } from './due-format';
 
@@ -28,9 +29,11 @@ export function DueMachine({ row, href }: { row: DueRow; href: string }) {
  */
 export function DueTask({ row }: { row: DueRow }) {
   const basis = BASIS_TEXT[row.due.basis];
+  const meter = boundMeterName(row.meter);
   return (
     <div className="flex flex-col gap-1">
       <span>{row.taskName}</span>
+      {meter ? <span className="text-sm font-bold text-field-800">Counts on {meter}</span> : null}
       {basis ? <span className="text-sm text-field-600">{basis}</span> : null}
       {row.hazards.length ? (
         <Caution variant="summary" heading="Caution." hazards={row.hazards} defer />

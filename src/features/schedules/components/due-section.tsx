@@ -10,7 +10,7 @@ import { Button } from '../../../components/ui/button';
 import { EmptyState } from '../../../components/ui/empty-state';
 import { ErrorState } from '../../../components/ui/error-state';
 import { ListSkeleton } from '../../../components/ui/skeleton';
-import { useMachineMeters } from '../../../lib/meters';
+import { boundMeterName, useMachineMeters } from '../../../lib/meters';
 import { useCreateTask } from '../api/create-task';
 import { useTasks } from '../api/get-tasks';
 import type { Task } from '../api/types';
@@ -52,6 +52,7 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
   const tasks = useTasks(orgId, machine.id);
   const create = useCreateTask(orgId, machine.id);
   const meters = useMachineMeters(orgId, machine.id);
+  const meterList = meters.data?.data ?? [];
   const [panel, setPanel] = useState<'none' | 'add' | 'template' | 'class'>('none');
   const [notice, setNotice] = useState<string | null>(null);
   const open = (next: 'add' | 'template' | 'class') => {
@@ -173,23 +174,25 @@ export function DueSection({ orgId, machine, timeZone, recordServiceHref }: DueS
         </EmptyState>
       ) : (
         <ul className="grid items-start gap-3 lg:grid-cols-2" aria-label="Service tasks">
-          {list.map((task) => (
-            <TaskCard
-              key={task.id}
-              orgId={orgId}
-              task={task}
-              unit={machine.meterUnit}
-              meterOffset={
-                machine.lastReading
-                  ? machine.lastReading.lifetimeValue - machine.lastReading.value
-                  : 0
-              }
-              timeZone={timeZone}
-              canEdit={canEdit}
-              canSetLastDone={canSetLastDone}
-              recordServiceHref={recordServiceHref}
-            />
-          ))}
+          {list.map((task) => {
+            // each task in its own meter's unit and offset (a separator task in separator hours)
+            const meter = meterList.find((m) => m.id === task.meterId);
+            const last = meter ? meter.lastReading : machine.lastReading;
+            return (
+              <TaskCard
+                key={task.id}
+                orgId={orgId}
+                task={task}
+                unit={meter?.unit ?? machine.meterUnit}
+                meterName={meter ? boundMeterName(meter) : null}
+                meterOffset={last ? last.lifetimeValue - last.value : 0}
+                timeZone={timeZone}
+                canEdit={canEdit}
+                canSetLastDone={canSetLastDone}
+                recordServiceHref={recordServiceHref}
+              />
+            );
+          })}
         </ul>
       )}
     </div>

@@ -20,6 +20,8 @@ interface TaskCardProps {
   orgId: string;
   task: Task;
   unit: string;
+  /** the meter the task counts on, named where it is not the machine's primary (else null) */
+  meterName?: string | null;
   /** lifetime minus the fitted meter's value (non-zero after a meter replacement) */
   meterOffset?: number;
   timeZone: string;
@@ -42,6 +44,7 @@ export function TaskCard({
   orgId,
   task,
   unit,
+  meterName,
   meterOffset,
   timeZone,
   canEdit,
@@ -65,6 +68,9 @@ export function TaskCard({
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div className="min-w-0">
           <h3 className="text-lg font-black text-field-950">{task.name}</h3>
+          {meterName ? (
+            <p className="text-sm font-bold text-field-800">Counts on {meterName}</p>
+          ) : null}
           <p className="text-sm text-field-700">
             {describeInterval(task, unit)}
             {task.firstServiceMeter !== null

@@ -5,6 +5,7 @@ import { DueStatusBadge } from '../../../components/ui/status-badges';
 import { hazardNames } from '../../../lib/caution-text';
 import { fittedMeterText, overText } from '../../../lib/due-format';
 import { formatLocalDate } from '../../../lib/fleet-format';
+import { boundMeterName } from '../../../lib/meters';
 import type { PullFluid, PullPart, ShopDueRow, ShopPlanned } from '../api/types';
 import { formatHours, formatQuantity } from '../lib/record-format';
 
@@ -101,7 +102,9 @@ export function DueItem({
   links: ShopLinks;
   planDate: string | null;
 }) {
+  // the unit of the task's own meter; named where it is not the primary (separator hours)
   const unit = row.machine.meterUnit;
+  const meter = boundMeterName(row.meter);
   const due = row.due;
   const when = [
     due.dueMeter !== null
@@ -125,6 +128,7 @@ export function DueItem({
         <DueStatusBadge status={due.status} />
       </div>
       <p className="text-sm text-field-700">
+        {meter ? <span className="font-bold text-field-800">Counts on {meter} · </span> : null}
         Due {when || '—'}
         {row.labourHours !== null ? ` · about ${formatHours(row.labourHours)}` : ''}
       </p>
