@@ -27,6 +27,7 @@ import {
 } from '../../features/services/api/get-service-history';
 import { ServiceActions, ServiceHistory } from '../../features/services/components/service-history';
 import { isApiError } from '../../lib/api-client';
+import { machineMetersQueryOptions, useMachineMeters } from '../../lib/meters';
 import { WithFarmScope, type FarmScope } from '../farm-scope';
 
 /** Starts the machine's reads with the page (the service history waits for the link's access). */
@@ -38,6 +39,7 @@ export const customerMachineLoader =
     void queryClient.prefetchQuery(machineQueryOptions(farmId, machineId));
     void queryClient.prefetchQuery(tasksQueryOptions(farmId, machineId));
     void queryClient.prefetchQuery(machineReadingsQueryOptions(farmId, machineId));
+    void queryClient.prefetchQuery(machineMetersQueryOptions(farmId, machineId));
     return null;
   };
 
@@ -58,13 +60,16 @@ function CustomerMachine({ scope }: { scope: FarmScope }) {
   const machine = useMachine(farm.id, machineId);
   const tasks = useTasks(farm.id, machineId);
   const readings = useMachineReadings(farm.id, machineId);
+  const meters = useMachineMeters(farm.id, machineId);
   // a view link does not reach the service history: not asked, rather than answered 404
   const history = useQuery({ ...serviceHistoryQueryOptions(farm.id, machineId), enabled: service });
   const events = useQuery({ ...serviceEventsQueryOptions(farm.id, machineId), enabled: service });
   const dues = useMemo(
     () =>
       (tasks.data?.data ?? []).flatMap((task) =>
-        task.due?.dueMeter != null ? [{ taskName: task.name, dueMeter: task.due.dueMeter }] : [],
+        task.due?.dueMeter != null
+          ? [{ taskName: task.name, dueMeter: task.due.dueMeter, meterId: task.meterId }]
+          : [],
       ),
     [tasks.data],
   );
@@ -155,9 +160,14 @@ function CustomerMachine({ scope }: { scope: FarmScope }) {
           </Section>
         ) : null}
 
-        <Section title="Meter" description="Lifetime meter over time and the trend ahead.">
+        <Section
+          title="Meters"
+          description="Each of the machine's meters: its lifetime count over time and the trend ahead."
+        >
           <MeterSection
+            orgId={farm.id}
             readings={readings}
+            meters={meters.data?.data}
             machine={detail}
             dues={dues}
             services={events.data}
