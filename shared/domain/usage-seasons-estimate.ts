@@ -116,8 +116,9 @@ export function estimateFirstYear(
     [standIn.year],
     { shiftSd: SHIFT_PRIOR_SD_DAYS, paceSd: FIRST_YEAR_PACE_SD },
     (l) =>
-      `First year: the season months entered (${months.join(', ')}) at the pace ` +
-      `${PACE_FROM[standIn.paceFrom]}` +
+      // said plainly on the machine's page: where its dates come from while it is young
+      `First year: dated from the season months entered for it (${months.join(', ')}), not ` +
+      `yet from a year of its own history; at the pace ${PACE_FROM[standIn.paceFrom]}` +
       `; likeliest ${shiftWords(l.shift)}, at ×${l.pace.toFixed(2)}`,
   );
 }
