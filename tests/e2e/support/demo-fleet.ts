@@ -101,6 +101,13 @@ export const HITCH_FLEET = ['HX-01', 'HX-02', 'HK-01', 'HK-02'] as const;
  */
 export const SEASON_HOURS_FLEET = 'SH-01';
 
+/**
+ * season-forecast.e2e.ts adds these (issue 17): SF-01, a combine with a year of history idle
+ * before its season (two tasks: one with the two outcomes, one with the before-the-peak advice);
+ * SF-02, a young tractor with season months, dated from them.
+ */
+export const SEASON_FORECAST_FLEET = ['SF-01', 'SF-02'] as const;
+
 /** What walkaround.e2e.ts must not tag out or walk round: every machine another file relies on. */
 export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   ...LOG_HOURS_FLEET,
@@ -121,6 +128,7 @@ export const WRITTEN_OR_READ_BY_OTHERS: ReadonlySet<string> = new Set([
   TELEMATICS_FLEET,
   ...METERS_FLEET,
   SEASON_HOURS_FLEET,
+  ...SEASON_FORECAST_FLEET,
 ]);
 
 /** The signed-in person's Larkspur Flats Farm membership: its organization id and time zone. */
