@@ -4,8 +4,9 @@
 // sd 14 days — one past year — at a pace of sd 0.2, split ×e^∓√2·0.2 = ×0.754 / ×1 / ×1.327) says
 // of its oil change (420 h to go) "late this season (…) or early next (…), likelier this season",
 // and of its belt check (240 h to go) "Do it before …: … h early, avoids a stop in the busy season".
-// SF-02, a young tractor with season months, says its dates come from those months, not yet from a
-// year of its own history. Day numbers below count from today (the farm's local date).
+// A third task, past its calendar date, is only "Overdue" and by how much: no projection. SF-02, a
+// young tractor with season months, says its dates come from those months, not yet from a year
+// of its own history. Day numbers below count from today (the farm's local date).
 //
 // Worked by hand from the readings this file writes (the forecast is a distribution over start
 // shifts on a 2-day grid, read on 4-day steps, so each figure is given with the slack those steps
@@ -54,12 +55,17 @@ describe('season forecast — two outcomes, before the peak, a young machine’s
   let farmZone = 'UTC';
   let combineId: string;
   let youngId: string;
-  const taskIds: Record<'oil' | 'belt', string> = { oil: '', belt: '' };
+  const taskIds: Record<'oil' | 'belt' | 'auger', string> = { oil: '', belt: '', auger: '' };
 
-  const addTask = async (name: string, lastDoneMeter: number, lastDoneDaysAgo: number) => {
+  const addTask = async (
+    name: string,
+    lastDoneMeter: number,
+    lastDoneDaysAgo: number,
+    interval: { intervalMeter: number; intervalDays?: number } = { intervalMeter: 500 },
+  ) => {
     const base = `/api/v1/organizations/${org}`;
     const task = await page.request.post(`${base}/machines/${combineId}/tasks`, {
-      data: { name, intervalMeter: 500 },
+      data: { name, ...interval },
     });
     expect(task.status()).toBe(201);
     const id = (await task.json()).data.id as string;
@@ -109,6 +115,12 @@ describe('season forecast — two outcomes, before the peak, a young machine’s
     // 1,220 h was reached about 287 days ago)
     taskIds.oil = await addTask('Engine oil and filter', 1400, 265);
     taskIds.belt = await addTask('Rotor belt check', 1220, 287);
+    // like the demo's S-01: due at 1,900 h (420 h to go, the oil change's two outcomes) or 365
+    // days after its last service 400 days ago — 35 days past its date: overdue
+    taskIds.auger = await addTask('Auger gearbox oil', 1000, 400, {
+      intervalMeter: 900,
+      intervalDays: 365,
+    });
   });
   afterAll(async () => {
     await browser?.close();
@@ -164,6 +176,33 @@ describe('season forecast — two outcomes, before the peak, a young machine’s
     expect(await card.innerText()).toMatch(/Before the season/);
     expect(await card.innerText()).toContain(line);
     await screenshot(page, 'season-forecast-before-peak');
+  });
+
+  it('past its date: "Overdue" and "35 days over", no projection or two outcomes (due list and details)', async () => {
+    const due = await dueOf(taskIds.auger);
+    expect(due.status).toBe('overdue');
+    expect(due.remainingDays).toBe(-35);
+    // the meter's projection still crosses the idle months; the screens leave it unsaid
+    expect(due.outcomes).toBeDefined();
+
+    await page.goto(`/o/${org}?horizon=7&category=combine&status=overdue`);
+    const row = page
+      .getByRole('table', { name: 'Due services' })
+      .getByRole('row')
+      .filter({ hasText: 'Auger gearbox oil' })
+      .filter({ hasText: COMBINE });
+    await row.getByText('35 days over').first().waitFor();
+    const rowText = await row.innerText();
+    expect(rowText).toContain('Overdue');
+    expect(rowText).not.toMatch(/this season|early next|range|Do it before/);
+    expect(rowText).not.toContain(usDate(due.projectedDate!));
+
+    await page.goto(`/o/${org}/machines/${combineId}`);
+    const card = taskCard('Auger gearbox oil');
+    await card.getByText(/^Details/).click();
+    const text = await card.innerText();
+    expect(text).toContain('35 days over');
+    expect(text).not.toMatch(/Meter reaches it|this season|early next/);
   });
 
   it('a young tractor with season months says its dates come from them, not yet from its own history', async () => {
