@@ -178,7 +178,7 @@ describe('season forecast — two outcomes, before the peak, a young machine’s
     await screenshot(page, 'season-forecast-before-peak');
   });
 
-  it('past its date: "Overdue" and "35 days over", no projection or two outcomes (due list and details)', async () => {
+  it('past its date: "Overdue", "Date passed" and "35 days over", no projection or two outcomes (due list and details)', async () => {
     const due = await dueOf(taskIds.auger);
     expect(due.status).toBe('overdue');
     expect(due.remainingDays).toBe(-35);
@@ -194,6 +194,7 @@ describe('season forecast — two outcomes, before the peak, a young machine’s
     await row.getByText('35 days over').first().waitFor();
     const rowText = await row.innerText();
     expect(rowText).toContain('Overdue');
+    expect(rowText).toContain('Date passed');
     expect(rowText).not.toMatch(/this season|early next|range|Do it before/);
     expect(rowText).not.toContain(usDate(due.projectedDate!));
 

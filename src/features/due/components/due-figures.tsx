@@ -1,6 +1,5 @@
 import {
   dueDateText,
-  overText,
   projectionWords,
   remainingDaysText,
   remainingMeterText,
@@ -60,7 +59,7 @@ export function DueAtFigure({ row }: { row: DueRow }) {
 
 /**
  * The date the meter is projected to reach its due value, with its spread and the before-the-peak
- * advice; for an overdue task only that it is overdue and how far (no projection into a later year).
+ * advice; for an overdue task no projection, only what passed (its meter value or its date).
  */
 export function ProjectedFigure({ row }: { row: DueRow }) {
   const { status, dueMeter } = row.due;
@@ -74,11 +73,11 @@ export function ProjectedFigure({ row }: { row: DueRow }) {
       </span>
     );
   if (status === 'history_unknown') return <span className={muted}>—</span>;
+  // overdue: the badge and Remaining say it and how far; a projection into a later year is noise
   if (status === 'overdue')
     return (
-      <span className="flex flex-col font-bold text-poppy-800">
-        <span>Overdue</span>
-        <span className="text-sm">{overText(row.due, unit)}</span>
+      <span className={muted}>
+        {(row.due.remainingMeter ?? 1) <= 0 ? 'Already reached' : 'Date passed'}
       </span>
     );
   const projection = projectionWords(row.due, unit);
