@@ -1,6 +1,7 @@
 // The 'season' usage estimate: past years as analogues (usage-seasons.ts) turned into the median,
 // slow and fast profiles a due date is read from (usage-bands.ts). See usage.ts.
 import type { ReadingPoint, UsageEstimate } from './types';
+import { seasonMonthsText } from './season-months-text';
 import { usageBands } from './usage-bands';
 import { FIRST_YEAR_PACE_SD, firstYearStandIn } from './usage-first-year';
 import {
@@ -93,8 +94,6 @@ const PACE_FROM = {
   typical: 'typical of its class',
 } as const;
 
-const MONTHS = ['Jan', 'Feb', 'Mar', 'Apr', 'May', 'Jun', 'Jul', 'Aug', 'Sep', 'Oct', 'Nov', 'Dec'];
-
 /**
  * First-year estimate from the season months (a stand-in year, usage-first-year.ts), or null when
  * the season pace is not known yet.
@@ -108,7 +107,6 @@ export function estimateFirstYear(
 ): UsageEstimate | null {
   const standIn = firstYearStandIn(sorted, seasonMonths, prior);
   if (!standIn) return null;
-  const months = [...seasonMonths].sort((a, b) => a - b).map((m) => MONTHS[m - 1]);
   return estimateFromYears(
     sorted,
     asOfDay,
@@ -117,7 +115,7 @@ export function estimateFirstYear(
     { shiftSd: SHIFT_PRIOR_SD_DAYS, paceSd: FIRST_YEAR_PACE_SD },
     (l) =>
       // said plainly on the machine's page: where its dates come from while it is young
-      `First year: dated from the season months entered for it (${months.join(', ')}), not ` +
+      `First year: dated from the season months entered for it (${seasonMonthsText(seasonMonths)}), not ` +
       `yet from a year of its own history; at the pace ${PACE_FROM[standIn.paceFrom]}` +
       `; likeliest ${shiftWords(l.shift)}, at ×${l.pace.toFixed(2)}`,
   );

@@ -111,7 +111,7 @@ describe('season method — first year, from the season months', () => {
     const usage = estimateUsage(readings, last.day, { seasonMonths: [8, 9, 10] });
     expect(usage.method).toBe('season');
     expect(usage.explanation).toMatch(
-      /^First year: dated from the season months entered for it \(Aug, Sep, Oct\), not yet from a year of its own history; at the pace it has shown in its season so far/,
+      /^First year: dated from the season months entered for it \(Aug–Oct\), not yet from a year of its own history; at the pace it has shown in its season so far/,
     );
     expect(usage.rate).toBeCloseTo(4, 0);
     // 40 h left: 10 days after 20 Aug (date-fns), give or take the pace spread

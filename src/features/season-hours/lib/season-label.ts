@@ -1,26 +1,11 @@
-// How a machine's season months read on its card: "Aug–Oct", "Nov–Feb" over New Year, "Mar, Jun"
-// when apart, and "All year" without season months (the server then counts the calendar year).
+// How a machine's season months read on its card, in the browser's own month names
+// (shared/domain/season-months-text.ts: "Aug–Oct", "Nov–Feb" over New Year, "All year").
+import { seasonMonthsText } from '../../../../shared/domain/season-months-text';
 
 const shortMonth = new Intl.DateTimeFormat(undefined, { month: 'short', timeZone: 'UTC' });
 const monthName = (month: number) => shortMonth.format(new Date(Date.UTC(2024, month - 1, 1)));
 
 /** The season months (1–12) as a short label; none or all twelve: "All year". */
 export function seasonLabel(months: readonly number[]): string {
-  const set = new Set(months);
-  if (set.size === 0 || set.size === 12) return 'All year';
-  const sorted = [...set].sort((a, b) => a - b);
-  // start where the month before is not in the season, so a run over New Year stays one run
-  const start = sorted.find((m) => !set.has(m === 1 ? 12 : m - 1)) ?? sorted[0]!;
-  const ordered = [...sorted.filter((m) => m >= start), ...sorted.filter((m) => m < start)];
-  const runs: number[][] = [];
-  for (const month of ordered) {
-    const run = runs.at(-1);
-    if (run && (run.at(-1)! % 12) + 1 === month) run.push(month);
-    else runs.push([month]);
-  }
-  return runs
-    .map((run) =>
-      run.length === 1 ? monthName(run[0]!) : `${monthName(run[0]!)}–${monthName(run.at(-1)!)}`,
-    )
-    .join(', ');
+  return seasonMonthsText(months, monthName);
 }
