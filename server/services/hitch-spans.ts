@@ -1,32 +1,118 @@
 // The hitch log's writes: hitch, unhitch, correct and remove a span, each in one transaction that
 // then brings the implement's hitch readings up to date (hitch-readings.ts). Locks go tractor
 // first, implement second, as a tractor's reading post takes them.
-import type { Transaction } from 'sequelize';
+import { DatabaseError, type Transaction } from 'sequelize';
 import { sequelize } from '../db';
 import { AppError, notFound } from '../errors';
 import { recordAudit } from '../infra/audit';
+import type { Machine } from '../models';
 import { HitchSpan } from '../models/hitch-span';
 import { authorize } from '../policies/access';
 import type { OrgAccess } from '../policies/context';
 import { canCorrectHitch, canHitch, CORRECT_HITCH_REFUSAL, HITCH_REFUSAL } from '../policies/hitch';
-import type {
-  HitchSpanCreateInput,
-  HitchSpanEndInput,
-  HitchSpanUpdateInput,
-} from '../../shared/schemas/hitch';
+import { takesReadings } from '../policies/machine';
+import { directQuery } from '../db-direct';
 import {
-  badField,
-  checkNoOverlap,
-  checkPair,
-  checkTractorMeter,
-  guarded,
-  notInFuture,
-  timeWords,
-} from './hitch-span-checks';
+  HITCH_IMPLEMENT_CATEGORIES,
+  HITCH_METER_KIND_LABELS,
+  type HitchMeterKind,
+  type HitchSpanCreateInput,
+  type HitchSpanEndInput,
+  type HitchSpanUpdateInput,
+} from '../../shared/schemas/hitch';
 import { recomputeImplements } from './hitch-readings';
 import { loadMachine } from './machine-load';
 
-export const whoOf = (access: OrgAccess) => ({
+const badField = (field: string, message: string) =>
+  new AppError(400, 'invalid', `${field}: ${message}`, { [field]: message });
+
+const label = (m: Machine) => `${m.fleetNumber} ${m.name}`;
+
+/** Refuses what cannot be on the hitch log, naming the field: 400. */
+function checkPair(implement: Machine, tractor: Machine) {
+  if (implement.id === tractor.id)
+    throw badField('tractorId', 'An implement cannot be hitched to itself');
+  if (tractor.category !== 'tractor')
+    throw badField('tractorId', `${label(tractor)} is not a tractor; pick the tractor that pulls`);
+  if (!(HITCH_IMPLEMENT_CATEGORIES as readonly string[]).includes(implement.category))
+    throw badField(
+      'implementId',
+      `${label(implement)} is not an implement: only implements, mowers and balers are hitched`,
+    );
+  if (implement.meterUnit !== 'h')
+    throw badField(
+      'implementId',
+      `${label(implement)} counts ${implement.meterUnit}; hours from hitching need a meter in hours`,
+    );
+  if (!takesReadings(implement)) throw badField('implementId', `${label(implement)} is sold`);
+  if (!takesReadings(tractor)) throw badField('tractorId', `${label(tractor)} is sold`);
+}
+
+async function checkTractorMeter(tractor: Machine, kind: HitchMeterKind, transaction: Transaction) {
+  const [row] = await directQuery<{ n: number }>(
+    transaction,
+    'SELECT count(*)::int AS n FROM machine_meters WHERE organization_id = $1 AND machine_id = $2 AND kind = $3',
+    [tractor.organizationId, tractor.id, kind],
+  );
+  if (!row?.n)
+    throw badField(
+      'meterKind',
+      `${label(tractor)} has no meter for ${HITCH_METER_KIND_LABELS[kind]}`,
+    );
+}
+
+const timeWords = (d: Date) => d.toISOString().replace('T', ' ').slice(0, 16) + ' UTC';
+
+/** 409 when the implement is on a tractor at any time of [start, end) (end null: open). */
+async function checkNoOverlap(
+  implement: Machine,
+  startedAt: Date,
+  endedAt: Date | null,
+  transaction: Transaction,
+  exceptId?: string,
+) {
+  const [clash] = await directQuery<{ fleet: string; started_at: Date; ended_at: Date | null }>(
+    transaction,
+    `SELECT t.fleet_number AS fleet, s.started_at, s.ended_at FROM hitch_spans s
+     JOIN machines t ON t.id = s.tractor_id
+     WHERE s.organization_id = $1 AND s.implement_id = $2 AND s.id IS DISTINCT FROM $5::uuid
+       AND tstzrange(s.started_at, s.ended_at, '[)') && tstzrange($3, $4, '[)')
+     ORDER BY s.started_at LIMIT 1`,
+    [implement.organizationId, implement.id, startedAt, endedAt, exceptId ?? null],
+  );
+  if (clash) throw overlap(implement, clash.fleet, clash.started_at, clash.ended_at);
+}
+
+const overlap = (implement: Machine, fleet: string, from: Date, to: Date | null) =>
+  new AppError(
+    409,
+    'hitch_overlap',
+    `${implement.fleetNumber} is on ${fleet} from ${timeWords(new Date(from))}` +
+      (to ? ` to ${timeWords(new Date(to))}` : ' and still hitched') +
+      ': an implement is on one tractor at a time; unhitch it there first or pick other times',
+  );
+
+/** The exclusion constraint, should two writers slip past the check: the same 409. */
+async function guarded<T>(implement: Machine, write: () => Promise<T>): Promise<T> {
+  try {
+    return await write();
+  } catch (err) {
+    const code = (err as DatabaseError & { parent?: { code?: string } }).parent?.code;
+    if (err instanceof DatabaseError && code === '23P01')
+      throw new AppError(
+        409,
+        'hitch_overlap',
+        `${implement.fleetNumber} is on another tractor then`,
+      );
+    throw err;
+  }
+}
+
+function notInFuture(field: string, at: Date, now: Date) {
+  if (at.getTime() > now.getTime() + 60_000) throw badField(field, 'may not be in the future');
+}
+
+const whoOf = (access: OrgAccess) => ({
   organizationId: access.organization.id,
   timeZone: access.organization.timeZone,
   userId: access.userId,
@@ -52,68 +138,38 @@ async function audit(access: OrgAccess, action: string, span: HitchSpan, transac
   );
 }
 
-type Loaded = Awaited<ReturnType<typeof loadMachine>>;
-
-/**
- * Opens a span of two machines already loaded and locked (tractor first): the pair, the caller's
- * right, the tractor's meter, the times and overlaps checked, the span written and audited. The
- * implement's hours are the caller's to work out again (recomputeImplements).
- */
-export async function openSpanLocked(
-  access: OrgAccess,
-  implement: Loaded,
-  tractor: Loaded,
-  input: Pick<HitchSpanCreateInput, 'meterKind' | 'note'> & {
-    startedAt: Date;
-    endedAt: Date | null;
-  },
-  transaction: Transaction,
-) {
-  const now = new Date();
-  checkPair(implement.machine, tractor.machine);
-  authorize(canHitch(access, implement.operatorIds, tractor.operatorIds), HITCH_REFUSAL);
-  await checkTractorMeter(tractor.machine, input.meterKind, transaction);
-  notInFuture('startedAt', input.startedAt, now);
-  if (input.endedAt) notInFuture('endedAt', input.endedAt, now);
-  await checkNoOverlap(implement.machine, input.startedAt, input.endedAt, transaction);
-  const span = await guarded(implement.machine, () =>
-    HitchSpan.create(
-      {
-        organizationId: access.organization.id,
-        implementId: implement.machine.id,
-        tractorId: tractor.machine.id,
-        meterKind: input.meterKind,
-        startedAt: input.startedAt,
-        endedAt: input.endedAt,
-        enteredBy: access.userId,
-        note: input.note,
-      },
-      { transaction },
-    ),
-  );
-  await audit(access, 'hitch.start', span, transaction);
-  return span;
-}
-
 /** Hitches an implement to a tractor (now, or the times given); 201 with the span. */
 export async function startSpan(access: OrgAccess, input: HitchSpanCreateInput) {
   if (input.implementId === input.tractorId)
     throw badField('tractorId', 'An implement cannot be hitched to itself');
   return sequelize.transaction(async (transaction) => {
+    const now = new Date();
     const tractor = await loadMachine(access, input.tractorId, transaction, { lock: true });
     const implement = await loadMachine(access, input.implementId, transaction, { lock: true });
-    const span = await openSpanLocked(
-      access,
-      implement,
-      tractor,
-      {
-        meterKind: input.meterKind,
-        note: input.note,
-        startedAt: input.startedAt ? new Date(input.startedAt) : new Date(),
-        endedAt: input.endedAt ? new Date(input.endedAt) : null,
-      },
-      transaction,
+    checkPair(implement.machine, tractor.machine);
+    authorize(canHitch(access, implement.operatorIds, tractor.operatorIds), HITCH_REFUSAL);
+    await checkTractorMeter(tractor.machine, input.meterKind, transaction);
+    const startedAt = input.startedAt ? new Date(input.startedAt) : now;
+    const endedAt = input.endedAt ? new Date(input.endedAt) : null;
+    notInFuture('startedAt', startedAt, now);
+    if (endedAt) notInFuture('endedAt', endedAt, now);
+    await checkNoOverlap(implement.machine, startedAt, endedAt, transaction);
+    const span = await guarded(implement.machine, () =>
+      HitchSpan.create(
+        {
+          organizationId: access.organization.id,
+          implementId: implement.machine.id,
+          tractorId: tractor.machine.id,
+          meterKind: input.meterKind,
+          startedAt,
+          endedAt,
+          enteredBy: access.userId,
+          note: input.note,
+        },
+        { transaction },
+      ),
     );
+    await audit(access, 'hitch.start', span, transaction);
     await recomputeImplements(whoOf(access), [span.implementId], transaction);
     return span;
   });
@@ -146,38 +202,23 @@ async function loadSpan(
   };
 }
 
-/**
- * Closes an open span at `endedAt`, its machines already loaded and locked (tractor first): the
- * caller's right, the time checked (after the start, not ahead of now), audited. The implement's
- * hours are the caller's to work out again.
- */
-export async function closeSpanLocked(
-  access: OrgAccess,
-  span: HitchSpan,
-  implement: Loaded,
-  tractor: Loaded,
-  endedAt: Date,
-  transaction: Transaction,
-) {
-  authorize(canHitch(access, implement.operatorIds, tractor.operatorIds), HITCH_REFUSAL);
-  if (span.endedAt)
-    throw new AppError(409, 'hitch_ended', `Already unhitched at ${timeWords(span.endedAt)}`);
-  notInFuture('endedAt', endedAt, new Date());
-  if (endedAt <= span.startedAt)
-    throw badField(
-      'endedAt',
-      `Unhitched at must be after Hitched at (${timeWords(span.startedAt)})`,
-    );
-  await span.update({ endedAt }, { transaction });
-  await audit(access, 'hitch.end', span, transaction);
-}
-
 /** Unhitches: the span ends now, or at the time given. */
 export async function endSpan(access: OrgAccess, spanId: string, input: HitchSpanEndInput) {
   return sequelize.transaction(async (transaction) => {
     const { span, implement, tractor } = await loadSpan(access, spanId, transaction);
-    const endedAt = input.endedAt ? new Date(input.endedAt) : new Date();
-    await closeSpanLocked(access, span, implement, tractor, endedAt, transaction);
+    authorize(canHitch(access, implement.operatorIds, tractor.operatorIds), HITCH_REFUSAL);
+    if (span.endedAt)
+      throw new AppError(409, 'hitch_ended', `Already unhitched at ${timeWords(span.endedAt)}`);
+    const now = new Date();
+    const endedAt = input.endedAt ? new Date(input.endedAt) : now;
+    notInFuture('endedAt', endedAt, now);
+    if (endedAt <= span.startedAt)
+      throw badField(
+        'endedAt',
+        `Unhitched at must be after Hitched at (${timeWords(span.startedAt)})`,
+      );
+    await span.update({ endedAt }, { transaction });
+    await audit(access, 'hitch.end', span, transaction);
     await recomputeImplements(whoOf(access), [span.implementId], transaction);
     return span;
   });

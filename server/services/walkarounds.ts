@@ -15,8 +15,6 @@ import { checklistFor } from './checklist-templates';
 import { checkAnswers } from './walkaround-answers';
 import { checkCareDone, dailyCareOf, planCare, signOffCare } from './daily-care';
 import { todayIso } from '../../shared/domain';
-import { hitchFedOf, hitchHoursAt } from './hitch-fed';
-import { applyWalkaroundHitch, lockHitchTractors } from './walkaround-hitch';
 
 // Starting and submitting a walkaround; checklists are in checklist-templates.ts, photos in
 // walkaround-photos.ts, the list and one walkaround in walkaround-history.ts.
@@ -83,12 +81,8 @@ export async function walkaroundStart(access: OrgAccess, machine: Machine) {
       ? { value: forecast.lastRawValue ?? forecast.lastValue, takenAt: forecast.lastTakenAt }
       : null;
   const { id: orgId, timeZone } = access.organization;
-  const [care, fed] = await Promise.all([
-    dailyCareOf(orgId, timeZone, [machine.id]),
-    hitchFedOf(orgId, [machine.id]),
-  ]);
-  const dailyCare = care.get(machine.id) ?? [];
-  return { checklist, lastReading, dailyCare, hitch: fed.get(machine.id) ?? null };
+  const dailyCare = (await dailyCareOf(orgId, timeZone, [machine.id])).get(machine.id) ?? [];
+  return { checklist, lastReading, dailyCare };
 }
 
 export interface WalkaroundOutcome {
@@ -112,7 +106,6 @@ async function saveWalkaround(
   try {
     return await sequelize.transaction(async (transaction) => {
       const { machine } = await loadMachine(access, input.machineId, transaction);
-      await lockHitchTractors(machine, input.hitch, transaction);
       await sequelize.query('SELECT id FROM machines WHERE id = :id FOR UPDATE', {
         replacements: { id: machine.id },
         transaction,
@@ -123,24 +116,16 @@ async function saveWalkaround(
       const items = await checkAnswers(access, machine, checklist, input.items, transaction);
       const careTasks = await checkCareDone(access, machine, input.careDone, transaction);
       const performedAt = input.performedAt ? new Date(input.performedAt) : new Date();
-      // an implement on the hitch log has no meter to read: its hours are the tractor's
-      const fed = (await hitchFedOf(access.organization.id, [machine.id], transaction)).has(
-        machine.id,
+      const reading = await walkaroundReading(
+        access,
+        machine,
+        input.meterValue,
+        performedAt,
+        transaction,
       );
-      const meterValue = checkMeterValue(machine, fed, input.meterValue);
-      const reading =
-        meterValue === null
-          ? null
-          : await walkaroundReading(access, machine, meterValue, performedAt, transaction);
-      // after the reading, at its time: a span opened here starts on the tractor's figure
-      if (input.hitch)
-        await applyWalkaroundHitch(access, machine, input.hitch, performedAt, transaction);
-      const lifetime =
-        reading?.lifetimeValue ??
-        (await hitchHoursAt(access.organization.id, machine.id, performedAt, transaction));
       // signed off at the walkaround's reading, on the lifetime scale, and its local date
       const careDoneAt = {
-        lifetime,
+        lifetime: reading.lifetimeValue,
         on: todayIso(access.organization.timeZone, performedAt),
       };
       const careDone = planCare(careTasks, careDoneAt.lifetime, careDoneAt.on);
@@ -157,8 +142,7 @@ async function saveWalkaround(
           clientId: input.clientId,
           purpose: input.purpose,
           performedAt,
-          // a hitch-fed implement's: its hours from the hitch log at the walkaround's time
-          meterValue: meterValue ?? lifetime,
+          meterValue: input.meterValue,
           readingId: reading?.id ?? null,
           templateId: checklist.template.id,
           templateName: checklist.template.name,
@@ -214,7 +198,7 @@ async function saveWalkaround(
           action: 'walkaround.create',
           entityType: 'walkaround',
           entityId: walkaround.id,
-          changes: { machineId: machine.id, result, meterValue: meterValue ?? lifetime, taggedOut },
+          changes: { machineId: machine.id, result, meterValue: input.meterValue, taggedOut },
         },
         transaction,
       );
@@ -251,21 +235,6 @@ async function findByClientId(
     attributes: ['id'],
   });
   return { walkaround: existing, machine, created: false, defectIds: defects.map((d) => d.id) };
-}
-
-/**
- * The walkaround's meter value, or null on an implement whose hours come from the hitch log (which
- * must not be sent one): 400 naming meterValue otherwise.
- */
-function checkMeterValue(machine: Machine, hitchFed: boolean, value: number | undefined) {
-  const refuse = (message: string) =>
-    new AppError(400, 'invalid', `meterValue: ${message}`, { meterValue: message });
-  if (hitchFed && value !== undefined)
-    throw refuse(
-      `${machine.fleetNumber} has no meter of its own: its hours come from the tractor it is hitched to (the hitch log); leave the hour meter out`,
-    );
-  if (!hitchFed && value === undefined) throw refuse('Enter the meter as it reads now');
-  return value ?? null;
 }
 
 /** The walkaround's meter reading, through the reading rules (errors on meterValue / performedAt). */

@@ -93,29 +93,3 @@ export type HitchLog = z.infer<typeof hitchLogSchema>;
 
 export const hitchLogResponseSchema = z.object({ data: hitchLogSchema });
 export const hitchSpanResponseSchema = z.object({ data: hitchSpanSchema });
-
-/**
- * An implement whose hours come from the hitch log (it has spans on it): no meter of its own to
- * read, so Log hours and the walkaround ask for no reading. The tractor it is on now (null:
- * unhitched), since when, and its hours so far (the tractor's over its spans).
- */
-export const hitchFedSchema = z
-  .object({
-    tractor: machineRefSchema.nullable(),
-    since: z.string().nullable(),
-    hours: z.number(),
-  })
-  .meta({ id: 'HitchFed' });
-export type HitchFed = z.infer<typeof hitchFedSchema>;
-
-/**
- * What is hitched, said in a walkaround and recorded at the walkaround's time (with its reading):
- * on a tractor, the implement on it now; on an implement, the tractor it is on now; null: nothing.
- */
-export const walkaroundHitchSchema = z
-  .object({
-    machineId: uuid.nullable(),
-    meterKind: spanFields.meterKind.default('engine_hours'),
-  })
-  .strict();
-export type WalkaroundHitchInput = z.infer<typeof walkaroundHitchSchema>;

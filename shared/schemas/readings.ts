@@ -3,7 +3,6 @@ import { MACHINE_CATEGORIES, METER_CHANGE_KINDS, READING_SOURCES } from '../cons
 import { boundedNumber, isoDateTime, pagingFields, PAST_DATES, plainText, uuid } from './common';
 import { lastReadingSchema } from './machines';
 import { machineRefSchema } from './refs';
-import { hitchFedSchema } from './hitch';
 
 /** Range of a meter value in any unit; fits numeric(14,2) with room for lifetime totals. */
 export const METER_BOUNDS = { min: 0, max: 10_000_000 } as const;
@@ -141,8 +140,6 @@ export type MeterReplacementResponse = z.infer<typeof meterReplacementResponseSc
 export const latestReadingSchema = z.object({
   machine: machineRefSchema,
   lastReading: lastReadingSchema.nullable(),
-  /** an implement whose hours come from the hitch log: nothing to type (null otherwise) */
-  hitch: hitchFedSchema.nullable(),
 });
 export type LatestReading = z.infer<typeof latestReadingSchema>;
 export const latestReadingsResponseSchema = z.object({ data: z.array(latestReadingSchema) });

@@ -8,7 +8,6 @@ import { machineRefSchema, pageMetaSchema, personRefSchema } from './refs';
 import { careDoneSchema, careSignedOffSchema, dailyCareItemSchema } from './daily-care';
 import { MACHINE_CLASSES } from '../domain/service-library/classes';
 import { machineRestrictionSchema } from './machine-restrictions';
-import { hitchFedSchema, walkaroundHitchSchema } from './hitch';
 
 // Daily walkarounds (pre-operation inspections) and the checklist templates they follow.
 
@@ -113,10 +112,7 @@ export const walkaroundCreateSchema = z.object({
   purpose: z
     .enum(WALKAROUND_PURPOSES, { error: 'Purpose must be use or inspection' })
     .default('use'),
-  /** what the meter shows; left out only on an implement whose hours come from the hitch log */
-  meterValue: boundedNumber('Hour meter', METER_BOUNDS).optional(),
-  /** what is hitched now (a tractor's implement, an implement's tractor), at the walkaround's time */
-  hitch: walkaroundHitchSchema.optional(),
+  meterValue: boundedNumber('Hour meter', METER_BOUNDS),
   /** when the walkaround was done (kept on the phone when offline); default now */
   performedAt: isoDateTime('Performed at', PAST_DATES).optional(),
   items: z
@@ -194,8 +190,6 @@ export const checklistSchema = z.object({
     lastReading: z.object({ value: z.number(), takenAt: z.string() }).nullable(),
     /** restricted use, with its reason: shown before the walkaround starts */
     restriction: machineRestrictionSchema.nullable(),
-    /** an implement whose hours come from the hitch log: no reading asked (null otherwise) */
-    hitch: hitchFedSchema.nullable().optional(),
   }),
   purpose: z.enum(WALKAROUND_PURPOSES),
   template: z.object({

@@ -29,7 +29,6 @@ import {
   readingHistory,
 } from '../../services/reading-log';
 import { commitImport, previewImport } from '../../services/reading-import';
-import { hitchFedOf } from '../../services/hitch-fed';
 
 const orgParams = z.object({ orgId: z.uuid() });
 const machineParams = orgParams.extend({ machineId: z.uuid() });
@@ -105,13 +104,8 @@ export function readingsRouter(): Router {
     handler: async ({ req }) => {
       const access = req.access!;
       const items = await machinesTakingReadings(access);
-      const fed = await hitchFedOf(
-        access.organization.id,
-        items.map((i) => i.machine.id),
-      );
       return {
         data: items.map((i) => ({
-          hitch: fed.get(i.machine.id) ?? null,
           machine: {
             id: i.machine.id,
             fleetNumber: i.machine.fleetNumber,

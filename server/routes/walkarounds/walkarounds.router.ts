@@ -60,7 +60,7 @@ export function walkaroundsRouter(): Router {
       const access = req.access!;
       const { machine } = await loadMachineToWalk(access, params.machineId);
       assertMayStart(access, machine, query.purpose);
-      const { checklist, lastReading, dailyCare, hitch } = await walkaroundStart(access, machine);
+      const { checklist, lastReading, dailyCare } = await walkaroundStart(access, machine);
       return {
         data: {
           machine: {
@@ -70,7 +70,6 @@ export function walkaroundsRouter(): Router {
               takenAt: lastReading.takenAt.toISOString(),
             },
             restriction: presentRestriction(machine, access.via),
-            hitch,
           },
           purpose: query.purpose,
           template: checklist.template,
