@@ -2,30 +2,14 @@
 // 60 working days a year, then 305 idle, repeating. Provenance: derived — the arithmetic is in
 // each test (English dates as Intl prints them: "Sept"); the 30-day spell and the 5 % idle share are the method's choices (common practice).
 import { describe, expect, it } from 'vitest';
-import { addDaysIso, dayNumberFromIso } from '../../shared/domain/calendar';
+import { addDaysIso } from '../../shared/domain/calendar';
 import { computeDuePoint } from '../../shared/domain/due-point';
 import { dueSpreadText } from '../../shared/domain/due-words';
 import type { UsageEstimate } from '../../shared/domain/types';
-import { referenceAddDays, task } from './fixtures';
+import { IDLE_SEASON_AS_OF, idleSeasonUsage, referenceAddDays, task } from './fixtures';
 
-const asOfIso = '2027-08-01';
-const asOf = dayNumberFromIso(asOfIso);
-const season = (perDay: number) => Array.from({ length: 365 }, (_, i) => (i < 60 ? perDay : 0));
-const usage: UsageEstimate = {
-  method: 'season',
-  rate: 4,
-  low: 3,
-  high: 5,
-  readingCount: 700,
-  lastDay: asOf,
-  lastValue: 1000,
-  anchorDay: asOf,
-  anchorValue: 1000,
-  profile: season(4),
-  profileFast: season(5),
-  profileSlow: season(3),
-  explanation: 'hand-built',
-};
+const asOfIso = IDLE_SEASON_AS_OF;
+const usage = idleSeasonUsage();
 
 describe('two outcomes — a range across the idle months', () => {
   // 230 h to go. Median 4 h/day: 57.5 days, inside the season. Fast 5 h/day: 46 days. Slow

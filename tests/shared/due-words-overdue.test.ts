@@ -5,7 +5,6 @@
 // an idle spell. Provenance: derived — the season is hand-built (60 working days a year at
 // 4 h/day, then 305 idle, repeating) and the arithmetic is in each test; dates against date-fns.
 import { describe, expect, it } from 'vitest';
-import { dayNumberFromIso } from '../../shared/domain/calendar';
 import { computeDuePoint } from '../../shared/domain/due-point';
 import {
   dueSpreadText,
@@ -13,27 +12,10 @@ import {
   projectionSaid,
   projectionWords,
 } from '../../shared/domain/due-words';
-import type { UsageEstimate } from '../../shared/domain/types';
-import { referenceAddDays, task } from './fixtures';
+import { IDLE_SEASON_AS_OF, idleSeasonUsage, referenceAddDays, task } from './fixtures';
 
-const asOfIso = '2027-08-01';
-const asOf = dayNumberFromIso(asOfIso);
-const season = (perDay: number) => Array.from({ length: 365 }, (_, i) => (i < 60 ? perDay : 0));
-const usage: UsageEstimate = {
-  method: 'season',
-  rate: 4,
-  low: 3,
-  high: 5,
-  readingCount: 700,
-  lastDay: asOf,
-  lastValue: 1000,
-  anchorDay: asOf,
-  anchorValue: 1000,
-  profile: season(4),
-  profileFast: season(5),
-  profileSlow: season(3),
-  explanation: 'hand-built',
-};
+const asOfIso = IDLE_SEASON_AS_OF;
+const usage = idleSeasonUsage();
 // 230 h to go (due at 1,230 h, meter 1,000 h): median 57.5 days, fast 46, slow day 381 — a range
 // across the idle months (tests/shared/due-outcomes.test.ts) — and, with a last service on
 // 2026-07-20 at a 365-day interval, a calendar limit of 2027-07-20: 12 days past on 1 Aug 2027.
