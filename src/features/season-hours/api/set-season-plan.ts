@@ -1,5 +1,9 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { SeasonPlanInput, SeasonPlanResponse } from '../../../../shared/schemas/season-hours';
+import type {
+  SeasonPlanInput,
+  SeasonPlanJson,
+  SeasonPlanResponse,
+} from '../../../../shared/schemas/season-hours';
 import { apiClient, segment } from '../../../lib/api-client';
 import { changedBy, invalidate } from '../../../lib/invalidation';
 
@@ -18,15 +22,15 @@ export const putSeasonPlan = (
 export const deleteSeasonPlan = (orgId: string, machineId: string, year: number) =>
   apiClient.delete<void>(planPath(orgId, machineId, year));
 
-export type SeasonPlanChange = { machineId: string; year: number } & (
-  { kind: 'set'; input: SeasonPlanInput } | { kind: 'remove' }
-);
+/** A plan to set or remove: the machine and the plan's year (the stored plan's own field). */
+export type SeasonPlanChange = { machineId: string } & Pick<SeasonPlanJson, 'year'> &
+  ({ kind: 'set'; input: SeasonPlanInput } | { kind: 'remove' });
 
 /** Sets or removes a plan; the plan moves the machine's forecast, so its due figures refetch. */
 export function useChangeSeasonPlan(orgId: string) {
   const queryClient = useQueryClient();
   return useMutation({
-    mutationFn: (change: SeasonPlanChange): Promise<unknown> =>
+    mutationFn: (change: SeasonPlanChange): Promise<SeasonPlanResponse | void> =>
       change.kind === 'set'
         ? putSeasonPlan(orgId, change.machineId, change.year, change.input)
         : deleteSeasonPlan(orgId, change.machineId, change.year),
